@@ -1,0 +1,84 @@
+/**
+ * Shared value types of the calculation core. Every later layer (charts, wording,
+ * handout, app, command line) reads these; none of them holds prose.
+ */
+
+/** An estimate with an optional interval; bounds are `null` when no interval exists. */
+export interface Estimate {
+  readonly estimate: number;
+  readonly lower: number | null;
+  readonly upper: number | null;
+}
+
+/** The kinds of effect a clinician can enter for an option. */
+export type EffectMeasure = 'rr' | 'or' | 'hr' | 'rrr' | 'arr';
+
+/** One arm of a trial: events out of a total. */
+export interface ArmCounts {
+  readonly events: number;
+  readonly total: number;
+}
+
+/**
+ * A relative or absolute effect as entered.
+ * - `rr`, `or`, `hr`: ratios (> 0).
+ * - `rrr`: relative risk reduction in percent (< 100; 25 means 25%).
+ * - `arr`: absolute risk reduction as a proportion (may be negative: an increase).
+ * `lower`/`upper` are the limits of an interval at `level` (default 0.95), in the same units.
+ */
+export interface EnteredEffect {
+  readonly measure: EffectMeasure;
+  readonly estimate: number;
+  readonly lower?: number | null;
+  readonly upper?: number | null;
+  readonly level?: number;
+}
+
+/** A trial's own counts: the option (intervention) arm and the comparison arm. */
+export interface CountsEffect {
+  readonly measure: 'counts';
+  readonly intervention: ArmCounts;
+  readonly comparison: ArmCounts;
+  readonly level?: number;
+}
+
+export type Effect = EnteredEffect | CountsEffect;
+
+/** Denominators a chart and its text may use. */
+export type Denominator = 100 | 1000;
+
+/** NNT as reported: `label` is NNTB (benefit) or NNTH (harm), after Altman (1998). */
+export interface NumberNeeded {
+  readonly estimate: number | null;
+  readonly rounded: number | null;
+  readonly label: 'NNTB' | 'NNTH' | null;
+  readonly text: string;
+}
+
+/** Rounded people counts for one option against its comparison, per `denominator`. */
+export interface PeopleCounts {
+  readonly denominator: Denominator;
+  readonly comparison: number;
+  readonly intervention: number;
+  /** comparison − intervention, signed: positive means fewer people have the outcome with the option. */
+  readonly difference: number;
+  /** The option's risk interval as people, when an interval exists. */
+  readonly interventionRange: { readonly lower: number; readonly upper: number } | null;
+}
+
+/** The four groups of an icon array. The comparison arm has only `event` and `free`. */
+export type PersonGroup = 'event' | 'prevented' | 'caused' | 'free';
+
+export interface PeopleGroups {
+  readonly denominator: Denominator;
+  readonly event: number;
+  readonly prevented: number;
+  readonly caused: number;
+  readonly free: number;
+}
+
+/** A warning as a code plus values; its sentence comes from the message catalogue. */
+export interface Notice {
+  readonly code: string;
+  readonly values: Readonly<Record<string, string | number>>;
+}
