@@ -1,0 +1,50 @@
+import type { Denominator, Estimate, Notice, NumberNeeded, PeopleCounts, PeopleGroups } from '../types.ts';
+import type { Certainty, Importance } from './topic.ts';
+
+/** The computed numbers of one option against the comparison, for one outcome. */
+export interface EffectResult {
+  readonly comparisonRisk: Estimate;
+  readonly interventionRisk: Estimate | null;
+  /** The risk ratio implied at this baseline, whatever measure was entered. */
+  readonly relativeRisk: Estimate | null;
+  /** comparison − option risk; negative means the option increases the outcome. */
+  readonly absoluteReduction: Estimate;
+  readonly nnt: NumberNeeded;
+  readonly perPeople: PeopleCounts | null;
+  readonly notices: readonly Notice[];
+}
+
+/** One option's results for one outcome, inside a topic. */
+export interface OptionOutcomeResult extends EffectResult {
+  readonly optionId: string;
+  readonly name: string;
+  readonly isComparison: boolean;
+  /** The four icon-array groups from the rounded people counts. */
+  readonly groups: PeopleGroups;
+  /** GRADE certainty and importance, for the wording; null for the comparison. */
+  readonly certainty: Certainty | null;
+  readonly importance: Importance | null;
+  readonly source: string;
+}
+
+export interface OutcomeResult {
+  readonly outcomeId: string;
+  readonly name: string;
+  readonly kind: 'benefit' | 'harm';
+  readonly isHeadline: boolean;
+  /** The baseline risk over the topic's period (after any period conversion). */
+  readonly baselineRisk: number;
+  readonly baselineSource: string;
+  readonly options: readonly OptionOutcomeResult[];
+}
+
+/** A whole topic, computed in one call. */
+export interface TopicResult {
+  readonly title: string;
+  readonly population: string;
+  readonly periodYears: number;
+  readonly denominator: Denominator;
+  readonly illustrative: boolean;
+  readonly outcomes: readonly OutcomeResult[];
+  readonly notices: readonly Notice[];
+}

@@ -1,0 +1,87 @@
+import type { Effect } from '../types.ts';
+
+/** GRADE certainty of the evidence for one result (Balshem et al. 2011). */
+export type Certainty = 'high' | 'moderate' | 'low' | 'very-low';
+
+/** Whether the clinician judged the effect important, or little or no difference (Santesso et al. 2020). */
+export type Importance = 'important' | 'trivial';
+
+/** A risk as entered: a proportion, or text as clinicians write it ("20%", "1 in 5"). */
+export type RiskInput = number | string;
+
+/** One option of a decision (a treatment, a test, doing nothing). */
+export interface TopicOption {
+  readonly id: string;
+  readonly name: string;
+  /** Exactly one option of a topic is the comparison its effects are measured against. */
+  readonly isComparison: boolean;
+}
+
+/** The effect of one option on one outcome, with where it came from. */
+export interface OptionEffect {
+  readonly optionId: string;
+  readonly effect: Effect;
+  readonly source: string;
+  /** The period, in years, over which the effect was measured; null when not stated. */
+  readonly followUpYears: number | null;
+  readonly certainty: Certainty;
+  readonly importance: Importance;
+}
+
+/** The patient's risk of an outcome without any of the options. */
+export interface Baseline {
+  /** Null only when every effect is given as trial counts (the trial's comparison arm is then used). */
+  readonly risk: RiskInput | null;
+  readonly periodYears: number;
+  readonly source: string;
+}
+
+/** One outcome: a benefit the options aim at, or a harm they may cause. */
+export interface TopicOutcome {
+  readonly id: string;
+  /** Short name, used in sentences: "a stroke", "muscle pain". */
+  readonly name: string;
+  readonly kind: 'benefit' | 'harm';
+  readonly isHeadline: boolean;
+  readonly baseline: Baseline;
+  /** One entry per option that is not the comparison. */
+  readonly effects: readonly OptionEffect[];
+}
+
+/** A decision topic: everything needed to compute, draw, word and print one decision. */
+export interface Topic {
+  /** The decision in one line: "Taking a statin to lower the chance of a heart attack or stroke". */
+  readonly title: string;
+  /** Who the numbers are for, in plain words: "people aged 60 to 69 with a 15% ten-year risk". */
+  readonly population: string;
+  /** The one period, in years, that every number of the topic covers. */
+  readonly periodYears: number;
+  readonly options: readonly TopicOption[];
+  readonly outcomes: readonly TopicOutcome[];
+  /** Invented scenario for demonstration and teaching; shown as illustrative wherever it appears. */
+  readonly illustrative: boolean;
+  /** Where the evidence comes from overall and when it was reviewed (for the handout). */
+  readonly evidence: { readonly summary: string; readonly reviewed: string };
+  /** Optional free-text prompts and questions for the handout. */
+  readonly questions: readonly string[];
+  /** Optional: clinician or practice shown on the handout. */
+  readonly clinician: string;
+}
+
+/** Limits shared by the editor, the validator and the handout. */
+export const TOPIC_LIMITS = {
+  minOptions: 2,
+  maxOptions: 4,
+  minOutcomes: 1,
+  maxOutcomes: 8,
+  titleLength: 120,
+  populationLength: 160,
+  optionNameLength: 40,
+  outcomeNameLength: 40,
+  sourceLength: 200,
+  evidenceSummaryLength: 300,
+  questionLength: 140,
+  maxQuestions: 5,
+  clinicianLength: 80,
+  maxPeriodYears: 100,
+} as const;
