@@ -13,6 +13,7 @@ export type ProblemCode =
   | 'risk-denominator-zero'
   | 'risk-out-of-range'
   | 'baseline-out-of-range'
+  | 'baseline-missing'
   | 'percent-unparsable'
   | 'level-out-of-range'
   // effects

@@ -3,7 +3,8 @@ import type { Certainty, Importance } from './topic.ts';
 
 /** The computed numbers of one option against the comparison, for one outcome. */
 export interface EffectResult {
-  readonly comparisonRisk: Estimate;
+  /** Null only for an absolute reduction entered without a baseline. */
+  readonly comparisonRisk: Estimate | null;
   readonly interventionRisk: Estimate | null;
   /** The risk ratio implied at this baseline, whatever measure was entered. */
   readonly relativeRisk: Estimate | null;
@@ -19,6 +20,9 @@ export interface OptionOutcomeResult extends EffectResult {
   readonly optionId: string;
   readonly name: string;
   readonly isComparison: boolean;
+  readonly comparisonRisk: Estimate;
+  readonly interventionRisk: Estimate;
+  readonly perPeople: PeopleCounts;
   /** The four icon-array groups from the rounded people counts. */
   readonly groups: PeopleGroups;
   /** GRADE certainty and importance, for the wording; null for the comparison. */

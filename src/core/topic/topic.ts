@@ -66,6 +66,8 @@ export interface Topic {
   readonly questions: readonly string[];
   /** Optional: clinician or practice shown on the handout. */
   readonly clinician: string;
+  /** Patient-identifying details: never written to a file unless the user asks for it. */
+  readonly patient?: { readonly name: string; readonly reference: string } | null;
 }
 
 /** Limits shared by the editor, the validator and the handout. */
@@ -77,7 +79,7 @@ export const TOPIC_LIMITS = {
   titleLength: 120,
   populationLength: 160,
   optionNameLength: 40,
-  outcomeNameLength: 40,
+  outcomeNameLength: 60,
   sourceLength: 200,
   evidenceSummaryLength: 300,
   questionLength: 140,

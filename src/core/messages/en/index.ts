@@ -1,5 +1,8 @@
+import { cliMessages } from './cli.ts';
 import { noticeMessages } from './notices.ts';
+import { numberMessages } from './numbers.ts';
 import { problemMessages } from './problems.ts';
+import { wordingMessages } from './wording.ts';
 
 /** The English message catalogue. A second language is a sibling folder with the same shape. */
-export const english = { problems: problemMessages, notices: noticeMessages } as const;
+export const english = { problems: problemMessages, notices: noticeMessages, numbers: numberMessages, cli: cliMessages, wording: wordingMessages } as const;

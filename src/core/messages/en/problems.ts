@@ -31,6 +31,8 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `A risk of "${text(v, 'input')}" is outside 0% to 100%. A risk must lie between 0% and 100%.`,
   'baseline-out-of-range': (v) =>
     `A baseline risk of ${percent(v, 'risk')} is not possible here: it must be more than 0% and less than 100%.`,
+  'baseline-missing': () =>
+    'A baseline risk is needed to apply a risk ratio, odds ratio, hazard ratio or relative reduction. Give the patient’s risk, for example 15%.',
   'percent-unparsable': (v) => `"${text(v, 'input')}" is not a percentage. Write it as 25 or 25%.`,
   'level-out-of-range': (v) =>
     `An interval level of "${text(v, 'input')}" is not possible. Write a level between 50% and 99.9%, for example 0.95 or 95%.`,

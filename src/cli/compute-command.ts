@@ -1,0 +1,50 @@
+import { computeEffect } from '../core/compute-effect.ts';
+import { evaluateTopic } from '../core/topic/compute-topic.ts';
+import { describeProblem } from '../core/messages/describe.ts';
+import { english } from '../core/messages/en/index.ts';
+import type { Topic } from '../core/topic/topic.ts';
+import type { TopicResult } from '../core/topic/topic-result.ts';
+import type { Denominator } from '../core/types.ts';
+import { EFFECT_FLAGS, EFFECT_ONLY_FLAGS, effectQueryFromFlags, parsePer } from './effect-flags.ts';
+import { parseArgs } from './parse-args.ts';
+import type { ParsedArgs } from './parse-args.ts';
+import { effectJson, topicJson } from './result-json.ts';
+import { effectSummary, topicSummary } from './summary-text.ts';
+import { topicFromArgs } from './topic-input.ts';
+import { UsageError } from './usage-error.ts';
+import type { CommandOutput } from './command-output.ts';
+
+const words = english.cli;
+
+const COMPUTE_FLAGS = { ...EFFECT_FLAGS, '--json': { takesValue: false }, '--demo': { takesValue: false } };
+
+/** Compute a topic or fail with the first problem, as the command line reports it. */
+export function computeTopicOrFail(topic: Topic, per: Denominator | null): TopicResult {
+  const evaluation = evaluateTopic(topic, { per });
+  if (!evaluation.ok) {
+    const [first] = evaluation.problems;
+    const sentence = first === undefined ? 'invalid topic' : `${first.field}: ${describeProblem(first)}`;
+    throw new UsageError(words.topicInvalid(sentence, evaluation.problems.length));
+  }
+  return evaluation.result;
+}
+
+/** Reject effect flags when a topic was given. */
+export function refuseEffectFlags(parsed: ParsedArgs): void {
+  const stray = EFFECT_ONLY_FLAGS.find((flag) => parsed.flags.has(flag));
+  if (stray !== undefined) throw new UsageError(words.notWithTopic(stray));
+}
+
+/** `chancewise compute`: numbers for one effect, for trial counts, or for a whole topic. */
+export function runCompute(args: readonly string[]): CommandOutput {
+  const parsed = parseArgs(args, COMPUTE_FLAGS);
+  const json = parsed.flags.has('--json');
+  const topic = topicFromArgs(parsed);
+  if (topic !== null) {
+    refuseEffectFlags(parsed);
+    const result = computeTopicOrFail(topic, parsePer(parsed));
+    return { stdout: json ? `${JSON.stringify(topicJson(result), null, 2)}\n` : topicSummary(result) };
+  }
+  const result = computeEffect(effectQueryFromFlags(parsed));
+  return { stdout: json ? `${JSON.stringify(effectJson(result), null, 2)}\n` : effectSummary(result) };
+}

@@ -1,0 +1,170 @@
+import type { EffectQuery } from '../core/compute-effect.ts';
+import { english } from '../core/messages/en/index.ts';
+import { parseNumber } from '../core/parse-number.ts';
+import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
+import { fail } from '../core/problems.ts';
+import type { ArmCounts, Denominator, EffectMeasure } from '../core/types.ts';
+import type { FlagSpec, ParsedArgs } from './parse-args.ts';
+import { valueOf } from './parse-args.ts';
+import { UsageError } from './usage-error.ts';
+
+const words = english.cli;
+
+/** The flags that describe one effect, shared by `compute` and `chart`. */
+export const EFFECT_FLAGS: Readonly<Record<string, FlagSpec>> = {
+  '--baseline': { takesValue: true, example: '15%' },
+  '--rr': { takesValue: true, example: '0.75' },
+  '--or': { takesValue: true, example: '0.73' },
+  '--hr': { takesValue: true, example: '0.8' },
+  '--rrr': { takesValue: true, example: '25' },
+  '--arr': { takesValue: true, example: '2%' },
+  '--ci': { takesValue: true, example: '0.6,0.9' },
+  '--level': { takesValue: true, example: '0.95' },
+  '--over': { takesValue: true, example: '10' },
+  '--to': { takesValue: true, example: '5' },
+  '--followup': { takesValue: true, example: '5' },
+  '--counts': { takesValue: true, example: '12/100,20/100' },
+  '--method': { takesValue: true, example: 'newcombe' },
+  '--per': { takesValue: true, example: '100' },
+};
+
+const MEASURE_FLAGS: readonly [string, EffectMeasure][] = [
+  ['--rr', 'rr'],
+  ['--or', 'or'],
+  ['--hr', 'hr'],
+  ['--rrr', 'rrr'],
+  ['--arr', 'arr'],
+];
+
+/** Flags that only make sense with bare effect flags, not with a topic. */
+export const EFFECT_ONLY_FLAGS = Object.keys(EFFECT_FLAGS).filter((flag) => flag !== '--per');
+
+/** Read a percentage: "25" and "25%" both mean 25. */
+function parsePercent(input: string, field: string): number {
+  const cleaned = input.trim().replace(/%$/, '');
+  if (cleaned === '') fail('percent-unparsable', field, { input });
+  return parseNumber(cleaned, field);
+}
+
+/** Read an interval level: 0.95 or 95%. */
+export function parseLevel(input: string, field = '--level'): number {
+  const trimmed = input.trim();
+  const value = trimmed.endsWith('%') ? parseNumber(trimmed.slice(0, -1), field) / 100 : parseNumber(trimmed, field);
+  if (!(value > 0.5 && value <= 0.999)) fail('level-out-of-range', field, { input });
+  return value;
+}
+
+/** Read a positive number of years. */
+export function parseYears(input: string, field: string): number {
+  const value = parseNumber(input, field);
+  if (!(value > 0) || value > 1000) fail('period-not-positive', field, { input });
+  return value;
+}
+
+/** Read --per: 100 or 1000. */
+export function parsePer(parsed: ParsedArgs): Denominator | null {
+  const value = valueOf(parsed, '--per');
+  if (value === undefined) return null;
+  if (value.trim() === '100') return 100;
+  if (value.trim() === '1000') return 1000;
+  throw new UsageError(words.perValue(value));
+}
+
+function parseValue(measure: EffectMeasure, input: string, field: string): number {
+  if (measure === 'rrr') return parsePercent(input, field);
+  if (measure === 'arr') return parseSignedRisk(input, field);
+  return parseNumber(input, field);
+}
+
+function parseInterval(measure: EffectMeasure, input: string): { lower: number; upper: number } {
+  const parts = input.split(',');
+  if (parts.length !== 2 || (parts[0] ?? '').trim() === '' || (parts[1] ?? '').trim() === '') {
+    throw new UsageError(words.ciFormat(input));
+  }
+  return { lower: parseValue(measure, parts[0] ?? '', '--ci'), upper: parseValue(measure, parts[1] ?? '', '--ci') };
+}
+
+function parseArm(input: string): ArmCounts {
+  const match = /^\s*([^/\s]+)\s*\/\s*([^/\s]+)\s*$/.exec(input);
+  if (match === null) fail('counts-unparsable', '--counts', { input });
+  const events = parseNumber(match[1] ?? '', '--counts');
+  const total = parseNumber(match[2] ?? '', '--counts');
+  if (!Number.isInteger(events) || !Number.isInteger(total)) fail('counts-not-whole', '--counts', { input: input.trim() });
+  if (events < 0 || total < 0) fail('counts-negative', '--counts', { input: input.trim() });
+  if (total === 0) fail('counts-total-zero', '--counts', { input: input.trim() });
+  if (events > total) fail('counts-events-above-total', '--counts', { input: input.trim() });
+  return { events, total };
+}
+
+function parseCounts(input: string): { intervention: ArmCounts; comparison: ArmCounts } {
+  const arms = input.split(',');
+  if (arms.length !== 2) fail('counts-unparsable', '--counts', { input });
+  return { intervention: parseArm(arms[0] ?? ''), comparison: parseArm(arms[1] ?? '') };
+}
+
+function parsePeriods(parsed: ParsedArgs): EffectQuery['periods'] {
+  const over = valueOf(parsed, '--over');
+  const to = valueOf(parsed, '--to');
+  if (over === undefined && to === undefined) return null;
+  if (over === undefined || to === undefined) throw new UsageError(words.overAndTo());
+  return { baselineYears: parseYears(over, '--over'), targetYears: parseYears(to, '--to') };
+}
+
+/** True when any effect flag is present. */
+export function hasEffectFlags(parsed: ParsedArgs): boolean {
+  return EFFECT_ONLY_FLAGS.some((flag) => parsed.flags.has(flag));
+}
+
+/**
+ * Build the core's effect query from the effect flags of `compute` (and `chart`).
+ *
+ * @throws UsageError or InputError for anything the user must fix
+ */
+export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
+  const given = MEASURE_FLAGS.filter(([flag]) => parsed.flags.has(flag));
+  const countsText = valueOf(parsed, '--counts');
+  const baselineText = valueOf(parsed, '--baseline');
+  const ciText = valueOf(parsed, '--ci');
+  const levelText = valueOf(parsed, '--level');
+  const methodText = valueOf(parsed, '--method');
+  const per = parsePer(parsed);
+  const followUpText = valueOf(parsed, '--followup');
+  if (given.length > 1) throw new UsageError(words.twoEffects(given[0]?.[0] ?? '', given[1]?.[0] ?? ''));
+  let method: 'newcombe' | 'wald' = 'newcombe';
+  if (methodText !== undefined) {
+    if (countsText === undefined) throw new UsageError(words.methodWithoutCounts());
+    const normalised = methodText.trim().toLowerCase();
+    if (normalised !== 'newcombe' && normalised !== 'wald') throw new UsageError(words.methodValue(methodText));
+    method = normalised;
+  }
+  if (countsText !== undefined) {
+    if (given.length > 0) throw new UsageError(words.effectWithCounts(given[0]?.[0] ?? ''));
+    if (baselineText !== undefined) throw new UsageError(words.baselineWithCounts());
+    for (const flag of ['--ci', '--over', '--to', '--followup']) {
+      if (parsed.flags.has(flag)) throw new UsageError(words.effectWithCounts(flag));
+    }
+    const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+    return { baseline: null, effect: { measure: 'counts', ...parseCounts(countsText), level }, per, method, field: '--counts' };
+  }
+  const chosen = given[0];
+  if (chosen === undefined) throw new UsageError(words.noEffect());
+  const [flag, measure] = chosen;
+  if (levelText !== undefined && ciText === undefined) throw new UsageError(words.levelWithoutInterval());
+  const periods = parsePeriods(parsed);
+  if (measure === 'arr' && periods !== null) throw new UsageError(words.periodsWithArr());
+  if (baselineText === undefined && measure !== 'arr') throw new UsageError(words.baselineNeeded(flag));
+  const baseline = baselineText === undefined ? null : parseBaselineRisk(baselineText, '--baseline');
+  const estimate = parseValue(measure, valueOf(parsed, flag) ?? '', flag);
+  const interval = ciText === undefined ? null : parseInterval(measure, ciText);
+  const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+  const followUpYears = followUpText === undefined ? null : parseYears(followUpText, '--followup');
+  return {
+    baseline,
+    effect: { measure, estimate, lower: interval?.lower ?? null, upper: interval?.upper ?? null, level },
+    periods,
+    followUpYears,
+    resultYears: periods?.targetYears ?? null,
+    per,
+    field: flag,
+  };
+}

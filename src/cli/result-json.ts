@@ -1,0 +1,95 @@
+import type { EffectComputation } from '../core/compute-effect.ts';
+import { describeNotice } from '../core/messages/describe.ts';
+import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
+import type { Estimate, PeopleCounts } from '../core/types.ts';
+
+type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
+
+/** Replace anything non-finite by null, so the JSON never holds Infinity or NaN. */
+function finite(value: number | null | undefined): number | null {
+  return typeof value === 'number' && Number.isFinite(value) ? value : null;
+}
+
+function estimateJson(value: Estimate | null): Json {
+  if (value === null) return null;
+  const estimate = finite(value.estimate);
+  if (estimate === null) return null;
+  return { estimate, lower: finite(value.lower), upper: finite(value.upper) };
+}
+
+function peopleJson(value: PeopleCounts | null): Json {
+  if (value === null) return null;
+  return {
+    denominator: value.denominator,
+    comparison: value.comparison,
+    intervention: value.intervention,
+    difference: value.difference,
+  };
+}
+
+/** The contract fields shared by a single effect and each option of a topic. */
+export function effectFieldsJson(result: EffectResult): { [key: string]: Json } {
+  return {
+    comparisonRisk: estimateJson(result.comparisonRisk),
+    interventionRisk: estimateJson(result.interventionRisk),
+    relativeRisk: estimateJson(result.relativeRisk),
+    absoluteReduction: estimateJson(result.absoluteReduction),
+    nnt: {
+      estimate: finite(result.nnt.estimate),
+      rounded: finite(result.nnt.rounded),
+      label: result.nnt.label,
+      text: result.nnt.text,
+    },
+    perPeople: peopleJson(result.perPeople),
+  };
+}
+
+/** The JSON object printed by `chancewise compute` for bare effect flags or trial counts. */
+export function effectJson(result: EffectComputation): Json {
+  const fields = effectFieldsJson(result);
+  const counts = result.counts;
+  if (counts !== null) {
+    Object.assign(fields, {
+      oddsRatio: estimateJson(counts.oddsRatio),
+      chiSquare: counts.chiSquare === null ? null : { statistic: finite(counts.chiSquare.statistic), p: finite(counts.chiSquare.p) },
+      chiSquareYates:
+        counts.chiSquareYates === null
+          ? null
+          : { statistic: finite(counts.chiSquareYates.statistic), p: finite(counts.chiSquareYates.p) },
+      fisherExactP: finite(counts.fisherExactP),
+      cramersV: finite(counts.cramersV),
+    });
+  }
+  fields.warnings = result.notices.map((notice) => describeNotice(notice));
+  return fields;
+}
+
+/** The JSON object printed by `chancewise compute` for a topic. */
+export function topicJson(result: TopicResult): Json {
+  return {
+    topic: result.title,
+    illustrative: result.illustrative,
+    population: result.population,
+    denominator: result.denominator,
+    period: result.periodYears,
+    outcomes: result.outcomes.map((outcome) => ({
+      name: outcome.name,
+      kind: outcome.kind,
+      headline: outcome.isHeadline,
+      baselineRisk: finite(outcome.baselineRisk),
+      options: outcome.options.map((option) => ({
+        name: option.name,
+        comparison: option.isComparison,
+        ...effectFieldsJson(option),
+        groups: {
+          event: option.groups.event,
+          prevented: option.groups.prevented,
+          caused: option.groups.caused,
+          free: option.groups.free,
+        },
+        certainty: option.certainty,
+      })),
+    })),
+    warnings: result.notices.map((notice) => describeNotice(notice)),
+  };
+}

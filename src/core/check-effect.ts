@@ -1,0 +1,54 @@
+import { fail } from './problems.ts';
+import type { EnteredEffect } from './types.ts';
+
+const DEFAULT_LEVEL = 0.95;
+
+/** An entered effect with its interval sorted (`lower ≤ upper`) and its level settled. */
+export interface CheckedEffect {
+  readonly measure: EnteredEffect['measure'];
+  readonly estimate: number;
+  readonly interval: { readonly lower: number; readonly upper: number } | null;
+  readonly level: number;
+}
+
+function checkValue(measure: EnteredEffect['measure'], value: number, field: string): void {
+  if (!Number.isFinite(value)) fail('number-unparsable', field, { input: String(value) });
+  if ((measure === 'rr' || measure === 'or' || measure === 'hr') && !(value > 0)) {
+    fail('ratio-not-positive', field, { measure, value });
+  }
+  if (measure === 'rrr' && !(value < 100)) fail('rrr-out-of-range', field, { value });
+  if (measure === 'arr' && !(value > -1 && value < 1)) fail('arr-out-of-range', field, { value });
+}
+
+/** Check an interval level: more than 50% and at most 99.9%. */
+export function checkLevel(level: number, field: string): number {
+  if (!Number.isFinite(level) || level <= 0.5 || level > 0.999) fail('level-out-of-range', field, { input: String(level) });
+  return level;
+}
+
+/**
+ * Check an entered effect: ratios above 0, a relative risk reduction below 100%, an absolute
+ * reduction between −100% and 100%, an interval with both limits that contains the estimate.
+ * The limits are returned sorted, so "0.9,0.6" and "0.6,0.9" mean the same interval.
+ *
+ * @throws InputError `ratio-not-positive`, `rrr-out-of-range`, `arr-out-of-range`, `interval-incomplete`,
+ *   `interval-excludes-estimate`, `level-out-of-range`
+ * @example checkEffect({ measure: 'or', estimate: 0.73, lower: 0.9, upper: 0.6 }, 'effect').interval // => { lower: 0.6, upper: 0.9 }
+ */
+export function checkEffect(effect: EnteredEffect, field: string): CheckedEffect {
+  const { measure, estimate } = effect;
+  checkValue(measure, estimate, `${field}.estimate`);
+  const lower = effect.lower ?? null;
+  const upper = effect.upper ?? null;
+  const level = checkLevel(effect.level ?? DEFAULT_LEVEL, `${field}.level`);
+  if (lower === null && upper === null) return { measure, estimate, interval: null, level };
+  if (lower === null || upper === null) return fail('interval-incomplete', `${field}.interval`);
+  checkValue(measure, lower, `${field}.lower`);
+  checkValue(measure, upper, `${field}.upper`);
+  const low = Math.min(lower, upper);
+  const high = Math.max(lower, upper);
+  if (estimate < low || estimate > high) {
+    fail('interval-excludes-estimate', `${field}.interval`, { lower: low, upper: high, estimate });
+  }
+  return { measure, estimate, interval: { lower: low, upper: high }, level };
+}

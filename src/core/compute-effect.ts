@@ -1,0 +1,148 @@
+import { checkEffect, checkLevel } from './check-effect.ts';
+import { analyseCounts } from './counts/index.ts';
+import type { CountsAnalysis } from './counts/index.ts';
+import { convertRiskPeriod } from './convert-period.ts';
+import { effectAtBaseline } from './effect-at-baseline.ts';
+import type { EffectAtBaseline } from './effect-at-baseline.ts';
+import { numberNeeded } from './number-needed.ts';
+import { chooseDenominator, peopleCounts } from './people-counts.ts';
+import { fail } from './problems.ts';
+import type { EffectResult } from './topic/topic-result.ts';
+import type { CountsEffect, Denominator, Effect, Estimate, Notice } from './types.ts';
+
+/** Everything needed to compute one option's effect on one outcome. */
+export interface EffectQuery {
+  /** The patient's baseline risk (0 < p < 1); null for an absolute reduction alone or for trial counts alone. */
+  readonly baseline: number | null;
+  readonly effect: Effect;
+  /** The period the baseline covers and the period wanted, in years. */
+  readonly periods?: { readonly baselineYears: number; readonly targetYears: number } | null;
+  /** The period over which the effect was measured, in years. */
+  readonly followUpYears?: number | null;
+  /** The period the result is for, when known, for the follow-up warning. */
+  readonly resultYears?: number | null;
+  /** A fixed denominator; otherwise the rule of `chooseDenominator`. */
+  readonly per?: Denominator | null;
+  readonly method?: 'newcombe' | 'wald';
+  /** Where problems are reported ("effect", "outcomes.0.effects.1.effect"). */
+  readonly field?: string;
+}
+
+/** One effect's numbers, and for trial counts the trial's own statistics. */
+export interface EffectComputation extends EffectResult {
+  readonly counts: CountsAnalysis | null;
+  /** The baseline after any period conversion, or null. */
+  readonly baselineUsed: number | null;
+}
+
+const notice = (code: string, values: Notice['values'] = {}): Notice => ({ code, values });
+const point = (estimate: number): Estimate => ({ estimate, lower: null, upper: null });
+
+function convertedBaseline(query: EffectQuery, notices: Notice[]): number | null {
+  const { baseline, periods } = query;
+  if (baseline === null || periods === null || periods === undefined) return baseline;
+  if (periods.baselineYears === periods.targetYears) return baseline;
+  const converted = convertRiskPeriod(baseline, periods.baselineYears, periods.targetYears, `${query.field ?? 'effect'}.period`);
+  notices.push(
+    notice('baseline-period-converted', { risk: baseline, from: periods.baselineYears, to: periods.targetYears, converted }),
+  );
+  return converted;
+}
+
+function countsAtBaseline(baseline: number, analysis: CountsAnalysis, field: string): EffectAtBaseline {
+  const ratio = analysis.relativeRisk;
+  if (ratio !== null) {
+    const interval = ratio.lower === null || ratio.upper === null ? null : { lower: ratio.lower, upper: ratio.upper };
+    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: 0.95 }, field);
+  }
+  const difference = analysis.riskDifference;
+  const interval =
+    difference.lower === null || difference.upper === null ? null : { lower: difference.lower, upper: difference.upper };
+  return effectAtBaseline(baseline, { measure: 'arr', estimate: difference.estimate, interval, level: 0.95 }, field);
+}
+
+function fromCounts(query: EffectQuery, effect: CountsEffect, baseline: number | null, notices: Notice[]) {
+  const level = checkLevel(effect.level ?? 0.95, `${query.field ?? 'effect'}.level`);
+  const analysis = analyseCounts(effect.intervention, effect.comparison, { level, method: query.method ?? 'newcombe' });
+  notices.push(...analysis.notices);
+  if (baseline === null) {
+    return {
+      analysis,
+      comparisonRisk: analysis.comparisonRisk,
+      applied: {
+        interventionRisk: analysis.interventionRisk,
+        relativeRisk: analysis.relativeRisk,
+        absoluteReduction: analysis.riskDifference,
+      },
+    };
+  }
+  return { analysis, comparisonRisk: point(baseline), applied: countsAtBaseline(baseline, analysis, query.field ?? 'effect') };
+}
+
+/**
+ * Compute one option's effect: the risks with and without it, the implied risk ratio, the
+ * absolute reduction, the NNT, and the people counts, with warnings as notices.
+ *
+ * @throws InputError for any invalid input (see the problem codes)
+ * @example computeEffect({ baseline: 0.3, effect: { measure: 'rr', estimate: 0.92 } }).nnt.rounded // => 42
+ */
+export function computeEffect(query: EffectQuery): EffectComputation {
+  const field = query.field ?? 'effect';
+  const notices: Notice[] = [];
+  const baseline = convertedBaseline(query, notices);
+  const { effect } = query;
+  let comparisonRisk: Estimate | null;
+  let interventionRisk: Estimate | null;
+  let relativeRisk: Estimate | null;
+  let absoluteReduction: Estimate;
+  let counts: CountsAnalysis | null = null;
+  let hasInterval: boolean;
+  if (effect.measure === 'counts') {
+    const computed = fromCounts(query, effect, baseline, notices);
+    counts = computed.analysis;
+    comparisonRisk = computed.comparisonRisk;
+    ({ interventionRisk, relativeRisk, absoluteReduction } = computed.applied);
+    hasInterval = baseline !== null && absoluteReduction.lower !== null;
+  } else {
+    const checked = checkEffect(effect, field);
+    hasInterval = checked.interval !== null && baseline !== null;
+    if (baseline === null) {
+      if (checked.measure !== 'arr') fail('baseline-missing', `${field}.baseline`);
+      const bounds = checked.interval;
+      comparisonRisk = null;
+      interventionRisk = null;
+      relativeRisk = null;
+      absoluteReduction = { estimate: checked.estimate, lower: bounds?.lower ?? null, upper: bounds?.upper ?? null };
+    } else {
+      comparisonRisk = point(baseline);
+      ({ interventionRisk, relativeRisk, absoluteReduction } = effectAtBaseline(baseline, checked, field));
+    }
+    if (checked.measure === 'hr') notices.push(notice('hr-proportional-hazards'));
+  }
+  if (hasInterval) notices.push(notice('interval-ignores-baseline-uncertainty'));
+  const resultYears = query.resultYears ?? query.periods?.targetYears ?? null;
+  const followUp = query.followUpYears ?? null;
+  if (followUp !== null && resultYears !== null && resultYears > followUp) {
+    notices.push(notice('period-beyond-followup', { period: resultYears, followup: followUp }));
+  }
+  let perPeople = null;
+  if (comparisonRisk !== null && interventionRisk !== null) {
+    const chosen = chooseDenominator([{ comparison: comparisonRisk.estimate, intervention: interventionRisk.estimate }]);
+    const denominator = query.per ?? chosen;
+    if (query.per === null || query.per === undefined) {
+      if (chosen === 1000) notices.push(notice('denominator-raised'));
+    }
+    perPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, denominator);
+  }
+  return {
+    comparisonRisk,
+    interventionRisk,
+    relativeRisk,
+    absoluteReduction,
+    nnt: numberNeeded(absoluteReduction),
+    perPeople,
+    notices,
+    counts,
+    baselineUsed: baseline,
+  };
+}

@@ -1,0 +1,36 @@
+/** English sentences for command-line usage problems. */
+export const cliMessages = {
+  unknownCommand: (name: string) => `Unknown command "${name}". Use compute, chart or handout (see chancewise --help).`,
+  noCommand: () => 'No command given. Use compute, chart or handout (see chancewise --help).',
+  unknownFlag: (flag: string) => `Unknown option ${flag}. See chancewise --help for the options.`,
+  repeatedFlag: (flag: string) => `The option ${flag} is given twice. Give it once.`,
+  missingValue: (flag: string, example: string) => `The option ${flag} needs a value, for example ${flag} ${example}.`,
+  flagTakesNoValue: (flag: string) => `The option ${flag} takes no value.`,
+  extraArgument: (value: string) => `Unexpected argument "${value}". Give at most one topic file.`,
+  twoEffects: (first: string, second: string) =>
+    `Give one effect only: found ${first} and ${second}. Use one of --rr, --or, --hr, --rrr or --arr.`,
+  noEffect: () => 'Give an effect (--rr, --or, --hr, --rrr or --arr) with --baseline, or --counts, or a topic file, or --demo.',
+  baselineNeeded: (flag: string) => `${flag} needs the patient’s baseline risk: add --baseline, for example --baseline 15%.`,
+  baselineWithCounts: () =>
+    '--counts takes the risks from the trial itself, so --baseline is not taken with it. Use a topic file to apply trial counts to a patient.',
+  effectWithCounts: (flag: string) => `${flag} cannot be combined with --counts. Give one or the other.`,
+  notWithTopic: (flag: string) => `${flag} cannot be used with a topic file or --demo: the topic holds its own numbers.`,
+  topicAndDemo: () => 'Give a topic file or --demo, not both.',
+  overAndTo: () => 'Give both --over YEARS (the period the baseline covers) and --to YEARS (the period wanted), or neither.',
+  periodsWithArr: () => '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
+  levelWithoutInterval: () => '--level is the level of --ci; give --ci LOW,HIGH too, or leave --level out.',
+  ciFormat: (value: string) => `--ci "${value}" is not an interval. Write LOW,HIGH, for example --ci 0.6,0.9.`,
+  perValue: (value: string) => `--per "${value}" is not allowed. Use --per 100 or --per 1000.`,
+  methodValue: (value: string) => `--method "${value}" is not allowed. Use --method newcombe or --method wald.`,
+  methodWithoutCounts: () => '--method applies to --counts only.',
+  paperValue: (value: string) => `--paper "${value}" is not allowed. Use --paper a4 or --paper letter.`,
+  dateValue: (value: string) => `--date "${value}" is not a date. Write it as YYYY-MM-DD, for example 2026-12-01.`,
+  outNeeded: (example: string) => `Give the output file with --out, for example --out ${example}.`,
+  outExtension: (value: string, extension: string) => `--out "${value}" must end in ${extension}.`,
+  fileUnreadable: (path: string, reason: string) => `Cannot read the topic file "${path}": ${reason}.`,
+  fileUnwritable: (path: string, reason: string) => `Cannot write "${path}": ${reason}.`,
+  topicInvalid: (first: string, count: number) =>
+    count > 1 ? `${first} (and ${count - 1} more problem${count > 2 ? 's' : ''} in the topic)` : first,
+  outcomeUnknown: (name: string, names: string) => `The topic has no outcome "${name}". Its outcomes are: ${names}.`,
+  internal: (detail: string) => `Chancewise failed unexpectedly: ${detail}`,
+} as const;

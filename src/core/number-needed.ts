@@ -1,0 +1,41 @@
+import { ceilWhole } from './float-safe.ts';
+import { english } from './messages/en/index.ts';
+import type { Estimate, NumberNeeded } from './types.ts';
+
+type Words = (typeof english)['numbers'];
+
+/** The NNT for one absolute difference, rounded up by convention but float-safe. */
+function wholeNeeded(difference: number): number {
+  return ceilWhole(1 / Math.abs(difference));
+}
+
+function intervalText(lower: number, upper: number, words: Words): string {
+  const { infinity, to } = words;
+  if (lower > 0) return `NNTB ${wholeNeeded(upper)} ${to} ${wholeNeeded(lower)}`;
+  if (upper < 0) return `NNTH ${wholeNeeded(lower)} ${to} ${wholeNeeded(upper)}`;
+  if (lower === 0 && upper === 0) return `${infinity}`;
+  if (lower === 0) return `NNTB ${wholeNeeded(upper)} ${to} ${infinity}`;
+  if (upper === 0) return `NNTH ${wholeNeeded(lower)} ${to} ${infinity}`;
+  return `NNTB ${wholeNeeded(upper)} ${to} ${infinity} ${to} NNTH ${wholeNeeded(lower)}`;
+}
+
+/**
+ * The number needed to treat for an absolute difference (comparison − option), labelled
+ * NNTB for a benefit and NNTH for a harm, with its interval written as Altman (1998,
+ * BMJ 317:1309) proposes: an interval that crosses no effect reads "NNTB 4 to ∞ to NNTH 20",
+ * benefit end first. A difference of exactly 0 has no NNT: a plain phrase instead.
+ *
+ * @example numberNeeded({ estimate: 0.1, lower: -0.05, upper: 0.25 }).text // => "NNTB 10 (NNTB 4 to ∞ to NNTH 20)"
+ */
+export function numberNeeded(difference: Estimate, words: Words = english.numbers): NumberNeeded {
+  const { estimate, lower, upper } = difference;
+  const interval = lower === null || upper === null ? null : intervalText(lower, upper, words);
+  if (estimate === 0) {
+    const text = interval === null ? words.noDifference : words.noDifferenceWithin(interval);
+    return { estimate: null, rounded: null, label: null, text };
+  }
+  const label = estimate > 0 ? 'NNTB' : 'NNTH';
+  const rounded = wholeNeeded(estimate);
+  const head = `${label} ${rounded}`;
+  return { estimate: 1 / Math.abs(estimate), rounded, label, text: interval === null ? head : `${head} (${interval})` };
+}

@@ -1,0 +1,177 @@
+import { computeEffect } from '../compute-effect.ts';
+import type { EffectComputation } from '../compute-effect.ts';
+import { numberNeeded } from '../number-needed.ts';
+import { peopleGroups } from '../people-groups.ts';
+import { chooseDenominator, peopleCounts } from '../people-counts.ts';
+import { parseBaselineRisk } from '../parse-risk.ts';
+import type { Problem } from '../problems.ts';
+import type { Denominator, Estimate, Notice } from '../types.ts';
+import type { Topic, TopicOption, TopicOutcome } from './topic.ts';
+import type { OptionOutcomeResult, OutcomeResult, TopicResult } from './topic-result.ts';
+import { trialBaseline, validateTopic } from './validate-topic.ts';
+
+/** A topic that failed validation: every problem, each with its field. */
+export class TopicError extends Error {
+  readonly problems: readonly Problem[];
+  constructor(problems: readonly Problem[]) {
+    super(`topic has ${problems.length} problem(s): ${problems.map((found) => `${found.code} at ${found.field}`).join('; ')}`);
+    this.name = 'TopicError';
+    this.problems = problems;
+  }
+}
+
+/** The result of checking and computing a topic in one call. */
+export type TopicEvaluation =
+  | { readonly ok: true; readonly result: TopicResult; readonly problems: readonly [] }
+  | { readonly ok: false; readonly result: null; readonly problems: readonly Problem[] };
+
+interface Computed {
+  readonly option: TopicOption;
+  readonly outcome: TopicOutcome;
+  readonly computation: EffectComputation;
+  readonly entry: TopicOutcome['effects'][number];
+}
+
+const point = (estimate: number): Estimate => ({ estimate, lower: null, upper: null });
+
+function baselineOf(outcome: TopicOutcome): { risk: number; fromTrial: boolean } {
+  if (outcome.baseline.risk !== null) return { risk: parseBaselineRisk(outcome.baseline.risk, 'baseline'), fromTrial: false };
+  const first = outcome.effects.find((entry) => entry.effect.measure === 'counts');
+  const risk = first !== undefined && first.effect.measure === 'counts' ? trialBaseline(first.effect) : null;
+  return { risk: risk ?? 0.5, fromTrial: true };
+}
+
+function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator): OptionOutcomeResult {
+  const people = peopleCounts(risk, point(risk), denominator);
+  return {
+    optionId: option.id,
+    name: option.name,
+    isComparison: true,
+    comparisonRisk: point(risk),
+    interventionRisk: point(risk),
+    relativeRisk: point(1),
+    absoluteReduction: point(0),
+    nnt: numberNeeded(point(0)),
+    perPeople: people,
+    groups: peopleGroups(people.comparison, people.intervention, denominator),
+    notices: [],
+    certainty: null,
+    importance: null,
+    source: '',
+  };
+}
+
+function optionEntry(item: Computed, baselineRisk: number, denominator: Denominator): OptionOutcomeResult {
+  const { computation, option, entry } = item;
+  const intervention = computation.interventionRisk ?? point(baselineRisk);
+  const people = peopleCounts(baselineRisk, intervention, denominator);
+  return {
+    optionId: option.id,
+    name: option.name,
+    isComparison: false,
+    comparisonRisk: computation.comparisonRisk ?? point(baselineRisk),
+    interventionRisk: intervention,
+    relativeRisk: computation.relativeRisk,
+    absoluteReduction: computation.absoluteReduction,
+    nnt: computation.nnt,
+    perPeople: people,
+    groups: peopleGroups(people.comparison, people.intervention, denominator),
+    notices: computation.notices.filter((found) => found.code !== 'denominator-raised'),
+    certainty: entry.certainty,
+    importance: entry.importance,
+    source: entry.source,
+  };
+}
+
+function noticeKey(found: Notice): string {
+  return `${found.code}|${JSON.stringify(found.values)}`;
+}
+
+/**
+ * Check and compute a whole topic: every option against the comparison for every outcome,
+ * over the topic's one period and with one denominator. Returns every problem at once when
+ * the topic is not valid.
+ */
+export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominator | null } = {}): TopicEvaluation {
+  const problems = validateTopic(topic);
+  if (problems.length > 0) return { ok: false, result: null, problems };
+  const computed: Computed[] = [];
+  const notices: Notice[] = [];
+  const baselines = new Map<string, number>();
+  for (const outcome of topic.outcomes) {
+    const baseline = baselineOf(outcome);
+    let converted = baseline.risk;
+    for (const entry of outcome.effects) {
+      const option = topic.options.find((candidate) => candidate.id === entry.optionId);
+      if (option === undefined) continue;
+      const computation = computeEffect({
+        baseline: baseline.risk,
+        effect: entry.effect,
+        periods: { baselineYears: outcome.baseline.periodYears, targetYears: topic.periodYears },
+        followUpYears: entry.followUpYears,
+        resultYears: topic.periodYears,
+        per: 100,
+      });
+      converted = computation.baselineUsed ?? baseline.risk;
+      computed.push({ option, outcome, computation, entry });
+      for (const found of computation.notices) {
+        if (found.code === 'period-beyond-followup') {
+          notices.push({ code: found.code, values: { ...found.values, option: option.name, outcome: outcome.name } });
+        } else if (found.code !== 'denominator-raised') {
+          notices.push(found);
+        }
+      }
+    }
+    if (baseline.fromTrial) notices.push({ code: 'counts-baseline-from-trial', values: { outcome: outcome.name } });
+    baselines.set(outcome.id, converted);
+  }
+  const denominator = settings.per ?? chooseDenominator(
+    computed.map((item) => ({
+      comparison: baselines.get(item.outcome.id) ?? 0,
+      intervention: item.computation.interventionRisk?.estimate ?? 0,
+    })),
+  );
+  if (denominator === 1000 && (settings.per ?? null) === null) notices.push({ code: 'denominator-raised', values: {} });
+  const outcomes: OutcomeResult[] = topic.outcomes.map((outcome) => {
+    const baselineRisk = baselines.get(outcome.id) ?? 0;
+    return {
+      outcomeId: outcome.id,
+      name: outcome.name,
+      kind: outcome.kind,
+      isHeadline: outcome.isHeadline,
+      baselineRisk,
+      baselineSource: outcome.baseline.source,
+      options: topic.options.map((option) => {
+        if (option.isComparison) return comparisonEntry(option, baselineRisk, denominator);
+        const item = computed.find((candidate) => candidate.outcome.id === outcome.id && candidate.option.id === option.id);
+        if (item === undefined) throw new Error(`no effect for ${option.id} on ${outcome.id} after validation`);
+        return optionEntry(item, baselineRisk, denominator);
+      }),
+    };
+  });
+  const unique = new Map(notices.map((found) => [noticeKey(found), found]));
+  return {
+    ok: true,
+    problems: [],
+    result: {
+      title: topic.title,
+      population: topic.population,
+      periodYears: topic.periodYears,
+      denominator,
+      illustrative: topic.illustrative,
+      outcomes,
+      notices: [...unique.values()],
+    },
+  };
+}
+
+/**
+ * Compute a whole topic in one call.
+ *
+ * @throws TopicError with every problem when the topic is not valid
+ */
+export function computeTopic(topic: Topic, settings: { readonly per?: Denominator | null } = {}): TopicResult {
+  const evaluation = evaluateTopic(topic, settings);
+  if (!evaluation.ok) throw new TopicError(evaluation.problems);
+  return evaluation.result;
+}
