@@ -1,5 +1,5 @@
 import type { ProblemValues } from '../../problems.ts';
-import { formatPercent } from '../format-number.ts';
+import { formatDecimal, formatPercent } from '../format-number.ts';
 
 type Render = (values: ProblemValues) => string;
 
@@ -18,7 +18,8 @@ export type NoticeCode =
   | 'counts-ratios-undefined'
   | 'counts-baseline-from-trial'
   | 'hr-proportional-hazards'
-  | 'denominator-raised';
+  | 'denominator-raised'
+  | 'reading-grade-high';
 
 /** English sentences for every warning code. */
 export const noticeMessages: Record<NoticeCode, Render> = {
@@ -38,4 +39,9 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     'The hazard ratio was applied assuming proportional hazards over the whole period.',
   'denominator-raised': () =>
     'The numbers are shown per 1000 people, because per 100 they would round a difference away or move it by half a person or more.',
+  'reading-grade-high': (v) => {
+    const grade = v.grade;
+    const shown = typeof grade === 'number' ? formatDecimal(grade, 1) : text(v, 'grade');
+    return `The text in ${text(v, 'field')} reads at about grade ${shown}, above grade ${text(v, 'limit')}. Shorter sentences and everyday words make it easier to read.`;
+  },
 };

@@ -1,0 +1,30 @@
+import { changeDirection } from './change-sentence.ts';
+import { optionSentence } from './option-context.ts';
+import type { OptionContext } from './option-context.ts';
+import type { WordingSentence } from './wording-sentence.ts';
+
+/**
+ * A GRADE informative statement (Santesso et al. 2020, GRADE guidelines 26),
+ * chosen by certainty (high "reduces", moderate "probably reduces", low "may
+ * reduce", very low "the evidence is very uncertain") and by importance
+ * (`trivial` reads "results in little or no difference"). The direction comes
+ * from the drawn counts; when they show no change the statement is the
+ * little-or-no-difference one whatever the importance, so text and picture agree.
+ *
+ * @param context - a non-comparison option, its outcome and the catalogue
+ * @returns the certainty sentence, or null when the result has no certainty
+ * @example certaintySentence(context)?.text // => 'Statin probably reduces the chance of a stroke.'
+ */
+export function certaintySentence(context: OptionContext): WordingSentence | null {
+  const { option, outcome, catalogue } = context;
+  if (option.certainty === null) return null;
+  const direction = changeDirection(context);
+  const text = catalogue.certainty({
+    option: option.name,
+    outcome: outcome.name,
+    certainty: option.certainty,
+    importance: direction === 'same' ? 'trivial' : (option.importance ?? 'important'),
+    direction: direction === 'more' ? 'increase' : 'reduce',
+  });
+  return optionSentence(context, 'certainty', text, {});
+}

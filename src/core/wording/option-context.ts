@@ -1,0 +1,53 @@
+import type { OptionOutcomeResult, OutcomeResult } from '../topic/topic-result.ts';
+import type { PeopleCounts } from '../types.ts';
+import type { Amount, WordingMessages } from './wording-catalogue.ts';
+import type { SentenceKind, WordingSentence } from './wording-sentence.ts';
+
+/** Everything a sentence builder needs about one option and one outcome. */
+export interface OptionContext {
+  readonly outcome: OutcomeResult;
+  readonly option: OptionOutcomeResult;
+  readonly denominator: number;
+  readonly years: number;
+  readonly catalogue: WordingMessages;
+  /** The reference-class phrase for a count of people. */
+  readonly group: (count: number) => string;
+}
+
+/** People who have the outcome with this option, as drawn: `event` plus `caused`. */
+export function optionCount(option: OptionOutcomeResult): number {
+  return option.groups.event + option.groups.caused;
+}
+
+/** People who have the outcome with the comparison, as drawn: `event` plus `prevented`. */
+export function comparisonCount(option: OptionOutcomeResult): number {
+  return option.groups.event + option.groups.prevented;
+}
+
+/** The unrounded risk behind `optionCount`, or null when the result has none. */
+export function optionRisk(option: OptionOutcomeResult): number | null {
+  const risk = option.isComparison ? option.comparisonRisk : option.interventionRisk;
+  return risk === null ? null : risk.estimate;
+}
+
+/** The option's people counts when the result has them. */
+export function peopleOf(option: OptionOutcomeResult): PeopleCounts | null {
+  const people: PeopleCounts | null = option.perPeople;
+  return people;
+}
+
+/** The numbers an amount writes: its count, plus the 1 of "fewer than 1". */
+export function amountNumbers(amount: Amount, count: number): Record<string, number> {
+  return amount.kind === 'fewer-than-one' ? { count, lessThan: 1 } : { count };
+}
+
+/** A sentence about one option and outcome. */
+export function optionSentence(
+  context: OptionContext,
+  kind: SentenceKind,
+  text: string,
+  numbers: Record<string, number>,
+  audience: WordingSentence['audience'] = 'patient',
+): WordingSentence {
+  return { kind, audience, outcomeId: context.outcome.outcomeId, optionId: context.option.optionId, text, numbers };
+}

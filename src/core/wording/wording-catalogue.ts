@@ -1,0 +1,106 @@
+/**
+ * The shape of the wording catalogue: the named values each sentence template
+ * receives. Code that computes chooses the case (which amount, which direction);
+ * a language's catalogue turns it into words. A second language implements
+ * `WordingMessages` in its own folder without touching the code that computes.
+ */
+import type { Certainty, Importance } from '../topic/topic.ts';
+
+/**
+ * How many people out of the denominator, as a case the words can follow:
+ * `none` (the risk is exactly 0), `fewer-than-one` (above 0 but rounds to 0),
+ * `about` (a rounded count), `nearly-all` (rounds to everyone but is not certain),
+ * `all` (the risk is exactly 1).
+ */
+export type Amount =
+  | { readonly kind: 'none' }
+  | { readonly kind: 'fewer-than-one' }
+  | { readonly kind: 'about'; readonly count: number }
+  | { readonly kind: 'nearly-all' }
+  | { readonly kind: 'all' };
+
+/** EU SmPC / CIOMS III frequency bands, plus `not-known` when no estimate exists. */
+export type FrequencyBand = 'very-common' | 'common' | 'uncommon' | 'rare' | 'very-rare' | 'not-known';
+
+/** Whether an option leaves fewer, more or the same number of people with the outcome. */
+export type ChangeDirection = 'fewer' | 'more' | 'same';
+
+/** The range of an option's effect, as people, in one of its plain cases. */
+export type RangeCase =
+  | { readonly variant: 'avoid' | 'get'; readonly low: number; readonly high: number }
+  | { readonly variant: 'narrow'; readonly direction: 'fewer' | 'more'; readonly count: number }
+  | { readonly variant: 'either'; readonly fewer: number; readonly more: number }
+  | { readonly variant: 'no-change' };
+
+/** Values every option sentence shares. */
+export interface OptionValues {
+  readonly option: string;
+  readonly outcome: string;
+}
+
+/** The templates of every patient-facing and clinician-facing wording sentence. */
+export interface WordingMessages {
+  /** The reference class for `count` people: "people like you", "person like you". */
+  readonly group: (count: number) => string;
+  /** Who the numbers are for, from the clinician's own description. */
+  readonly population: (values: { readonly population: string }) => string;
+  /** How many have the outcome with an option over the period. */
+  readonly eventFrame: (
+    values: OptionValues & {
+      readonly amount: Amount;
+      readonly denominator: number;
+      readonly group: string;
+      readonly years: number;
+    },
+  ) => string;
+  /** How many do not have it (the other frame of the same numbers). */
+  readonly freeFrame: (values: { readonly amount: Amount; readonly denominator: number }) => string;
+  /** The change an option makes, as people of the same denominator. */
+  readonly change: (
+    values: OptionValues & {
+      readonly direction: ChangeDirection;
+      /** People who avoid or get the outcome because of the option (0 when `same`). */
+      readonly count: number;
+      /** How many have the outcome either way, used when `same`. */
+      readonly either: Amount;
+      readonly denominator: number;
+    },
+  ) => string;
+  /** The uncertainty range of the change, as people. */
+  readonly range: (values: OptionValues & { readonly range: RangeCase; readonly denominator: number }) => string;
+  /** No interval was given, so the precision is not known. */
+  readonly rangeUnknown: (values: OptionValues) => string;
+  /** A GRADE informative statement (Santesso et al. 2020). */
+  readonly certainty: (
+    values: OptionValues & {
+      readonly certainty: Certainty;
+      readonly importance: Importance;
+      readonly direction: 'reduce' | 'increase';
+    },
+  ) => string;
+  /** A frequency band word with its number beside it. */
+  readonly band: (
+    values: OptionValues & { readonly band: FrequencyBand; readonly amount: Amount; readonly denominator: number },
+  ) => string;
+  /** Number needed to treat, for benefit (NNTB) or harm (NNTH). */
+  readonly nnt: (
+    values: OptionValues & {
+      readonly label: 'NNTB' | 'NNTH';
+      readonly count: number;
+      readonly group: string;
+      readonly years: number;
+    },
+  ) => string;
+  /** No number needed to treat exists because the option makes no difference. */
+  readonly nntNone: (values: OptionValues) => string;
+  /** A relative change, always with the absolute numbers it comes from. */
+  readonly relative: (
+    values: OptionValues & {
+      readonly from: number;
+      readonly to: number;
+      readonly denominator: number;
+      readonly direction: 'reduction' | 'increase';
+      readonly percent: number;
+    },
+  ) => string;
+}
