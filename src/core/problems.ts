@@ -7,6 +7,7 @@
 export type ProblemCode =
   // reading numbers and risks
   | 'number-unparsable'
+  | 'number-missing'
   | 'risk-empty'
   | 'risk-unparsable'
   | 'risk-ambiguous'

@@ -21,6 +21,7 @@ const measure = (values: ProblemValues): string => measureNames[text(values, 'me
 /** English sentences for every problem code: what is wrong, and how to fix it. */
 export const problemMessages: Record<ProblemCode, Render> = {
   'number-unparsable': (v) => `"${text(v, 'input')}" is not a number. Write digits, for example 0.75.`,
+  'number-missing': (v) => `The ${text(v, 'what')} is empty. Write a number, for example ${text(v, 'example')}.`,
   'risk-empty': () => 'The risk is empty. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.',
   'risk-unparsable': (v) =>
     `"${text(v, 'input')}" is not a risk. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.`,
