@@ -1,0 +1,251 @@
+/**
+ * The chart model: everything needed to draw one outcome's people charts side by
+ * side — one icon array per option, each with its title, labelled groups, range
+ * sentence and layout — as plain data, with no DOM and no drawing.
+ */
+import { peopleGroups } from '../core/people-groups.ts';
+import type { OptionOutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
+import type { Denominator, PeopleCounts, PeopleGroups, PersonGroup } from '../core/types.ts';
+import { FILL_ORDER } from './fill-sequence.ts';
+import { type Arrangement, type IconArrayLayout, iconArrayLayout } from './icon-array-layout.ts';
+import { type ArmRole, type ChartMessages, chartMessagesEn } from './messages/en.ts';
+import { type RankSpan, uncertainRanks } from './uncertain-people.ts';
+
+/** One group's label: "4 avoid a stroke because of option A". */
+export interface ChartLabel {
+  readonly group: PersonGroup;
+  readonly count: number;
+  readonly text: string;
+}
+
+/** The option's interval as people, and who it makes uncertain. */
+export interface ChartRange {
+  readonly lower: number;
+  readonly upper: number;
+  readonly text: string;
+  /** Legend line for the outlined people drawn when the range is shown. */
+  readonly outlineText: string;
+  /** Ranks of the people whose group depends on where in the interval the truth lies. */
+  readonly uncertain: RankSpan | null;
+}
+
+/** One icon array of the chart: one option. */
+export interface ChartArray {
+  readonly optionId: string;
+  readonly name: string;
+  readonly isComparison: boolean;
+  readonly title: string;
+  readonly groups: PeopleGroups;
+  /** Labels of the groups drawn, in fill order. */
+  readonly labels: readonly ChartLabel[];
+  /** A sentence when the option changes nothing at these numbers. */
+  readonly note: string | null;
+  readonly range: ChartRange | null;
+  /** The array in one sentence, with every count. */
+  readonly summary: string;
+  /** Layout at a cell size of 1; renderers scale it. */
+  readonly layout: IconArrayLayout;
+}
+
+export interface ChartModel {
+  /** Stable identifier (the outcome id, or "pair"), used to name SVG ids. */
+  readonly id: string;
+  readonly heading: string;
+  /** Set for invented demonstration topics. */
+  readonly illustrative: string | null;
+  readonly outcomeName: string;
+  readonly kind: 'benefit' | 'harm' | null;
+  readonly denominator: Denominator;
+  readonly periodYears: number | null;
+  readonly arrangement: Arrangement;
+  /** Comparison first, then the options: same size, same grid. */
+  readonly arrays: readonly ChartArray[];
+  /** The same numbers in text: every array's summary, note and range. */
+  readonly sentences: readonly string[];
+  /** The text alternative of the whole chart (heading and every count). */
+  readonly description: string;
+}
+
+export interface ChartOptions {
+  readonly arrangement?: Arrangement;
+  readonly seed?: number;
+  /** Options to show besides the comparison, in order (default: every option of the topic). */
+  readonly optionIds?: readonly string[];
+  readonly messages?: ChartMessages;
+}
+
+/** An arm before wording: which option, its groups, and its interval as people. */
+interface ArmInput {
+  readonly optionId: string;
+  readonly name: string;
+  readonly role: ArmRole;
+  readonly groups: PeopleGroups;
+  readonly perPeople: PeopleCounts | null;
+}
+
+interface ChartContext {
+  readonly id: string;
+  readonly outcomeName: string;
+  readonly kind: 'benefit' | 'harm' | null;
+  readonly denominator: Denominator;
+  readonly periodYears: number | null;
+  readonly illustrative: boolean;
+  /** A bare pair, with no topic: arms are named "Without/With the option". */
+  readonly bare: boolean;
+}
+
+/**
+ * The chart model of one outcome of a computed topic: the comparison's array on
+ * the left, then one per option, all per the topic's one denominator.
+ *
+ * @throws RangeError when the outcome or an option is unknown, or denominators differ
+ * @example outcomeChart(result, 'stroke').arrays[1].labels[1].text // => '4 avoid a stroke because of option A'
+ */
+export function outcomeChart(result: TopicResult, outcomeId: string, options: ChartOptions = {}): ChartModel {
+  const outcome = result.outcomes.find((candidate) => candidate.outcomeId === outcomeId);
+  if (outcome === undefined) throw new RangeError(`outcomeChart requires a known outcome (got ${outcomeId})`);
+  const comparison = outcome.options.find((option) => option.isComparison);
+  if (comparison === undefined) throw new RangeError(`outcomeChart requires a comparison for ${outcomeId}`);
+  const others = (options.optionIds ?? outcome.options.filter((option) => !option.isComparison).map((option) => option.optionId)).map(
+    (optionId) => {
+      const found = outcome.options.find((option) => option.optionId === optionId && !option.isComparison);
+      if (found === undefined) throw new RangeError(`outcomeChart requires a known option (got ${optionId})`);
+      return found;
+    },
+  );
+  const arm = (option: OptionOutcomeResult): ArmInput => ({
+    optionId: option.optionId,
+    name: option.name,
+    role: option.isComparison ? 'comparison' : 'option',
+    groups: option.groups,
+    perPeople: option.perPeople,
+  });
+  const context: ChartContext = {
+    id: outcome.outcomeId,
+    outcomeName: outcome.name,
+    kind: outcome.kind,
+    denominator: result.denominator,
+    periodYears: result.periodYears,
+    illustrative: result.illustrative,
+    bare: false,
+  };
+  return buildChart([comparison, ...others].map(arm), context, options);
+}
+
+/** A comparison and one option with no topic: "Without the option" and "With the option". */
+export interface PairInput {
+  readonly perPeople: PeopleCounts;
+  /** The outcome in a sentence ("a stroke"); default "the outcome". */
+  readonly outcomeName?: string;
+  readonly periodYears?: number | null;
+  readonly kind?: 'benefit' | 'harm' | null;
+}
+
+/**
+ * The chart model of a bare pair: the comparison's and the option's people counts.
+ *
+ * @example pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } })
+ *   .arrays[1].groups // => { denominator: 100, event: 15, prevented: 5, caused: 0, free: 80 }
+ */
+export function pairChart(pair: PairInput, options: ChartOptions = {}): ChartModel {
+  const messages = options.messages ?? chartMessagesEn;
+  const { denominator, comparison, intervention } = pair.perPeople;
+  const context: ChartContext = {
+    id: 'pair',
+    outcomeName: pair.outcomeName ?? messages.defaultOutcome,
+    kind: pair.kind ?? null,
+    denominator,
+    periodYears: pair.periodYears ?? null,
+    illustrative: false,
+    bare: true,
+  };
+  const arms: ArmInput[] = [
+    {
+      optionId: 'without',
+      name: messages.pairComparisonName,
+      role: 'comparison',
+      groups: peopleGroups(comparison, comparison, denominator),
+      perPeople: null,
+    },
+    {
+      optionId: 'with',
+      name: messages.pairOptionName,
+      role: 'option',
+      groups: peopleGroups(comparison, intervention, denominator),
+      perPeople: pair.perPeople,
+    },
+  ];
+  return buildChart(arms, context, options);
+}
+
+function buildChart(arms: readonly ArmInput[], context: ChartContext, options: ChartOptions): ChartModel {
+  const messages = options.messages ?? chartMessagesEn;
+  const arrangement = options.arrangement ?? 'grouped';
+  const arrays = arms.map((arm) => buildArray(arm, context, messages, arrangement, options.seed));
+  const heading = messages.heading(context.outcomeName, context.periodYears);
+  const illustrative = context.illustrative ? messages.illustrative : null;
+  const sentences = arrays.flatMap((array) => [array.summary, array.note, array.range?.text ?? null]).filter(
+    (sentence): sentence is string => sentence !== null,
+  );
+  return {
+    id: context.id,
+    heading,
+    illustrative,
+    outcomeName: context.outcomeName,
+    kind: context.kind,
+    denominator: context.denominator,
+    periodYears: context.periodYears,
+    arrangement,
+    arrays,
+    sentences,
+    description: [`${heading}.`, illustrative, ...sentences].filter((part) => part !== null).join(' '),
+  };
+}
+
+function buildArray(
+  arm: ArmInput,
+  context: ChartContext,
+  messages: ChartMessages,
+  arrangement: Arrangement,
+  seed: number | undefined,
+): ChartArray {
+  if (arm.groups.denominator !== context.denominator) {
+    throw new RangeError(`outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`);
+  }
+  const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears };
+  const title = context.bare
+    ? messages.pairTitle(titleValues, arm.role)
+    : arm.role === 'comparison'
+      ? messages.comparisonTitle(titleValues)
+      : messages.optionTitle(titleValues);
+  const cause = messages.causeName(arm.name, context.bare);
+  const labels = FILL_ORDER.filter((group) => arm.groups[group] > 0).map((group) => ({
+    group,
+    count: arm.groups[group],
+    text: messages.labels[group]({ count: arm.groups[group], outcome: context.outcomeName, option: cause, role: arm.role }),
+  }));
+  const unchanged = arm.role === 'option' && arm.groups.prevented === 0 && arm.groups.caused === 0;
+  const interval = arm.role === 'option' ? (arm.perPeople?.interventionRange ?? null) : null;
+  const range =
+    interval === null || arm.perPeople === null
+      ? null
+      : {
+          lower: interval.lower,
+          upper: interval.upper,
+          text: messages.range({ ...interval, denominator: context.denominator, outcome: context.outcomeName, option: cause }),
+          outlineText: messages.rangeOutline(context.outcomeName, cause),
+          uncertain: uncertainRanks(interval, arm.groups.event + arm.groups.caused),
+        };
+  return {
+    optionId: arm.optionId,
+    name: arm.name,
+    isComparison: arm.role === 'comparison',
+    title,
+    groups: arm.groups,
+    labels,
+    note: unchanged ? messages.noDifference(context.outcomeName, cause) : null,
+    range,
+    summary: messages.summary(title, labels.map((label) => label.text)),
+    layout: iconArrayLayout(context.denominator, arm.groups, { arrangement, ...(seed === undefined ? {} : { seed }) }),
+  };
+}

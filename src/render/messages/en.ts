@@ -1,0 +1,120 @@
+/**
+ * English wording of the people charts: titles, group labels and the range
+ * sentence. Drawing code never holds prose; a second language is a sibling
+ * module with the same shape ({@link ChartMessages}).
+ */
+import { formatDecimal } from '../../core/messages/format-number.ts';
+
+/** Which arm an array shows: the comparison (no option) or an option. */
+export type ArmRole = 'comparison' | 'option';
+
+export interface TitleValues {
+  readonly denominator: number;
+  readonly option: string;
+  readonly periodYears: number | null;
+}
+
+export interface LabelValues {
+  readonly count: number;
+  /** The outcome as used in a sentence: "a stroke", "muscle pain". */
+  readonly outcome: string;
+  /** The option's name as written in the topic. */
+  readonly option: string;
+  readonly role: ArmRole;
+}
+
+export interface RangeValues {
+  readonly lower: number;
+  readonly upper: number;
+  readonly denominator: number;
+  readonly outcome: string;
+  readonly option: string;
+}
+
+const plural = (count: number, one: string, many: string) => (count === 1 ? one : many);
+
+/** A name as it reads inside a sentence: "Option A" → "option A"; acronyms such as "ACE inhibitor" kept. */
+function inSentence(name: string): string {
+  const trimmed = name.trim();
+  const [first, second] = [trimmed.charAt(0), trimmed.charAt(1)];
+  const acronym = second !== '' && second === second.toUpperCase() && second !== second.toLowerCase();
+  return acronym ? trimmed : first.toLowerCase() + trimmed.slice(1);
+}
+
+/** A period in words: 10 → "10 years", 1 → "1 year", 0.5 → "6 months". */
+function period(years: number): string {
+  const months = years * 12;
+  if (years < 1 && Math.abs(months - Math.round(months)) < 1e-9) {
+    return `${Math.round(months)} ${plural(Math.round(months), 'month', 'months')}`;
+  }
+  return `${formatDecimal(years, 2)} ${plural(years, 'year', 'years')}`;
+}
+
+/** The shape every language's chart wording provides. */
+export interface ChartMessages {
+  readonly heading: (outcome: string, periodYears: number | null) => string;
+  readonly illustrative: string;
+  readonly optionTitle: (values: TitleValues) => string;
+  readonly comparisonTitle: (values: TitleValues) => string;
+  readonly pairComparisonName: string;
+  readonly pairOptionName: string;
+  readonly pairTitle: (values: TitleValues, role: ArmRole) => string;
+  readonly causeName: (option: string, bare: boolean) => string;
+  readonly defaultOutcome: string;
+  readonly labels: Readonly<Record<'event' | 'prevented' | 'caused' | 'free', (values: LabelValues) => string>>;
+  readonly noDifference: (outcome: string, option: string) => string;
+  readonly range: (values: RangeValues) => string;
+  readonly rangeOutline: (outcome: string, option: string) => string;
+  readonly summary: (title: string, labels: readonly string[]) => string;
+}
+
+/** English chart wording. */
+export const chartMessagesEn: ChartMessages = {
+  /** Heading of one outcome's chart: "Chance of a stroke over 10 years". */
+  heading: (outcome: string, periodYears: number | null) =>
+    periodYears === null ? `Chance of ${outcome}` : `Chance of ${outcome} over ${period(periodYears)}`,
+  /** Shown under the heading of an invented demonstration topic. */
+  illustrative: 'Illustrative example: invented numbers, not from a real study.',
+  /** "If 100 people like you take option A for 10 years". */
+  optionTitle: ({ denominator, option, periodYears }: TitleValues) =>
+    `If ${denominator} people like you take ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
+  /** "If 100 people like you have no treatment for 10 years". */
+  comparisonTitle: ({ denominator, option, periodYears }: TitleValues) =>
+    `If ${denominator} people like you have ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
+  /** Names of the two arms of a bare pair, with no topic. */
+  pairComparisonName: 'Without the option',
+  pairOptionName: 'With the option',
+  /** Title of an arm of a bare pair: "100 people like you without the option, over 10 years". */
+  pairTitle: ({ denominator, periodYears }: TitleValues, role: ArmRole) =>
+    `${denominator} people like you ${role === 'comparison' ? 'without' : 'with'} the option${periodYears === null ? '' : `, over ${period(periodYears)}`}`,
+  /** The option as the cause in a label: "because of option A". */
+  causeName: (option: string, bare: boolean) => (bare ? 'the option' : inSentence(option)),
+  /** Outcome name of a bare pair when none is given. */
+  defaultOutcome: 'the outcome',
+  labels: {
+    event: ({ count, outcome, role }: LabelValues) =>
+      `${count} ${plural(count, 'has', 'have')} ${outcome}${role === 'option' ? ' anyway' : ''}`,
+    prevented: ({ count, outcome, option }: LabelValues) =>
+      `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
+    caused: ({ count, outcome, option }: LabelValues) =>
+      `${count} ${plural(count, 'gets', 'get')} ${outcome} because of ${option}`,
+    free: ({ count, outcome }: LabelValues) => `${count} ${plural(count, 'does', 'do')} not have ${outcome}`,
+  },
+  /** When an option changes nothing at these numbers. */
+  noDifference: (outcome: string, option: string) =>
+    `The same number have ${outcome} with and without ${option}.`,
+  /** The option's interval as people: "With option A, the number who have a stroke could be anywhere between 13 and 18 of these 100." */
+  range: ({ lower, upper, denominator, outcome, option }: RangeValues) =>
+    `With ${option}, the number who have ${outcome} could be anywhere between ${lower} and ${upper} of these ${denominator}.`,
+  /** Legend line for the outlined people drawn when the range is shown. */
+  rangeOutline: (outcome: string, option: string) =>
+    `Dotted outline: people who may or may not have ${outcome} with ${option}, depending on where in that range the truth lies.`,
+  /** One array in a sentence: title, then the labels joined. */
+  summary: (title: string, labels: readonly string[]) => `${title}: ${joinList(labels)}.`,
+};
+
+/** "a, b and c". */
+function joinList(items: readonly string[]): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}

@@ -1,0 +1,82 @@
+/**
+ * Draw a chart model into an `<svg>` element with d3-selection: heading, then one
+ * icon array per option side by side, each with its title and labelled legend.
+ * Works on any DOM: the browser's, or jsdom's in Node.
+ */
+import { type Selection, select } from 'd3-selection';
+import { type ChartFrame, type FrameArray, chartFrame } from '../chart-frame.ts';
+import type { ChartArray, ChartModel } from '../chart-model.ts';
+import { drawPeople, personLooks } from './draw-people.ts';
+import { appendSwatch, appendText } from './draw-text.ts';
+import { patternIdsFor } from './person-paint.ts';
+import { type ResolvedSvgChartOptions, type SvgChartOptions, resolveSvgOptions } from './svg-chart-options.ts';
+import { appendPatterns } from './svg-patterns.ts';
+import { svgNumber } from './svg-number.ts';
+
+type Root = Selection<SVGSVGElement, unknown, null, undefined>;
+
+/** Draw `model` into `svgElement`, replacing its content. Returns the frame drawn. */
+export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options: SvgChartOptions = {}): ChartFrame {
+  const resolved = resolveSvgOptions(model, options);
+  const frame = chartFrame(model, { width: resolved.width, fontSize: resolved.fontSize, showRange: resolved.showRange });
+  const svg: Root = select(svgElement);
+  svg.selectChildren().remove();
+  setRootAttributes(svg, model, frame, resolved);
+  svg.append('title').text(model.description);
+  const ids = patternIdsFor(resolved.idPrefix);
+  appendPatterns(svg, resolved.palette, ids, model.arrays[0] === undefined ? 1 : (frame.arrays[0]?.grid.layout.geometry.patternTile ?? 1));
+  svg.append('rect').attr('class', 'background').attr('width', svgNumber(frame.width)).attr('height', svgNumber(frame.height)).attr('fill', resolved.palette.background);
+  drawHeading(svg.append('g').attr('class', 'chart-heading').attr('aria-hidden', 'true'), frame, resolved);
+  model.arrays.forEach((array, index) => {
+    const placed = frame.arrays[index];
+    if (placed === undefined) return;
+    const group = svg.append('g').attr('class', 'chart-array').attr('data-option-id', array.optionId);
+    drawArrayText(group.append('g').attr('class', 'array-text').attr('aria-hidden', 'true'), array, placed, resolved);
+    const people = group
+      .append('g')
+      .attr('class', 'people')
+      .attr('transform', `translate(${svgNumber(placed.grid.x)},${svgNumber(placed.grid.y)})`);
+    drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange), resolved.palette, ids);
+  });
+  return frame;
+}
+
+/** Root attributes: size, the text alternative, and the options an update reuses. */
+export function setRootAttributes(svg: Root, model: ChartModel, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+  svg
+    .attr('viewBox', `0 0 ${svgNumber(frame.width)} ${svgNumber(frame.height)}`)
+    .attr('width', svgNumber(frame.width))
+    .attr('height', svgNumber(frame.height))
+    .attr('role', 'img')
+    .attr('aria-label', model.description)
+    .attr('class', 'people-chart')
+    .attr('font-family', options.fontFamily)
+    .attr('data-denominator', String(model.denominator))
+    .attr('data-arrangement', model.arrangement)
+    .attr('data-palette', options.palette.name)
+    .attr('data-width', svgNumber(options.width))
+    .attr('data-font-size', svgNumber(options.fontSize))
+    .attr('data-show-range', String(options.showRange))
+    .attr('data-id-prefix', options.idPrefix);
+}
+
+/** The heading and the illustrative line. */
+export function drawHeading(group: Selection<SVGGElement, unknown, null, undefined>, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+  appendText(group, frame.heading, options.palette, 'heading');
+  if (frame.illustrative !== null) appendText(group, frame.illustrative, options.palette, 'illustrative');
+}
+
+/** An array's title and legend rows (swatches carry `data-look`, never `data-outcome`). */
+export function drawArrayText(
+  group: Selection<SVGGElement, unknown, null, undefined>,
+  array: ChartArray,
+  placed: FrameArray,
+  options: ResolvedSvgChartOptions,
+): void {
+  appendText(group, placed.title, options.palette, 'array-title');
+  const ids = patternIdsFor(options.idPrefix);
+  for (const row of placed.legend) {
+    if (row.swatch !== null) appendSwatch(group, row.swatch, array.layout.geometry.glyph, options.palette, ids);
+    appendText(group, row.text, options.palette, row.swatch === null ? 'legend-note' : 'legend-label');
+  }
+}
