@@ -42,6 +42,12 @@ export interface WordingOptions {
   readonly groupPhrase?: { readonly one: string; readonly other: string };
 }
 
+/** The reference-class phrase: the caller's, or the catalogue's. */
+function groupOf(options: WordingOptions, catalogue: WordingMessages): (count: number) => string {
+  const phrase = options.groupPhrase;
+  return phrase === undefined ? catalogue.group : (count: number) => (count === 1 ? phrase.one : phrase.other);
+}
+
 function optionWording(
   outcome: OutcomeResult,
   option: OptionOutcomeResult,
@@ -50,8 +56,7 @@ function optionWording(
   options: WordingOptions,
 ): OptionWording {
   const catalogue = options.catalogue ?? english.wording;
-  const phrase = options.groupPhrase;
-  const group = phrase === undefined ? catalogue.group : (count: number) => (count === 1 ? phrase.one : phrase.other);
+  const group = groupOf(options, catalogue);
   const context: OptionContext = { outcome, option, denominator, years, catalogue, group };
   const sentences: (WordingSentence | null)[] = [...frequencySentences(context)];
   if (!option.isComparison) {
@@ -96,7 +101,7 @@ export function topicWording(result: TopicResult, options: WordingOptions = {}):
             audience: 'patient',
             outcomeId: null,
             optionId: null,
-            text: catalogue.population({ population }),
+            text: catalogue.population({ population, group: groupOf(options, catalogue)(2) }),
             numbers: {},
           },
     outcomes: result.outcomes.map((outcome) => ({

@@ -43,7 +43,7 @@ export interface WordingMessages {
   /** The reference class for `count` people: "people like you", "person like you". */
   readonly group: (count: number) => string;
   /** Who the numbers are for, from the clinician's own description. */
-  readonly population: (values: { readonly population: string }) => string;
+  readonly population: (values: { readonly population: string; readonly group: string }) => string;
   /** How many have the outcome with an option over the period. */
   readonly eventFrame: (
     values: OptionValues & {

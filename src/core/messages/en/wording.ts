@@ -14,6 +14,22 @@ export function plural(count: number, one: string, other: string): string {
 /** A sentence starts with a capital; names typed with a capital are left as they are. */
 const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
 
+/**
+ * Outcome names are usually noun phrases ("a stroke": "will have a stroke"). A few
+ * start with a verb in -ing ("dying of bowel cancer"); those read "will end up dying".
+ */
+const VERBS_IN_ING = new Set([
+  'becoming', 'being', 'breaking', 'catching', 'developing', 'dying', 'falling', 'feeling', 'getting',
+  'going', 'having', 'leaving', 'living', 'losing', 'needing', 'returning', 'spending', 'staying',
+  'starting', 'stopping', 'taking', 'using',
+]);
+const startsWithVerb = (outcome: string): boolean =>
+  VERBS_IN_ING.has((outcome.trim().split(/\s+/)[0] ?? '').toLowerCase());
+/** "have" / "get" before a noun phrase, "end up" before a verb in -ing. */
+const haveVerb = (outcome: string): string => (startsWithVerb(outcome) ? 'end up' : 'have');
+const getVerb = (outcome: string, count: number): string =>
+  startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get');
+
 const period = (years: number): string =>
   years === 1 ? 'the next year' : `the next ${formatDecimal(years, 2)} years`;
 
@@ -64,15 +80,15 @@ const range = (found: RangeCase, option: string, outcome: string, denominator: n
     case 'avoid':
       return `With ${option}, the number who avoid ${outcome} could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
     case 'get':
-      return `With ${option}, the number who get ${outcome} because of it could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+      return `With ${option}, the number who ${getVerb(outcome, 2)} ${outcome} because of it could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
     case 'narrow':
       return found.direction === 'fewer'
         ? `With ${option}, the research puts the number who avoid ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`
-        : `With ${option}, the research puts the number who get ${outcome} because of it at about ${found.count} in ${denominator}, with little uncertainty.`;
+        : `With ${option}, the research puts the number who ${getVerb(outcome, 2)} ${outcome} because of it at about ${found.count} in ${denominator}, with little uncertainty.`;
     case 'either':
-      return `With ${option}, anything from ${found.fewer} fewer to ${found.more} more people in ${denominator} could have ${outcome}.`;
+      return `With ${option}, anything from ${found.fewer} fewer to ${found.more} more people in ${denominator} could ${haveVerb(outcome)} ${outcome}.`;
     case 'no-change':
-      return `With ${option}, the research points to little or no change in how many people have ${outcome}.`;
+      return `With ${option}, the research points to little or no change in how many people ${haveVerb(outcome)} ${outcome}.`;
   }
 };
 
@@ -90,21 +106,21 @@ const hedges = {
 /** The English wording catalogue. */
 export const wordingMessages: WordingMessages = {
   group: (count) => plural(count, 'person like you', 'people like you'),
-  population: ({ population }) => {
+  population: ({ population, group }) => {
     const trimmed = population.trim();
-    return `These numbers are for people like you: ${trimmed}${/[.!?]$/.test(trimmed) ? '' : '.'}`;
+    return `In these numbers, "${group}" means ${trimmed}${/[.!?]$/.test(trimmed) ? '' : '.'}`;
   },
   eventFrame: ({ option, outcome, amount, denominator, group, years }) =>
-    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will have ${outcome} in ${period(years)}.`,
+    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome} in ${period(years)}.`,
   freeFrame: ({ amount, denominator }) => freeFrame(amount, denominator),
   change: ({ option, outcome, direction, count, either, denominator }) => {
     switch (direction) {
       case 'fewer':
         return `With ${option}, about ${count} of those ${denominator} people ${plural(count, 'avoids', 'avoid')} ${outcome}.`;
       case 'more':
-        return `About ${count} in ${denominator} ${plural(count, 'gets', 'get')} ${outcome} because of ${option}.`;
+        return `About ${count} in ${denominator} ${getVerb(outcome, count)} ${outcome} because of ${option}.`;
       case 'same':
-        return `${capitalise(option)} makes little or no difference to how many people have ${outcome}: ${amountPhrase(either, denominator)} either way.`;
+        return `${capitalise(option)} makes little or no difference to how many people ${haveVerb(outcome)} ${outcome}: ${amountPhrase(either, denominator)} either way.`;
     }
   },
   range: ({ option, outcome, range: found, denominator }) => range(found, option, outcome, denominator),
