@@ -2,7 +2,8 @@ import type { EffectQuery } from '../core/compute-effect.ts';
 import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
-import { fail } from '../core/problems.ts';
+import { InputError, fail } from '../core/problems.ts';
+import type { ProblemCode, ProblemValues } from '../core/problems.ts';
 import type { ArmCounts, Denominator, EffectMeasure } from '../core/types.ts';
 import type { FlagSpec, ParsedArgs } from './parse-args.ts';
 import { valueOf } from './parse-args.ts';
@@ -39,25 +40,37 @@ const MEASURE_FLAGS: readonly [string, EffectMeasure][] = [
 /** Flags that only make sense with bare effect flags, not with a topic. */
 export const EFFECT_ONLY_FLAGS = Object.keys(EFFECT_FLAGS).filter((flag) => flag !== '--per');
 
+/** Read a number, reporting anything unreadable as `code` so the message can say what is allowed. */
+function readNumber(input: string, field: string, code: ProblemCode, values: ProblemValues): number {
+  try {
+    return parseNumber(input, field);
+  } catch (error) {
+    if (error instanceof InputError) fail(code, field, values);
+    throw error;
+  }
+}
+
 /** Read a percentage: "25" and "25%" both mean 25. */
 function parsePercent(input: string, field: string): number {
   const cleaned = input.trim().replace(/%$/, '');
-  if (cleaned === '') fail('percent-unparsable', field, { input });
-  return parseNumber(cleaned, field);
+  return readNumber(cleaned, field, 'percent-unparsable', { input: input.trim() });
 }
 
 /** Read an interval level: 0.95 or 95%. */
 export function parseLevel(input: string, field = '--level'): number {
   const trimmed = input.trim();
-  const value = trimmed.endsWith('%') ? parseNumber(trimmed.slice(0, -1), field) / 100 : parseNumber(trimmed, field);
-  if (!(value > 0.5 && value <= 0.999)) fail('level-out-of-range', field, { input });
+  const values = { input: trimmed };
+  const value = trimmed.endsWith('%')
+    ? readNumber(trimmed.slice(0, -1), field, 'level-out-of-range', values) / 100
+    : readNumber(trimmed, field, 'level-out-of-range', values);
+  if (!(value > 0.5 && value <= 0.999)) fail('level-out-of-range', field, values);
   return value;
 }
 
 /** Read a positive number of years. */
 export function parseYears(input: string, field: string): number {
-  const value = parseNumber(input, field);
-  if (!(value > 0) || value > 1000) fail('period-not-positive', field, { input });
+  const value = readNumber(input, field, 'period-not-positive', { input: input.trim() });
+  if (!(value > 0) || value > 1000) fail('period-not-positive', field, { input: input.trim() });
   return value;
 }
 
@@ -84,22 +97,24 @@ function parseInterval(measure: EffectMeasure, input: string): { lower: number; 
   return { lower: parseValue(measure, parts[0] ?? '', '--ci'), upper: parseValue(measure, parts[1] ?? '', '--ci') };
 }
 
-function parseArm(input: string): ArmCounts {
+function parseArm(input: string, whole: string): ArmCounts {
   const match = /^\s*([^/\s]+)\s*\/\s*([^/\s]+)\s*$/.exec(input);
-  if (match === null) fail('counts-unparsable', '--counts', { input });
-  const events = parseNumber(match[1] ?? '', '--counts');
-  const total = parseNumber(match[2] ?? '', '--counts');
-  if (!Number.isInteger(events) || !Number.isInteger(total)) fail('counts-not-whole', '--counts', { input: input.trim() });
-  if (events < 0 || total < 0) fail('counts-negative', '--counts', { input: input.trim() });
-  if (total === 0) fail('counts-total-zero', '--counts', { input: input.trim() });
-  if (events > total) fail('counts-events-above-total', '--counts', { input: input.trim() });
+  if (match === null) fail('counts-unparsable', '--counts', { input: whole });
+  const events = readNumber(match[1] ?? '', '--counts', 'counts-unparsable', { input: whole });
+  const total = readNumber(match[2] ?? '', '--counts', 'counts-unparsable', { input: whole });
+  const arm = input.trim();
+  if (!Number.isSafeInteger(events) || !Number.isSafeInteger(total)) fail('counts-not-whole', '--counts', { input: arm });
+  if (events < 0 || total < 0) fail('counts-negative', '--counts', { input: arm });
+  if (total === 0) fail('counts-total-zero', '--counts', { input: arm });
+  if (events > total) fail('counts-events-above-total', '--counts', { input: arm });
   return { events, total };
 }
 
 function parseCounts(input: string): { intervention: ArmCounts; comparison: ArmCounts } {
+  const whole = input.trim();
   const arms = input.split(',');
-  if (arms.length !== 2) fail('counts-unparsable', '--counts', { input });
-  return { intervention: parseArm(arms[0] ?? ''), comparison: parseArm(arms[1] ?? '') };
+  if (arms.length !== 2) fail('counts-unparsable', '--counts', { input: whole });
+  return { intervention: parseArm(arms[0] ?? '', whole), comparison: parseArm(arms[1] ?? '', whole) };
 }
 
 function parsePeriods(parsed: ParsedArgs): EffectQuery['periods'] {

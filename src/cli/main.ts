@@ -3,6 +3,7 @@ import { english } from '../core/messages/en/index.ts';
 import { InputError } from '../core/problems.ts';
 import type { CommandIo, CommandOutput } from './command-output.ts';
 import { runCompute } from './compute-command.ts';
+import { flagForField } from './flag-for-field.ts';
 import { HELP_TEXT } from './help-text.ts';
 import { UsageError } from './usage-error.ts';
 
@@ -48,7 +49,9 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
     return 0;
   } catch (error) {
     if (error instanceof InputError) {
-      io.stderr(`${oneLine(describeProblem(error.problem))}\n`);
+      const flag = flagForField(error.problem.field);
+      const sentence = describeProblem(error.problem);
+      io.stderr(`${oneLine(flag === null ? sentence : `${flag}: ${sentence}`)}\n`);
       return 2;
     }
     if (error instanceof UsageError) {

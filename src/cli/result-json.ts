@@ -1,7 +1,7 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
-import { describeNotice } from '../core/messages/describe.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { Estimate, PeopleCounts } from '../core/types.ts';
+import { warningSentences } from './warning-sentences.ts';
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 
@@ -60,7 +60,7 @@ export function effectJson(result: EffectComputation): Json {
       cramersV: finite(counts.cramersV),
     });
   }
-  fields.warnings = result.notices.map((notice) => describeNotice(notice));
+  fields.warnings = warningSentences(result.notices);
   return fields;
 }
 
@@ -90,6 +90,6 @@ export function topicJson(result: TopicResult): Json {
         certainty: option.certainty,
       })),
     })),
-    warnings: result.notices.map((notice) => describeNotice(notice)),
+    warnings: warningSentences(result.notices),
   };
 }

@@ -1,8 +1,8 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
-import { describeNotice } from '../core/messages/describe.ts';
 import { formatDecimal, formatPercent } from '../core/messages/format-number.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { Estimate, Notice } from '../core/types.ts';
+import { warningSentences } from './warning-sentences.ts';
 
 const percent = (value: number): string => formatPercent(value, 1);
 const points = (value: number): string => formatDecimal(value * 100, 1).replace(/^-/, '−');
@@ -40,7 +40,7 @@ function effectLines(result: EffectResult, indent: string): string[] {
 
 function warningLines(notices: readonly Notice[]): string[] {
   if (notices.length === 0) return [];
-  return ['Warnings:', ...notices.map((notice) => `  - ${describeNotice(notice)}`)];
+  return ['Warnings:', ...warningSentences(notices).map((sentence) => `  - ${sentence}`)];
 }
 
 /** The readable summary of one effect, for a terminal. */
