@@ -4,29 +4,36 @@ import type { Problem } from '../problems.ts';
 import type { Topic } from './topic.ts';
 import { TOPIC_FORMAT, TOPIC_VERSION, topicFileSchema, topicFileV1Schema } from './topic-schema.ts';
 import type { TopicFileV1 } from './topic-schema.ts';
+import { describeReceived, expectedAt } from './schema-expectation.ts';
+import type { PathStep, SchemaNode } from './schema-expectation.ts';
+import { fileWords } from '../messages/en/file-words.ts';
 
 /** What reading a topic file gives: the topic, or the first thing wrong with the file. */
 export type TopicFileReading =
   | { readonly ok: true; readonly topic: Topic; readonly migratedFrom: number | null }
   | { readonly ok: false; readonly problem: Problem };
 
-function describeValue(value: unknown): string {
-  if (value === undefined) return 'nothing';
-  if (value === null) return 'null';
-  if (Array.isArray(value)) return 'a list';
-  if (typeof value === 'object') return 'an object';
-  if (typeof value === 'string') return `the text ${JSON.stringify(value.length > 30 ? `${value.slice(0, 30)}…` : value)}`;
-  return `${typeof value} ${String(value)}`;
-}
-
-function firstIssue(issues: readonly v.BaseIssue<unknown>[]): Problem {
+/**
+ * The first problem valibot found, as one clear problem: the dotted path of the first wrong
+ * field, what the schema expects there in plain words, and what the file holds instead. A
+ * list found where a group of fields belongs is reported at the list itself, not as the
+ * first field missing from it.
+ */
+function firstIssue(root: SchemaNode, issues: readonly v.BaseIssue<unknown>[]): Problem {
   const issue = issues[0];
-  const path = (issue?.path ?? []).map((item) => String(item.key)).join('.');
-  const expected = issue?.expected ?? 'a valid value';
+  let steps: PathStep[] = (issue?.path ?? []).map((item) => ({ key: item.key, input: item.input }));
+  let received: unknown = issue?.input;
+  const last = steps[steps.length - 1];
+  if (last !== undefined && Array.isArray(last.input) && typeof last.key === 'string') {
+    received = last.input;
+    steps = steps.slice(0, -1);
+  }
+  const path = steps.map((step) => String(step.key)).join('.');
+  const expected = expectedAt(root, steps) ?? (issue?.expected ?? fileWords.anyValue).replace(/^"|"$/g, '');
   return problem('file-field-invalid', path === '' ? '(file)' : path, {
-    path: path === '' ? '(the whole file)' : path,
-    expected: expected.replace(/^"|"$/g, ''),
-    received: describeValue(issue?.input),
+    path: path === '' ? fileWords.wholeFile : path,
+    expected,
+    received: describeReceived(received),
   });
 }
 
@@ -68,17 +75,17 @@ export function migrateTopicV1(file: TopicFileV1): Topic {
 export function readTopicFile(contents: string): TopicFileReading {
   let data: unknown;
   try {
-    data = JSON.parse(contents);
+    data = JSON.parse(contents.replace(/^\uFEFF/, ''));
   } catch (error) {
     const detail = error instanceof Error ? error.message : 'unreadable';
     return { ok: false, problem: problem('file-not-json', '(file)', { detail }) };
   }
   if (typeof data !== 'object' || data === null || Array.isArray(data)) {
-    return { ok: false, problem: problem('file-format-unknown', 'format', { format: describeValue(data) }) };
+    return { ok: false, problem: problem('file-format-unknown', 'format', { format: fileWords.noFormat }) };
   }
   const record = data as Record<string, unknown>;
   if (record.format !== TOPIC_FORMAT) {
-    return { ok: false, problem: problem('file-format-unknown', 'format', { format: String(record.format ?? 'none') }) };
+    return { ok: false, problem: problem('file-format-unknown', 'format', { format: String(record.format ?? fileWords.noFormat) }) };
   }
   if (typeof record.version === 'number' && record.version > TOPIC_VERSION) {
     return {
@@ -88,11 +95,11 @@ export function readTopicFile(contents: string): TopicFileReading {
   }
   if (record.version === 1) {
     const old = v.safeParse(topicFileV1Schema, data);
-    if (!old.success) return { ok: false, problem: firstIssue(old.issues) };
+    if (!old.success) return { ok: false, problem: firstIssue(topicFileV1Schema, old.issues) };
     return { ok: true, topic: migrateTopicV1(old.output), migratedFrom: 1 };
   }
   const parsed = v.safeParse(topicFileSchema, data);
-  if (!parsed.success) return { ok: false, problem: firstIssue(parsed.issues) };
+  if (!parsed.success) return { ok: false, problem: firstIssue(topicFileSchema, parsed.issues) };
   return { ok: true, topic: parsed.output.topic, migratedFrom: null };
 }
 

@@ -1,4 +1,6 @@
 import { computeEffect } from '../compute-effect.ts';
+import { checkArm } from '../counts/check-arm.ts';
+import type { EffectComputation } from '../compute-effect.ts';
 import { parseBaselineRisk } from '../parse-risk.ts';
 import { InputError, problem } from '../problems.ts';
 import type { Problem } from '../problems.ts';
@@ -38,7 +40,19 @@ function collect(problems: Problem[], attempt: () => void): void {
   }
 }
 
-function checkOutcome(problems: Problem[], topic: Topic, outcome: TopicOutcome, index: number): void {
+/** The key of one option's computation for one outcome. */
+export function computationKey(outcomeId: string, optionId: string): string {
+  return `${outcomeId}\u0000${optionId}`;
+}
+
+/** Every problem of a topic, and the computations of the effects that could be computed. */
+export interface TopicCheck {
+  readonly problems: Problem[];
+  readonly computed: Map<string, EffectComputation>;
+}
+
+function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, index: number): void {
+  const { problems } = check;
   const field = `outcomes.${index}`;
   checkText(problems, outcome.name, `${field}.name`, 'outcome name', TOPIC_LIMITS.outcomeNameLength);
   checkText(problems, outcome.baseline.source, `${field}.baseline.source`, 'source', TOPIC_LIMITS.sourceLength, false);
@@ -69,6 +83,14 @@ function checkOutcome(problems: Problem[], topic: Topic, outcome: TopicOutcome, 
     }
     checkText(problems, entry.source, `${effectField}.source`, 'source', TOPIC_LIMITS.sourceLength, false);
     if (entry.followUpYears !== null) checkPeriod(problems, entry.followUpYears, `${effectField}.followUpYears`);
+    if (entry.effect.measure === 'counts') {
+      const { intervention, comparison } = entry.effect;
+      const armProblems: Problem[] = [];
+      collect(armProblems, () => checkArm(intervention, `${effectField}.effect.intervention`));
+      collect(armProblems, () => checkArm(comparison, `${effectField}.effect.comparison`));
+      problems.push(...armProblems);
+      if (armProblems.length > 0) return;
+    }
     if (baselineProblems.length > 0) return;
     const periodOk = outcome.baseline.periodYears > 0 && topic.periodYears > 0;
     const fromTrial = baseline === null && entry.effect.measure === 'counts' ? trialBaseline(entry.effect) : null;
@@ -77,13 +99,16 @@ function checkOutcome(problems: Problem[], topic: Topic, outcome: TopicOutcome, 
       return;
     }
     collect(problems, () => {
-      computeEffect({
+      const computation = computeEffect({
         baseline: baseline ?? fromTrial,
         effect: entry.effect,
         periods: periodOk ? { baselineYears: outcome.baseline.periodYears, targetYears: topic.periodYears } : null,
+        followUpYears: entry.followUpYears,
+        resultYears: topic.periodYears,
         per: 100,
         field: `${effectField}.effect`,
       });
+      check.computed.set(computationKey(outcome.id, option.id), computation);
     });
   });
   for (const option of topic.options) {
@@ -107,7 +132,13 @@ export function trialBaseline(effect: { comparison: { events: number; total: num
  * @example validateTopic(demoTopic) // => []
  */
 export function validateTopic(topic: Topic): Problem[] {
+  return checkTopic(topic).problems;
+}
+
+/** Check a whole topic, keeping the computations made along the way so they are not repeated. */
+export function checkTopic(topic: Topic): TopicCheck {
   const problems: Problem[] = [];
+  const check: TopicCheck = { problems, computed: new Map() };
   checkText(problems, topic.title, 'title', 'decision', TOPIC_LIMITS.titleLength);
   checkText(problems, topic.population, 'population', 'description of who the numbers are for', TOPIC_LIMITS.populationLength);
   checkPeriod(problems, topic.periodYears, 'periodYears');
@@ -141,6 +172,6 @@ export function validateTopic(topic: Topic): Problem[] {
   if (outcomes.length > 0 && headlines !== 1) problems.push(problem('topic-headline-count', 'outcomes', { count: headlines }));
   checkUnique(problems, outcomes.map((outcome) => outcome.id), 'outcomes', 'topic-duplicate-id');
   checkUnique(problems, outcomes.map((outcome) => outcome.name), 'outcomes', 'topic-duplicate-name');
-  outcomes.forEach((outcome, index) => checkOutcome(problems, topic, outcome, index));
-  return problems;
+  outcomes.forEach((outcome, index) => checkOutcome(check, topic, outcome, index));
+  return check;
 }
