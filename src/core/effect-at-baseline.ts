@@ -26,6 +26,14 @@ function sorted(estimate: number, first: number | null, second: number | null): 
   return { estimate, lower: Math.min(first, second, estimate), upper: Math.max(first, second, estimate) };
 }
 
+function ratioTo(risk: number | null, baseline: number): number | null {
+  return risk === null ? null : risk / baseline;
+}
+
+function reductionFrom(risk: number | null, baseline: number): number | null {
+  return risk === null ? null : baseline - risk;
+}
+
 /**
  * Apply an entered effect to a baseline risk (Cochrane Handbook 5.1 §12.5.4.5): the
  * estimate and each interval limit go through the same formula, and the ends are sorted
@@ -39,12 +47,10 @@ export function effectAtBaseline(baseline: number, effect: CheckedEffect, field:
   const limits = effect.interval;
   const lowRisk = limits === null ? null : riskOrFail(effect, limits.lower, baseline, `${field}.lower`, true);
   const highRisk = limits === null ? null : riskOrFail(effect, limits.upper, baseline, `${field}.upper`, true);
-  const ratio = (value: number | null): number | null => (value === null ? null : value / baseline);
-  const reduction = (value: number | null): number | null => (value === null ? null : baseline - value);
   const relativeEstimate = effect.measure === 'rr' ? effect.estimate : risk / baseline;
   return {
     interventionRisk: sorted(risk, lowRisk, highRisk),
-    relativeRisk: sorted(relativeEstimate, ratio(lowRisk), ratio(highRisk)),
-    absoluteReduction: sorted(baseline - risk, reduction(lowRisk), reduction(highRisk)),
+    relativeRisk: sorted(relativeEstimate, ratioTo(lowRisk, baseline), ratioTo(highRisk, baseline)),
+    absoluteReduction: sorted(baseline - risk, reductionFrom(lowRisk, baseline), reductionFrom(highRisk, baseline)),
   };
 }

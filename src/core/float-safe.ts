@@ -12,8 +12,12 @@ export function ceilWhole(value: number): number {
   return Math.ceil(value);
 }
 
-/** Round half up on the decimal value: 14.4999999999 (from 0.145 × 100) rounds to 15. */
+/**
+ * Round half up on the decimal value: 14.4999999999 (from 0.145 × 100) rounds to 15. A fraction
+ * within 1e-9 (relative) below one half counts as one half.
+ */
 export function roundHalfUp(value: number): number {
-  const cleaned = Number(value.toPrecision(12));
-  return Math.floor(cleaned + 0.5);
+  const whole = Math.floor(value);
+  const fraction = value - whole;
+  return fraction >= 0.5 - RELATIVE_TOLERANCE * Math.max(1, Math.abs(value)) ? whole + 1 : whole;
 }

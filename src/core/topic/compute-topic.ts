@@ -8,7 +8,7 @@ import type { Problem } from '../problems.ts';
 import type { Denominator, Estimate, Notice } from '../types.ts';
 import type { Topic, TopicOption, TopicOutcome } from './topic.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from './topic-result.ts';
-import { trialBaseline, validateTopic } from './validate-topic.ts';
+import { checkTopic, trialBaseline } from './validate-topic.ts';
 
 /** A topic that failed validation: every problem, each with its field. */
 export class TopicError extends Error {
@@ -84,7 +84,9 @@ function optionEntry(item: Computed, baselineRisk: number, denominator: Denomina
 }
 
 function noticeKey(found: Notice): string {
-  return `${found.code}|${JSON.stringify(found.values)}`;
+  let key = found.code;
+  for (const name in found.values) key += `|${name}=${String(found.values[name])}`;
+  return key;
 }
 
 /**
@@ -93,30 +95,25 @@ function noticeKey(found: Notice): string {
  * the topic is not valid.
  */
 export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominator | null } = {}): TopicEvaluation {
-  const problems = validateTopic(topic);
-  if (problems.length > 0) return { ok: false, result: null, problems };
+  const check = checkTopic(topic);
+  if (check.problems.length > 0) return { ok: false, result: null, problems: check.problems };
   const computed: Computed[] = [];
   const notices: Notice[] = [];
   const baselines = new Map<string, number>();
+  const optionsById = new Map(topic.options.map((option) => [option.id, option]));
   for (const outcome of topic.outcomes) {
     const baseline = baselineOf(outcome);
     let converted = baseline.risk;
     for (const entry of outcome.effects) {
-      const option = topic.options.find((candidate) => candidate.id === entry.optionId);
-      if (option === undefined) continue;
-      const computation = computeEffect({
-        baseline: baseline.risk,
-        effect: entry.effect,
-        periods: { baselineYears: outcome.baseline.periodYears, targetYears: topic.periodYears },
-        followUpYears: entry.followUpYears,
-        resultYears: topic.periodYears,
-        per: 100,
-      });
+      const option = optionsById.get(entry.optionId);
+      const computation = check.computed.get(entry);
+      if (option === undefined || computation === undefined) continue;
       converted = computation.baselineUsed ?? baseline.risk;
       computed.push({ option, outcome, computation, entry });
       for (const found of computation.notices) {
         if (found.code === 'period-beyond-followup') {
-          notices.push({ code: found.code, values: { ...found.values, option: option.name, outcome: outcome.name } });
+          const { period = '', followup = '' } = found.values;
+          notices.push({ code: found.code, values: { period, followup, option: option.name, outcome: outcome.name } });
         } else if (found.code !== 'denominator-raised') {
           notices.push(found);
         }
@@ -132,6 +129,12 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
     })),
   );
   if (denominator === 1000 && (settings.per ?? null) === null) notices.push({ code: 'denominator-raised', values: {} });
+  const byOutcome = new Map<TopicOutcome, Map<string, Computed>>();
+  for (const item of computed) {
+    const forOutcome = byOutcome.get(item.outcome) ?? new Map<string, Computed>();
+    forOutcome.set(item.option.id, item);
+    byOutcome.set(item.outcome, forOutcome);
+  }
   const outcomes: OutcomeResult[] = topic.outcomes.map((outcome) => {
     const baselineRisk = baselines.get(outcome.id) ?? 0;
     return {
@@ -143,7 +146,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       baselineSource: outcome.baseline.source,
       options: topic.options.map((option) => {
         if (option.isComparison) return comparisonEntry(option, baselineRisk, denominator);
-        const item = computed.find((candidate) => candidate.outcome.id === outcome.id && candidate.option.id === option.id);
+        const item = byOutcome.get(outcome)?.get(option.id);
         if (item === undefined) throw new Error(`no effect for ${option.id} on ${outcome.id} after validation`);
         return optionEntry(item, baselineRisk, denominator);
       }),

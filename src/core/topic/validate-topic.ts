@@ -5,7 +5,7 @@ import { parseBaselineRisk } from '../parse-risk.ts';
 import { InputError, problem } from '../problems.ts';
 import type { Problem } from '../problems.ts';
 import { TOPIC_LIMITS } from './topic.ts';
-import type { Topic, TopicOutcome } from './topic.ts';
+import type { OptionEffect, Topic, TopicOutcome } from './topic.ts';
 
 function checkText(problems: Problem[], value: string, field: string, what: string, limit: number, required = true): void {
   if (required && value.trim() === '') problems.push(problem('topic-text-missing', field, { what }));
@@ -40,15 +40,11 @@ function collect(problems: Problem[], attempt: () => void): void {
   }
 }
 
-/** The key of one option's computation for one outcome. */
-export function computationKey(outcomeId: string, optionId: string): string {
-  return `${outcomeId}\u0000${optionId}`;
-}
-
 /** Every problem of a topic, and the computations of the effects that could be computed. */
 export interface TopicCheck {
   readonly problems: Problem[];
-  readonly computed: Map<string, EffectComputation>;
+  /** Keyed by the effect entry of the topic itself. */
+  readonly computed: Map<OptionEffect, EffectComputation>;
 }
 
 function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, index: number): void {
@@ -108,7 +104,7 @@ function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, in
         per: 100,
         field: `${effectField}.effect`,
       });
-      check.computed.set(computationKey(outcome.id, option.id), computation);
+      check.computed.set(entry, computation);
     });
   });
   for (const option of topic.options) {
