@@ -18,9 +18,11 @@ export function rangeCase(comparison: number, range: { readonly lower: number; r
   if (fewest === 0 && most === 0) return { variant: 'no-change' };
   if (fewest >= 0) return fewest === most ? { variant: 'narrow', direction: 'fewer', count: most } : { variant: 'avoid', low: fewest, high: most };
   if (most <= 0) {
-    return fewest === most ? { variant: 'narrow', direction: 'more', count: -fewest } : { variant: 'get', low: -most, high: -fewest };
+    return fewest === most
+      ? { variant: 'narrow', direction: 'more', count: Math.abs(fewest) }
+      : { variant: 'get', low: Math.abs(most), high: Math.abs(fewest) };
   }
-  return { variant: 'either', fewer: most, more: -fewest };
+  return { variant: 'either', fewer: most, more: Math.abs(fewest) };
 }
 
 const rangeNumbers = (found: RangeCase): Record<string, number> => {

@@ -7,6 +7,9 @@
 import type { Certainty, Importance } from '../../../src/core/topic/topic.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../../src/core/topic/topic-result.ts';
 import type { Denominator } from '../../../src/core/types.ts';
+import { topicWording } from '../../../src/core/wording/topic-wording.ts';
+import type { TopicWording } from '../../../src/core/wording/topic-wording.ts';
+import type { SentenceKind, WordingSentence } from '../../../src/core/wording/wording-sentence.ts';
 
 export interface OptionSpec {
   readonly id: string;
@@ -70,8 +73,8 @@ export function optionFixture(spec: OptionSpec, denominator: Denominator): Optio
       free: denominator - high,
     },
     notices: [],
-    certainty: isComparison ? null : (spec.certainty ?? 'high'),
-    importance: isComparison ? null : (spec.importance ?? 'important'),
+    certainty: isComparison ? null : spec.certainty === undefined ? 'high' : spec.certainty,
+    importance: isComparison ? null : spec.importance === undefined ? 'important' : spec.importance,
     source: 'Illustrative, invented for tests',
   };
 }
@@ -144,4 +147,26 @@ export function numbersIn(text: string, names: readonly string[] = []): number[]
 /** Every "1 in N" written in a text, as the N. */
 export function oneInDenominators(text: string): number[] {
   return [...text.matchAll(/(?<![\d.])1 in (\d+)/g)].map((match) => Number(match[1]));
+}
+
+/** The sentences about one option (by id) of one outcome (the first unless named). */
+export function sentencesOf(
+  wording: TopicWording,
+  optionId: string,
+  outcomeId?: string,
+): readonly WordingSentence[] {
+  const outcome = outcomeId === undefined ? wording.outcomes[0] : wording.outcomes.find((found) => found.outcomeId === outcomeId);
+  const option = outcome?.options.find((found) => found.optionId === optionId);
+  if (option === undefined) throw new Error(`no option ${optionId} in outcome ${outcomeId ?? '(first)'}`);
+  return option.sentences;
+}
+
+/** The one sentence of a kind about an option, or undefined. */
+export function sentenceOf(
+  result: TopicResult,
+  kind: SentenceKind,
+  optionId = 'tablet',
+  outcomeId?: string,
+): WordingSentence | undefined {
+  return sentencesOf(topicWording(result), optionId, outcomeId).find((found) => found.kind === kind);
 }
