@@ -13,6 +13,7 @@ type Command = (args: readonly string[]) => CommandOutput | Promise<CommandOutpu
 
 const COMMANDS: Readonly<Record<string, () => Promise<Command>>> = {
   compute: async () => runCompute,
+  chart: async () => (await import('./chart-command.ts')).runChart,
 };
 
 function oneLine(text: string): string {

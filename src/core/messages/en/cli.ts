@@ -25,6 +25,8 @@ export const cliMessages = {
   methodWithoutCounts: () => '--method applies to --counts only.',
   paperValue: (value: string) => `--paper "${value}" is not allowed. Use --paper a4 or --paper letter.`,
   dateValue: (value: string) => `--date "${value}" is not a date. Write it as YYYY-MM-DD, for example 2026-12-01.`,
+  chartNeedsBaseline: () =>
+    'A chart needs the risks with and without the option: give --baseline with --arr, for example --baseline 15%.',
   outNeeded: (example: string) => `Give the output file with --out, for example --out ${example}.`,
   outExtension: (value: string, extension: string) => `--out "${value}" must end in ${extension}.`,
   fileUnreadable: (path: string, reason: string) => `Cannot read the topic file "${path}": ${reason}.`,

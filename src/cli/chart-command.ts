@@ -1,0 +1,83 @@
+import { writeFileSync } from 'node:fs';
+import { computeEffect } from '../core/compute-effect.ts';
+import { english } from '../core/messages/en/index.ts';
+import type { TopicResult } from '../core/topic/topic-result.ts';
+import { outcomeChart, pairChart } from '../render/index.ts';
+import type { ChartModel } from '../render/index.ts';
+import { renderChartSvg } from '../render/node.ts';
+import type { CommandOutput } from './command-output.ts';
+import { computeTopicOrFail, refuseEffectFlags } from './compute-command.ts';
+import { EFFECT_FLAGS, effectQueryFromFlags, parsePer } from './effect-flags.ts';
+import { parseArgs, valueOf } from './parse-args.ts';
+import { topicFromArgs } from './topic-input.ts';
+import { UsageError } from './usage-error.ts';
+
+const words = english.cli;
+
+const CHART_FLAGS = {
+  ...EFFECT_FLAGS,
+  '--demo': { takesValue: false },
+  '--out': { takesValue: true, example: 'chart.svg' },
+  '--outcome': { takesValue: true, example: '"a stroke"' },
+  '--show-range': { takesValue: false },
+};
+
+/** The outcome a topic chart shows: the one named by --outcome (name or id), or the headline. */
+export function chosenOutcome(result: TopicResult, wanted: string | undefined): string {
+  if (wanted === undefined) {
+    const headline = result.outcomes.find((outcome) => outcome.isHeadline) ?? result.outcomes[0];
+    if (headline === undefined) throw new Error('a valid topic has at least one outcome');
+    return headline.outcomeId;
+  }
+  const key = wanted.trim().toLowerCase();
+  const found = result.outcomes.find((outcome) => outcome.outcomeId === wanted || outcome.name.trim().toLowerCase() === key);
+  if (found === undefined) {
+    throw new UsageError(words.outcomeUnknown(wanted, result.outcomes.map((outcome) => `"${outcome.name}"`).join(', ')));
+  }
+  return found.outcomeId;
+}
+
+/** Check --out: given, and ending in the expected extension. */
+export function outputPath(value: string | undefined, extension: string, example: string): string {
+  if (value === undefined) throw new UsageError(words.outNeeded(example));
+  if (!value.toLowerCase().endsWith(extension)) throw new UsageError(words.outExtension(value, extension));
+  return value;
+}
+
+/** Write a file, turning a failure into a one-line message. */
+export function writeOutput(path: string, contents: string | Uint8Array): void {
+  try {
+    writeFileSync(path, contents);
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : (code ?? 'write failed');
+    throw new UsageError(words.fileUnwritable(path, reason));
+  }
+}
+
+function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
+  const wanted = valueOf(args, '--outcome');
+  const topic = topicFromArgs(args);
+  if (topic !== null) {
+    refuseEffectFlags(args);
+    const result = computeTopicOrFail(topic, parsePer(args));
+    return outcomeChart(result, chosenOutcome(result, wanted));
+  }
+  const query = effectQueryFromFlags(args);
+  const result = computeEffect(query);
+  if (result.perPeople === null) throw new UsageError(words.chartNeedsBaseline());
+  const periodYears = query.periods?.targetYears ?? null;
+  const kind = result.perPeople.difference < 0 ? 'harm' : 'benefit';
+  return pairChart({ perPeople: result.perPeople, periodYears, kind, ...(wanted === undefined ? {} : { outcomeName: wanted }) });
+}
+
+/** `chancewise chart`: an SVG of the people charts for a topic's outcome or a bare effect. */
+export function runChart(args: readonly string[]): CommandOutput {
+  const parsed = parseArgs(args, CHART_FLAGS);
+  const out = outputPath(valueOf(parsed, '--out'), '.svg', 'chart.svg');
+  const model = chartModel(parsed);
+  const svg = renderChartSvg(model, { showRange: parsed.flags.has('--show-range') });
+  writeOutput(out, svg);
+  const people = model.arrays.length * model.denominator;
+  return { stdout: `Wrote ${out}: ${model.arrays.length} arrays, ${people} people.\n` };
+}
