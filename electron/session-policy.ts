@@ -1,0 +1,37 @@
+import { isAllowedRequestUrl } from './url-policy.ts';
+
+/** The part of Electron's `session` the policy sets. */
+export interface PolicySession {
+  setPermissionRequestHandler(handler: (contents: unknown, permission: string, callback: (granted: boolean) => void) => void): void;
+  setPermissionCheckHandler(handler: () => boolean): void;
+  setDevicePermissionHandler(handler: () => boolean): void;
+  setSpellCheckerEnabled(enabled: boolean): void;
+  webRequest: {
+    onBeforeRequest(listener: (details: { url: string }, callback: (response: { cancel: boolean }) => void) => void): void;
+  };
+  on(event: 'will-download', listener: (event: { preventDefault(): void }, item: { getURL(): string }) => void): unknown;
+}
+
+/**
+ * Apply the app's session rules: every permission request and check is denied (camera,
+ * microphone, location, notifications, USB, HID, serial, clipboard reading, and all the rest);
+ * the spellchecker is off (it would download dictionaries); every request outside the
+ * app's own files (http, https, ws, file...) is cancelled; a download is allowed only of a
+ * blob or data address made by the app's own page.
+ */
+export function applySessionPolicy(session: PolicySession): void {
+  session.setPermissionRequestHandler((_contents, _permission, callback) => {
+    callback(false);
+  });
+  session.setPermissionCheckHandler(() => false);
+  session.setDevicePermissionHandler(() => false);
+  session.setSpellCheckerEnabled(false);
+  session.webRequest.onBeforeRequest((details, callback) => {
+    callback({ cancel: !isAllowedRequestUrl(details.url) });
+  });
+  session.on('will-download', (event, item) => {
+    const url = item.getURL();
+    const own = url.startsWith('blob:') || url.startsWith('data:') ? isAllowedRequestUrl(url) : false;
+    if (!own) event.preventDefault();
+  });
+}

@@ -1,0 +1,457 @@
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import { app, BrowserWindow, dialog, Menu, screen } from 'electron';
+import type { WebContents } from 'electron';
+import { APP_ENTRY_URL } from './app-origin.ts';
+import { buildMenuTemplate } from './application-menu.ts';
+import { writeFileAtomic } from './atomic-write.ts';
+import { chooseRecoverySnapshot } from './choose-recovery-snapshot.ts';
+import type { SnapshotCandidate, ValidSnapshotCandidate } from './choose-recovery-snapshot.ts';
+import { respondToRendererGone } from './crash-recovery.ts';
+import { COMMAND_CHANNEL, DOCUMENT_CHANNEL } from './ipc-contract.ts';
+import type {
+  ExportedHandout,
+  HandoutPdfRequest,
+  IncomingDocument,
+  OpenedDocument,
+  PrintOutcome,
+  SavedDocument,
+  ShellCommand,
+  SnapshotRequest,
+  SnapshotSaved,
+} from './ipc-contract.ts';
+import type { ShellActions } from './ipc-handlers.ts';
+import { readJsonFile, writeJsonFile } from './json-file.ts';
+import { createPendingWork } from './pending-work.ts';
+import { isTopicFileText, readTopicDocument } from './read-topic-document.ts';
+import { addRecentFile, parseRecentFiles } from './recent-files.ts';
+import { saveWithBackup } from './save-with-backup.ts';
+import { ShellFailure } from './shell-messages.ts';
+import { createSnapshotStore } from './snapshot-store.ts';
+import { SAVE_DIALOG_FILTERS, OPEN_DIALOG_FILTERS, withTopicExtension } from './topic-file-type.ts';
+import { createMainWindowOptions } from './window-options.ts';
+import { fitWindowToDisplays, parseWindowState } from './window-state.ts';
+import type { WindowState } from './window-state.ts';
+
+/** What the controller is started with. */
+export interface ShellControllerSettings {
+  /** The folder holding package.json, dist/ and dist-electron/ (or app.asar). */
+  readonly appPath: string;
+  readonly userDataPath: string;
+  /** Topic files asked for at launch (command line, or the system before the app was ready). */
+  readonly launchFiles: readonly string[];
+  readonly log: (line: string) => void;
+}
+
+/** The running shell: its one window, the open topic, and the actions behind every IPC channel. */
+export interface ShellController {
+  readonly actions: ShellActions<WebContents>;
+  isOwnContents(contents: unknown): contents is WebContents;
+  /** Open a topic file the system handed over (a second launch, a file opened from the desktop). */
+  openFromSystem(filePath: string): void;
+  /** Bring the window to the front (a second launch). */
+  focus(): void;
+  /** Resolves once pending writes (snapshots, window state) have finished. */
+  flush(): Promise<void>;
+  /** Load the app page into the window (after the IPC handlers know the controller). */
+  load(): Promise<void>;
+}
+
+interface OpenTopic {
+  filePath: string | null;
+  /** The file's modification time after the last open or save. */
+  lastSavedAt: number | null;
+  lastSnapshot: (SnapshotRequest & { readonly savedAt: number }) | null;
+}
+
+function fileNameOf(filePath: string | null): string | null {
+  return filePath === null ? null : path.basename(filePath);
+}
+
+async function modificationTime(filePath: string | null): Promise<number | null> {
+  if (filePath === null) return null;
+  try {
+    return (await fs.stat(filePath)).mtimeMs;
+  } catch {
+    return null;
+  }
+}
+
+/** Start the shell: read remembered state, build the menu, create the main window (call `load` next). */
+export async function startShellController(settings: ShellControllerSettings): Promise<ShellController> {
+  const { log } = settings;
+  const pending = createPendingWork((error) => {
+    log(`background write failed: ${error instanceof Error ? error.message : String(error)}`);
+  });
+  const windowStatePath = path.join(settings.userDataPath, 'window-state.json');
+  const recentFilesPath = path.join(settings.userDataPath, 'recent-files.json');
+  const snapshots = createSnapshotStore({ folder: path.join(settings.userDataPath, 'snapshots') });
+  const preloadPath = path.join(settings.appPath, 'dist-electron', 'preload.cjs');
+
+  let recentFiles = parseRecentFiles(await readJsonFile(recentFilesPath));
+  const topic: OpenTopic = { filePath: null, lastSavedAt: null, lastSnapshot: null };
+  const outbox: IncomingDocument[] = [];
+  const crashTimes: number[] = [];
+  let rendererReady = false;
+  let startupDone = false;
+  let closeConfirmed = false;
+  let closeAfterSave = false;
+  let saving: Promise<unknown> = Promise.resolve();
+
+  const candidates: SnapshotCandidate[] = await Promise.all(
+    (await snapshots.list()).map(async (stored) => ({
+      name: stored.name,
+      record: stored.record,
+      documentSavedAt: await modificationTime(stored.record?.documentPath ?? null),
+    })),
+  );
+  const recovery: ValidSnapshotCandidate | null = chooseRecoverySnapshot(candidates);
+  if (recovery === null && candidates.length > 0) await snapshots.clear();
+
+  const state: WindowState | null = parseWindowState(await readJsonFile(windowStatePath));
+  const workAreas = [screen.getPrimaryDisplay(), ...screen.getAllDisplays()].map((display) => display.workArea);
+  const bounds = fitWindowToDisplays(state, workAreas);
+  const window = new BrowserWindow(createMainWindowOptions({ preloadPath, bounds, devTools: !app.isPackaged }));
+  if (state?.isMaximized === true) window.maximize();
+
+  const isOwnContents = (contents: unknown): contents is WebContents =>
+    !window.isDestroyed() && contents === window.webContents;
+
+  const updateTitle = (): void => {
+    if (window.isDestroyed()) return;
+    const name = fileNameOf(topic.filePath);
+    window.setTitle(name === null ? 'Chancewise' : `${name} — Chancewise`);
+    if (topic.filePath !== null) window.setRepresentedFilename(topic.filePath);
+  };
+
+  const sendCommand = (command: ShellCommand): void => {
+    if (!window.isDestroyed() && rendererReady) window.webContents.send(COMMAND_CHANNEL, command);
+  };
+
+  const deliver = (document: IncomingDocument): void => {
+    if (!window.isDestroyed() && rendererReady) window.webContents.send(DOCUMENT_CHANNEL, document);
+    else outbox.push(document);
+  };
+
+  const rebuildMenu = (): void => {
+    const template = buildMenuTemplate({
+      platform: process.platform,
+      recentFiles,
+      sendCommand,
+      clearRecentFiles: () => {
+        recentFiles = [];
+        app.clearRecentDocuments();
+        void pending.track(writeJsonFile(recentFilesPath, recentFiles));
+        rebuildMenu();
+      },
+      showAbout: () => {
+        app.showAboutPanel();
+      },
+    });
+    Menu.setApplicationMenu(Menu.buildFromTemplate(template));
+  };
+
+  const rememberRecent = (filePath: string): void => {
+    recentFiles = addRecentFile(recentFiles, filePath);
+    app.addRecentDocument(filePath);
+    void pending.track(writeJsonFile(recentFilesPath, recentFiles));
+    rebuildMenu();
+  };
+
+  const takeOn = async (filePath: string): Promise<OpenedDocument> => {
+    const document = await readTopicDocument(filePath);
+    topic.filePath = filePath;
+    topic.lastSavedAt = document.modifiedAt;
+    topic.lastSnapshot = null;
+    await snapshots.clear();
+    rememberRecent(filePath);
+    updateTitle();
+    return { text: document.text, fileName: path.basename(filePath) };
+  };
+
+  const openFromSystem = (filePath: string): void => {
+    void takeOn(filePath).then(
+      (opened) => {
+        deliver({ kind: 'file', text: opened.text, fileName: opened.fileName });
+      },
+      (error: unknown) => {
+        const message = error instanceof Error ? error.message : String(error);
+        log(`could not open ${filePath}: ${message}`);
+        void dialog.showMessageBox(window, { type: 'error', message: `Could not open ${path.basename(filePath)}`, detail: message });
+      },
+    );
+  };
+
+  const writeDocument = (filePath: string, text: string): Promise<SavedDocument> => {
+    const run = saving.then(async () => {
+      try {
+        await saveWithBackup(filePath, text);
+      } catch (error) {
+        throw new ShellFailure('write-failed', error instanceof Error ? error.message : undefined);
+      }
+      topic.filePath = filePath;
+      topic.lastSavedAt = (await modificationTime(filePath)) ?? Date.now();
+      if (topic.lastSnapshot !== null) topic.lastSnapshot = { ...topic.lastSnapshot, hasUnsavedChanges: false };
+      await snapshots.clear();
+      rememberRecent(filePath);
+      updateTitle();
+      window.setDocumentEdited(false);
+      if (closeAfterSave) {
+        closeAfterSave = false;
+        closeConfirmed = true;
+        setImmediate(() => {
+          if (!window.isDestroyed()) window.close();
+        });
+      }
+      return { fileName: path.basename(filePath), savedAt: topic.lastSavedAt };
+    });
+    saving = run.catch(() => undefined);
+    return run;
+  };
+
+  const askSavePath = async (): Promise<string | null> => {
+    const suggested = topic.filePath ?? path.join(app.getPath('documents'), 'topic.cwtopic');
+    const answer = await dialog.showSaveDialog(window, {
+      title: 'Save topic',
+      defaultPath: suggested,
+      filters: SAVE_DIALOG_FILTERS,
+      properties: ['showOverwriteConfirmation', 'createDirectory'],
+    });
+    if (answer.canceled || answer.filePath === undefined || answer.filePath === '') return null;
+    return withTopicExtension(answer.filePath);
+  };
+
+  const saveAs = async (text: string): Promise<SavedDocument | null> => {
+    if (!isTopicFileText(text)) throw new ShellFailure('not-a-topic-file');
+    const filePath = await askSavePath();
+    if (filePath === null) {
+      closeAfterSave = false;
+      return null;
+    }
+    return writeDocument(filePath, text);
+  };
+
+  const offerRecovery = async (candidate: ValidSnapshotCandidate): Promise<boolean> => {
+    const when = new Date(candidate.record.savedAt).toLocaleString();
+    const name = fileNameOf(candidate.record.documentPath) ?? 'an unsaved topic';
+    const skipped = settings.launchFiles.length > 0 ? ` If you restore them, ${path.basename(settings.launchFiles[0] ?? '')} is not opened.` : '';
+    const answer = await dialog.showMessageBox(window, {
+      type: 'question',
+      buttons: ['Restore', 'Discard'],
+      defaultId: 0,
+      cancelId: 1,
+      message: 'Chancewise closed before your last changes were saved.',
+      detail: `Restore the changes to ${name} from ${when}?${skipped}`,
+    });
+    return answer.response === 0;
+  };
+
+  const runStartup = async (): Promise<void> => {
+    if (recovery !== null && (await offerRecovery(recovery))) {
+      const { record } = recovery;
+      topic.filePath = record.documentPath;
+      topic.lastSavedAt = recovery.documentSavedAt;
+      topic.lastSnapshot = { content: record.content, keepPatient: record.keepsPatient, hasUnsavedChanges: true, savedAt: record.savedAt };
+      updateTitle();
+      deliver({ kind: 'snapshot', content: record.content, reason: 'unexpected-exit', fileName: fileNameOf(record.documentPath) });
+      return;
+    }
+    if (recovery !== null) await snapshots.clear();
+    const first = settings.launchFiles[0];
+    if (first !== undefined) openFromSystem(first);
+  };
+
+  const actions: ShellActions<WebContents> = {
+    async rendererReady() {
+      rendererReady = true;
+      if (!startupDone) {
+        startupDone = true;
+        await runStartup();
+      }
+      for (const document of outbox.splice(0)) deliver(document);
+      return null;
+    },
+    async newDocument() {
+      topic.filePath = null;
+      topic.lastSavedAt = null;
+      topic.lastSnapshot = null;
+      await snapshots.clear();
+      updateTitle();
+      window.setDocumentEdited(false);
+      return null;
+    },
+    async openDocument() {
+      const answer = await dialog.showOpenDialog(window, {
+        title: 'Open topic',
+        filters: OPEN_DIALOG_FILTERS,
+        properties: ['openFile'],
+        ...(topic.filePath === null ? {} : { defaultPath: path.dirname(topic.filePath) }),
+      });
+      const chosen = answer.filePaths[0];
+      if (answer.canceled || chosen === undefined) return null;
+      return takeOn(chosen);
+    },
+    async openRecentDocument(_sender, recentPath) {
+      if (!recentFiles.includes(recentPath)) throw new ShellFailure('not-in-recent-list');
+      try {
+        return await takeOn(recentPath);
+      } catch (error) {
+        if (error instanceof ShellFailure && error.code === 'read-failed') {
+          recentFiles = recentFiles.filter((item) => item !== recentPath);
+          void pending.track(writeJsonFile(recentFilesPath, recentFiles));
+          rebuildMenu();
+        }
+        throw error;
+      }
+    },
+    async saveDocument(_sender, text) {
+      if (!isTopicFileText(text)) throw new ShellFailure('not-a-topic-file');
+      if (topic.filePath === null) return saveAs(text);
+      return writeDocument(topic.filePath, text);
+    },
+    saveDocumentAs: (_sender, text) => saveAs(text),
+    async saveSnapshot(_sender, snapshot): Promise<SnapshotSaved> {
+      const savedAt = Date.now();
+      topic.lastSnapshot = { ...snapshot, savedAt };
+      window.setDocumentEdited(snapshot.hasUnsavedChanges);
+      if (snapshot.hasUnsavedChanges) {
+        await pending.track(
+          snapshots.write({ content: snapshot.content, keepPatient: snapshot.keepPatient, documentPath: topic.filePath, savedAt }),
+        );
+      } else {
+        await pending.track(snapshots.clear());
+      }
+      return { savedAt };
+    },
+    async exportHandoutPdf(_sender, request: HandoutPdfRequest): Promise<ExportedHandout | null> {
+      const name = request.suggestedName.toLowerCase().endsWith('.pdf') ? request.suggestedName : `${request.suggestedName}.pdf`;
+      const answer = await dialog.showSaveDialog(window, {
+        title: 'Export handout',
+        defaultPath: path.join(app.getPath('documents'), name),
+        filters: [{ name: 'PDF document', extensions: ['pdf'] }],
+        properties: ['showOverwriteConfirmation', 'createDirectory'],
+      });
+      if (answer.canceled || answer.filePath === undefined || answer.filePath === '') return null;
+      const target = answer.filePath.toLowerCase().endsWith('.pdf') ? answer.filePath : `${answer.filePath}.pdf`;
+      try {
+        await writeFileAtomic(target, request.bytes);
+      } catch (error) {
+        throw new ShellFailure('write-failed', error instanceof Error ? error.message : undefined);
+      }
+      return { fileName: path.basename(target) };
+    },
+    printHandout(sender): Promise<PrintOutcome> {
+      return new Promise((resolve, reject) => {
+        sender.print({ printBackground: true }, (success, failureReason) => {
+          if (success) resolve({ printed: true });
+          else if (failureReason === 'cancelled' || failureReason === 'Print job canceled') resolve({ printed: false });
+          else reject(new ShellFailure('print-failed', failureReason));
+        });
+      });
+    },
+  };
+
+  const rememberWindowState = (): void => {
+    if (window.isDestroyed()) return;
+    const normal = window.getNormalBounds();
+    void pending.track(writeJsonFile(windowStatePath, { ...normal, isMaximized: window.isMaximized() }));
+  };
+  let stateTimer: NodeJS.Timeout | null = null;
+  const rememberSoon = (): void => {
+    if (stateTimer !== null) clearTimeout(stateTimer);
+    stateTimer = setTimeout(rememberWindowState, 750);
+  };
+  window.on('resize', rememberSoon);
+  window.on('move', rememberSoon);
+
+  window.on('page-title-updated', (event) => {
+    event.preventDefault();
+  });
+  window.once('ready-to-show', () => {
+    window.show();
+  });
+
+  window.on('close', (event) => {
+    if (stateTimer !== null) clearTimeout(stateTimer);
+    rememberWindowState();
+    if (closeConfirmed || topic.lastSnapshot?.hasUnsavedChanges !== true) return;
+    event.preventDefault();
+    void dialog
+      .showMessageBox(window, {
+        type: 'question',
+        buttons: ['Save…', 'Close without saving', 'Cancel'],
+        defaultId: 0,
+        cancelId: 2,
+        message: 'Save the changes to this topic before closing?',
+        detail: 'If you close without saving, the changes are lost.',
+      })
+      .then(async (answer) => {
+        if (answer.response === 0) {
+          closeAfterSave = true;
+          sendCommand({ name: 'save' });
+        } else if (answer.response === 1) {
+          closeConfirmed = true;
+          await snapshots.clear();
+          if (!window.isDestroyed()) window.close();
+        }
+      });
+  });
+
+  window.webContents.on('render-process-gone', (_event, details) => {
+    const now = Date.now();
+    const response = respondToRendererGone(details.reason, crashTimes, now);
+    log(`renderer gone (${details.reason}, exit code ${details.exitCode}): ${response}`);
+    if (response === 'ignore') return;
+    crashTimes.push(now);
+    rendererReady = false;
+    if (response === 'give-up') {
+      dialog.showErrorBox(
+        'Chancewise stopped working',
+        'The window stopped several times in a row. Your last changes are kept and will be offered when Chancewise starts again.',
+      );
+      closeConfirmed = true;
+      app.quit();
+      return;
+    }
+    outbox.length = 0;
+    const last = topic.lastSnapshot;
+    if (last !== null) {
+      outbox.push({ kind: 'snapshot', content: last.content, reason: 'renderer-crashed', fileName: fileNameOf(topic.filePath) });
+    } else if (topic.filePath !== null) {
+      const filePath = topic.filePath;
+      void readTopicDocument(filePath).then(
+        (document) => {
+          deliver({ kind: 'file', text: document.text, fileName: path.basename(filePath) });
+        },
+        () => undefined,
+      );
+    }
+    void window.loadURL(APP_ENTRY_URL);
+  });
+
+  window.webContents.on('unresponsive', () => {
+    log('renderer unresponsive');
+  });
+
+  rebuildMenu();
+  updateTitle();
+  app.setAboutPanelOptions({
+    applicationName: 'Chancewise',
+    applicationVersion: app.getVersion(),
+    credits: 'Absolute risks, icon arrays and a one-page handout, offline.',
+  });
+
+  return {
+    load: () => window.loadURL(APP_ENTRY_URL),
+    actions,
+    isOwnContents,
+    openFromSystem,
+    focus() {
+      if (window.isDestroyed()) return;
+      if (window.isMinimized()) window.restore();
+      window.show();
+      window.focus();
+    },
+    flush: () => pending.settled(),
+  };
+}

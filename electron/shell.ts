@@ -1,0 +1,111 @@
+import fs from 'node:fs/promises';
+import path from 'node:path';
+import { app, ipcMain, protocol, session, shell } from 'electron';
+import { APP_SCHEME } from './app-origin.ts';
+import { hardenWebContents } from './harden-web-contents.ts';
+import { registerIpcHandlers } from './ipc-handlers.ts';
+import { EXTERNAL_LINK_HOSTS, openExternalSafely } from './open-external.ts';
+import { prepareBeforeReady } from './prepare-before-ready.ts';
+import { createAppAssetHandler } from './serve-app-asset.ts';
+import { applySessionPolicy } from './session-policy.ts';
+import { startShellController } from './shell-controller.ts';
+import type { ShellController } from './shell-controller.ts';
+import { topicPathFromCommandLine } from './topic-file-type.ts';
+
+function createLog(): (line: string) => void {
+  let folder: string | null = null;
+  return (line) => {
+    const stamped = `${new Date().toISOString()} ${line}\n`;
+    process.stderr.write(`[chancewise] ${stamped}`);
+    try {
+      folder ??= app.getPath('logs');
+      void fs.mkdir(folder, { recursive: true }).then(() => fs.appendFile(path.join(folder ?? '.', 'main.log'), stamped));
+    } catch {
+      // The log file is a convenience; standard error already has the line.
+    }
+  };
+}
+
+/** Run the desktop shell: called once from the main entry inside Electron. */
+export function runShell(): void {
+  const log = createLog();
+  if (!prepareBeforeReady(app, protocol, process.env)) {
+    app.quit();
+    return;
+  }
+
+  let controller: ShellController | null = null;
+  const waitingFiles: string[] = [];
+  const launchFile = topicPathFromCommandLine(process.argv, process.cwd(), app.isPackaged);
+  if (launchFile !== null) waitingFiles.push(launchFile);
+
+  const openLink = (url: string): void => {
+    void openExternalSafely(url, { allowedHosts: EXTERNAL_LINK_HOSTS, openExternal: (address) => shell.openExternal(address) }).then(
+      (opened) => {
+        if (!opened) log(`refused to open ${url.slice(0, 200)}`);
+      },
+    );
+  };
+
+  app.on('will-finish-launching', () => {
+    app.on('open-file', (event, filePath) => {
+      event.preventDefault();
+      if (controller === null) waitingFiles.push(filePath);
+      else controller.openFromSystem(filePath);
+    });
+  });
+  app.on('second-instance', (_event, argv, workingDirectory) => {
+    if (controller === null) return;
+    controller.focus();
+    const filePath = topicPathFromCommandLine(argv, workingDirectory, app.isPackaged);
+    if (filePath !== null) controller.openFromSystem(filePath);
+  });
+  app.on('web-contents-created', (_event, contents) => {
+    hardenWebContents(contents, openLink);
+  });
+  app.on('window-all-closed', () => {
+    app.quit();
+  });
+  let flushed = false;
+  app.on('will-quit', (event) => {
+    if (flushed || controller === null) return;
+    event.preventDefault();
+    void controller.flush().finally(() => {
+      flushed = true;
+      app.quit();
+    });
+  });
+
+  void app
+    .whenReady()
+    .then(async () => {
+      applySessionPolicy(session.defaultSession);
+      protocol.handle(
+        APP_SCHEME,
+        createAppAssetHandler({
+          appFolder: path.join(app.getAppPath(), 'dist'),
+          fileSystem: { lstat: (filePath) => fs.lstat(filePath), readFile: (filePath) => fs.readFile(filePath) },
+        }),
+      );
+      const started = await startShellController({
+        appPath: app.getAppPath(),
+        userDataPath: app.getPath('userData'),
+        launchFiles: waitingFiles.splice(0),
+        log,
+      });
+      registerIpcHandlers(ipcMain, {
+        isOwnContents: started.isOwnContents,
+        actions: started.actions,
+        report: (channel, code, detail) => {
+          log(`${channel}: ${code} (${detail.slice(0, 300)})`);
+        },
+      });
+      controller = started;
+      for (const filePath of waitingFiles.splice(0)) started.openFromSystem(filePath);
+      await started.load();
+    })
+    .catch((error: unknown) => {
+      log(`start-up failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+      app.exit(1);
+    });
+}
