@@ -60,8 +60,9 @@ function parsePercent(input: string, field: string): number {
 export function parseLevel(input: string, field = '--level'): number {
   const trimmed = input.trim();
   const values = { input: trimmed };
+  // 99.9 / 100 is 0.9990000000000001 in binary; 12 significant digits give back 0.999.
   const value = trimmed.endsWith('%')
-    ? readNumber(trimmed.slice(0, -1), field, 'level-out-of-range', values) / 100
+    ? Number((readNumber(trimmed.slice(0, -1), field, 'level-out-of-range', values) / 100).toPrecision(12))
     : readNumber(trimmed, field, 'level-out-of-range', values);
   if (!(value > 0.5 && value <= 0.999)) fail('level-out-of-range', field, values);
   return value;

@@ -2,6 +2,7 @@ import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'nod
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { main } from '../../src/cli/main.ts';
 import { ROOT, run } from './support.ts';
 
 // Every refusal follows the command-line contract of Chancewise (common practice for Unix tools):
@@ -168,6 +169,20 @@ describe('chancewise outside the compute command', () => {
     for (const form of ['--baseline RISK', '--counts EVENTS/TOTAL,EVENTS/TOTAL', 'TOPIC-FILE | --demo']) {
       expect(found.stdout).toContain(form);
     }
+  });
+
+  it('exits 1 with one line when something other than the input fails', async () => {
+    let stderr = '';
+    const code = await main(['compute', '--baseline', '30%', '--rr', '0.8'], {
+      stdout: () => {
+        throw new Error('the output stream is closed');
+      },
+      stderr: (text) => {
+        stderr += text;
+      },
+    });
+    expect(code).toBe(1);
+    expect(stderr.trimEnd().split('\n')).toEqual(['Chancewise failed unexpectedly: the output stream is closed']);
   });
 
   it('prints the usage for compute --help instead of computing', async () => {

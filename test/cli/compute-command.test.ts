@@ -131,6 +131,13 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     const percent = await computeJson(['--baseline', '20%', '--rr', '0.75', '--ci', '0.6,0.9', '--level', '95%']);
     expect(percent).toEqual(decimal);
   });
+
+  it('accepts the highest level, 99.9%, written either way', async () => {
+    // 99.9 / 100 is 0.9990000000000001 in binary floating point (common practice: compare decimals).
+    const decimal = await computeJson(['--counts', '5/10,3/10', '--level', '0.999']);
+    const percent = await computeJson(['--counts', '5/10,3/10', '--level', '99.9%']);
+    expect(percent).toEqual(decimal);
+  });
 });
 
 describe('chancewise compute converts the baseline between periods', () => {
