@@ -64,12 +64,12 @@ export function greyscale(hex: string): string {
   return hexFromChannels([level, level, level]);
 }
 
-/** CIE 1976 L*a*b* of an sRGB colour (D65 white). */
+/** CIE 1976 L*a*b* of an sRGB colour (D65 white; sRGB-to-XYZ matrix of IEC 61966-2-1 to 7 digits). */
 export function cielab(hex: string): [number, number, number] {
   const [red, green, blue] = hexChannels(hex).map((channel) => linearChannel(channel / 255)) as [number, number, number];
-  const x = (0.4124 * red + 0.3576 * green + 0.1805 * blue) / 0.95047;
-  const y = 0.2126 * red + 0.7152 * green + 0.0722 * blue;
-  const z = (0.0193 * red + 0.1192 * green + 0.9505 * blue) / 1.08883;
+  const x = (0.4124564 * red + 0.3575761 * green + 0.1804375 * blue) / 0.95047;
+  const y = 0.2126729 * red + 0.7151522 * green + 0.072175 * blue;
+  const z = (0.0193339 * red + 0.119192 * green + 0.9503041 * blue) / 1.08883;
   const bend = (value: number) => (value > 216 / 24389 ? Math.cbrt(value) : (24389 / 27 * value + 16) / 116);
   const [fx, fy, fz] = [bend(x), bend(y), bend(z)];
   return [116 * fy - 16, 500 * (fx - fy), 200 * (fy - fz)];

@@ -12,8 +12,9 @@ const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
 export function chartSvgString(model: ChartModel, document: Document, options: SvgChartOptions = {}): string {
   const svg = document.createElementNS(SVG_NAMESPACE, 'svg');
   drawChart(svg, model, options);
-  const Serializer = document.defaultView?.XMLSerializer;
+  const Serializer = document.defaultView?.XMLSerializer ?? globalThis.XMLSerializer;
   if (Serializer !== undefined) return new Serializer().serializeToString(svg);
-  svg.setAttribute('xmlns', SVG_NAMESPACE);
-  return svg.outerHTML;
+  // A document with no window (for example one made by DOMParser in jsdom): its own serialiser.
+  const text = svg.outerHTML;
+  return text.startsWith('<svg xmlns=') ? text : text.replace('<svg', `<svg xmlns="${SVG_NAMESPACE}"`);
 }

@@ -1,0 +1,111 @@
+import { describe, expect, it } from 'vitest';
+import { outcomeChart, pairChart } from '../../src/render/chart-model.ts';
+import { topicFixture } from './topic-fixture.ts';
+
+describe('outcomeChart', () => {
+  const result = topicFixture();
+
+  it('draws the comparison first, then the option, per the topic’s one denominator', () => {
+    const model = outcomeChart(result, 'stroke');
+    expect(model.arrays.map((array) => array.name)).toEqual(['No treatment', 'Option A']);
+    expect(model.arrays.every((array) => array.layout.denominator === 100)).toBe(true);
+    expect(model.denominator).toBe(100);
+  });
+
+  it('titles each array with the group, the option and the period', () => {
+    const model = outcomeChart(result, 'stroke');
+    expect(model.heading).toBe('Chance of a stroke over 10 years');
+    expect(model.arrays[0]!.title).toBe('If 100 people like you have no treatment for 10 years');
+    expect(model.arrays[1]!.title).toBe('If 100 people like you take option A for 10 years');
+  });
+
+  // Invented illustrative numbers (19 without, 15 with, per 100): groups from peopleGroups.
+  it('labels every group drawn with its count', () => {
+    const model = outcomeChart(result, 'stroke');
+    expect(model.arrays[0]!.labels.map((label) => label.text)).toEqual(['19 have a stroke', '81 do not have a stroke']);
+    expect(model.arrays[1]!.labels.map((label) => label.text)).toEqual([
+      '15 have a stroke anyway',
+      '4 avoid a stroke because of option A',
+      '81 do not have a stroke',
+    ]);
+  });
+
+  it('labels a harm as people who get it because of the option', () => {
+    const model = outcomeChart(result, 'muscle-pain');
+    expect(model.kind).toBe('harm');
+    expect(model.arrays[1]!.labels.map((label) => label.text)).toEqual([
+      '3 have muscle pain anyway',
+      '2 get muscle pain because of option A',
+      '95 do not have muscle pain',
+    ]);
+  });
+
+  it('states the option’s interval as people and which ranks it makes uncertain', () => {
+    const range = outcomeChart(result, 'stroke').arrays[1]!.range!;
+    expect(range.text).toBe('With option A, the number who have a stroke could be anywhere between 12 and 18 of these 100.');
+    expect(range.uncertain).toEqual({ from: 12, to: 18 });
+    expect(outcomeChart(result, 'stroke').arrays[0]!.range).toBeNull();
+  });
+
+  it('repeats every count in the text alternative', () => {
+    const { description, sentences } = outcomeChart(result, 'stroke');
+    for (const count of ['19 have', '81 do not', '15 have', '4 avoid', 'between 12 and 18']) expect(description).toContain(count);
+    expect(description).toContain('Illustrative example');
+    expect(sentences).toHaveLength(3);
+  });
+
+  it('says so when an option changes nothing at these numbers', () => {
+    const same = topicFixture(100, { comparison: 20, intervention: 20, range: null });
+    const array = outcomeChart(same, 'stroke').arrays[1]!;
+    expect(array.labels.map((label) => label.group)).toEqual(['event', 'free']);
+    expect(array.note).toBe('The same number have a stroke with and without option A.');
+  });
+
+  it('works per 1000 when the topic is per 1000', () => {
+    const thousand = topicFixture(1000, { comparison: 125, intervention: 94 });
+    const model = outcomeChart(thousand, 'stroke');
+    expect(model.arrays[1]!.groups).toEqual({ denominator: 1000, event: 94, prevented: 31, caused: 0, free: 875 });
+    expect(model.arrays[1]!.title).toBe('If 1000 people like you take option A for 10 years');
+  });
+
+  it('rejects an unknown outcome or option', () => {
+    expect(() => outcomeChart(result, 'falls')).toThrow(RangeError);
+    expect(() => outcomeChart(result, 'stroke', { optionIds: ['b'] })).toThrow(RangeError);
+  });
+
+  it('passes the arrangement and seed on to every array', () => {
+    const model = outcomeChart(result, 'stroke', { arrangement: 'scattered', seed: 5 });
+    expect(model.arrangement).toBe('scattered');
+    expect(model.arrays.every((array) => array.layout.seed === 5)).toBe(true);
+  });
+});
+
+describe('pairChart', () => {
+  // C4-style arithmetic: baseline 20%, RR 0.75 gives 0.20 × 0.75 = 15% (risk-communication C4,
+  // "RR: p1 = p0·RR"); per 100: 20 without, 15 with.
+  const perPeople = { denominator: 100 as const, comparison: 20, intervention: 15, difference: 5, interventionRange: null };
+
+  it('names the arms “Without the option” and “With the option”', () => {
+    const model = pairChart({ perPeople });
+    expect(model.arrays.map((array) => array.name)).toEqual(['Without the option', 'With the option']);
+    expect(model.arrays[0]!.groups).toEqual({ denominator: 100, event: 20, prevented: 0, caused: 0, free: 80 });
+    expect(model.arrays[1]!.groups).toEqual({ denominator: 100, event: 15, prevented: 5, caused: 0, free: 80 });
+  });
+
+  it('uses the period in the titles when one is given', () => {
+    expect(pairChart({ perPeople, periodYears: 5 }).arrays.map((array) => array.title)).toEqual([
+      '100 people like you without the option, over 5 years',
+      '100 people like you with the option, over 5 years',
+    ]);
+    expect(pairChart({ perPeople }).arrays[1]!.title).toBe('100 people like you with the option');
+  });
+
+  it('labels the groups with “the outcome” unless it is named', () => {
+    expect(pairChart({ perPeople }).arrays[1]!.labels.map((label) => label.text)).toEqual([
+      '15 have the outcome anyway',
+      '5 avoid the outcome because of the option',
+      '80 do not have the outcome',
+    ]);
+    expect(pairChart({ perPeople, outcomeName: 'a fracture' }).arrays[1]!.labels[1]!.text).toBe('5 avoid a fracture because of the option');
+  });
+});

@@ -1,0 +1,53 @@
+import { describe, expect, it } from 'vitest';
+import { chartMessagesEn as messages } from '../../../src/render/messages/en.ts';
+
+describe('chartMessagesEn', () => {
+  // IPDAS (Elwyn et al. 2006; IPDASi items on probabilities): each graphic names the option,
+  // the outcome, the group and the period ("If 100 people like you take tablet A for 10 years").
+  it('titles an option’s array with the group, the option and the period', () => {
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 10 })).toBe(
+      'If 100 people like you take option A for 10 years',
+    );
+  });
+
+  it('titles the comparison with its own name', () => {
+    expect(messages.comparisonTitle({ denominator: 100, option: 'No treatment', periodYears: 10 })).toBe(
+      'If 100 people like you have no treatment for 10 years',
+    );
+  });
+
+  it('keeps acronyms as written and writes short periods in months', () => {
+    expect(messages.optionTitle({ denominator: 1000, option: 'ACE inhibitor', periodYears: 0.5 })).toBe(
+      'If 1000 people like you take ACE inhibitor for 6 months',
+    );
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('If 100 people like you take option A for 1 year');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('If 100 people like you take option A');
+  });
+
+  // Risk-communication R2.12: labels carry the count ("4 avoid a heart attack because of treatment").
+  it('labels each group with its count, in the singular for one person', () => {
+    const values = { outcome: 'a stroke', option: 'option A', role: 'option' as const };
+    expect(messages.labels.event({ ...values, count: 15 })).toBe('15 have a stroke anyway');
+    expect(messages.labels.event({ ...values, count: 1 })).toBe('1 has a stroke anyway');
+    expect(messages.labels.prevented({ ...values, count: 4 })).toBe('4 avoid a stroke because of option A');
+    expect(messages.labels.prevented({ ...values, count: 1 })).toBe('1 avoids a stroke because of option A');
+    expect(messages.labels.free({ ...values, count: 81 })).toBe('81 do not have a stroke');
+    expect(messages.labels.free({ ...values, count: 1 })).toBe('1 does not have a stroke');
+    expect(messages.labels.caused({ ...values, outcome: 'muscle pain', count: 2 })).toBe('2 get muscle pain because of option A');
+  });
+
+  it('drops “anyway” for the comparison, where nothing is compared', () => {
+    expect(messages.labels.event({ count: 19, outcome: 'a stroke', option: 'no treatment', role: 'comparison' })).toBe('19 have a stroke');
+  });
+
+  it('states the range as people out of the denominator', () => {
+    expect(messages.range({ lower: 3, upper: 7, denominator: 100, outcome: 'a stroke', option: 'option A' })).toBe(
+      'With option A, the number who have a stroke could be anywhere between 3 and 7 of these 100.',
+    );
+  });
+
+  it('joins the labels of an array into one sentence', () => {
+    expect(messages.summary('Title', ['a', 'b', 'c'])).toBe('Title: a, b and c.');
+    expect(messages.summary('Title', ['a'])).toBe('Title: a.');
+  });
+});

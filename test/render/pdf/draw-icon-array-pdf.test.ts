@@ -1,0 +1,127 @@
+// @vitest-environment node
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { jsPDF } from 'jspdf';
+import { describe, expect, it } from 'vitest';
+import type { PeopleGroups } from '../../../src/core/types.ts';
+import { outcomeChart } from '../../../src/render/chart-model.ts';
+import { iconArrayLayout } from '../../../src/render/icon-array-layout.ts';
+import { colourPalette } from '../../../src/render/palette.ts';
+import { drawChartPdf } from '../../../src/render/pdf/draw-chart-pdf.ts';
+import { drawIconArrayPdf } from '../../../src/render/pdf/draw-icon-array-pdf.ts';
+import { topicFixture } from '../topic-fixture.ts';
+import { paintings, pdfColour } from './pdf-content.ts';
+
+const PDFINFO = '/usr/bin/pdfinfo';
+
+function newDocument(): jsPDF {
+  const doc = new jsPDF({ unit: 'mm', format: 'a4' });
+  doc.setCreationDate(new Date(Date.UTC(2020, 0, 1)));
+  doc.setFileId('00000000000000000000000000000000');
+  return doc;
+}
+
+/** How many figures the content stream filled in each group's colour. */
+function figuresByGroup(pdf: string) {
+  const painted = paintings(pdf);
+  const count = (hex: string, operators: readonly string[]) =>
+    painted.filter((painting) => painting.fill === pdfColour(hex) && operators.includes(painting.operator)).length;
+  const { groups } = colourPalette;
+  // Solid groups are filled and stroked in one operator (B); patterned ones are filled (f),
+  // then overlaid through a clip and stroked (ISO 32000-1 §8.5.3).
+  return {
+    event: count(groups.event.fill, ['B']),
+    prevented: count(groups.prevented.fill, ['f']),
+    caused: count(groups.caused.fill, ['f']),
+    free: count(groups.free.fill, ['B']),
+  };
+}
+
+const hundred: PeopleGroups = { denominator: 100, event: 15, prevented: 5, caused: 0, free: 80 };
+const thousand: PeopleGroups = { denominator: 1000, event: 20, prevented: 0, caused: 10, free: 970 };
+
+describe('drawIconArrayPdf', () => {
+  it('draws one figure per person, in each group’s colour, for 100 and 1000 on one page', () => {
+    const doc = newDocument();
+    const first = drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 20, y: 20, width: 70 }, colourPalette);
+    const second = drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 20, y: 110, width: 170 }, colourPalette);
+    expect(first.drawn).toEqual({ event: 15, prevented: 5, caused: 0, free: 80 });
+    expect(second.drawn).toEqual({ event: 20, prevented: 0, caused: 10, free: 970 });
+    const pdf = doc.output();
+    expect(figuresByGroup(pdf)).toEqual({ event: 35, prevented: 5, caused: 10, free: 1050 });
+    expect(pdf.startsWith('%PDF-')).toBe(true);
+    expect(pdf.trimEnd().endsWith('%%EOF')).toBe(true);
+    expect(pdf.match(/\/Type \/Page\b/g)).toHaveLength(1);
+  });
+
+  it('returns the height of the grid at the width asked for', () => {
+    const doc = newDocument();
+    expect(drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 0, y: 0, width: 60 }, colourPalette).height).toBeCloseTo(60, 9);
+    // 1000: 50 cells + 4 gutters across, 20 cells + 1 gutter down.
+    expect(drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 0, y: 0, width: 162 }, colourPalette).height).toBeCloseTo(63, 9);
+  });
+
+  it('lays the dots and hatching through clipping paths, one per patterned figure', () => {
+    const doc = newDocument();
+    drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 20, y: 20, width: 170 }, colourPalette);
+    const pdf = doc.output();
+    // W n: set the clipping path, end the path without painting (ISO 32000-1 §8.5.4).
+    expect(pdf.match(/^W\r?\nn$/gm)).toHaveLength(10);
+    expect(pdf.match(/^q$/gm)?.length).toBe(pdf.match(/^Q$/gm)?.length);
+  });
+
+  it('outlines the uncertain people with a dash when asked', () => {
+    const doc = newDocument();
+    const drawing = drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 20, y: 20, width: 70 }, colourPalette, {
+      uncertain: { from: 13, to: 18 },
+    });
+    expect(drawing.outlined).toBe(5);
+    // d: set the line dash pattern (ISO 32000-1 §8.4.3.6); jsPDF resets it with an empty array.
+    expect(doc.output().match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(5);
+  });
+
+  it('gives the same bytes for the same drawing', () => {
+    const make = () => {
+      const doc = newDocument();
+      drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 20, y: 20, width: 70 }, colourPalette);
+      return doc.output();
+    };
+    expect(make()).toBe(make());
+  });
+});
+
+describe('drawChartPdf', () => {
+  it('draws the whole chart: arrays, titles and labels, on one valid page', () => {
+    const doc = newDocument();
+    const model = outcomeChart(topicFixture(), 'stroke');
+    const drawing = drawChartPdf(doc, model, { x: 15, y: 15, width: 180 }, colourPalette, { showRange: true });
+    expect(drawing.arrays.map((array) => array.drawn)).toEqual([
+      { event: 19, prevented: 0, caused: 0, free: 81 },
+      { event: 15, prevented: 4, caused: 0, free: 81 },
+    ]);
+    expect(drawing.arrays[1]!.outlined).toBe(6);
+    expect(drawing.height).toBeGreaterThan(60);
+    expect(drawing.height).toBeLessThan(267);
+    const pdf = doc.output();
+    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'If 100 people like you take option A for 10 years']) {
+      expect(pdf).toContain(`(${text}) Tj`);
+    }
+
+    if (!existsSync(PDFINFO)) {
+      console.info(`${PDFINFO} is not installed: skipping the pdfinfo check of the PDF`);
+      return;
+    }
+    const folder = mkdtempSync(join(tmpdir(), 'chart-pdf-'));
+    try {
+      const file = join(folder, 'chart.pdf');
+      writeFileSync(file, Buffer.from(doc.output('arraybuffer')));
+      const info = execFileSync(PDFINFO, [file], { encoding: 'utf8' });
+      expect(info).toMatch(/^Pages:\s+1$/m);
+      expect(info).toMatch(/^Page size:\s+595\.2\d? x 841\.8\d? pts \(A4\)$/m);
+    } finally {
+      rmSync(folder, { recursive: true, force: true });
+    }
+  });
+});

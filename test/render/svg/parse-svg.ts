@@ -1,0 +1,40 @@
+/** A shared jsdom window for renderer tests: parse SVG text, or draw into a live `<svg>`. */
+import { JSDOM } from 'jsdom';
+import type { ChartModel } from '../../../src/render/chart-model.ts';
+import { drawChart } from '../../../src/render/svg/draw-chart.ts';
+import type { SvgChartOptions } from '../../../src/render/svg/svg-chart-options.ts';
+
+const window = new JSDOM('<!DOCTYPE html><html><body></body></html>').window;
+
+/** The shared test document. */
+export const testDocument: Document = window.document;
+
+export function parseSvg(text: string): SVGSVGElement {
+  const parsed = new window.DOMParser().parseFromString(text, 'image/svg+xml');
+  const errors = parsed.getElementsByTagName('parsererror');
+  if (errors.length > 0) throw new Error(`SVG does not parse: ${errors[0]?.textContent ?? ''}`);
+  return parsed.documentElement as unknown as SVGSVGElement;
+}
+
+/** Draw a chart into a new `<svg>` in the page body. */
+export function drawIntoPage(model: ChartModel, options: SvgChartOptions = {}): SVGSVGElement {
+  const svg = testDocument.createElementNS('http://www.w3.org/2000/svg', 'svg');
+  testDocument.body.replaceChildren(svg);
+  drawChart(svg, model, options);
+  return svg;
+}
+
+/** Count `data-outcome` values under `root`. */
+export function outcomeCounts(root: Element): Record<string, number> {
+  const counts: Record<string, number> = {};
+  for (const element of root.querySelectorAll('[data-outcome]')) {
+    const group = element.getAttribute('data-outcome') ?? '';
+    counts[group] = (counts[group] ?? 0) + 1;
+  }
+  return counts;
+}
+
+/** The text of a `<text>` element, its lines joined by spaces. */
+export function lineText(element: Element): string {
+  return [...element.querySelectorAll('tspan')].map((line) => line.textContent).join(' ');
+}

@@ -1,0 +1,168 @@
+import { describe, expect, it } from 'vitest';
+import type { PersonGroup } from '../../../src/core/types.ts';
+import { type ChartModel, outcomeChart, pairChart } from '../../../src/render/chart-model.ts';
+import { blackAndWhitePalette } from '../../../src/render/palette.ts';
+import { renderChartSvg } from '../../../src/render/svg/render-chart-svg.ts';
+import { topicFixture } from '../topic-fixture.ts';
+import { drawIntoPage, lineText, outcomeCounts, parseSvg, testDocument } from './parse-svg.ts';
+
+const GROUPS: readonly PersonGroup[] = ['event', 'prevented', 'caused', 'free'];
+
+/** The counts the model says each array should draw, with zeros left out. */
+function expectedCounts(model: ChartModel, index: number): Record<string, number> {
+  const groups = model.arrays[index]!.groups;
+  return Object.fromEntries(GROUPS.filter((group) => groups[group] > 0).map((group) => [group, groups[group]]));
+}
+
+function drawnCounts(svg: SVGSVGElement, index: number): Record<string, number> {
+  return outcomeCounts(svg.querySelectorAll('g.chart-array')[index]!);
+}
+
+/** Render in the shared test document (a fresh jsdom per call is slow). */
+const render = (model: ChartModel, options: Parameters<typeof renderChartSvg>[1] = {}) =>
+  renderChartSvg(model, { document: testDocument, ...options });
+
+describe('renderChartSvg people', () => {
+  // Counts per 100 and per 1000 including risks of 0 and 1 and a difference of 0 (invented
+  // numbers); expected counts are the model's groups, from peopleGroups (count conservation, C6).
+  it.each([
+    [100, 19, 15],
+    [100, 0, 0],
+    [100, 100, 100],
+    [100, 0, 3],
+    [100, 100, 96],
+    [100, 20, 20],
+    [1000, 125, 94],
+    [1000, 0, 0],
+    [1000, 1000, 1000],
+    [1000, 20, 30],
+    [1000, 40, 40],
+  ] as const)('draws one element per person of each group, per %i with %i without and %i with the option', (denominator, comparison, intervention) => {
+    const model = outcomeChart(topicFixture(denominator, { comparison, intervention }), 'stroke');
+    const svg = drawIntoPage(model);
+    for (const index of [0, 1]) expect(drawnCounts(svg, index)).toEqual(expectedCounts(model, index));
+    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(denominator * 2);
+  });
+
+  // A bare pair: baseline 20%, RR 0.75 → 15% (C4: p1 = p0·RR), per 100.
+  it('draws 200 people for a bare pair of 20% and RR 0.75 per 100', () => {
+    const model = pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } });
+    const svg = parseSvg(render(model));
+    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
+    expect(drawnCounts(svg, 0)).toEqual({ event: 20, free: 80 });
+    expect(drawnCounts(svg, 1)).toEqual({ event: 15, prevented: 5, free: 80 });
+  });
+
+  it('gives data-outcome to people only: each is one path in the people group, and swatches have none', () => {
+    const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'), { showRange: true });
+    for (const element of svg.querySelectorAll('[data-outcome]')) {
+      expect(element.tagName).toBe('path');
+      expect(element.parentElement?.getAttribute('class')).toBe('people');
+    }
+    for (const group of svg.querySelectorAll('g.people')) {
+      expect(group.children).toHaveLength(100);
+      for (const child of group.children) expect(child.hasAttribute('data-outcome')).toBe(true);
+    }
+    expect(svg.querySelectorAll('path.swatch').length).toBeGreaterThan(0);
+    expect(svg.querySelectorAll('path.swatch[data-outcome]')).toHaveLength(0);
+    expect(svg.querySelectorAll('use')).toHaveLength(0);
+  });
+
+  it('fills the benefit with the dot pattern and the harm with the hatch pattern', () => {
+    const result = topicFixture();
+    const benefit = drawIntoPage(outcomeChart(result, 'stroke'));
+    const harm = drawIntoPage(outcomeChart(result, 'muscle-pain'));
+    const fills = (svg: SVGSVGElement, group: string) =>
+      new Set([...svg.querySelectorAll(`[data-outcome="${group}"]`)].map((element) => element.getAttribute('fill')));
+    expect(fills(benefit, 'prevented')).toEqual(new Set(['url(#chart-stroke-dots)']));
+    expect(fills(harm, 'caused')).toEqual(new Set(['url(#chart-muscle-pain-hatch)']));
+    expect(fills(benefit, 'event')).toEqual(new Set(['#0072B2']));
+    expect(benefit.querySelector('pattern#chart-stroke-dots circle')).not.toBeNull();
+    expect(harm.querySelector('pattern#chart-muscle-pain-hatch path')).not.toBeNull();
+  });
+});
+
+describe('renderChartSvg accessibility', () => {
+  // WCAG 2.2 SC 1.1.1 Non-text Content: the graphic has a text alternative; risk-communication
+  // R5.7: the alternative repeats the counts.
+  it('marks the chart role="img" with a title and label stating every count', () => {
+    const model = outcomeChart(topicFixture(), 'stroke');
+    const svg = parseSvg(render(model));
+    expect(svg.getAttribute('role')).toBe('img');
+    const label = svg.getAttribute('aria-label') ?? '';
+    const title = svg.querySelector('title')?.textContent ?? '';
+    expect(title).toBe(label);
+    for (const text of ['19 have a stroke', '81 do not have a stroke', '15 have a stroke anyway', '4 avoid a stroke because of option A', 'between 12 and 18 of these 100']) {
+      expect(label).toContain(text);
+    }
+  });
+
+  it('writes the labels with their counts beside the groups as text', () => {
+    const svg = drawIntoPage(outcomeChart(topicFixture(), 'muscle-pain'));
+    const texts = [...svg.querySelectorAll('text.legend-label')].map(lineText);
+    expect(texts).toEqual([
+      '3 have muscle pain',
+      '97 do not have muscle pain',
+      '3 have muscle pain anyway',
+      '2 get muscle pain because of option A',
+      '95 do not have muscle pain',
+    ]);
+    expect([...svg.querySelectorAll('text.legend-note')].map(lineText)).toEqual([
+      'With option A, the number who have muscle pain could be anywhere between 4 and 7 of these 100.',
+    ]);
+  });
+});
+
+describe('renderChartSvg range', () => {
+  it('draws no one outlined by default', () => {
+    const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'));
+    expect(svg.querySelectorAll('g.people [stroke-dasharray]')).toHaveLength(0);
+  });
+
+  it('outlines the people between the lower and upper count when showRange is on', () => {
+    const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'), { showRange: true });
+    const outlined = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people [stroke-dasharray]')];
+    // Range 12 to 18 around 15: ranks 12–17 (six people) could be either way.
+    expect(outlined).toHaveLength(6);
+    expect(outlined.map((element) => element.getAttribute('data-outcome'))).toEqual(['event', 'event', 'event', 'prevented', 'prevented', 'prevented']);
+    expect(svg.querySelectorAll('g.chart-array')[0]!.querySelectorAll('[stroke-dasharray]')).toHaveLength(0);
+  });
+});
+
+describe('renderChartSvg output', () => {
+  it('is byte-identical for the same input, with one data-outcome per person in the text', () => {
+    const model = outcomeChart(topicFixture(1000, { comparison: 125, intervention: 94, range: { lower: 80, upper: 110 } }), 'stroke');
+    const text = render(model, { showRange: true });
+    expect(render(model, { showRange: true })).toBe(text);
+    const count = (group: string) => text.split(`data-outcome="${group}"`).length - 1;
+    expect([count('event'), count('prevented'), count('caused'), count('free')]).toEqual([125 + 94, 31, 0, 875 + 875]);
+    expect(text.split('data-outcome=').length - 1).toBe(2000);
+    const scattered = outcomeChart(topicFixture(), 'stroke', { arrangement: 'scattered' });
+    expect(render(scattered)).toBe(render(outcomeChart(topicFixture(), 'stroke', { arrangement: 'scattered' })));
+  });
+
+  it('changes when a count changes', () => {
+    const first = render(outcomeChart(topicFixture(100, { comparison: 19, intervention: 15 }), 'stroke'));
+    const second = render(outcomeChart(topicFixture(100, { comparison: 19, intervention: 14 }), 'stroke'));
+    expect(first).not.toBe(second);
+  });
+
+  it('rounds every coordinate to at most three decimals', () => {
+    const text = render(outcomeChart(topicFixture(), 'stroke'), { width: 613.37, fontSize: 13.333 });
+    expect(text.match(/\d\.\d{4,}/g)).toBeNull();
+  });
+
+  it('is standalone SVG with the namespace, a viewBox and the palette it used', () => {
+    const text = render(outcomeChart(topicFixture(), 'stroke'), { palette: blackAndWhitePalette, width: 600 });
+    expect(text.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    const svg = parseSvg(text);
+    expect(svg.getAttribute('viewBox')).toMatch(/^0 0 600 \d+(\.\d+)?$/);
+    expect(svg.getAttribute('data-palette')).toBe('black-and-white');
+    expect(svg.querySelector('[data-outcome="event"]')?.getAttribute('fill')).toBe('#000000');
+  });
+
+  it('draws in a fresh jsdom document when none is given, with the same result', () => {
+    const model = outcomeChart(topicFixture(), 'stroke');
+    expect(renderChartSvg(model)).toBe(render(model));
+  });
+});

@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import { outcomeChart } from '../../../src/render/chart-model.ts';
+import { blackAndWhitePalette } from '../../../src/render/palette.ts';
+import { updateChart } from '../../../src/render/svg/update-chart.ts';
+import { topicFixture } from '../topic-fixture.ts';
+import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
+
+const stroke = (comparison: number, intervention: number, denominator: 100 | 1000 = 100) =>
+  outcomeChart(topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }), 'stroke');
+
+/** Paths of people whose attributes an action changed, seen by a MutationObserver. */
+async function touchedPeople(svg: SVGSVGElement, action: () => void): Promise<Set<Element>> {
+  const touched = new Set<Element>();
+  const observer = new testDocument.defaultView!.MutationObserver((records) => {
+    for (const record of records) {
+      const target = record.target as Element;
+      if (target.parentElement?.getAttribute('class') === 'people') touched.add(target);
+    }
+  });
+  observer.observe(svg, { attributes: true, subtree: true });
+  action();
+  await Promise.resolve();
+  for (const record of observer.takeRecords()) {
+    const target = record.target as Element;
+    if (target.parentElement?.getAttribute('class') === 'people') touched.add(target);
+  }
+  observer.disconnect();
+  return touched;
+}
+
+describe('updateChart', () => {
+  it('moves only the people whose group changed', async () => {
+    const svg = drawIntoPage(stroke(20, 15));
+    let update = { redrawn: true, peopleChanged: -1 };
+    const touched = await touchedPeople(svg, () => {
+      update = updateChart(svg, stroke(20, 12));
+    });
+    // 15 → 12 with the option: ranks 12, 13 and 14 go from event to prevented.
+    expect(update).toEqual({ redrawn: false, peopleChanged: 3 });
+    expect(touched.size).toBe(3);
+    expect([...touched].map((element) => element.getAttribute('data-outcome'))).toEqual(['prevented', 'prevented', 'prevented']);
+    expect(outcomeCounts(svg.querySelectorAll('g.chart-array')[1]!)).toEqual({ event: 12, prevented: 8, free: 80 });
+  });
+
+  it('updates the labels and the text alternative with the new counts', () => {
+    const svg = drawIntoPage(stroke(20, 15));
+    updateChart(svg, stroke(20, 12));
+    expect(svg.getAttribute('aria-label')).toContain('8 avoid a stroke because of option A');
+    expect(svg.querySelector('title')?.textContent).toContain('12 have a stroke anyway');
+    expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain('8 avoid a stroke because of option A');
+  });
+
+  it('touches no one when nothing changed', () => {
+    const svg = drawIntoPage(stroke(125, 94, 1000));
+    expect(updateChart(svg, stroke(125, 94, 1000))).toEqual({ redrawn: false, peopleChanged: 0 });
+  });
+
+  it('ends in the same state as a fresh drawing', () => {
+    const updated = drawIntoPage(stroke(125, 94, 1000));
+    updateChart(updated, stroke(125, 80, 1000));
+    const updatedText = updated.outerHTML;
+    const fresh = drawIntoPage(stroke(125, 80, 1000));
+    expect(updatedText).toBe(fresh.outerHTML);
+  });
+
+  it('keeps showing the range outline it was drawn with', () => {
+    const svg = drawIntoPage(stroke(20, 15), { showRange: true });
+    updateChart(svg, stroke(20, 12));
+    // Range 10 to 15 around 12: ranks 10–14 outlined.
+    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people [stroke-dasharray]')).toHaveLength(5);
+  });
+
+  it('redraws everything when the denominator changes or new options are given', () => {
+    const svg = drawIntoPage(stroke(20, 15));
+    expect(updateChart(svg, stroke(200, 150, 1000)).redrawn).toBe(true);
+    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(2000);
+    expect(updateChart(svg, stroke(200, 150, 1000), { palette: blackAndWhitePalette }).redrawn).toBe(true);
+    expect(svg.getAttribute('data-palette')).toBe('black-and-white');
+  });
+});
