@@ -1,0 +1,214 @@
+/**
+ * Edits of a draft as pure functions: each takes a draft and returns a new one, so the
+ * history can keep every earlier draft as it was. Limits come from TOPIC_LIMITS; an edit
+ * that would break one (a fifth option, removing the last outcome) returns the draft
+ * unchanged.
+ */
+import { TOPIC_LIMITS } from '../../core/topic/topic.ts';
+import { blankEffect } from './topic-draft.ts';
+import type { EffectDraft, OptionDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
+
+/** Fields of the topic itself that hold text. */
+export type TopicTextField =
+  | 'title'
+  | 'population'
+  | 'periodYears'
+  | 'evidenceSummary'
+  | 'evidenceReviewed'
+  | 'clinician'
+  | 'patientName'
+  | 'patientReference';
+
+/** Fields of an outcome that hold text. */
+export type OutcomeTextField = 'name' | 'baselineRisk' | 'baselinePeriodYears' | 'baselineSource';
+
+/** Fields of an effect that can be set. */
+export type EffectField = Exclude<keyof EffectDraft, 'optionId' | 'level'>;
+
+function freshId(prefix: string, taken: readonly string[]): string {
+  let number = 1;
+  while (taken.includes(`${prefix}-${number}`)) number += 1;
+  return `${prefix}-${number}`;
+}
+
+/** Set one text field of the topic. */
+export function setTopicText(draft: TopicDraft, field: TopicTextField, value: string): TopicDraft {
+  return { ...draft, [field]: value };
+}
+
+/** Mark the topic as an invented example, or not. */
+export function setIllustrative(draft: TopicDraft, illustrative: boolean): TopicDraft {
+  return { ...draft, illustrative };
+}
+
+function mapOption(draft: TopicDraft, optionId: string, change: (option: OptionDraft) => OptionDraft): TopicDraft {
+  return { ...draft, options: draft.options.map((option) => (option.id === optionId ? change(option) : option)) };
+}
+
+/** Rename an option. */
+export function setOptionName(draft: TopicDraft, optionId: string, name: string): TopicDraft {
+  return mapOption(draft, optionId, (option) => ({ ...option, name }));
+}
+
+/** Make one option the comparison; its effects are kept, in case it stops being the comparison. */
+export function setComparison(draft: TopicDraft, optionId: string): TopicDraft {
+  if (!draft.options.some((option) => option.id === optionId)) return draft;
+  return {
+    ...draft,
+    options: draft.options.map((option) => ({ ...option, isComparison: option.id === optionId })),
+    outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, draft.options)),
+  };
+}
+
+function withEffectsFor(outcome: OutcomeDraft, options: readonly OptionDraft[]): OutcomeDraft {
+  const missing = options.filter((option) => !outcome.effects.some((entry) => entry.optionId === option.id));
+  if (missing.length === 0) return outcome;
+  return { ...outcome, effects: [...outcome.effects, ...missing.map((option) => blankEffect(option.id))] };
+}
+
+/** Add an option (at most TOPIC_LIMITS.maxOptions), with a blank effect on every outcome. */
+export function addOption(draft: TopicDraft, name = ''): { draft: TopicDraft; optionId: string | null } {
+  if (draft.options.length >= TOPIC_LIMITS.maxOptions) return { draft, optionId: null };
+  const id = freshId('option', draft.options.map((option) => option.id));
+  const options = [...draft.options, { id, name, isComparison: false }];
+  return { draft: { ...draft, options, outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, options)) }, optionId: id };
+}
+
+/** Remove an option (keeping at least TOPIC_LIMITS.minOptions); removing the comparison passes it to the first other option. */
+export function removeOption(draft: TopicDraft, optionId: string): TopicDraft {
+  const removed = draft.options.find((option) => option.id === optionId);
+  if (removed === undefined || draft.options.length <= TOPIC_LIMITS.minOptions) return draft;
+  let options = draft.options.filter((option) => option.id !== optionId);
+  if (removed.isComparison) options = options.map((option, index) => ({ ...option, isComparison: index === 0 }));
+  return {
+    ...draft,
+    options,
+    outcomes: draft.outcomes.map((outcome) => ({
+      ...outcome,
+      effects: outcome.effects.filter((entry) => entry.optionId !== optionId),
+    })),
+  };
+}
+
+/** Move an option one place up (−1) or down (+1). */
+export function moveOption(draft: TopicDraft, optionId: string, step: -1 | 1): TopicDraft {
+  const index = draft.options.findIndex((option) => option.id === optionId);
+  const target = index + step;
+  if (index === -1 || target < 0 || target >= draft.options.length) return draft;
+  const options = [...draft.options];
+  const [moved] = options.splice(index, 1);
+  if (moved !== undefined) options.splice(target, 0, moved);
+  return { ...draft, options };
+}
+
+function mapOutcome(draft: TopicDraft, outcomeId: string, change: (outcome: OutcomeDraft) => OutcomeDraft): TopicDraft {
+  return { ...draft, outcomes: draft.outcomes.map((outcome) => (outcome.id === outcomeId ? change(outcome) : outcome)) };
+}
+
+/** Set one text field of an outcome. */
+export function setOutcomeText(draft: TopicDraft, outcomeId: string, field: OutcomeTextField, value: string): TopicDraft {
+  return mapOutcome(draft, outcomeId, (outcome) => ({ ...outcome, [field]: value }));
+}
+
+/** Say whether an outcome is a benefit the options aim at or a harm they may cause. */
+export function setOutcomeKind(draft: TopicDraft, outcomeId: string, kind: 'benefit' | 'harm'): TopicDraft {
+  return mapOutcome(draft, outcomeId, (outcome) => ({ ...outcome, kind }));
+}
+
+/** Make one outcome the headline. */
+export function setHeadline(draft: TopicDraft, outcomeId: string): TopicDraft {
+  if (!draft.outcomes.some((outcome) => outcome.id === outcomeId)) return draft;
+  return { ...draft, outcomes: draft.outcomes.map((outcome) => ({ ...outcome, isHeadline: outcome.id === outcomeId })) };
+}
+
+/** Add an outcome (at most TOPIC_LIMITS.maxOutcomes) over the topic's period, with a blank effect per option. */
+export function addOutcome(draft: TopicDraft, kind: 'benefit' | 'harm'): { draft: TopicDraft; outcomeId: string | null } {
+  if (draft.outcomes.length >= TOPIC_LIMITS.maxOutcomes) return { draft, outcomeId: null };
+  const id = freshId('outcome', draft.outcomes.map((outcome) => outcome.id));
+  const outcome: OutcomeDraft = {
+    id,
+    name: '',
+    kind,
+    isHeadline: draft.outcomes.length === 0,
+    baselineRisk: '',
+    baselinePeriodYears: draft.periodYears,
+    baselineSource: '',
+    effects: draft.options.map((option) => blankEffect(option.id)),
+  };
+  return { draft: { ...draft, outcomes: [...draft.outcomes, outcome] }, outcomeId: id };
+}
+
+/** Remove an outcome (keeping at least one); the headline passes to the first one left. */
+export function removeOutcome(draft: TopicDraft, outcomeId: string): TopicDraft {
+  const removed = draft.outcomes.find((outcome) => outcome.id === outcomeId);
+  if (removed === undefined || draft.outcomes.length <= TOPIC_LIMITS.minOutcomes) return draft;
+  let outcomes = draft.outcomes.filter((outcome) => outcome.id !== outcomeId);
+  if (removed.isHeadline) outcomes = outcomes.map((outcome, index) => ({ ...outcome, isHeadline: index === 0 }));
+  return { ...draft, outcomes };
+}
+
+/** Set one field of one option's effect on one outcome. */
+export function setEffectField<Field extends EffectField>(
+  draft: TopicDraft,
+  outcomeId: string,
+  optionId: string,
+  field: Field,
+  value: EffectDraft[Field],
+): TopicDraft {
+  return mapOutcome(draft, outcomeId, (outcome) => {
+    const present = withEffectsFor(outcome, draft.options);
+    return {
+      ...present,
+      effects: present.effects.map((entry) => (entry.optionId === optionId ? { ...entry, [field]: value } : entry)),
+    };
+  });
+}
+
+/** Add a blank question for the handout (at most TOPIC_LIMITS.maxQuestions). */
+export function addQuestion(draft: TopicDraft): TopicDraft {
+  if (draft.questions.length >= TOPIC_LIMITS.maxQuestions) return draft;
+  return { ...draft, questions: [...draft.questions, ''] };
+}
+
+/** Change one question. */
+export function setQuestion(draft: TopicDraft, place: number, text: string): TopicDraft {
+  return { ...draft, questions: draft.questions.map((question, index) => (index === place ? text : question)) };
+}
+
+/** Remove one question. */
+export function removeQuestion(draft: TopicDraft, place: number): TopicDraft {
+  return { ...draft, questions: draft.questions.filter((_, index) => index !== place) };
+}
+
+/** A new, empty topic: a comparison, one option and one benefit, over 10 years. */
+export function blankDraft(): TopicDraft {
+  const options: OptionDraft[] = [
+    { id: 'comparison', name: 'no treatment', isComparison: true },
+    { id: 'option-1', name: '', isComparison: false },
+  ];
+  return {
+    title: '',
+    population: '',
+    periodYears: '10',
+    illustrative: false,
+    options,
+    outcomes: [
+      {
+        id: 'outcome-1',
+        name: '',
+        kind: 'benefit',
+        isHeadline: true,
+        baselineRisk: '',
+        baselinePeriodYears: '10',
+        baselineSource: '',
+        effects: options.map((option) => blankEffect(option.id)),
+      },
+    ],
+    evidenceSummary: '',
+    evidenceReviewed: '',
+    questions: [],
+    clinician: '',
+    patientName: '',
+    patientReference: '',
+  };
+}

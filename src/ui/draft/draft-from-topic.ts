@@ -1,0 +1,74 @@
+import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
+import { numberText } from './number-text.ts';
+import { blankEffect } from './topic-draft.ts';
+import type { EffectDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
+
+const optionalNumber = (value: number | null | undefined): string =>
+  value === null || value === undefined ? '' : numberText(value);
+
+/** An absolute reduction is edited in percentage points (3 means 3%), stored as a proportion. */
+const percentagePoints = (value: number | null | undefined): string =>
+  value === null || value === undefined ? '' : numberText(value * 100);
+
+function effectDraft(entry: OptionEffect): EffectDraft {
+  const base = {
+    ...blankEffect(entry.optionId),
+    source: entry.source,
+    followUpYears: optionalNumber(entry.followUpYears),
+    certainty: entry.certainty,
+    importance: entry.importance,
+  };
+  const { effect } = entry;
+  if (effect.measure === 'counts') {
+    return {
+      ...base,
+      measure: 'counts',
+      level: effect.level ?? null,
+      interventionEvents: numberText(effect.intervention.events),
+      interventionTotal: numberText(effect.intervention.total),
+      comparisonEvents: numberText(effect.comparison.events),
+      comparisonTotal: numberText(effect.comparison.total),
+    };
+  }
+  const shown = effect.measure === 'arr' ? percentagePoints : optionalNumber;
+  return {
+    ...base,
+    measure: effect.measure,
+    level: effect.level ?? null,
+    estimate: shown(effect.estimate),
+    lower: shown(effect.lower),
+    upper: shown(effect.upper),
+  };
+}
+
+function outcomeDraft(outcome: TopicOutcome): OutcomeDraft {
+  const risk = outcome.baseline.risk;
+  return {
+    id: outcome.id,
+    name: outcome.name,
+    kind: outcome.kind,
+    isHeadline: outcome.isHeadline,
+    baselineRisk: risk === null ? '' : typeof risk === 'number' ? numberText(risk) : risk,
+    baselinePeriodYears: numberText(outcome.baseline.periodYears),
+    baselineSource: outcome.baseline.source,
+    effects: outcome.effects.map(effectDraft),
+  };
+}
+
+/** The editor's copy of a topic, every number as text. */
+export function draftFromTopic(topic: Topic): TopicDraft {
+  return {
+    title: topic.title,
+    population: topic.population,
+    periodYears: numberText(topic.periodYears),
+    illustrative: topic.illustrative,
+    options: topic.options.map((option) => ({ id: option.id, name: option.name, isComparison: option.isComparison })),
+    outcomes: topic.outcomes.map(outcomeDraft),
+    evidenceSummary: topic.evidence.summary,
+    evidenceReviewed: topic.evidence.reviewed,
+    questions: [...topic.questions],
+    clinician: topic.clinician,
+    patientName: topic.patient?.name ?? '',
+    patientReference: topic.patient?.reference ?? '',
+  };
+}

@@ -1,0 +1,58 @@
+/**
+ * The shape of a stored draft (autosave), checked on reading so that a damaged or older
+ * copy in the browser's storage is refused rather than loaded half-way.
+ */
+import * as v from 'valibot';
+import type { TopicDraft } from './topic-draft.ts';
+
+const text = v.string();
+
+const effectDraftSchema = v.object({
+  optionId: text,
+  measure: v.picklist(['rr', 'or', 'hr', 'rrr', 'arr', 'counts']),
+  estimate: text,
+  lower: text,
+  upper: text,
+  level: v.nullable(v.pipe(v.number(), v.finite())),
+  interventionEvents: text,
+  interventionTotal: text,
+  comparisonEvents: text,
+  comparisonTotal: text,
+  source: text,
+  followUpYears: text,
+  certainty: v.picklist(['high', 'moderate', 'low', 'very-low']),
+  importance: v.picklist(['important', 'trivial']),
+});
+
+/** Schema of a whole draft. */
+export const topicDraftSchema = v.object({
+  title: text,
+  population: text,
+  periodYears: text,
+  illustrative: v.boolean(),
+  options: v.array(v.object({ id: text, name: text, isComparison: v.boolean() })),
+  outcomes: v.array(
+    v.object({
+      id: text,
+      name: text,
+      kind: v.picklist(['benefit', 'harm']),
+      isHeadline: v.boolean(),
+      baselineRisk: text,
+      baselinePeriodYears: text,
+      baselineSource: text,
+      effects: v.array(effectDraftSchema),
+    }),
+  ),
+  evidenceSummary: text,
+  evidenceReviewed: text,
+  questions: v.array(text),
+  clinician: text,
+  patientName: text,
+  patientReference: text,
+});
+
+/** The draft in `data`, or null when it is not a whole draft. */
+export function parseDraft(data: unknown): TopicDraft | null {
+  const parsed = v.safeParse(topicDraftSchema, data);
+  return parsed.success ? parsed.output : null;
+}

@@ -1,0 +1,82 @@
+/**
+ * The editor's copy of a topic: the topic's shape with every number kept as the text
+ * the person typed, so nothing typed is ever thrown away, even while it is not valid.
+ * Effects are kept for every option (also one that is now the comparison), so that
+ * switching the comparison back and forth loses nothing.
+ */
+import type { Certainty, Importance } from '../../core/topic/topic.ts';
+import type { EffectMeasure } from '../../core/types.ts';
+
+/** The measures an effect can be entered in: the core's five, or a trial's own counts. */
+export type DraftMeasure = EffectMeasure | 'counts';
+
+export interface EffectDraft {
+  readonly optionId: string;
+  readonly measure: DraftMeasure;
+  readonly estimate: string;
+  readonly lower: string;
+  readonly upper: string;
+  /** The interval level, when a file gave one other than 95%; not edited in the app. */
+  readonly level: number | null;
+  readonly interventionEvents: string;
+  readonly interventionTotal: string;
+  readonly comparisonEvents: string;
+  readonly comparisonTotal: string;
+  readonly source: string;
+  readonly followUpYears: string;
+  readonly certainty: Certainty;
+  readonly importance: Importance;
+}
+
+export interface OptionDraft {
+  readonly id: string;
+  readonly name: string;
+  readonly isComparison: boolean;
+}
+
+export interface OutcomeDraft {
+  readonly id: string;
+  readonly name: string;
+  readonly kind: 'benefit' | 'harm';
+  readonly isHeadline: boolean;
+  /** As typed: "15%", "1 in 5", "0.15"; empty when every effect is trial counts. */
+  readonly baselineRisk: string;
+  readonly baselinePeriodYears: string;
+  readonly baselineSource: string;
+  readonly effects: readonly EffectDraft[];
+}
+
+export interface TopicDraft {
+  readonly title: string;
+  readonly population: string;
+  readonly periodYears: string;
+  readonly illustrative: boolean;
+  readonly options: readonly OptionDraft[];
+  readonly outcomes: readonly OutcomeDraft[];
+  readonly evidenceSummary: string;
+  readonly evidenceReviewed: string;
+  readonly questions: readonly string[];
+  readonly clinician: string;
+  readonly patientName: string;
+  readonly patientReference: string;
+}
+
+/** A blank effect of one option, as a new outcome or option starts. */
+export function blankEffect(optionId: string): EffectDraft {
+  return {
+    optionId,
+    measure: 'rr',
+    estimate: '',
+    lower: '',
+    upper: '',
+    level: null,
+    interventionEvents: '',
+    interventionTotal: '',
+    comparisonEvents: '',
+    comparisonTotal: '',
+    source: '',
+    followUpYears: '',
+    certainty: 'moderate',
+    importance: 'important',
+  };
+}

@@ -1,0 +1,153 @@
+/**
+ * Turning the editor's text back into a topic. Every number that cannot be read gives a
+ * problem on its own field; the topic still comes back whole (with NaN standing in for
+ * the unreadable numbers) so that the core can check everything else at the same time.
+ */
+import { checkArm } from '../../core/counts/check-arm.ts';
+import { parseNumber } from '../../core/parse-number.ts';
+import { InputError, problem } from '../../core/problems.ts';
+import type { Problem } from '../../core/problems.ts';
+import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
+import type { Effect } from '../../core/types.ts';
+import { blankEffect } from './topic-draft.ts';
+import type { EffectDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
+
+/** A topic built from a draft, and the problems found while reading its numbers. */
+export interface DraftReading {
+  readonly topic: Topic;
+  /** Numbers that could not be read; empty when the topic can be written to a file. */
+  readonly problems: readonly Problem[];
+  /** For each question of the topic, its place in the draft (blank questions are left out). */
+  readonly questionPlaces: readonly number[];
+}
+
+interface Reader {
+  readonly problems: Problem[];
+}
+
+function readNumber(reader: Reader, text: string, field: string, what: string, example: string): number {
+  if (text.trim() === '') {
+    reader.problems.push(problem('number-missing', field, { what, example }));
+    return Number.NaN;
+  }
+  try {
+    return parseNumber(text.replace(/%\s*$/, ''), field);
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    reader.problems.push(error.problem);
+    return Number.NaN;
+  }
+}
+
+function readOptional(reader: Reader, text: string, field: string): number | null {
+  if (text.trim() === '') return null;
+  return readNumber(reader, text, field, 'number', '10');
+}
+
+const MEASURE_EXAMPLES: Record<string, string> = { rr: '0.75', or: '0.73', hr: '0.8', rrr: '25', arr: '3' };
+
+function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect {
+  const measure = draft.measure === 'counts' ? 'rr' : draft.measure;
+  // An absolute reduction is typed in percentage points; the core takes a proportion.
+  const scale = measure === 'arr' ? 0.01 : 1;
+  const scaled = (value: number | null): number | null => (value === null ? null : value * scale);
+  const example = MEASURE_EXAMPLES[measure] ?? '0.75';
+  const estimate = readNumber(reader, draft.estimate, `${field}.estimate`, 'effect estimate', example);
+  const lower = readOptional(reader, draft.lower, `${field}.lower`);
+  const upper = readOptional(reader, draft.upper, `${field}.upper`);
+  return {
+    measure,
+    estimate: estimate * scale,
+    lower: scaled(lower),
+    upper: scaled(upper),
+    ...(draft.level === null ? {} : { level: draft.level }),
+  };
+}
+
+function readArm(reader: Reader, events: string, total: string, field: string) {
+  const arm = {
+    events: readNumber(reader, events, `${field}.events`, 'number of people with the outcome', '12'),
+    total: readNumber(reader, total, `${field}.total`, 'number of people in the arm', '100'),
+  };
+  if (Number.isNaN(arm.events) || Number.isNaN(arm.total)) return arm;
+  try {
+    checkArm(arm, field);
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    reader.problems.push(error.problem);
+  }
+  return arm;
+}
+
+function readEffect(reader: Reader, draft: EffectDraft, field: string): OptionEffect {
+  const effectField = `${field}.effect`;
+  const effect: Effect =
+    draft.measure === 'counts'
+      ? {
+          measure: 'counts',
+          intervention: readArm(reader, draft.interventionEvents, draft.interventionTotal, `${effectField}.intervention`),
+          comparison: readArm(reader, draft.comparisonEvents, draft.comparisonTotal, `${effectField}.comparison`),
+          ...(draft.level === null ? {} : { level: draft.level }),
+        }
+      : readEntered(reader, draft, effectField);
+  return {
+    optionId: draft.optionId,
+    effect,
+    source: draft.source,
+    followUpYears: readOptional(reader, draft.followUpYears, `${field}.followUpYears`),
+    certainty: draft.certainty,
+    importance: draft.importance,
+  };
+}
+
+function readOutcome(reader: Reader, draft: OutcomeDraft, index: number, effectOptionIds: readonly string[]): TopicOutcome {
+  const field = `outcomes.${index}`;
+  const effects = effectOptionIds.map((optionId, effectIndex) => {
+    const entry = draft.effects.find((candidate) => candidate.optionId === optionId) ?? blankEffect(optionId);
+    return readEffect(reader, entry, `${field}.effects.${effectIndex}`);
+  });
+  return {
+    id: draft.id,
+    name: draft.name,
+    kind: draft.kind,
+    isHeadline: draft.isHeadline,
+    baseline: {
+      risk: draft.baselineRisk.trim() === '' ? null : draft.baselineRisk,
+      periodYears: readNumber(reader, draft.baselinePeriodYears, `${field}.baseline.periodYears`, 'period of the baseline risk', '10'),
+      source: draft.baselineSource,
+    },
+    effects,
+  };
+}
+
+/** The options whose effects the topic holds, in order: every option but the comparison. */
+export function effectOptionIds(draft: TopicDraft): string[] {
+  return draft.options.filter((option) => !option.isComparison).map((option) => option.id);
+}
+
+/**
+ * Build the topic a draft describes. Outcome `i` of the topic is outcome `i` of the draft,
+ * and effect `j` of each outcome belongs to the `j`th option that is not the comparison, so
+ * every problem's field can be traced back to what the person typed.
+ */
+export function topicFromDraft(draft: TopicDraft): DraftReading {
+  const reader: Reader = { problems: [] };
+  const ids = effectOptionIds(draft);
+  const periodYears = readNumber(reader, draft.periodYears, 'periodYears', 'period', '10');
+  const outcomes = draft.outcomes.map((outcome, index) => readOutcome(reader, outcome, index, ids));
+  const questionPlaces = draft.questions.flatMap((question, place) => (question.trim() === '' ? [] : [place]));
+  const patientGiven = draft.patientName.trim() !== '' || draft.patientReference.trim() !== '';
+  const topic: Topic = {
+    title: draft.title,
+    population: draft.population,
+    periodYears,
+    options: draft.options.map((option) => ({ ...option })),
+    outcomes,
+    illustrative: draft.illustrative,
+    evidence: { summary: draft.evidenceSummary, reviewed: draft.evidenceReviewed },
+    questions: questionPlaces.map((place) => draft.questions[place] ?? ''),
+    clinician: draft.clinician,
+    patient: patientGiven ? { name: draft.patientName, reference: draft.patientReference } : null,
+  };
+  return { topic, problems: reader.problems, questionPlaces };
+}

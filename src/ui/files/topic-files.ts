@@ -1,0 +1,56 @@
+/**
+ * Opening and saving topic files from the editor: reading gives a draft or one clear
+ * message (and leaves the current topic alone); writing leaves the patient's details out
+ * unless asked.
+ */
+import { describeProblem } from '../../core/messages/describe.ts';
+import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
+import { draftFromTopic } from '../draft/draft-from-topic.ts';
+import { topicFromDraft } from '../draft/topic-from-draft.ts';
+import type { TopicDraft } from '../draft/topic-draft.ts';
+
+export const TOPIC_FILE_SUFFIX = '.chancewise.json';
+
+export type OpenedTopic =
+  | { readonly ok: true; readonly draft: TopicDraft; readonly fileName: string; readonly migratedFrom: number | null }
+  | { readonly ok: false; readonly message: string };
+
+/** Read an opened file's text into a draft, or say in one sentence why it cannot be opened. */
+export function openTopicText(fileName: string, text: string): OpenedTopic {
+  if (text.trim() === '') return { ok: false, message: `“${fileName}” is empty, so there is no topic to open.` };
+  const reading = readTopicFile(text);
+  if (!reading.ok) return { ok: false, message: `“${fileName}” could not be opened. ${describeProblem(reading.problem)}` };
+  return { ok: true, draft: draftFromTopic(reading.topic), fileName, migratedFrom: reading.migratedFrom };
+}
+
+export type SavedTopic = { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
+
+/** A draft as topic file text; patient details only when `includePatient` is set. */
+export function topicFileText(draft: TopicDraft, includePatient: boolean): SavedTopic {
+  const reading = topicFromDraft(draft);
+  if (reading.problems.length > 0) {
+    const count = reading.problems.length;
+    return {
+      ok: false,
+      message: `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile your work is kept in this browser.`,
+    };
+  }
+  return { ok: true, text: writeTopicFile(reading.topic, { includePatient }) };
+}
+
+/** A file name for a draft: the file it came from, or its decision in plain letters, ending in .chancewise.json. */
+export function suggestedFileName(draft: TopicDraft, currentName: string | null): string {
+  if (currentName !== null && currentName.endsWith(TOPIC_FILE_SUFFIX)) return currentName;
+  if (currentName !== null && currentName.endsWith('.json')) return currentName.replace(/\.json$/, TOPIC_FILE_SUFFIX);
+  const words = draft.title
+    .toLowerCase()
+    .replace(/\(illustrative example\)/g, '')
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .split('-')
+    .slice(0, 8)
+    .join('-');
+  return `${words === '' ? 'topic' : words}${TOPIC_FILE_SUFFIX}`;
+}

@@ -1,0 +1,25 @@
+/**
+ * The app's entry point in a browser or the desktop shell: styles, the chart palette as
+ * CSS custom properties, then the app itself.
+ */
+import { mount } from 'svelte';
+import { colourPalette } from '../render/palette.ts';
+import App from './App.svelte';
+import { browserPlatform } from './platform/browser-platform.ts';
+import { DEMO_TOPICS } from './state/demo-topics.ts';
+import './styles/app.css';
+
+/** Share the people charts' colours with the rest of the interface (set through the CSSOM, which the policy allows). */
+function applyPaletteTokens(root: HTMLElement): void {
+  const { groups } = colourPalette;
+  root.style.setProperty('--benefit-fill', groups.prevented.fill);
+  root.style.setProperty('--benefit', groups.prevented.outline);
+  root.style.setProperty('--harm-fill', groups.caused.fill);
+  root.style.setProperty('--harm', groups.caused.outline);
+  root.style.setProperty('--event-fill', groups.event.fill);
+}
+
+applyPaletteTokens(document.documentElement);
+const target = document.getElementById('app');
+if (target === null) throw new Error('the page has no #app element');
+mount(App, { target, props: { platform: browserPlatform(), demos: DEMO_TOPICS } });

@@ -1,0 +1,169 @@
+/**
+ * The editor's state: the draft as typed, its check and results, the undo history, the
+ * autosave and whether there are unsaved changes. Every change goes through `change`,
+ * `load`, `undo` or `redo`, so the history, the check and the autosave never miss one.
+ */
+import type { TopicResult } from '../../core/topic/topic-result.ts';
+import type { Denominator } from '../../core/types.ts';
+import { checkDraft } from '../draft/check-draft.ts';
+import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
+import type { TopicDraft } from '../draft/topic-draft.ts';
+import type { Autosave } from './autosave.ts';
+import { UndoHistory } from './undo-history.ts';
+
+/** Runs a task later; returns a function that cancels it. */
+export type Scheduler = (task: () => void, delay: number) => () => void;
+
+export interface EditorSettings {
+  readonly fileName?: string | null;
+  readonly autosave?: Autosave | null;
+  /** Milliseconds since some fixed time, for merging quick edits of one field into one undo step. */
+  readonly now?: () => number;
+  /** The current date, for the autosave's time stamp. */
+  readonly today?: () => Date;
+  readonly schedule?: Scheduler;
+  /** Delay before an autosave, in milliseconds. */
+  readonly autosaveDelay?: number;
+}
+
+const defaultSchedule: Scheduler = (task, delay) => {
+  const timer = setTimeout(task, delay);
+  return () => clearTimeout(timer);
+};
+
+const signature = (draft: TopicDraft): string => JSON.stringify(draft);
+
+function groupByKey(problems: readonly FieldProblem[]): Map<string, FieldProblem[]> {
+  const byKey = new Map<string, FieldProblem[]>();
+  for (const found of problems) {
+    if (found.key !== null) byKey.set(found.key, [...(byKey.get(found.key) ?? []), found]);
+  }
+  return byKey;
+}
+
+export class TopicEditor {
+  /** The draft exactly as typed. */
+  draft = $state.raw<TopicDraft>() as TopicDraft;
+  /** The chosen denominator, or null to let the core choose. */
+  per = $state.raw<Denominator | null>(null);
+  /** The check of the current draft: every problem, and the result when there are none. */
+  check = $state.raw<DraftCheck>() as DraftCheck;
+  /** The results on screen: the current draft's, or the last valid draft's while it has problems. */
+  shown = $state.raw<TopicResult | null>(null);
+  /** True when `shown` comes from an earlier draft than the one being edited. */
+  stale = $state(false);
+  canUndo = $state(false);
+  canRedo = $state(false);
+  hasUnsavedChanges = $state(false);
+  fileName = $state.raw<string | null>(null);
+
+  #history: UndoHistory<TopicDraft>;
+  #problemsByKey = $derived(groupByKey(this.check.problems));
+  #lastValidDraft: TopicDraft | null = null;
+  #savedSignature: string;
+  #cancelAutosave: (() => void) | null = null;
+  readonly #autosave: Autosave | null;
+  readonly #now: () => number;
+  readonly #today: () => Date;
+  readonly #schedule: Scheduler;
+  readonly #autosaveDelay: number;
+
+  constructor(initial: TopicDraft, settings: EditorSettings = {}) {
+    this.#autosave = settings.autosave ?? null;
+    this.#now = settings.now ?? (() => Date.now());
+    this.#today = settings.today ?? (() => new Date());
+    this.#schedule = settings.schedule ?? defaultSchedule;
+    this.#autosaveDelay = settings.autosaveDelay ?? 500;
+    this.#history = new UndoHistory(initial);
+    this.#savedSignature = signature(initial);
+    this.fileName = settings.fileName ?? null;
+    this.#show(initial);
+  }
+
+  /** The problems of one field, in the order found. */
+  problemsFor(key: string): readonly FieldProblem[] {
+    return this.#problemsByKey.get(key) ?? [];
+  }
+
+  /** Apply an edit. `mergeKey` names the field, so that typing in it makes one undo step. */
+  change(edit: (draft: TopicDraft) => TopicDraft, mergeKey: string | null = null): void {
+    const next = edit(this.draft);
+    if (next === this.draft) return;
+    this.#history.record(next, mergeKey, this.#now());
+    this.#show(next);
+    this.#queueAutosave();
+  }
+
+  /** Replace the draft with another topic (a file, a demo, a new topic); undo brings the old one back. */
+  load(draft: TopicDraft, settings: { readonly fileName: string | null; readonly saved: boolean }): void {
+    this.#history.record(draft, null, this.#now());
+    this.fileName = settings.fileName;
+    if (settings.saved) this.#savedSignature = signature(draft);
+    this.#show(draft);
+    this.#queueAutosave();
+  }
+
+  /** Note that the current draft was written to a file. */
+  markSaved(fileName: string): void {
+    this.fileName = fileName;
+    this.#savedSignature = signature(this.draft);
+    this.hasUnsavedChanges = false;
+    this.flushAutosave();
+  }
+
+  undo(): boolean {
+    const previous = this.#history.undo();
+    if (previous === null) return false;
+    this.#show(previous);
+    this.#queueAutosave();
+    return true;
+  }
+
+  redo(): boolean {
+    const next = this.#history.redo();
+    if (next === null) return false;
+    this.#show(next);
+    this.#queueAutosave();
+    return true;
+  }
+
+  /** Show the numbers per 100 or per 1000 people, or (null) let the core choose. */
+  setPer(per: Denominator | null): void {
+    this.per = per;
+    this.#show(this.draft);
+  }
+
+  /** Write the autosave now (before the page is hidden or closed). */
+  flushAutosave(): void {
+    this.#cancelAutosave?.();
+    this.#cancelAutosave = null;
+    this.#autosave?.save({
+      draft: this.draft,
+      fileName: this.fileName,
+      savedAt: this.#today().toISOString(),
+      unsaved: this.hasUnsavedChanges,
+    });
+  }
+
+  #queueAutosave(): void {
+    if (this.#autosave === null) return;
+    this.#cancelAutosave?.();
+    this.#cancelAutosave = this.#schedule(() => {
+      this.#cancelAutosave = null;
+      this.flushAutosave();
+    }, this.#autosaveDelay);
+  }
+
+  #show(draft: TopicDraft): void {
+    const check = checkDraft(draft, { per: this.per });
+    if (check.result !== null) this.#lastValidDraft = draft;
+    const fallback = check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
+    this.draft = draft;
+    this.check = check;
+    this.shown = check.result ?? fallback;
+    this.stale = check.result === null;
+    this.canUndo = this.#history.canUndo;
+    this.canRedo = this.#history.canRedo;
+    this.hasUnsavedChanges = signature(draft) !== this.#savedSignature;
+  }
+}
