@@ -68,10 +68,14 @@ export function parseLevel(input: string, field = '--level'): number {
   return value;
 }
 
+/** The longest period, in years, the command line takes. */
+const MAX_YEARS = 1000;
+
 /** Read a positive number of years. */
 export function parseYears(input: string, field: string): number {
   const value = readNumber(input, field, 'period-not-positive', { input: input.trim() });
-  if (!(value > 0) || value > 1000) fail('period-not-positive', field, { input: input.trim() });
+  if (!(value > 0)) fail('period-not-positive', field, { input: input.trim() });
+  if (value > MAX_YEARS) fail('period-too-long', field, { input: input.trim(), limit: MAX_YEARS });
   return value;
 }
 

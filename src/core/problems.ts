@@ -29,6 +29,7 @@ export type ProblemCode =
   // periods
   | 'period-not-positive'
   | 'period-pair-incomplete'
+  | 'period-too-long'
   // trial counts
   | 'counts-not-whole'
   | 'counts-negative'

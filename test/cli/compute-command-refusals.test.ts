@@ -24,6 +24,11 @@ const impossibleData = JSON.parse(readFileSync(demo, 'utf8')) as { topic: { outc
 const firstOutcome = impossibleData.topic.outcomes[0];
 if (firstOutcome !== undefined) firstOutcome.baseline.risk = '150%';
 writeFileSync(impossible, JSON.stringify(impossibleData));
+const twoProblems = join(folder, 'two-problems.json');
+const twoProblemsData = JSON.parse(readFileSync(demo, 'utf8')) as { topic: Record<string, unknown> };
+twoProblemsData.topic.title = '';
+twoProblemsData.topic.periodYears = 0;
+writeFileSync(twoProblems, JSON.stringify(twoProblemsData));
 const notATopic = join(folder, 'other.json');
 writeFileSync(notATopic, JSON.stringify({ format: 'spreadsheet', rows: [] }));
 const subfolder = join(folder, 'a-folder.json');
@@ -99,6 +104,7 @@ const refusals: readonly [string, readonly string[], readonly string[]][] = [
   ['--over and --to with an absolute reduction', ['--arr', '5%', '--over', '5', '--to', '10'], ['--over', '--arr']],
   ['a period of zero years', ['--baseline', '30%', '--rr', '0.8', '--over', '0', '--to', '5'], ['--over', '"0"', 'greater than 0']],
   ['a period that is not a number', ['--baseline', '30%', '--rr', '0.8', '--over', '5', '--to', 'ten'], ['--to', '"ten"', 'greater than 0']],
+  ['a period too long to mean anything', ['--baseline', '30%', '--rr', '0.8', '--over', '5', '--to', '5000'], ['--to', '"5000"', 'at most 1000 years']],
   ['a negative follow-up', ['--baseline', '30%', '--rr', '0.8', '--followup', '-2'], ['--followup', '"-2"', 'greater than 0']],
   ['a ratio without a baseline', ['--rr', '0.8'], ['--rr', '--baseline', '15%']],
   ['a baseline without an effect', ['--baseline', '30%'], ['--rr', '--counts', '--demo']],
@@ -128,6 +134,7 @@ const refusals: readonly [string, readonly string[], readonly string[]][] = [
   ['a truncated topic file', [truncated], [truncated, 'not complete JSON', 'backup']],
   ['a topic file with a field of the wrong type', [wrongType], ['topic.periodYears', 'expected a number', 'the text "ten"']],
   ['a file of another format', [notATopic], [notATopic, 'not a Chancewise topic', '"spreadsheet"']],
+  ['a topic with two problems', [twoProblems], ['title: The decision is empty', 'and 1 more problem in the topic']],
   ['a topic whose baseline is impossible', [impossible], ['outcomes.0.baseline.risk', '"150%"', 'between 0% and 100%']],
 ];
 

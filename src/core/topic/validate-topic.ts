@@ -13,8 +13,9 @@ function checkText(problems: Problem[], value: string, field: string, what: stri
 }
 
 function checkPeriod(problems: Problem[], years: number, field: string): void {
-  if (!Number.isFinite(years) || years <= 0 || years > TOPIC_LIMITS.maxPeriodYears) {
-    problems.push(problem('period-not-positive', field, { input: String(years) }));
+  if (!Number.isFinite(years) || years <= 0) problems.push(problem('period-not-positive', field, { input: String(years) }));
+  else if (years > TOPIC_LIMITS.maxPeriodYears) {
+    problems.push(problem('period-too-long', field, { input: String(years), limit: TOPIC_LIMITS.maxPeriodYears }));
   }
 }
 

@@ -48,7 +48,8 @@ describe('validateTopic', () => {
     ['a population too long', (t) => { t.population = 'x'.repeat(TOPIC_LIMITS.populationLength + 1); }, { code: 'topic-text-too-long', field: 'population' }],
     ['a period of zero years', (t) => { t.periodYears = 0; }, { code: 'period-not-positive', field: 'periodYears' }],
     ['a negative period', (t) => { t.periodYears = -5; }, { code: 'period-not-positive', field: 'periodYears' }],
-    ['a period beyond the limit', (t) => { t.periodYears = TOPIC_LIMITS.maxPeriodYears + 1; }, { code: 'period-not-positive', field: 'periodYears' }],
+    ['a period beyond the limit', (t) => { t.periodYears = TOPIC_LIMITS.maxPeriodYears + 1; }, { code: 'period-too-long', field: 'periodYears' }],
+    ['a follow-up beyond the limit', (t) => { effectOf(t, 0, 0).followUpYears = 250; }, { code: 'period-too-long', field: 'outcomes.0.effects.0.followUpYears' }],
     ['an evidence summary too long', (t) => { t.evidence.summary = 'x'.repeat(TOPIC_LIMITS.evidenceSummaryLength + 1); }, { code: 'topic-text-too-long', field: 'evidence.summary' }],
     ['a clinician name too long', (t) => { t.clinician = 'x'.repeat(TOPIC_LIMITS.clinicianLength + 1); }, { code: 'topic-text-too-long', field: 'clinician' }],
     ['too many questions', (t) => { t.questions = Array.from({ length: TOPIC_LIMITS.maxQuestions + 1 }, (_, index) => `Question ${index}?`); }, { code: 'topic-text-too-long', field: 'questions' }],
@@ -191,11 +192,13 @@ describe('validateTopic', () => {
     topic.title = '';
     outcomeOf(topic, 0).baseline.risk = '15';
     effectOf(topic, 1, 1).effect = { measure: 'rr', estimate: 30 };
+    outcomeOf(topic, 2).baseline.periodYears = 150;
     const sentences = validateTopic(topic as Topic).map((found) => describeProblem(found));
     expect(sentences).toEqual([
       'The decision is empty. Write a short decision.',
       'A risk of "15" is ambiguous: write 15% or 0.15.',
       'A risk ratio of 30 at a baseline risk of 5% would mean a risk of 150%. Check the numbers, or enter the effect as an odds ratio.',
+      'A period of "150" years is too long: write at most 100 years, for example 10.',
     ]);
   });
 });

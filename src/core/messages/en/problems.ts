@@ -54,6 +54,8 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `A ${measure(v)} of ${text(v, 'value')} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}, outside 0% to 100%. Check the numbers.`,
   'period-not-positive': (v) =>
     `A period of "${text(v, 'input')}" years is not possible. Write a number of years greater than 0, for example 10.`,
+  'period-too-long': (v) =>
+    `A period of "${text(v, 'input')}" years is too long: write at most ${text(v, 'limit')} years, for example 10.`,
   'period-pair-incomplete': () =>
     'Give both the period the baseline risk covers and the period wanted (--over YEARS --to YEARS), or neither.',
   'counts-not-whole': (v) => `"${text(v, 'input')}" is not a whole number of people. Write counts like 12/100.`,
