@@ -42,7 +42,7 @@ function completeVersion(text: string): number | null {
     const data = JSON.parse(text) as { format?: unknown; generation?: unknown; payload?: unknown };
     if (data.format !== 'crash-test' || typeof data.generation !== 'number' || typeof data.payload !== 'string') return null;
     const letter = String.fromCharCode(97 + (data.generation % 26));
-    if (data.payload.length !== 256 * 1024 || data.payload !== letter.repeat(256 * 1024)) return null;
+    if (data.payload.length !== 64 * 1024 || data.payload !== letter.repeat(64 * 1024)) return null;
     return data.generation;
   } catch {
     return null;
@@ -51,14 +51,14 @@ function completeVersion(text: string): number | null {
 
 /** A pseudo-random delay from a seed (Park and Miller 1988, "minimal standard" generator). */
 function delayFor(seed: number): number {
-  return ((seed * 16_807) % 2_147_483_647) % 60;
+  return ((seed * 16_807) % 2_147_483_647) % 40;
 }
 
 async function runOnce(index: number): Promise<{ generation: number; backup: number | null; leftovers: number }> {
   const folder = path.join(base, `run-${index}`);
   await fs.mkdir(folder);
   const target = path.join(folder, 'topic.cwtopic');
-  await fs.writeFile(target, `${JSON.stringify({ format: 'crash-test', generation: 0, payload: 'a'.repeat(256 * 1024) })}\n`);
+  await fs.writeFile(target, `${JSON.stringify({ format: 'crash-test', generation: 0, payload: 'a'.repeat(64 * 1024) })}\n`);
 
   const process_ = spawn(process.execPath, [child, target], { stdio: ['ignore', 'pipe', 'pipe'] });
   let errors = '';
@@ -113,6 +113,7 @@ describe('saveWithBackup() under SIGKILL', () => {
       expect(results.some((result) => result.generation > 0)).toBe(true);
       expect(results.some((result) => result.leftovers > 0)).toBe(true);
     },
-    20_000,
+    // About 6 s on an idle two-core machine; the limit leaves room for a machine busy with other suites.
+    60_000,
   );
 });
