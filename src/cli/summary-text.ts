@@ -4,7 +4,8 @@ import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { Estimate, Notice } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
-const percent = (value: number): string => formatPercent(value, 1);
+/** One decimal, or two below 1% so that a small risk such as 0.15% is not shown as 0.1%. */
+const percent = (value: number): string => formatPercent(value, value > 0 && value < 0.01 ? 2 : 1);
 const points = (value: number): string => formatDecimal(value * 100, 1).replace(/^-/, '−');
 
 function withRange(value: Estimate, show: (number: number) => string): string {

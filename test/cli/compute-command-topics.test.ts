@@ -141,4 +141,11 @@ describe('chancewise compute with a topic', () => {
     }
     expect(found.stdout).not.toMatch(/NaN|Infinity|undefined/);
   });
+
+  it('shows a risk below 1% with two decimals, so 0.15% is not printed as 0.1%', async () => {
+    // Screening demo, bleeding: 5 per 10000 plus 0.1% (0.05% to 0.16%) → 0.15% (0.1% to 0.21%) (derived).
+    const found = await run(['compute', join(DEMO_FOLDER, '02-bowel-screening.json')]);
+    expect(found.stdout).toContain('Risk without the option: 0.05%');
+    expect(found.stdout).toContain('Risk with the option:    0.15% (0.1% to 0.21%)');
+  });
 });
