@@ -6,17 +6,24 @@
 import { formatPercent } from '../../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
 
+/** A value and, when there is one, its range: shown as the value with the range beneath. */
+export interface RangedText {
+  readonly value: string;
+  readonly range: string | null;
+}
+
 export interface KeyNumberRow {
   readonly optionId: string;
   readonly name: string;
   readonly isComparison: boolean;
-  /** People with the outcome per denominator, with the range when there is one: "11 (10 to 12)". */
-  readonly people: string;
-  /** Against the comparison: "4 fewer (3 to 5 fewer)", "2 more", "no change"; null for the comparison. */
-  readonly change: string | null;
-  readonly risk: string;
-  /** The core's NNT text; null for the comparison. */
-  readonly nnt: string | null;
+  /** People with the outcome per denominator: "11", range "10 to 12". */
+  readonly people: RangedText;
+  /** Against the comparison: "4 fewer", range "3 to 5 fewer"; null for the comparison. */
+  readonly change: RangedText | null;
+  /** The absolute risk: "11.2%", range "10.2 to 12.4%". */
+  readonly risk: RangedText;
+  /** The core's NNT text, its interval beneath: "NNTB 27", range "NNTB 21 to 40"; null for the comparison. */
+  readonly nnt: RangedText | null;
 }
 
 export interface KeyNumberTable {
@@ -47,10 +54,17 @@ export function riskPercent(risk: number): string {
   return formatPercent(risk, 1);
 }
 
-function riskText(option: OptionOutcomeResult): string {
+function riskText(option: OptionOutcomeResult): RangedText {
   const { estimate, lower, upper } = option.interventionRisk;
-  if (option.isComparison || lower === null || upper === null) return riskPercent(estimate);
-  return `${riskPercent(estimate)} (${riskPercent(lower).replace('%', '')} to ${riskPercent(upper)})`;
+  if (option.isComparison || lower === null || upper === null) return { value: riskPercent(estimate), range: null };
+  return { value: riskPercent(estimate), range: `${riskPercent(lower).replace('%', '')} to ${riskPercent(upper)}` };
+}
+
+/** The core's NNT text split into its estimate and its bracketed interval. */
+export function splitNntText(text: string): RangedText {
+  const open = text.indexOf(' (');
+  if (open === -1 || !text.endsWith(')')) return { value: text, range: null };
+  return { value: text.slice(0, open), range: text.slice(open + 2, -1) };
 }
 
 function row(option: OptionOutcomeResult): KeyNumberRow {
@@ -61,14 +75,12 @@ function row(option: OptionOutcomeResult): KeyNumberRow {
     optionId: option.optionId,
     name: option.name,
     isComparison: option.isComparison,
-    people: range === null ? String(count) : `${count} (${range.lower} to ${range.upper})`,
+    people: { value: String(count), range: range === null ? null : `${range.lower} to ${range.upper}` },
     change: option.isComparison
       ? null
-      : range === null
-        ? changeWords(people.difference)
-        : `${changeWords(people.difference)} (${changeRangeWords(people.comparison, range)})`,
+      : { value: changeWords(people.difference), range: range === null ? null : changeRangeWords(people.comparison, range) },
     risk: riskText(option),
-    nnt: option.isComparison ? null : option.nnt.text,
+    nnt: option.isComparison ? null : splitNntText(option.nnt.text),
   };
 }
 

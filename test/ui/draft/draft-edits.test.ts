@@ -1,0 +1,81 @@
+import { describe, expect, test } from 'vitest';
+import { TOPIC_LIMITS } from '../../../src/core/topic/topic.ts';
+import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
+import {
+  addOption,
+  addOutcome,
+  addQuestion,
+  blankDraft,
+  moveOption,
+  removeOption,
+  removeOutcome,
+  setComparison,
+  setEffectField,
+  setHeadline,
+} from '../../../src/ui/draft/draft-edits.ts';
+import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+
+const first = DEMO_TOPICS[0];
+if (first === undefined) throw new Error('no demonstration topic');
+const demo = draftFromTopic(first.topic);
+
+describe('draft edits', () => {
+  test('addOption adds an option with a blank effect on every outcome, up to the limit', () => {
+    const once = addOption(demo);
+    expect(once.optionId).toBe('option-1');
+    expect(once.draft.options).toHaveLength(4);
+    expect(once.draft.outcomes.every((outcome) => outcome.effects.some((entry) => entry.optionId === 'option-1'))).toBe(true);
+    const again = addOption(once.draft);
+    expect(again.optionId).toBeNull();
+    expect(again.draft.options).toHaveLength(TOPIC_LIMITS.maxOptions);
+  });
+
+  test('removeOption keeps at least the minimum and passes the comparison on', () => {
+    const removed = removeOption(demo, 'none');
+    expect(removed.options.map((option) => [option.id, option.isComparison])).toEqual([
+      ['standard', true],
+      ['higher', false],
+    ]);
+    expect(removeOption(removed, 'standard')).toBe(removed);
+    expect(removed.options).toHaveLength(TOPIC_LIMITS.minOptions);
+  });
+
+  test('setComparison keeps what was typed for the old comparison’s effects', () => {
+    const typed = setEffectField(demo, 'muscle', 'higher', 'estimate', '1.45');
+    const swapped = setComparison(setComparison(typed, 'higher'), 'none');
+    expect(swapped.outcomes[1]?.effects.find((entry) => entry.optionId === 'higher')?.estimate).toBe('1.45');
+  });
+
+  test('moveOption moves an option by one place and not past either end', () => {
+    expect(moveOption(demo, 'higher', -1).options.map((option) => option.id)).toEqual(['none', 'higher', 'standard']);
+    expect(moveOption(demo, 'none', -1)).toBe(demo);
+  });
+
+  test('addOutcome adds up to the outcome limit over the topic’s period', () => {
+    let draft = blankDraft();
+    for (let count = 1; count < TOPIC_LIMITS.maxOutcomes; count += 1) draft = addOutcome(draft, 'harm').draft;
+    expect(draft.outcomes).toHaveLength(TOPIC_LIMITS.maxOutcomes);
+    expect(draft.outcomes[1]?.baselinePeriodYears).toBe(draft.periodYears);
+    expect(addOutcome(draft, 'benefit').outcomeId).toBeNull();
+  });
+
+  test('removeOutcome keeps one outcome and passes the headline on', () => {
+    const removed = removeOutcome(demo, 'heart-stroke');
+    expect(removed.outcomes.map((outcome) => [outcome.id, outcome.isHeadline])).toEqual([
+      ['muscle', true],
+      ['diabetes', false],
+    ]);
+    const single = removeOutcome(removeOutcome(removed, 'muscle'), 'diabetes');
+    expect(single.outcomes).toHaveLength(TOPIC_LIMITS.minOutcomes);
+  });
+
+  test('setHeadline marks exactly one outcome', () => {
+    expect(setHeadline(demo, 'diabetes').outcomes.map((outcome) => outcome.isHeadline)).toEqual([false, false, true]);
+  });
+
+  test('addQuestion stops at the question limit', () => {
+    let draft = blankDraft();
+    for (let count = 0; count < TOPIC_LIMITS.maxQuestions + 2; count += 1) draft = addQuestion(draft);
+    expect(draft.questions).toHaveLength(TOPIC_LIMITS.maxQuestions);
+  });
+});

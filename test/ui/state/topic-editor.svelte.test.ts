@@ -1,0 +1,119 @@
+// @vitest-environment jsdom
+import { describe, expect, test } from 'vitest';
+import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
+import { blankDraft, setOutcomeText, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
+import { outcomeKey } from '../../../src/ui/draft/field-keys.ts';
+import { Autosave } from '../../../src/ui/state/autosave.ts';
+import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
+import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+
+const first = DEMO_TOPICS[0];
+if (first === undefined) throw new Error('no demonstration topic');
+const demo = draftFromTopic(first.topic);
+const baselineKey = outcomeKey('heart-stroke', 'baseline.risk');
+
+/** An editor with a clock and a scheduler the test controls. */
+function setUp() {
+  let time = 0;
+  const tasks: (() => void)[] = [];
+  const storage = new MemoryStorage();
+  const autosave = new Autosave(storage);
+  const editor = new TopicEditor(demo, {
+    autosave,
+    now: () => time,
+    today: () => new Date(Date.UTC(2026, 10, 3, 9, 30)),
+    schedule: (task) => {
+      tasks.push(task);
+      return () => tasks.splice(tasks.indexOf(task), 1);
+    },
+  });
+  const type = (key: string, texts: readonly string[], gap = 100) => {
+    for (const text of texts) {
+      time += gap;
+      editor.change((draft) => setOutcomeText(draft, 'heart-stroke', 'baselineRisk', text), key);
+    }
+  };
+  return { editor, autosave, storage, tasks, type, advance: (by: number) => (time += by) };
+}
+
+describe('TopicEditor', () => {
+  test('starts with the results of its draft, up to date and without unsaved changes', () => {
+    const { editor } = setUp();
+    expect(editor.shown?.title).toBe(first.topic.title);
+    expect(editor.stale).toBe(false);
+    expect(editor.hasUnsavedChanges).toBe(false);
+    expect(editor.canUndo).toBe(false);
+  });
+
+  test('updates the numbers as the baseline changes', () => {
+    const { editor, type } = setUp();
+    type(baselineKey, ['2', '20', '20%']);
+    const comparison = editor.shown?.outcomes[0]?.options.find((option) => option.isComparison);
+    expect(comparison?.perPeople.comparison).toBe(20);
+    expect(editor.stale).toBe(false);
+  });
+
+  test('keeps the typed text while it is invalid, and shows the last valid results as out of date', () => {
+    const { editor, type } = setUp();
+    type(baselineKey, ['2', '20', '20%']);
+    type(baselineKey, ['20%%'], 5000);
+    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('20%%');
+    expect(editor.problemsFor(baselineKey).map((found) => found.problem.code)).toEqual(['risk-unparsable']);
+    expect(editor.stale).toBe(true);
+    expect(editor.shown?.outcomes[0]?.options[0]?.perPeople.comparison).toBe(20);
+  });
+
+  test('undo takes back a whole word typed into one field, and redo brings it back', () => {
+    const { editor, type } = setUp();
+    type(baselineKey, ['2', '20', '20%']);
+    expect(editor.undo()).toBe(true);
+    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('15%');
+    expect(editor.canRedo).toBe(true);
+    expect(editor.redo()).toBe(true);
+    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('20%');
+  });
+
+  test('loading another topic can be undone', () => {
+    const { editor } = setUp();
+    editor.load(blankDraft(), { fileName: null, saved: true });
+    expect(editor.draft.title).toBe('');
+    editor.undo();
+    expect(editor.draft.title).toBe(first.topic.title);
+  });
+
+  test('knows about unsaved changes until the draft is saved or changed back', () => {
+    const { editor } = setUp();
+    editor.change((draft) => setTopicText(draft, 'title', 'Another title'), 'title');
+    expect(editor.hasUnsavedChanges).toBe(true);
+    editor.undo();
+    expect(editor.hasUnsavedChanges).toBe(false);
+    editor.redo();
+    editor.markSaved('mine.chancewise.json');
+    expect(editor.hasUnsavedChanges).toBe(false);
+    expect(editor.fileName).toBe('mine.chancewise.json');
+  });
+
+  test('autosaves once after a burst of changes, without the patient’s details', () => {
+    const { editor, autosave, tasks, type } = setUp();
+    editor.change((draft) => setTopicText(draft, 'patientName', 'Ann Example'), 'patientName');
+    type(baselineKey, ['1', '12', '12%']);
+    expect(tasks).toHaveLength(1);
+    tasks[0]?.();
+    const saved = autosave.load();
+    expect(saved?.draft.outcomes[0]?.baselineRisk).toBe('12%');
+    expect(saved?.draft.patientName).toBe('');
+    expect(saved?.unsaved).toBe(true);
+    expect(saved?.savedAt).toBe('2026-11-03T09:30:00.000Z');
+  });
+
+  test('switches between 100 and 1000 people, also for out-of-date results', () => {
+    const { editor, type } = setUp();
+    editor.setPer(1000);
+    expect(editor.shown?.denominator).toBe(1000);
+    type(baselineKey, ['x']);
+    editor.setPer(100);
+    expect(editor.stale).toBe(true);
+    expect(editor.shown?.denominator).toBe(100);
+  });
+});
