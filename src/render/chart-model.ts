@@ -212,6 +212,9 @@ function buildArray(
   if (arm.groups.denominator !== context.denominator) {
     throw new RangeError(`outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`);
   }
+  if (arm.role === 'comparison' && (arm.groups.prevented !== 0 || arm.groups.caused !== 0)) {
+    throw new RangeError(`outcomeChart requires the comparison to have only event and free people (${arm.name})`);
+  }
   const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears };
   const title = context.bare
     ? messages.pairTitle(titleValues, arm.role)

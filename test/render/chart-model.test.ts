@@ -42,7 +42,7 @@ describe('outcomeChart', () => {
 
   it('states the option’s interval as people and which ranks it makes uncertain', () => {
     const range = outcomeChart(result, 'stroke').arrays[1]!.range!;
-    expect(range.text).toBe('With option A, the number who have a stroke could be anywhere between 12 and 18 of these 100.');
+    expect(range.text).toBe('With option A, anywhere between 12 and 18 of these 100 could have a stroke.');
     expect(range.uncertain).toEqual({ from: 12, to: 18 });
     expect(outcomeChart(result, 'stroke').arrays[0]!.range).toBeNull();
   });
@@ -71,6 +71,22 @@ describe('outcomeChart', () => {
   it('rejects an unknown outcome or option', () => {
     expect(() => outcomeChart(result, 'falls')).toThrow(RangeError);
     expect(() => outcomeChart(result, 'stroke', { optionIds: ['b'] })).toThrow(RangeError);
+  });
+
+  it('rejects an option counted per another denominator than the topic', () => {
+    const mixed = topicFixture();
+    const outcome = mixed.outcomes[0]!;
+    const perThousand = { ...outcome.options[1]!, groups: { denominator: 1000 as const, event: 150, prevented: 40, caused: 0, free: 810 } };
+    const broken = { ...mixed, outcomes: [{ ...outcome, options: [outcome.options[0]!, perThousand] }] };
+    expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
+  });
+
+  it('rejects a comparison with people the option changed', () => {
+    const mixed = topicFixture();
+    const outcome = mixed.outcomes[0]!;
+    const comparison = { ...outcome.options[0]!, groups: { denominator: 100 as const, event: 15, prevented: 4, caused: 0, free: 81 } };
+    const broken = { ...mixed, outcomes: [{ ...outcome, options: [comparison, outcome.options[1]!] }] };
+    expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
   });
 
   it('passes the arrangement and seed on to every array', () => {

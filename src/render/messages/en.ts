@@ -103,9 +103,9 @@ export const chartMessagesEn: ChartMessages = {
   /** When an option changes nothing at these numbers. */
   noDifference: (outcome: string, option: string) =>
     `The same number have ${outcome} with and without ${option}.`,
-  /** The option's interval as people: "With option A, the number who have a stroke could be anywhere between 13 and 18 of these 100." */
+  /** The option's interval as people: "With option A, anywhere between 13 and 18 of these 100 could have a stroke." */
   range: ({ lower, upper, denominator, outcome, option }: RangeValues) =>
-    `With ${option}, the number who have ${outcome} could be anywhere between ${lower} and ${upper} of these ${denominator}.`,
+    `With ${option}, anywhere between ${lower} and ${upper} of these ${denominator} could have ${outcome}.`,
   /** Legend line for the outlined people drawn when the range is shown. */
   rangeOutline: (outcome: string, option: string) =>
     `Dotted outline: people who may or may not have ${outcome} with ${option}, depending on where in that range the truth lies.`,

@@ -15,6 +15,8 @@ import { svgNumber } from './svg-number.ts';
 
 type Root = Selection<SVGSVGElement, unknown, null, undefined>;
 
+const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
+
 /** Draw `model` into `svgElement`, replacing its content. Returns the frame drawn. */
 export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options: SvgChartOptions = {}): ChartFrame {
   const resolved = resolveSvgOptions(model, options);
@@ -32,11 +34,13 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     if (placed === undefined) return;
     const group = svg.append('g').attr('class', 'chart-array').attr('data-option-id', array.optionId);
     drawArrayText(group.append('g').attr('class', 'array-text').attr('aria-hidden', 'true'), array, placed, resolved);
-    const people = group
-      .append('g')
+    // Fill the people's group while it is detached, then attach it once.
+    const people = select(svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g'))
       .attr('class', 'people')
       .attr('transform', `translate(${svgNumber(placed.grid.x)},${svgNumber(placed.grid.y)})`);
     drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange), resolved.palette, ids);
+    const node = people.node();
+    if (node !== null) group.node()?.appendChild(node);
   });
   return frame;
 }

@@ -44,7 +44,7 @@ export function drawPeople(
     .attr('d', (person) => placeGlyphPath(path, person.x, person.y))
     .attr('data-outcome', (person) => person.group)
     .each(function paint(person) {
-      applyLook(this, looks[person.index] ?? { group: person.group, uncertain: false }, palette, patternIds, cellSize);
+      applyLook(this, looks[person.index] ?? { group: person.group, uncertain: false }, palette, patternIds, cellSize, true);
     });
 }
 
@@ -74,11 +74,20 @@ export function updatePeople(
   return changed;
 }
 
-function applyLook(element: SVGPathElement, look: PersonLook, palette: ChartPalette, patternIds: PatternIds, cellSize: number): void {
+function applyLook(
+  element: SVGPathElement,
+  look: PersonLook,
+  palette: ChartPalette,
+  patternIds: PatternIds,
+  cellSize: number,
+  fresh = false,
+): void {
   const paint = personPaint(palette, look.uncertain ? 'uncertain' : look.group, patternIds, cellSize);
   element.setAttribute('fill', paint.fill);
   element.setAttribute('stroke', paint.stroke);
   if (paint.dash === null) {
+    // A new element has nothing to remove; skipping the calls keeps the first draw fast.
+    if (fresh) return;
     element.removeAttribute('stroke-dasharray');
     element.removeAttribute('stroke-width');
   } else {

@@ -42,7 +42,7 @@ describe('chartMessagesEn', () => {
 
   it('states the range as people out of the denominator', () => {
     expect(messages.range({ lower: 3, upper: 7, denominator: 100, outcome: 'a stroke', option: 'option A' })).toBe(
-      'With option A, the number who have a stroke could be anywhere between 3 and 7 of these 100.',
+      'With option A, anywhere between 3 and 7 of these 100 could have a stroke.',
     );
   });
 

@@ -108,7 +108,7 @@ describe('renderChartSvg accessibility', () => {
       '95 do not have muscle pain',
     ]);
     expect([...svg.querySelectorAll('text.legend-note')].map(lineText)).toEqual([
-      'With option A, the number who have muscle pain could be anywhere between 4 and 7 of these 100.',
+      'With option A, anywhere between 4 and 7 of these 100 could have muscle pain.',
     ]);
   });
 });
