@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { PersonGroup } from '../../../src/core/types.ts';
 import { type ChartModel, outcomeChart, pairChart } from '../../../src/render/chart-model.ts';
 import { blackAndWhitePalette } from '../../../src/render/palette.ts';
+import { svgForExport } from '../../../src/render/export/svg-for-export.ts';
 import { renderChartSvg } from '../../../src/render/svg/render-chart-svg.ts';
 import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, lineText, outcomeCounts, parseSvg, testDocument } from './parse-svg.ts';
@@ -164,5 +165,11 @@ describe('renderChartSvg output', () => {
   it('draws in a fresh jsdom document when none is given, with the same result', () => {
     const model = outcomeChart(topicFixture(), 'stroke');
     expect(renderChartSvg(model)).toBe(render(model));
+  });
+
+  it('becomes a standalone file 180 mm wide that still parses, with every person', () => {
+    const svg = parseSvg(svgForExport(render(outcomeChart(topicFixture(), 'stroke'))));
+    expect(svg.getAttribute('width')).toBe('180mm');
+    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
   });
 });
