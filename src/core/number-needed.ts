@@ -9,8 +9,15 @@ function wholeNeeded(difference: number): number {
   return ceilWhole(1 / Math.abs(difference));
 }
 
-function intervalText(lower: number, upper: number, words: Words): string {
+/** A difference so small that its reciprocal is not a finite number counts as no difference. */
+function asDifference(value: number): number {
+  return Number.isFinite(1 / Math.abs(value)) ? value : 0;
+}
+
+function intervalText(rawLower: number, rawUpper: number, words: Words): string {
   const { infinity, to } = words;
+  const lower = asDifference(rawLower);
+  const upper = asDifference(rawUpper);
   if (lower > 0) return `NNTB ${wholeNeeded(upper)} ${to} ${wholeNeeded(lower)}`;
   if (upper < 0) return `NNTH ${wholeNeeded(lower)} ${to} ${wholeNeeded(upper)}`;
   if (lower === 0 && upper === 0) return `${infinity}`;
@@ -28,7 +35,8 @@ function intervalText(lower: number, upper: number, words: Words): string {
  * @example numberNeeded({ estimate: 0.1, lower: -0.05, upper: 0.25 }).text // => "NNTB 10 (NNTB 4 to ∞ to NNTH 20)"
  */
 export function numberNeeded(difference: Estimate, words: Words = english.numbers): NumberNeeded {
-  const { estimate, lower, upper } = difference;
+  const { lower, upper } = difference;
+  const estimate = asDifference(difference.estimate);
   const interval = lower === null || upper === null ? null : intervalText(lower, upper, words);
   if (estimate === 0) {
     const text = interval === null ? words.noDifference : words.noDifferenceWithin(interval);

@@ -15,6 +15,7 @@ export type ProblemCode =
   | 'risk-out-of-range'
   | 'baseline-out-of-range'
   | 'baseline-missing'
+  | 'trial-baseline-unusable'
   | 'percent-unparsable'
   | 'level-out-of-range'
   // effects

@@ -64,8 +64,8 @@ const refusals: readonly [string, readonly string[], readonly string[]][] = [
   ['a relative reduction that is not a percentage', ['--baseline', '30%', '--rrr', 'abc%'], ['--rrr', '"abc%"', '25 or 25%']],
   ['a risk ratio pushing the risk above 100%', ['--baseline', '60%', '--rr', '2'], ['--rr', '120%', 'odds ratio']],
   ['an interval limit pushing the risk above 100%', ['--baseline', '30%', '--rr', '2', '--ci', '1.5,3.5'], ['--ci', '3.5', '105%', 'odds ratio']],
-  ['an absolute reduction larger than the baseline', ['--baseline', '30%', '--arr', '40%'], ['--arr', '0.4', '-10%', '0% to 100%']],
-  ['an absolute increase pushing the risk above 100%', ['--baseline', '30%', '--arr', '-80%'], ['--arr', '-0.8', '110%']],
+  ['an absolute reduction larger than the baseline', ['--baseline', '30%', '--arr', '40%'], ['--arr', '40%', '-10%', '0% to 100%']],
+  ['an absolute increase pushing the risk above 100%', ['--baseline', '30%', '--arr', '-80%'], ['--arr', '-80%', '110%']],
   ['an increase entered as a negative relative reduction beyond 100%', ['--baseline', '50%', '--rrr', '-150'], ['--rrr', '-150', '125%']],
   // intervals
   ['an interval that does not contain its estimate', ['--baseline', '30%', '--rr', '0.8', '--ci', '0.85,0.95'], ['--ci', '0.85 to 0.95', 'estimate 0.8']],

@@ -77,3 +77,14 @@ describe('the NNT is rounded up but float-safe', () => {
     expect(ceilWhole(16.21)).toBe(17);
   });
 });
+
+describe('numberNeeded never lets Infinity out', () => {
+  it('treats a difference too small to invert as no difference', () => {
+    const result = numberNeeded({ estimate: 1e-320, lower: null, upper: null });
+    expect(result.label).toBeNull();
+    expect(result.text).not.toMatch(/Infinity/);
+  });
+  it('treats an interval limit too small to invert as no effect (∞)', () => {
+    expect(numberNeeded({ estimate: 0.1, lower: 1e-320, upper: 0.25 }).text).toBe('NNTB 10 (NNTB 4 to ∞)');
+  });
+});

@@ -92,7 +92,12 @@ function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, in
     const periodOk = outcome.baseline.periodYears > 0 && topic.periodYears > 0;
     const fromTrial = baseline === null && entry.effect.measure === 'counts' ? trialBaseline(entry.effect) : null;
     if (baseline === null && (fromTrial === null || fromTrial <= 0 || fromTrial >= 1)) {
-      problems.push(problem('baseline-missing', `${field}.baseline.risk`));
+      const arm = entry.effect.measure === 'counts' ? `${entry.effect.comparison.events}/${entry.effect.comparison.total}` : '';
+      problems.push(
+        entry.effect.measure === 'counts'
+          ? problem('trial-baseline-unusable', `${field}.baseline.risk`, { arm })
+          : problem('baseline-missing', `${field}.baseline.risk`),
+      );
       return;
     }
     collect(problems, () => {

@@ -224,10 +224,11 @@ describe('validateTopic with trial counts', () => {
     expect(only(validateTopic(topic as Topic))).toEqual([{ code, field: 'outcomes.1.effects.0.effect.intervention' }]);
   });
 
-  it('reports a missing baseline when the trial’s comparison arm has no events to use', () => {
+  it('reports an unusable trial baseline when the trial’s comparison arm has no events to use', () => {
     const topic = fracture();
     effectOf(topic, 0, 0).effect = { measure: 'counts', intervention: { events: 5, total: 1000 }, comparison: { events: 0, total: 1000 } };
-    expect(only(validateTopic(topic as Topic))).toEqual([{ code: 'baseline-missing', field: 'outcomes.0.baseline.risk' }]);
+    expect(only(validateTopic(topic as Topic))).toEqual([{ code: 'trial-baseline-unusable', field: 'outcomes.0.baseline.risk' }]);
+    expect(describeProblem(validateTopic(topic as Topic)[0]!)).toContain('0/1000');
   });
 
   it('reads the trial baseline from the comparison arm', () => {

@@ -33,8 +33,8 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     'A cell of the trial table is 0, so 0.5 was added to every cell to compute the ratios (Haldane–Anscombe correction).',
   'counts-ratios-undefined': () =>
     'The risk ratio and odds ratio cannot be computed: neither arm has an event, or both arms are all events.',
-  'counts-baseline-from-trial': () =>
-    'No baseline risk was given, so the trial’s comparison arm was used as the baseline. The patient’s own risk may differ.',
+  'counts-baseline-from-trial': (v) =>
+    `No baseline risk was given${v.outcome === undefined ? '' : ` for ${text(v, 'outcome')}`}, so the trial’s comparison arm was used as the baseline. The patient’s own risk may differ.`,
   'hr-proportional-hazards': () =>
     'The hazard ratio was applied assuming proportional hazards over the whole period.',
   'denominator-raised': () =>

@@ -17,6 +17,25 @@ const measureNames: Record<string, string> = {
   arr: 'absolute risk reduction',
 };
 const measure = (values: ProblemValues): string => measureNames[text(values, 'measure')] ?? 'effect';
+/** The measure with its article: "a risk ratio", "an odds ratio". */
+const aMeasure = (values: ProblemValues): string => {
+  const name = measure(values);
+  return /^[aeiou]/.test(name) ? `an ${name}` : `a ${name}`;
+};
+/** A value of the measure as the clinician typed it: percent for reductions, plain for ratios. */
+const measureValue = (values: ProblemValues, key: string): string => {
+  const value = values[key];
+  if (typeof value !== 'number') return String(value ?? '');
+  const kind = text(values, 'measure');
+  if (kind === 'arr') return formatPercent(value);
+  if (kind === 'rrr') return `${String(value)}%`;
+  return String(value);
+};
+/** The fix to suggest when a risk would leave 0% to 100%: an odds ratio only for risk and hazard ratios. */
+const outsideFix = (values: ProblemValues, what: string): string =>
+  text(values, 'measure') === 'rr' ? `Check the ${what}, or enter the effect as an odds ratio.` : `Check the ${what}.`;
+
+const capitalise = (phrase: string): string => phrase.charAt(0).toUpperCase() + phrase.slice(1);
 
 /** English sentences for every problem code: what is wrong, and how to fix it. */
 export const problemMessages: Record<ProblemCode, Render> = {
@@ -32,13 +51,15 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `A risk of "${text(v, 'input')}" is outside 0% to 100%. A risk must lie between 0% and 100%.`,
   'baseline-out-of-range': (v) =>
     `A baseline risk of ${percent(v, 'risk')} is not possible here: it must be more than 0% and less than 100%.`,
+  'trial-baseline-unusable': (v) =>
+    `The trial’s comparison arm (${text(v, 'arm')}) cannot stand in for the baseline risk: it must be more than 0% and less than 100%. Give the patient’s baseline risk, for example 15%.`,
   'baseline-missing': () =>
     'A baseline risk is needed to apply a risk ratio, odds ratio, hazard ratio or relative reduction. Give the patient’s risk, for example 15%.',
   'percent-unparsable': (v) => `"${text(v, 'input')}" is not a percentage. Write it as 25 or 25%.`,
   'level-out-of-range': (v) =>
     `An interval level of "${text(v, 'input')}" is not possible. Write a level between 50% and 99.9%, for example 0.95 or 95%.`,
   'ratio-not-positive': (v) =>
-    `A ${measure(v)} of ${text(v, 'value')} is not possible: it must be greater than 0.`,
+    `${capitalise(aMeasure(v))} of ${text(v, 'value')} is not possible: it must be greater than 0.`,
   'rrr-out-of-range': (v) =>
     `A relative risk reduction of ${text(v, 'value')}% is not possible: it must be less than 100%.`,
   'arr-out-of-range': (v) =>
@@ -49,9 +70,9 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'rr-risk-above-one': (v) =>
     `A risk ratio of ${text(v, 'ratio')} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}. Check the numbers, or enter the effect as an odds ratio.`,
   'limit-risk-outside': (v) =>
-    `The interval limit ${text(v, 'limit')} of the ${measure(v)} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}, outside 0% to 100%. Check the interval, or enter the effect as an odds ratio.`,
+    `The interval limit ${measureValue(v, 'limit')} of the ${measure(v)} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}, outside 0% to 100%. ${outsideFix(v, 'interval')}`,
   'risk-outside': (v) =>
-    `A ${measure(v)} of ${text(v, 'value')} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}, outside 0% to 100%. Check the numbers.`,
+    `${capitalise(aMeasure(v))} of ${measureValue(v, 'value')} at a baseline risk of ${percent(v, 'baseline')} would mean a risk of ${percent(v, 'risk')}, outside 0% to 100%. ${outsideFix(v, 'numbers')}`,
   'period-not-positive': (v) =>
     `A period of "${text(v, 'input')}" years is not possible. Write a number of years greater than 0, for example 10.`,
   'period-too-long': (v) =>
