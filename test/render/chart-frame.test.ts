@@ -7,7 +7,7 @@ import { topicFixture } from './topic-fixture.ts';
 describe('chartFrame', () => {
   const model = outcomeChart(topicFixture(), 'stroke');
 
-  // Risk-communication R2.6 (Zikmund-Fisher et al. 2008, 2010): options side by side with the
+  // Zikmund-Fisher, Fagerlin & Ubel (2008, Cancer 113:3382; 2010, Med Decis Making 30:661): options side by side with the
   // same icon size, the same grid and aligned rows.
   it('puts the arrays side by side at the same size, with their grids on one row', () => {
     const frame = chartFrame(model, { width: 720 });

@@ -97,8 +97,8 @@ describe('outcomeChart', () => {
 });
 
 describe('pairChart', () => {
-  // C4-style arithmetic: baseline 20%, RR 0.75 gives 0.20 × 0.75 = 15% (risk-communication C4,
-  // "RR: p1 = p0·RR"); per 100: 20 without, 15 with.
+  // Baseline 20%, RR 0.75 gives 0.20 × 0.75 = 15% (p1 = p0 × RR, Cochrane Handbook 5.1 §12.5.4);
+  // per 100: 20 without, 15 with.
   const perPeople = { denominator: 100 as const, comparison: 20, intervention: 15, difference: 5, interventionRange: null };
 
   it('names the arms “Without the option” and “With the option”', () => {

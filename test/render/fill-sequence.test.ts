@@ -11,7 +11,7 @@ describe('fillSequence', () => {
   });
 
   // Count conservation: events + increment + no event = denominator exactly
-  // (risk-communication check values C6, "common practice" for icon arrays).
+  // (common practice for icon arrays: every person belongs to exactly one group).
   it('rejects counts that do not sum to the denominator', () => {
     expect(() => fillSequence({ denominator: 100, event: 15, prevented: 5, caused: 0, free: 79 })).toThrow(RangeError);
   });

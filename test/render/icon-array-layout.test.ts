@@ -29,10 +29,11 @@ describe('iconArrayLayout for 100 people', () => {
     expect(countOf(layout.people, 'free')).toBe(81);
   });
 
-  // Risk-communication check values C6 [D]: grouped fill, bottom-left and row-wise; row from
+  // Grouped fill from one corner (Ancker et al. 2011, Med Decis Making 31:143; bottom-left and
+  // row-wise is a design choice, common practice): row from
   // top = 9 − floor(i/10), column = i mod 10. For n = 13 the bottom row is full and the second
   // row from the bottom has columns 0–2.
-  it('fills 13 events as the full bottom row and columns 0–2 of the row above (C6)', () => {
+  it('fills 13 events as the full bottom row and columns 0–2 of the row above', () => {
     const layout = iconArrayLayout(100, groups(100, 13));
     const events = layout.people.filter((person) => person.group === 'event');
     const bottomRow = events.filter((person) => person.row === 9).map((person) => person.column);
@@ -42,7 +43,7 @@ describe('iconArrayLayout for 100 people', () => {
     expect(events).toHaveLength(13);
   });
 
-  it('maps index i to row 9 − floor(i / 10) and column i mod 10 (C6)', () => {
+  it('maps index i to row 9 − floor(i / 10) and column i mod 10', () => {
     const layout = iconArrayLayout(100, groups(100, 0));
     for (const person of layout.people) {
       expect(person.row).toBe(9 - Math.floor(person.index / 10));
@@ -87,8 +88,9 @@ describe('iconArrayLayout for 1000 people', () => {
     }
   });
 
-  // C6 [D]: block b = floor(i / 100), with the same rule inside each block.
-  it('numbers blocks as floor(i / 100) and applies the 100-grid rule inside each block (C6)', () => {
+  // Blocks of 100 so people count in hundreds (common practice in published pictographs):
+  // block b = floor(i / 100), with the same rule inside each block.
+  it('numbers blocks as floor(i / 100) and applies the 100-grid rule inside each block', () => {
     const layout = iconArrayLayout(1000, groups(1000, 0));
     for (const person of layout.people) {
       expect(person.block).toBe(Math.floor(person.index / 100));

@@ -8,7 +8,7 @@ const GROUPS: readonly PersonGroup[] = ['event', 'prevented', 'caused', 'free'];
 const PAIRS = GROUPS.flatMap((first, index) => GROUPS.slice(index + 1).map((second) => [first, second] as const));
 
 describe('colourPalette', () => {
-  // Okabe & Ito (2008), Color Universal Design: the palette's hex values (C1).
+  // Okabe & Ito (2008), Color Universal Design: the palette's hex values.
   it('uses the Okabe–Ito blue, bluish green and vermillion for events, benefit and harm', () => {
     expect(OKABE_ITO).toMatchObject({ blue: '#0072B2', bluishGreen: '#009E73', vermillion: '#D55E00' });
     expect(colourPalette.groups.event.fill).toBe(OKABE_ITO.blue);
@@ -60,8 +60,8 @@ describe.each([colourPalette, blackAndWhitePalette])('the $name palette', (palet
 });
 
 describe('colourPalette under simulated colour-vision deficiency', () => {
-  // Machado, Oliveira & Fernandes (2009) at severity 1.0. Two cues everywhere (risk-communication
-  // R5.4): each pair differs by pattern or by ΔE*ab ≥ 20 after simulation, and event, benefit and
+  // Machado, Oliveira & Fernandes (2009) at severity 1.0. Two cues everywhere (WCAG 2.2 SC 1.4.1;
+  // Okabe & Ito 2008, redundant coding): each pair differs by pattern or by ΔE*ab ≥ 20 after simulation, and event, benefit and
   // harm stay apart from no event by colour alone (ΔE*ab ≥ 20; threshold a design choice,
   // common practice for "clearly different" colours).
   it.each(['protanopia', 'deuteranopia', 'tritanopia'] as const)('keeps every pair of groups apart under %s', (deficiency) => {

@@ -3,7 +3,7 @@ import { WCAG_THRESHOLDS, contrastRatio, hexChannels, linearChannel, relativeLum
 
 // W3C, Web Content Accessibility Guidelines (WCAG) 2.2, definitions of "relative luminance" and
 // "contrast ratio"; SC 1.4.3 Contrast (Minimum) and SC 1.4.11 Non-text Contrast. The ratios in
-// the table are computed from those formulas (risk-communication check values C1).
+// the table are computed from those formulas.
 const TABLE: readonly [string, string, number][] = [
   ['#000000', '#FFFFFF', 21],
   ['#FFFFFF', '#FFFFFF', 1],
@@ -24,7 +24,7 @@ const TABLE: readonly [string, string, number][] = [
 ];
 
 describe('contrastRatio', () => {
-  it.each(TABLE)('gives %s on %s a ratio of %d (WCAG 2.2 formula, C1)', (foreground, background, expected) => {
+  it.each(TABLE)('gives %s on %s a ratio of %d (WCAG 2.2 formula)', (foreground, background, expected) => {
     expect(contrastRatio(foreground, background)).toBeCloseTo(expected, expected === 3.0335 ? 4 : 3);
   });
 
@@ -39,21 +39,22 @@ describe('contrastRatio', () => {
     expect(contrastRatio('#767676', '#FFFFFF') >= WCAG_THRESHOLDS.text).toBe(true);
   });
 
-  it('passes #949494 and fails #959595 on white for graphics at 3:1 (SC 1.4.11, C1)', () => {
+  it('passes #949494 and fails #959595 on white for graphics at 3:1 (SC 1.4.11)', () => {
     expect(contrastRatio('#949494', '#FFFFFF') >= WCAG_THRESHOLDS.graphics).toBe(true);
     expect(contrastRatio('#959595', '#FFFFFF') >= WCAG_THRESHOLDS.graphics).toBe(false);
   });
 });
 
 describe('relativeLuminance', () => {
-  // C1: relative luminance of Okabe–Ito blue, vermillion, bluish green, orange and #DDDDDD.
+  // WCAG 2.2 relative luminance of Okabe–Ito blue, vermillion, bluish green, orange and #DDDDDD
+  // (computed from the formula).
   it.each([
     ['#0072B2', 0.1525],
     ['#D55E00', 0.2215],
     ['#009E73', 0.2569],
     ['#E69F00', 0.4162],
     ['#DDDDDD', 0.7231],
-  ] as const)('gives %s a luminance of %d (C1)', (hex, expected) => {
+  ] as const)('gives %s a luminance of %d', (hex, expected) => {
     expect(relativeLuminance(hex)).toBeCloseTo(expected, 4);
   });
 
@@ -63,7 +64,7 @@ describe('relativeLuminance', () => {
   });
 
   // WCAG 2.2 note on relative luminance: the former threshold 0.03928 "has no practical effect";
-  // C1: both thresholds give identical results for every 8-bit value.
+  // Checked here over every 8-bit value: 10/255 is below both thresholds and 11/255 above both.
   it('gives the same result with the older 0.03928 threshold for all 256 channel values', () => {
     const older = (channel: number) => (channel <= 0.03928 ? channel / 12.92 : ((channel + 0.055) / 1.055) ** 2.4);
     let differences = 0;

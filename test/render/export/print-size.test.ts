@@ -9,7 +9,7 @@ describe('pngSizeForPrint', () => {
     expect(pngSizeForPrint(180, 300)).toBe(2126);
   });
 
-  // A4 (ISO 216, 210 × 297 mm) at 300 dpi is 2480 × 3508 px (risk-communication C8 [C]; common practice).
+  // A4 (ISO 216, 210 × 297 mm) at 300 dpi is 2480 × 3508 px (computed from 25.4 mm per inch; common practice).
   it('gives 2480 px for the width of A4 at 300 dpi', () => {
     expect(pngSizeForPrint(210, 300)).toBe(2480);
     expect(pngSizeForPrint(297, 300)).toBe(3508);

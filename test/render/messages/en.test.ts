@@ -24,7 +24,7 @@ describe('chartMessagesEn', () => {
     expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('If 100 people like you take option A');
   });
 
-  // Risk-communication R2.12: labels carry the count ("4 avoid a heart attack because of treatment").
+  // Fagerlin, Zikmund-Fisher & Ubel (2011), J Natl Cancer Inst 103:1436: legends carry the numbers.
   it('labels each group with its count, in the singular for one person', () => {
     const values = { outcome: 'a stroke', option: 'option A', role: 'option' as const };
     expect(messages.labels.event({ ...values, count: 15 })).toBe('15 have a stroke anyway');

@@ -25,7 +25,8 @@ const render = (model: ChartModel, options: Parameters<typeof renderChartSvg>[1]
 
 describe('renderChartSvg people', () => {
   // Counts per 100 and per 1000 including risks of 0 and 1 and a difference of 0 (invented
-  // numbers); expected counts are the model's groups, from peopleGroups (count conservation, C6).
+  // numbers); expected counts are the model's groups, from peopleGroups (every person drawn,
+  // Ancker et al. 2006, JAMIA 13:608: part-to-whole graphics show the whole denominator).
   it.each([
     [100, 19, 15],
     [100, 0, 0],
@@ -45,7 +46,7 @@ describe('renderChartSvg people', () => {
     expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(denominator * 2);
   });
 
-  // A bare pair: baseline 20%, RR 0.75 → 15% (C4: p1 = p0·RR), per 100.
+  // A bare pair: baseline 20%, RR 0.75 → 15% (p1 = p0 × RR; Cochrane Handbook 5.1, §12.5.4), per 100.
   it('draws 200 people for a bare pair of 20% and RR 0.75 per 100', () => {
     const model = pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } });
     const svg = parseSvg(render(model));
@@ -84,8 +85,8 @@ describe('renderChartSvg people', () => {
 });
 
 describe('renderChartSvg accessibility', () => {
-  // WCAG 2.2 SC 1.1.1 Non-text Content: the graphic has a text alternative; risk-communication
-  // R5.7: the alternative repeats the counts.
+  // WCAG 2.2 SC 1.1.1 Non-text Content: the graphic has a text alternative that serves the same
+  // purpose, so it repeats every count.
   it('marks the chart role="img" with a title and label stating every count', () => {
     const model = outcomeChart(topicFixture(), 'stroke');
     const svg = parseSvg(render(model));
