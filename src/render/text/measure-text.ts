@@ -13,7 +13,7 @@ const FALLBACK_WIDTH = 612;
  * The width of a string set in DejaVu Sans, from the font's own advance widths
  * (no kerning).
  *
- * @example measureDejaVuSans('Hello', 10, false) // => 28.67 (to 2 decimals)
+ * @example measureDejaVuSans('Hello', 10, false) // => 25.35
  */
 export const measureDejaVuSans: MeasureText = (text, fontSize, bold) => {
   const widths = bold ? DEJAVU_SANS_BOLD_WIDTHS : DEJAVU_SANS_WIDTHS;
