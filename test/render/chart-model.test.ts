@@ -110,10 +110,10 @@ describe('pairChart', () => {
 
   it('uses the period in the titles when one is given', () => {
     expect(pairChart({ perPeople, periodYears: 5 }).arrays.map((array) => array.title)).toEqual([
-      '100 people like you without the option, over 5 years',
-      '100 people like you with the option, over 5 years',
+      'Without the option: 100 people like you, over 5 years',
+      'With the option: 100 people like you, over 5 years',
     ]);
-    expect(pairChart({ perPeople }).arrays[1]!.title).toBe('100 people like you with the option');
+    expect(pairChart({ perPeople }).arrays[1]!.title).toBe('With the option: 100 people like you');
   });
 
   it('labels the groups with “the outcome” unless it is named', () => {

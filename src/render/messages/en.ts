@@ -84,9 +84,9 @@ export const chartMessagesEn: ChartMessages = {
   /** Names of the two arms of a bare pair, with no topic. */
   pairComparisonName: 'Without the option',
   pairOptionName: 'With the option',
-  /** Title of an arm of a bare pair: "100 people like you without the option, over 10 years". */
+  /** Title of an arm of a bare pair: "Without the option: 100 people like you, over 10 years". */
   pairTitle: ({ denominator, periodYears }: TitleValues, role: ArmRole) =>
-    `${denominator} people like you ${role === 'comparison' ? 'without' : 'with'} the option${periodYears === null ? '' : `, over ${period(periodYears)}`}`,
+    `${role === 'comparison' ? 'Without' : 'With'} the option: ${denominator} people like you${periodYears === null ? '' : `, over ${period(periodYears)}`}`,
   /** The option as the cause in a label: "because of option A". */
   causeName: (option: string, bare: boolean) => (bare ? 'the option' : inSentence(option)),
   /** Outcome name of a bare pair when none is given. */
