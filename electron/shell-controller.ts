@@ -121,7 +121,12 @@ export async function startShellController(settings: ShellControllerSettings): P
     if (window.isDestroyed()) return;
     const name = fileNameOf(topic.filePath);
     window.setTitle(name === null ? 'Chancewise' : `${name} — Chancewise`);
-    if (topic.filePath !== null) window.setRepresentedFilename(topic.filePath);
+    if (topic.filePath !== null && process.platform === 'darwin') window.setRepresentedFilename(topic.filePath);
+  };
+
+  /** The macOS title-bar dot for unsaved changes (no such thing elsewhere). */
+  const markEdited = (edited: boolean): void => {
+    if (process.platform === 'darwin' && !window.isDestroyed()) window.setDocumentEdited(edited);
   };
 
   const sendCommand = (command: ShellCommand): void => {
@@ -169,10 +174,25 @@ export async function startShellController(settings: ShellControllerSettings): P
     return { text: document.text, fileName: path.basename(filePath) };
   };
 
+  const mayReplaceTopic = async (filePath: string): Promise<boolean> => {
+    if (topic.lastSnapshot?.hasUnsavedChanges !== true || window.isDestroyed()) return true;
+    const answer = await dialog.showMessageBox(window, {
+      type: 'question',
+      buttons: ['Open', 'Cancel'],
+      defaultId: 1,
+      cancelId: 1,
+      message: `Open ${path.basename(filePath)}?`,
+      detail: 'The topic open now has changes that are not saved; they will be lost.',
+    });
+    return answer.response === 0;
+  };
+
   const openFromSystem = (filePath: string): void => {
-    void takeOn(filePath).then(
+    void mayReplaceTopic(filePath)
+      .then((replace) => (replace ? takeOn(filePath) : null))
+      .then(
       (opened) => {
-        deliver({ kind: 'file', text: opened.text, fileName: opened.fileName });
+        if (opened !== null) deliver({ kind: 'file', text: opened.text, fileName: opened.fileName });
       },
       (error: unknown) => {
         const message = error instanceof Error ? error.message : String(error);
@@ -195,7 +215,7 @@ export async function startShellController(settings: ShellControllerSettings): P
       await snapshots.clear();
       rememberRecent(filePath);
       updateTitle();
-      window.setDocumentEdited(false);
+      markEdited(false);
       if (closeAfterSave) {
         closeAfterSave = false;
         closeConfirmed = true;
@@ -277,7 +297,7 @@ export async function startShellController(settings: ShellControllerSettings): P
       topic.lastSnapshot = null;
       await snapshots.clear();
       updateTitle();
-      window.setDocumentEdited(false);
+      markEdited(false);
       return null;
     },
     async openDocument() {
@@ -313,7 +333,7 @@ export async function startShellController(settings: ShellControllerSettings): P
     async saveSnapshot(_sender, snapshot): Promise<SnapshotSaved> {
       const savedAt = Date.now();
       topic.lastSnapshot = { ...snapshot, savedAt };
-      window.setDocumentEdited(snapshot.hasUnsavedChanges);
+      markEdited(snapshot.hasUnsavedChanges);
       if (snapshot.hasUnsavedChanges) {
         await pending.track(
           snapshots.write({ content: snapshot.content, keepPatient: snapshot.keepPatient, documentPath: topic.filePath, savedAt }),
@@ -426,7 +446,9 @@ export async function startShellController(settings: ShellControllerSettings): P
         () => undefined,
       );
     }
-    void window.loadURL(APP_ENTRY_URL);
+    window.loadURL(APP_ENTRY_URL).catch((error: unknown) => {
+      log(`reload after the crash failed: ${error instanceof Error ? error.message : String(error)}`);
+    });
   });
 
   window.webContents.on('unresponsive', () => {

@@ -173,6 +173,19 @@ describe('startShellController()', () => {
     });
   });
 
+  it('asks before a file from the system (a second launch) replaces a topic with unsaved changes', async () => {
+    const { controller, window, contents } = await start();
+    await controller.actions.rendererReady(contents);
+    await controller.actions.saveSnapshot(contents, { content: draft, keepPatient: false, hasUnsavedChanges: true });
+    controller.openFromSystem(demo);
+    await vi.waitFor(() => expect(dialog.showMessageBox).toHaveBeenCalledOnce());
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(window.webContents.sent).toEqual([]);
+    dialog.showMessageBox.mockImplementationOnce(async () => ({ response: 0, checkboxChecked: false }));
+    controller.openFromSystem(demo);
+    await vi.waitFor(() => expect(window.webContents.sent.map(([channel]) => channel)).toEqual([DOCUMENT_CHANNEL]));
+  });
+
   it('prints the page through the system dialog', async () => {
     const { controller, window, contents } = await start();
     expect(await controller.actions.printHandout(contents)).toEqual({ printed: true });
