@@ -13,6 +13,9 @@ function candidate(name: string, snapshot: SnapshotRecord | null, documentSavedA
 }
 
 describe('chooseRecoverySnapshot()', () => {
+  // Offer the newest intact snapshot that is newer than the saved file: common practice for crash
+  // recovery (a snapshot older than the file holds nothing the file lacks).
+
   it('offers nothing when there are no snapshots', () => {
     expect(chooseRecoverySnapshot([])).toBeNull();
   });

@@ -3,6 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { respondToRendererGone } from '../../electron/crash-recovery.ts';
 
 describe('respondToRendererGone()', () => {
+  // Reloading after a renderer crash is what Electron's web-contents docs suggest for
+  // 'render-process-gone'; stopping after three crashes in a minute is the app's own rule (common
+  // practice against crash loops).
+
   it('does nothing after a clean exit', () => {
     expect(respondToRendererGone('clean-exit', [], 1000)).toBe('ignore');
   });

@@ -17,6 +17,8 @@ const pdfBytes = (length: number): Uint8Array => {
   return bytes;
 };
 
+// The size limits are the app's own (a topic file is a few kilobytes); exactness at the limit is what
+// is checked, not the limit's value.
 describe('checkNoArguments()', () => {
   it('accepts no arguments and refuses any', () => {
     expect(checkNoArguments([])).toEqual({ ok: true, value: null });

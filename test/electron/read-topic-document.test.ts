@@ -17,6 +17,8 @@ afterAll(async () => {
   await fs.rm(folder, { recursive: true, force: true });
 });
 
+// A file with bytes that are not UTF-8 is refused (Unicode Standard, §3.9 conformance: 0xE9 followed
+// by '}' is an ill-formed sequence).
 describe('readTopicDocument()', () => {
   it('reads a demo topic file with its modification time', async () => {
     const document = await readTopicDocument(demo);

@@ -3,6 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { addRecentFile, MAX_RECENT_FILES, parseRecentFiles } from '../../electron/recent-files.ts';
 
 describe('addRecentFile()', () => {
+  // Most recent first, no repeats, a short fixed length: common practice for recent-file menus.
+
   it('puts the file first, without repeats, and keeps at most ten', () => {
     expect(addRecentFile(['/a', '/b', '/c'], '/b')).toEqual(['/b', '/a', '/c']);
     const many = Array.from({ length: MAX_RECENT_FILES }, (_, index) => `/f${index}`);

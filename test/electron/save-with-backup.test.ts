@@ -16,6 +16,8 @@ afterEach(async () => {
 });
 
 describe('saveWithBackup()', () => {
+  // Keeping the previous version as name.bak beside the file: common practice for editors.
+
   it('writes a new file without a backup when there was no previous version', async () => {
     const target = path.join(folder, 'topic.cwtopic');
     expect(await saveWithBackup(target, 'first')).toEqual({ backedUp: false });

@@ -16,6 +16,9 @@ afterEach(async () => {
 });
 
 describe('createSnapshotStore()', () => {
+  // Snapshots apart from the person's files, kept to the newest few: common practice for editors'
+  // crash recovery ("hot exit" backups); patient details stay out unless the person keeps them.
+
   it('writes snapshots into its own folder, without patient details, keeping the newest three', async () => {
     const folder = path.join(base, 'userData', 'snapshots');
     const store = createSnapshotStore({ folder });

@@ -20,6 +20,9 @@ describe('the topic file type', () => {
 });
 
 describe('topicPathFromCommandLine()', () => {
+  // Electron docs (app.md, 'second-instance'): the second launch's argv and working directory are passed
+  // on; unpackaged runs have the app folder as argv[1] (docs/tutorial/launch-app-from-url-in-another-app.md, from memory).
+
   it('finds the file after the executable of a packaged app', () => {
     expect(topicPathFromCommandLine(['/opt/Chancewise/chancewise', 'heart.cwtopic'], '/home/a', true)).toBe('/home/a/heart.cwtopic');
   });
