@@ -28,7 +28,8 @@ function electronExecutable() {
 /** Try the electron package's own installer once (it downloads the runtime); quiet unless it works. */
 function fetchElectron() {
   const installer = join(electronPackage, 'install.js');
-  if (!existsSync(installer) || process.env.CHANCEWISE_NO_DOWNLOAD === '1') return { ok: false, why: 'downloading is turned off' };
+  if (!existsSync(installer)) return { ok: false, why: 'the electron package is not installed (run npm ci)' };
+  if (process.env.CHANCEWISE_NO_DOWNLOAD === '1') return { ok: false, why: 'downloading is turned off (CHANCEWISE_NO_DOWNLOAD=1)' };
   // On a terminal a progress note is shown and wiped again, so a failure still leaves one line only.
   const note = process.stdout.isTTY === true;
   if (note) process.stdout.write('Fetching the Electron runtime for the desktop app (first start only)…');
