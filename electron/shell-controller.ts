@@ -1,13 +1,12 @@
-import fs from 'node:fs/promises';
 import path from 'node:path';
-import { app, BrowserWindow, dialog, Menu, screen } from 'electron';
+import { app, BrowserWindow, Menu, screen } from 'electron';
 import type { WebContents } from 'electron';
 import { APP_ENTRY_URL } from './app-origin.ts';
 import { buildMenuTemplate } from './application-menu.ts';
 import { writeFileAtomic } from './atomic-write.ts';
-import { chooseRecoverySnapshot } from './choose-recovery-snapshot.ts';
-import type { SnapshotCandidate, ValidSnapshotCandidate } from './choose-recovery-snapshot.ts';
+import type { ValidSnapshotCandidate } from './choose-recovery-snapshot.ts';
 import { respondToRendererGone } from './crash-recovery.ts';
+import { findRecoverySnapshot, modificationTime } from './find-recovery-snapshot.ts';
 import { COMMAND_CHANNEL, DOCUMENT_CHANNEL } from './ipc-contract.ts';
 import type {
   ExportedHandout,
@@ -26,12 +25,12 @@ import { createPendingWork } from './pending-work.ts';
 import { isTopicFileText, readTopicDocument } from './read-topic-document.ts';
 import { addRecentFile, parseRecentFiles } from './recent-files.ts';
 import { saveWithBackup } from './save-with-backup.ts';
+import { createShellDialogs } from './shell-dialogs.ts';
 import { ShellFailure } from './shell-messages.ts';
 import { createSnapshotStore } from './snapshot-store.ts';
-import { SAVE_DIALOG_FILTERS, OPEN_DIALOG_FILTERS, withTopicExtension } from './topic-file-type.ts';
 import { createMainWindowOptions } from './window-options.ts';
-import { fitWindowToDisplays, parseWindowState } from './window-state.ts';
-import type { WindowState } from './window-state.ts';
+import { fitWindowToDisplays } from './window-state.ts';
+import { loadWindowState, rememberWindowState } from './window-state-file.ts';
 
 /** What the controller is started with. */
 export interface ShellControllerSettings {
@@ -68,15 +67,6 @@ function fileNameOf(filePath: string | null): string | null {
   return filePath === null ? null : path.basename(filePath);
 }
 
-async function modificationTime(filePath: string | null): Promise<number | null> {
-  if (filePath === null) return null;
-  try {
-    return (await fs.stat(filePath)).mtimeMs;
-  } catch {
-    return null;
-  }
-}
-
 /** Start the shell: read remembered state, build the menu, create the main window (call `load` next). */
 export async function startShellController(settings: ShellControllerSettings): Promise<ShellController> {
   const { log } = settings;
@@ -98,21 +88,14 @@ export async function startShellController(settings: ShellControllerSettings): P
   let closeAfterSave = false;
   let saving: Promise<unknown> = Promise.resolve();
 
-  const candidates: SnapshotCandidate[] = await Promise.all(
-    (await snapshots.list()).map(async (stored) => ({
-      name: stored.name,
-      record: stored.record,
-      documentSavedAt: await modificationTime(stored.record?.documentPath ?? null),
-    })),
-  );
-  const recovery: ValidSnapshotCandidate | null = chooseRecoverySnapshot(candidates);
-  if (recovery === null && candidates.length > 0) await snapshots.clear();
-
-  const state: WindowState | null = parseWindowState(await readJsonFile(windowStatePath));
+  const recovery = await findRecoverySnapshot(snapshots);
+  const state = await loadWindowState(windowStatePath);
   const workAreas = [screen.getPrimaryDisplay(), ...screen.getAllDisplays()].map((display) => display.workArea);
   const bounds = fitWindowToDisplays(state, workAreas);
   const window = new BrowserWindow(createMainWindowOptions({ preloadPath, bounds, devTools: !app.isPackaged }));
   if (state?.isMaximized === true) window.maximize();
+  const dialogs = createShellDialogs(window);
+  rememberWindowState(window, windowStatePath, pending);
 
   const isOwnContents = (contents: unknown): contents is WebContents =>
     !window.isDestroyed() && contents === window.webContents;
@@ -176,30 +159,22 @@ export async function startShellController(settings: ShellControllerSettings): P
 
   const mayReplaceTopic = async (filePath: string): Promise<boolean> => {
     if (topic.lastSnapshot?.hasUnsavedChanges !== true || window.isDestroyed()) return true;
-    const answer = await dialog.showMessageBox(window, {
-      type: 'question',
-      buttons: ['Open', 'Cancel'],
-      defaultId: 1,
-      cancelId: 1,
-      message: `Open ${path.basename(filePath)}?`,
-      detail: 'The topic open now has changes that are not saved; they will be lost.',
-    });
-    return answer.response === 0;
+    return dialogs.confirmReplace(path.basename(filePath));
   };
 
   const openFromSystem = (filePath: string): void => {
     void mayReplaceTopic(filePath)
       .then((replace) => (replace ? takeOn(filePath) : null))
       .then(
-      (opened) => {
-        if (opened !== null) deliver({ kind: 'file', text: opened.text, fileName: opened.fileName });
-      },
-      (error: unknown) => {
-        const message = error instanceof Error ? error.message : String(error);
-        log(`could not open ${filePath}: ${message}`);
-        void dialog.showMessageBox(window, { type: 'error', message: `Could not open ${path.basename(filePath)}`, detail: message });
-      },
-    );
+        (opened) => {
+          if (opened !== null) deliver({ kind: 'file', text: opened.text, fileName: opened.fileName });
+        },
+        (error: unknown) => {
+          const message = error instanceof Error ? error.message : String(error);
+          log(`could not open ${filePath}: ${message}`);
+          dialogs.showOpenFailure(path.basename(filePath), message);
+        },
+      );
   };
 
   const writeDocument = (filePath: string, text: string): Promise<SavedDocument> => {
@@ -229,21 +204,9 @@ export async function startShellController(settings: ShellControllerSettings): P
     return run;
   };
 
-  const askSavePath = async (): Promise<string | null> => {
-    const suggested = topic.filePath ?? path.join(app.getPath('documents'), 'topic.cwtopic');
-    const answer = await dialog.showSaveDialog(window, {
-      title: 'Save topic',
-      defaultPath: suggested,
-      filters: SAVE_DIALOG_FILTERS,
-      properties: ['showOverwriteConfirmation', 'createDirectory'],
-    });
-    if (answer.canceled || answer.filePath === undefined || answer.filePath === '') return null;
-    return withTopicExtension(answer.filePath);
-  };
-
   const saveAs = async (text: string): Promise<SavedDocument | null> => {
     if (!isTopicFileText(text)) throw new ShellFailure('not-a-topic-file');
-    const filePath = await askSavePath();
+    const filePath = await dialogs.chooseTopicSavePath(topic.filePath ?? path.join(app.getPath('documents'), 'topic.cwtopic'));
     if (filePath === null) {
       closeAfterSave = false;
       return null;
@@ -251,19 +214,13 @@ export async function startShellController(settings: ShellControllerSettings): P
     return writeDocument(filePath, text);
   };
 
-  const offerRecovery = async (candidate: ValidSnapshotCandidate): Promise<boolean> => {
-    const when = new Date(candidate.record.savedAt).toLocaleString();
-    const name = fileNameOf(candidate.record.documentPath) ?? 'an unsaved topic';
-    const skipped = settings.launchFiles.length > 0 ? ` If you restore them, ${path.basename(settings.launchFiles[0] ?? '')} is not opened.` : '';
-    const answer = await dialog.showMessageBox(window, {
-      type: 'question',
-      buttons: ['Restore', 'Discard'],
-      defaultId: 0,
-      cancelId: 1,
-      message: 'Chancewise closed before your last changes were saved.',
-      detail: `Restore the changes to ${name} from ${when}?${skipped}`,
-    });
-    return answer.response === 0;
+  const offerRecovery = (candidate: ValidSnapshotCandidate): Promise<boolean> => {
+    const launchFile = settings.launchFiles[0];
+    return dialogs.confirmRecovery(
+      candidate.record.savedAt,
+      fileNameOf(candidate.record.documentPath),
+      launchFile === undefined ? null : path.basename(launchFile),
+    );
   };
 
   const runStartup = async (): Promise<void> => {
@@ -301,15 +258,8 @@ export async function startShellController(settings: ShellControllerSettings): P
       return null;
     },
     async openDocument() {
-      const answer = await dialog.showOpenDialog(window, {
-        title: 'Open topic',
-        filters: OPEN_DIALOG_FILTERS,
-        properties: ['openFile'],
-        ...(topic.filePath === null ? {} : { defaultPath: path.dirname(topic.filePath) }),
-      });
-      const chosen = answer.filePaths[0];
-      if (answer.canceled || chosen === undefined) return null;
-      return takeOn(chosen);
+      const chosen = await dialogs.chooseTopicToOpen(topic.filePath);
+      return chosen === null ? null : takeOn(chosen);
     },
     async openRecentDocument(_sender, recentPath) {
       if (!recentFiles.includes(recentPath)) throw new ShellFailure('not-in-recent-list');
@@ -345,14 +295,8 @@ export async function startShellController(settings: ShellControllerSettings): P
     },
     async exportHandoutPdf(_sender, request: HandoutPdfRequest): Promise<ExportedHandout | null> {
       const name = request.suggestedName.toLowerCase().endsWith('.pdf') ? request.suggestedName : `${request.suggestedName}.pdf`;
-      const answer = await dialog.showSaveDialog(window, {
-        title: 'Export handout',
-        defaultPath: path.join(app.getPath('documents'), name),
-        filters: [{ name: 'PDF document', extensions: ['pdf'] }],
-        properties: ['showOverwriteConfirmation', 'createDirectory'],
-      });
-      if (answer.canceled || answer.filePath === undefined || answer.filePath === '') return null;
-      const target = answer.filePath.toLowerCase().endsWith('.pdf') ? answer.filePath : `${answer.filePath}.pdf`;
+      const target = await dialogs.chooseHandoutSavePath(path.join(app.getPath('documents'), name));
+      if (target === null) return null;
       try {
         await writeFileAtomic(target, request.bytes);
       } catch (error) {
@@ -371,19 +315,6 @@ export async function startShellController(settings: ShellControllerSettings): P
     },
   };
 
-  const rememberWindowState = (): void => {
-    if (window.isDestroyed()) return;
-    const normal = window.getNormalBounds();
-    void pending.track(writeJsonFile(windowStatePath, { ...normal, isMaximized: window.isMaximized() }));
-  };
-  let stateTimer: NodeJS.Timeout | null = null;
-  const rememberSoon = (): void => {
-    if (stateTimer !== null) clearTimeout(stateTimer);
-    stateTimer = setTimeout(rememberWindowState, 750);
-  };
-  window.on('resize', rememberSoon);
-  window.on('move', rememberSoon);
-
   window.on('page-title-updated', (event) => {
     event.preventDefault();
   });
@@ -392,29 +323,18 @@ export async function startShellController(settings: ShellControllerSettings): P
   });
 
   window.on('close', (event) => {
-    if (stateTimer !== null) clearTimeout(stateTimer);
-    rememberWindowState();
     if (closeConfirmed || topic.lastSnapshot?.hasUnsavedChanges !== true) return;
     event.preventDefault();
-    void dialog
-      .showMessageBox(window, {
-        type: 'question',
-        buttons: ['Save…', 'Close without saving', 'Cancel'],
-        defaultId: 0,
-        cancelId: 2,
-        message: 'Save the changes to this topic before closing?',
-        detail: 'If you close without saving, the changes are lost.',
-      })
-      .then(async (answer) => {
-        if (answer.response === 0) {
-          closeAfterSave = true;
-          sendCommand({ name: 'save' });
-        } else if (answer.response === 1) {
-          closeConfirmed = true;
-          await snapshots.clear();
-          if (!window.isDestroyed()) window.close();
-        }
-      });
+    void dialogs.chooseOnClose().then(async (choice) => {
+      if (choice === 'save') {
+        closeAfterSave = true;
+        sendCommand({ name: 'save' });
+      } else if (choice === 'discard') {
+        closeConfirmed = true;
+        await snapshots.clear();
+        if (!window.isDestroyed()) window.close();
+      }
+    });
   });
 
   window.webContents.on('render-process-gone', (_event, details) => {
@@ -425,10 +345,7 @@ export async function startShellController(settings: ShellControllerSettings): P
     crashTimes.push(now);
     rendererReady = false;
     if (response === 'give-up') {
-      dialog.showErrorBox(
-        'Chancewise stopped working',
-        'The window stopped several times in a row. Your last changes are kept and will be offered when Chancewise starts again.',
-      );
+      dialogs.showCrashLoop();
       closeConfirmed = true;
       app.quit();
       return;
