@@ -19,7 +19,11 @@ function createLog(): (line: string) => void {
     process.stderr.write(`[chancewise] ${stamped}`);
     try {
       folder ??= app.getPath('logs');
-      void fs.mkdir(folder, { recursive: true }).then(() => fs.appendFile(path.join(folder ?? '.', 'main.log'), stamped));
+      const logFolder = folder;
+      void fs
+        .mkdir(logFolder, { recursive: true })
+        .then(() => fs.appendFile(path.join(logFolder, 'main.log'), stamped))
+        .catch(() => undefined);
     } catch {
       // The log file is a convenience; standard error already has the line.
     }
