@@ -30,6 +30,8 @@ export default defineConfig({
     assetsInlineLimit: 0,
     modulePreload: { polyfill: false },
     reportCompressedSize: false,
+    // The timing report is for tuning plugins; `npm run web` builds quietly.
+    rolldownOptions: { checks: { bundlerTimings: false } },
   },
   server: { host: '127.0.0.1', strictPort: true },
 });

@@ -1,37 +1,36 @@
 /**
- * Where the printed handout plugs in. The handout's PDF code is large (jsPDF and a
- * font), so it is loaded only when someone asks for a handout, from `src/pdf/build-handout.ts`.
- * That module is found at build time; while it does not exist the app offers no handout
- * and says so.
- *
- * The module must export `buildHandout(input: HandoutInput): Promise<Uint8Array> | Uint8Array`.
+ * Where the printed handout plugs into the app. The handout's code is large (jsPDF and
+ * two embedded font files), so `make-handout.ts` is imported only when someone asks for
+ * a handout: Vite puts it, jsPDF and the fonts in chunks of their own.
  */
 import type { Topic } from '../../core/topic/topic.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 
-/** Everything the handout is drawn from: the same topic and computed result as the screen. */
-export interface HandoutInput {
+/** What the app asks the handout for: the very topic and result on screen, and the clinician's choices. */
+export interface HandoutRequest {
   readonly topic: Topic;
   readonly result: TopicResult;
-  /** Print the patient's name and reference (only when the clinician asks). */
-  readonly includePatient: boolean;
-  /** Show the NNT sentences on the handout (clinician choice). */
+  readonly paper: 'a4' | 'letter';
+  /** Print the number-needed-to-treat sentences (the clinician opts in). */
   readonly showNnt: boolean;
+  /** The date printed on the sheet, YYYY-MM-DD. */
+  readonly date: string;
 }
 
-export interface HandoutModule {
-  buildHandout(input: HandoutInput): Promise<Uint8Array> | Uint8Array;
+/** A handout: the PDF bytes, or one sentence on why it could not be made. */
+export type HandoutOutcome = { readonly ok: true; readonly pdf: Uint8Array } | { readonly ok: false; readonly message: string };
+
+export interface HandoutMaker {
+  makeHandout(request: HandoutRequest): Promise<HandoutOutcome>;
 }
 
-// Not eager: Vite makes the module a separate chunk, fetched on first use only.
-const modules = import.meta.glob<HandoutModule>('../../pdf/build-handout.ts');
+/** Load the handout code on first use. */
+export function loadHandoutMaker(): Promise<HandoutMaker> {
+  return import('./make-handout.ts');
+}
 
-/** True when this build contains the handout. */
-export const HANDOUT_AVAILABLE = Object.keys(modules).length > 0;
-
-/** Load the handout builder (once); null when this build has none. */
-export async function loadHandoutBuilder(): Promise<HandoutModule | null> {
-  const load = Object.values(modules)[0];
-  if (load === undefined) return null;
-  return load();
+/** Today as YYYY-MM-DD in the person's own time zone. */
+export function localDate(today: Date): string {
+  const pad = (value: number) => String(value).padStart(2, '0');
+  return `${today.getFullYear()}-${pad(today.getMonth() + 1)}-${pad(today.getDate())}`;
 }

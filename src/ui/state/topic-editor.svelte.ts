@@ -99,6 +99,8 @@ export class TopicEditor {
     this.#history.record(draft, null, this.#now());
     this.fileName = settings.fileName;
     if (settings.saved) this.#savedSignature = signature(draft);
+    // Results of the topic left behind must never show as if they were this one's.
+    this.#lastValidDraft = null;
     this.#show(draft);
     this.#queueAutosave();
   }

@@ -117,3 +117,13 @@ describe('TopicEditor', () => {
     expect(editor.shown?.denominator).toBe(100);
   });
 });
+
+describe('TopicEditor after loading another topic', () => {
+  test('never shows the results of the topic left behind', () => {
+    const { editor } = setUp();
+    editor.load(blankDraft(), { fileName: null, saved: true });
+    expect(editor.shown).toBeNull();
+    editor.undo();
+    expect(editor.shown?.title).toBe(first.topic.title);
+  });
+});

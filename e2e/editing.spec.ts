@@ -1,0 +1,147 @@
+import { SCREENS, expect, openApp, people, test } from './fixtures.ts';
+
+test.describe('editing a topic', () => {
+  test('opens on the first example, marked illustrative, with numbers, charts and words', async ({ page, watch }) => {
+    await openApp(page);
+    await expect(page.getByRole('note', { name: 'Illustrative example' })).toContainText('Every number here is invented');
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/Taking a daily tablet/);
+    // The example: 15% over 10 years, RR 0.75 for the standard dose.
+    const headline = page.locator('table[data-outcome-id="heart-stroke"]');
+    await expect(headline.locator('tr[data-option-id="none"] td.people .value')).toHaveText('15');
+    await expect(headline.locator('tr[data-option-id="standard"] td.people .value')).toHaveText('11');
+    await expect(people(page, 'heart-stroke', 'none', 'event')).toHaveCount(15);
+    await expect(people(page, 'heart-stroke', 'none', 'free')).toHaveCount(85);
+    await expect(page.locator('article[data-outcome-id="heart-stroke"] ul[data-option-id="none"]')).toContainText(
+      'about 15 in 100 people like you will have a heart attack or stroke',
+    );
+    await expect(page.locator('svg.people-chart').first()).toContainText('Illustrative');
+    await page.screenshot({ path: `${SCREENS}/01-start.png` });
+    expect(watch.pageErrors).toEqual([]);
+  });
+
+  test('a new baseline risk updates the numbers, the charts and the sentences', async ({ page, watch }) => {
+    await openApp(page);
+    const baseline = page.getByLabel('Baseline risk', { exact: true }).first();
+    await baseline.fill('20%');
+    const headline = page.locator('table[data-outcome-id="heart-stroke"]');
+    await expect(headline.locator('tr[data-option-id="none"] td.people .value')).toHaveText('20');
+    // 20% × 0.75 = 15%: 15 of 100, so 5 avoid it; 20% × 0.65 = 13%, so 7 avoid it with the higher dose.
+    await expect(headline.locator('tr[data-option-id="standard"] td.people .value')).toHaveText('15');
+    await expect(people(page, 'heart-stroke', 'none', 'event')).toHaveCount(20);
+    await expect(people(page, 'heart-stroke', 'standard', 'prevented')).toHaveCount(5);
+    await expect(people(page, 'heart-stroke', 'higher', 'prevented')).toHaveCount(7);
+    await expect(page.locator('article[data-outcome-id="heart-stroke"] ul[data-option-id="none"]')).toContainText('about 20 in 100');
+    await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
+    await expect(page.getByText('Unsaved changes')).toBeVisible();
+    await page.screenshot({ path: `${SCREENS}/02-baseline-20.png` });
+    expect(watch.outsideRequests).toEqual([]);
+  });
+
+  test('an option and an outcome can be added and filled in', async ({ page }) => {
+    await openApp(page);
+    await page.getByRole('button', { name: 'Add an option' }).click();
+    const name = page.getByLabel('Option 4 name');
+    await expect(name).toBeFocused();
+    await name.fill('a lower dose');
+    await expect(page.getByText(/things to fix before the results can update/)).toBeVisible();
+    await expect(page.getByRole('status').filter({ hasText: 'Out of date' })).toBeVisible();
+    const blocks = page.locator('fieldset.effect').filter({ hasText: 'Effect of a lower dose' });
+    await expect(blocks).toHaveCount(3);
+    for (const block of await blocks.all()) await block.getByLabel('Estimate').fill('0.9');
+    await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
+    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array')).toHaveCount(4);
+
+    await page.getByRole('button', { name: 'Add a harm' }).click();
+    const outcomeName = page.getByLabel('Outcome', { exact: true }).last();
+    await expect(outcomeName).toBeFocused();
+    await outcomeName.fill('a headache');
+    const outcome = page.locator('article.outcome').last();
+    await outcome.getByLabel('Baseline risk', { exact: true }).fill('1 in 10');
+    for (const block of await outcome.locator('fieldset.effect').all()) await block.getByLabel('Estimate').fill('1.5');
+    await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
+    const headache = page.locator('article.outcome-result').filter({ hasText: 'a headache' });
+    await expect(headache.locator('g.chart-array')).toHaveCount(4);
+    // 10% × 1.5 = 15%: 5 more people in 100 (50 in 1000) have a headache with each option.
+    const denominator = Number(await headache.locator('svg.people-chart').getAttribute('data-denominator'));
+    await expect(headache.locator('g.chart-array[data-option-id="standard"] path[data-outcome="caused"]')).toHaveCount(denominator * 0.05);
+    await page.screenshot({ path: `${SCREENS}/03-added-option-and-outcome.png`, fullPage: false });
+  });
+
+  test('an impossible value is explained beside its field; what was typed stays, and results show as out of date', async ({ page }) => {
+    await openApp(page);
+    const baseline = page.getByLabel('Baseline risk', { exact: true }).first();
+    await baseline.fill('150%');
+    await expect(baseline).toHaveAttribute('aria-invalid', 'true');
+    const describedBy = (await baseline.getAttribute('aria-describedby')) ?? '';
+    const problemId = describedBy.split(' ').find((id) => id.endsWith('-problem'));
+    expect(problemId).toBeTruthy();
+    const problem = page.locator(`[id="${problemId}"]`);
+    await expect(problem).toHaveText(/A risk of "150%" is outside 0% to 100%/);
+    // Beside the field: directly under it in the same field block.
+    const fieldBox = await baseline.boundingBox();
+    const problemBox = await problem.boundingBox();
+    expect(problemBox && fieldBox && problemBox.y - (fieldBox.y + fieldBox.height)).toBeLessThan(20);
+    await expect(baseline).toHaveValue('150%');
+    await expect(page.getByText('These results are from before your latest change.')).toBeVisible();
+    await expect(page.locator('table[data-outcome-id="heart-stroke"] tr[data-option-id="none"] td.people .value')).toHaveText('15');
+    await baseline.evaluate((element) => element.scrollIntoView({ block: 'center' }));
+    await page.screenshot({ path: `${SCREENS}/04-impossible-value.png` });
+
+    // Every problem at once, listed above the editor, each a link to its field.
+    await page.getByLabel('Estimate').nth(2).fill('-1');
+    const summary = page.getByRole('region', { name: /2 things to fix/ });
+    await expect(summary.getByRole('link')).toHaveCount(2);
+    await summary.getByRole('link', { name: /risk ratio of -1 is not possible/ }).click();
+    await expect(page.getByLabel('Estimate').nth(2)).toBeFocused();
+  });
+
+  test('undo and redo work from the keyboard and the buttons', async ({ page }) => {
+    await openApp(page);
+    const title = page.getByLabel('Decision', { exact: true });
+    await title.fill('A different decision');
+    await page.getByLabel('Baseline risk', { exact: true }).first().fill('20%');
+    await page.keyboard.press('Control+z');
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('15%');
+    await page.keyboard.press('Control+z');
+    await expect(title).toHaveValue(/Taking a daily tablet/);
+    await page.keyboard.press('Control+Shift+z');
+    await expect(title).toHaveValue('A different decision');
+    await page.keyboard.press('Control+y');
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('20%');
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('15%');
+    await page.getByRole('button', { name: 'Redo' }).click();
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('20%');
+  });
+
+  test('switches between 100 and 1000 people', async ({ page }) => {
+    await openApp(page);
+    await page.getByRole('radio', { name: '1000 people' }).check();
+    await expect(page.locator('table[data-outcome-id="heart-stroke"] tr[data-option-id="none"] td.people .value')).toHaveText('150');
+    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array[data-option-id="none"] path[data-outcome]')).toHaveCount(1000);
+    // 15% × 0.75 = 11.25%: 113 of 1000 (to the nearest person), so 37 avoid it.
+    await expect(people(page, 'heart-stroke', 'standard', 'prevented')).toHaveCount(37);
+    await page.screenshot({ path: `${SCREENS}/05-per-1000.png` });
+    await page.getByRole('radio', { name: '100 people' }).check();
+    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array[data-option-id="none"] path[data-outcome]')).toHaveCount(100);
+  });
+
+  test('the start panel offers a new topic and the other examples, each marked illustrative', async ({ page }) => {
+    await openApp(page);
+    await page.getByRole('button', { name: 'Topics' }).click();
+    const panel = page.getByRole('region', { name: 'Start' });
+    const examples = panel.locator('button.demo');
+    await expect(examples).toHaveCount(3);
+    for (const example of await examples.all()) await expect(example).toContainText('Illustrative');
+    await page.screenshot({ path: `${SCREENS}/06-start-panel.png` });
+    await examples.nth(1).click();
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/bowel screening/);
+    await expect(page.getByRole('note', { name: 'Illustrative example' })).toBeVisible();
+    await page.getByRole('button', { name: 'Topics' }).click();
+    await page.getByRole('button', { name: 'New topic', exact: true }).click();
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('');
+    await expect(page.getByRole('note', { name: 'Illustrative example' })).toHaveCount(0);
+    await expect(page.getByText('No results yet')).toBeVisible();
+    await page.screenshot({ path: `${SCREENS}/07-new-topic.png` });
+  });
+});
