@@ -14,6 +14,7 @@ type Command = (args: readonly string[]) => CommandOutput | Promise<CommandOutpu
 const COMMANDS: Readonly<Record<string, () => Promise<Command>>> = {
   compute: async () => runCompute,
   chart: async () => (await import('./chart-command.ts')).runChart,
+  handout: async () => (await import('./handout-command.ts')).runHandout,
 };
 
 function oneLine(text: string): string {

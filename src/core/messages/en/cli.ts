@@ -35,4 +35,9 @@ export const cliMessages = {
     count > 1 ? `${first} (and ${count - 1} more problem${count > 2 ? 's' : ''} in the topic)` : first,
   outcomeUnknown: (name: string, names: string) => `The topic has no outcome "${name}". Its outcomes are: ${names}.`,
   internal: (detail: string) => `Chancewise failed unexpectedly: ${detail}`,
+  handoutNeedsTopic: () => 'A handout needs a topic: give a topic file or --demo.',
+  clinicianTooLong: (length: number, limit: number) =>
+    `--clinician is ${length} characters long; the handout allows up to ${limit}. Shorten it.`,
+  handoutWritten: (path: string, paper: string, grade: string) =>
+    `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
 } as const;

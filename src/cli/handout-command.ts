@@ -1,0 +1,79 @@
+import packageJson from '../../package.json' with { type: 'json' };
+import { english } from '../core/messages/en/index.ts';
+import { TOPIC_LIMITS } from '../core/topic/topic.ts';
+import { buildHandout } from '../handout/build-handout.ts';
+import { handoutMessagesEn } from '../handout/messages/en.ts';
+import { loadHandoutFonts } from '../handout/node-fonts.ts';
+import type { Paper } from '../handout/paper-size.ts';
+import { outputPath, writeOutput } from './chart-command.ts';
+import type { CommandOutput } from './command-output.ts';
+import { computeTopicOrFail } from './compute-command.ts';
+import { parsePer } from './effect-flags.ts';
+import { parseArgs, valueOf } from './parse-args.ts';
+import { topicFromArgs } from './topic-input.ts';
+import { UsageError } from './usage-error.ts';
+
+const words = english.cli;
+
+const HANDOUT_FLAGS = {
+  '--demo': { takesValue: false },
+  '--out': { takesValue: true, example: 'handout.pdf' },
+  '--paper': { takesValue: true, example: 'a4' },
+  '--date': { takesValue: true, example: '2026-12-01' },
+  '--show-nnt': { takesValue: false },
+  '--clinician': { takesValue: true, example: '"Dr A. Patel, Riverside Surgery"' },
+  '--per': { takesValue: true, example: '100' },
+};
+
+/** Read --paper: a4 (the default) or letter. */
+export function parsePaper(value: string | undefined): Paper {
+  if (value === undefined) return 'a4';
+  const key = value.trim().toLowerCase();
+  if (key === 'a4' || key === 'letter') return key;
+  throw new UsageError(words.paperValue(value));
+}
+
+/** Read --date: a real calendar date written YYYY-MM-DD, 1970 to 2037 (the dates a PDF file from jsPDF can carry). */
+export function parseDate(value: string): string {
+  const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value.trim());
+  if (found !== null) {
+    const [year, month, day] = [Number(found[1]), Number(found[2]), Number(found[3])];
+    const calendar = new Date(Date.UTC(year, month - 1, day));
+    const real = calendar.getUTCFullYear() === year && calendar.getUTCMonth() === month - 1 && calendar.getUTCDate() === day;
+    if (real && year >= 1970 && year <= 2037) return value.trim();
+  }
+  throw new UsageError(words.dateValue(value));
+}
+
+/** Today's date on this computer's clock, YYYY-MM-DD. */
+function today(): string {
+  const now = new Date();
+  const two = (value: number) => String(value).padStart(2, '0');
+  return `${now.getFullYear()}-${two(now.getMonth() + 1)}-${two(now.getDate())}`;
+}
+
+/** `chancewise handout`: the one-page patient handout of a topic, as a PDF. */
+export function runHandout(args: readonly string[]): CommandOutput {
+  const parsed = parseArgs(args, HANDOUT_FLAGS);
+  const out = outputPath(valueOf(parsed, '--out'), '.pdf', 'handout.pdf');
+  const paper = parsePaper(valueOf(parsed, '--paper'));
+  const dateFlag = valueOf(parsed, '--date');
+  const date = dateFlag === undefined ? today() : parseDate(dateFlag);
+  const clinician = (valueOf(parsed, '--clinician') ?? '').trim();
+  if (clinician.length > TOPIC_LIMITS.clinicianLength) {
+    throw new UsageError(words.clinicianTooLong(clinician.length, TOPIC_LIMITS.clinicianLength));
+  }
+  const topic = topicFromArgs(parsed);
+  if (topic === null) throw new UsageError(words.handoutNeedsTopic());
+  const result = computeTopicOrFail(topic, parsePer(parsed));
+  const built = buildHandout(
+    result,
+    topic,
+    { paper, date, appVersion: packageJson.version, showNnt: parsed.flags.has('--show-nnt'), clinician },
+    loadHandoutFonts(),
+  );
+  if (!built.ok) throw new UsageError(built.message);
+  writeOutput(out, built.pdf);
+  const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
+  return { stdout: `${words.handoutWritten(out, handoutMessagesEn.paperName[paper], grade)}\n` };
+}

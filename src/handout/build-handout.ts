@@ -1,0 +1,168 @@
+/**
+ * The one-page patient handout as a PDF: content from the computed topic and the
+ * wording module, laid out to fit one page of A4 or US Letter, drawn with jsPDF
+ * in an embedded open font. Pure: the fonts, the date and the version come in as
+ * arguments, so the browser app and the command line build the same bytes.
+ */
+import { jsPDF } from 'jspdf';
+import type { Topic } from '../core/topic/topic.ts';
+import type { TopicResult } from '../core/topic/topic-result.ts';
+import { type Readability, readability } from '../core/wording/readability.ts';
+import { type ChartPalette, colourPalette } from '../render/palette.ts';
+import { drawPage } from './draw-page.ts';
+import { FIT_LADDER, type FitSettings } from './fit-settings.ts';
+import { type HandoutContent, handoutContent } from './handout-content.ts';
+import { type HandoutFonts, codePointsOf, registerFonts } from './handout-fonts.ts';
+import { type HandoutMessages, type HandoutPart, handoutMessagesEn } from './messages/en.ts';
+import { type PageLayout, layoutPage } from './page-layout.ts';
+import { type Paper, contentBox } from './paper-size.ts';
+import { fileIdentifier, pdfDate } from './pdf-identity.ts';
+import { jsPdfMeasure } from './text-layout.ts';
+
+export interface HandoutOptions {
+  /** Default A4. */
+  readonly paper?: Paper;
+  /** The date printed on the sheet and written as the file's creation date, YYYY-MM-DD. */
+  readonly date: string;
+  /** The app's version, printed in the footer. */
+  readonly appVersion: string;
+  /** Print the number-needed-to-treat sentences (off by default). */
+  readonly showNnt?: boolean;
+  /** The clinician or practice printed in the footer, in place of the topic's. */
+  readonly clinician?: string;
+  readonly palette?: ChartPalette;
+  readonly messages?: HandoutMessages;
+}
+
+/** A handout that was built. */
+export interface HandoutBuilt {
+  readonly ok: true;
+  /** The PDF file. */
+  readonly pdf: Uint8Array;
+  readonly paper: Paper;
+  readonly pages: number;
+  /** Flesch Reading Ease and Flesch–Kincaid grade of the sheet's sentences (not the table, chart labels or footer). */
+  readonly readability: Readability;
+  /** The type sizes and spacing the content fitted with. */
+  readonly settings: FitSettings;
+  /** Every sentence taken from the wording module, as printed. */
+  readonly wordingSentences: readonly string[];
+  /** The prose the readability was computed from, block by block. */
+  readonly prose: readonly string[];
+}
+
+/** A handout that does not fit on one page: nothing was drawn. */
+export interface HandoutRefused {
+  readonly ok: false;
+  readonly reason: 'does-not-fit';
+  /** What to shorten. */
+  readonly part: HandoutPart;
+  /** How far over the page the most compact layout still was, in millimetres (0 when a word is too wide for its column). */
+  readonly overMillimetres: number;
+  /** One line for the clinician, from the catalogue. */
+  readonly message: string;
+}
+
+export type HandoutBuild = HandoutBuilt | HandoutRefused;
+
+/** The sheet's prose, block by block, for the readability score. */
+function proseOf(content: HandoutContent): string[] {
+  return [
+    content.title,
+    ...(content.illustrative === null ? [] : [content.illustrative.note]),
+    ...content.audience,
+    content.chart.keyIntro,
+    ...content.paragraphs.map((paragraph) => paragraph.join(' ')),
+    [content.evidence.heading, ...content.evidence.items].join(' '),
+    content.matters.prompt,
+    ...content.questions.items,
+    `${content.caution.heading} ${content.caution.text}`,
+  ];
+}
+
+/**
+ * Build the handout of a computed topic: one page, or a refusal saying what to
+ * shorten. With the same inputs the bytes are the same.
+ *
+ * @param result - the computed topic (its denominator, period and rounded counts)
+ * @param topic - the topic it came from (title, evidence, questions, clinician)
+ * @param options - paper, date, version and what to show
+ * @param fonts - the regular and bold faces from `handoutFonts`
+ * @throws RangeError when the date is not a YYYY-MM-DD date from 1970 to 2037 (the PDF date range jsPDF writes)
+ * @example buildHandout(result, topic, { date: '2026-12-01', appVersion: '0.1.0' }, fonts).ok // => true
+ */
+export function buildHandout(result: TopicResult, topic: Topic, options: HandoutOptions, fonts: HandoutFonts): HandoutBuild {
+  const paper = options.paper ?? 'a4';
+  const messages = options.messages ?? handoutMessagesEn;
+  const palette = options.palette ?? colourPalette;
+  const creationDate = pdfDate(checkedDate(options.date));
+  const content = handoutContent(result, topic, {
+    date: options.date,
+    appVersion: options.appVersion,
+    showNnt: options.showNnt === true,
+    clinician: options.clinician ?? '',
+    messages,
+  });
+
+  const doc = new jsPDF({
+    unit: 'mm',
+    format: paper,
+    orientation: 'portrait',
+    compress: true,
+    putOnlyUsedFonts: true,
+    // Thousandths of a point: far finer than any printer, and a tenth of the file size of jsPDF's default 16 digits.
+    precision: 3,
+    floatPrecision: 3,
+  });
+  registerFonts(doc, fonts, codePointsOf(content));
+  const measure = jsPdfMeasure(doc);
+  const box = contentBox(paper);
+  let layout: PageLayout | null = null;
+  let settings: FitSettings | null = null;
+  for (const candidate of FIT_LADDER) {
+    layout = layoutPage(content, candidate, box, palette, measure);
+    settings = candidate;
+    if (layout.fits) break;
+  }
+  if (layout === null || settings === null || !layout.fits) {
+    const part = layout?.tooLong ?? 'outcomes';
+    const over = Math.max(0, (layout?.needed ?? 0) - box.height);
+    return { ok: false, reason: 'does-not-fit', part, overMillimetres: over, message: messages.doesNotFit(part, over) };
+  }
+
+  drawPage(doc, layout.items, palette);
+  const clinician = (options.clinician ?? '').trim() || topic.clinician.trim();
+  doc.setDocumentProperties({
+    title: content.title,
+    subject: messages.documentSubject,
+    author: clinician,
+    creator: messages.appVersion(options.appVersion),
+    keywords: '',
+  });
+  doc.setLanguage(messages.language as Parameters<jsPDF['setLanguage']>[0]);
+  doc.setCreationDate(creationDate);
+  doc.setFileId(fileIdentifier([content.title, options.date, paper, options.appVersion].join('\n')));
+  const prose = proseOf(content);
+  return {
+    ok: true,
+    pdf: new Uint8Array(doc.output('arraybuffer')),
+    paper,
+    pages: doc.getNumberOfPages(),
+    readability: readability(prose.join('\n\n')),
+    settings,
+    wordingSentences: content.wordingSentences,
+    prose,
+  };
+}
+
+/** A real calendar date, YYYY-MM-DD, in the years a PDF date from jsPDF may carry. */
+function checkedDate(date: string): string {
+  const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(date);
+  const [year, month, day] = found === null ? [0, 0, 0] : [Number(found[1]), Number(found[2]), Number(found[3])];
+  const calendar = new Date(Date.UTC(year, month - 1, day));
+  const real = calendar.getUTCFullYear() === year && calendar.getUTCMonth() === month - 1 && calendar.getUTCDate() === day;
+  if (found === null || !real || year < 1970 || year > 2037) {
+    throw new RangeError(`buildHandout requires a YYYY-MM-DD date from 1970 to 2037 (got ${date})`);
+  }
+  return date;
+}

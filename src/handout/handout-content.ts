@@ -1,0 +1,233 @@
+/**
+ * Everything a handout says, as plain data and before any layout: the header,
+ * the headline outcome's pictures and their key, the table of every outcome (side
+ * effects with their frequency bands), the plain sentences from the wording
+ * module, evidence, prompts, questions, caution and footer.
+ */
+import type { Certainty, Topic } from '../core/topic/topic.ts';
+import type { PersonGroup } from '../core/types.ts';
+import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
+import { amountOf } from '../core/wording/amount-of.ts';
+import { frequencyBand } from '../core/wording/frequency-band.ts';
+import { optionCount, optionRisk } from '../core/wording/option-context.ts';
+import { handoutSentences } from '../core/wording/topic-wording.ts';
+import type { WordingSentence } from '../core/wording/wording-sentence.ts';
+import { type ChartModel, outcomeChart } from '../render/chart-model.ts';
+import { FILL_ORDER } from '../render/fill-sequence.ts';
+import type { HandoutMessages } from './messages/en.ts';
+
+/** One cell of the outcomes table: the people count, and how sure the research is. */
+export interface TableCell {
+  readonly value: string;
+  readonly note: string | null;
+}
+
+export interface TableRow {
+  readonly outcomeId: string;
+  readonly outcome: string;
+  /** The outcome the pictures show. */
+  readonly isHeadline: boolean;
+  /** One cell per option, in the order of the pictures (comparison first). */
+  readonly cells: readonly TableCell[];
+}
+
+/** A run of rows under a sub-heading (none when every outcome is of one kind). */
+export interface TableSection {
+  readonly heading: string | null;
+  readonly rows: readonly TableRow[];
+}
+
+/** The table of every outcome, its columns lined up under the pictures. */
+export interface OutcomeTable {
+  readonly sections: readonly TableSection[];
+  /** Said under the table when no side effect was entered; null otherwise. */
+  readonly noSideEffects: string | null;
+}
+
+/** One line of the key to the pictures. */
+export interface KeyEntry {
+  readonly group: PersonGroup;
+  readonly text: string;
+}
+
+export interface HandoutContent {
+  readonly title: string;
+  readonly illustrative: { readonly badge: string; readonly note: string } | null;
+  /** Who the numbers are for (the wording's population sentence) and the one period and denominator. */
+  readonly audience: readonly string[];
+  /**
+   * The headline outcome's pictures: the chart model titled with the option names
+   * and without its own legend (the key, the captions and the table take its
+   * place), the key, and under each picture its option's two frames in words.
+   */
+  readonly chart: {
+    readonly heading: string;
+    readonly model: ChartModel;
+    readonly keyIntro: string;
+    readonly key: readonly KeyEntry[];
+    /** One caption per picture, in the pictures' order: the wording's event and free frames. */
+    readonly captions: readonly string[];
+  };
+  /** The other outcomes, lined up under the pictures. */
+  readonly table: OutcomeTable;
+  /** The headline outcome's other plain sentences (change, range, certainty), a paragraph per option. */
+  readonly paragraphs: readonly (readonly string[])[];
+  readonly sentencesHeading: string;
+  readonly evidence: { readonly heading: string; readonly items: readonly string[] };
+  readonly matters: { readonly heading: string; readonly prompt: string };
+  readonly questions: { readonly heading: string; readonly items: readonly string[] };
+  readonly caution: { readonly heading: string; readonly text: string };
+  readonly footer: { readonly left: string; readonly right: string };
+  /** Every sentence taken from the wording module, in the order printed. */
+  readonly wordingSentences: readonly string[];
+}
+
+export interface ContentOptions {
+  readonly date: string;
+  readonly appVersion: string;
+  readonly showNnt: boolean;
+  /** Overrides the topic's clinician or practice when not empty. */
+  readonly clinician: string;
+  readonly messages: HandoutMessages;
+}
+
+/** The outcome the chart shows: the headline, or the first outcome. */
+export function headlineOutcome(result: TopicResult): OutcomeResult {
+  const found = result.outcomes.find((outcome) => outcome.isHeadline) ?? result.outcomes[0];
+  if (found === undefined) throw new RangeError('a handout requires a topic with at least one outcome');
+  return found;
+}
+
+/** Consecutive sentences about the same option, as paragraphs. */
+function paragraphsOf(sentences: readonly WordingSentence[]): string[][] {
+  const paragraphs: string[][] = [];
+  let previous: string | null | undefined;
+  for (const sentence of sentences) {
+    const last = paragraphs[paragraphs.length - 1];
+    if (last !== undefined && sentence.optionId === previous) last.push(sentence.text);
+    else paragraphs.push([sentence.text]);
+    previous = sentence.optionId;
+  }
+  return paragraphs;
+}
+
+/**
+ * A cell: the option's drawn count (as in the pictures and the sentences); for a
+ * side effect, its EU SmPC frequency band with the number beside the word.
+ */
+function tableCell(option: OptionOutcomeResult, kind: 'benefit' | 'harm', denominator: number, messages: HandoutMessages): TableCell {
+  const risk = optionRisk(option);
+  const amount = amountOf(optionCount(option), denominator, risk);
+  const certainty: Certainty | null = option.isComparison ? null : option.certainty;
+  const value = kind === 'harm' ? messages.bandCell(frequencyBand(risk), amount, denominator) : messages.tableCell(amount, denominator);
+  return { value, note: certainty === null ? null : messages.certaintyShort[certainty] };
+}
+
+/** An outcome's options in the order of the pictures: the comparison, then the others as in the chart. */
+function cellsInChartOrder(outcome: OutcomeResult, model: ChartModel): OptionOutcomeResult[] {
+  return model.arrays.map((array) => {
+    const found = outcome.options.find((option) => option.optionId === array.optionId);
+    if (found === undefined) throw new RangeError(`a handout requires every outcome to have option ${array.optionId}`);
+    return found;
+  });
+}
+
+/** Every outcome but the headline: other benefits, then side effects, each under its sub-heading. */
+function outcomeTable(result: TopicResult, model: ChartModel, headlineId: string, messages: HandoutMessages): OutcomeTable {
+  const rowOf = (outcome: OutcomeResult): TableRow => ({
+    outcomeId: outcome.outcomeId,
+    outcome: messages.capitalise(outcome.name.trim()),
+    isHeadline: false,
+    cells: cellsInChartOrder(outcome, model).map((option) => tableCell(option, outcome.kind, result.denominator, messages)),
+  });
+  const others = result.outcomes.filter((outcome) => outcome.outcomeId !== headlineId);
+  const sections: TableSection[] = [
+    { heading: messages.tableBenefitRows, rows: others.filter((outcome) => outcome.kind === 'benefit').map(rowOf) },
+    { heading: messages.tableHarmRows, rows: others.filter((outcome) => outcome.kind === 'harm').map(rowOf) },
+  ].filter((section) => section.rows.length > 0);
+  return {
+    sections,
+    noSideEffects: result.outcomes.some((outcome) => outcome.kind === 'harm') ? null : messages.noSideEffects,
+  };
+}
+
+/**
+ * The chart model titled with the option names, without its own labels, notes and
+ * ranges, which the key, the captions and the sentences carry.
+ */
+function picturesOnly(model: ChartModel, messages: HandoutMessages): ChartModel {
+  return {
+    ...model,
+    heading: '',
+    illustrative: null,
+    arrays: model.arrays.map((array) => ({ ...array, title: messages.capitalise(array.name.trim()), labels: [], note: null, range: null })),
+  };
+}
+
+const FRAME_KINDS: ReadonlySet<string> = new Set(['event-frame', 'free-frame']);
+
+/** The key: one line per look of figure that the pictures use, in fill order. */
+function keyEntries(model: ChartModel, messages: HandoutMessages): KeyEntry[] {
+  return FILL_ORDER.filter((group) => model.arrays.some((array) => array.groups[group] > 0)).map((group) => ({
+    group,
+    text: messages.keyGroups[group],
+  }));
+}
+
+/**
+ * The content of a handout for a computed topic. Numbers come from the result's
+ * rounded people counts (the same as the charts); sentences come from the wording
+ * module; every other string comes from `options.messages`.
+ *
+ * @param result - the computed topic
+ * @param topic - the topic it was computed from (evidence, questions, clinician)
+ * @param options - date, version, clinician and catalogue
+ * @returns the content, ready for layout
+ */
+export function handoutContent(result: TopicResult, topic: Topic, options: ContentOptions): HandoutContent {
+  const { messages } = options;
+  const sheet = { denominator: result.denominator, years: result.periodYears };
+  const headline = headlineOutcome(result);
+  const sentences = handoutSentences(result, { showNnt: options.showNnt });
+  const population = sentences.filter((sentence) => sentence.kind === 'population');
+  const headlineSentences = sentences.filter((sentence) => sentence.outcomeId === headline.outcomeId);
+  const frames = headlineSentences.filter((sentence) => FRAME_KINDS.has(sentence.kind));
+  const others = headlineSentences.filter((sentence) => !FRAME_KINDS.has(sentence.kind));
+  const model = outcomeChart(result, headline.outcomeId);
+  const captions = model.arrays.map((array) =>
+    frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text).join(' '),
+  );
+  const evidence = [messages.evidenceSummary(topic.evidence.summary), messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed))];
+  if (headline.baselineSource.trim() !== '') evidence.push(messages.baselineSource(headline.name, headline.baselineSource));
+  const clinician = options.clinician.trim() !== '' ? options.clinician.trim() : topic.clinician.trim();
+  const questions = topic.questions.map((question) => question.trim()).filter((question) => question !== '');
+  const printed = messages.printed(messages.formatDate(options.date));
+  return {
+    title: topic.title.trim(),
+    illustrative: result.illustrative ? { badge: messages.illustrativeBadge, note: messages.illustrativeNote } : null,
+    audience: [...population.map((sentence) => sentence.text), messages.numbersFor(sheet)],
+    chart: {
+      heading: model.heading,
+      model: picturesOnly(model, messages),
+      keyIntro: messages.keyIntro(sheet),
+      key: keyEntries(model, messages),
+      captions,
+    },
+    table: outcomeTable(result, model, headline.outcomeId, messages),
+    paragraphs: paragraphsOf(others),
+    sentencesHeading: messages.sentencesHeading,
+    evidence: { heading: messages.evidenceHeading, items: evidence },
+    matters: { heading: messages.mattersHeading, prompt: messages.mattersPrompt },
+    questions: { heading: messages.questionsHeading, items: questions.length > 0 ? questions : messages.defaultQuestions },
+    caution: { heading: messages.cautionHeading, text: messages.caution(sheet) },
+    footer: {
+      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join('  ·  '),
+      right: [messages.appVersion(options.appVersion), messages.pageOfPages].join('  ·  '),
+    },
+    wordingSentences: [
+      ...population.map((sentence) => sentence.text),
+      ...model.arrays.flatMap((array) => frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text)),
+      ...others.map((sentence) => sentence.text),
+    ],
+  };
+}

@@ -1,0 +1,171 @@
+/**
+ * English wording of the printed handout: headings, captions, the standard
+ * caution, the footer and the refusal sentence. Layout code never holds prose; a
+ * second language is a sibling module with the same shape ({@link HandoutMessages}).
+ */
+import { formatDecimal } from '../../core/messages/format-number.ts';
+import type { Certainty } from '../../core/topic/topic.ts';
+import type { PersonGroup } from '../../core/types.ts';
+import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
+
+/** The parts of a handout the clinician can shorten when it does not fit. */
+export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'questions';
+
+/** Values shared by sentences about the whole sheet. */
+export interface SheetValues {
+  readonly denominator: number;
+  readonly years: number;
+}
+
+/** The shape every language's handout wording provides. */
+export interface HandoutMessages {
+  /** BCP 47 tag written into the PDF, for screen readers. */
+  readonly language: string;
+  readonly documentSubject: string;
+  readonly paperName: Readonly<Record<'a4' | 'letter', string>>;
+  readonly illustrativeBadge: string;
+  readonly illustrativeNote: string;
+  readonly numbersFor: (values: SheetValues) => string;
+  readonly keyIntro: (values: SheetValues) => string;
+  /** What each look of figure means, in words that suit any outcome. */
+  readonly keyGroups: Readonly<Record<PersonGroup, string>>;
+  readonly sentencesHeading: string;
+  readonly tableBenefitRows: string;
+  readonly tableHarmRows: string;
+  /** A benefit's cell: people out of the denominator. */
+  readonly tableCell: (amount: Amount, denominator: number) => string;
+  /** A side effect's cell: its frequency band with the number beside the word. */
+  readonly bandCell: (band: FrequencyBand, amount: Amount, denominator: number) => string;
+  readonly certaintyShort: Readonly<Record<Certainty, string>>;
+  readonly noSideEffects: string;
+  readonly evidenceHeading: string;
+  readonly evidenceSummary: (summary: string) => string;
+  readonly evidenceReviewed: (reviewed: string) => string;
+  readonly baselineSource: (outcome: string, source: string) => string;
+  readonly mattersHeading: string;
+  readonly mattersPrompt: string;
+  readonly questionsHeading: string;
+  readonly defaultQuestions: readonly string[];
+  readonly cautionHeading: string;
+  readonly caution: (values: SheetValues) => string;
+  readonly preparedBy: (name: string) => string;
+  readonly preparedByBlank: string;
+  readonly printed: (date: string) => string;
+  readonly appVersion: (version: string) => string;
+  readonly pageOfPages: string;
+  /** A date written YYYY-MM-DD in words; any other text is returned as typed. */
+  readonly formatDate: (text: string) => string;
+  /** The one line telling the clinician what to shorten. */
+  readonly doesNotFit: (part: HandoutPart, overMillimetres: number) => string;
+  /** A capital first letter, for option names used as column headings. */
+  readonly capitalise: (text: string) => string;
+}
+
+const MONTHS = [
+  'January', 'February', 'March', 'April', 'May', 'June',
+  'July', 'August', 'September', 'October', 'November', 'December',
+];
+
+const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
+
+const period = (years: number): string => (years === 1 ? 'the next year' : `the next ${formatDecimal(years, 2)} years`);
+
+/** What to shorten, as it ends the refusal sentence. */
+const bandWords: Readonly<Record<FrequencyBand, string>> = {
+  'very-common': 'very common',
+  common: 'common',
+  uncommon: 'uncommon',
+  rare: 'rare',
+  'very-rare': 'very rare',
+  'not-known': 'not known',
+};
+
+const amountCell = (amount: Amount, denominator: number): string => {
+  switch (amount.kind) {
+    case 'none':
+      return `0 in ${denominator}`;
+    case 'fewer-than-one':
+      return `fewer than 1 in ${denominator}`;
+    case 'about':
+      return `${amount.count} in ${denominator}`;
+    case 'nearly-all':
+      return `nearly all ${denominator}`;
+    case 'all':
+      return `all ${denominator}`;
+  }
+};
+
+const shortenWhat: Readonly<Record<HandoutPart, string>> = {
+  header: 'the decision or the description of who the numbers are for',
+  options: 'the option names, or compare fewer options',
+  outcomes: 'the outcome names, or show fewer outcomes',
+  evidence: 'the evidence summary or the source of the starting chance',
+  questions: 'the questions, or give fewer of them',
+};
+
+/** English handout wording. */
+export const handoutMessagesEn: HandoutMessages = {
+  language: 'en-GB',
+  documentSubject: 'Benefits and harms of the options, for talking with your clinician',
+  paperName: { a4: 'A4', letter: 'US Letter' },
+  illustrativeBadge: 'Illustrative example',
+  illustrativeNote: 'Invented numbers, for teaching only: not for real decisions.',
+  numbersFor: ({ denominator, years }) =>
+    `Every number on this sheet is out of ${denominator} people, over ${period(years)}.`,
+  keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
+  keyGroups: {
+    event: 'People it happens to',
+    prevented: 'People who avoid it because of the option',
+    caused: 'People it happens to because of the option',
+    free: 'People it does not happen to',
+  },
+  sentencesHeading: 'What the numbers mean',
+  tableBenefitRows: 'Other outcomes the options aim to lower',
+  tableHarmRows: 'Side effects: how common they are',
+  tableCell: amountCell,
+  bandCell: (band, amount, denominator) =>
+    band === 'not-known' ? amountCell(amount, denominator) : `${bandWords[band]}: ${amountCell(amount, denominator)}`,
+  certaintyShort: {
+    high: 'high certainty',
+    moderate: 'moderate certainty',
+    low: 'low certainty',
+    'very-low': 'very low certainty',
+  },
+  noSideEffects: 'No side effects were entered for this sheet. Ask your clinician about them.',
+  evidenceHeading: 'Where these numbers come from:',
+  evidenceSummary: (summary) => {
+    const trimmed = summary.trim();
+    if (trimmed === '') return 'The source of the research was not given.';
+    return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
+  },
+  evidenceReviewed: (reviewed) =>
+    reviewed.trim() === '' ? 'The date the research was checked was not given.' : `The research was last checked on ${reviewed.trim()}.`,
+  baselineSource: (outcome, source) => {
+    const trimmed = source.trim().replace(/[.!?]+$/, '');
+    return `Your starting chance of ${outcome} comes from: ${trimmed}.`;
+  },
+  mattersHeading: 'What matters most to you',
+  mattersPrompt: 'Think about what is most important to you in this choice. Write it here to talk about.',
+  questionsHeading: 'Questions you may want to ask',
+  defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
+  cautionHeading: 'Please keep in mind:',
+  caution: ({ denominator, years }) =>
+    `these numbers are estimates for groups of ${denominator} people like you over ${period(years)}, ` +
+    'not a prediction for you. ' +
+    'This sheet helps you talk with your own doctor, nurse or pharmacist, and does not replace their advice. ' +
+    'Follow local guidance.',
+  preparedBy: (name) => `Prepared by ${name.trim()}`,
+  preparedByBlank: 'Prepared by: ______________________',
+  printed: (date) => `Printed on ${date}`,
+  appVersion: (version) => `Chancewise ${version}`,
+  pageOfPages: 'Page 1 of 1',
+  formatDate: (text) => {
+    const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text.trim());
+    const month = found === null ? undefined : MONTHS[Number(found[2]) - 1];
+    if (found === null || month === undefined) return text.trim();
+    return `${Number(found[3])} ${month} ${found[1]}`;
+  },
+  doesNotFit: (part, overMillimetres) =>
+    `The handout does not fit on one page (about ${Math.max(1, Math.ceil(overMillimetres))} mm too long): shorten ${shortenWhat[part]}.`,
+  capitalise,
+};
