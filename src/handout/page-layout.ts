@@ -67,17 +67,20 @@ function sideBySide(left: Block, right: Block, width: number): Block {
   };
 }
 
-/** What matters to the patient (a prompt and lines to write on) beside the questions to ask. */
+/**
+ * What matters to the patient (a prompt and ruled lines to write on) beside the
+ * questions to ask: at least the settings' number of lines, more where the
+ * questions leave room.
+ */
 function promptsBlock(content: HandoutContent, width: number, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {
   const columnWidth = (width - COLUMN_GUTTER) / 2;
   const heading = (text: string) => headingBlock(text, columnWidth, styles, measure);
-  const writing = writingLines(settings.writingLines, columnWidth, lineHeight(styles.list) * 1.6, styles.colours.rule);
-  const prompt = textItem(textBlock(content.matters.prompt, columnWidth, styles.listMuted, measure));
-  return sideBySide(
-    section(heading(content.matters.heading), stack([prompt, writing], 0)),
-    section(heading(content.questions.heading), bulletsBlock(content.questions.items, columnWidth, styles.list, measure)),
-    width,
-  );
+  const spacing = lineHeight(styles.list) * 1.6;
+  const questions = section(heading(content.questions.heading), bulletsBlock(content.questions.items, columnWidth, styles.list, measure));
+  const prompt = section(heading(content.matters.heading), textItem(textBlock(content.matters.prompt, columnWidth, styles.listMuted, measure)));
+  const room = Math.floor((questions.height - prompt.height - 0.5) / spacing);
+  const writing = writingLines(Math.max(settings.writingLines, room), columnWidth, spacing, styles.colours.rule);
+  return sideBySide(stack([prompt, writing], 0), questions, width);
 }
 
 function footBlock(content: HandoutContent, width: number, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {

@@ -25,11 +25,15 @@ const PAD_Y = 1.05;
 /** Tolerance for a line that ends exactly at its column edge, in millimetres. */
 const EDGE = 0.01;
 
-/** Share of the width left of the pictures for the key and the outcome names, by number of pictures. */
-function labelShare(pictures: number): number {
-  if (pictures <= 2) return 0.34;
-  if (pictures === 3) return 0.27;
-  return 0.23;
+/**
+ * Share of the width left of the pictures for the key and the outcome names, by
+ * number of pictures; less beside arrays of 1000, which are wide and low.
+ */
+function labelShare(pictures: number, denominator: number): number {
+  const thousand = denominator === 1000;
+  if (pictures <= 2) return thousand ? 0.25 : 0.34;
+  if (pictures === 3) return thousand ? 0.21 : 0.27;
+  return thousand ? 0.19 : 0.23;
 }
 
 /** The render module's measure (sizes in millimetres) from the handout's (sizes in points). */
@@ -50,8 +54,22 @@ function centred(text: string, width: number, style: TextStyle, measure: Measure
   };
 }
 
+/** A cell's value, broken after its band word ("very common:" / "13 in 100") when it needs two lines. */
+function cellValue(text: string, width: number, style: TextStyle, measure: MeasureWidth): TextBlock {
+  const split = text.indexOf(': ');
+  if (split === -1 || measure(text, style.size, style.bold) <= width) return centred(text, width, style, measure);
+  const first = centred(text.slice(0, split + 1), width, style, measure);
+  const second = centred(text.slice(split + 2), width, style, measure);
+  return {
+    ...first,
+    lines: [...first.lines, ...second.lines.map((line) => ({ ...line, y: line.y + first.height }))],
+    height: first.height + second.height,
+    width: Math.max(first.width, second.width),
+  };
+}
+
 function cellBlock(cell: TableCell, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
-  const value = centred(cell.value, width, styles.tableBold, measure);
+  const value = cellValue(cell.value, width, styles.tableBold, measure);
   if (cell.note === null) return textItem(value);
   const note = centred(cell.note, width, styles.tableNote, measure);
   return { items: [...textItem(value).items, ...textItem(note, 0, value.height).items], height: value.height + note.height };
@@ -94,7 +112,7 @@ export function picturesBlock(
   const count = model.arrays.length;
   if (first === undefined) return { ok: true, block: { items: [], height: 0 } };
   const measureMm = chartMeasure(measure);
-  const labelWidth = width * labelShare(count);
+  const labelWidth = width * labelShare(count, model.denominator);
   const area = width - labelWidth;
   const fontSize = settings.chartText / POINTS_PER_MM;
   // chartFrame's own spacing: half an em of margin, two ems between arrays.
