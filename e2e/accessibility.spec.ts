@@ -43,7 +43,12 @@ test.describe('accessibility and privacy', () => {
   test('works by keyboard alone: reach a field, type, add an outcome, save', async ({ page }) => {
     await openApp(page);
     await page.keyboard.press('Tab');
-    await expect(page.getByRole('button', { name: 'Topics' })).toBeFocused();
+    await expect(page.getByRole('link', { name: 'Skip to the topic' })).toBeFocused();
+    await page.keyboard.press('Tab');
+    await expect(page.getByRole('link', { name: 'Skip to the results' })).toBeFocused();
+    await page.keyboard.press('Enter');
+    await expect(page.getByRole('heading', { name: 'Results', exact: true })).toBeFocused();
+    await page.getByRole('button', { name: 'Topics' }).focus();
     // Through the header (Open, Save) and the banner's link to the first field of the editor.
     const order: string[] = [];
     for (let step = 0; step < 4; step += 1) {
@@ -86,6 +91,7 @@ test.describe('accessibility and privacy', () => {
     const page = await context.newPage();
     await page.goto('/');
     await expect(page.locator('svg.people-chart').first()).toBeVisible();
+    expect(await seriousViolations(page)).toEqual([]);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     const editor = await page.getByRole('region', { name: 'Topic' }).boundingBox();

@@ -1,0 +1,213 @@
+/**
+ * English wording of the teaching view: step names, slide texts, the evidence line of
+ * each format demonstration with its source, the controls, and the teaching-set file
+ * messages. Slide builders pass numbers and names; only this file holds English.
+ */
+import type { StepKind } from '../teaching-steps.ts';
+
+/** A finding from the research and where it comes from (author and year). */
+export interface EvidenceWords {
+  readonly finding: string;
+  readonly source: string;
+}
+
+const plural = (count: number, one: string, other: string): string => (count === 1 ? one : other);
+
+/** A name as it starts a line: "no tablet" → "No tablet". */
+export const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
+
+/** A period in words: 10 → "10 years", 1 → "1 year". */
+const years = (count: number): string => `${count} ${plural(count, 'year', 'years')}`;
+
+/** A decimal with at most two places and no trailing zeros: 11.25, 3.75, 26.67. */
+export function shortDecimal(value: number): string {
+  const fixed = (Math.round(value * 100) / 100).toFixed(2);
+  return fixed.replace(/0+$/, '').replace(/\.$/, '');
+}
+
+/** Outcome names starting with a verb in -ing ("dying of …") read "end up dying"; others "have a stroke". */
+const startsWithVerb = (outcome: string): boolean => /^[a-z]{2,}ing$/i.test(outcome.trim().split(/\s+/)[0] ?? '');
+const have = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'has', 'have'));
+const get = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get'));
+
+export const teachingMessagesEn = {
+  /** The name of each step, as the slide's heading and in the step list. */
+  stepNames: {
+    title: 'The decision',
+    baseline: 'Without the option',
+    'with-option': 'With the option',
+    helped: 'Who is helped',
+    harmed: 'Who is harmed',
+    uncertainty: 'How sure are we?',
+    'patient-words': 'What the patient hears',
+    framing: 'One result, four ways',
+    denominator: '100 or 1000 people?',
+    arrangement: 'Grouped or scattered?',
+    incremental: 'Two totals, or the change itself?',
+  } satisfies Record<StepKind, string>,
+
+  view: {
+    label: 'Teaching view',
+    progress: (step: number, steps: number) => `${step} / ${steps}`,
+    progressLabel: (step: number, steps: number, topic: number, topics: number) =>
+      topics > 1 ? `Slide ${step} of ${steps}, topic ${topic} of ${topics}` : `Slide ${step} of ${steps}`,
+    topicOf: (topic: number, topics: number) => `Topic ${topic} of ${topics}`,
+    previous: 'Back',
+    next: 'Next',
+    leave: 'Leave',
+    leaveHint: 'Esc',
+    savePng: 'PNG',
+    saveSvg: 'SVG',
+    saveSlideGroup: 'Save this slide',
+    openSet: 'Open set…',
+    saveSet: 'Save set',
+    example: 'Example set',
+    controls: 'Presentation controls',
+    keysHint: 'Arrow keys, Page Up/Down or a clicker to step; Esc to leave.',
+    illustrative: 'Illustrative: invented numbers',
+    opened: (title: string, count: number) => `Opened the teaching set “${title}”: ${count} ${plural(count, 'topic', 'topics')}.`,
+    saved: (name: string) => `Saved “${name}”.`,
+    exported: (name: string) => `Saved the slide as “${name}”.`,
+    exportFailed: (detail: string) => `The slide could not be saved: ${detail}.`,
+    notOpened: (message: string) => `${message} The presentation is unchanged.`,
+    dismiss: 'Dismiss',
+  },
+
+  title: {
+    who: (population: string) => `For ${population}.`,
+    period: (periodYears: number) => `Every number is over ${years(periodYears)}.`,
+    comparing: (option: string, comparison: string) => `Comparing ${option} with ${comparison}.`,
+  },
+
+  /** Short call-outs beside the people: a count in large type, then what it means. */
+  callouts: {
+    countIn: (count: number, denominator: number) => `${count} in ${denominator}`,
+    have: (count: number, outcome: string, periodYears: number) => `${have(outcome, count)} ${outcome} over ${years(periodYears)}`,
+    doNot: (count: number) => plural(count, 'does not', 'do not'),
+    haveWith: (count: number, outcome: string, option: string) => `${have(outcome, count)} ${outcome} with ${option}`,
+    without: (comparison: string) => `without it (${comparison})`,
+    avoidBecause: (count: number, outcome: string, option: string) =>
+      `${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
+    getBecause: (count: number, outcome: string, option: string) => `${get(outcome, count)} ${outcome} because of ${option}`,
+    anyway: (count: number) => `${plural(count, 'has', 'have')} it anyway`,
+    peopleLikeYou: (denominator: number, population: string) => `Each figure is one of ${denominator} people like you: ${population}.`,
+    outlined: 'Outlined: people who may or may not have it, depending on where in the range the truth lies.',
+  },
+
+  /** Each count under an array, in words, for assistive technology and the slide export. */
+  chips: {
+    event: (count: number, outcome: string) => `${count} ${have(outcome, count)} ${outcome}`,
+    prevented: (count: number, outcome: string, option: string) =>
+      `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
+    caused: (count: number, outcome: string, option: string) => `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
+    free: (count: number, outcome: string) =>
+      `${count} ${plural(count, 'does', 'do')} not ${startsWithVerb(outcome) ? 'end up' : 'have'} ${outcome}`,
+    uncertain: (count: number, outcome: string) =>
+      `${count} may or may not ${startsWithVerb(outcome) ? 'end up' : 'have'} ${outcome}`,
+  },
+
+  panels: {
+    denominatorCaption: (denominator: number) => `${denominator} people`,
+    grouped: 'Grouped',
+    scattered: 'Scattered',
+    totalsOnly: 'Two totals',
+    withChange: 'The change as its own group',
+    description: (title: string, labels: readonly string[]) => `${title}: ${labels.join(', ')}.`,
+  },
+
+  story: {
+    /** The total with the option when the change is not shown as its own group. */
+    totalWith: (count: number, denominator: number, outcome: string, option: string) =>
+      `${count} in ${denominator} ${plural(count, 'has', 'have')} ${outcome} with ${option}.`,
+    totalWithout: (count: number, denominator: number, comparison: string) =>
+      `Without it (${comparison}): ${count} in ${denominator}.`,
+    sameFigures: 'The same figures, in the same order, with and without the option.',
+    noBenefit: 'This topic lists no benefit to show.',
+    noHarm: 'This topic lists no harms.',
+    noHarmPrompt: 'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
+    noOneHelped: (denominator: number, outcome: string, option: string) =>
+      `At these numbers, none of ${denominator} avoid ${outcome} because of ${option}.`,
+    noOneHarmed: (denominator: number, outcome: string, option: string) =>
+      `At these numbers, none of ${denominator} get ${outcome} because of ${option}.`,
+    harmChosen: (outcome: string) => `The harm shown: ${outcome}.`,
+    certaintyLabel: 'Certainty of the evidence',
+    certaintyNames: { high: 'high', moderate: 'moderate', low: 'low', 'very-low': 'very low' },
+    noRange: 'The research gives no range for this result.',
+    patientTopics: (outcome: string) => `About ${outcome}`,
+  },
+
+  framing: {
+    relativeLabel: 'Relative',
+    relativeValue: (percent: number, direction: 'lower' | 'higher') => `${percent}% ${direction} risk`,
+    relativeDetail: (ratio: string, from: string, to: string, denominator: number) =>
+      `${ratio} × ${from} = ${to} in ${denominator}`,
+    relativeNone: 'No relative change at these numbers',
+    absoluteLabel: 'Absolute',
+    absoluteValue: (count: number, denominator: number, direction: 'fewer' | 'more') =>
+      `${count} in ${denominator} ${direction}`,
+    absoluteDetail: (from: string, to: string, difference: string, denominator: number) =>
+      `${from} − ${to} = ${difference} in ${denominator}`,
+    absoluteNone: (denominator: number) => `No difference in ${denominator}`,
+    nntLabel: 'Number needed to treat',
+    nntValue: (count: number, direction: 'prevent' | 'cause') => `Treat ${count} to ${direction} 1`,
+    nntDetail: (denominator: number, difference: string, quotient: string, count: number) =>
+      `${denominator} ÷ ${difference} = ${quotient}, rounded up: ${count}`,
+    nntNone: 'No number needed to treat',
+    peopleLabel: 'People',
+    oneFact: 'Four descriptions of one result.',
+  },
+
+  /** What the research found about each format, in one line, with its source (author and year). */
+  evidence: {
+    framing: {
+      finding: 'Compared with the absolute difference, a relative reduction made little or no difference to understanding; showing the NNT reduced it.',
+      source: 'Akl et al. 2011; Zipkin et al. 2014',
+    },
+    denominator: {
+      finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
+      source: 'Galesic, Garcia-Retamero & Gigerenzer 2009',
+    },
+    arrangement: {
+      finding: 'Scattered figures were overestimated more, and more variably, than grouped ones.',
+      source: 'Ancker, Weber & Kukafka 2011',
+    },
+    incremental: {
+      finding: 'Showing the change itself, not only the two totals, reduced worry and the bias from the size of the group.',
+      source: 'Zikmund-Fisher et al. 2008',
+    },
+  } satisfies Record<string, EvidenceWords>,
+
+  file: {
+    notJson: (name: string, detail: string) => `“${name}” is not a readable teaching set: it is not complete JSON (${detail}).`,
+    empty: (name: string) => `“${name}” is empty, so there is no teaching set to open.`,
+    notASet: (name: string, format: string) => `“${name}” is not a Chancewise teaching set (its format is "${format}").`,
+    isATopic: (name: string) => `“${name}” is a topic, not a teaching set: open it as a topic, or put it in a set.`,
+    newerVersion: (name: string, version: string, supported: number) =>
+      `“${name}” is a teaching set of version ${version}, newer than this version of Chancewise reads (up to ${supported}).`,
+    damaged: (name: string, path: string, expected: string, received: string) =>
+      `“${name}” is damaged at "${path}": expected ${expected}, found ${received}.`,
+    emptyList: (name: string, path: string, what: 'topic' | 'step') =>
+      `“${name}” is damaged at "${path}": expected at least one ${what}, found an empty list.`,
+    topicProblem: (name: string, item: number, path: string, detail: string) =>
+      `“${name}”, topic ${item} ("${path}"): ${detail}`,
+    topicNotComputed: (name: string, item: number, path: string, detail: string) =>
+      `“${name}”, topic ${item} cannot be shown ("${path}"): ${detail}`,
+    unknownOption: (name: string, path: string, value: string, known: string) =>
+      `“${name}” is damaged at "${path}": there is no option "${value}" to present (the options are ${known}).`,
+    comparisonOption: (name: string, path: string, value: string) =>
+      `“${name}” is damaged at "${path}": "${value}" is the comparison; name an option to compare with it.`,
+    unknownHarm: (name: string, path: string, value: string, known: string) =>
+      `“${name}” is damaged at "${path}": there is no harm "${value}" in this topic (${known}).`,
+    noHarms: 'it has no harms',
+    harmsAre: (ids: string) => `the harms are ${ids}`,
+    pathInBrowser: (name: string, item: number, path: string) =>
+      `“${name}”, topic ${item} is a file (“${path}”), which a browser cannot open by itself. Save the set from the desktop app, or write the topic inside the set.`,
+    pathUnusable: (name: string, item: number, path: string) =>
+      `“${name}”, topic ${item} (“${path}”) must be a relative path to a .json file next to the set.`,
+    pathUnreadable: (name: string, item: number, path: string, detail: string) =>
+      `“${name}”, topic ${item} (“${path}”) could not be read: ${detail}.`,
+    setSuffix: '.teaching.json',
+  },
+} as const;
+
+export type TeachingMessages = typeof teachingMessagesEn;
