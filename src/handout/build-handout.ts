@@ -110,9 +110,9 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     orientation: 'portrait',
     compress: true,
     putOnlyUsedFonts: true,
-    // Thousandths of a point: far finer than any printer, and a tenth of the file size of jsPDF's default 16 digits.
-    precision: 3,
-    floatPrecision: 3,
+    // Hundredths of a point (0.004 mm): far finer than any printer, and a fraction of the size of jsPDF's default 16 digits.
+    precision: 2,
+    floatPrecision: 2,
   });
   registerFonts(doc, fonts, codePointsOf(content));
   const measure = jsPdfMeasure(doc);

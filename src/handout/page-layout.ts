@@ -21,7 +21,7 @@ import {
   writingLines,
 } from './section-blocks.ts';
 import { picturesBlock } from './pictures-block.ts';
-import { type MeasureWidth, lineHeight, textBlock } from './text-layout.ts';
+import { type MeasureWidth, inkDepth, lineHeight, textBlock } from './text-layout.ts';
 
 /** The content box of the page, in millimetres. */
 export interface PageBox {
@@ -92,9 +92,10 @@ function footBlock(content: HandoutContent, width: number, settings: FitSettings
   const oneLine = left.width + rightWidth + 8 <= width && left.lines.length === 1;
   const right = textBlock(content.footer.right, width, styles.footer, measure);
   const rightBlock = { ...right, lines: right.lines.map((line) => ({ ...line, x: width - measure(line.text, styles.footer.size, false) })) };
+  // The footer sits on the bottom margin, so its height reaches down to the descenders.
   const footer: Block = oneLine
-    ? { items: [...textItem(left).items, ...textItem(rightBlock).items], height: left.height }
-    : stack([textItem(left), textItem(rightBlock)], 0);
+    ? { items: [...textItem(left).items, ...textItem(rightBlock).items], height: inkDepth(left) }
+    : { items: [...textItem(left).items, ...textItem(rightBlock, 0, left.height).items], height: left.height + inkDepth(rightBlock) };
   const rule: Block = { items: [{ kind: 'rule', x: 0, y: 0, width, colour: styles.colours.rule, thickness: 0.25 }], height: 0.25 };
   return stack([caution, rule, footer], settings.space * 0.45);
 }

@@ -64,8 +64,18 @@ export interface TextBlock {
   readonly width: number;
 }
 
-/** DejaVu Sans ascent (hhea 1901 / 2048 units per em), rounded up: the first baseline's depth below the top. */
+/** DejaVu Sans ascent and descent (hhea 1901 and 483 / 2048 units per em), rounded up. */
 const ASCENT = 0.93;
+const DESCENT = 0.24;
+
+/**
+ * How far below a block's top its ink can reach: the last baseline plus the
+ * font's descent. With tight leading this is a little more than the block's height.
+ */
+export function inkDepth(block: TextBlock): number {
+  const last = block.lines[block.lines.length - 1];
+  return last === undefined ? 0 : Math.max(block.height, last.y + (block.style.size * DESCENT) / POINTS_PER_MM);
+}
 
 /** Line height of a style, in millimetres. */
 export function lineHeight(style: TextStyle): number {
