@@ -111,7 +111,7 @@ test.describe('files', () => {
     const text = execFileSync('pdftotext', ['-layout', path, '-'], { encoding: 'utf8' });
     expect(text).toMatch(/[Ii]llustrative/);
     expect(text).toContain('15');
-    await expect(page.getByRole('status').filter({ hasText: 'The handout is saved as a PDF' })).toBeVisible();
+    await expect(page.getByRole('status').filter({ hasText: /The handout is saved as “.*-handout\.pdf”/ })).toBeVisible();
   });
 
   test('unsaved work is offered back after the page is reopened', async ({ page }) => {

@@ -6,6 +6,7 @@ import { mount } from 'svelte';
 import { colourPalette } from '../render/palette.ts';
 import App from './App.svelte';
 import { browserPlatform } from './platform/browser-platform.ts';
+import { desktopPlatform } from './platform/desktop-platform.ts';
 import { DEMO_TOPICS } from './state/demo-topics.ts';
 import './styles/app.css';
 
@@ -22,4 +23,6 @@ function applyPaletteTokens(root: HTMLElement): void {
 applyPaletteTokens(document.documentElement);
 const target = document.getElementById('app');
 if (target === null) throw new Error('the page has no #app element');
-mount(App, { target, props: { platform: browserPlatform(), demos: DEMO_TOPICS } });
+// The desktop shell's preload puts its API on window.chancewise; a plain browser has none.
+const shell = window.chancewise;
+mount(App, { target, props: { platform: shell === undefined ? browserPlatform() : desktopPlatform(shell), demos: DEMO_TOPICS } });

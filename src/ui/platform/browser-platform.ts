@@ -5,7 +5,8 @@
 import { browserStorage } from '../state/key-value-storage.ts';
 import type { OpenedFile, Platform } from './platform.ts';
 
-function pickTextFile(accept: string): Promise<OpenedFile | null> {
+/** Ask for a file with a file input; null when cancelled. */
+export function pickTextFile(accept: string): Promise<OpenedFile | null> {
   return new Promise((resolve) => {
     const input = document.createElement('input');
     input.type = 'file';
@@ -26,7 +27,8 @@ function pickTextFile(accept: string): Promise<OpenedFile | null> {
   });
 }
 
-async function saveFile(suggestedName: string, contents: string | Uint8Array, type: string): Promise<string> {
+/** Offer bytes or text as a download (the browser saves it in its downloads folder). */
+export function download(suggestedName: string, contents: string | Uint8Array, type: string): string {
   const part: BlobPart = typeof contents === 'string' ? contents : new Uint8Array(contents);
   const url = URL.createObjectURL(new Blob([part], { type }));
   const link = document.createElement('a');
@@ -41,7 +43,21 @@ async function saveFile(suggestedName: string, contents: string | Uint8Array, ty
   return suggestedName;
 }
 
+const TOPIC_FILES = '.json,application/json';
+
 /** The browser platform. */
 export function browserPlatform(): Platform {
-  return { kind: 'browser', pickTextFile, saveFile, storage: browserStorage(), reopensByName: false };
+  return {
+    kind: 'browser',
+    storage: browserStorage(),
+    namesFilesItself: false,
+    openTopicFile: () => pickTextFile(TOPIC_FILES),
+    openRecentTopicFile: () => pickTextFile(TOPIC_FILES),
+    saveTopicFile: async (text, suggestedName) => download(suggestedName, text, 'application/json'),
+    saveExport: async (suggestedName, contents, type) => download(suggestedName, contents, type),
+    saveHandout: async (suggestedName, pdf) => download(suggestedName, pdf, 'application/pdf'),
+    topicReplaced: () => undefined,
+    snapshot: () => undefined,
+    connect: () => undefined,
+  };
 }

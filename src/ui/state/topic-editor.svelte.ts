@@ -8,7 +8,8 @@ import type { Denominator } from '../../core/types.ts';
 import { checkDraft } from '../draft/check-draft.ts';
 import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
-import type { Autosave } from './autosave.ts';
+import { withoutPatient } from './autosave.ts';
+import type { Autosave, AutosaveRecord } from './autosave.ts';
 import { UndoHistory } from './undo-history.ts';
 
 /** Runs a task later; returns a function that cancels it. */
@@ -24,6 +25,8 @@ export interface EditorSettings {
   readonly schedule?: Scheduler;
   /** Delay before an autosave, in milliseconds. */
   readonly autosaveDelay?: number;
+  /** Told of every autosave (the desktop shell keeps a crash-recovery copy too). */
+  readonly onAutosave?: (record: AutosaveRecord) => void;
 }
 
 const defaultSchedule: Scheduler = (task, delay) => {
@@ -67,6 +70,7 @@ export class TopicEditor {
   readonly #today: () => Date;
   readonly #schedule: Scheduler;
   readonly #autosaveDelay: number;
+  readonly #onAutosave: ((record: AutosaveRecord) => void) | null;
 
   constructor(initial: TopicDraft, settings: EditorSettings = {}) {
     this.#autosave = settings.autosave ?? null;
@@ -74,6 +78,7 @@ export class TopicEditor {
     this.#today = settings.today ?? (() => new Date());
     this.#schedule = settings.schedule ?? defaultSchedule;
     this.#autosaveDelay = settings.autosaveDelay ?? 500;
+    this.#onAutosave = settings.onAutosave ?? null;
     this.#history = new UndoHistory(initial);
     this.#savedSignature = signature(initial);
     this.fileName = settings.fileName ?? null;
@@ -139,16 +144,18 @@ export class TopicEditor {
   flushAutosave(): void {
     this.#cancelAutosave?.();
     this.#cancelAutosave = null;
-    this.#autosave?.save({
-      draft: this.draft,
+    const record: AutosaveRecord = {
+      draft: withoutPatient(this.draft),
       fileName: this.fileName,
       savedAt: this.#today().toISOString(),
       unsaved: this.hasUnsavedChanges,
-    });
+    };
+    this.#autosave?.save(record);
+    this.#onAutosave?.(record);
   }
 
   #queueAutosave(): void {
-    if (this.#autosave === null) return;
+    if (this.#autosave === null && this.#onAutosave === null) return;
     this.#cancelAutosave?.();
     this.#cancelAutosave = this.#schedule(() => {
       this.#cancelAutosave = null;

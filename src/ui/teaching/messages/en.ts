@@ -139,8 +139,7 @@ export const teachingMessagesEn = {
   framing: {
     relativeLabel: 'Relative',
     relativeValue: (percent: number, direction: 'lower' | 'higher') => `${percent}% ${direction} risk`,
-    relativeDetail: (ratio: string, from: string, to: string, denominator: number) =>
-      `${ratio} × ${from} = ${to} in ${denominator}`,
+    relativeDetail: (from: string, to: string, denominator: number) => `From ${from} to ${to} in ${denominator}`,
     relativeNone: 'No relative change at these numbers',
     absoluteLabel: 'Absolute',
     absoluteValue: (count: number, denominator: number, direction: 'fewer' | 'more') =>
@@ -153,8 +152,7 @@ export const teachingMessagesEn = {
     nntDetail: (denominator: number, difference: string, quotient: string, count: number) =>
       `${denominator} ÷ ${difference} = ${quotient}, rounded up: ${count}`,
     nntNone: 'No number needed to treat',
-    peopleLabel: 'People',
-    oneFact: 'Four descriptions of one result.',
+    peopleTitle: (option: string, denominator: number) => `${option}, ${denominator} people`,
   },
 
   /** What the research found about each format, in one line, with its source (author and year). */

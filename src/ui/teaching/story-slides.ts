@@ -1,0 +1,235 @@
+/**
+ * The slides that tell one result with people: the decision, the baseline, the same
+ * people with the option, who is helped, who is harmed, how sure we are, and the
+ * sentences a patient would hear. Every number comes from the computed topic and
+ * every patient sentence from the core's wording.
+ */
+import type { OptionOutcomeResult, OutcomeResult } from '../../core/topic/topic-result.ts';
+import { topicWording } from '../../core/wording/topic-wording.ts';
+import type { TopicWording } from '../../core/wording/topic-wording.ts';
+import type { SentenceKind } from '../../core/wording/wording-sentence.ts';
+import { uncertainRanks } from '../../render/uncertain-people.ts';
+import { capitalise } from './messages/en.ts';
+import type { TeachingMessages } from './messages/en.ts';
+import { peoplePanel, totalsOnly } from './people-panel.ts';
+import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
+import type { PresentationItem } from './presentation-item.ts';
+import type { Callout, PeoplePanel, Slide, SlideLine } from './slide-model.ts';
+import type { StepKind } from './teaching-steps.ts';
+
+/** What every slide builder reads. */
+export interface SlideSource {
+  readonly item: PresentationItem;
+  readonly messages: TeachingMessages;
+}
+
+/** The comparison's and the presented option's results for one outcome. */
+export interface OutcomeArms {
+  readonly outcome: OutcomeResult;
+  readonly comparison: OptionOutcomeResult;
+  readonly option: OptionOutcomeResult;
+}
+
+/** The two arms of an outcome, or null when the outcome lacks either. */
+export function armsOf(outcome: OutcomeResult | null, optionId: string): OutcomeArms | null {
+  if (outcome === null) return null;
+  const comparison = outcome.options.find((entry) => entry.isComparison);
+  const option = outcome.options.find((entry) => entry.optionId === optionId && !entry.isComparison);
+  return comparison === undefined || option === undefined ? null : { outcome, comparison, option };
+}
+
+/** A sentence of the core's wording, by outcome, option and kind. */
+export function sentenceOf(wording: TopicWording, outcomeId: string, optionId: string, kind: SentenceKind): string | null {
+  const outcome = wording.outcomes.find((entry) => entry.outcomeId === outcomeId);
+  const option = outcome?.options.find((entry) => entry.optionId === optionId);
+  return option?.sentences.find((entry) => entry.kind === kind)?.text ?? null;
+}
+
+/** A slide with the given parts; everything not given is empty. */
+export function slide(kind: StepKind, source: SlideSource, parts: Partial<Omit<Slide, 'kind' | 'illustrative'>>): Slide {
+  return {
+    kind,
+    layout: parts.layout ?? 'words',
+    heading: parts.heading ?? source.messages.stepNames[kind],
+    panels: parts.panels ?? [],
+    callouts: parts.callouts ?? [],
+    cards: parts.cards ?? [],
+    lines: parts.lines ?? [],
+    evidence: parts.evidence ?? null,
+    illustrative: source.item.result.illustrative,
+  };
+}
+
+const line = (text: string, tone: SlideLine['tone'] = 'body', look: SlideLine['look'] = null): SlideLine => ({ text, tone, look });
+
+/** The comparison's array of an outcome. */
+export function comparisonPanel(arms: OutcomeArms, source: SlideSource): PeoplePanel {
+  return peoplePanel(
+    { id: 'comparison', title: capitalise(arms.comparison.name), groups: arms.comparison.groups, outcome: arms.outcome.name, option: arms.option.name },
+    source.messages,
+  );
+}
+
+/** The option's array of an outcome: with the change as its own group, or folded into the totals. */
+export function optionPanel(arms: OutcomeArms, source: SlideSource, settings: { readonly id?: string; readonly title?: string; readonly totals?: boolean } = {}): PeoplePanel {
+  const groups = settings.totals === true ? totalsOnly(arms.option.groups) : arms.option.groups;
+  return peoplePanel(
+    { id: settings.id ?? 'option', title: settings.title ?? capitalise(arms.option.name), groups, outcome: arms.outcome.name, option: arms.option.name },
+    source.messages,
+  );
+}
+
+function titleSlide(source: SlideSource): Slide {
+  const { topic, result, optionId } = source.item;
+  const words = source.messages.title;
+  const comparison = topic.options.find((option) => option.isComparison)?.name ?? '';
+  const option = topic.options.find((entry) => entry.id === optionId)?.name ?? '';
+  const lines: SlideLine[] = [];
+  if (result.population.trim() !== '') lines.push(line(words.who(result.population.trim().replace(/[.!?]$/, ''))));
+  lines.push(line(words.period(result.periodYears)), line(words.comparing(option, comparison)), line(source.messages.view.keysHint, 'note'));
+  return slide('title', source, { heading: topic.title, lines });
+}
+
+function baselineSlide(source: SlideSource): Slide {
+  const { result, optionId } = source.item;
+  const arms = armsOf(headlineOutcome(result), optionId);
+  if (arms === null) return slide('baseline', source, {});
+  const { comparison, outcome } = arms;
+  const words = source.messages.callouts;
+  const { denominator } = result;
+  const callouts: Callout[] = [
+    { look: 'event', value: words.countIn(comparison.groups.event, denominator), text: words.have(comparison.groups.event, outcome.name, result.periodYears) },
+    { look: 'free', value: words.countIn(comparison.groups.free, denominator), text: words.doNot(comparison.groups.free) },
+  ];
+  const population = result.population.trim().replace(/[.!?]$/, '');
+  const lines = population === '' ? [] : [line(words.peopleLikeYou(denominator, population), 'note')];
+  return slide('baseline', source, {
+    layout: 'single',
+    panels: [comparisonPanel(arms, source)],
+    callouts,
+    lines,
+  });
+}
+
+function withOptionSlide(source: SlideSource): Slide {
+  const { result, optionId } = source.item;
+  const arms = armsOf(headlineOutcome(result), optionId);
+  if (arms === null) return slide('with-option', source, {});
+  const { comparison, option, outcome } = arms;
+  const words = source.messages.callouts;
+  const withCount = option.groups.event + option.groups.caused;
+  return slide('with-option', source, {
+    layout: 'pair',
+    panels: [comparisonPanel(arms, source), optionPanel(arms, source, { totals: true })],
+    callouts: [
+      { look: 'event', value: words.countIn(withCount, result.denominator), text: words.haveWith(withCount, outcome.name, option.name) },
+      { look: 'event', value: words.countIn(comparison.groups.event, result.denominator), text: words.without(comparison.name) },
+    ],
+    lines: [line(source.messages.story.sameFigures, 'note')],
+  });
+}
+
+function helpedSlide(source: SlideSource): Slide {
+  const { result, optionId } = source.item;
+  const arms = armsOf(benefitOutcome(result), optionId);
+  const messages = source.messages;
+  if (arms === null) return slide('helped', source, { lines: [line(messages.story.noBenefit)] });
+  const { option, outcome } = arms;
+  const words = messages.callouts;
+  const { denominator } = result;
+  const callouts: Callout[] =
+    option.groups.prevented > 0
+      ? [
+          { look: 'prevented', value: words.countIn(option.groups.prevented, denominator), text: words.avoidBecause(option.groups.prevented, outcome.name, option.name) },
+          { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
+        ]
+      : [];
+  const lines = option.groups.prevented > 0 ? [] : [line(messages.story.noOneHelped(denominator, outcome.name, option.name))];
+  return slide('helped', source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+}
+
+function harmedSlide(source: SlideSource): Slide {
+  const { result, optionId, harmId } = source.item;
+  const messages = source.messages;
+  const arms = armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId);
+  if (arms === null) return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
+  const { option, outcome } = arms;
+  const words = messages.callouts;
+  const { denominator } = result;
+  const callouts: Callout[] =
+    option.groups.caused > 0
+      ? [
+          { look: 'caused', value: words.countIn(option.groups.caused, denominator), text: words.getBecause(option.groups.caused, outcome.name, option.name) },
+          { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
+        ]
+      : [];
+  const lines = option.groups.caused > 0 ? [] : [line(messages.story.noOneHarmed(denominator, outcome.name, option.name))];
+  return slide('harmed', source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+}
+
+function uncertaintySlide(source: SlideSource): Slide {
+  const { result, optionId } = source.item;
+  const messages = source.messages;
+  const arms = armsOf(benefitOutcome(result) ?? headlineOutcome(result), optionId);
+  if (arms === null) return slide('uncertainty', source, {});
+  const { option, outcome } = arms;
+  const wording = topicWording(result);
+  const interval = option.perPeople.interventionRange;
+  const span = interval === null ? null : uncertainRanks(interval, option.groups.event + option.groups.caused);
+  const panel = peoplePanel(
+    { id: 'option', title: capitalise(option.name), groups: option.groups, outcome: outcome.name, option: option.name, uncertain: span },
+    messages,
+  );
+  const range = sentenceOf(wording, outcome.outcomeId, option.optionId, 'range') ?? sentenceOf(wording, outcome.outcomeId, option.optionId, 'range-unknown');
+  const certainty = sentenceOf(wording, outcome.outcomeId, option.optionId, 'certainty');
+  const lines: SlideLine[] = [];
+  if (range !== null) lines.push(line(range));
+  if (span !== null) lines.push(line(messages.callouts.outlined, 'body', 'uncertain'));
+  if (option.certainty !== null) {
+    lines.push(line(`${messages.story.certaintyLabel}: ${messages.story.certaintyNames[option.certainty]}`, 'subheading'));
+    if (certainty !== null) lines.push(line(certainty));
+  }
+  return slide('uncertainty', source, { layout: 'single', panels: [panel], lines });
+}
+
+function patientWordsSlide(source: SlideSource): Slide {
+  const { result, optionId, harmId } = source.item;
+  const wording = topicWording(result);
+  const lines: SlideLine[] = [];
+  const about = (arms: OutcomeArms | null, kinds: readonly (readonly [string, SentenceKind, SentenceKind | null])[]) => {
+    if (arms === null) return;
+    lines.push(line(source.messages.story.patientTopics(arms.outcome.name), 'subheading'));
+    for (const [armId, kind, joined] of kinds) {
+      const first = sentenceOf(wording, arms.outcome.outcomeId, armId, kind);
+      const second = joined === null ? null : sentenceOf(wording, arms.outcome.outcomeId, armId, joined);
+      const text = [first, second].filter((part): part is string => part !== null).join(' ');
+      if (text !== '') lines.push(line(text));
+    }
+  };
+  const headline = armsOf(headlineOutcome(result), optionId);
+  if (headline !== null) {
+    about(headline, [
+      [headline.comparison.optionId, 'event-frame', 'free-frame'],
+      [optionId, 'event-frame', 'free-frame'],
+      [optionId, 'change', null],
+      [optionId, 'certainty', null],
+    ]);
+  }
+  const harm = harmId === headline?.outcome.outcomeId ? null : armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId);
+  about(harm, [
+    [optionId, 'change', null],
+    [optionId, 'certainty', null],
+  ]);
+  return slide('patient-words', source, { lines });
+}
+
+/** The story slides, by step. */
+export const STORY_SLIDES = {
+  title: titleSlide,
+  baseline: baselineSlide,
+  'with-option': withOptionSlide,
+  helped: helpedSlide,
+  harmed: harmedSlide,
+  uncertainty: uncertaintySlide,
+  'patient-words': patientWordsSlide,
+} as const satisfies Partial<Record<StepKind, (source: SlideSource) => Slide>>;

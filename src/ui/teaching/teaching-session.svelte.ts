@@ -1,0 +1,115 @@
+/**
+ * The state of a teaching presentation: the topics in order, each with its steps,
+ * and where the presenter is. Every slide of every topic is one place in a single
+ * sequence, so stepping forward from a topic's last step goes to the next topic's
+ * first. The topics are copies: presenting never changes the editor's topic.
+ */
+import { buildSlide } from './build-slide.ts';
+import { teachingMessagesEn } from './messages/en.ts';
+import type { TeachingMessages } from './messages/en.ts';
+import type { PresentationItem } from './presentation-item.ts';
+import type { Slide } from './slide-model.ts';
+import type { TeachingAction } from './teaching-keys.ts';
+import { writeTeachingSet } from './teaching-set-file.ts';
+import type { StepKind } from './teaching-steps.ts';
+
+/** One place in the sequence: which topic, which of its steps, and the step's kind. */
+export interface SlidePlace {
+  readonly item: number;
+  readonly step: number;
+  readonly kind: StepKind;
+}
+
+/** Every slide of every item, in order. */
+export function slidePlaces(items: readonly PresentationItem[]): SlidePlace[] {
+  return items.flatMap((item, itemIndex) => item.steps.map((kind, step) => ({ item: itemIndex, step, kind })));
+}
+
+export class TeachingSession {
+  /** The presentation's title: the set's, or the topic's. */
+  title = $state('');
+  items = $state.raw<readonly PresentationItem[]>([]);
+  /** The teaching set's file name, when the presentation came from one. */
+  fileName = $state.raw<string | null>(null);
+  /** The place in the sequence, from 0. */
+  index = $state(0);
+  readonly messages: TeachingMessages = teachingMessagesEn;
+
+  readonly places = $derived(slidePlaces(this.items));
+  readonly place = $derived<SlidePlace | null>(this.places[this.index] ?? null);
+  readonly item = $derived<PresentationItem | null>(this.place === null ? null : (this.items[this.place.item] ?? null));
+  readonly slide = $derived<Slide | null>(this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages));
+
+  constructor(title: string, items: readonly PresentationItem[], messages: TeachingMessages = teachingMessagesEn) {
+    this.messages = messages;
+    this.load(title, items, null);
+  }
+
+  get total(): number {
+    return this.places.length;
+  }
+
+  get atStart(): boolean {
+    return this.index === 0;
+  }
+
+  get atEnd(): boolean {
+    return this.index >= this.places.length - 1;
+  }
+
+  /** Replace the presentation (a teaching set was opened) and go to its first slide. */
+  load(title: string, items: readonly PresentationItem[], fileName: string | null): void {
+    this.title = title;
+    this.items = items;
+    this.fileName = fileName;
+    this.index = 0;
+  }
+
+  /** Go to a place in the sequence, kept inside it; returns whether the place changed. */
+  goTo(index: number): boolean {
+    const next = Math.max(0, Math.min(index, this.places.length - 1));
+    if (next === this.index) return false;
+    this.index = next;
+    return true;
+  }
+
+  next(): boolean {
+    return this.goTo(this.index + 1);
+  }
+
+  previous(): boolean {
+    return this.goTo(this.index - 1);
+  }
+
+  first(): boolean {
+    return this.goTo(0);
+  }
+
+  last(): boolean {
+    return this.goTo(this.places.length - 1);
+  }
+
+  /** Carry out a key's action; "leave" is the view's to handle and changes nothing here. */
+  act(action: TeachingAction): boolean {
+    switch (action) {
+      case 'next':
+        return this.next();
+      case 'previous':
+        return this.previous();
+      case 'first':
+        return this.first();
+      case 'last':
+        return this.last();
+      case 'leave':
+        return false;
+    }
+  }
+
+  /** The presentation as a teaching set's file text, every topic written inside it. */
+  setFileText(): string {
+    return writeTeachingSet(
+      this.title,
+      this.items.map((item) => ({ topic: item.topic, option: item.option, harm: item.harm, per: item.per, steps: item.steps })),
+    );
+  }
+}
