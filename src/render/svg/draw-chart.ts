@@ -1,5 +1,5 @@
 /**
- * Draw a chart model into an `<svg>` element with d3-selection: heading, then one
+ * Draw a chart model into an `<svg>` element: heading, then one
  * icon array per option side by side, each with its title and labelled legend.
  * Works on any DOM: the browser's, or jsdom's in Node.
  */
@@ -11,6 +11,7 @@ import { appendSwatch, appendText } from './draw-text.ts';
 import { patternIdsFor } from './person-paint.ts';
 import { type ResolvedSvgChartOptions, type SvgChartOptions, resolveSvgOptions } from './svg-chart-options.ts';
 import { appendPatterns } from './svg-patterns.ts';
+import { setChangedAttribute } from './set-changed-attribute.ts';
 import { svgNumber } from './svg-number.ts';
 
 type Root = Selection<SVGSVGElement, unknown, null, undefined>;
@@ -22,8 +23,8 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
   const resolved = resolveSvgOptions(model, options);
   const frame = chartFrame(model, { width: resolved.width, fontSize: resolved.fontSize, showRange: resolved.showRange });
   const svg: Root = select(svgElement);
-  svg.selectChildren().remove();
-  setRootAttributes(svg, model, frame, resolved);
+  svgElement.replaceChildren();
+  setRootAttributes(svgElement, model, frame, resolved);
   svg.append('title').text(model.description);
   const ids = patternIdsFor(resolved.idPrefix);
   appendPatterns(svg, resolved.palette, ids, model.arrays[0] === undefined ? 1 : (frame.arrays[0]?.grid.layout.geometry.patternTile ?? 1));
@@ -35,33 +36,39 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     const group = svg.append('g').attr('class', 'chart-array').attr('data-option-id', array.optionId);
     drawArrayText(group.append('g').attr('class', 'array-text').attr('aria-hidden', 'true'), array, placed, resolved);
     // Fill the people's group while it is detached, then attach it once.
-    const people = select(svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g'))
-      .attr('class', 'people')
-      .attr('transform', `translate(${svgNumber(placed.grid.x)},${svgNumber(placed.grid.y)})`);
+    const people = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
+    people.setAttribute('class', 'people');
+    people.setAttribute('transform', peopleTransform(placed));
     drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange), resolved.palette, ids);
-    const node = people.node();
-    if (node !== null) group.node()?.appendChild(node);
+    group.node()?.appendChild(people);
   });
   return frame;
 }
 
 /** Root attributes: size, the text alternative, and the options an update reuses. */
-export function setRootAttributes(svg: Root, model: ChartModel, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
-  svg
-    .attr('viewBox', `0 0 ${svgNumber(frame.width)} ${svgNumber(frame.height)}`)
-    .attr('width', svgNumber(frame.width))
-    .attr('height', svgNumber(frame.height))
-    .attr('role', 'img')
-    .attr('aria-label', model.description)
-    .attr('class', 'people-chart')
-    .attr('font-family', options.fontFamily)
-    .attr('data-denominator', String(model.denominator))
-    .attr('data-arrangement', model.arrangement)
-    .attr('data-palette', options.palette.name)
-    .attr('data-width', svgNumber(options.width))
-    .attr('data-font-size', svgNumber(options.fontSize))
-    .attr('data-show-range', String(options.showRange))
-    .attr('data-id-prefix', options.idPrefix);
+export function setRootAttributes(svgElement: SVGSVGElement, model: ChartModel, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+  const attributes: readonly (readonly [string, string])[] = [
+    ['viewBox', `0 0 ${svgNumber(frame.width)} ${svgNumber(frame.height)}`],
+    ['width', svgNumber(frame.width)],
+    ['height', svgNumber(frame.height)],
+    ['role', 'img'],
+    ['aria-label', model.description],
+    ['class', 'people-chart'],
+    ['font-family', options.fontFamily],
+    ['data-denominator', String(model.denominator)],
+    ['data-arrangement', model.arrangement],
+    ['data-palette', options.palette.name],
+    ['data-width', svgNumber(options.width)],
+    ['data-font-size', svgNumber(options.fontSize)],
+    ['data-show-range', String(options.showRange)],
+    ['data-id-prefix', options.idPrefix],
+  ];
+  for (const [name, value] of attributes) setChangedAttribute(svgElement, name, value);
+}
+
+/** Where an array's people sit in the chart. */
+export function peopleTransform(placed: FrameArray): string {
+  return `translate(${svgNumber(placed.grid.x)},${svgNumber(placed.grid.y)})`;
 }
 
 /** The heading and the illustrative line. */

@@ -2,31 +2,59 @@
  * The people of one icon array as SVG: exactly one `<path>` per person, carrying
  * `data-outcome` with the person's group, and a live update that touches only the
  * people whose look changed.
+ *
+ * Built for speed with 2 × 1000 people: one tight loop of `createElementNS` (no
+ * data join), each person's absolute `d` made by placing one cached glyph path (no
+ * per-person transform), paint from a table computed once per array, and the look
+ * of people without the outcome ("free", usually the most) set once on the
+ * people's group and inherited, so those people carry only `d` and `data-outcome`.
  */
-import { type Selection, select } from 'd3-selection';
 import type { PersonGroup } from '../../core/types.ts';
 import { glyphFor } from '../glyphs/glyph-for.ts';
 import { glyphPath, placeGlyphPath } from '../glyphs/svg-path-context.ts';
-import type { IconArrayLayout, PersonPlacement } from '../icon-array-layout.ts';
+import type { IconArrayLayout } from '../icon-array-layout.ts';
 import type { ChartPalette } from '../palette.ts';
 import { type RankSpan, isUncertain } from '../uncertain-people.ts';
-import { type PatternIds, personPaint } from './person-paint.ts';
+import { type PatternIds, type PersonPaint, personPaint } from './person-paint.ts';
+import { setChangedAttribute } from './set-changed-attribute.ts';
 import { svgNumber } from './svg-number.ts';
 
-/** What a person looks like: their group, outlined when it depends on the interval. */
-export interface PersonLook {
-  readonly group: PersonGroup;
-  readonly uncertain: boolean;
-}
+const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
+
+/** What a person looks like: their group, or outlined when it depends on the interval. */
+export type PersonLook = PersonGroup | 'uncertain';
+
+/** The look every person inherits from the people's group unless they carry their own paint. */
+export const INHERITED_LOOK: PersonLook = 'free';
 
 /** Every person's look, in layout order. */
 export function personLooks(layout: IconArrayLayout, uncertain: RankSpan | null, showRange: boolean): PersonLook[] {
-  return layout.people.map((person) => ({ group: person.group, uncertain: showRange && isUncertain(person.rank, uncertain) }));
+  const span = showRange ? uncertain : null;
+  return layout.people.map((person) => (isUncertain(person.rank, span) ? 'uncertain' : person.group));
 }
 
-/** Draw the people of a layout into `group`, replacing what was there. */
+/** The paint of each look, with the uncertain outline's width, for one array's cell size. */
+interface LookPaint extends PersonPaint {
+  /** Outline width of the look when it differs from the group's, else null. */
+  readonly strokeWidth: string | null;
+}
+
+type PaintTable = Readonly<Record<PersonLook, LookPaint>>;
+
+function paintTable(palette: ChartPalette, patternIds: PatternIds, cellSize: number): PaintTable {
+  const look = (name: PersonLook): LookPaint => {
+    const paint = personPaint(palette, name, patternIds, cellSize);
+    return { ...paint, strokeWidth: paint.dash === null ? null : svgNumber(cellSize * palette.outlineWidth * 1.6, 3) };
+  };
+  return { event: look('event'), prevented: look('prevented'), caused: look('caused'), free: look('free'), uncertain: look('uncertain') };
+}
+
+/**
+ * Draw the people of a layout into `group` (best detached, attached once after),
+ * replacing what was there.
+ */
 export function drawPeople(
-  group: Selection<SVGGElement, unknown, null, undefined>,
+  group: SVGGElement,
   layout: IconArrayLayout,
   looks: readonly PersonLook[],
   palette: ChartPalette,
@@ -34,18 +62,22 @@ export function drawPeople(
 ): void {
   const { cellSize, iconSize } = layout.geometry;
   const path = glyphPath(glyphFor(layout.geometry.glyph), iconSize);
-  group
-    .attr('stroke-width', svgNumber(cellSize * palette.outlineWidth, 3))
-    .attr('stroke-linejoin', 'round');
-  group
-    .selectAll<SVGPathElement, PersonPlacement>('path')
-    .data(layout.people)
-    .join('path')
-    .attr('d', (person) => placeGlyphPath(path, person.x, person.y))
-    .attr('data-outcome', (person) => person.group)
-    .each(function paint(person) {
-      applyLook(this, looks[person.index] ?? { group: person.group, uncertain: false }, palette, patternIds, cellSize, true);
-    });
+  const paints = paintTable(palette, patternIds, cellSize);
+  const inherited = paints[INHERITED_LOOK];
+  group.replaceChildren();
+  group.setAttribute('fill', inherited.fill);
+  group.setAttribute('stroke', inherited.stroke);
+  group.setAttribute('stroke-width', svgNumber(cellSize * palette.outlineWidth, 3));
+  group.setAttribute('stroke-linejoin', 'round');
+  const document = group.ownerDocument;
+  for (const person of layout.people) {
+    const element = document.createElementNS(SVG_NAMESPACE, 'path');
+    element.setAttribute('d', placeGlyphPath(path, person.x, person.y));
+    element.setAttribute('data-outcome', person.group);
+    const look = looks[person.index] ?? person.group;
+    if (look !== INHERITED_LOOK) paintNewPerson(element, paints[look]);
+    group.appendChild(element);
+  }
 }
 
 /**
@@ -54,44 +86,60 @@ export function drawPeople(
  */
 export function updatePeople(
   group: SVGGElement,
+  layout: IconArrayLayout,
   looks: readonly PersonLook[],
   palette: ChartPalette,
   patternIds: PatternIds,
-  cellSize: number,
 ): number {
+  let paints: PaintTable | null = null;
   let changed = 0;
-  select(group)
-    .selectAll<SVGPathElement, unknown>('path')
-    .each(function update(_, index) {
-      const look = looks[index];
-      if (look === undefined) return;
-      const uncertainNow = this.hasAttribute('stroke-dasharray');
-      if (this.getAttribute('data-outcome') === look.group && uncertainNow === look.uncertain) return;
-      this.setAttribute('data-outcome', look.group);
-      applyLook(this, look, palette, patternIds, cellSize);
-      changed += 1;
-    });
+  const elements = group.children;
+  for (let index = 0; index < elements.length; index += 1) {
+    const element = elements[index];
+    const look = looks[index];
+    const personGroup = layout.people[index]?.group;
+    if (element === undefined || look === undefined || personGroup === undefined) continue;
+    const drawnUncertain = element.hasAttribute('stroke-dasharray');
+    if (element.getAttribute('data-outcome') === personGroup && drawnUncertain === (look === 'uncertain')) continue;
+    paints ??= paintTable(palette, patternIds, layout.geometry.cellSize);
+    setChangedAttribute(element, 'data-outcome', personGroup);
+    if (look === INHERITED_LOOK) clearPaint(element);
+    else repaintPerson(element, paints[look]);
+    changed += 1;
+  }
   return changed;
 }
 
-function applyLook(
-  element: SVGPathElement,
-  look: PersonLook,
-  palette: ChartPalette,
-  patternIds: PatternIds,
-  cellSize: number,
-  fresh = false,
-): void {
-  const paint = personPaint(palette, look.uncertain ? 'uncertain' : look.group, patternIds, cellSize);
+/** Paint a person just created, in the attribute order {@link repaintPerson} keeps. */
+function paintNewPerson(element: Element, paint: LookPaint): void {
   element.setAttribute('fill', paint.fill);
   element.setAttribute('stroke', paint.stroke);
-  if (paint.dash === null) {
-    // A new element has nothing to remove; skipping the calls keeps the first draw fast.
-    if (fresh) return;
+  if (paint.dash === null || paint.strokeWidth === null) return;
+  element.setAttribute('stroke-dasharray', paint.dash);
+  element.setAttribute('stroke-width', paint.strokeWidth);
+}
+
+/**
+ * Give a drawn person their own paint, writing only values that change. New attributes
+ * are added in the order a fresh drawing writes them, so an updated chart serialises
+ * exactly like one drawn afresh.
+ */
+function repaintPerson(element: Element, paint: LookPaint): void {
+  setChangedAttribute(element, 'fill', paint.fill);
+  setChangedAttribute(element, 'stroke', paint.stroke);
+  if (paint.dash === null || paint.strokeWidth === null) {
     element.removeAttribute('stroke-dasharray');
     element.removeAttribute('stroke-width');
-  } else {
-    element.setAttribute('stroke-dasharray', paint.dash);
-    element.setAttribute('stroke-width', svgNumber(cellSize * palette.outlineWidth * 1.6, 3));
+    return;
   }
+  setChangedAttribute(element, 'stroke-dasharray', paint.dash);
+  setChangedAttribute(element, 'stroke-width', paint.strokeWidth);
+}
+
+/** Let a person inherit the group's paint again. */
+function clearPaint(element: Element): void {
+  element.removeAttribute('fill');
+  element.removeAttribute('stroke');
+  element.removeAttribute('stroke-dasharray');
+  element.removeAttribute('stroke-width');
 }

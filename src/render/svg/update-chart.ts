@@ -1,15 +1,21 @@
 /**
  * Live redraw of a drawn chart: people whose look changed are updated in place,
- * everyone else is left untouched; text is redrawn (a handful of elements).
+ * everyone else is left untouched; text is drawn again off the page and only the
+ * blocks that changed are swapped in. Attributes are written only when their value
+ * changes, since a rewritten `viewBox` or `transform` makes the browser lay out every
+ * person again.
  */
-import { select } from 'd3-selection';
+import { type Selection, select } from 'd3-selection';
 import { chartFrame } from '../chart-frame.ts';
 import type { ChartModel } from '../chart-model.ts';
-import { drawArrayText, drawChart, drawHeading, setRootAttributes } from './draw-chart.ts';
+import { drawArrayText, drawChart, drawHeading, peopleTransform, setRootAttributes } from './draw-chart.ts';
 import { personLooks, updatePeople } from './draw-people.ts';
 import { patternIdsFor } from './person-paint.ts';
+import { setChangedAttribute } from './set-changed-attribute.ts';
 import { type SvgChartOptions, recordedSvgOptions, resolveSvgOptions } from './svg-chart-options.ts';
 import { svgNumber } from './svg-number.ts';
+
+const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
 
 /** What an update did: redrew everything, or changed this many people. */
 export interface ChartUpdate {
@@ -37,27 +43,45 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
     return { redrawn: true, peopleChanged: model.denominator * model.arrays.length };
   }
   const frame = chartFrame(model, { width: resolved.width, fontSize: resolved.fontSize, showRange: resolved.showRange });
-  setRootAttributes(svg, model, frame, resolved);
-  svg.select('title').text(model.description);
-  svg.select('rect.background').attr('height', svgNumber(frame.height));
-  const heading = svg.select<SVGGElement>('g.chart-heading');
-  heading.selectChildren().remove();
-  drawHeading(heading, frame, resolved);
+  setRootAttributes(svgElement, model, frame, resolved);
+  const title = svgElement.querySelector(':scope > title');
+  if (title !== null && title.textContent !== model.description) title.textContent = model.description;
+  const background = svgElement.querySelector(':scope > rect.background');
+  if (background !== null) setChangedAttribute(background, 'height', svgNumber(frame.height));
+  const heading = svgElement.querySelector<SVGGElement>(':scope > g.chart-heading');
+  if (heading !== null) replaceChangedChildren(heading, (fresh) => drawHeading(fresh, frame, resolved));
   const ids = patternIdsFor(resolved.idPrefix);
   let peopleChanged = 0;
   model.arrays.forEach((array, index) => {
     const group = groups[index];
     const placed = frame.arrays[index];
     if (group === undefined || placed === undefined) return;
-    const text = select(group).select<SVGGElement>('g.array-text');
-    text.selectChildren().remove();
-    drawArrayText(text, array, placed, resolved);
-    const people = select(group).select<SVGGElement>('g.people');
-    people.attr('transform', `translate(${svgNumber(placed.grid.x)},${svgNumber(placed.grid.y)})`);
-    const node = people.node();
-    if (node === null) return;
+    const text = group.querySelector<SVGGElement>(':scope > g.array-text');
+    if (text !== null) replaceChangedChildren(text, (fresh) => drawArrayText(fresh, array, placed, resolved));
+    const people = group.querySelector<SVGGElement>(':scope > g.people');
+    if (people === null) return;
+    setChangedAttribute(people, 'transform', peopleTransform(placed));
     const looks = personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange);
-    peopleChanged += updatePeople(node, looks, resolved.palette, ids, placed.grid.layout.geometry.cellSize);
+    peopleChanged += updatePeople(people, placed.grid.layout, looks, resolved.palette, ids);
   });
   return { redrawn: false, peopleChanged };
+}
+
+/**
+ * Draw a group's content afresh off the page, then swap in only the children that differ,
+ * so unchanged titles and swatches are not laid out again.
+ */
+function replaceChangedChildren(group: SVGGElement, draw: (fresh: Selection<SVGGElement, unknown, null, undefined>) => void): void {
+  const fresh = group.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
+  draw(select(fresh));
+  const before = [...group.children];
+  const after = [...fresh.children];
+  if (before.length !== after.length) {
+    group.replaceChildren(...after);
+    return;
+  }
+  after.forEach((child, index) => {
+    const old = before[index];
+    if (old !== undefined && !old.isEqualNode(child)) old.replaceWith(child);
+  });
 }
