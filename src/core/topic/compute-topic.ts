@@ -83,10 +83,25 @@ function optionEntry(item: Computed, baselineRisk: number, denominator: Denomina
   };
 }
 
-function noticeKey(found: Notice): string {
-  let key = found.code;
-  for (const name in found.values) key += `|${name}=${String(found.values[name])}`;
-  return key;
+/**
+ * The notices of a topic, each once. Notices that name their option and outcome are unique by
+ * construction; the others repeat per effect and are kept once per code and values.
+ */
+function distinctNotices(notices: readonly Notice[]): Notice[] {
+  const seen = new Set<string>();
+  const distinct: Notice[] = [];
+  for (const found of notices) {
+    if (found.values.outcome !== undefined && found.values.option !== undefined) {
+      distinct.push(found);
+      continue;
+    }
+    let key = found.code;
+    for (const name in found.values) key += `|${name}=${String(found.values[name])}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    distinct.push(found);
+  }
+  return distinct;
 }
 
 /**
@@ -152,7 +167,6 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       }),
     };
   });
-  const unique = new Map(notices.map((found) => [noticeKey(found), found]));
   return {
     ok: true,
     problems: [],
@@ -163,7 +177,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       denominator,
       illustrative: topic.illustrative,
       outcomes,
-      notices: [...unique.values()],
+      notices: distinctNotices(notices),
     },
   };
 }
