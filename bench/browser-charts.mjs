@@ -11,10 +11,13 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build } from 'vite';
+import { loadavg } from 'node:os';
+import { timeAppLoad, timeInputToCharts } from './browser/app-timing.mjs';
 import { timeCharts } from './browser/chart-timing.mjs';
+import { initialJavaScript } from './browser/initial-javascript.mjs';
 import { launchChromium } from './browser/launch-chromium.mjs';
 import { formatTable } from './browser/report.mjs';
-import { serveFolder } from './browser/serve-folder.mjs';
+import { serveApp, serveFolder } from './browser/serve-folder.mjs';
 
 const projectRoot = join(dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -34,8 +37,17 @@ const settings = {
 };
 
 const browser = await launchChromium();
-const results = { measuredAt: new Date().toISOString(), chromium: browser.version(), settings, targets: TARGETS };
+const results = {
+  measuredAt: new Date().toISOString(),
+  chromium: browser.version(),
+  // One-minute load average when the run started: on a busy machine every timing grows.
+  loadAverage: Math.round((loadavg()[0] ?? 0) * 100) / 100,
+  settings,
+  targets: TARGETS,
+};
 const rows = [];
+/** @type {string[]} */
+const notes = [];
 try {
   if (only === 'all' || only === 'charts') {
     await build({ configFile: join(projectRoot, 'e2e/chart-page/vite.config.ts'), logLevel: 'warn' });
@@ -46,9 +58,35 @@ try {
       rows.push(
         { label: 'chart: first draw, 2 × 1000 people (draw + layout)', target: TARGETS.firstDraw, ...charts.firstDraw },
         { label: '  of which script (drawChart)', target: null, ...charts.firstDrawScript },
+        { label: '  main-thread CPU time of the same spans', target: null, ...charts.firstDrawCpu },
         { label: 'chart: redraw with changed counts (updateChart + layout)', target: TARGETS.redraw, ...charts.redraw },
         { label: '  of which script (updateChart)', target: null, ...charts.redrawScript },
+        { label: '  main-thread CPU time of the same spans', target: null, ...charts.redrawCpu },
         { label: 'chart: first draw on page load (cold)', target: null, ...charts.loadDraw },
+      );
+    } finally {
+      await served.stop();
+    }
+  }
+  if (only === 'all' || only === 'app') {
+    const served = await serveApp(projectRoot);
+    try {
+      const load = await timeAppLoad(browser, served.url, settings.appRuns);
+      const input = await timeInputToCharts(browser, served.url, { projectRoot, repetitions: settings.repetitions });
+      const javascript = initialJavaScript(join(projectRoot, 'dist/index.html'));
+      const pdfFetched = javascript.pdfChunks.filter((chunk) => load.requested.some((path) => path.endsWith(`/${chunk}`)));
+      results.app = { load, input, javascript: { ...javascript, pdfFetchedOnLoad: pdfFetched } };
+      rows.push(
+        { label: 'app: load to demo interactive (DOM ready)', target: null, ...load.interactive },
+        { label: 'app: load to demo interactive (frame rendered)', target: TARGETS.appLoad, ...load.rendered },
+        { label: 'app: input to charts updated, 2 × 1000 (+ layout)', target: TARGETS.inputToCharts, ...input.total },
+        { label: '  of which until the chart DOM changed', target: null, ...input.dom },
+      );
+      notes.push(
+        `app: initial JavaScript ${javascript.files.map((file) => file.file).join(', ')}: ` +
+          `${(javascript.bytes / 1024).toFixed(1)} KiB, ${(javascript.gzipBytes / 1024).toFixed(1)} KiB gzip`,
+        `app: PDF code (jsPDF) in the initial JavaScript: ${javascript.pdfCodeInitial ? 'YES' : 'no'}; ` +
+          `lazy PDF chunks: ${javascript.pdfChunks.join(', ') || 'none'}; fetched during load: ${pdfFetched.join(', ') || 'none'}`,
       );
     } finally {
       await served.stop();
@@ -58,7 +96,9 @@ try {
   await browser.close();
 }
 
+process.stdout.write(`Load average (1 min) at the start: ${results.loadAverage} on this machine\n`);
 process.stdout.write(`${formatTable(rows)}\n`);
+for (const note of notes) process.stdout.write(`${note}\n`);
 const file = join(projectRoot, 'bench/results/charts.json');
 mkdirSync(dirname(file), { recursive: true });
 writeFileSync(file, `${JSON.stringify(results, null, 2)}\n`);

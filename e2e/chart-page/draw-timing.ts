@@ -2,7 +2,9 @@
  * Timing of the people charts in the page, with `performance.now()`: from the start of
  * drawing to after a forced style and layout (the svg's `getBoundingClientRect()` and the
  * container's `offsetHeight`). Each sample waits for a rendered frame first, so one
- * sample's leftover work does not land in the next.
+ * sample's leftover work does not land in the next. Each sample is also bracketed by
+ * `performance.mark`s (`<kind>:start`, `<kind>:end`), so a browser trace can give the
+ * main thread's CPU time over the same span, which other load on the machine inflates less.
  */
 import type { ChartModel } from '../../src/render/chart-model.ts';
 import { drawChart } from '../../src/render/svg/draw-chart.ts';
@@ -29,8 +31,17 @@ function forceLayout(svg: SVGSVGElement, container: HTMLElement): number {
   return svg.getBoundingClientRect().height + container.offsetHeight;
 }
 
+/** Names of the marks around each kind of sample. */
+export const SAMPLE_MARKS = { firstDraw: 'chart-first-draw', redraw: 'chart-redraw' } as const;
+
+function mark(name: string): void {
+  performance.mark(name);
+  performance.clearMarks(name);
+}
+
 /** Draw `model` into a fresh svg appended to `container`, timed; the svg is left in place. */
 export function timedFirstDraw(container: HTMLElement, model: ChartModel, options: SvgChartOptions = {}): { svg: SVGSVGElement; sample: DrawSample } {
+  mark(`${SAMPLE_MARKS.firstDraw}:start`);
   const start = performance.now();
   const svg = document.createElementNS(SVG_NAMESPACE, 'svg');
   container.append(svg);
@@ -38,6 +49,7 @@ export function timedFirstDraw(container: HTMLElement, model: ChartModel, option
   const scripted = performance.now();
   forceLayout(svg, container);
   const end = performance.now();
+  mark(`${SAMPLE_MARKS.firstDraw}:end`);
   return { svg, sample: { total: end - start, script: scripted - start } };
 }
 
@@ -68,11 +80,13 @@ export async function timeRedraws(container: HTMLElement, models: readonly Chart
   for (let run = 1; run <= repetitions; run += 1) {
     const model = models[run % models.length] as ChartModel;
     await nextFrame();
+    mark(`${SAMPLE_MARKS.redraw}:start`);
     const start = performance.now();
     const update = updateChart(svg, model);
     const scripted = performance.now();
     forceLayout(svg, container);
     const end = performance.now();
+    mark(`${SAMPLE_MARKS.redraw}:end`);
     if (update.redrawn || update.peopleChanged === 0) throw new Error('a timed redraw did not change people in place');
     samples.push({ total: end - start, script: scripted - start });
   }

@@ -1,0 +1,176 @@
+/**
+ * The app benchmark: the built app (served by `scripts/web.mjs`) in headless Chromium.
+ *
+ * Load: navigation start (the page's time origin) to the demo topic being interactive,
+ * defined as the first moment a results element (`.results`) holds a drawn people chart
+ * (`svg.people-chart [data-outcome]`) and the editor has an enabled input. A
+ * MutationObserver installed before any page script notes that moment with
+ * `performance.now()`; "rendered" is the end of the first frame after it (a task queued
+ * from the next `requestAnimationFrame`). Each run is a fresh browser context (empty
+ * cache and storage), and every request is recorded, to show no PDF code is fetched.
+ *
+ * Input to charts: a topic of one outcome, the comparison and one option (taken from the
+ * first example), shown per 1000 people: two arrays of 1000. The time runs from just
+ * before an `input` event is dispatched on the baseline risk field to the moment the
+ * chart's text alternative (updated in the same task as its people) shows the new counts,
+ * seen by a MutationObserver, plus a forced layout (`getBoundingClientRect()` and
+ * `offsetHeight`), as in the chart benchmark. Baselines of 15%, 20% and 12% take turns.
+ */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { summarise } from './statistics.mjs';
+
+/** Installed before the page's own scripts: notes when the page first becomes interactive. */
+function watchInteractive() {
+  const state = { interactive: null, rendered: null };
+  Object.defineProperty(window, 'chancewiseBench', { value: state });
+  const ready = () => {
+    const chart = document.querySelector('.results svg.people-chart [data-outcome]');
+    const input = document.querySelector('.editor-column input:enabled, .editor-column textarea:enabled');
+    return chart !== null && input !== null;
+  };
+  const observer = new MutationObserver(() => {
+    if (state.interactive !== null || !ready()) return;
+    state.interactive = performance.now();
+    observer.disconnect();
+    requestAnimationFrame(() => setTimeout(() => (state.rendered = performance.now()), 0));
+  });
+  observer.observe(document, { childList: true, subtree: true, attributes: true });
+}
+
+/**
+ * @param {import('@playwright/test').Browser} browser
+ * @param {string} url
+ * @param {number} runs
+ */
+export async function timeAppLoad(browser, url, runs) {
+  const interactive = [];
+  const rendered = [];
+  const requested = new Set();
+  const errors = [];
+  for (let run = 0; run < runs; run += 1) {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    const page = await context.newPage();
+    page.on('request', (request) => requested.add(new URL(request.url()).pathname));
+    page.on('pageerror', (error) => errors.push(String(error)));
+    await page.addInitScript(watchInteractive);
+    await page.goto(url);
+    const times = await page
+      .waitForFunction(() => {
+        const state = /** @type {{ interactive: number | null, rendered: number | null } | undefined} */ (
+          /** @type {unknown} */ (window)['chancewiseBench']
+        );
+        return state !== undefined && state.rendered !== null ? state : null;
+      }, undefined, { timeout: 30_000 })
+      .then((handle) => handle.jsonValue());
+    interactive.push(times.interactive);
+    rendered.push(times.rendered);
+    await context.close();
+  }
+  if (errors.length > 0) throw new Error(`the app reported errors while loading: ${errors.join('; ')}`);
+  return {
+    interactive: summarise(interactive),
+    rendered: summarise(rendered),
+    requested: [...requested].sort(),
+  };
+}
+
+/** The first example reduced to its headline outcome, the comparison and one option. */
+export function twoArrayTopic(projectRoot) {
+  const file = JSON.parse(readFileSync(join(projectRoot, 'assets/demo/01-heart-tablet.json'), 'utf8'));
+  const topic = file.topic;
+  const comparison = topic.options.find((option) => option.isComparison);
+  const option = topic.options.find((candidate) => !candidate.isComparison);
+  const headline = topic.outcomes.find((outcome) => outcome.isHeadline) ?? topic.outcomes[0];
+  return JSON.stringify({
+    ...file,
+    topic: {
+      ...topic,
+      title: 'Two arrays of 1000 people (illustrative, for timing)',
+      options: [comparison, option],
+      outcomes: [{ ...headline, effects: headline.effects.filter((effect) => effect.optionId === option.id) }],
+    },
+  });
+}
+
+/**
+ * @param {import('@playwright/test').Browser} browser
+ * @param {string} url
+ * @param {{ projectRoot: string, repetitions: number }} settings
+ */
+export async function timeInputToCharts(browser, url, settings) {
+  const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+  const page = await context.newPage();
+  const errors = [];
+  page.on('pageerror', (error) => errors.push(String(error)));
+  await page.goto(url);
+  await page.locator('.results svg.people-chart').first().waitFor();
+  const chooser = page.waitForEvent('filechooser');
+  await page.getByRole('button', { name: 'Open…' }).click();
+  await (await chooser).setFiles({ name: 'two-arrays.chancewise.json', mimeType: 'application/json', buffer: Buffer.from(twoArrayTopic(settings.projectRoot)) });
+  await page.getByRole('radio', { name: '1000 people' }).check();
+  await page.waitForFunction(() => {
+    const charts = document.querySelectorAll('.results svg.people-chart');
+    return charts.length === 1 && charts[0]?.getAttribute('data-denominator') === '1000' && charts[0].querySelectorAll('[data-outcome]').length === 2000;
+  });
+  const field = await page.getByLabel('Baseline risk', { exact: true }).first().elementHandle();
+  if (field === null) throw new Error('the app has no baseline risk field');
+  const samples = await page.evaluate(
+    async ({ input, repetitions }) => {
+      const values = ['15%', '20%', '12%'];
+      const svg = /** @type {SVGSVGElement} */ (document.querySelector('.results svg.people-chart'));
+      const results = /** @type {HTMLElement} */ (document.querySelector('.results'));
+      const frame = () => new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+      const type = (/** @type {string} */ value) => {
+        const field = /** @type {HTMLInputElement} */ (input);
+        field.value = value;
+        field.dispatchEvent(new Event('input', { bubbles: true }));
+      };
+      // Learn what the chart says at each value, untimed.
+      /** @type {Map<string, string>} */
+      const labels = new Map();
+      for (const value of values) {
+        type(value);
+        await frame();
+        labels.set(value, svg.getAttribute('aria-label') ?? '');
+      }
+      if (new Set(labels.values()).size !== values.length) throw new Error('the baselines did not give different charts');
+      const collected = [];
+      for (let run = 0; run < repetitions; run += 1) {
+        const value = values[run % values.length] ?? '15%';
+        await frame();
+        const expected = labels.get(value);
+        /** @type {Promise<number>} */
+        const updated = new Promise((resolve, reject) => {
+          const observer = new MutationObserver(() => {
+            if (svg.getAttribute('aria-label') !== expected) return;
+            observer.disconnect();
+            clearTimeout(timer);
+            resolve(performance.now());
+          });
+          const timer = setTimeout(() => {
+            observer.disconnect();
+            reject(new Error(`the chart did not show the counts for a baseline of ${value}`));
+          }, 10_000);
+          observer.observe(results, { attributes: true, childList: true, subtree: true, characterData: true });
+        });
+        const start = performance.now();
+        type(value);
+        const seen = await updated;
+        svg.getBoundingClientRect();
+        void results.offsetHeight;
+        const end = performance.now();
+        collected.push({ total: end - start, dom: seen - start, people: svg.querySelectorAll('[data-outcome]').length });
+      }
+      return collected;
+    },
+    { input: field, repetitions: settings.repetitions },
+  );
+  await context.close();
+  if (errors.length > 0) throw new Error(`the app reported errors: ${errors.join('; ')}`);
+  if (samples.some((sample) => sample.people !== 2000)) throw new Error('a timed update did not show 2000 people');
+  return {
+    total: summarise(samples.map((sample) => sample.total)),
+    dom: summarise(samples.map((sample) => sample.dom)),
+  };
+}
