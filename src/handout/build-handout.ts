@@ -69,7 +69,6 @@ export type HandoutBuild = HandoutBuilt | HandoutRefused;
 function proseOf(content: HandoutContent): string[] {
   return [
     content.title,
-    ...(content.illustrative === null ? [] : [content.illustrative.note]),
     ...content.audience,
     content.chart.keyIntro,
     ...content.paragraphs.map((paragraph) => paragraph.join(' ')),

@@ -25,6 +25,8 @@ export interface FitSettings {
   /** Distance between baselines of body text, and of table and list text, as multiples of the size. */
   readonly bodyLeading: number;
   readonly listLeading: number;
+  /** Space above and below the text of a table row, in millimetres. */
+  readonly rowPadding: number;
 }
 
 /** The smallest body text a handout may use, in points. */
@@ -46,6 +48,7 @@ export const ROOMY: FitSettings = {
   writingLines: 2,
   bodyLeading: 1.35,
   listLeading: 1.3,
+  rowPadding: 1.3,
 };
 
 /** Each step changes a few settings of the one before it. */
@@ -53,14 +56,15 @@ const STEPS: readonly Partial<FitSettings>[] = [
   { writingLines: 1, space: 5 },
   { list: 10, table: 10, cell100: 4.8 },
   { title: 16, space: 4.5, chartText: 9.5 },
-  { list: 9.5, table: 9.5, cell100: 4.4 },
+  { list: 9.5, table: 9.5, cell100: 4.4, rowPadding: 1.1 },
   { writingLines: 0, space: 4 },
-  { list: 9, table: 9, chartText: 9, cell100: 4, title: 15 },
-  { body: 11.5, heading: 12, cell100: 3.7 },
-  { body: 11, heading: 11.5, title: 14, space: 3.5 },
-  { cell100: 3.5, space: 3, bodyLeading: 1.3, listLeading: 1.25 },
-  { space: 2.5, title: 13, heading: 11, bodyLeading: 1.25, listLeading: 1.2 },
-  { space: 2 },
+  { list: 9, table: 9, chartText: 9, cell100: 4, title: 15, rowPadding: 1 },
+  { cell100: 3.6, cell1000: 1.4, space: 3.5, listLeading: 1.25, rowPadding: 0.9 },
+  { cell100: 3.3, bodyLeading: 1.3, title: 14 },
+  { body: 11.5, heading: 12 },
+  { body: 11, heading: 11.5, space: 3 },
+  { cell100: 3, cell1000: 1.2, space: 2.5, title: 13, heading: 11, bodyLeading: 1.25, listLeading: 1.2, rowPadding: 0.7 },
+  { cell100: 2.8, space: 2, rowPadding: 0.5 },
 ];
 
 /**

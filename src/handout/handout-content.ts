@@ -52,12 +52,13 @@ export interface KeyEntry {
 
 export interface HandoutContent {
   readonly title: string;
-  readonly illustrative: { readonly badge: string; readonly note: string } | null;
+  /** The badge of an invented demonstration topic; null for real numbers. */
+  readonly illustrative: string | null;
   /** Who the numbers are for (the wording's population sentence) and the one period and denominator. */
   readonly audience: readonly string[];
   /**
-   * The headline outcome's pictures: the chart model titled with the option names
-   * and without its own legend (the key, the captions and the table take its
+   * The headline outcome's pictures: the chart model without its own titles and
+   * legend (the option names, the key, the captions and the table take their
    * place), the key, and under each picture its option's two frames in words.
    */
   readonly chart: {
@@ -65,6 +66,8 @@ export interface HandoutContent {
     readonly model: ChartModel;
     readonly keyIntro: string;
     readonly key: readonly KeyEntry[];
+    /** The option names over the pictures, in the pictures' order. */
+    readonly titles: readonly string[];
     /** One caption per picture, in the pictures' order: the wording's event and free frames. */
     readonly captions: readonly string[];
   };
@@ -152,15 +155,16 @@ function outcomeTable(result: TopicResult, model: ChartModel, headlineId: string
 }
 
 /**
- * The chart model titled with the option names, without its own labels, notes and
- * ranges, which the key, the captions and the sentences carry.
+ * The chart model with the pictures alone: its heading, titles, labels, notes and
+ * ranges are set by the handout as section heading, column headings, key,
+ * captions and sentences.
  */
-function picturesOnly(model: ChartModel, messages: HandoutMessages): ChartModel {
+function picturesOnly(model: ChartModel): ChartModel {
   return {
     ...model,
     heading: '',
     illustrative: null,
-    arrays: model.arrays.map((array) => ({ ...array, title: messages.capitalise(array.name.trim()), labels: [], note: null, range: null })),
+    arrays: model.arrays.map((array) => ({ ...array, title: '', labels: [], note: null, range: null })),
   };
 }
 
@@ -204,11 +208,12 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
   const printed = messages.printed(messages.formatDate(options.date));
   return {
     title: topic.title.trim(),
-    illustrative: result.illustrative ? { badge: messages.illustrativeBadge, note: messages.illustrativeNote } : null,
+    illustrative: result.illustrative ? messages.illustrativeBadge : null,
     audience: [...population.map((sentence) => sentence.text), messages.numbersFor(sheet)],
     chart: {
       heading: model.heading,
-      model: picturesOnly(model, messages),
+      model: picturesOnly(model),
+      titles: model.arrays.map((array) => messages.capitalise(array.name.trim())),
       keyIntro: messages.keyIntro(sheet),
       key: keyEntries(model, messages),
       captions,

@@ -5,32 +5,50 @@
 import type { HandoutContent } from './handout-content.ts';
 import type { HandoutStyles } from './handout-styles.ts';
 import { type Block, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
-import { type MeasureWidth, lineHeight, textBlock } from './text-layout.ts';
+import { type MeasureWidth, POINTS_PER_MM, lineHeight, textBlock } from './text-layout.ts';
 
 /** Padding inside the illustrative badge, in millimetres. */
 const BADGE_PADDING = 1.6;
 
-function illustrativeBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
-  if (content.illustrative === null) return { items: [], height: 0 };
-  const badgeText = textBlock(content.illustrative.badge, width, styles.listBold, measure);
-  const badgeWidth = badgeText.width + 2 * BADGE_PADDING;
-  const badgeHeight = badgeText.height + BADGE_PADDING;
-  const noteLeft = badgeWidth + 3;
-  const note = textBlock(content.illustrative.note, width - noteLeft, styles.listMuted, measure);
+/** Space between the title's last word and the badge beside it, in millimetres. */
+const BADGE_GAP = 4;
+
+/** The illustrative badge, or null for a topic with real numbers. */
+function illustrativeBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth): { block: Block; width: number } | null {
+  if (content.illustrative === null) return null;
+  const text = textBlock(content.illustrative, width - 2 * BADGE_PADDING, styles.listBold, measure);
+  const badgeWidth = text.width + 2 * BADGE_PADDING;
+  const badgeHeight = text.height + BADGE_PADDING;
   const items: PageItem[] = [
     { kind: 'box', x: 0, y: 0, width: badgeWidth, height: badgeHeight, fill: styles.colours.badge, radius: 1.2 },
-    ...placeBlock(textItem(badgeText), BADGE_PADDING, BADGE_PADDING / 2),
-    ...placeBlock(textItem(note), noteLeft, (badgeHeight - Math.min(note.height, lineHeight(styles.listMuted))) / 2),
+    ...placeBlock(textItem(text), BADGE_PADDING, BADGE_PADDING / 2),
   ];
-  return { items, height: Math.max(badgeHeight, note.height) };
+  return { block: { items, height: badgeHeight }, width: badgeWidth };
+}
+
+/**
+ * The title, with the illustrative badge on its last line when there is room
+ * there, else on a line of its own above it.
+ */
+function titleBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth, gap: number): Block {
+  const title = textBlock(content.title, width, styles.title, measure);
+  const badge = illustrativeBlock(content, width, styles, measure);
+  if (badge === null) return textItem(title);
+  const last = title.lines[title.lines.length - 1];
+  const lastWidth = last === undefined ? width : measure(last.text, styles.title.size, true);
+  if (last !== undefined && lastWidth + BADGE_GAP + badge.width <= width) {
+    const top = last.y - (styles.title.size * 0.36) / POINTS_PER_MM - badge.block.height / 2;
+    return { items: [...textItem(title).items, ...placeBlock(badge.block, lastWidth + BADGE_GAP, top)], height: title.height };
+  }
+  return stack([badge.block, textItem(title)], gap);
 }
 
 /** The header block, `width` millimetres wide. */
 export function headerBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
-  const title = textItem(textBlock(content.title, width, styles.title, measure));
-  const audience = textItem(textBlock(content.audience.join(' '), width, styles.body, measure));
   const gap = lineHeight(styles.body) * 0.35;
-  const body = stack([illustrativeBlock(content, width, styles, measure), title, audience], gap);
+  const title = titleBlock(content, width, styles, measure, gap);
+  const audience = textItem(textBlock(content.audience.join(' '), width, styles.body, measure));
+  const body = stack([title, audience], gap);
   const ruleGap = gap;
   return {
     items: [

@@ -1,7 +1,7 @@
 /**
  * The whole page for one set of fit settings: sections in priority order down
- * the page, what matters and the questions side by side, and the caution and
- * footer kept at the foot. Says whether it fits and, if not, what is too long.
+ * the page, what matters and the questions side by side, and the caution (with
+ * where the numbers come from) and the footer kept at the foot. Says whether it fits and, if not, what is too long.
  */
 import type { ChartPalette } from '../render/palette.ts';
 import type { FitSettings } from './fit-settings.ts';
@@ -86,7 +86,19 @@ function promptsBlock(content: HandoutContent, width: number, settings: FitSetti
 function footBlock(content: HandoutContent, width: number, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {
   const padding = 3;
   const inner = width - 2 * padding;
-  const caution = shadedBox(runInParagraph(content.caution.heading, content.caution.text, inner, styles.list, measure), width, padding, styles.colours.shade);
+  // The caution and where the numbers come from, together in one calm box.
+  const caution = shadedBox(
+    stack(
+      [
+        runInParagraph(content.caution.heading, content.caution.text, inner, styles.list, measure),
+        runInParagraph(content.evidence.heading, content.evidence.items.join(' '), inner, styles.list, measure),
+      ],
+      lineHeight(styles.list) * 0.3,
+    ),
+    width,
+    padding,
+    styles.colours.shade,
+  );
   const left = textBlock(content.footer.left, width, styles.footer, measure);
   const rightWidth = measure(content.footer.right, styles.footer.size, false);
   const oneLine = left.width + rightWidth + 8 <= width && left.lines.length === 1;
@@ -121,11 +133,10 @@ export function layoutPage(
   const header = headerBlock(content, width, styles, measure);
   const picturesSection = pictures.ok ? section(heading(content.chart.heading), pictures.block) : { items: [], height: 0 };
   const sentences = section(heading(content.sentencesHeading), paragraphsBlock(content.paragraphs, width, styles.body, measure));
-  const evidence = runInParagraph(content.evidence.heading, content.evidence.items.join(' '), width, styles.list, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);
 
-  const mainOf = (gap: number) => stack([header, picturesSection, sentences, evidence, prompts], gap);
+  const mainOf = (gap: number) => stack([header, picturesSection, sentences, prompts], gap);
   const needed = mainOf(settings.space).height + settings.space + foot.height;
 
   const rows = content.table.sections.reduce((sum, found) => sum + found.rows.length, 0);
@@ -134,7 +145,7 @@ export function layoutPage(
     header: header.height,
     options: picturesSection.height - outcomesShare + sentences.height,
     outcomes: outcomesShare,
-    evidence: evidence.height,
+    evidence: foot.height / 3,
     questions: prompts.height,
   };
   const overBudget = (part: HandoutPart) => partHeights[part] - PART_SHARE[part] * box.height;
@@ -144,7 +155,7 @@ export function layoutPage(
     return { items: [], fits: false, needed, tooLong: pictures.ok ? worst : pictures.part, parts: partHeights };
   }
   // Share the spare height between the gaps, a little each, and leave the rest above the caution.
-  const gaps = 4;
+  const gaps = 3;
   const extra = Math.min(MOST_EXTRA_GAP, (box.height - needed) / (gaps + 1));
   const main = mainOf(settings.space + extra);
   const items = [...placeBlock(main, box.x, box.y), ...placeBlock(foot, box.x, box.y + box.height - foot.height)];

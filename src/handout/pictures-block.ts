@@ -19,9 +19,10 @@ export type PicturesBlock =
   | { readonly ok: true; readonly block: Block }
   | { readonly ok: false; readonly part: 'options' };
 
-/** Padding around table text, in millimetres. */
+/** Padding left and right of table text, in millimetres. */
 const PAD_X = 1.8;
-const PAD_Y = 1.05;
+/** Space between a caption and the edges of its slot, in millimetres. */
+const CAPTION_PAD = 1;
 /** Tolerance for a line that ends exactly at its column edge, in millimetres. */
 const EDGE = 0.01;
 
@@ -32,8 +33,8 @@ const EDGE = 0.01;
 function labelShare(pictures: number, denominator: number): number {
   const thousand = denominator === 1000;
   if (pictures <= 2) return thousand ? 0.25 : 0.34;
-  if (pictures === 3) return thousand ? 0.21 : 0.27;
-  return thousand ? 0.19 : 0.23;
+  if (pictures === 3) return thousand ? 0.22 : 0.27;
+  return 0.22;
 }
 
 /** The render module's measure (sizes in millimetres) from the handout's (sizes in points). */
@@ -76,7 +77,14 @@ function cellBlock(cell: TableCell, width: number, styles: HandoutStyles, measur
 }
 
 /** The key: what each look of figure means, each line led by a figure drawn as in the pictures. */
-function keyBlock(content: HandoutContent, width: number, frame: ChartFrame, styles: HandoutStyles, measure: MeasureWidth): Block {
+function keyBlock(
+  content: HandoutContent,
+  width: number,
+  gridTop: number,
+  bottom: number,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
   const glyph = content.chart.model.arrays[0]?.layout.geometry.glyph ?? 'person';
   const size = lineHeight(styles.list) * 1.05;
   const indent = size + 2;
@@ -91,12 +99,17 @@ function keyBlock(content: HandoutContent, width: number, frame: ChartFrame, sty
   });
   const intro = textItem(textBlock(content.chart.keyIntro, width, styles.listMuted, measure));
   const block = stack([intro, ...rows], lineHeight(styles.list) * 0.3);
-  // Level with the top of the pictures, or raised beside the option names when taller than the pictures.
-  const grid = frame.arrays[0]?.grid;
-  const gridTop = grid?.y ?? 0;
-  const gridBottom = gridTop + (grid?.layout.geometry.height ?? 0);
-  const top = Math.max(0, Math.min(gridTop, gridBottom - block.height));
+  // Level with the top of the pictures, or raised beside the option names when taller than the pictures and captions.
+  const top = Math.max(0, Math.min(gridTop, bottom - block.height));
   return { items: placeBlock(block, 0, top), height: top + block.height };
+}
+
+/** A picture's placement: its own one-array chart frame, and where that frame goes in the block. */
+interface PlacedPicture {
+  readonly frame: ChartFrame;
+  readonly x: number;
+  readonly y: number;
+  readonly width: number;
 }
 
 /** The pictures, key and outcome rows, `width` millimetres wide. */
@@ -107,41 +120,63 @@ export function picturesBlock(
   styles: HandoutStyles,
   measure: MeasureWidth,
 ): PicturesBlock {
+  const PAD_Y = settings.rowPadding;
   const model = content.chart.model;
   const first = model.arrays[0];
   const count = model.arrays.length;
   if (first === undefined) return { ok: true, block: { items: [], height: 0 } };
   const measureMm = chartMeasure(measure);
   const labelWidth = width * labelShare(count, model.denominator);
-  const area = width - labelWidth;
+  // Each option has an equal slot: its picture centred in it, its caption and table cells across it.
+  const slot = (width - labelWidth) / count;
+  const slotLeft = (index: number) => labelWidth + index * slot;
   const fontSize = settings.chartText / POINTS_PER_MM;
-  // chartFrame's own spacing: half an em of margin, two ems between arrays.
+  // chartFrame's own margin is half an em on each side of its one array.
   const margin = fontSize * 0.5;
-  const gap = fontSize * 2;
   const unit = first.layout.geometry;
-  const widest = (area - 2 * margin - gap * (count - 1)) / count;
-  const column = Math.min(widest, (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width);
-  const chartWidth = 2 * margin + count * column + (count - 1) * gap;
-  const chartX = labelWidth + (area - chartWidth) / 2;
-  const frame = chartFrame(model, { width: chartWidth, fontSize, measure: measureMm });
-  if (frame.arrays.some((array) => overflows(array.title, array.x + array.width, measureMm))) return { ok: false, part: 'options' };
+  const column = Math.min(slot - fontSize * 1.2, (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width);
+  const frameWidth = column + 2 * margin;
+  const frames = model.arrays.map((array) => chartFrame({ ...model, arrays: [array] }, { width: frameWidth, fontSize, measure: measureMm }));
+  if (frames.some((frame) => frame.arrays.some((array) => overflows(array.title, array.x + array.width, measureMm)))) {
+    return { ok: false, part: 'options' };
+  }
+  // The option names as column headings across their slots, bottom-aligned over the pictures.
+  const titleStyle: TextStyle = { ...styles.tableBold, size: settings.chartText * 1.05 };
+  const titles = content.chart.titles.map((title) => centred(title, slot - 2 * CAPTION_PAD, titleStyle, measure));
+  const titlesHeight = Math.max(0, ...titles.map((title) => title.height));
+  const gridOf = (frame: ChartFrame) => frame.arrays[0]?.grid.y ?? 0;
+  const gridTop = titlesHeight + Math.max(...frames.map(gridOf));
+  const pictures: PlacedPicture[] = frames.map((frame, index) => ({
+    frame,
+    x: slotLeft(index) + (slot - frameWidth) / 2,
+    y: gridTop - gridOf(frame),
+    width: frameWidth,
+  }));
+  const firstFrame = frames[0] as ChartFrame;
+  const picturesBottom = gridTop + firstFrame.height - gridOf(firstFrame);
+  const gridBottom = gridTop + (firstFrame.arrays[0]?.grid.layout.geometry.height ?? 0);
 
-  const key = keyBlock(content, labelWidth - PAD_X, frame, styles, measure);
+  // Under each picture, its option's two frames in words, across its slot.
+  const captions = content.chart.captions.map((caption) => textBlock(caption, slot - 2 * CAPTION_PAD, styles.list, measure));
+  const captionsBottom = picturesBottom + Math.max(0, ...captions.map((caption) => caption.height));
+  const key = keyBlock(content, labelWidth - PAD_X, gridTop, Math.max(gridBottom, captionsBottom), styles, measure);
   const items: PageItem[] = [
-    { kind: 'chart', x: chartX, y: 0, width: chartWidth, height: frame.height, model, fontSize },
+    ...pictures.map((picture, index): PageItem => ({
+      kind: 'chart',
+      x: picture.x,
+      y: picture.y,
+      width: picture.width,
+      height: picture.frame.height,
+      model: { ...model, arrays: model.arrays.slice(index, index + 1) },
+      fontSize,
+    })),
     ...key.items,
+    ...titles.flatMap((title, index) => textItem(title, slotLeft(index) + CAPTION_PAD, titlesHeight - title.height).items),
   ];
-  let top = Math.max(frame.height, key.height + lineHeight(styles.list) * 0.5);
 
-  // Under each picture, its option's two frames in words, from the picture's left edge to the next picture.
-  const pitch = column + gap;
-  const captions = content.chart.captions.map((caption, index) => {
-    const x = chartX + (frame.arrays[index]?.x ?? 0);
-    const captionWidth = Math.min(pitch - gap * 0.3, width - x);
-    return { block: textBlock(caption, captionWidth, styles.list, measure), x };
-  });
-  for (const caption of captions) items.push(...textItem(caption.block, caption.x, top).items);
-  top += Math.max(0, ...captions.map((caption) => caption.block.height));
+  captions.forEach((caption, index) => items.push(...textItem(caption, slotLeft(index) + CAPTION_PAD, picturesBottom).items));
+  // The key may run on beside the captions; the table starts below both.
+  let top = Math.max(captionsBottom, key.height + lineHeight(styles.list) * 0.3);
   if (content.table.sections.length === 0 && content.table.noSideEffects === null) {
     return { ok: true, block: { items, height: top } };
   }
@@ -149,12 +184,8 @@ export function picturesBlock(
   top += lineHeight(styles.list) * 0.6;
   items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.strongRule, thickness: 0.4 });
 
-  const cellWidth = (index: number) => (frame.arrays[index]?.width ?? column) + gap * 0.7 - 2 * PAD_X;
-  const cellLeft = (index: number) => {
-    const array = frame.arrays[index];
-    const centre = chartX + (array === undefined ? 0 : array.x + array.width / 2);
-    return centre - cellWidth(index) / 2;
-  };
+  const cellWidth = slot - 2 * PAD_X;
+  const cellLeft = (index: number) => slotLeft(index) + PAD_X;
   const row = (blocks: readonly { readonly block: Block; readonly x: number }[], shaded: boolean) => {
     const height = Math.max(...blocks.map((cell) => cell.block.height)) + 2 * PAD_Y;
     if (shaded) items.push({ kind: 'box', x: 0, y: top, width, height, fill: styles.colours.shade, radius: 0 });
@@ -173,7 +204,7 @@ export function picturesBlock(
       row(
         [
           { block: textItem(label), x: PAD_X },
-          ...found.cells.map((cell, column) => ({ block: cellBlock(cell, cellWidth(column), styles, measure), x: cellLeft(column) })),
+          ...found.cells.map((cell, column) => ({ block: cellBlock(cell, cellWidth, styles, measure), x: cellLeft(column) })),
         ],
         index % 2 === 1,
       );

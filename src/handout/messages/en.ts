@@ -24,7 +24,6 @@ export interface HandoutMessages {
   readonly documentSubject: string;
   readonly paperName: Readonly<Record<'a4' | 'letter', string>>;
   readonly illustrativeBadge: string;
-  readonly illustrativeNote: string;
   readonly numbersFor: (values: SheetValues) => string;
   readonly keyIntro: (values: SheetValues) => string;
   /** What each look of figure means, in words that suit any outcome. */
@@ -108,8 +107,7 @@ export const handoutMessagesEn: HandoutMessages = {
   language: 'en-GB',
   documentSubject: 'Benefits and harms of the options, for talking with your clinician',
   paperName: { a4: 'A4', letter: 'US Letter' },
-  illustrativeBadge: 'Illustrative example',
-  illustrativeNote: 'Invented numbers, for teaching only: not for real decisions.',
+  illustrativeBadge: 'Illustrative example: invented numbers',
   numbersFor: ({ denominator, years }) =>
     `Every number on this sheet is out of ${denominator} people, over ${period(years)}.`,
   keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
