@@ -43,7 +43,7 @@ test.describe('editing a topic', () => {
     const name = page.getByLabel('Option 4 name');
     await expect(name).toBeFocused();
     await name.fill('a lower dose');
-    await expect(page.getByText(/things to fix before the results can update/)).toBeVisible();
+    await expect(page.getByRole('region', { name: /Still to fill in \(3\)/ })).toBeVisible();
     await expect(page.getByRole('status').filter({ hasText: 'Out of date' })).toBeVisible();
     const blocks = page.locator('fieldset.effect').filter({ hasText: 'Effect of a lower dose' });
     await expect(blocks).toHaveCount(3);

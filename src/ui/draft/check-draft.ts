@@ -17,6 +17,25 @@ export interface FieldProblem {
   readonly key: string | null;
   readonly problem: Problem;
   readonly message: string;
+  /**
+   * True for something not yet filled in, in a field the person has not touched: shown as
+   * still needed, calmly, rather than as a mistake. Set by the editor; false from here.
+   */
+  readonly needed: boolean;
+}
+
+/** Codes that mean "nothing entered yet" rather than "what was entered is wrong". */
+const MISSING_CODES: ReadonlySet<Problem['code']> = new Set([
+  'number-missing',
+  'topic-text-missing',
+  'risk-empty',
+  'baseline-missing',
+  'topic-effect-missing',
+]);
+
+/** Whether a problem only says that something has not been entered yet. */
+export function isMissing(found: Problem): boolean {
+  return MISSING_CODES.has(found.code);
 }
 
 export interface DraftCheck {
@@ -60,6 +79,7 @@ export function checkDraft(draft: TopicDraft, settings: { readonly per?: Denomin
       key: fieldKeyForPath(found.field, draft, reading.questionPlaces),
       problem: found,
       message: describeProblem(found),
+      needed: false,
     })),
     result: problems.length === 0 && evaluation.ok ? evaluation.result : null,
   };

@@ -5,7 +5,7 @@
  */
 import type { ChancewiseShellApi, ShellResult } from '../../../electron/ipc-contract.ts';
 import { browserStorage } from '../state/key-value-storage.ts';
-import { download } from './browser-platform.ts';
+import { download, pickTextFile } from './browser-platform.ts';
 import type { OpenedFile, Platform } from './platform.ts';
 
 async function value<T>(request: Promise<ShellResult<T>>): Promise<T> {
@@ -27,8 +27,9 @@ export function desktopPlatform(shell: ChancewiseShellApi): Platform {
     openRecentTopicFile: async (path) => opened(await value(shell.openRecentDocument(path))),
     saveTopicFile: async (text, _suggestedName, mode) =>
       (await value(mode === 'save-as' ? shell.saveDocumentAs(text) : shell.saveDocument(text)))?.fileName ?? null,
-    // The shell allows downloads of the page's own blob addresses, with its save dialog.
-    saveExport: async (suggestedName, contents, type) => download(suggestedName, contents, type),
+    // The page's own file input, and downloads of its own blob addresses, which the shell allows.
+    pickTextFile,
+    saveFile: async (suggestedName, contents, type) => download(suggestedName, contents, type),
     saveHandout: async (suggestedName, pdf) => (await value(shell.exportHandoutPdf({ bytes: pdf, suggestedName })))?.fileName ?? null,
     topicReplaced: () => void shell.newDocument(),
     snapshot: (content, hasUnsavedChanges) => void shell.saveSnapshot({ content, keepPatient: false, hasUnsavedChanges }),

@@ -36,8 +36,10 @@ export interface Platform {
   openRecentTopicFile(nameOrPath: string): Promise<OpenedFile | null>;
   /** Save topic file text; returns the file name used, or null when cancelled. */
   saveTopicFile(text: string, suggestedName: string, mode: 'save' | 'save-as'): Promise<string | null>;
-  /** Save an exported chart; returns the name used, or null when cancelled. */
-  saveExport(suggestedName: string, contents: string | Uint8Array, type: string): Promise<string | null>;
+  /** Ask for any text file (not a topic: for instance a teaching set); null when cancelled. */
+  pickTextFile(accept: string): Promise<OpenedFile | null>;
+  /** Save bytes or text under a suggested name (an exported chart); returns the name used, or null when cancelled. */
+  saveFile(suggestedName: string, contents: string | Uint8Array, type: string): Promise<string | null>;
   /** Save the handout PDF; returns the name used, or null when cancelled. */
   saveHandout(suggestedName: string, pdf: Uint8Array): Promise<string | null>;
   /** The editor now holds a new, unsaved topic (the desktop shell forgets its current file). */

@@ -5,7 +5,7 @@
  */
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Denominator } from '../../core/types.ts';
-import { checkDraft } from '../draft/check-draft.ts';
+import { checkDraft, isMissing } from '../draft/check-draft.ts';
 import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 import { withoutPatient } from './autosave.ts';
@@ -61,7 +61,16 @@ export class TopicEditor {
   fileName = $state.raw<string | null>(null);
 
   #history: UndoHistory<TopicDraft>;
-  #problemsByKey = $derived(groupByKey(this.check.problems));
+  /** Fields the person has changed since the topic was loaded. */
+  #touched = $state.raw<ReadonlySet<string>>(new Set());
+  /** Every problem of the current draft; missing entries in untouched fields are marked as still needed. */
+  problems = $derived(
+    this.check.problems.map((found) => ({
+      ...found,
+      needed: found.key !== null && isMissing(found.problem) && !this.#touched.has(found.key),
+    })),
+  );
+  #problemsByKey = $derived(groupByKey(this.problems));
   #lastValidDraft: TopicDraft | null = null;
   #savedSignature: string;
   #cancelAutosave: (() => void) | null = null;
@@ -94,6 +103,7 @@ export class TopicEditor {
   change(edit: (draft: TopicDraft) => TopicDraft, mergeKey: string | null = null): void {
     const next = edit(this.draft);
     if (next === this.draft) return;
+    if (mergeKey !== null && !this.#touched.has(mergeKey)) this.#touched = new Set([...this.#touched, mergeKey]);
     this.#history.record(next, mergeKey, this.#now());
     this.#show(next);
     this.#queueAutosave();
@@ -106,6 +116,7 @@ export class TopicEditor {
     if (settings.saved) this.#savedSignature = signature(draft);
     // Results of the topic left behind must never show as if they were this one's.
     this.#lastValidDraft = null;
+    this.#touched = new Set();
     this.#show(draft);
     this.#queueAutosave();
   }

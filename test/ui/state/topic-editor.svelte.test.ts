@@ -127,3 +127,25 @@ describe('TopicEditor after loading another topic', () => {
     expect(editor.shown?.title).toBe(first.topic.title);
   });
 });
+
+describe('TopicEditor problems still to fill in', () => {
+  test('marks what a new topic has not been given yet as needed, not as a mistake', () => {
+    const { editor } = setUp();
+    editor.load(blankDraft(), { fileName: null, saved: true });
+    const title = editor.problemsFor('title');
+    expect(title.map((found) => [found.problem.code, found.needed])).toEqual([['topic-text-missing', true]]);
+    expect(editor.problems.every((found) => found.needed)).toBe(true);
+  });
+
+  test('a field emptied by the person is a mistake to fix', () => {
+    const { editor } = setUp();
+    editor.change((draft) => setTopicText(draft, 'title', ''), 'title');
+    expect(editor.problemsFor('title').map((found) => found.needed)).toEqual([false]);
+  });
+
+  test('a wrong value is a mistake even in a field never touched', () => {
+    const { editor } = setUp();
+    editor.load({ ...demo, periodYears: 'ten' }, { fileName: 'x.chancewise.json', saved: true });
+    expect(editor.problemsFor('periodYears').map((found) => [found.problem.code, found.needed])).toEqual([['number-unparsable', false]]);
+  });
+});
