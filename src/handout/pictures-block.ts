@@ -22,7 +22,7 @@ export type PicturesBlock =
 /** Padding left and right of table text, in millimetres. */
 const PAD_X = 1.8;
 /** Space between a caption and the edges of its slot, in millimetres. */
-const CAPTION_PAD = 1;
+const CAPTION_PAD = 2;
 /** Tolerance for a line that ends exactly at its column edge, in millimetres. */
 const EDGE = 0.01;
 

@@ -145,10 +145,13 @@ describe('building a handout', () => {
     expect(pdfInfo(writePdf(handout.pdf)).Pages).toBe('1');
   });
 
-  it('fits a topic of the largest size the editor allows when its texts are short', () => {
-    const topic = shapedTopic({ options: TOPIC_LIMITS.maxOptions, outcomes: TOPIC_LIMITS.maxOutcomes });
-    const handout = buildHandout(computeTopic(topic), topic, base, testFonts());
-    expect(handout.ok).toBe(true);
+  it('fits the most options with four outcomes on either paper, and three options with the most outcomes on A4', () => {
+    const four = shapedTopic({ options: TOPIC_LIMITS.maxOptions, outcomes: 4 });
+    for (const paper of ['a4', 'letter'] as const) {
+      expect(buildHandout(computeTopic(four), four, { ...base, paper }, testFonts()).ok).toBe(true);
+    }
+    const eight = shapedTopic({ options: 3, outcomes: TOPIC_LIMITS.maxOutcomes });
+    expect(buildHandout(computeTopic(eight), eight, base, testFonts()).ok).toBe(true);
   });
 
   it('refuses, writing nothing, content that cannot fit on one page, and says in one line what to shorten', () => {

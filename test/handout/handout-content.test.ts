@@ -3,6 +3,7 @@ import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import { handoutSentences } from '../../src/core/wording/topic-wording.ts';
 import { type ContentOptions, handoutContent, headlineOutcome } from '../../src/handout/handout-content.ts';
 import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { outcomeChart } from '../../src/render/chart-model.ts';
 import { firstDemo } from './support.ts';
 
 const options: ContentOptions = { date: '2026-12-01', appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn };
@@ -16,7 +17,13 @@ describe('the content of a handout', () => {
   it('shows the headline outcome, one picture per option, the comparison first', () => {
     expect(headline.isHeadline).toBe(true);
     expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['none', 'standard', 'higher']);
-    expect(content.chart.model.arrays.map((array) => array.title)).toEqual(['No tablet', 'The standard dose', 'The higher dose']);
+    expect(content.chart.titles).toEqual(['No tablet', 'The standard dose', 'The higher dose']);
+  });
+
+  it('leaves the pictures themselves unchanged: the same people in the same places as the chart', () => {
+    const chart = outcomeChart(result, headline.outcomeId);
+    expect(content.chart.model.arrays.map((array) => array.layout)).toEqual(chart.arrays.map((array) => array.layout));
+    expect(content.chart.model.arrays.every((array) => array.title === '' && array.labels.length === 0)).toBe(true);
   });
 
   it('captions each picture with its option’s two frames from the wording, in the pictures’ order', () => {
