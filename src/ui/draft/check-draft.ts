@@ -8,7 +8,7 @@ import { evaluateTopic } from '../../core/topic/compute-topic.ts';
 import type { Topic } from '../../core/topic/topic.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Denominator } from '../../core/types.ts';
-import { fieldKeyForPath } from './field-keys.ts';
+import { fieldKeyForPath, fieldOrder } from './field-keys.ts';
 import { topicFromDraft } from './topic-from-draft.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
@@ -72,15 +72,20 @@ export function checkDraft(draft: TopicDraft, settings: { readonly per?: Denomin
   const reading = topicFromDraft(draft);
   const evaluation = evaluateTopic(reading.topic, { per: settings.per ?? null });
   const problems = merged(reading.problems, evaluation.ok ? [] : evaluation.problems);
+  const order = new Map(fieldOrder(draft).map((key, index) => [key, index]));
+  const placed = problems.map((found) => ({
+    key: fieldKeyForPath(found.field, draft, reading.questionPlaces),
+    problem: found,
+    message: describeProblem(found),
+    needed: false,
+  }));
+  // In the order the fields appear on screen; problems of the topic as a whole last. The sort is stable.
+  const rank = (key: string | null) => (key === null ? Number.MAX_SAFE_INTEGER : (order.get(key) ?? Number.MAX_SAFE_INTEGER - 1));
+  placed.sort((first, second) => rank(first.key) - rank(second.key));
   return {
     topic: reading.topic,
     savable: reading.problems.length === 0,
-    problems: problems.map((found) => ({
-      key: fieldKeyForPath(found.field, draft, reading.questionPlaces),
-      problem: found,
-      message: describeProblem(found),
-      needed: false,
-    })),
+    problems: placed,
     result: problems.length === 0 && evaluation.ok ? evaluation.result : null,
   };
 }

@@ -86,6 +86,36 @@ function outcomeFieldKey(draft: TopicDraft, index: number, rest: string): string
   return outcomeKey(outcome.id, 'name');
 }
 
+const EFFECT_ORDER: readonly EffectPart[] = [
+  'estimate',
+  'lower',
+  'upper',
+  'interval',
+  'intervention',
+  'intervention.events',
+  'intervention.total',
+  'comparison',
+  'comparison.events',
+  'comparison.total',
+  'followUpYears',
+  'source',
+];
+
+/** Every field key in the order the editor shows the fields, top to bottom. */
+export function fieldOrder(draft: TopicDraft): string[] {
+  const order = ['title', 'population', 'periodYears', 'options', ...draft.options.map((option) => optionKey(option.id)), 'outcomes'];
+  const others = effectOptionIds(draft);
+  for (const outcome of draft.outcomes) {
+    order.push(outcomeKey(outcome.id, 'effects'), outcomeKey(outcome.id, 'name'));
+    order.push(outcomeKey(outcome.id, 'baseline.risk'), outcomeKey(outcome.id, 'baseline.periodYears'), outcomeKey(outcome.id, 'baseline.source'));
+    for (const optionId of others) {
+      order.push(effectKey(outcome.id, optionId), ...EFFECT_ORDER.map((part) => effectKey(outcome.id, optionId, part)));
+    }
+  }
+  order.push('evidence.summary', 'evidence.reviewed', 'clinician', 'questions', ...draft.questions.map((_, place) => `questions.${place}`));
+  return order;
+}
+
 /**
  * The editor field a core problem belongs to, or null when it belongs to no one field
  * (it is then shown only in the list of every problem).
@@ -110,4 +140,29 @@ export function fieldKeyForPath(path: string, draft: TopicDraft, questionPlaces:
   const outcome = /^outcomes\.(\d+)\.?(.*)$/.exec(path);
   if (outcome !== null) return outcomeFieldKey(draft, Number(outcome[1]), outcome[2] ?? '');
   return null;
+}
+
+/**
+ * Where a field is, in words, for a list of problems read away from the fields: "Option 2",
+ * "a stroke", "a stroke, effect of the tablet"; null for the topic's own fields.
+ */
+export function fieldPlace(key: string, draft: TopicDraft): string | null {
+  const named = (name: string, fallback: string) => (name.trim() === '' ? fallback : name.trim());
+  const option = /^options\.(.+)\.name$/.exec(key);
+  if (option !== null) {
+    const index = draft.options.findIndex((candidate) => candidate.id === option[1]);
+    return index === -1 ? null : `Option ${index + 1}`;
+  }
+  const outcome = /^outcomes\.([^.]+)\.(.+)$/.exec(key);
+  if (outcome === null) return null;
+  const index = draft.outcomes.findIndex((candidate) => candidate.id === outcome[1]);
+  const found = draft.outcomes[index];
+  if (found === undefined) return null;
+  const outcomeName = named(found.name, `Outcome ${index + 1}`);
+  const effect = /^effects\.([^.]+)/.exec(outcome[2] ?? '');
+  if (effect === null) return outcomeName;
+  const optionIndex = draft.options.findIndex((candidate) => candidate.id === effect[1]);
+  const optionFound = draft.options[optionIndex];
+  if (optionFound === undefined) return outcomeName;
+  return `${outcomeName}, effect of ${named(optionFound.name, `option ${optionIndex + 1}`)}`;
 }

@@ -46,15 +46,15 @@ describe('checkDraft', () => {
     expect(check.problems[0]?.message).toContain('150%');
   });
 
-  test('reports every problem at once, each at its own field', () => {
+  test('reports every problem at once, each at its own field, in the order the fields appear', () => {
     let draft = setTopicText(demo, 'title', '');
     draft = setEffectField(draft, 'muscle', 'standard', 'estimate', 'abc');
     draft = setEffectField(draft, 'diabetes', 'higher', 'lower', '1.3');
     const check = checkDraft(draft);
     expect(check.savable).toBe(false);
     expect(check.problems.map((found) => [found.key, found.problem.code])).toEqual([
-      [effectKey('muscle', 'standard', 'estimate'), 'number-unparsable'],
       ['title', 'topic-text-missing'],
+      [effectKey('muscle', 'standard', 'estimate'), 'number-unparsable'],
       [effectKey('diabetes', 'higher', 'interval'), 'interval-excludes-estimate'],
     ]);
   });

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import { effectKey, fieldId, fieldKeyForPath, outcomeKey } from '../../../src/ui/draft/field-keys.ts';
+import { effectKey, fieldId, fieldKeyForPath, fieldOrder, fieldPlace, outcomeKey } from '../../../src/ui/draft/field-keys.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
 const first = DEMO_TOPICS[0];
@@ -54,5 +54,31 @@ describe('fieldId', () => {
 
   test('differs for keys that only differ in punctuation', () => {
     expect(fieldId('outcomes.a.b')).not.toBe(fieldId('outcomes.a-b'));
+  });
+});
+
+describe('fieldOrder', () => {
+  test('lists the fields top to bottom: the decision, the options, then each outcome with its effects', () => {
+    const order = fieldOrder(draft);
+    const at = (key: string) => order.indexOf(key);
+    expect(order.slice(0, 3)).toEqual(['title', 'population', 'periodYears']);
+    expect(at('options.higher.name')).toBeLessThan(at(outcomeKey('heart-stroke', 'name')));
+    expect(at(outcomeKey('heart-stroke', 'baseline.risk'))).toBeLessThan(at(effectKey('heart-stroke', 'standard', 'estimate')));
+    expect(at(effectKey('heart-stroke', 'higher', 'source'))).toBeLessThan(at(outcomeKey('muscle', 'name')));
+    expect(at(effectKey('heart-stroke', 'none', 'estimate'))).toBe(-1);
+  });
+});
+
+describe('fieldPlace', () => {
+  test('names where a field is, for a list of problems', () => {
+    expect(fieldPlace('options.higher.name', draft)).toBe('Option 3');
+    expect(fieldPlace(outcomeKey('muscle', 'baseline.risk'), draft)).toBe('muscle pain bad enough to stop the tablet');
+    expect(fieldPlace(effectKey('diabetes', 'standard', 'estimate'), draft)).toBe('type 2 diabetes, effect of the standard dose');
+    expect(fieldPlace('title', draft)).toBeNull();
+  });
+
+  test('falls back to a number for what has no name yet', () => {
+    const unnamed = { ...draft, outcomes: draft.outcomes.map((outcome, index) => (index === 1 ? { ...outcome, name: ' ' } : outcome)) };
+    expect(fieldPlace(outcomeKey('muscle', 'name'), unnamed)).toBe('Outcome 2');
   });
 });
