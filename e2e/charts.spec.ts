@@ -1,0 +1,188 @@
+/**
+ * The people charts in Chromium, on their own check page (e2e/chart-page, built here with
+ * its own Vite config and served with the app's security headers): every person drawn
+ * once in the right group, nothing blocked by the policy, and screenshots in colour,
+ * greyscale, the black-and-white theme and with the range outlined, for a person to look at.
+ */
+import { once } from 'node:events';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { fileURLToPath } from 'node:url';
+import { type Page, expect, test } from '@playwright/test';
+import { build } from 'vite';
+import { securityHeaders } from '../src/shared/content-security-policy.ts';
+import { createStaticServer } from '../src/web/static-server.ts';
+
+const pageFolder = fileURLToPath(new URL('./chart-page/', import.meta.url));
+let server: Server;
+let origin = '';
+
+test.beforeAll(async () => {
+  await build({ configFile: `${pageFolder}vite.config.ts`, logLevel: 'warn' });
+  server = createStaticServer({ root: `${pageFolder}dist`, headers: securityHeaders() });
+  server.listen(0, '127.0.0.1');
+  await once(server, 'listening');
+  origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+});
+
+test.afterAll(async () => {
+  server.closeAllConnections();
+  server.close();
+  await once(server, 'close');
+});
+
+declare global {
+  interface Window {
+    chartPageViolations?: string[];
+  }
+}
+
+/** Open the check page with `query`; fails on page errors, policy violations or requests elsewhere. */
+async function openChartPage(page: Page, query = ''): Promise<() => Promise<void>> {
+  const problems: string[] = [];
+  page.on('pageerror', (error) => problems.push(`page error: ${String(error)}`));
+  page.on('console', (message) => {
+    if (message.type() === 'error') problems.push(`console error: ${message.text()}`);
+  });
+  page.on('request', (request) => {
+    const url = new URL(request.url());
+    if (url.protocol !== 'data:' && url.origin !== origin) problems.push(`request outside the page's origin: ${request.url()}`);
+  });
+  // Added by the automation channel before the page's scripts, so the policy does not apply to it.
+  await page.addInitScript(() => {
+    window.chartPageViolations = [];
+    document.addEventListener('securitypolicyviolation', (event) => {
+      window.chartPageViolations?.push(`${event.effectiveDirective} blocked ${event.blockedURI || '(inline)'}`);
+    });
+  });
+  const response = await page.goto(`${origin}/${query}`);
+  expect(response?.headers()['content-security-policy']).toContain("script-src 'self'");
+  await expect(page.locator('body[data-ready="true"]')).toHaveCount(1);
+  return async () => {
+    expect(await page.evaluate(() => window.chartPageViolations ?? [])).toEqual([]);
+    expect(problems).toEqual([]);
+  };
+}
+
+/** Count of each `data-outcome` value in every array of the chart of `outcomeId`. */
+function drawnCounts(page: Page, outcomeId: string) {
+  return page.evaluate((id) => {
+    const svg = [...document.querySelectorAll('#charts svg.people-chart')].find((chart) => chart.getAttribute('data-id-prefix') === `chart-${id}`);
+    if (svg === undefined) return null;
+    return Object.fromEntries(
+      [...svg.querySelectorAll('g.chart-array')].map((array) => {
+        const counts: Record<string, number> = {};
+        for (const person of array.querySelectorAll('[data-outcome]')) {
+          const group = person.getAttribute('data-outcome') ?? '';
+          counts[group] = (counts[group] ?? 0) + 1;
+        }
+        return [array.getAttribute('data-option-id') ?? '', counts];
+      }),
+    );
+  }, outcomeId);
+}
+
+test.describe('people charts in the browser', () => {
+  test('draw every one of 1000 people per array in the group the numbers give', async ({ page }) => {
+    const finish = await openChartPage(page);
+    // People per 1000 = risk × 1000, rounded to whole people, halves up (common practice);
+    // the risk with the option is the baseline × RR (Cochrane Handbook 5.1, §12.5.4).
+    // Heart attack or stroke: 15% → 150; 15% × 0.75 = 11.25% → 112.5 → 113, so 37 avoid it.
+    expect(await drawnCounts(page, 'heart-stroke')).toEqual({
+      none: { event: 150, free: 850 },
+      standard: { event: 113, prevented: 37, free: 850 },
+    });
+    // Muscle pain: 5% → 50; 5% × 1.2 = 6% → 60, so 10 more have it.
+    expect(await drawnCounts(page, 'muscle')).toEqual({
+      none: { event: 50, free: 950 },
+      standard: { event: 50, caused: 10, free: 940 },
+    });
+    // Type 2 diabetes: 8% → 80; 8% × 1.1 = 8.8% → 88, so 8 more have it.
+    expect(await drawnCounts(page, 'diabetes')).toEqual({
+      none: { event: 80, free: 920 },
+      standard: { event: 80, caused: 8, free: 912 },
+    });
+    // Exactly one element per person, and nothing else carries data-outcome.
+    const shape = await page.evaluate(() => ({
+      groups: [...document.querySelectorAll('#charts g.people')].map((group) => ({
+        children: group.children.length,
+        people: group.querySelectorAll(':scope > path[data-outcome]').length,
+      })),
+      outside: document.querySelectorAll('#charts [data-outcome]:not(g.people > path)').length,
+      uses: document.querySelectorAll('#charts use').length,
+    }));
+    expect(shape.groups).toEqual(Array.from({ length: 6 }, () => ({ children: 1000, people: 1000 })));
+    expect(shape.outside).toBe(0);
+    expect(shape.uses).toBe(0);
+    await page.screenshot({ path: 'test-results/charts-colour.png', fullPage: true });
+    const first = page.locator('#charts svg.people-chart').first();
+    await first.screenshot({ path: 'test-results/charts-headline.png' });
+    await finish();
+  });
+
+  test('paint people in the colours of their groups, with the patterns the greyscale view needs', async ({ page }) => {
+    const finish = await openChartPage(page, '?greyscale=on');
+    const paints = await page.evaluate(() => {
+      const svg = document.querySelector('#charts svg.people-chart');
+      const paint = (selector: string) => {
+        const element = svg?.querySelector(selector);
+        return element === null || element === undefined ? null : getComputedStyle(element).fill;
+      };
+      return {
+        event: paint('[data-outcome="event"]'),
+        free: paint('[data-outcome="free"]'),
+        prevented: paint('[data-outcome="prevented"]'),
+        filter: getComputedStyle(document.getElementById('charts') as HTMLElement).filter,
+      };
+    });
+    // Okabe & Ito (2008) blue for events; the free look is inherited from the people's group.
+    expect(paints.event).toBe('rgb(0, 114, 178)');
+    expect(paints.free).toBe('rgb(232, 232, 232)');
+    expect(paints.prevented).toMatch(/^url\(".*#chart-heart-stroke-dots"\)$/);
+    expect(paints.filter).toBe('grayscale(1)');
+    await page.screenshot({ path: 'test-results/charts-greyscale.png', fullPage: true });
+    await finish();
+  });
+
+  test('show each figure crisply when enlarged: heads, bodies, dots and hatching, in every view', async ({ browser }) => {
+    const context = await browser.newContext({ deviceScaleFactor: 4, viewport: { width: 1000, height: 700 } });
+    for (const [query, view] of [
+      ['', 'colour'],
+      ['?greyscale=on', 'greyscale'],
+      ['?palette=black-and-white&range=on', 'black-and-white-range'],
+    ] as const) {
+      const page = await context.newPage();
+      const finish = await openChartPage(page, query);
+      // The first two blocks of the option's array in the benefit chart and a harm chart, where groups meet.
+      for (const [outcome, kind] of [
+        ['heart-stroke', 'benefit'],
+        ['muscle', 'harm'],
+      ] as const) {
+        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="standard"] g.people`);
+        const box = await people.boundingBox();
+        expect(box).not.toBeNull();
+        if (box === null) continue;
+        await page.screenshot({
+          path: `test-results/charts-detail-${kind}-${view}.png`,
+          fullPage: true,
+          clip: { x: box.x - 4, y: box.y + box.height / 2 - 4, width: box.width * 0.42 + 8, height: box.height / 2 + 8 },
+        });
+      }
+      await finish();
+      await page.close();
+    }
+    await context.close();
+  });
+
+  test('draw the black-and-white theme and the range outline without policy errors', async ({ page }) => {
+    const finish = await openChartPage(page, '?palette=black-and-white&range=on');
+    const svg = page.locator('#charts svg.people-chart').first();
+    await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
+    // Range 102 to 125 around 113 with the standard dose: ranks 102–124 outlined (23 people).
+    await expect(svg.locator('g.chart-array[data-option-id="standard"] g.people > [stroke-dasharray]')).toHaveCount(23);
+    await expect(svg.locator('g.chart-array[data-option-id="none"] [stroke-dasharray]')).toHaveCount(0);
+    await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
+    await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });
+    await finish();
+  });
+});
