@@ -6,7 +6,7 @@
  */
 import type { OptionOutcomeResult } from '../../core/topic/topic-result.ts';
 import type { Denominator } from '../../core/types.ts';
-import { capitalise, shortDecimal } from './messages/en.ts';
+import { shortDecimal } from './messages/en.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { FramingCard, Slide } from './slide-model.ts';
 import { armsOf, optionPanel, slide } from './story-slides.ts';
@@ -87,7 +87,7 @@ export function framingCards(numbers: FramingNumbers, source: SlideSource): Fram
       ? { id: 'nnt', label: words.nntLabel, value: words.nntNone, detail: null }
       : {
           id: 'nnt',
-          label: `${words.nntLabel} (${numbers.nntLabel ?? ''})`,
+          label: numbers.nntLabel ?? words.nntLabel,
           value: words.nntValue(numbers.nnt, numbers.nntLabel === 'NNTH' ? 'cause' : 'prevent'),
           detail: words.nntDetail(denominator, shortDecimal(numbers.exact), shortDecimal(numbers.nntExact), numbers.nnt),
         };
@@ -102,7 +102,7 @@ export function framingSlide(source: SlideSource): Slide {
   const numbers = framingNumbers(arms.option, result.denominator);
   return slide('framing', source, {
     layout: 'cards',
-    panels: [optionPanel(arms, source, { title: source.messages.framing.peopleTitle(capitalise(arms.option.name), result.denominator) })],
+    panels: [optionPanel(arms, source)],
     cards: framingCards(numbers, source),
     evidence: source.messages.evidence.framing,
   });

@@ -38,10 +38,10 @@ export interface Callout {
   readonly text: string;
 }
 
-/** A line of text: a body sentence, a quieter note, or a sub-heading. */
+/** A line of text: a body sentence, a quieter note, a caution, or a sub-heading. */
 export interface SlideLine {
   readonly text: string;
-  readonly tone: 'body' | 'note' | 'subheading';
+  readonly tone: 'body' | 'note' | 'notice' | 'subheading';
   readonly look: PersonLook | null;
 }
 

@@ -86,7 +86,9 @@ function titleSlide(source: SlideSource): Slide {
   const option = topic.options.find((entry) => entry.id === optionId)?.name ?? '';
   const lines: SlideLine[] = [];
   if (result.population.trim() !== '') lines.push(line(words.who(result.population.trim().replace(/[.!?]$/, ''))));
-  lines.push(line(words.period(result.periodYears)), line(words.comparing(option, comparison)), line(source.messages.view.keysHint, 'note'));
+  lines.push(line(words.period(result.periodYears)), line(words.comparing(option, comparison)));
+  if (result.illustrative) lines.push(line(words.illustrative, 'notice'));
+  lines.push(line(source.messages.view.keysHint, 'note'));
   return slide('title', source, { heading: topic.title, lines });
 }
 
@@ -122,10 +124,9 @@ function withOptionSlide(source: SlideSource): Slide {
     layout: 'pair',
     panels: [comparisonPanel(arms, source), optionPanel(arms, source, { totals: true })],
     callouts: [
-      { look: 'event', value: words.countIn(withCount, result.denominator), text: words.haveWith(withCount, outcome.name, option.name) },
       { look: 'event', value: words.countIn(comparison.groups.event, result.denominator), text: words.without(comparison.name) },
+      { look: 'event', value: words.countIn(withCount, result.denominator), text: words.haveWith(withCount, outcome.name, option.name) },
     ],
-    lines: [line(source.messages.story.sameFigures, 'note')],
   });
 }
 

@@ -59,12 +59,16 @@ export const teachingMessagesEn = {
     savePng: 'PNG',
     saveSvg: 'SVG',
     saveSlideGroup: 'Save this slide',
+    setGroup: 'Teaching set',
+    menu: 'Slide and set…',
+    cannotPresent: (detail: string) => `This topic cannot be presented yet: ${detail}`,
     openSet: 'Open set…',
     saveSet: 'Save set',
     example: 'Example set',
     controls: 'Presentation controls',
     keysHint: 'Arrow keys, Page Up/Down or a clicker to step; Esc to leave.',
-    illustrative: 'Illustrative: invented numbers',
+    illustrative: 'Illustrative',
+    illustrativeLong: 'Illustrative: invented numbers, not from a real study',
     opened: (title: string, count: number) => `Opened the teaching set “${title}”: ${count} ${plural(count, 'topic', 'topics')}.`,
     saved: (name: string) => `Saved “${name}”.`,
     exported: (name: string) => `Saved the slide as “${name}”.`,
@@ -77,6 +81,7 @@ export const teachingMessagesEn = {
     who: (population: string) => `For ${population}.`,
     period: (periodYears: number) => `Every number is over ${years(periodYears)}.`,
     comparing: (option: string, comparison: string) => `Comparing ${option} with ${comparison}.`,
+    illustrative: 'Illustrative example: every number is invented, for teaching. Not for real decisions.',
   },
 
   /** Short call-outs beside the people: a count in large type, then what it means. */
@@ -111,7 +116,7 @@ export const teachingMessagesEn = {
     grouped: 'Grouped',
     scattered: 'Scattered',
     totalsOnly: 'Two totals',
-    withChange: 'The change as its own group',
+    withChange: 'Change as its own group',
     description: (title: string, labels: readonly string[]) => `${title}: ${labels.join(', ')}.`,
   },
 
@@ -147,12 +152,11 @@ export const teachingMessagesEn = {
     absoluteDetail: (from: string, to: string, difference: string, denominator: number) =>
       `${from} − ${to} = ${difference} in ${denominator}`,
     absoluteNone: (denominator: number) => `No difference in ${denominator}`,
-    nntLabel: 'Number needed to treat',
+    nntLabel: 'NNT',
     nntValue: (count: number, direction: 'prevent' | 'cause') => `Treat ${count} to ${direction} 1`,
     nntDetail: (denominator: number, difference: string, quotient: string, count: number) =>
       `${denominator} ÷ ${difference} = ${quotient}, rounded up: ${count}`,
     nntNone: 'No number needed to treat',
-    peopleTitle: (option: string, denominator: number) => `${option}, ${denominator} people`,
   },
 
   /** What the research found about each format, in one line, with its source (author and year). */
