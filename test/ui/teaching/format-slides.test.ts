@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
+import { DEFAULT_SCATTER_SEED } from '../../../src/render/icon-array-layout.ts';
+import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
+import type { PeoplePanel } from '../../../src/ui/teaching/slide-model.ts';
+import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+
+// Each demonstration states one finding with its source: Galesic, Garcia-Retamero & Gigerenzer
+// (2009, Health Psychol 28:210) for 100 vs 1000; Ancker, Weber & Kukafka (2011, Med Decis Making
+// 31:143) for grouped vs scattered; Zikmund-Fisher et al. (2008, J Health Commun 13:107) for
+// incremental framing.
+
+const counts = (panel: PeoplePanel | undefined): Record<string, number> =>
+  Object.fromEntries((panel?.chips ?? []).map((chip) => [chip.look, chip.count]));
+
+function groupsAt(name: string, per: 100 | 1000) {
+  const evaluation = evaluateTopic(demoTopic(name), { per });
+  if (!evaluation.ok) throw new Error('did not compute');
+  const option = evaluation.result.outcomes[0]?.options.find((entry) => !entry.isComparison);
+  return option?.groups;
+}
+
+describe('the format demonstrations', () => {
+  it.each([HEART, SCREENING])('draws %s with 100 and with 1000 people, each as the core counts it', (name) => {
+    const slide = buildSlide(itemOf(demoTopic(name)), 'denominator');
+    const [hundred, thousand] = slide.panels;
+    expect(hundred?.layout.denominator).toBe(100);
+    expect(thousand?.layout.denominator).toBe(1000);
+    const at100 = groupsAt(name, 100);
+    const at1000 = groupsAt(name, 1000);
+    expect(counts(hundred)).toEqual(Object.fromEntries(Object.entries(at100 ?? {}).filter(([key, value]) => key !== 'denominator' && value > 0)));
+    expect(counts(thousand)).toEqual(Object.fromEntries(Object.entries(at1000 ?? {}).filter(([key, value]) => key !== 'denominator' && value > 0)));
+    expect(slide.evidence).toEqual({
+      finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
+      source: 'Galesic, Garcia-Retamero & Gigerenzer 2009',
+    });
+  });
+
+  it('draws the same people grouped and scattered, with the fixed seed, so only the arrangement differs', () => {
+    const slide = buildSlide(itemOf(demoTopic(HEART)), 'arrangement');
+    const [grouped, scattered] = slide.panels;
+    expect(grouped?.layout.arrangement).toBe('grouped');
+    expect(scattered?.layout.arrangement).toBe('scattered');
+    expect(scattered?.layout.seed).toBe(DEFAULT_SCATTER_SEED);
+    expect(counts(scattered)).toEqual(counts(grouped));
+    const placesOf = (panel: PeoplePanel | undefined) => panel?.layout.people.filter((person) => person.group !== 'free').map((person) => person.index);
+    expect(placesOf(scattered)).not.toEqual(placesOf(grouped));
+    // Drawn twice, the scattered picture is the same picture.
+    expect(placesOf(buildSlide(itemOf(demoTopic(HEART)), 'arrangement').panels[1])).toEqual(placesOf(scattered));
+    expect(slide.evidence?.source).toBe('Ancker, Weber & Kukafka 2011');
+  });
+
+  it('draws two totals beside the change shown as its own group, and gives the comparison’s total', () => {
+    const slide = buildSlide(itemOf(demoTopic(HEART)), 'incremental');
+    const [totals, change] = slide.panels;
+    expect(counts(totals)).toEqual({ event: 11, free: 89 });
+    expect(counts(change)).toEqual({ event: 11, prevented: 4, free: 85 });
+    expect(slide.lines.map((line) => line.text)).toEqual(['Without it (no tablet): 15 in 100.']);
+    expect(slide.evidence?.source).toBe('Zikmund-Fisher et al. 2008');
+  });
+});

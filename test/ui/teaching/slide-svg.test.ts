@@ -1,0 +1,55 @@
+// @vitest-environment jsdom
+import { describe, expect, it } from 'vitest';
+import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
+import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
+import { SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
+import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
+import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+
+// A slide for slide decks: 16:9 at 1920 × 1080 (ITU-R BT.709 full HD frame), standalone SVG 1.1
+// text with its XML declaration (W3C SVG 1.1, §1.3), every person of every array drawn.
+
+function parsed(text: string): Document {
+  return new DOMParser().parseFromString(text, 'image/svg+xml');
+}
+
+describe('a slide as an SVG file', () => {
+  it.each([HEART, SCREENING])('writes every step of %s as a full-HD standalone SVG with all its people', (name) => {
+    const item = itemOf(demoTopic(name));
+    for (const kind of DEFAULT_STEPS) {
+      const slide = buildSlide(item, kind);
+      const text = slideSvgText(slide, document, 'Slide 1 of 11');
+      expect(text.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg')).toBe(true);
+      const doc = parsed(text);
+      expect(doc.querySelector('parsererror')).toBeNull();
+      const root = doc.documentElement;
+      expect(root.getAttribute('xmlns')).toBe('http://www.w3.org/2000/svg');
+      expect(root.getAttribute('viewBox')).toBe(`0 0 ${SLIDE_WIDTH} ${SLIDE_HEIGHT}`);
+      const people = slide.panels.reduce((sum, panel) => sum + panel.layout.denominator, 0);
+      expect(doc.querySelectorAll('path.person')).toHaveLength(people);
+      const words = doc.documentElement.textContent ?? '';
+      expect(words).toContain(slide.heading.split(' ')[0] ?? '');
+    }
+  });
+
+  it('keeps the framing cards, the evidence and its source in the file', () => {
+    const slide = buildSlide(itemOf(demoTopic(HEART)), 'framing');
+    const words = (parsed(slideSvgText(slide, document, 'footer')).documentElement.textContent ?? '').replace(/\s+/g, ' ');
+    for (const text of ['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1', 'Akl et al. 2011; Zipkin et al. 2014', 'footer']) {
+      expect(words).toContain(text);
+    }
+  });
+
+  it('keeps pattern ids unique within the file', () => {
+    const slide = buildSlide(itemOf(demoTopic(HEART)), 'helped');
+    const ids = [...parsed(slideSvgText(slide, document, '')).querySelectorAll('[id]')].map((element) => element.id);
+    expect(new Set(ids).size).toBe(ids.length);
+  });
+
+  it('names the file after the presentation, the slide number and the step', () => {
+    expect(slideFileName('Taking a daily tablet to lower the chance of a heart attack (illustrative example)', 3, 'with-option', 'png')).toBe(
+      'taking-a-daily-tablet-to-lower-03-with-option.png',
+    );
+    expect(slideFileName('¿?', 12, 'framing', 'svg')).toBe('teaching-12-framing.svg');
+  });
+});

@@ -1,0 +1,158 @@
+import { describe, expect, it } from 'vitest';
+import { computeTopic, evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
+import { handoutSentences } from '../../../src/core/wording/topic-wording.ts';
+import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
+import { totalsOnly } from '../../../src/ui/teaching/people-panel.ts';
+import type { PeoplePanel, PersonLook } from '../../../src/ui/teaching/slide-model.ts';
+import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
+
+// Icon arrays show the whole denominator (Ancker et al. 2006), the same grouped layout for each
+// option side by side (Zikmund-Fisher et al. 2012), and the change as its own group
+// (Zikmund-Fisher et al. 2008; Fagerlin et al. 2011). The patient sentences are the core's
+// wording, unchanged.
+
+const counts = (panel: PeoplePanel | undefined): Record<string, number> =>
+  Object.fromEntries((panel?.chips ?? []).map((chip) => [chip.look, chip.count]));
+
+function looksCount(panel: PeoplePanel | undefined, look: PersonLook): number {
+  return panel?.looks.filter((found) => found === look).length ?? 0;
+}
+
+describe('the story slides of the heart topic (illustrative)', () => {
+  const topic = demoTopic(HEART);
+  const item = itemOf(topic);
+  const result = computeTopic(topic);
+  const headline = result.outcomes[0];
+  const standard = headline?.options.find((option) => option.optionId === 'standard');
+
+  it('opens on the decision: title, who the numbers are for, the period and the options compared', () => {
+    const slide = buildSlide(item, 'title');
+    expect(slide.heading).toBe(topic.title);
+    expect(slide.lines.map((line) => line.text)).toEqual([
+      `For ${topic.population}.`,
+      'Every number is over 10 years.',
+      'Comparing the standard dose with no tablet.',
+      'Illustrative example: every number is invented, for teaching. Not for real decisions.',
+      'Arrow keys, Page Up/Down or a clicker to step; Esc to leave.',
+    ]);
+  });
+
+  it('shows the baseline as all 100 people, with both frames as call-outs', () => {
+    const slide = buildSlide(item, 'baseline');
+    expect(slide.panels).toHaveLength(1);
+    expect(counts(slide.panels[0])).toEqual({ event: 15, free: 85 });
+    expect(slide.panels[0]?.layout.people).toHaveLength(100);
+    expect(slide.callouts.map((callout) => `${callout.value} ${callout.text}`)).toEqual([
+      '15 in 100 have a heart attack or stroke over 10 years',
+      '85 in 100 do not',
+    ]);
+  });
+
+  it('shows the same people with the option as totals only, the change not yet set apart', () => {
+    const slide = buildSlide(item, 'with-option');
+    expect(slide.panels.map((panel) => panel.title)).toEqual(['No tablet', 'The standard dose']);
+    expect(counts(slide.panels[1])).toEqual({ event: 11, free: 89 });
+    expect(slide.callouts.map((callout) => callout.value)).toEqual(['15 in 100', '11 in 100']);
+  });
+
+  it('folds the changed people into the totals without changing the denominator', () => {
+    const groups = standard?.groups;
+    if (groups === undefined) throw new Error('no standard dose');
+    expect(totalsOnly(groups)).toEqual({ denominator: 100, event: 11, prevented: 0, caused: 0, free: 89 });
+    const harm = { denominator: 100 as const, event: 5, prevented: 0, caused: 1, free: 94 };
+    expect(totalsOnly(harm)).toEqual({ denominator: 100, event: 6, prevented: 0, caused: 0, free: 94 });
+  });
+
+  it('sets the people helped apart on the headline outcome, in the places the comparison’s events held', () => {
+    const slide = buildSlide(item, 'helped');
+    const [comparison, option] = slide.panels;
+    expect(counts(option)).toEqual({ event: 11, prevented: 4, free: 85 });
+    // Grouped fill: the 4 helped sit right after the 11 who have it anyway, where the comparison's 12th to 15th were.
+    const helpedRanks = option?.layout.people.filter((person) => person.group === 'prevented').map((person) => person.rank);
+    expect(helpedRanks).toEqual([11, 12, 13, 14]);
+    expect(comparison?.layout.people.filter((person) => person.rank >= 11 && person.rank < 15).every((person) => person.group === 'event')).toBe(true);
+    expect(slide.callouts[0]).toEqual({ look: 'prevented', value: '4 in 100', text: 'avoid a heart attack or stroke because of the standard dose' });
+  });
+
+  it('shows who is harmed on a harm outcome, the first the option adds people to', () => {
+    const slide = buildSlide(item, 'harmed');
+    expect(item.harmId).toBe('muscle');
+    expect(counts(slide.panels[1])).toEqual({ event: 5, caused: 1, free: 94 });
+    expect(slide.callouts[0]).toEqual({ look: 'caused', value: '1 in 100', text: 'gets muscle pain bad enough to stop the tablet because of the standard dose' });
+  });
+
+  it('outlines the people whose group depends on the range, and gives the range and the certainty in words', () => {
+    const slide = buildSlide(item, 'uncertainty');
+    const range = standard?.perPeople.interventionRange;
+    expect(range).toEqual({ lower: 10, upper: 12 });
+    // Between 10 and 12 have it with the option (estimate 11): the people ranked 10 and 11 may or may not.
+    expect(looksCount(slide.panels[0], 'uncertain')).toBe(2);
+    expect(slide.panels[0]?.layout.people.filter((person, index) => slide.panels[0]?.looks[index] === 'uncertain').map((person) => person.rank)).toEqual([10, 11]);
+    expect(slide.lines.map((line) => line.text)).toEqual([
+      'With the standard dose, the number who avoid a heart attack or stroke could be anywhere between 3 and 5 in 100.',
+      'Outlined: people who may or may not have it, depending on where in the range the truth lies.',
+      'Certainty of the evidence: high',
+      'The standard dose reduces the chance of a heart attack or stroke.',
+    ]);
+  });
+
+  it('gives the patient’s sentences exactly as the handout words them', () => {
+    const slide = buildSlide(item, 'patient-words');
+    const handout = new Set(handoutSentences(result, { showNnt: false }).map((sentence) => sentence.text));
+    const spoken = slide.lines.filter((line) => line.tone === 'body').flatMap((line) => line.text.split(/(?<=\.) (?=[A-Z])/));
+    expect(spoken.length).toBeGreaterThan(5);
+    for (const sentence of spoken) expect(handout.has(sentence)).toBe(true);
+    expect(slide.lines.filter((line) => line.tone === 'subheading').map((line) => line.text)).toEqual([
+      'About a heart attack or stroke',
+      'About muscle pain bad enough to stop the tablet',
+    ]);
+  });
+
+  it('never shows a number the core did not compute: every array holds the whole denominator', () => {
+    for (const kind of item.steps) {
+      for (const panel of buildSlide(item, kind).panels) {
+        const total = panel.chips.reduce((sum, chip) => sum + chip.count, 0);
+        expect(total).toBe(panel.layout.denominator);
+        expect(panel.looks).toHaveLength(panel.layout.denominator);
+      }
+    }
+  });
+});
+
+describe('story slides of other topics', () => {
+  it('says so on the harm step when a topic lists no harm', () => {
+    const item = itemOf(pairTopic({ baseline: '20%', effect: { measure: 'rr', estimate: 0.8 } }));
+    expect(item.harmId).toBeNull();
+    const slide = buildSlide(item, 'harmed');
+    expect(slide.panels).toEqual([]);
+    expect(slide.lines.map((line) => line.text)).toEqual([
+      'This topic lists no harms.',
+      'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
+    ]);
+  });
+
+  it('says when the option helps no one at these numbers', () => {
+    const item = itemOf(pairTopic({ baseline: '20%', effect: { measure: 'rr', estimate: 1 } }));
+    const slide = buildSlide(item, 'helped');
+    expect(slide.callouts).toEqual([]);
+    expect(slide.lines[0]?.text).toBe('At these numbers, none of 100 avoid a stroke because of the treatment.');
+  });
+
+  it('counts per 1000 for the screening topic, as the core chose', () => {
+    const item = itemOf(demoTopic(SCREENING));
+    const slide = buildSlide(item, 'helped');
+    expect(counts(slide.panels[1])).toEqual({ event: 24, prevented: 6, free: 970 });
+    expect(slide.callouts[0]?.text).toBe('avoid dying of bowel cancer because of screening');
+    expect(buildSlide(item, 'baseline').callouts[0]?.text).toBe('end up dying of bowel cancer over 15 years');
+  });
+
+  it('presents the option a set names, on every step', () => {
+    const item = itemOf(demoTopic(HEART), { option: 'higher' });
+    const slide = buildSlide(item, 'helped');
+    expect(slide.panels[1]?.title).toBe('The higher dose');
+    expect(counts(slide.panels[1])).toEqual({ event: 10, prevented: 5, free: 85 });
+    const evaluation = evaluateTopic(demoTopic(HEART));
+    if (!evaluation.ok) throw new Error('heart topic did not compute');
+    expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({ denominator: 100, event: 10, prevented: 5, caused: 0, free: 85 });
+  });
+});

@@ -1,0 +1,129 @@
+import { describe, expect, it } from 'vitest';
+import { readTeachingSet } from '../../../src/ui/teaching/teaching-set-file.ts';
+import { resolveTeachingSet } from '../../../src/ui/teaching/resolve-teaching-set.ts';
+import { teachingKeyAction } from '../../../src/ui/teaching/teaching-keys.ts';
+import type { KeyPress } from '../../../src/ui/teaching/teaching-keys.ts';
+import { TeachingSession, slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
+import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
+import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+
+// The step order is the teaching sequence of this view: the result told with people first
+// (baseline, with the option, helped, harmed, uncertainty, patient words), then one result
+// framed four ways, then the format demonstrations (Galesic 2009; Ancker 2011;
+// Zikmund-Fisher 2008), as listed in src/ui/teaching/teaching-steps.ts.
+
+function heartSession(): TeachingSession {
+  return new TeachingSession('Heart', [itemOf(demoTopic(HEART))]);
+}
+
+function press(session: TeachingSession, key: KeyPress): boolean {
+  const action = teachingKeyAction(key);
+  return action === null ? false : session.act(action);
+}
+
+describe('TeachingSession', () => {
+  it('starts on the first slide, the decision, and shows every step in the teaching order', () => {
+    const session = heartSession();
+    expect(session.index).toBe(0);
+    expect(session.slide?.kind).toBe('title');
+    const kinds: string[] = [];
+    do kinds.push(session.slide?.kind ?? '');
+    while (session.next());
+    expect(kinds).toEqual([
+      'title',
+      'baseline',
+      'with-option',
+      'helped',
+      'harmed',
+      'uncertainty',
+      'patient-words',
+      'framing',
+      'denominator',
+      'arrangement',
+      'incremental',
+    ]);
+    expect(session.total).toBe(DEFAULT_STEPS.length);
+  });
+
+  it('stays on the last slide going forward and on the first going back', () => {
+    const session = heartSession();
+    expect(session.previous()).toBe(false);
+    expect(session.atStart).toBe(true);
+    expect(session.last()).toBe(true);
+    expect(session.atEnd).toBe(true);
+    expect(session.next()).toBe(false);
+    expect(session.slide?.kind).toBe('incremental');
+    expect(session.first()).toBe(true);
+    expect(session.slide?.kind).toBe('title');
+  });
+
+  it('steps with the keys of a keyboard and of a presentation clicker', () => {
+    const session = heartSession();
+    expect(press(session, { key: 'PageDown' })).toBe(true);
+    expect(press(session, { key: 'ArrowRight' })).toBe(true);
+    expect(press(session, { key: ' ' })).toBe(true);
+    expect(press(session, { key: 'ArrowDown' })).toBe(true);
+    expect(session.slide?.kind).toBe('harmed');
+    expect(press(session, { key: 'PageUp' })).toBe(true);
+    expect(press(session, { key: 'ArrowUp' })).toBe(true);
+    expect(press(session, { key: 'ArrowLeft' })).toBe(true);
+    expect(session.slide?.kind).toBe('baseline');
+    expect(press(session, { key: 'End' })).toBe(true);
+    expect(session.slide?.kind).toBe('incremental');
+    expect(press(session, { key: 'Home' })).toBe(true);
+    expect(session.slide?.kind).toBe('title');
+    // Leaving is the view's business: the place does not change.
+    expect(press(session, { key: 'Escape' })).toBe(false);
+    expect(session.index).toBe(0);
+  });
+
+  it('runs the topics of a set in sequence, each with its own steps', async () => {
+    const set = readTeachingSet(
+      'set.json',
+      JSON.stringify({
+        format: 'chancewise-teaching-set',
+        version: 1,
+        title: 'Two topics',
+        items: [
+          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(HEART) })), steps: ['title', 'helped'] },
+          { topic: { format: 'chancewise-topic', version: 2, topic: demoTopic(SCREENING) }, steps: ['title', 'harmed', 'framing'] },
+        ],
+      }),
+    );
+    if (!set.ok) throw new Error(set.message);
+    const resolved = await resolveTeachingSet('set.json', set.set, null);
+    if (!resolved.ok) throw new Error(resolved.message);
+    const session = heartSession();
+    session.next();
+    session.load(resolved.title, resolved.items, 'set.json');
+    expect(session.index).toBe(0);
+    expect(session.title).toBe('Two topics');
+    expect(session.fileName).toBe('set.json');
+    expect(slidePlaces(session.items).map((place) => [place.item, place.kind])).toEqual([
+      [0, 'title'],
+      [0, 'helped'],
+      [1, 'title'],
+      [1, 'harmed'],
+      [1, 'framing'],
+    ]);
+    session.goTo(2);
+    expect(session.item?.topic.title).toBe(demoTopic(SCREENING).title);
+    expect(session.slide?.heading).toBe(demoTopic(SCREENING).title);
+  });
+
+  it('writes the presentation as a set that reads back to the same topics and steps', () => {
+    const session = new TeachingSession('Saved', [itemOf(demoTopic(HEART), { steps: ['helped', 'framing'], option: 'higher' })]);
+    const reading = readTeachingSet('saved.json', session.setFileText());
+    if (!reading.ok) throw new Error(reading.message);
+    expect(reading.set.title).toBe('Saved');
+    expect(reading.set.items[0]).toMatchObject({ option: 'higher', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(HEART) } });
+  });
+
+  it('presents a copy: stepping through never changes the topic it was given', () => {
+    const topic = demoTopic(HEART);
+    const before = JSON.stringify(topic);
+    const session = new TeachingSession('Heart', [itemOf(topic)]);
+    while (session.next()) void session.slide;
+    expect(JSON.stringify(topic)).toBe(before);
+  });
+});
