@@ -113,21 +113,17 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     precision: 2,
     floatPrecision: 2,
   });
-  registerFonts(doc, fonts, codePointsOf(content));
+  // Every character the page sets; the chart model is left out, its pictures have no text (and many people).
+  registerFonts(doc, fonts, codePointsOf({ ...content, chart: { ...content.chart, model: null } }));
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
-  let layout: PageLayout | null = null;
-  let settings: FitSettings | null = null;
-  for (const candidate of FIT_LADDER) {
-    layout = layoutPage(content, candidate, box, palette, measure);
-    settings = candidate;
-    if (layout.fits) break;
-  }
-  if (layout === null || settings === null || !layout.fits) {
-    const part = layout?.tooLong ?? 'outcomes';
-    const over = Math.max(0, (layout?.needed ?? 0) - box.height);
+  const fitted = firstFit((settings) => layoutPage(content, settings, box, palette, measure));
+  if (!fitted.layout.fits) {
+    const part = fitted.layout.tooLong ?? 'outcomes';
+    const over = Math.max(0, fitted.layout.needed - box.height);
     return { ok: false, reason: 'does-not-fit', part, overMillimetres: over, message: messages.doesNotFit(part, over) };
   }
+  const { layout, settings } = fitted;
 
   drawPage(doc, layout.items, palette);
   const clinician = (options.clinician ?? '').trim() || topic.clinician.trim();
@@ -152,6 +148,33 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     wordingSentences: content.wordingSentences,
     prose,
   };
+}
+
+/**
+ * The most generous settings whose layout fits, by halving the ladder (each step
+ * only shrinks, so a later step never needs more room); the tightest layout when
+ * none fits.
+ */
+function firstFit(layoutWith: (settings: FitSettings) => PageLayout): { layout: PageLayout; settings: FitSettings } {
+  const at = (index: number) => {
+    const settings = FIT_LADDER[index] as FitSettings;
+    return { layout: layoutWith(settings), settings };
+  };
+  let best = at(FIT_LADDER.length - 1);
+  if (!best.layout.fits) return best;
+  let low = 0;
+  let high = FIT_LADDER.length - 1;
+  while (low < high) {
+    const middle = Math.floor((low + high) / 2);
+    const tried = at(middle);
+    if (tried.layout.fits) {
+      best = tried;
+      high = middle;
+    } else {
+      low = middle + 1;
+    }
+  }
+  return best;
 }
 
 /** A real calendar date, YYYY-MM-DD, in the years a PDF date from jsPDF may carry. */

@@ -49,7 +49,7 @@ export function headerBlock(content: HandoutContent, width: number, styles: Hand
   const title = titleBlock(content, width, styles, measure, gap);
   const audience = textItem(textBlock(content.audience.join(' '), width, styles.body, measure));
   const body = stack([title, audience], gap);
-  const ruleGap = gap;
+  const ruleGap = gap * 0.8;
   return {
     items: [
       ...body.items,

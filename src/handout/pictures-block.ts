@@ -181,7 +181,7 @@ export function picturesBlock(
     return { ok: true, block: { items, height: top } };
   }
 
-  top += lineHeight(styles.list) * 0.6;
+  top += lineHeight(styles.list) * 0.45;
   items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.strongRule, thickness: 0.4 });
 
   const cellWidth = slot - 2 * PAD_X;

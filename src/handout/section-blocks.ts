@@ -12,7 +12,7 @@ const BULLET = '•';
 /** A section heading with the space under it. */
 export function headingBlock(text: string, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
   const block = textBlock(text, width, styles.heading, measure);
-  return { items: textItem(block).items, height: block.height + lineHeight(styles.heading) * 0.2 };
+  return { items: textItem(block).items, height: block.height + lineHeight(styles.heading) * 0.15 };
 }
 
 /** Paragraphs, each a run of sentences, a little apart. */
