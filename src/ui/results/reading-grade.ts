@@ -3,7 +3,8 @@
  * scored with the Flesch–Kincaid grade level.
  */
 import type { TopicResult } from '../../core/topic/topic-result.ts';
-import { READING_GRADE_LIMIT, readability } from '../../core/wording/readability.ts';
+import { READING_GRADE_LIMIT, fleschKincaidGrade, readability } from '../../core/wording/readability.ts';
+import type { TextCounts } from '../../core/wording/readability.ts';
 import { handoutSentences } from '../../core/wording/topic-wording.ts';
 
 export interface ReadingGrade {
@@ -13,12 +14,33 @@ export interface ReadingGrade {
   readonly withinLimit: boolean;
 }
 
-/** The Flesch–Kincaid grade of the patient wording of `result`. */
+/** Counts of sentences already scored: typing changes a number or two, so most sentences repeat. */
+const counted = new Map<string, TextCounts>();
+
+function countsOf(sentence: string): TextCounts {
+  let found = counted.get(sentence);
+  if (found === undefined) {
+    const { sentences, words, syllables } = readability(sentence);
+    found = { sentences, words, syllables };
+    if (counted.size > 2000) counted.clear();
+    counted.set(sentence, found);
+  }
+  return found;
+}
+
+/**
+ * The Flesch–Kincaid grade of the patient wording of `result`: the counts of its sentences
+ * added up, which is the grade of the text they make together.
+ */
 export function patientReadingGrade(result: TopicResult): ReadingGrade {
-  const text = handoutSentences(result, { showNnt: false })
-    .map((sentence) => sentence.text)
-    .join(' ');
-  const { grade } = readability(text);
+  const total = handoutSentences(result, { showNnt: false })
+    .map((sentence) => countsOf(sentence.text))
+    .reduce((sum, counts) => ({
+      sentences: sum.sentences + counts.sentences,
+      words: sum.words + counts.words,
+      syllables: sum.syllables + counts.syllables,
+    }), { sentences: 0, words: 0, syllables: 0 });
+  const grade = fleschKincaidGrade(total);
   const rounded = grade === null ? null : Math.round(grade * 10) / 10;
   return { grade: rounded, limit: READING_GRADE_LIMIT, withinLimit: rounded !== null && rounded <= READING_GRADE_LIMIT };
 }
