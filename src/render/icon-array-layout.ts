@@ -127,13 +127,17 @@ export function iconArrayLayout(
   const people: PersonPlacement[] = [];
   for (let index = 0; index < denominator; index += 1) {
     const rank = ranks === null ? index : (ranks[index] as number);
-    people.push({ ...slotPosition(index, geometry), index, rank, group: sequence[rank] as PersonGroup });
+    people.push(placePerson(index, rank, sequence[rank] as PersonGroup, geometry));
   }
   return { denominator, arrangement, seed, groups, geometry, people };
 }
 
-/** Block, row, column and top-left corner of the glyph box for the person at `index`. */
-function slotPosition(index: number, geometry: IconArrayGeometry) {
+/**
+ * The person at `index`: block, row, column and top-left corner of the glyph box.
+ * Built as one object literal with a fixed key order (no spread), so all people share
+ * one shape and copying 2 × 1000 of them per drawing stays cheap.
+ */
+function placePerson(index: number, rank: number, group: PersonGroup, geometry: IconArrayGeometry): PersonPlacement {
   const { cellSize, iconSize, midGap, blockGutter, blockColumns, blockRows } = geometry;
   const block = Math.floor(index / 100);
   const within = index % 100;
@@ -146,7 +150,7 @@ function slotPosition(index: number, geometry: IconArrayGeometry) {
   const inset = (cellSize - iconSize) / 2;
   const x = blockColumn * (blockSide + blockGutter) + column * cellSize + (column >= 5 ? midGap : 0) + inset;
   const y = blockRowFromTop * (blockSide + blockGutter) + row * cellSize + (row >= 5 ? midGap : 0) + inset;
-  return { block, row, column, x, y };
+  return { block, row, column, x, y, index, rank, group };
 }
 
 /** The same layout at another size: every length multiplied by `factor`. */
@@ -164,6 +168,16 @@ export function scaleLayout(layout: IconArrayLayout, factor: number): IconArrayL
       width: geometry.width * factor,
       height: geometry.height * factor,
     },
-    people: layout.people.map((person) => ({ ...person, x: person.x * factor, y: person.y * factor })),
+    // Same key order as placePerson, so the copies keep the people's one shape.
+    people: layout.people.map((person) => ({
+      block: person.block,
+      row: person.row,
+      column: person.column,
+      x: person.x * factor,
+      y: person.y * factor,
+      index: person.index,
+      rank: person.rank,
+      group: person.group,
+    })),
   };
 }

@@ -3,6 +3,7 @@
  * rounded to a fixed number of decimals, every command after the first relative,
  * so one glyph path can be placed anywhere by changing only its first point.
  */
+import { roundedDecimal } from '../rounded-decimal.ts';
 import { arcSweep } from './arc-to-bezier.ts';
 import type { Glyph, PathContext } from './path-context.ts';
 
@@ -105,7 +106,8 @@ export function glyphPath(glyph: Glyph, size: number, digits = 2): GlyphPath {
 
 /** The SVG `d` of a glyph path whose box has its top-left corner at (x, y). */
 export function placeGlyphPath(path: GlyphPath, x: number, y: number): string {
-  const scale = 10 ** path.digits;
-  const absolute = (value: number) => String(Math.round(value * scale) / scale || 0);
-  return `M${absolute(x + path.startX)},${absolute(y + path.startY)}${path.tail}`;
+  // Called once per person: no closure here, which V8 would otherwise allocate on every call.
+  const left = x + path.startX;
+  const top = y + path.startY;
+  return `M${roundedDecimal(Number.isNaN(left) ? 0 : left, path.digits)},${roundedDecimal(Number.isNaN(top) ? 0 : top, path.digits)}${path.tail}`;
 }
