@@ -8,10 +8,10 @@
  * Timings are reported, never judged: the run fails only when something could not be measured.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { build } from 'vite';
-import { loadavg } from 'node:os';
 import { timeAppLoad, timeInputToCharts } from './browser/app-timing.mjs';
 import { timeCharts } from './browser/chart-timing.mjs';
 import { initialJavaScript } from './browser/initial-javascript.mjs';
@@ -30,6 +30,7 @@ function option(name, fallback) {
 }
 
 const only = option('only', 'all');
+if (!['all', 'charts', 'app'].includes(only)) throw new Error(`--only takes charts or app (got ${only})`);
 const settings = {
   loads: Number(option('loads', 5)),
   repetitions: Number(option('repetitions', 40)),
@@ -81,6 +82,7 @@ try {
         { label: 'app: load to demo interactive (frame rendered)', target: TARGETS.appLoad, ...load.rendered },
         { label: 'app: input to charts updated, 2 × 1000 (+ layout)', target: TARGETS.inputToCharts, ...input.total },
         { label: '  of which until the chart DOM changed', target: null, ...input.dom },
+        { label: '  main-thread CPU time of the same spans', target: null, ...input.cpu },
       );
       notes.push(
         `app: initial JavaScript ${javascript.files.map((file) => file.file).join(', ')}: ` +

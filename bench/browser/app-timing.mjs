@@ -15,10 +15,12 @@
  * chart's text alternative (updated in the same task as its people) shows the new counts,
  * seen by a MutationObserver, plus a forced layout (`getBoundingClientRect()` and
  * `offsetHeight`), as in the chart benchmark. Baselines of 15%, 20% and 12% take turns.
+ * The main thread's CPU time over each sample comes from a trace of marks around it.
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { summarise } from './statistics.mjs';
+import { MARK_CATEGORIES, markedCpuSpans } from './trace-cpu.mjs';
 
 /** Installed before the page's own scripts: notes when the page first becomes interactive. */
 function watchInteractive() {
@@ -115,6 +117,7 @@ export async function timeInputToCharts(browser, url, settings) {
   });
   const field = await page.getByLabel('Baseline risk', { exact: true }).first().elementHandle();
   if (field === null) throw new Error('the app has no baseline risk field');
+  await browser.startTracing(page, { categories: MARK_CATEGORIES });
   const samples = await page.evaluate(
     async ({ input, repetitions }) => {
       const values = ['15%', '20%', '12%'];
@@ -154,23 +157,29 @@ export async function timeInputToCharts(browser, url, settings) {
           }, 10_000);
           observer.observe(results, { attributes: true, childList: true, subtree: true, characterData: true });
         });
+        performance.mark('app-input:start');
         const start = performance.now();
         type(value);
         const seen = await updated;
         svg.getBoundingClientRect();
         void results.offsetHeight;
         const end = performance.now();
+        performance.mark('app-input:end');
+        performance.clearMarks('app-input:start');
+        performance.clearMarks('app-input:end');
         collected.push({ total: end - start, dom: seen - start, people: svg.querySelectorAll('[data-outcome]').length });
       }
       return collected;
     },
     { input: field, repetitions: settings.repetitions },
   );
+  const cpu = markedCpuSpans(await browser.stopTracing(), 'app-input');
   await context.close();
   if (errors.length > 0) throw new Error(`the app reported errors: ${errors.join('; ')}`);
   if (samples.some((sample) => sample.people !== 2000)) throw new Error('a timed update did not show 2000 people');
   return {
     total: summarise(samples.map((sample) => sample.total)),
     dom: summarise(samples.map((sample) => sample.dom)),
+    cpu: summarise(cpu),
   };
 }
