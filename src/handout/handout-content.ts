@@ -226,8 +226,8 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     questions: { heading: messages.questionsHeading, items: questions.length > 0 ? questions : messages.defaultQuestions },
     caution: { heading: messages.cautionHeading, text: messages.caution(sheet) },
     footer: {
-      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join('  ·  '),
-      right: [messages.appVersion(options.appVersion), messages.pageOfPages].join('  ·  '),
+      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join(messages.footerSeparator),
+      right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
     wordingSentences: [
       ...population.map((sentence) => sentence.text),

@@ -52,6 +52,8 @@ export interface HandoutMessages {
   readonly printed: (date: string) => string;
   readonly appVersion: (version: string) => string;
   readonly pageOfPages: string;
+  /** Between the parts of a footer line. */
+  readonly footerSeparator: string;
   /** A date written YYYY-MM-DD in words; any other text is returned as typed. */
   readonly formatDate: (text: string) => string;
   /** The one line telling the clinician what to shorten. */
@@ -157,6 +159,7 @@ export const handoutMessagesEn: HandoutMessages = {
   printed: (date) => `Printed on ${date}`,
   appVersion: (version) => `Chancewise ${version}`,
   pageOfPages: 'Page 1 of 1',
+  footerSeparator: '  ·  ',
   formatDate: (text) => {
     const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text.trim());
     const month = found === null ? undefined : MONTHS[Number(found[2]) - 1];
