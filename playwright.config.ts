@@ -2,7 +2,10 @@ import { defineConfig } from '@playwright/test';
 
 /** Debian's Chromium; Playwright's own browser downloads are never used. */
 const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const port = Number(process.env.CHANCEWISE_E2E_PORT ?? 4317);
+// One port per run, shared with the worker processes through the environment they inherit,
+// so two runs on one machine never share (and stop) each other's server.
+process.env.CHANCEWISE_E2E_PORT ??= String(4300 + Math.floor(Math.random() * 600));
+const port = Number(process.env.CHANCEWISE_E2E_PORT);
 
 export default defineConfig({
   testDir: 'e2e',
@@ -32,7 +35,7 @@ export default defineConfig({
   webServer: {
     command: `npm run web -- --port ${port}`,
     url: `http://127.0.0.1:${port}/`,
-    reuseExistingServer: !process.env.CI,
+    reuseExistingServer: false,
     timeout: 120_000,
     stdout: 'ignore',
     stderr: 'pipe',

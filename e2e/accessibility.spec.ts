@@ -23,6 +23,8 @@ test.describe('accessibility and privacy', () => {
   });
 
   test('has no serious or critical axe findings: on start, with problems, and with the start panel and save dialog open', async ({ page }) => {
+    // Four full scans of a page with about 3000 chart elements: slow on a loaded machine.
+    test.setTimeout(240_000);
     await openApp(page);
     expect(await seriousViolations(page)).toEqual([]);
     await page.getByLabel('Baseline risk', { exact: true }).first().fill('150%');
