@@ -78,6 +78,9 @@ try {
       const pdfFetched = javascript.pdfChunks.filter((chunk) => load.requested.some((path) => path.endsWith(`/${chunk}`)));
       results.app = { load, input, javascript: { ...javascript, pdfFetchedOnLoad: pdfFetched } };
       rows.push(
+        { label: 'app: load: page received', target: null, ...load.responseEnd },
+        { label: 'app: load: script received', target: null, ...load.scriptFetched },
+        { label: 'app: load: script run (DOMContentLoaded end)', target: null, ...load.contentLoaded },
         { label: 'app: load to demo interactive (DOM ready)', target: null, ...load.interactive },
         { label: 'app: load to demo interactive (frame rendered)', target: TARGETS.appLoad, ...load.rendered },
         { label: 'app: input to charts updated, 2 × 1000 (+ layout)', target: TARGETS.inputToCharts, ...input.total },

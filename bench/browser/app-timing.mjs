@@ -8,6 +8,8 @@
  * `performance.now()`; "rendered" is the end of the first frame after it (a task queued
  * from the next `requestAnimationFrame`). Each run is a fresh browser context (empty
  * cache and storage), and every request is recorded, to show no PDF code is fetched.
+ * Along the way: the page's response end, the first script's response end, and the end
+ * of DOMContentLoaded (after the module script, which mounts the app, has run).
  *
  * Input to charts: a topic of one outcome, the comparison and one option (taken from the
  * first example), shown per 1000 people: two arrays of 1000. The time runs from just
@@ -48,6 +50,9 @@ function watchInteractive() {
 export async function timeAppLoad(browser, url, runs) {
   const interactive = [];
   const rendered = [];
+  const responseEnd = [];
+  const scriptFetched = [];
+  const contentLoaded = [];
   const requested = new Set();
   const errors = [];
   for (let run = 0; run < runs; run += 1) {
@@ -67,10 +72,21 @@ export async function timeAppLoad(browser, url, runs) {
       .then((handle) => handle.jsonValue());
     interactive.push(times.interactive);
     rendered.push(times.rendered);
+    const navigation = await page.evaluate(() => {
+      const entry = /** @type {PerformanceNavigationTiming | undefined} */ (performance.getEntriesByType('navigation')[0]);
+      const script = performance.getEntriesByType('resource').find((resource) => resource.name.endsWith('.js'));
+      return { responseEnd: entry?.responseEnd ?? null, scriptEnd: script?.responseEnd ?? null, contentLoaded: entry?.domContentLoadedEventEnd ?? null };
+    });
+    if (navigation.responseEnd !== null) responseEnd.push(navigation.responseEnd);
+    if (navigation.scriptEnd !== null) scriptFetched.push(navigation.scriptEnd);
+    if (navigation.contentLoaded !== null) contentLoaded.push(navigation.contentLoaded);
     await context.close();
   }
   if (errors.length > 0) throw new Error(`the app reported errors while loading: ${errors.join('; ')}`);
   return {
+    responseEnd: summarise(responseEnd),
+    scriptFetched: summarise(scriptFetched),
+    contentLoaded: summarise(contentLoaded),
     interactive: summarise(interactive),
     rendered: summarise(rendered),
     requested: [...requested].sort(),
