@@ -24,7 +24,7 @@ test.describe('files', () => {
     await page.getByLabel('Decision', { exact: true }).fill('Taking the tablet, as discussed');
     await page.getByLabel('Baseline risk', { exact: true }).first().fill('1 in 5');
     const saved = await saveTopic(page);
-    expect(saved.name).toBe('taking-the-tablet-as-discussed.chancewise.json');
+    expect(saved.name).toBe('taking-the-tablet-as-discussed.cwtopic');
     expect(JSON.parse(saved.text).topic.outcomes[0].baseline.risk).toBe('1 in 5');
     await expect(page.getByText('Unsaved changes')).toHaveCount(0);
     await expect(page.locator('.document .file')).toHaveText(saved.name);

@@ -3,7 +3,16 @@
  * sentence. Drawing code never holds prose; a second language is a sibling
  * module with the same shape ({@link ChartMessages}).
  */
+import { startsWithVerb } from '../../core/messages/en/wording.ts';
 import { formatDecimal } from '../../core/messages/format-number.ts';
+
+/** "have a stroke", but "end up dying of bowel cancer" for outcomes named with a verb in -ing. */
+const have = (outcome: string, count: number | null = null): string => {
+  if (startsWithVerb(outcome)) return count === null ? 'end up' : plural(count, 'ends up', 'end up');
+  return count === null ? 'have' : plural(count, 'has', 'have');
+};
+const get = (outcome: string, count: number): string =>
+  startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get');
 
 /** Which arm an array shows: the comparison (no option) or an option. */
 export type ArmRole = 'comparison' | 'option';
@@ -93,22 +102,22 @@ export const chartMessagesEn: ChartMessages = {
   defaultOutcome: 'the outcome',
   labels: {
     event: ({ count, outcome, role }: LabelValues) =>
-      `${count} ${plural(count, 'has', 'have')} ${outcome}${role === 'option' ? ' anyway' : ''}`,
+      `${count} ${have(outcome, count)} ${outcome}${role === 'option' ? ' anyway' : ''}`,
     prevented: ({ count, outcome, option }: LabelValues) =>
       `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
     caused: ({ count, outcome, option }: LabelValues) =>
-      `${count} ${plural(count, 'gets', 'get')} ${outcome} because of ${option}`,
-    free: ({ count, outcome }: LabelValues) => `${count} ${plural(count, 'does', 'do')} not have ${outcome}`,
+      `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
+    free: ({ count, outcome }: LabelValues) => `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`,
   },
   /** When an option changes nothing at these numbers. */
   noDifference: (outcome: string, option: string) =>
-    `The same number have ${outcome} with and without ${option}.`,
+    `The same number ${have(outcome)} ${outcome} with and without ${option}.`,
   /** The option's interval as people: "With option A, anywhere between 13 and 18 of these 100 could have a stroke." */
   range: ({ lower, upper, denominator, outcome, option }: RangeValues) =>
-    `With ${option}, anywhere between ${lower} and ${upper} of these ${denominator} could have ${outcome}.`,
+    `With ${option}, anywhere between ${lower} and ${upper} of these ${denominator} could ${have(outcome)} ${outcome}.`,
   /** Legend line for the outlined people drawn when the range is shown. */
   rangeOutline: (outcome: string, option: string) =>
-    `Dotted outline: people who may or may not have ${outcome} with ${option}, depending on where in that range the truth lies.`,
+    `Dotted outline: people who may or may not ${have(outcome)} ${outcome} with ${option}, depending on where in that range the truth lies.`,
   /** One array in a sentence: title, then the labels joined. */
   summary: (title: string, labels: readonly string[]) => `${title}: ${joinList(labels)}.`,
 };

@@ -9,7 +9,7 @@ import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { topicFromDraft } from '../draft/topic-from-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 
-export const TOPIC_FILE_SUFFIX = '.chancewise.json';
+export const TOPIC_FILE_SUFFIX = '.cwtopic';
 
 export type OpenedTopic =
   | { readonly ok: true; readonly draft: TopicDraft; readonly fileName: string; readonly migratedFrom: number | null }
@@ -38,10 +38,10 @@ export function topicFileText(draft: TopicDraft, includePatient: boolean): Saved
   return { ok: true, text: writeTopicFile(reading.topic, { includePatient }) };
 }
 
-/** A file name for a draft: the file it came from, or its decision in plain letters, ending in .chancewise.json. */
+/** A file name for a draft: the file it came from, or its decision in plain letters, ending in .cwtopic. */
 export function suggestedFileName(draft: TopicDraft, currentName: string | null): string {
   if (currentName !== null && currentName.endsWith(TOPIC_FILE_SUFFIX)) return currentName;
-  if (currentName !== null && currentName.endsWith('.json')) return currentName.replace(/\.json$/, TOPIC_FILE_SUFFIX);
+  if (currentName !== null && currentName.endsWith('.json')) return currentName.replace(/(\.chancewise)?\.json$/, TOPIC_FILE_SUFFIX);
   const words = draft.title
     .toLowerCase()
     .replace(/\(illustrative example\)/g, '')

@@ -43,7 +43,7 @@ export function download(suggestedName: string, contents: string | Uint8Array, t
   return suggestedName;
 }
 
-const TOPIC_FILES = '.json,application/json';
+const TOPIC_FILES = '.cwtopic,.json,application/json';
 
 /** The browser platform. */
 export function browserPlatform(): Platform {

@@ -46,9 +46,10 @@ describe('topic files', () => {
   });
 
   test('names a new file after the decision, and keeps the name of an opened file', () => {
-    expect(suggestedFileName(demo, null)).toBe('taking-a-daily-tablet-to-lower-the-chance.chancewise.json');
-    expect(suggestedFileName({ ...demo, title: '  ' }, null)).toBe('topic.chancewise.json');
-    expect(suggestedFileName(demo, 'mine.chancewise.json')).toBe('mine.chancewise.json');
-    expect(suggestedFileName(demo, 'old.json')).toBe('old.chancewise.json');
+    expect(suggestedFileName(demo, null)).toBe('taking-a-daily-tablet-to-lower-the-chance.cwtopic');
+    expect(suggestedFileName({ ...demo, title: '  ' }, null)).toBe('topic.cwtopic');
+    expect(suggestedFileName(demo, 'mine.cwtopic')).toBe('mine.cwtopic');
+    expect(suggestedFileName(demo, 'old.json')).toBe('old.cwtopic');
+    expect(suggestedFileName(demo, 'older.chancewise.json')).toBe('older.cwtopic');
   });
 });

@@ -23,7 +23,8 @@ const VERBS_IN_ING = new Set([
   'going', 'having', 'leaving', 'living', 'losing', 'needing', 'returning', 'spending', 'staying',
   'starting', 'stopping', 'taking', 'using',
 ]);
-const startsWithVerb = (outcome: string): boolean =>
+/** True when an outcome name starts with a verb in -ing ("dying of bowel cancer"). */
+export const startsWithVerb = (outcome: string): boolean =>
   VERBS_IN_ING.has((outcome.trim().split(/\s+/)[0] ?? '').toLowerCase());
 /** "have" / "get" before a noun phrase, "end up" before a verb in -ing. */
 const haveVerb = (outcome: string): string => (startsWithVerb(outcome) ? 'end up' : 'have');
