@@ -280,10 +280,21 @@ test.describe('the teaching view', () => {
     await expect(slide(page)).toContainText('avoid dying of bowel cancer because of screening');
     await page.keyboard.press('PageDown');
     await expect(slide(page)).toContainText('get a camera test after a false alarm because of screening');
-    const found = await measure(page);
-    expect(found.overflow).toEqual([]);
-    expect(found.lowContrast).toEqual([]);
-    await page.screenshot({ path: `${SCREENS}/teaching-set-1280x720-harmed-1000.png` });
+    await page.screenshot({ path: `${SCREENS}/teaching-set-1280x720-16-harmed-1000.png` });
+    await page.keyboard.press('PageDown');
+    await expect(slide(page)).toContainText('Treat 170 to prevent 1');
+    await page.screenshot({ path: `${SCREENS}/teaching-set-1280x720-17-framing-1000.png` });
+    // Every slide of the set, both topics, inside the screen, legible and in contrast.
+    await page.keyboard.press('Home');
+    for (let index = 0; index < 18; index += 1) {
+      const found = await measure(page);
+      const where = `slide ${index + 1} (${(await slide(page).getAttribute('data-step')) ?? ''})`;
+      expect(found.overflow, where).toEqual([]);
+      expect(found.lowContrast, where).toEqual([]);
+      expect(found.smallestText, where).toBeGreaterThanOrEqual(28 - 0.01);
+      if (found.iconCount > 0) expect(found.smallestIcon, where).toBeGreaterThanOrEqual(24);
+      await page.keyboard.press('PageDown');
+    }
     await page.keyboard.press('End');
     await expect(slide(page)).toHaveAttribute('data-step', 'denominator');
     await expect(view(page).locator('.progress')).toHaveText('18 / 18 · Topic 2 of 2');

@@ -23,8 +23,8 @@ export function slideFileName(title: string, number: number, kind: StepKind, ext
 }
 
 /** The slide as an SVG file's text. */
-export function slideSvgFile(slide: Slide, document: Document, footer: string): string {
-  return slideSvgText(slide, document, footer);
+export function slideSvgFile(slide: Slide, document: Document, footer: string, illustrative: string): string {
+  return slideSvgText(slide, document, footer, illustrative);
 }
 
 function loadImage(url: string): Promise<HTMLImageElement> {
@@ -37,8 +37,8 @@ function loadImage(url: string): Promise<HTMLImageElement> {
 }
 
 /** The slide as PNG bytes, 1920 × 1080 pixels. */
-export async function slidePngFile(slide: Slide, document: Document, footer: string): Promise<Uint8Array> {
-  const url = URL.createObjectURL(new Blob([slideSvgText(slide, document, footer)], { type: 'image/svg+xml' }));
+export async function slidePngFile(slide: Slide, document: Document, footer: string, illustrative: string): Promise<Uint8Array> {
+  const url = URL.createObjectURL(new Blob([slideSvgText(slide, document, footer, illustrative)], { type: 'image/svg+xml' }));
   try {
     const image = await loadImage(url);
     const canvas = document.createElement('canvas');

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
-import { SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
+import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
 import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
 import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
@@ -18,7 +18,7 @@ describe('a slide as an SVG file', () => {
     const item = itemOf(demoTopic(name));
     for (const kind of DEFAULT_STEPS) {
       const slide = buildSlide(item, kind);
-      const text = slideSvgText(slide, document, 'Slide 1 of 11');
+      const text = slideSvgText(slide, document, 'Slide 1 of 11', 'Illustrative');
       expect(text.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg')).toBe(true);
       const doc = parsed(text);
       expect(doc.querySelector('parsererror')).toBeNull();
@@ -29,12 +29,15 @@ describe('a slide as an SVG file', () => {
       expect(doc.querySelectorAll('path.person')).toHaveLength(people);
       const words = doc.documentElement.textContent ?? '';
       expect(words).toContain(slide.heading.split(' ')[0] ?? '');
+      // Everything of the slide stays above the footer rule.
+      expect(Number(root.getAttribute('data-content-bottom')), `${name} ${kind}`).toBeLessThanOrEqual(FOOTER_TOP);
+      expect(words.includes('Illustrative')).toBe(slide.illustrative);
     }
   });
 
   it('keeps the framing cards, the evidence and its source in the file', () => {
     const slide = buildSlide(itemOf(demoTopic(HEART)), 'framing');
-    const words = (parsed(slideSvgText(slide, document, 'footer')).documentElement.textContent ?? '').replace(/\s+/g, ' ');
+    const words = (parsed(slideSvgText(slide, document, 'footer', 'Illustrative')).documentElement.textContent ?? '').replace(/\s+/g, ' ');
     for (const text of ['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1', 'Akl et al. 2011; Zipkin et al. 2014', 'footer']) {
       expect(words).toContain(text);
     }
@@ -42,7 +45,7 @@ describe('a slide as an SVG file', () => {
 
   it('keeps pattern ids unique within the file', () => {
     const slide = buildSlide(itemOf(demoTopic(HEART)), 'helped');
-    const ids = [...parsed(slideSvgText(slide, document, '')).querySelectorAll('[id]')].map((element) => element.id);
+    const ids = [...parsed(slideSvgText(slide, document, '', '')).querySelectorAll('[id]')].map((element) => element.id);
     expect(new Set(ids).size).toBe(ids.length);
   });
 
