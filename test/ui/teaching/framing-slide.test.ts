@@ -3,6 +3,7 @@ import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
 import { topicWording } from '../../../src/core/wording/topic-wording.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { framingNumbers } from '../../../src/ui/teaching/framing-slide.ts';
+import { shortDecimal } from '../../../src/ui/teaching/messages/en.ts';
 import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // NNT = 1/ARR rounded up, ARR = p0 − p1 (Cochrane Handbook 5.1, §12.5.4.1–12.5.4.3; Altman 1998,
@@ -83,5 +84,12 @@ describe('the framing step', () => {
     ]);
     expect(slide.cards.map((card) => card.value)).toEqual(['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1']);
     expect(slide.evidence?.source).toBe('Akl et al. 2011; Zipkin et al. 2014');
+  });
+});
+
+describe('the working shown on the cards', () => {
+  it('writes decimals to at most two places, trailing zeros dropped, without float noise', () => {
+    // 1.005 is stored as 1.00499999999999989…; a risk of 1.005 in 100 still reads 1.01 (common practice: decimal rounding).
+    expect([11.25, 3.75, 26.666666, 15, 1.005, 0.1 + 0.2, 169.5560560966].map(shortDecimal)).toEqual(['11.25', '3.75', '26.67', '15', '1.01', '0.3', '169.56']);
   });
 });

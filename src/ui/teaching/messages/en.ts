@@ -21,8 +21,12 @@ const years = (count: number): string => `${count} ${plural(count, 'year', 'year
 
 /** A decimal with at most two places and no trailing zeros: 11.25, 3.75, 26.67. */
 export function shortDecimal(value: number): string {
-  const fixed = (Math.round(value * 100) / 100).toFixed(2);
-  return fixed.replace(/0+$/, '').replace(/\.$/, '');
+  // Hundredths counted after trimming float noise (3.75 × 100 may be 374.99999999999994).
+  const hundredths = Math.round(Number((value * 100).toPrecision(12)));
+  const sign = hundredths < 0 ? '-' : '';
+  const whole = Math.floor(Math.abs(hundredths) / 100);
+  const rest = String(Math.abs(hundredths) % 100).padStart(2, '0').replace(/0+$/, '');
+  return `${sign}${whole}${rest === '' ? '' : `.${rest}`}`;
 }
 
 /** Outcome names starting with a verb in -ing ("dying of …") read "end up dying"; others "have a stroke". */
@@ -120,12 +124,8 @@ export const teachingMessagesEn = {
   },
 
   story: {
-    /** The total with the option when the change is not shown as its own group. */
-    totalWith: (count: number, denominator: number, outcome: string, option: string) =>
-      `${count} in ${denominator} ${plural(count, 'has', 'have')} ${outcome} with ${option}.`,
     totalWithout: (count: number, denominator: number, comparison: string) =>
       `Without it (${comparison}): ${count} in ${denominator}.`,
-    sameFigures: 'The same figures, in the same order, with and without the option.',
     noBenefit: 'This topic lists no benefit to show.',
     noHarm: 'This topic lists no harms.',
     noHarmPrompt: 'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
@@ -133,10 +133,8 @@ export const teachingMessagesEn = {
       `At these numbers, none of ${denominator} avoid ${outcome} because of ${option}.`,
     noOneHarmed: (denominator: number, outcome: string, option: string) =>
       `At these numbers, none of ${denominator} get ${outcome} because of ${option}.`,
-    harmChosen: (outcome: string) => `The harm shown: ${outcome}.`,
     certaintyLabel: 'Certainty of the evidence',
     certaintyNames: { high: 'high', moderate: 'moderate', low: 'low', 'very-low': 'very low' },
-    noRange: 'The research gives no range for this result.',
     patientTopics: (outcome: string) => `About ${outcome}`,
   },
 
