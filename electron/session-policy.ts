@@ -1,8 +1,15 @@
-import { isAllowedRequestUrl } from './url-policy.ts';
+import { isAllowedRequestUrl, isAppUrl } from './url-policy.ts';
 
 /** The part of Electron's `session` the policy sets. */
 export interface PolicySession {
-  setPermissionRequestHandler(handler: (contents: unknown, permission: string, callback: (granted: boolean) => void) => void): void;
+  setPermissionRequestHandler(
+    handler: (
+      contents: unknown,
+      permission: string,
+      callback: (granted: boolean) => void,
+      details?: { readonly requestingUrl?: string },
+    ) => void,
+  ): void;
   setPermissionCheckHandler(handler: () => boolean): void;
   setDevicePermissionHandler(handler: () => boolean): void;
   setSpellCheckerEnabled(enabled: boolean): void;
@@ -14,14 +21,15 @@ export interface PolicySession {
 
 /**
  * Apply the app's session rules: every permission request and check is denied (camera,
- * microphone, location, notifications, USB, HID, serial, clipboard reading, and all the rest);
+ * microphone, location, notifications, USB, HID, serial, clipboard reading, and all the rest),
+ * except full screen asked for by the app's own page (the teaching view presents full screen);
  * the spellchecker is off (it would download dictionaries); every request outside the
  * app's own files (http, https, ws, file...) is cancelled; a download is allowed only of a
  * blob or data address made by the app's own page.
  */
 export function applySessionPolicy(session: PolicySession): void {
-  session.setPermissionRequestHandler((_contents, _permission, callback) => {
-    callback(false);
+  session.setPermissionRequestHandler((_contents, permission, callback, details) => {
+    callback(permission === 'fullscreen' && isAppUrl(details?.requestingUrl));
   });
   session.setPermissionCheckHandler(() => false);
   session.setDevicePermissionHandler(() => false);

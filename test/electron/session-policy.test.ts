@@ -5,7 +5,12 @@ import type { PolicySession } from '../../electron/session-policy.ts';
 
 function fakeSession() {
   const captured: {
-    request?: (contents: unknown, permission: string, callback: (granted: boolean) => void) => void;
+    request?: (
+      contents: unknown,
+      permission: string,
+      callback: (granted: boolean) => void,
+      details?: { readonly requestingUrl?: string },
+    ) => void;
     check?: () => boolean;
     device?: () => boolean;
     beforeRequest?: (details: { url: string }, callback: (response: { cancel: boolean }) => void) => void;
@@ -48,6 +53,19 @@ describe('applySessionPolicy()', () => {
     }
     expect(captured.check?.()).toBe(false);
     expect(captured.device?.()).toBe(false);
+  });
+
+  it('grants full screen to the app\'s own page only, for the teaching view', () => {
+    const { session, captured } = fakeSession();
+    applySessionPolicy(session);
+    const granted = (permission: string, requestingUrl: string): boolean | undefined => {
+      let answer: boolean | undefined;
+      captured.request?.({}, permission, (value) => (answer = value), { requestingUrl });
+      return answer;
+    };
+    expect(granted('fullscreen', 'app://chancewise/index.html')).toBe(true);
+    expect(granted('fullscreen', 'https://example.org/')).toBe(false);
+    expect(granted('media', 'app://chancewise/index.html')).toBe(false);
   });
 
   it('turns the spellchecker off', () => {
