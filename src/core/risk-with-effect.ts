@@ -17,7 +17,9 @@ export function riskWithEffect(measure: EffectMeasure, value: number, baseline: 
     case 'rr':
       return baseline * value;
     case 'or':
-      return (value * baseline) / (1 - baseline + value * baseline);
+      // OR·p / (1 − p + OR·p), written as 1 / (1 + (1 − p) / (OR·p)) so that every step is
+      // monotone under rounding: a larger odds ratio never gives a smaller risk, even by one ulp.
+      return 1 / (1 + (1 - baseline) / (value * baseline));
     case 'hr':
       return -Math.expm1(value * Math.log1p(-baseline));
     case 'rrr':

@@ -1,5 +1,5 @@
 import fc from 'fast-check';
-import { describe, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { computeEffect } from '../../src/core/compute-effect.ts';
 import type { EffectComputation } from '../../src/core/compute-effect.ts';
 import { peopleGroups } from '../../src/core/people-groups.ts';
@@ -123,5 +123,14 @@ describe('properties of the risk engine', () => {
       }),
       RUNS,
     );
+  });
+});
+
+// A counterexample found by fast-check in CI (seed 398048290): with the textbook form
+// OR·p / (1 − p + OR·p), two odds ratios one ulp apart gave risks in the wrong order.
+describe('the odds-ratio path is monotone to the last bit', () => {
+  it('orders the risks of two nearly equal odds ratios', () => {
+    const risk = 0.29487524959859573;
+    expect(riskWithEffect('or', 19.999999999999947, risk)).toBeLessThanOrEqual(riskWithEffect('or', 19.99999999999996, risk));
   });
 });
