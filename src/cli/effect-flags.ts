@@ -1,4 +1,5 @@
 import type { EffectQuery } from '../core/compute-effect.ts';
+import { checkArm } from '../core/counts/index.ts';
 import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
@@ -107,12 +108,9 @@ function parseArm(input: string, whole: string): ArmCounts {
   if (match === null) fail('counts-unparsable', '--counts', { input: whole });
   const events = readNumber(match[1] ?? '', '--counts', 'counts-unparsable', { input: whole });
   const total = readNumber(match[2] ?? '', '--counts', 'counts-unparsable', { input: whole });
-  const arm = input.trim();
-  if (!Number.isSafeInteger(events) || !Number.isSafeInteger(total)) fail('counts-not-whole', '--counts', { input: arm });
-  if (events < 0 || total < 0) fail('counts-negative', '--counts', { input: arm });
-  if (total === 0) fail('counts-total-zero', '--counts', { input: arm });
-  if (events > total) fail('counts-events-above-total', '--counts', { input: arm });
-  return { events, total };
+  const arm = { events, total };
+  checkArm(arm, '--counts');
+  return arm;
 }
 
 function parseCounts(input: string): { intervention: ArmCounts; comparison: ArmCounts } {

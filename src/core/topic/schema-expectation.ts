@@ -1,3 +1,4 @@
+import type * as v from 'valibot';
 import { fileWords } from '../messages/en/file-words.ts';
 
 /**
@@ -168,4 +169,33 @@ export function describeReceived(value: unknown): string {
   if (typeof value === 'number') return fileWords.receivedNumber(value);
   if (typeof value === 'boolean') return fileWords.receivedBoolean(value);
   return fileWords.receivedOther(typeof value);
+}
+
+/** Where the first schema issue of a file lies, and what is expected and found there. */
+export interface LocatedIssue {
+  readonly issue: v.BaseIssue<unknown> | undefined;
+  /** The dotted path of the wrong field; empty for the whole file. */
+  readonly path: string;
+  /** What the schema expects there in plain words, or null when valibot gave nothing. */
+  readonly expected: string | null;
+  /** What the file holds there instead, in words. */
+  readonly received: string;
+}
+
+/**
+ * Locate the first issue valibot found. A list found where a group of fields belongs is
+ * reported at the list itself, not as the first field missing from it.
+ */
+export function locateIssue(root: SchemaNode, issues: readonly v.BaseIssue<unknown>[]): LocatedIssue {
+  const issue = issues[0];
+  let steps: PathStep[] = (issue?.path ?? []).map((item) => ({ key: item.key, input: item.input }));
+  let received: unknown = issue?.input;
+  const last = steps[steps.length - 1];
+  if (last !== undefined && Array.isArray(last.input) && typeof last.key === 'string') {
+    received = last.input;
+    steps = steps.slice(0, -1);
+  }
+  const path = steps.map((step) => String(step.key)).join('.');
+  const fromValibot = issue?.expected === undefined || issue.expected === null ? null : issue.expected.replace(/^"|"$/g, '');
+  return { issue, path, expected: expectedAt(root, steps) ?? fromValibot, received: describeReceived(received) };
 }

@@ -4,8 +4,8 @@ import type { Problem } from '../problems.ts';
 import type { Topic } from './topic.ts';
 import { TOPIC_FORMAT, TOPIC_VERSION, topicFileSchema, topicFileV1Schema } from './topic-schema.ts';
 import type { TopicFileV1 } from './topic-schema.ts';
-import { describeReceived, expectedAt } from './schema-expectation.ts';
-import type { PathStep, SchemaNode } from './schema-expectation.ts';
+import { locateIssue } from './schema-expectation.ts';
+import type { SchemaNode } from './schema-expectation.ts';
 import { fileWords } from '../messages/en/file-words.ts';
 
 /** What reading a topic file gives: the topic, or the first thing wrong with the file. */
@@ -13,27 +13,13 @@ export type TopicFileReading =
   | { readonly ok: true; readonly topic: Topic; readonly migratedFrom: number | null }
   | { readonly ok: false; readonly problem: Problem };
 
-/**
- * The first problem valibot found, as one clear problem: the dotted path of the first wrong
- * field, what the schema expects there in plain words, and what the file holds instead. A
- * list found where a group of fields belongs is reported at the list itself, not as the
- * first field missing from it.
- */
+/** The first problem valibot found, as one clear problem (see `locateIssue`). */
 function firstIssue(root: SchemaNode, issues: readonly v.BaseIssue<unknown>[]): Problem {
-  const issue = issues[0];
-  let steps: PathStep[] = (issue?.path ?? []).map((item) => ({ key: item.key, input: item.input }));
-  let received: unknown = issue?.input;
-  const last = steps[steps.length - 1];
-  if (last !== undefined && Array.isArray(last.input) && typeof last.key === 'string') {
-    received = last.input;
-    steps = steps.slice(0, -1);
-  }
-  const path = steps.map((step) => String(step.key)).join('.');
-  const expected = expectedAt(root, steps) ?? (issue?.expected ?? fileWords.anyValue).replace(/^"|"$/g, '');
+  const { path, expected, received } = locateIssue(root, issues);
   return problem('file-field-invalid', path === '' ? '(file)' : path, {
     path: path === '' ? fileWords.wholeFile : path,
-    expected,
-    received: describeReceived(received),
+    expected: expected ?? fileWords.anyValue,
+    received,
   });
 }
 

@@ -8,6 +8,7 @@ import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { topicFromDraft } from '../draft/topic-from-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+import { plainFileStem } from './plain-file-stem.ts';
 
 export const TOPIC_FILE_SUFFIX = '.cwtopic';
 
@@ -42,15 +43,5 @@ export function topicFileText(draft: TopicDraft, includePatient: boolean): Saved
 export function suggestedFileName(draft: TopicDraft, currentName: string | null): string {
   if (currentName !== null && currentName.endsWith(TOPIC_FILE_SUFFIX)) return currentName;
   if (currentName !== null && currentName.endsWith('.json')) return currentName.replace(/(\.chancewise)?\.json$/, TOPIC_FILE_SUFFIX);
-  const words = draft.title
-    .toLowerCase()
-    .replace(/\(illustrative example\)/g, '')
-    .normalize('NFKD')
-    .replace(/[\u0300-\u036f]/g, '')
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .split('-')
-    .slice(0, 8)
-    .join('-');
-  return `${words === '' ? 'topic' : words}${TOPIC_FILE_SUFFIX}`;
+  return `${plainFileStem(draft.title, 8, 'topic')}${TOPIC_FILE_SUFFIX}`;
 }

@@ -2,23 +2,14 @@
  * Saving the current slide for a slide deck: SVG text, or a 1920 × 1080 PNG drawn
  * from that SVG on a canvas in the browser.
  */
+import { plainFileStem } from '../files/plain-file-stem.ts';
 import { SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from './slide-svg.ts';
 import type { Slide } from './slide-model.ts';
 import type { StepKind } from './teaching-steps.ts';
 
 /** A file name for a slide: the presentation's title in plain letters, the slide number and step. */
 export function slideFileName(title: string, number: number, kind: StepKind, extension: string): string {
-  const words = title
-    .toLowerCase()
-    .replace(/\(illustrative example\)/g, '')
-    .normalize('NFKD')
-    .replace(/[\u0300-\u036f]/g, '')
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .split('-')
-    .slice(0, 6)
-    .join('-');
-  const base = `${words === '' ? 'teaching' : words}-${String(number).padStart(2, '0')}-${kind}`;
+  const base = `${plainFileStem(title, 6, 'teaching')}-${String(number).padStart(2, '0')}-${kind}`;
   return extension === '' ? base : `${base}.${extension}`;
 }
 

@@ -10,8 +10,8 @@ import type { Problem } from '../../core/problems.ts';
 import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
 import { TOPIC_FORMAT } from '../../core/topic/topic-schema.ts';
 import type { Topic } from '../../core/topic/topic.ts';
-import { describeReceived, expectedAt } from '../../core/topic/schema-expectation.ts';
-import type { PathStep, SchemaNode } from '../../core/topic/schema-expectation.ts';
+import { locateIssue } from '../../core/topic/schema-expectation.ts';
+import type { SchemaNode } from '../../core/topic/schema-expectation.ts';
 import type { Denominator } from '../../core/types.ts';
 import { teachingMessagesEn } from './messages/en.ts';
 import { TEACHING_SET_FORMAT, TEACHING_SET_VERSION, teachingSetSchema } from './teaching-set-schema.ts';
@@ -58,22 +58,11 @@ function fail(field: string, message: string): { readonly ok: false } & SetProbl
 
 /** The first problem valibot found, in words: the path, what is expected there, what is there instead. */
 function firstIssue(fileName: string, issues: readonly v.BaseIssue<unknown>[]): { readonly ok: false } & SetProblem {
-  const issue = issues[0];
-  let steps: PathStep[] = (issue?.path ?? []).map((item) => ({ key: item.key, input: item.input }));
-  let received: unknown = issue?.input;
-  const last = steps[steps.length - 1];
-  // A list found where a group of fields belongs is reported at the list itself.
-  if (last !== undefined && Array.isArray(last.input) && typeof last.key === 'string') {
-    received = last.input;
-    steps = steps.slice(0, -1);
-  }
-  const path = steps.map((step) => String(step.key)).join('.');
+  const { issue, path, expected, received } = locateIssue(teachingSetSchema as unknown as SchemaNode, issues);
   if (issue?.type === 'min_length' && Array.isArray(issue.input)) {
     return fail(path, words.emptyList(fileName, path, path === 'items' ? 'topic' : 'step'));
   }
-  const root = teachingSetSchema as unknown as SchemaNode;
-  const expected = expectedAt(root, steps) ?? (issue?.expected ?? '').replace(/^"|"$/g, '');
-  return fail(path === '' ? '(file)' : path, words.damaged(fileName, path === '' ? '(the whole file)' : path, expected, describeReceived(received)));
+  return fail(path === '' ? '(file)' : path, words.damaged(fileName, path === '' ? '(the whole file)' : path, expected ?? '', received));
 }
 
 /** A topic file's problem, placed at the item's path inside the set. */
