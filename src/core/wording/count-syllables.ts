@@ -112,7 +112,10 @@ const spelledOut = (letters: string): number => [...letters].reduce((sum, letter
  * @example countSyllables('15') // => 2
  */
 export function countSyllables(word: string): number {
-  const plain = word.normalize('NFD').replace(/[\u0300-\u036f]/g, '');
+  // Most words are plain letters: they skip the Unicode clean-up below, whose first use
+  // on a page also loads the browser's Unicode tables.
+  if (PLAIN_LETTERS.test(word)) return runSyllables(word);
+  const plain = NON_ASCII.test(word) ? word.normalize('NFD').replace(/[\u0300-\u036f]/g, '') : word;
   const parts = plain.split(/[-‐‑–—/]/).filter((part) => /[\p{L}\p{N}]/u.test(part));
   if (parts.length > 1) return parts.reduce((sum, part) => sum + countSyllables(part), 0);
   const token = (parts[0] ?? '').replace(/['’]/g, '').replace(/^[^\p{L}\p{N}.]+|[^\p{L}\p{N}%]+$/gu, '');
@@ -120,9 +123,14 @@ export function countSyllables(word: string): number {
   const asNumber = numberSyllables(token);
   if (asNumber !== null) return asNumber;
   const runs = token.match(/\p{L}+|\d+/gu) ?? [];
-  return runs.reduce((sum, run) => {
-    if (/^\d+$/.test(run)) return sum + (numberSyllables(run) ?? 0);
-    if (/^[A-Z]{2,5}$/.test(run) && !/[AEIOU]/.test(run)) return sum + spelledOut(run.toLowerCase());
-    return sum + letterSyllables(run.toLowerCase());
-  }, 0);
+  return runs.reduce((sum, run) => sum + (/^\d+$/.test(run) ? (numberSyllables(run) ?? 0) : runSyllables(run)), 0);
+}
+
+const PLAIN_LETTERS = /^[A-Za-z]+$/;
+const NON_ASCII = /[^\u0000-\u007f]/;
+
+/** Syllables of a run of letters: short capitals without a vowel spelled out, else by the rules. */
+function runSyllables(run: string): number {
+  if (/^[A-Z]{2,5}$/.test(run) && !/[AEIOU]/.test(run)) return spelledOut(run.toLowerCase());
+  return letterSyllables(run.toLowerCase());
 }
