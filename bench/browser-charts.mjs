@@ -64,6 +64,14 @@ try {
         { label: '  of which script (updateChart)', target: null, ...charts.redrawScript },
         { label: '  main-thread CPU time of the same spans', target: null, ...charts.redrawCpu },
         { label: 'chart: first draw on page load (cold)', target: null, ...charts.loadDraw },
+        { label: 'floor: 2000 empty <path data-outcome> (+ layout)', target: null, ...charts.bareElements },
+        { label: '  main-thread CPU time of the same spans', target: null, ...charts.bareElementsCpu },
+      );
+      const ratio = (/** @type {number | null} */ over, /** @type {number | null} */ under) =>
+        over === null || under === null || under === 0 ? 'n/a' : `${(over / under).toFixed(2)}×`;
+      notes.push(
+        `chart: first draw / floor of the same number of empty elements: ${ratio(charts.firstDraw.median, charts.bareElements.median)} ` +
+          `(CPU ${ratio(charts.firstDrawCpu.median, charts.bareElementsCpu.median)})`,
       );
     } finally {
       await served.stop();

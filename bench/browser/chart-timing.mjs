@@ -14,8 +14,8 @@ import { MARK_CATEGORIES, markedCpuSpans } from './trace-cpu.mjs';
  * @param {{ loads: number, repetitions: number }} settings
  */
 export async function timeCharts(browser, url, settings) {
-  /** @type {Record<'firstDraw' | 'firstDrawScript' | 'firstDrawCpu' | 'redraw' | 'redrawScript' | 'redrawCpu' | 'loadDraw', number[]>} */
-  const samples = { firstDraw: [], firstDrawScript: [], firstDrawCpu: [], redraw: [], redrawScript: [], redrawCpu: [], loadDraw: [] };
+  /** @type {Record<'firstDraw' | 'firstDrawScript' | 'firstDrawCpu' | 'redraw' | 'redrawScript' | 'redrawCpu' | 'loadDraw' | 'bare' | 'bareCpu', number[]>} */
+  const samples = { firstDraw: [], firstDrawScript: [], firstDrawCpu: [], redraw: [], redrawScript: [], redrawCpu: [], loadDraw: [], bare: [], bareCpu: [] };
   for (let load = 0; load < settings.loads; load += 1) {
     const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
     const page = await context.newPage();
@@ -30,7 +30,10 @@ export async function timeCharts(browser, url, settings) {
     await browser.startTracing(page, { categories: MARK_CATEGORIES });
     const first = await page.evaluate((repetitions) => window.chartPage?.timeFirstDraws(repetitions), settings.repetitions);
     const redraw = await page.evaluate((repetitions) => window.chartPage?.timeRedraws(repetitions), settings.repetitions);
+    const bare = await page.evaluate((repetitions) => window.chartPage?.timeBareElements(repetitions), settings.repetitions);
     const trace = await browser.stopTracing();
+    samples.bareCpu.push(...markedCpuSpans(trace, 'bare-elements'));
+    for (const sample of bare ?? []) samples.bare.push(sample.total);
     samples.firstDrawCpu.push(...markedCpuSpans(trace, 'chart-first-draw'));
     samples.redrawCpu.push(...markedCpuSpans(trace, 'chart-redraw'));
     for (const sample of first ?? []) {
@@ -52,5 +55,7 @@ export async function timeCharts(browser, url, settings) {
     redrawScript: summarise(samples.redrawScript),
     redrawCpu: summarise(samples.redrawCpu),
     loadDraw: summarise(samples.loadDraw),
+    bareElements: summarise(samples.bare),
+    bareElementsCpu: summarise(samples.bareCpu),
   };
 }

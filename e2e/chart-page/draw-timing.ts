@@ -32,7 +32,7 @@ function forceLayout(svg: SVGSVGElement, container: HTMLElement): number {
 }
 
 /** Names of the marks around each kind of sample. */
-export const SAMPLE_MARKS = { firstDraw: 'chart-first-draw', redraw: 'chart-redraw' } as const;
+export const SAMPLE_MARKS = { firstDraw: 'chart-first-draw', redraw: 'chart-redraw', bareElements: 'bare-elements' } as const;
 
 function mark(name: string): void {
   performance.mark(name);
@@ -91,5 +91,45 @@ export async function timeRedraws(container: HTMLElement, models: readonly Chart
     samples.push({ total: end - start, script: scripted - start });
   }
   svg.remove();
+  return samples;
+}
+
+/**
+ * The browser's own floor for a first draw of `count` people: the same number of empty
+ * `<path>` elements, each with only its `data-outcome`, in one group per array of an svg
+ * of the chart's size, timed the same way (start of drawing to after a forced layout).
+ * No chart with one element per person can be drawn faster than this on the same machine.
+ */
+export async function timeBareElements(container: HTMLElement, model: ChartModel, repetitions: number): Promise<DrawSample[]> {
+  const reference = timedFirstDraw(container, model).svg;
+  const width = reference.getAttribute('width') ?? '0';
+  const height = reference.getAttribute('height') ?? '0';
+  reference.remove();
+  const samples: DrawSample[] = [];
+  for (let run = 0; run < repetitions; run += 1) {
+    await nextFrame();
+    mark(`${SAMPLE_MARKS.bareElements}:start`);
+    const start = performance.now();
+    const svg = document.createElementNS(SVG_NAMESPACE, 'svg');
+    svg.setAttribute('width', width);
+    svg.setAttribute('height', height);
+    container.append(svg);
+    for (const array of model.arrays) {
+      const group = document.createElementNS(SVG_NAMESPACE, 'g');
+      for (const person of array.layout.people) {
+        const element = document.createElementNS(SVG_NAMESPACE, 'path');
+        element.setAttribute('data-outcome', person.group);
+        group.appendChild(element);
+      }
+      svg.appendChild(group);
+    }
+    const scripted = performance.now();
+    forceLayout(svg, container);
+    const end = performance.now();
+    mark(`${SAMPLE_MARKS.bareElements}:end`);
+    samples.push({ total: end - start, script: scripted - start });
+    await nextFrame();
+    svg.remove();
+  }
   return samples;
 }

@@ -7,7 +7,7 @@
  */
 import type { Denominator } from '../../src/core/types.ts';
 import { PALETTES, colourPalette } from '../../src/render/palette.ts';
-import { type DrawSample, timeFirstDraws, timeRedraws, timedFirstDraw } from './draw-timing.ts';
+import { type DrawSample, timeBareElements, timeFirstDraws, timeRedraws, timedFirstDraw } from './draw-timing.ts';
 import { demoChartModels, demoTopic, headlineChartAt } from './demo-models.ts';
 import './chart-page.css';
 
@@ -18,6 +18,8 @@ export interface ChartPageHooks {
   readonly per: Denominator;
   timeFirstDraws(repetitions: number): Promise<DrawSample[]>;
   timeRedraws(repetitions: number): Promise<DrawSample[]>;
+  /** The same number of empty elements, for the browser's floor (see draw-timing.ts). */
+  timeBareElements(repetitions: number): Promise<DrawSample[]>;
 }
 
 declare global {
@@ -51,5 +53,6 @@ window.chartPage = {
   per,
   timeFirstDraws: (repetitions) => timeFirstDraws(bench, redrawModels[0]!, repetitions),
   timeRedraws: (repetitions) => timeRedraws(bench, redrawModels, repetitions),
+  timeBareElements: (repetitions) => timeBareElements(bench, redrawModels[0]!, repetitions),
 };
 document.body.dataset['ready'] = 'true';

@@ -69,13 +69,23 @@ export function drawPeople(
   group.setAttribute('stroke', inherited.stroke);
   group.setAttribute('stroke-width', svgNumber(cellSize * palette.outlineWidth, 3));
   group.setAttribute('stroke-linejoin', 'round');
-  const document = group.ownerDocument;
+  // One painted prototype per group and look, cloned per person: a clone copies the
+  // attributes in one step, and the empty `d` keeps the attribute order of a fresh drawing.
+  const prototypes = new Map<string, Element>();
+  const prototypeFor = (personGroup: PersonGroup, look: PersonLook): Element => {
+    const name = `${personGroup} ${look}`;
+    const known = prototypes.get(name);
+    if (known !== undefined) return known;
+    const made = group.ownerDocument.createElementNS(SVG_NAMESPACE, 'path');
+    made.setAttribute('d', '');
+    made.setAttribute('data-outcome', personGroup);
+    if (look !== INHERITED_LOOK) paintNewPerson(made, paints[look]);
+    prototypes.set(name, made);
+    return made;
+  };
   for (const person of layout.people) {
-    const element = document.createElementNS(SVG_NAMESPACE, 'path');
+    const element = prototypeFor(person.group, looks[person.index] ?? person.group).cloneNode(false) as Element;
     element.setAttribute('d', placeGlyphPath(path, person.x, person.y));
-    element.setAttribute('data-outcome', person.group);
-    const look = looks[person.index] ?? person.group;
-    if (look !== INHERITED_LOOK) paintNewPerson(element, paints[look]);
     group.appendChild(element);
   }
 }
