@@ -41,6 +41,20 @@ interface LookPaint extends PersonPaint {
 
 type PaintTable = Readonly<Record<PersonLook, LookPaint>>;
 
+/** What a people's group shows, person by person, as last drawn or updated here. */
+interface DrawnPeople {
+  readonly groups: PersonGroup[];
+  readonly looks: PersonLook[];
+}
+
+/**
+ * The drawn state of each people's group this module drew, so an update compares plain
+ * arrays instead of reading two attributes of every person back from the DOM. Held
+ * weakly: it goes with the element. A group drawn elsewhere (an SVG read from text) has
+ * no entry and is read from its attributes instead.
+ */
+const drawnPeople = new WeakMap<Element, DrawnPeople>();
+
 function paintTable(palette: ChartPalette, patternIds: PatternIds, cellSize: number): PaintTable {
   const look = (name: PersonLook): LookPaint => {
     const paint = personPaint(palette, name, patternIds, cellSize);
@@ -83,11 +97,16 @@ export function drawPeople(
     prototypes.set(name, made);
     return made;
   };
+  const drawn: DrawnPeople = { groups: [], looks: [] };
   for (const person of layout.people) {
-    const element = prototypeFor(person.group, looks[person.index] ?? person.group).cloneNode(false) as Element;
+    const look = looks[person.index] ?? person.group;
+    const element = prototypeFor(person.group, look).cloneNode(false) as Element;
     element.setAttribute('d', placeGlyphPath(path, person.x, person.y));
     group.appendChild(element);
+    drawn.groups.push(person.group);
+    drawn.looks.push(look);
   }
+  drawnPeople.set(group, drawn);
 }
 
 /**
@@ -104,13 +123,20 @@ export function updatePeople(
   let paints: PaintTable | null = null;
   let changed = 0;
   const elements = group.children;
+  const known = drawnPeople.get(group);
+  const drawn = known !== undefined && known.groups.length === elements.length ? known : null;
   for (let index = 0; index < elements.length; index += 1) {
-    const element = elements[index];
     const look = looks[index];
     const personGroup = layout.people[index]?.group;
-    if (element === undefined || look === undefined || personGroup === undefined) continue;
-    const drawnUncertain = element.hasAttribute('stroke-dasharray');
-    if (element.getAttribute('data-outcome') === personGroup && drawnUncertain === (look === 'uncertain')) continue;
+    if (look === undefined || personGroup === undefined) continue;
+    if (drawn !== null) {
+      if (drawn.groups[index] === personGroup && (drawn.looks[index] === 'uncertain') === (look === 'uncertain')) continue;
+      drawn.groups[index] = personGroup;
+      drawn.looks[index] = look;
+    }
+    const element = elements[index];
+    if (element === undefined) continue;
+    if (drawn === null && element.getAttribute('data-outcome') === personGroup && element.hasAttribute('stroke-dasharray') === (look === 'uncertain')) continue;
     paints ??= paintTable(palette, patternIds, layout.geometry.cellSize);
     setChangedAttribute(element, 'data-outcome', personGroup);
     if (look === INHERITED_LOOK) clearPaint(element);
