@@ -5,6 +5,7 @@
  */
 import { describeNotice } from '../../core/messages/describe.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
+import type { Notice } from '../../core/types.ts';
 import { readingWarnings } from '../../core/wording/readability.ts';
 import type { UserText } from '../../core/wording/readability.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
@@ -19,8 +20,21 @@ export function patientFacingTexts(draft: TopicDraft): UserText[] {
   return texts.filter((item) => item.text.trim() !== '');
 }
 
-/** Every warning as a sentence, the numbers' first, without repeats. */
-export function resultWarnings(result: TopicResult, draft: TopicDraft): string[] {
-  const sentences = [...result.notices, ...readingWarnings(patientFacingTexts(draft))].map((notice) => describeNotice(notice));
+/**
+ * The patient-facing texts of a draft as one string, equal whenever the texts are: a
+ * derived value keyed on it skips the reading check when only a number was changed.
+ */
+export function patientTextsKey(draft: TopicDraft): string {
+  return JSON.stringify(patientFacingTexts(draft));
+}
+
+/** Reading warnings for the texts a {@link patientTextsKey} holds. */
+export function readingNoticesFor(key: string): readonly Notice[] {
+  return readingWarnings(JSON.parse(key) as UserText[]);
+}
+
+/** Every warning as a sentence, the numbers' first, then those on the typed texts, without repeats. */
+export function resultWarnings(result: TopicResult, reading: readonly Notice[]): string[] {
+  const sentences = [...result.notices, ...reading].map((notice) => describeNotice(notice));
   return [...new Set(sentences)];
 }
