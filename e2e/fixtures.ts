@@ -54,12 +54,16 @@ export const test = base.extend<{ watch: Watch }>({
 
 export { expect };
 
-/** Open the app fresh (no autosave from an earlier test) and wait until the results are drawn. */
+/**
+ * Open the app fresh (no autosave from an earlier test) and wait until the whole page is
+ * drawn: the first screen comes first, the parts below it in turns after the first paint.
+ */
 export async function openApp(page: Page): Promise<void> {
   await page.goto('/');
   await page.evaluate(() => localStorage.clear());
   await page.reload();
   await expect(page.locator('svg.people-chart').first()).toBeVisible();
+  await expect(page.locator('.app')).toHaveAttribute('data-startup', 'drawn');
 }
 
 /** The people of one option's array in one outcome's chart, by group. */
