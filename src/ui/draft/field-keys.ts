@@ -49,7 +49,8 @@ export function fieldId(key: string): string {
   return `field-${safe}-${(hash >>> 0).toString(36)}`;
 }
 
-const EFFECT_PARTS: ReadonlySet<string> = new Set([
+/** The parts of an effect, in the order the editor shows them. */
+const EFFECT_ORDER: readonly EffectPart[] = [
   'estimate',
   'lower',
   'upper',
@@ -60,7 +61,12 @@ const EFFECT_PARTS: ReadonlySet<string> = new Set([
   'comparison',
   'comparison.events',
   'comparison.total',
-]);
+  'followUpYears',
+  'source',
+];
+
+/** The parts of an effect the core names under `effect.` (its follow-up and source sit beside it). */
+const EFFECT_PARTS: ReadonlySet<string> = new Set(EFFECT_ORDER.filter((part) => part !== 'followUpYears' && part !== 'source'));
 
 function effectFieldKey(draft: TopicDraft, outcomeId: string, effectIndex: number, rest: string): string | null {
   const optionId = effectOptionIds(draft)[effectIndex];
@@ -86,20 +92,6 @@ function outcomeFieldKey(draft: TopicDraft, index: number, rest: string): string
   return outcomeKey(outcome.id, 'name');
 }
 
-const EFFECT_ORDER: readonly EffectPart[] = [
-  'estimate',
-  'lower',
-  'upper',
-  'interval',
-  'intervention',
-  'intervention.events',
-  'intervention.total',
-  'comparison',
-  'comparison.events',
-  'comparison.total',
-  'followUpYears',
-  'source',
-];
 
 /** Every field key in the order the editor shows the fields, top to bottom. */
 export function fieldOrder(draft: TopicDraft): string[] {

@@ -7,6 +7,7 @@ import { pngDimensionsForPrint } from '../../render/export/print-size.ts';
 import { svgForExport } from '../../render/export/svg-for-export.ts';
 import { chartSvgString } from '../../render/svg/chart-svg-string.ts';
 import { withPrintResolution } from './png-density.ts';
+import { svgTextToPng } from './svg-to-png.ts';
 
 export const EXPORT_WIDTH_MM = 180;
 export const EXPORT_DPI = 300;
@@ -28,15 +29,6 @@ function viewBoxSize(svgText: string): { width: number; height: number } {
   return { width, height };
 }
 
-function loadImage(url: string): Promise<HTMLImageElement> {
-  return new Promise((resolve, reject) => {
-    const image = new Image();
-    image.onload = () => resolve(image);
-    image.onerror = () => reject(new Error('the chart could not be drawn as an image'));
-    image.src = url;
-  });
-}
-
 /** The chart as PNG bytes that print 180 mm wide at 300 dpi (2126 pixels wide). */
 export async function chartPngFile(model: ChartModel, document: Document): Promise<Uint8Array> {
   const svgText = chartSvgString(model, document, { width: LAYOUT_WIDTH, idPrefix: `export-${model.id}` });
@@ -46,21 +38,5 @@ export async function chartPngFile(model: ChartModel, document: Document): Promi
   const sized = svgText.replace(/<svg\b[^>]*>/, (root) =>
     root.replace(/\swidth="[^"]*"/, ` width="${pixels.width}"`).replace(/\sheight="[^"]*"/, ` height="${pixels.height}"`),
   );
-  const url = URL.createObjectURL(new Blob([sized], { type: 'image/svg+xml' }));
-  try {
-    const image = await loadImage(url);
-    const canvas = document.createElement('canvas');
-    canvas.width = pixels.width;
-    canvas.height = pixels.height;
-    const context = canvas.getContext('2d');
-    if (context === null) throw new Error('this browser cannot draw images');
-    context.fillStyle = '#ffffff';
-    context.fillRect(0, 0, pixels.width, pixels.height);
-    context.drawImage(image, 0, 0, pixels.width, pixels.height);
-    const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, 'image/png'));
-    if (blob === null) throw new Error('the image could not be made');
-    return withPrintResolution(new Uint8Array(await blob.arrayBuffer()), EXPORT_DPI);
-  } finally {
-    URL.revokeObjectURL(url);
-  }
+  return withPrintResolution(await svgTextToPng(sized, document, pixels, 'chart'), EXPORT_DPI);
 }

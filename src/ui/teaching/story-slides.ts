@@ -130,23 +130,39 @@ function withOptionSlide(source: SlideSource): Slide {
   });
 }
 
-function helpedSlide(source: SlideSource): Slide {
-  const { result, optionId } = source.item;
-  const arms = armsOf(benefitOutcome(result), optionId);
-  const messages = source.messages;
-  if (arms === null) return slide('helped', source, { lines: [line(messages.story.noBenefit)] });
+/**
+ * The people an option changes, beside the comparison: the changed people and those who
+ * have the outcome anyway as callouts, or one line when the option changes nobody.
+ */
+function changedPeopleSlide(
+  kind: 'helped' | 'harmed',
+  source: SlideSource,
+  arms: OutcomeArms,
+  look: 'prevented' | 'caused',
+  because: (count: number, outcomeName: string, optionName: string) => string,
+  noOne: (denominator: number, outcomeName: string, optionName: string) => string,
+): Slide {
   const { option, outcome } = arms;
-  const words = messages.callouts;
-  const { denominator } = result;
+  const words = source.messages.callouts;
+  const { denominator } = source.item.result;
+  const changed = option.groups[look];
   const callouts: Callout[] =
-    option.groups.prevented > 0
+    changed > 0
       ? [
-          { look: 'prevented', value: words.countIn(option.groups.prevented, denominator), text: words.avoidBecause(option.groups.prevented, outcome.name, option.name) },
+          { look, value: words.countIn(changed, denominator), text: because(changed, outcome.name, option.name) },
           { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
         ]
       : [];
-  const lines = option.groups.prevented > 0 ? [] : [line(messages.story.noOneHelped(denominator, outcome.name, option.name))];
-  return slide('helped', source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+  const lines = changed > 0 ? [] : [line(noOne(denominator, outcome.name, option.name))];
+  return slide(kind, source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+}
+
+function helpedSlide(source: SlideSource): Slide {
+  const { result, optionId } = source.item;
+  const messages = source.messages;
+  const arms = armsOf(benefitOutcome(result), optionId);
+  if (arms === null) return slide('helped', source, { lines: [line(messages.story.noBenefit)] });
+  return changedPeopleSlide('helped', source, arms, 'prevented', messages.callouts.avoidBecause, messages.story.noOneHelped);
 }
 
 function harmedSlide(source: SlideSource): Slide {
@@ -154,18 +170,7 @@ function harmedSlide(source: SlideSource): Slide {
   const messages = source.messages;
   const arms = armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId);
   if (arms === null) return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
-  const { option, outcome } = arms;
-  const words = messages.callouts;
-  const { denominator } = result;
-  const callouts: Callout[] =
-    option.groups.caused > 0
-      ? [
-          { look: 'caused', value: words.countIn(option.groups.caused, denominator), text: words.getBecause(option.groups.caused, outcome.name, option.name) },
-          { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
-        ]
-      : [];
-  const lines = option.groups.caused > 0 ? [] : [line(messages.story.noOneHarmed(denominator, outcome.name, option.name))];
-  return slide('harmed', source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+  return changedPeopleSlide('harmed', source, arms, 'caused', messages.callouts.getBecause, messages.story.noOneHarmed);
 }
 
 function uncertaintySlide(source: SlideSource): Slide {
