@@ -9,6 +9,8 @@ export interface CheckedEffect {
   readonly estimate: number;
   readonly interval: { readonly lower: number; readonly upper: number } | null;
   readonly level: number;
+  /** The effect was reported for the opposite event (see `riskWithOppositeEffect`). */
+  readonly opposite: boolean;
 }
 
 function checkValue(measure: EnteredEffect['measure'], value: number, field: string): void {
@@ -41,7 +43,8 @@ export function checkEffect(effect: EnteredEffect, field: string): CheckedEffect
   const lower = effect.lower ?? null;
   const upper = effect.upper ?? null;
   const level = checkLevel(effect.level ?? DEFAULT_LEVEL, `${field}.level`);
-  if (lower === null && upper === null) return { measure, estimate, interval: null, level };
+  const opposite = effect.opposite === true;
+  if (lower === null && upper === null) return { measure, estimate, interval: null, level, opposite };
   if (lower === null || upper === null) return fail('interval-incomplete', `${field}.interval`);
   checkValue(measure, lower, `${field}.lower`);
   checkValue(measure, upper, `${field}.upper`);
@@ -50,5 +53,5 @@ export function checkEffect(effect: EnteredEffect, field: string): CheckedEffect
   if (estimate < low || estimate > high) {
     fail('interval-excludes-estimate', `${field}.interval`, { lower: low, upper: high, estimate });
   }
-  return { measure, estimate, interval: { lower: low, upper: high }, level };
+  return { measure, estimate, interval: { lower: low, upper: high }, level, opposite };
 }

@@ -8,6 +8,8 @@ import { numberNeeded } from './number-needed.ts';
 import { chooseDenominator, peopleCounts } from './people-counts.ts';
 import { fail } from './problems.ts';
 import type { EffectResult } from './topic/topic-result.ts';
+import { amountIn } from './time-unit.ts';
+import type { TimeUnit } from './time-unit.ts';
 import type { CountsEffect, Denominator, Effect, Estimate, Notice } from './types.ts';
 
 /** Everything needed to compute one option's effect on one outcome. */
@@ -15,17 +17,26 @@ export interface EffectQuery {
   /** The patient's baseline risk (0 < p < 1); null for an absolute reduction alone or for trial counts alone. */
   readonly baseline: number | null;
   readonly effect: Effect;
-  /** The period the baseline covers and the period wanted, in years. */
-  readonly periods?: { readonly baselineYears: number; readonly targetYears: number } | null;
-  /** The period over which the effect was measured, in years. */
+  /** The period the baseline covers and the period wanted, in years, with the units they were given in. */
+  readonly periods?: {
+    readonly baselineYears: number;
+    readonly targetYears: number;
+    readonly baselineUnit?: TimeUnit;
+    readonly targetUnit?: TimeUnit;
+  } | null;
+  /** The period over which the effect was measured, in years, and the unit it was given in. */
   readonly followUpYears?: number | null;
+  readonly followUpUnit?: TimeUnit;
   /** The period the result is for, when known, for the follow-up warning. */
   readonly resultYears?: number | null;
+  readonly resultUnit?: TimeUnit;
   /** A fixed denominator; otherwise the rule of `chooseDenominator`. */
   readonly per?: Denominator | null;
   readonly method?: 'newcombe' | 'wald';
   /** Where problems are reported ("effect", "outcomes.0.effects.1.effect"). */
   readonly field?: string;
+  /** The event is one people want ("pain gone by day 3"): more of it helps. Default false. */
+  readonly wanted?: boolean;
 }
 
 /** One effect's numbers, and for trial counts the trial's own statistics. */
@@ -43,8 +54,17 @@ function convertedBaseline(query: EffectQuery, notices: Notice[]): number | null
   if (baseline === null || periods === null || periods === undefined) return baseline;
   if (periods.baselineYears === periods.targetYears) return baseline;
   const converted = convertRiskPeriod(baseline, periods.baselineYears, periods.targetYears, `${query.field ?? 'effect'}.period`);
+  const fromUnit = periods.baselineUnit ?? 'years';
+  const toUnit = periods.targetUnit ?? 'years';
   notices.push(
-    notice('baseline-period-converted', { risk: baseline, from: periods.baselineYears, to: periods.targetYears, converted }),
+    notice('baseline-period-converted', {
+      risk: baseline,
+      from: amountIn(periods.baselineYears, fromUnit),
+      fromUnit,
+      to: amountIn(periods.targetYears, toUnit),
+      toUnit,
+      converted,
+    }),
   );
   return converted;
 }
@@ -53,16 +73,28 @@ function countsAtBaseline(baseline: number, analysis: CountsAnalysis, field: str
   const ratio = analysis.relativeRisk;
   if (ratio !== null) {
     const interval = ratio.lower === null || ratio.upper === null ? null : { lower: ratio.lower, upper: ratio.upper };
-    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: 0.95 }, field);
+    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: 0.95, opposite: false }, field);
   }
   const difference = analysis.riskDifference;
   const interval =
     difference.lower === null || difference.upper === null ? null : { lower: difference.lower, upper: difference.upper };
-  return effectAtBaseline(baseline, { measure: 'arr', estimate: difference.estimate, interval, level: 0.95 }, field);
+  return effectAtBaseline(
+    baseline,
+    { measure: 'arr', estimate: difference.estimate, interval, level: 0.95, opposite: false },
+    field,
+  );
 }
 
-function fromCounts(query: EffectQuery, effect: CountsEffect, baseline: number | null, notices: Notice[]) {
-  const level = checkLevel(effect.level ?? 0.95, `${query.field ?? 'effect'}.level`);
+/** Counts of the opposite event, turned into counts of the outcome: events become total − events. */
+function countsOfOutcome(effect: CountsEffect): CountsEffect {
+  if (effect.opposite !== true) return effect;
+  const flip = (arm: CountsEffect['comparison']) => ({ events: arm.total - arm.events, total: arm.total });
+  return { ...effect, intervention: flip(effect.intervention), comparison: flip(effect.comparison), opposite: false };
+}
+
+function fromCounts(query: EffectQuery, entered: CountsEffect, baseline: number | null, notices: Notice[]) {
+  const level = checkLevel(entered.level ?? 0.95, `${query.field ?? 'effect'}.level`);
+  const effect = countsOfOutcome(entered);
   const analysis = analyseCounts(effect.intervention, effect.comparison, { level, method: query.method ?? 'newcombe' });
   notices.push(...analysis.notices);
   if (baseline === null) {
@@ -118,12 +150,24 @@ export function computeEffect(query: EffectQuery): EffectComputation {
       ({ interventionRisk, relativeRisk, absoluteReduction } = effectAtBaseline(baseline, checked, field));
     }
     if (checked.measure === 'hr') notices.push(notice('hr-proportional-hazards'));
+    if (checked.opposite && baseline !== null) {
+      notices.push(notice(checked.measure === 'or' ? 'opposite-odds-ratio-inverted' : 'opposite-ratio-applied', { measure: checked.measure }));
+    }
   }
   if (hasInterval) notices.push(notice('interval-ignores-baseline-uncertainty'));
   const resultYears = query.resultYears ?? query.periods?.targetYears ?? null;
   const followUp = query.followUpYears ?? null;
   if (followUp !== null && resultYears !== null && resultYears > followUp) {
-    notices.push(notice('period-beyond-followup', { period: resultYears, followup: followUp }));
+    const periodUnit = query.resultUnit ?? query.periods?.targetUnit ?? 'years';
+    const followupUnit = query.followUpUnit ?? 'years';
+    notices.push(
+      notice('period-beyond-followup', {
+        period: amountIn(resultYears, periodUnit),
+        periodUnit,
+        followup: amountIn(followUp, followupUnit),
+        followupUnit,
+      }),
+    );
   }
   let perPeople = null;
   if (comparisonRisk !== null && interventionRisk !== null) {
@@ -139,7 +183,7 @@ export function computeEffect(query: EffectQuery): EffectComputation {
     interventionRisk,
     relativeRisk,
     absoluteReduction,
-    nnt: numberNeeded(absoluteReduction),
+    nnt: numberNeeded(absoluteReduction, { wanted: query.wanted === true }),
     perPeople,
     notices,
     counts,

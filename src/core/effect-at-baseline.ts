@@ -1,6 +1,6 @@
 import type { CheckedEffect } from './check-effect.ts';
 import { fail } from './problems.ts';
-import { riskWithEffect } from './risk-with-effect.ts';
+import { riskWithEffect, riskWithOppositeEffect } from './risk-with-effect.ts';
 import type { Estimate } from './types.ts';
 
 /** The option's risk, the implied risk ratio and the absolute reduction at one baseline. */
@@ -13,10 +13,10 @@ export interface EffectAtBaseline {
 const RISK_TOLERANCE = 1e-12;
 
 function riskOrFail(effect: CheckedEffect, value: number, baseline: number, field: string, isLimit: boolean): number {
-  const risk = riskWithEffect(effect.measure, value, baseline);
+  const risk = effect.opposite ? riskWithOppositeEffect(effect.measure, value, baseline) : riskWithEffect(effect.measure, value, baseline);
   const outside = risk < -RISK_TOLERANCE || risk > 1 + RISK_TOLERANCE;
   if (outside && isLimit) fail('limit-risk-outside', field, { measure: effect.measure, limit: value, baseline, risk });
-  if (outside && effect.measure === 'rr') fail('rr-risk-above-one', field, { ratio: value, baseline, risk });
+  if (outside && effect.measure === 'rr' && !effect.opposite) fail('rr-risk-above-one', field, { ratio: value, baseline, risk });
   if (outside) fail('risk-outside', field, { measure: effect.measure, value, baseline, risk });
   return Math.min(1, Math.max(0, risk));
 }
@@ -47,7 +47,7 @@ export function effectAtBaseline(baseline: number, effect: CheckedEffect, field:
   const limits = effect.interval;
   const lowRisk = limits === null ? null : riskOrFail(effect, limits.lower, baseline, `${field}.lower`, true);
   const highRisk = limits === null ? null : riskOrFail(effect, limits.upper, baseline, `${field}.upper`, true);
-  const relativeEstimate = effect.measure === 'rr' ? effect.estimate : risk / baseline;
+  const relativeEstimate = effect.measure === 'rr' && !effect.opposite ? effect.estimate : risk / baseline;
   return {
     interventionRisk: sorted(risk, lowRisk, highRisk),
     relativeRisk: sorted(relativeEstimate, ratioTo(lowRisk, baseline), ratioTo(highRisk, baseline)),

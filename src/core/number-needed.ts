@@ -1,3 +1,4 @@
+import { benefitOf } from './direction.ts';
 import { ceilWhole } from './float-safe.ts';
 import { english } from './messages/en/index.ts';
 import type { Estimate, NumberNeeded } from './types.ts';
@@ -26,15 +27,26 @@ function intervalText(rawLower: number, rawUpper: number, words: Words): string 
   return `NNTB ${wholeNeeded(upper)} ${to} ${infinity} ${to} NNTH ${wholeNeeded(lower)}`;
 }
 
+/** How to read the difference, and the words for infinity and "to". */
+export interface NumberNeededSettings {
+  /** The event is one people want: more of it is a benefit (NNTB), less of it a harm (NNTH). */
+  readonly wanted?: boolean;
+  readonly words?: Words;
+}
+
 /**
  * The number needed to treat for an absolute difference (comparison − option), labelled
- * NNTB for a benefit and NNTH for a harm, with its interval written as Altman (1998,
+ * NNTB when the option helps and NNTH when it harms, with its interval written as Altman (1998,
  * BMJ 317:1309) proposes: an interval that crosses no effect reads "NNTB 4 to ∞ to NNTH 20",
- * benefit end first. A difference of exactly 0 has no NNT: a plain phrase instead.
+ * benefit end first. Helping follows the event's direction: fewer unwanted events, or more
+ * wanted ones. A difference of exactly 0 has no NNT: a plain phrase instead.
  *
  * @example numberNeeded({ estimate: 0.1, lower: -0.05, upper: 0.25 }).text // => "NNTB 10 (NNTB 4 to ∞ to NNTH 20)"
+ * @example numberNeeded({ estimate: -0.15, lower: -0.2, upper: -0.1 }, { wanted: true }).text // => "NNTB 7 (NNTB 5 to 10)"
  */
-export function numberNeeded(difference: Estimate, words: Words = english.numbers): NumberNeeded {
+export function numberNeeded(entered: Estimate, settings: NumberNeededSettings = {}): NumberNeeded {
+  const words = settings.words ?? english.numbers;
+  const difference = benefitOf(entered, settings.wanted === true);
   const { lower, upper } = difference;
   const estimate = asDifference(difference.estimate);
   const interval = lower === null || upper === null ? null : intervalText(lower, upper, words);

@@ -32,6 +32,8 @@ export interface EnteredEffect {
   readonly lower?: number | null;
   readonly upper?: number | null;
   readonly level?: number;
+  /** The ratio was reported for the opposite event ("still in pain" for "pain gone"); see `riskWithOppositeEffect`. */
+  readonly opposite?: boolean;
 }
 
 /** A trial's own counts: the option (intervention) arm and the comparison arm. */
@@ -40,6 +42,8 @@ export interface CountsEffect {
   readonly intervention: ArmCounts;
   readonly comparison: ArmCounts;
   readonly level?: number;
+  /** The counts are of the opposite event; each arm's events become total − events. */
+  readonly opposite?: boolean;
 }
 
 export type Effect = EnteredEffect | CountsEffect;

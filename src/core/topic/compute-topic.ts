@@ -42,6 +42,7 @@ function baselineOf(outcome: TopicOutcome): { risk: number; fromTrial: boolean }
 }
 
 function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator): OptionOutcomeResult {
+  // The comparison against itself: no difference, whichever way the event points.
   const people = peopleCounts(risk, point(risk), denominator);
   return {
     optionId: option.id,
@@ -127,8 +128,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       computed.push({ option, outcome, computation, entry });
       for (const found of computation.notices) {
         if (found.code === 'period-beyond-followup') {
-          const { period = '', followup = '' } = found.values;
-          notices.push({ code: found.code, values: { period, followup, option: option.name, outcome: outcome.name } });
+          notices.push({ code: found.code, values: { ...found.values, option: option.name, outcome: outcome.name } });
         } else if (found.code !== 'denominator-raised') {
           notices.push(found);
         }
@@ -156,6 +156,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       outcomeId: outcome.id,
       name: outcome.name,
       kind: outcome.kind,
+      wanted: outcome.wanted === true,
       isHeadline: outcome.isHeadline,
       baselineRisk,
       baselineSource: outcome.baseline.source,
@@ -174,6 +175,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       title: topic.title,
       population: topic.population,
       periodYears: topic.periodYears,
+      periodUnit: topic.periodUnit ?? 'years',
       denominator,
       illustrative: topic.illustrative,
       outcomes,

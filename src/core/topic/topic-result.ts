@@ -1,4 +1,5 @@
 import type { Denominator, Estimate, Notice, NumberNeeded, PeopleCounts, PeopleGroups } from '../types.ts';
+import type { TimeUnit } from '../time-unit.ts';
 import type { Certainty, Importance } from './topic.ts';
 
 /** The computed numbers of one option against the comparison, for one outcome. */
@@ -8,7 +9,10 @@ export interface EffectResult {
   readonly interventionRisk: Estimate | null;
   /** The risk ratio implied at this baseline, whatever measure was entered. */
   readonly relativeRisk: Estimate | null;
-  /** comparison − option risk; negative means the option increases the outcome. */
+  /**
+   * comparison − option risk; negative means the option increases the outcome. Whether that
+   * helps depends on the event's direction: use `changeOf` in `core/direction.ts`.
+   */
   readonly absoluteReduction: Estimate;
   readonly nnt: NumberNeeded;
   readonly perPeople: PeopleCounts | null;
@@ -35,6 +39,8 @@ export interface OutcomeResult {
   readonly outcomeId: string;
   readonly name: string;
   readonly kind: 'benefit' | 'harm';
+  /** The event is one people want: more of it helps (see `core/direction.ts`). */
+  readonly wanted: boolean;
   readonly isHeadline: boolean;
   /** The baseline risk over the topic's period (after any period conversion). */
   readonly baselineRisk: number;
@@ -47,6 +53,8 @@ export interface TopicResult {
   readonly title: string;
   readonly population: string;
   readonly periodYears: number;
+  /** The unit the topic's period was given in, for the wording. */
+  readonly periodUnit: TimeUnit;
   readonly denominator: Denominator;
   readonly illustrative: boolean;
   readonly outcomes: readonly OutcomeResult[];

@@ -2,8 +2,13 @@ import * as v from 'valibot';
 
 /** The name every topic file carries in its `format` field. */
 export const TOPIC_FORMAT = 'chancewise-topic';
-/** The version this build writes. Older versions are migrated on reading. */
-export const TOPIC_VERSION = 2;
+/**
+ * The version this build writes. Version 3 added `wanted` on outcomes and the time units
+ * (`periodUnit`, `followUpUnit`) and the `opposite` flag of effects; a version 2 file has none
+ * of them and reads with their defaults (all events unwanted, periods in years). Version 1
+ * files are migrated on reading.
+ */
+export const TOPIC_VERSION = 3;
 
 const text = v.string();
 const years = v.pipe(v.number(), v.finite());
@@ -11,6 +16,8 @@ const finite = v.pipe(v.number(), v.finite());
 const bound = v.optional(v.nullable(finite));
 const whole = v.pipe(v.number(), v.integer());
 const arm = v.object({ events: whole, total: whole });
+const unit = v.optional(v.picklist(['days', 'weeks', 'months', 'years']));
+const opposite = v.optional(v.boolean());
 
 const enteredEffect = v.object({
   measure: v.picklist(['rr', 'or', 'hr', 'rrr', 'arr']),
@@ -18,23 +25,26 @@ const enteredEffect = v.object({
   lower: bound,
   upper: bound,
   level: v.optional(finite),
+  opposite,
 });
 const countsEffect = v.object({
   measure: v.literal('counts'),
   intervention: arm,
   comparison: arm,
   level: v.optional(finite),
+  opposite,
 });
 const effect = v.variant('measure', [countsEffect, enteredEffect]);
 
 const certainty = v.picklist(['high', 'moderate', 'low', 'very-low']);
 const importance = v.picklist(['important', 'trivial']);
 
-/** Schema of one topic, as stored (version 2). */
+/** Schema of one topic, as stored (versions 2 and 3; the fields version 3 added are optional). */
 export const topicSchema = v.object({
   title: text,
   population: text,
   periodYears: years,
+  periodUnit: unit,
   illustrative: v.boolean(),
   options: v.array(v.object({ id: text, name: text, isComparison: v.boolean() })),
   outcomes: v.array(
@@ -42,14 +52,16 @@ export const topicSchema = v.object({
       id: text,
       name: text,
       kind: v.picklist(['benefit', 'harm']),
+      wanted: v.optional(v.boolean()),
       isHeadline: v.boolean(),
-      baseline: v.object({ risk: v.nullable(v.union([finite, text])), periodYears: years, source: text }),
+      baseline: v.object({ risk: v.nullable(v.union([finite, text])), periodYears: years, periodUnit: unit, source: text }),
       effects: v.array(
         v.object({
           optionId: text,
           effect,
           source: text,
           followUpYears: v.nullable(years),
+          followUpUnit: unit,
           certainty,
           importance: v.optional(importance, 'important'),
         }),
@@ -62,10 +74,10 @@ export const topicSchema = v.object({
   patient: v.optional(v.nullable(v.object({ name: text, reference: text })), null),
 });
 
-/** Schema of a version 2 file. */
+/** Schema of a version 2 or 3 file. */
 export const topicFileSchema = v.object({
   format: v.literal(TOPIC_FORMAT),
-  version: v.literal(TOPIC_VERSION),
+  version: v.picklist([2, TOPIC_VERSION]),
   topic: topicSchema,
 });
 

@@ -1,3 +1,4 @@
+import type { TimeUnit } from '../time-unit.ts';
 import type { Effect } from '../types.ts';
 
 /** GRADE certainty of the evidence for one result (Balshem et al. 2011). */
@@ -24,6 +25,8 @@ export interface OptionEffect {
   readonly source: string;
   /** The period, in years, over which the effect was measured; null when not stated. */
   readonly followUpYears: number | null;
+  /** The unit the follow-up was given in (default years); `followUpYears` holds it converted. */
+  readonly followUpUnit?: TimeUnit;
   readonly certainty: Certainty;
   readonly importance: Importance;
 }
@@ -33,6 +36,8 @@ export interface Baseline {
   /** Null only when every effect is given as trial counts (the trial's comparison arm is then used). */
   readonly risk: RiskInput | null;
   readonly periodYears: number;
+  /** The unit the period was given in (default years); `periodYears` holds it converted. */
+  readonly periodUnit?: TimeUnit;
   readonly source: string;
 }
 
@@ -42,6 +47,12 @@ export interface TopicOutcome {
   /** Short name, used in sentences: "a stroke", "muscle pain". */
   readonly name: string;
   readonly kind: 'benefit' | 'harm';
+  /**
+   * The event is one people want ("pain gone by day 3", "stopped smoking"): absent or false
+   * means an event to avoid. Separate from `kind`, which says whether the options aim at the
+   * outcome (benefit) or it is a side effect (harm); helping follows from both directions.
+   */
+  readonly wanted?: boolean;
   readonly isHeadline: boolean;
   readonly baseline: Baseline;
   /** One entry per option that is not the comparison. */
@@ -56,6 +67,8 @@ export interface Topic {
   readonly population: string;
   /** The one period, in years, that every number of the topic covers. */
   readonly periodYears: number;
+  /** The unit the period was given in, and is worded in (default years). */
+  readonly periodUnit?: TimeUnit;
   readonly options: readonly TopicOption[];
   readonly outcomes: readonly TopicOutcome[];
   /** Invented scenario for demonstration and teaching; shown as illustrative wherever it appears. */

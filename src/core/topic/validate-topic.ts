@@ -104,9 +104,19 @@ function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, in
       const computation = computeEffect({
         baseline: baseline ?? fromTrial,
         effect: entry.effect,
-        periods: periodOk ? { baselineYears: outcome.baseline.periodYears, targetYears: topic.periodYears } : null,
+        periods: periodOk
+          ? {
+              baselineYears: outcome.baseline.periodYears,
+              targetYears: topic.periodYears,
+              baselineUnit: outcome.baseline.periodUnit ?? 'years',
+              targetUnit: topic.periodUnit ?? 'years',
+            }
+          : null,
         followUpYears: entry.followUpYears,
+        followUpUnit: entry.followUpUnit ?? 'years',
         resultYears: topic.periodYears,
+        resultUnit: topic.periodUnit ?? 'years',
+        wanted: outcome.wanted === true,
         per: 100,
         field: `${effectField}.effect`,
       });

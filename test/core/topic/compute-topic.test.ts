@@ -112,7 +112,15 @@ describe('computeTopic on the demo topics', () => {
     const result = computeTopic(demo(SCREENING));
     const beyond = result.notices.filter((found) => found.code === 'period-beyond-followup');
     expect(beyond).toEqual([
-      { code: 'period-beyond-followup', values: { period: 15, followup: 12, option: 'screening', outcome: 'dying of bowel cancer' } },
+      { code: 'period-beyond-followup', values: {
+          period: 15,
+          periodUnit: 'years',
+          followup: 12,
+          followupUnit: 'years',
+          option: 'screening',
+          outcome: 'dying of bowel cancer',
+        },
+      },
     ]);
   });
 

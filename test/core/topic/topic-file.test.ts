@@ -175,10 +175,12 @@ describe('reading a version 1 file', () => {
 describe('reading a file from a newer version', () => {
   it('refuses it and asks for an update', () => {
     const data = JSON.parse(fixture(DEMOS[0] ?? '')) as Record<string, unknown>;
-    data.version = 3;
+    data.version = 4;
     const found = refusal(JSON.stringify(data));
     expect(found).toMatchObject({ code: 'file-version-unsupported', field: 'version' });
-    expect(found.message).toBe('This topic file has version 3, newer than this version of Chancewise reads (up to 2). Update Chancewise.');
+    expect(found.message).toBe(
+      'This topic file was made by a newer Chancewise (file version 4; this one reads up to version 3). Update Chancewise to open it; the file has not been changed.',
+    );
   });
 });
 
@@ -211,7 +213,7 @@ const damagedFiles: readonly [string, string, string, string][] = [
   ['an unknown kind of outcome', damaged((d) => { d.topic.outcomes[0].kind = 'good'; }), 'topic.outcomes.0.kind', at('topic.outcomes.0.kind', '"benefit" or "harm"', 'the text "good"')],
   ['a headline flag that is a number', damaged((d) => { d.topic.outcomes[0].isHeadline = 1; }), 'topic.outcomes.0.isHeadline', at('topic.outcomes.0.isHeadline', 'true or false', 'the number 1')],
   ['an outcome given as a list', damaged((d) => { d.topic.outcomes[1] = []; }), 'topic.outcomes.1', at('topic.outcomes.1', 'a group of fields', 'a list')],
-  ['a missing baseline', damaged((d) => { delete d.topic.outcomes[0].baseline; }), 'topic.outcomes.0.baseline', at('topic.outcomes.0.baseline', 'a group of fields (risk, periodYears, source)', 'nothing')],
+  ['a missing baseline', damaged((d) => { delete d.topic.outcomes[0].baseline; }), 'topic.outcomes.0.baseline', at('topic.outcomes.0.baseline', 'a group of fields (risk, periodYears, periodUnit, source)', 'nothing')],
   ['a baseline risk of true', damaged((d) => { d.topic.outcomes[0].baseline.risk = true; }), 'topic.outcomes.0.baseline.risk', at('topic.outcomes.0.baseline.risk', 'a number, text or null', 'the value true')],
   ['a baseline period written as text', damaged((d) => { d.topic.outcomes[2].baseline.periodYears = 'ten'; }), 'topic.outcomes.2.baseline.periodYears', at('topic.outcomes.2.baseline.periodYears', 'a number', 'the text "ten"')],
   ['effects given as a group', damaged((d) => { d.topic.outcomes[0].effects = {}; }), 'topic.outcomes.0.effects', at('topic.outcomes.0.effects', 'a list', 'a group of fields')],
@@ -238,9 +240,9 @@ const damagedFiles: readonly [string, string, string, string][] = [
   ['a long text shortened in the message', damaged((d) => { d.topic.options[0].isComparison = 'this is a very long piece of text indeed'; }), 'topic.options.0.isComparison', at('topic.options.0.isComparison', 'true or false', 'the text "this is a very long piece of t…"')],
   ['the topic given as a list', damaged((d) => { d.topic = []; }), 'topic', at('topic', 'a group of fields', 'a list')],
   ['no topic at all', damaged((d) => { delete d.topic; }), 'topic', at('topic', 'a group of fields', 'nothing')],
-  ['a version written as text', damaged((d) => { d.version = '2'; }), 'version', at('version', '2', 'the text "2"')],
-  ['a version of 0', damaged((d) => { d.version = 0; }), 'version', at('version', '2', 'the number 0')],
-  ['a missing version', damaged((d) => { delete d.version; }), 'version', at('version', '2', 'nothing')],
+  ['a version written as text', damaged((d) => { d.version = '2'; }), 'version', at('version', '2 or 3', 'the text "2"')],
+  ['a version of 0', damaged((d) => { d.version = 0; }), 'version', at('version', '2 or 3', 'the number 0')],
+  ['a missing version', damaged((d) => { delete d.version; }), 'version', at('version', '2 or 3', 'nothing')],
   ['the wrong format', damaged((d) => { d.format = 'spreadsheet'; }), 'format', 'This file is not a Chancewise topic (its format is "spreadsheet").'],
   ['no format', damaged((d) => { delete d.format; }), 'format', NOT_A_TOPIC],
   ['a list instead of a topic file', '[1, 2]', 'format', NOT_A_TOPIC],

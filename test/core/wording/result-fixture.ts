@@ -83,6 +83,8 @@ export interface OutcomeSpec {
   readonly id?: string;
   readonly name?: string;
   readonly kind?: 'benefit' | 'harm';
+  /** The event is one people want. */
+  readonly wanted?: boolean;
   readonly isHeadline?: boolean;
   /** People with the outcome without any option, and its risk when not count / denominator. */
   readonly comparison: number;
@@ -98,6 +100,7 @@ export function outcomeFixture(spec: OutcomeSpec, denominator: Denominator): Out
     outcomeId: spec.id ?? 'stroke',
     name: spec.name ?? 'a stroke',
     kind: spec.kind ?? 'benefit',
+    wanted: spec.wanted ?? false,
     isHeadline: spec.isHeadline ?? true,
     baselineRisk: comparisonRisk,
     baselineSource: 'Illustrative, invented for tests',
@@ -121,6 +124,7 @@ export function topicFixture(
     title: 'Taking a tablet to lower the chance of a stroke (illustrative)',
     population: settings.population ?? 'adults aged 60 to 69 with high blood pressure',
     periodYears: settings.periodYears ?? 10,
+    periodUnit: 'years',
     denominator,
     illustrative: true,
     outcomes: outcomes.map((outcome) => outcomeFixture(outcome, denominator)),

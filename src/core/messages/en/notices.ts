@@ -3,6 +3,21 @@ import { formatDecimal, formatPercent } from '../format-number.ts';
 
 type Render = (values: ProblemValues) => string;
 
+const UNIT_WORDS: Readonly<Record<string, readonly [string, string]>> = {
+  days: ['day', 'days'],
+  weeks: ['week', 'weeks'],
+  months: ['month', 'months'],
+  years: ['year', 'years'],
+};
+
+/** A span of time from an amount and its unit ("3 days", "1 year"); years when no unit is given. */
+const span = (values: ProblemValues, key: string): string => {
+  const amount = values[key];
+  const [one, other] = UNIT_WORDS[String(values[`${key}Unit`] ?? 'years')] ?? UNIT_WORDS.years ?? ['year', 'years'];
+  const shown = typeof amount === 'number' ? formatDecimal(amount, 2) : String(amount ?? '');
+  return `${shown} ${amount === 1 ? one : other}`;
+};
+
 const text = (values: ProblemValues, key: string): string => String(values[key] ?? '');
 const percent = (values: ProblemValues, key: string): string => {
   const value = values[key];
@@ -18,6 +33,8 @@ export type NoticeCode =
   | 'counts-ratios-undefined'
   | 'counts-baseline-from-trial'
   | 'hr-proportional-hazards'
+  | 'opposite-ratio-applied'
+  | 'opposite-odds-ratio-inverted'
   | 'denominator-raised'
   | 'reading-grade-high';
 
@@ -26,9 +43,9 @@ export const noticeMessages: Record<NoticeCode, Render> = {
   'interval-ignores-baseline-uncertainty': () =>
     'The intervals reflect uncertainty in the effect only, not in the baseline risk.',
   'baseline-period-converted': (v) =>
-    `The baseline risk of ${percent(v, 'risk')} over ${text(v, 'from')} years was converted to ${percent(v, 'converted')} over ${text(v, 'to')} years, assuming a constant hazard.`,
+    `The baseline risk of ${percent(v, 'risk')} over ${span(v, 'from')} was converted to ${percent(v, 'converted')} over ${span(v, 'to')}, assuming a constant hazard.`,
   'period-beyond-followup': (v) =>
-    `The period of ${text(v, 'period')} years is longer than the ${text(v, 'followup')} years over which the effect${v.option === undefined ? '' : ` of ${text(v, 'option')}`} was measured: the result assumes the effect lasts.`,
+    `The period of ${span(v, 'period')} is longer than the ${span(v, 'followup')} over which the effect${v.option === undefined ? '' : ` of ${text(v, 'option')}`} was measured: the result assumes the effect lasts.`,
   'counts-zero-cell-corrected': () =>
     'A cell of the trial table is 0, so 0.5 was added to every cell to compute the ratios (Haldane–Anscombe correction).',
   'counts-ratios-undefined': () =>
@@ -37,6 +54,10 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     `No baseline risk was given${v.outcome === undefined ? '' : ` for ${text(v, 'outcome')}`}, so the trial’s comparison arm was used as the baseline. The patient’s own risk may differ.`,
   'hr-proportional-hazards': () =>
     'The hazard ratio was applied assuming proportional hazards over the whole period.',
+  'opposite-ratio-applied': (v) =>
+    `The ${text(v, 'measure') === 'hr' ? 'hazard ratio' : text(v, 'measure') === 'rrr' ? 'relative reduction' : text(v, 'measure') === 'arr' ? 'absolute reduction' : 'risk ratio'} was reported for the opposite event, so it was applied to the chance of not having the outcome. A ratio for one event is not the same as the inverse ratio for its opposite: check that the trial reported it this way.`,
+  'opposite-odds-ratio-inverted': () =>
+    'The odds ratio was reported for the opposite event, so its inverse (1 ÷ OR) was used; for odds ratios this is exact.',
   'denominator-raised': () =>
     'The numbers are shown per 1000 people, because per 100 they would round a difference away or move it by half a person or more.',
   'reading-grade-high': (v) => {

@@ -112,7 +112,7 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'file-format-unknown': (v) =>
     `This file is not a Chancewise topic (its format is "${text(v, 'format')}").`,
   'file-version-unsupported': (v) =>
-    `This topic file has version ${text(v, 'version')}, newer than this version of Chancewise reads (up to ${text(v, 'supported')}). Update Chancewise.`,
+    `This topic file was made by a newer Chancewise (file version ${text(v, 'version')}; this one reads up to version ${text(v, 'supported')}). Update Chancewise to open it; the file has not been changed.`,
   'file-field-invalid': (v) =>
     `This topic file is damaged at "${text(v, 'path')}": expected ${text(v, 'expected')}, found ${text(v, 'received')}.`,
   'cli-usage': (v) => text(v, 'detail'),
