@@ -45,6 +45,8 @@ export function runCompute(args: readonly string[]): CommandOutput {
     const result = computeTopicOrFail(topic, parsePer(parsed));
     return { stdout: json ? `${JSON.stringify(topicJson(result), null, 2)}\n` : topicSummary(result) };
   }
-  const result = computeEffect(effectQueryFromFlags(parsed));
-  return { stdout: json ? `${JSON.stringify(effectJson(result), null, 2)}\n` : effectSummary(result) };
+  const query = effectQueryFromFlags(parsed);
+  const result = computeEffect(query);
+  const wanted = query.wanted === true;
+  return { stdout: json ? `${JSON.stringify(effectJson(result, wanted), null, 2)}\n` : effectSummary(result, wanted) };
 }

@@ -28,6 +28,8 @@ export const EFFECT_FLAGS: Readonly<Record<string, FlagSpec>> = {
   '--counts': { takesValue: true, example: '12/100,20/100' },
   '--method': { takesValue: true, example: 'newcombe' },
   '--per': { takesValue: true, example: '100' },
+  '--wanted': { takesValue: false },
+  '--opposite': { takesValue: false },
 };
 
 const MEASURE_FLAGS: readonly [string, EffectMeasure][] = [
@@ -147,6 +149,8 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
   const methodText = valueOf(parsed, '--method');
   const per = parsePer(parsed);
   const followUpText = valueOf(parsed, '--followup');
+  const wanted = parsed.flags.has('--wanted');
+  const opposite = parsed.flags.has('--opposite');
   if (given.length > 1) throw new UsageError(words.twoEffects(given[0]?.[0] ?? '', given[1]?.[0] ?? ''));
   let method: 'newcombe' | 'wald' = 'newcombe';
   if (methodText !== undefined) {
@@ -162,7 +166,14 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
       if (parsed.flags.has(flag)) throw new UsageError(words.effectWithCounts(flag));
     }
     const level = levelText === undefined ? 0.95 : parseLevel(levelText);
-    return { baseline: null, effect: { measure: 'counts', ...parseCounts(countsText), level }, per, method, field: '--counts' };
+    return {
+      baseline: null,
+      effect: { measure: 'counts', ...parseCounts(countsText), level, ...(opposite ? { opposite } : {}) },
+      per,
+      method,
+      field: '--counts',
+      wanted,
+    };
   }
   const chosen = given[0];
   if (chosen === undefined) throw new UsageError(words.noEffect());
@@ -178,11 +189,19 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
   const followUpYears = followUpText === undefined ? null : parseYears(followUpText, '--followup');
   return {
     baseline,
-    effect: { measure, estimate, lower: interval?.lower ?? null, upper: interval?.upper ?? null, level },
+    effect: {
+      measure,
+      estimate,
+      lower: interval?.lower ?? null,
+      upper: interval?.upper ?? null,
+      level,
+      ...(opposite ? { opposite } : {}),
+    },
     periods,
     followUpYears,
     resultYears: periods?.targetYears ?? null,
     per,
     field: flag,
+    wanted,
   };
 }

@@ -44,9 +44,13 @@ export function effectFieldsJson(result: EffectResult): { [key: string]: Json } 
   };
 }
 
-/** The JSON object printed by `chancewise compute` for bare effect flags or trial counts. */
-export function effectJson(result: EffectComputation): Json {
-  const fields = effectFieldsJson(result);
+/**
+ * The JSON object printed by `chancewise compute` for bare effect flags or trial counts.
+ * `wanted` says whether the event is one people want (`--wanted`); `absoluteReduction` and
+ * `perPeople.difference` stay comparison − option either way, and `nnt.label` follows help and harm.
+ */
+export function effectJson(result: EffectComputation, wanted = false): Json {
+  const fields: { [key: string]: Json } = { wanted, ...effectFieldsJson(result) };
   const counts = result.counts;
   if (counts !== null) {
     Object.assign(fields, {
@@ -75,6 +79,7 @@ export function topicJson(result: TopicResult): Json {
     outcomes: result.outcomes.map((outcome) => ({
       name: outcome.name,
       kind: outcome.kind,
+      wanted: outcome.wanted,
       headline: outcome.isHeadline,
       baselineRisk: finite(outcome.baselineRisk),
       options: outcome.options.map((option) => ({

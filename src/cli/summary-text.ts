@@ -1,6 +1,9 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
+import { benefitOf, changeOf } from '../core/direction.ts';
 import { formatDecimal, formatPercent } from '../core/messages/format-number.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
+import { amountIn } from '../core/time-unit.ts';
+import type { TimeUnit } from '../core/time-unit.ts';
 import type { Estimate, Notice } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
@@ -13,17 +16,37 @@ function withRange(value: Estimate, show: (number: number) => string): string {
   return `${show(value.estimate)} (${show(value.lower)} to ${show(value.upper)})`;
 }
 
-function effectLines(result: EffectResult, indent: string): string[] {
-  const lines: string[] = [];
-  if (result.comparisonRisk !== null) lines.push(`Risk without the option: ${withRange(result.comparisonRisk, percent)}`);
-  if (result.interventionRisk !== null) lines.push(`Risk with the option:    ${withRange(result.interventionRisk, percent)}`);
-  if (result.relativeRisk !== null) {
-    lines.push(`Risk ratio:              ${withRange(result.relativeRisk, (value) => formatDecimal(value, 3))}`);
-  }
+/** One labelled row; rows of one summary share a width so their values line up. */
+const row = (label: string, value: string, width: number): string => `${`${label}:`.padEnd(width)} ${value}`;
+
+/**
+ * The absolute difference as its row reads: for an event to avoid, the reduction (comparison −
+ * option); for an event people want, the gain (option − comparison). Either way the label says
+ * which, and a negative value says what it means.
+ */
+function differenceRow(result: EffectResult, wanted: boolean, width: number): string {
   const reduction = result.absoluteReduction;
-  const note = reduction.estimate < 0 ? ', negative: an increase' : '';
-  lines.push(`Absolute reduction:      ${withRange(reduction, points)} percentage points${note}`);
-  lines.push(`Number needed to treat:  ${result.nnt.text}`);
+  if (!wanted) {
+    const note = reduction.estimate < 0 ? ', negative: an increase' : '';
+    return row('Absolute reduction', `${withRange(reduction, points)} percentage points${note}`, width);
+  }
+  const gain = benefitOf(reduction, true);
+  const note = changeOf(reduction.estimate, true) === 'harms' ? ', negative: fewer people have it' : '';
+  return row('Absolute gain', `${withRange(gain, points)} percentage points${note}`, width);
+}
+
+function effectLines(result: EffectResult, indent: string, wanted: boolean): string[] {
+  const lines: string[] = [];
+  // A wanted event is a chance, not a risk; the measure keeps its name ("risk ratio").
+  const noun = wanted ? 'Chance' : 'Risk';
+  const width = wanted ? 26 : 24;
+  if (result.comparisonRisk !== null) lines.push(row(`${noun} without the option`, withRange(result.comparisonRisk, percent), width));
+  if (result.interventionRisk !== null) lines.push(row(`${noun} with the option`, withRange(result.interventionRisk, percent), width));
+  if (result.relativeRisk !== null) {
+    lines.push(row('Risk ratio', withRange(result.relativeRisk, (value) => formatDecimal(value, 3)), width));
+  }
+  lines.push(differenceRow(result, wanted, width));
+  lines.push(row('Number needed to treat', result.nnt.text, width));
   const people = result.perPeople;
   if (people !== null) {
     const change =
@@ -32,9 +55,7 @@ function effectLines(result: EffectResult, indent: string): string[] {
         : people.difference > 0
           ? `${people.difference} fewer`
           : `${-people.difference} more`;
-    lines.push(
-      `Out of ${people.denominator} people:    ${people.comparison} without, ${people.intervention} with the option (${change})`,
-    );
+    lines.push(row(`Out of ${people.denominator} people`, `${people.comparison} without, ${people.intervention} with the option (${change})`, width));
   }
   return lines.map((line) => `${indent}${line}`);
 }
@@ -45,8 +66,8 @@ function warningLines(notices: readonly Notice[]): string[] {
 }
 
 /** The readable summary of one effect, for a terminal. */
-export function effectSummary(result: EffectComputation): string {
-  const lines = effectLines(result, '');
+export function effectSummary(result: EffectComputation, wanted = false): string {
+  const lines = effectLines(result, '', wanted);
   const counts = result.counts;
   if (counts !== null) {
     if (counts.oddsRatio !== null) lines.push(`Odds ratio:              ${withRange(counts.oddsRatio, (value) => formatDecimal(value, 3))}`);
@@ -64,21 +85,36 @@ export function effectSummary(result: EffectComputation): string {
   return `${[...lines, ...warningLines(result.notices)].join('\n')}\n`;
 }
 
+const UNIT_WORDS: Readonly<Record<TimeUnit, readonly [string, string]>> = {
+  days: ['day', 'days'],
+  weeks: ['week', 'weeks'],
+  months: ['month', 'months'],
+  years: ['year', 'years'],
+};
+
+/** A topic's period in the unit it was given in: "10 years", "3 days". */
+function periodText(years: number, unit: TimeUnit): string {
+  const amount = amountIn(years, unit);
+  const [one, other] = UNIT_WORDS[unit];
+  return `${formatDecimal(amount, 2)} ${amount === 1 ? one : other}`;
+}
+
 /** The readable summary of a whole topic, for a terminal. */
 export function topicSummary(result: TopicResult): string {
   const lines = [
     result.title,
-    `For ${result.population}, over ${formatDecimal(result.periodYears, 2)} years, per ${result.denominator} people.`,
+    `For ${result.population}, over ${periodText(result.periodYears, result.periodUnit)}, per ${result.denominator} people.`,
   ];
   if (result.illustrative) lines.push('Illustrative example: invented numbers, not for real decisions.');
   for (const outcome of result.outcomes) {
-    lines.push('', `${outcome.name} (${outcome.kind}${outcome.isHeadline ? ', headline' : ''})`);
+    const wanted = outcome.wanted ? ', an event people want' : '';
+    lines.push('', `${outcome.name} (${outcome.kind}${wanted}${outcome.isHeadline ? ', headline' : ''})`);
     for (const option of outcome.options) {
       if (option.isComparison) {
         lines.push(`  ${option.name} (comparison): ${option.perPeople.comparison} in ${result.denominator} (${percent(option.comparisonRisk.estimate)})`);
         continue;
       }
-      lines.push(`  ${option.name}:`, ...effectLines(option, '    '));
+      lines.push(`  ${option.name}:`, ...effectLines(option, '    ', outcome.wanted));
     }
   }
   const warnings = warningLines(result.notices);

@@ -8,7 +8,7 @@ import { computeJson, estimatesIn, numbersIn, run } from './support.ts';
 const ESTIMATE_KEYS = ['estimate', 'lower', 'upper'];
 const NNT_KEYS = ['estimate', 'label', 'rounded', 'text'];
 const PEOPLE_KEYS = ['comparison', 'denominator', 'difference', 'intervention'];
-const EFFECT_KEYS = ['absoluteReduction', 'comparisonRisk', 'interventionRisk', 'nnt', 'perPeople', 'relativeRisk', 'warnings'];
+const EFFECT_KEYS = ['absoluteReduction', 'comparisonRisk', 'interventionRisk', 'nnt', 'perPeople', 'relativeRisk', 'wanted', 'warnings'];
 const COUNTS_KEYS = [...EFFECT_KEYS, 'chiSquare', 'chiSquareYates', 'cramersV', 'fisherExactP', 'oddsRatio'];
 
 const keysOf = (value: unknown): string[] => Object.keys(value as object).sort();

@@ -88,3 +88,24 @@ describe('numberNeeded never lets Infinity out', () => {
     expect(numberNeeded({ estimate: 0.1, lower: 1e-320, upper: 0.25 }).text).toBe('NNTB 10 (NNTB 4 to ∞)');
   });
 });
+
+describe('numberNeeded for an event people want', () => {
+  // A wanted event made more likely is a benefit: RR 1.5 at 30% gives 45%, 15 more in 100,
+  // NNTB 7; the interval 1.2 to 1.9 gives 36% to 57%, 6 to 27 more, NNTB 4 to 17 (Cochrane
+  // Handbook 5.1 §12.5.4.1 formula NNT = 1/|ARD|, rounded up; labels after Altman 1998).
+  it('labels a wanted event made more likely NNTB, with its interval', () => {
+    const result = numberNeeded({ estimate: 0.3 - 0.45, lower: 0.3 - 0.57, upper: 0.3 - 0.36 }, { wanted: true });
+    expect(result).toMatchObject({ rounded: 7, label: 'NNTB', text: 'NNTB 7 (NNTB 4 to 17)' });
+  });
+
+  it('labels a wanted event made less likely NNTH', () => {
+    expect(numberNeeded({ estimate: 0.05, lower: 0.02, upper: 0.08 }, { wanted: true }).text).toBe('NNTH 20 (NNTH 13 to 50)');
+  });
+
+  it('still writes an interval that crosses no effect benefit end first', () => {
+    // The mirror of Altman 1998's ARR 0.10 (−0.05 to 0.25): for a wanted event the gain is 0.10 (−0.05 to 0.25).
+    expect(numberNeeded({ estimate: -0.1, lower: -0.25, upper: 0.05 }, { wanted: true }).text).toBe(
+      'NNTB 10 (NNTB 4 to ∞ to NNTH 20)',
+    );
+  });
+});

@@ -1,6 +1,6 @@
 import { amountOf } from './amount-of.ts';
 import { frequencyBand } from './frequency-band.ts';
-import { amountNumbers, optionCount, optionRisk, optionSentence } from './option-context.ts';
+import { amountNumbers, optionCount, optionRisk, optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
@@ -15,12 +15,12 @@ import type { WordingSentence } from './wording-sentence.ts';
  * @example bandSentence(context).numbers // => { count: 3, denominator: 100 }
  */
 export function bandSentence(context: OptionContext): WordingSentence {
-  const { option, outcome, denominator, catalogue } = context;
+  const { option, denominator, catalogue } = context;
   const risk = optionRisk(option);
   const band = frequencyBand(risk);
   const count = optionCount(option);
   const amount = amountOf(count, denominator, risk);
-  const text = catalogue.band({ option: option.name, outcome: outcome.name, band, amount, denominator });
+  const text = catalogue.band({ ...optionValues(context), band, amount, denominator });
   const numbers = band === 'not-known' ? {} : { ...amountNumbers(amount, count), denominator };
   return optionSentence(context, 'band', text, numbers);
 }

@@ -1,5 +1,5 @@
 import { changeDirection } from './change-sentence.ts';
-import { optionSentence } from './option-context.ts';
+import { optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
@@ -16,12 +16,11 @@ import type { WordingSentence } from './wording-sentence.ts';
  * @example certaintySentence(context)?.text // => 'Statin probably reduces the chance of a stroke.'
  */
 export function certaintySentence(context: OptionContext): WordingSentence | null {
-  const { option, outcome, catalogue } = context;
+  const { option, catalogue } = context;
   if (option.certainty === null) return null;
   const direction = changeDirection(context);
   const text = catalogue.certainty({
-    option: option.name,
-    outcome: outcome.name,
+    ...optionValues(context),
     certainty: option.certainty,
     importance: direction === 'same' ? 'trivial' : (option.importance ?? 'important'),
     direction: direction === 'more' ? 'increase' : 'reduce',

@@ -1,5 +1,5 @@
 import { amountOf } from './amount-of.ts';
-import { amountNumbers, optionCount, optionRisk, optionSentence } from './option-context.ts';
+import { amountNumbers, optionCount, optionRisk, optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { ChangeDirection } from './wording-catalogue.ts';
 import type { WordingSentence } from './wording-sentence.ts';
@@ -23,12 +23,12 @@ export function changeDirection(context: OptionContext): ChangeDirection {
  * @example changeSentence(context).numbers // => { avoided: 4, denominator: 100 }
  */
 export function changeSentence(context: OptionContext): WordingSentence {
-  const { option, outcome, denominator, catalogue } = context;
+  const { option, denominator, catalogue } = context;
   const direction = changeDirection(context);
   const count = direction === 'fewer' ? option.groups.prevented : direction === 'more' ? option.groups.caused : 0;
   const withOutcome = optionCount(option);
   const either = amountOf(withOutcome, denominator, optionRisk(option));
-  const text = catalogue.change({ option: option.name, outcome: outcome.name, direction, count, either, denominator });
+  const text = catalogue.change({ ...optionValues(context), direction, count, either, denominator });
   const numbers: Record<string, number> =
     direction === 'fewer'
       ? { avoided: count, denominator }

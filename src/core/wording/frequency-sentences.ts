@@ -1,5 +1,5 @@
 import { amountOf } from './amount-of.ts';
-import { amountNumbers, optionCount, optionRisk, optionSentence } from './option-context.ts';
+import { amountNumbers, optionCount, optionRisk, optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
@@ -14,19 +14,19 @@ import type { WordingSentence } from './wording-sentence.ts';
  * @example frequencySentences(context).map((found) => found.kind) // => ['event-frame', 'free-frame']
  */
 export function frequencySentences(context: OptionContext): readonly [WordingSentence, WordingSentence] {
-  const { option, outcome, denominator, years, catalogue } = context;
+  const { option, denominator, years, unit, catalogue } = context;
   const withOutcome = optionCount(option);
   const withoutOutcome = denominator - withOutcome;
   const risk = optionRisk(option);
   const eventAmount = amountOf(withOutcome, denominator, risk);
   const freeAmount = amountOf(withoutOutcome, denominator, risk === null ? null : 1 - risk);
   const event = catalogue.eventFrame({
-    option: option.name,
-    outcome: outcome.name,
+    ...optionValues(context),
     amount: eventAmount,
     denominator,
     group: context.group(denominator),
     years,
+    unit,
   });
   const free = catalogue.freeFrame({ amount: freeAmount, denominator });
   return [

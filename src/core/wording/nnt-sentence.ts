@@ -1,4 +1,4 @@
-import { optionSentence } from './option-context.ts';
+import { optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
@@ -14,12 +14,12 @@ import type { WordingSentence } from './wording-sentence.ts';
  * @example nntSentence(context).numbers // => { nnt: 17, years: 10 }
  */
 export function nntSentence(context: OptionContext): WordingSentence {
-  const { option, outcome, years, catalogue } = context;
+  const { option, years, unit, catalogue } = context;
   const { rounded, label } = option.nnt;
-  const values = { option: option.name, outcome: outcome.name };
+  const values = optionValues(context);
   if (rounded === null || label === null || !Number.isFinite(rounded)) {
     return optionSentence(context, 'nnt-none', catalogue.nntNone(values), {}, 'clinician');
   }
-  const text = catalogue.nnt({ ...values, label, count: rounded, group: context.group(rounded), years });
+  const text = catalogue.nnt({ ...values, label, count: rounded, group: context.group(rounded), years, unit });
   return optionSentence(context, 'nnt', text, { nnt: rounded, years }, 'clinician');
 }

@@ -1,6 +1,7 @@
+import type { TimeUnit } from '../time-unit.ts';
 import type { OptionOutcomeResult, OutcomeResult } from '../topic/topic-result.ts';
 import type { PeopleCounts } from '../types.ts';
-import type { Amount, WordingMessages } from './wording-catalogue.ts';
+import type { Amount, OptionValues, WordingMessages } from './wording-catalogue.ts';
 import type { SentenceKind, WordingSentence } from './wording-sentence.ts';
 
 /** Everything a sentence builder needs about one option and one outcome. */
@@ -9,9 +10,16 @@ export interface OptionContext {
   readonly option: OptionOutcomeResult;
   readonly denominator: number;
   readonly years: number;
+  /** The unit the topic's period was given in, for the words. */
+  readonly unit: TimeUnit;
   readonly catalogue: WordingMessages;
   /** The reference-class phrase for a count of people. */
   readonly group: (count: number) => string;
+}
+
+/** The values every sentence about this option and outcome shares. */
+export function optionValues(context: OptionContext): OptionValues {
+  return { option: context.option.name, outcome: context.outcome.name, wanted: context.outcome.wanted };
 }
 
 /** People who have the outcome with this option, as drawn: `event` plus `caused`. */

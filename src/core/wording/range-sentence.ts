@@ -1,4 +1,4 @@
-import { optionSentence, peopleOf } from './option-context.ts';
+import { optionSentence, optionValues, peopleOf } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { RangeCase } from './wording-catalogue.ts';
 import type { WordingSentence } from './wording-sentence.ts';
@@ -49,9 +49,9 @@ const rangeNumbers = (found: RangeCase): Record<string, number> => {
  * @example rangeSentence(context).numbers // => { low: 2, high: 6, denominator: 100 }
  */
 export function rangeSentence(context: OptionContext): WordingSentence {
-  const { option, outcome, denominator, catalogue } = context;
+  const { option, denominator, catalogue } = context;
   const people = peopleOf(option);
-  const values = { option: option.name, outcome: outcome.name };
+  const values = optionValues(context);
   if (people === null || people.interventionRange === null) {
     return optionSentence(context, 'range-unknown', catalogue.rangeUnknown(values), {});
   }

@@ -1,4 +1,4 @@
-import { comparisonCount, optionCount, optionSentence } from './option-context.ts';
+import { comparisonCount, optionCount, optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
@@ -22,7 +22,7 @@ function wholePercent(value: number): number {
  * @example relativeSentence(context)?.numbers // => { from: 15, to: 11, denominator: 100, percent: 25 }
  */
 export function relativeSentence(context: OptionContext): WordingSentence | null {
-  const { option, outcome, denominator, catalogue } = context;
+  const { option, denominator, catalogue } = context;
   const from = comparisonCount(option);
   const to = optionCount(option);
   const ratio = option.relativeRisk?.estimate ?? null;
@@ -30,6 +30,6 @@ export function relativeSentence(context: OptionContext): WordingSentence | null
   const percent = Math.abs(wholePercent((1 - ratio) * 100));
   if (percent === 0 || ratio < 1 !== to < from) return null;
   const direction = ratio < 1 ? 'reduction' : 'increase';
-  const text = catalogue.relative({ option: option.name, outcome: outcome.name, from, to, denominator, direction, percent });
+  const text = catalogue.relative({ ...optionValues(context), from, to, denominator, direction, percent });
   return optionSentence(context, 'relative', text, { from, to, denominator, percent }, 'clinician');
 }

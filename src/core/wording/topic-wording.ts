@@ -1,4 +1,5 @@
 import { english } from '../messages/en/index.ts';
+import type { TimeUnit } from '../time-unit.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../topic/topic-result.ts';
 import { bandSentence } from './band-sentence.ts';
 import { certaintySentence } from './certainty-sentence.ts';
@@ -24,6 +25,8 @@ export interface OutcomeWording {
   readonly outcomeId: string;
   readonly name: string;
   readonly kind: 'benefit' | 'harm';
+  /** The event is one people want. */
+  readonly wanted: boolean;
   readonly isHeadline: boolean;
   readonly options: readonly OptionWording[];
 }
@@ -51,13 +54,13 @@ function groupOf(options: WordingOptions, catalogue: WordingMessages): (count: n
 function optionWording(
   outcome: OutcomeResult,
   option: OptionOutcomeResult,
-  years: number,
+  period: { readonly years: number; readonly unit: TimeUnit },
   denominator: number,
   options: WordingOptions,
 ): OptionWording {
   const catalogue = options.catalogue ?? english.wording;
   const group = groupOf(options, catalogue);
-  const context: OptionContext = { outcome, option, denominator, years, catalogue, group };
+  const context: OptionContext = { outcome, option, denominator, ...period, catalogue, group };
   const sentences: (WordingSentence | null)[] = [...frequencySentences(context)];
   if (!option.isComparison) {
     sentences.push(
@@ -108,9 +111,10 @@ export function topicWording(result: TopicResult, options: WordingOptions = {}):
       outcomeId: outcome.outcomeId,
       name: outcome.name,
       kind: outcome.kind,
+      wanted: outcome.wanted,
       isHeadline: outcome.isHeadline,
       options: outcome.options.map((option) =>
-        optionWording(outcome, option, result.periodYears, result.denominator, options),
+        optionWording(outcome, option, { years: result.periodYears, unit: result.periodUnit }, result.denominator, options),
       ),
     })),
   };

@@ -4,6 +4,7 @@
  * a language's catalogue turns it into words. A second language implements
  * `WordingMessages` in its own folder without touching the code that computes.
  */
+import type { TimeUnit } from '../time-unit.ts';
 import type { Certainty, Importance } from '../topic/topic.ts';
 
 /**
@@ -36,6 +37,18 @@ export type RangeCase =
 export interface OptionValues {
   readonly option: string;
   readonly outcome: string;
+  /**
+   * The event is one people want ("pain gone"): the words must not call it a risk, nor say
+   * that an option "causes" it or that people "avoid" it. `fewer` / `more` stay the event's
+   * direction; whether that helps follows from `wanted` (see `core/direction.ts`).
+   */
+  readonly wanted: boolean;
+}
+
+/** A period as the clinician gave it: its length in years and the unit to word it in. */
+export interface PeriodValues {
+  readonly years: number;
+  readonly unit: TimeUnit;
 }
 
 /** The templates of every patient-facing and clinician-facing wording sentence. */
@@ -50,8 +63,7 @@ export interface WordingMessages {
       readonly amount: Amount;
       readonly denominator: number;
       readonly group: string;
-      readonly years: number;
-    },
+    } & PeriodValues,
   ) => string;
   /** How many do not have it (the other frame of the same numbers). */
   readonly freeFrame: (values: { readonly amount: Amount; readonly denominator: number }) => string;
@@ -88,8 +100,7 @@ export interface WordingMessages {
       readonly label: 'NNTB' | 'NNTH';
       readonly count: number;
       readonly group: string;
-      readonly years: number;
-    },
+    } & PeriodValues,
   ) => string;
   /** No number needed to treat exists because the option makes no difference. */
   readonly nntNone: (values: OptionValues) => string;

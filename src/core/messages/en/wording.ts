@@ -3,7 +3,9 @@
  * the numbers. The code that computes passes named values and cases; only this
  * file knows English words, plurals and capitals.
  */
-import type { Amount, FrequencyBand, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
+import type { TimeUnit } from '../../time-unit.ts';
+import { amountIn } from '../../time-unit.ts';
+import type { Amount, FrequencyBand, PeriodValues, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
 import { formatDecimal } from '../format-number.ts';
 
 /** English plural rule: the `one` form for exactly 1, the `other` form otherwise. */
@@ -31,10 +33,28 @@ const haveVerb = (outcome: string): string => (startsWithVerb(outcome) ? 'end up
 const getVerb = (outcome: string, count: number): string =>
   startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get');
 
-const period = (years: number): string =>
-  years === 1 ? 'the next year' : `the next ${formatDecimal(years, 2)} years`;
+const UNIT_NAMES: Readonly<Record<TimeUnit, readonly [string, string]>> = {
+  days: ['day', 'days'],
+  weeks: ['week', 'weeks'],
+  months: ['month', 'months'],
+  years: ['year', 'years'],
+};
 
-const duration = (years: number): string => `${formatDecimal(years, 2)} ${plural(years, 'year', 'years')}`;
+/** A period as the clinician gave it, with its preposition: "in the next 10 years", "by day 3". */
+const within = ({ years, unit }: PeriodValues): string => {
+  const amount = amountIn(years, unit);
+  const shown = formatDecimal(amount, 2);
+  if (unit === 'days') return amount === 1 ? 'within a day' : `by day ${shown}`;
+  const [one, other] = UNIT_NAMES[unit];
+  return amount === 1 ? `in the next ${one}` : `in the next ${shown} ${other}`;
+};
+
+/** A length of time: "10 years", "3 days". */
+const duration = ({ years, unit }: PeriodValues): string => {
+  const amount = amountIn(years, unit);
+  const [one, other] = UNIT_NAMES[unit];
+  return `${formatDecimal(amount, 2)} ${plural(amount, one, other)}`;
+};
 
 /** An amount as it leads an "in 100" phrase: "about 15 in 100", "fewer than 1 in 1000". */
 const amountPhrase = (amount: Amount, denominator: number): string => {
@@ -76,6 +96,26 @@ const bandNames: Record<FrequencyBand, string> = {
   'not-known': 'not known',
 };
 
+/**
+ * The range of a wanted event: `avoid` means fewer people have it (they miss out because of
+ * the option), `get` means more people have it (they gain it).
+ */
+const wantedRange = (found: RangeCase, option: string, outcome: string, denominator: number): string => {
+  switch (found.variant) {
+    case 'avoid':
+      return `With ${option}, the number who miss out on ${outcome} because of it could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+    case 'get':
+      return `With ${option}, the number of extra people who ${haveVerb(outcome)} ${outcome} could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+    case 'narrow':
+      return found.direction === 'fewer'
+        ? `With ${option}, the research puts the number who miss out on ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`
+        : `With ${option}, the research puts the number of extra people who ${haveVerb(outcome)} ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`;
+    case 'either':
+    case 'no-change':
+      return range(found, option, outcome, denominator);
+  }
+};
+
 const range = (found: RangeCase, option: string, outcome: string, denominator: number): string => {
   switch (found.variant) {
     case 'avoid':
@@ -111,10 +151,13 @@ export const wordingMessages: WordingMessages = {
     const trimmed = population.trim();
     return `In these numbers, "${group}" means ${trimmed}${/[.!?]$/.test(trimmed) ? '' : '.'}`;
   },
-  eventFrame: ({ option, outcome, amount, denominator, group, years }) =>
-    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome} in ${period(years)}.`,
+  eventFrame: ({ option, outcome, amount, denominator, group, years, unit }) =>
+    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome} ${within({ years, unit })}.`,
   freeFrame: ({ amount, denominator }) => freeFrame(amount, denominator),
-  change: ({ option, outcome, direction, count, either, denominator }) => {
+  change: ({ option, outcome, wanted, direction, count, either, denominator }) => {
+    if (wanted && direction !== 'same') {
+      return `With ${option}, about ${count} ${direction === 'more' ? 'more' : 'fewer'} of those ${denominator} people ${haveVerb(outcome)} ${outcome}.`;
+    }
     switch (direction) {
       case 'fewer':
         return `With ${option}, about ${count} of those ${denominator} people ${plural(count, 'avoids', 'avoid')} ${outcome}.`;
@@ -124,7 +167,8 @@ export const wordingMessages: WordingMessages = {
         return `${capitalise(option)} makes little or no difference to how many people ${haveVerb(outcome)} ${outcome}: ${amountPhrase(either, denominator)} either way.`;
     }
   },
-  range: ({ option, outcome, range: found, denominator }) => range(found, option, outcome, denominator),
+  range: ({ option, outcome, wanted, range: found, denominator }) =>
+    (wanted ? wantedRange : range)(found, option, outcome, denominator),
   rangeUnknown: ({ option }) => `The research does not tell us how precise the numbers for ${option} are.`,
   certainty: ({ option, outcome, certainty, importance, direction }) => {
     if (certainty === 'very-low') {
@@ -137,10 +181,17 @@ export const wordingMessages: WordingMessages = {
     band === 'not-known'
       ? `With ${option}, how often ${outcome} happens is not known.`
       : `With ${option}, ${outcome} is ${bandNames[band]}: ${amountPhrase(amount, denominator)} people.`,
-  nnt: ({ option, outcome, label, count, group, years }) =>
-    `${label} ${count}: treating ${count} ${group} with ${option} for ${duration(years)} ${label === 'NNTB' ? 'prevents' : 'causes'} ${outcome} in one of them.`,
+  nnt: ({ option, outcome, wanted, label, count, group, years, unit }) => {
+    const treating = `${label} ${count}: treating ${count} ${group} with ${option} for ${duration({ years, unit })}`;
+    if (wanted) {
+      return `${treating} means one ${label === 'NNTB' ? 'more' : 'fewer'} of them has ${outcome}.`;
+    }
+    return `${treating} ${label === 'NNTB' ? 'prevents' : 'causes'} ${outcome} in one of them.`;
+  },
   nntNone: ({ option, outcome }) =>
     `There is no number needed to treat: on these numbers, ${option} makes no difference to the chance of ${outcome}.`,
-  relative: ({ option, outcome, from, to, denominator, direction, percent }) =>
-    `With ${option}, the chance of ${outcome} goes from ${from} in ${denominator} to ${to} in ${denominator}: a relative ${direction} of ${percent}%.`,
+  relative: ({ option, outcome, wanted, from, to, denominator, direction, percent }) =>
+    wanted
+      ? `With ${option}, the number who ${haveVerb(outcome)} ${outcome} goes from ${from} in ${denominator} to ${to} in ${denominator}: ${percent}% ${direction === 'increase' ? 'more' : 'fewer'} people.`
+      : `With ${option}, the chance of ${outcome} goes from ${from} in ${denominator} to ${to} in ${denominator}: a relative ${direction} of ${percent}%.`,
 };
