@@ -6,6 +6,7 @@
  */
 import { constants } from 'node:fs';
 import fs from 'node:fs/promises';
+import type { FileHandle } from 'node:fs/promises';
 
 /** Why a file was not read. */
 export type RegularFileRefusal = 'missing' | 'not-a-file' | 'link' | 'too-large' | 'unreadable';
@@ -51,8 +52,8 @@ export interface ReadableHandle {
 }
 
 /** The file calls the reader makes (`node:fs/promises` in the app; a fake in tests). */
-export interface RegularFileSystem {
-  open(filePath: string, flags: number): Promise<ReadableHandle>;
+export interface RegularFileSystem<Handle extends ReadableHandle = ReadableHandle> {
+  open(filePath: string, flags: number): Promise<Handle>;
   lstat(filePath: string): Promise<{ readonly dev: number; readonly ino: number; isSymbolicLink(): boolean }>;
 }
 
@@ -72,8 +73,8 @@ export interface ReadRules extends OpenRules {
 }
 
 /** A file opened and found to be a regular file. */
-export interface OpenedRegularFile {
-  readonly handle: ReadableHandle;
+export interface OpenedRegularFile<Handle extends ReadableHandle = ReadableHandle> {
+  readonly handle: Handle;
   readonly info: RegularFileInfo;
 }
 
@@ -83,7 +84,7 @@ export interface RegularFileContent {
   readonly info: RegularFileInfo;
 }
 
-export const nodeRegularFileSystem: RegularFileSystem = {
+export const nodeRegularFileSystem: RegularFileSystem<FileHandle> = {
   open: (filePath, flags) => fs.open(filePath, flags),
   lstat: (filePath) => fs.lstat(filePath),
 };
@@ -118,12 +119,12 @@ function refusalFor(code: string | null): RegularFileRefusal {
  * device or socket), and, unless links are allowed, not reached through a link as the
  * last part of its name. Throws `RegularFileError`. The caller closes the handle.
  */
-export async function openRegularFile(
+export async function openRegularFile<Handle extends ReadableHandle = FileHandle>(
   filePath: string,
   rules: OpenRules,
-  fileSystem: RegularFileSystem = nodeRegularFileSystem,
-): Promise<OpenedRegularFile> {
-  let handle: ReadableHandle;
+  fileSystem: RegularFileSystem<Handle> = nodeRegularFileSystem as unknown as RegularFileSystem<Handle>,
+): Promise<OpenedRegularFile<Handle>> {
+  let handle: Handle;
   try {
     handle = await fileSystem.open(filePath, openFlags(rules.followLink));
   } catch (error) {
