@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import fs from 'node:fs/promises';
 import path from 'node:path';
 import { readRegularFile } from '../src/shared/regular-file.ts';
 import type { RegularFileInfo } from '../src/shared/regular-file.ts';
@@ -41,7 +42,8 @@ async function readKey(keyPath: string, owner: KeyOwner): Promise<SnapshotKey | 
 /**
  * The secret key that seals snapshots, kept in the user-data folder in a file only its
  * owner can read and write (0600). A missing, damaged or untrustworthy key file (a link,
- * readable by others, someone else's) is replaced by a new random key, so snapshots sealed
+ * readable by others, someone else's) is removed and replaced by a new random key (a link
+ * is never written through), so snapshots sealed
  * under the old one are no longer offered: safer than trusting a key others may have read.
  */
 export async function loadSnapshotKey(userDataPath: string, owner: KeyOwner = thisProcess): Promise<SnapshotKey> {
@@ -49,6 +51,8 @@ export async function loadSnapshotKey(userDataPath: string, owner: KeyOwner = th
   const existing = await readKey(keyPath, owner);
   if (existing !== null) return existing;
   const key = randomBytes(KEY_BYTES);
+  // Whatever stood there goes first: a link is removed, never written through.
+  await fs.rm(keyPath, { force: true });
   await writeFileAtomic(keyPath, `${key.toString('hex')}\n`, { mode: OWNER_ONLY_MODE });
   return key;
 }

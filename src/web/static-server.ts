@@ -5,14 +5,13 @@
  * security headers, nothing cached across builds. A file it may not read gets 403, any other
  * failure 500; the process never stops over one request.
  */
-import { lstat } from 'node:fs/promises';
 import type { FileHandle } from 'node:fs/promises';
 import { createServer } from 'node:http';
 import type { IncomingMessage, Server, ServerResponse } from 'node:http';
 import { extname, join, normalize, relative, resolve, sep } from 'node:path';
 import { pipeline } from 'node:stream';
-import { openRegularFile, RegularFileError } from '../shared/regular-file.ts';
-import type { OpenedRegularFile } from '../shared/regular-file.ts';
+import { nodeRegularFileSystem, openRegularFile, RegularFileError } from '../shared/regular-file.ts';
+import type { OpenedRegularFile, RegularFileSystem } from '../shared/regular-file.ts';
 import { isAllowedHost } from './host-policy.ts';
 
 const CONTENT_TYPES: Readonly<Record<string, string>> = {
@@ -37,6 +36,8 @@ export interface StaticServerSettings {
   readonly headers: Readonly<Record<string, string>>;
   /** Host names answered besides localhost, 127.0.0.1 and [::1] (`--allow-host`). */
   readonly allowedHosts?: readonly string[];
+  /** The file calls (`node:fs/promises`; a fake in tests, to fail as a file no one may read does). */
+  readonly fileSystem?: RegularFileSystem<FileHandle>;
 }
 
 /** The file a request path names inside `root`, or null when it would leave `root` or is malformed. */
@@ -66,19 +67,24 @@ type Unserved = 403 | 404 | 500;
  * file (a symbolic link anywhere below it is refused, so none can lead outside), no hidden
  * part, a folder served by its index.html. Opened once, judged by its handle.
  */
-async function openServedFile(root: string, file: string): Promise<(OpenedRegularFile<FileHandle> & { readonly target: string }) | Unserved> {
+async function openServedFile(
+  root: string,
+  file: string,
+  fileSystem: RegularFileSystem<FileHandle>,
+): Promise<(OpenedRegularFile<FileHandle> & { readonly target: string }) | Unserved> {
   const parts = relative(root, file).split(sep).filter((part) => part !== '');
   if (parts.some((part) => part.startsWith('.'))) return 404;
   let current = root;
+  let isFolder = true;
   for (const part of parts) {
     current = join(current, part);
-    const entry = await lstat(current).catch(() => null);
+    const entry = await fileSystem.lstat(current).catch(() => null);
     if (entry === null || entry.isSymbolicLink()) return 404;
+    isFolder = entry.isDirectory();
   }
-  const entry = await lstat(current).catch(() => null);
-  const target = entry?.isDirectory() === true ? join(current, 'index.html') : current;
+  const target = isFolder ? join(current, 'index.html') : current;
   try {
-    return { target, ...(await openRegularFile(target, { followLink: false })) };
+    return { target, ...(await openRegularFile(target, { followLink: false }, fileSystem)) };
   } catch (error) {
     return unservedFor(error);
   }
@@ -113,7 +119,7 @@ async function handle(settings: StaticServerSettings, request: IncomingMessage, 
     send(response, 404, headers, 'Not found\n');
     return;
   }
-  const opened = await openServedFile(resolve(settings.root), file);
+  const opened = await openServedFile(resolve(settings.root), file, settings.fileSystem ?? nodeRegularFileSystem);
   if (typeof opened === 'number') {
     send(response, opened, headers, UNSERVED_TEXT[opened]);
     return;
