@@ -126,9 +126,10 @@ export function checkSnapshotRequest(args: readonly unknown[]): PayloadCheck<Sna
  * Windows' reserved device names, alone or before an extension ("NUL.pdf" is the null
  * device too): Microsoft, "Naming Files, Paths, and Namespaces", Naming Conventions
  * ("CON, PRN, AUX, NUL, COM0-COM9 ... LPT0-LPT9 ... also avoid these names followed
- * immediately by an extension"), including the superscript digits ¹ ² ³ it lists.
+ * immediately by an extension ... NUL.txt and NUL.tar.gz are both equivalent to NUL"),
+ * including the superscript digits ¹ ² ³ it lists.
  */
-const RESERVED_DEVICE_NAME = /^(?:con|prn|aux|nul|com[0-9¹²³]|lpt[0-9¹²³])(?:\.[^.]*)?$/iu;
+const RESERVED_DEVICE_NAME = /^(?:con|prn|aux|nul|com[0-9¹²³]|lpt[0-9¹²³])\s*(?:\..*)?$/iu;
 
 /**
  * Characters that change the direction text is shown in, so a name can read as another

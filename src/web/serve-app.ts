@@ -60,10 +60,15 @@ export async function serveApp(projectRoot: string, settings: ServeSettings, log
     await build({ root: projectRoot, logLevel: 'warn', configFile: join(projectRoot, 'vite.config.ts') });
   }
   const server = createStaticServer({ root: dist, headers: securityHeaders(), allowedHosts: settings.allowedHosts ?? [] });
-  if (!isLoopbackAddress(settings.host)) log(exposureWarning(settings.host));
   server.listen(settings.port, settings.host);
   await once(server, 'listening');
   const address = `http://${settings.host}:${settings.port}/`;
-  log(`Chancewise is served at ${address} (press Ctrl+C to stop)`);
+  for (const line of startupLines(settings.host, address)) log(line);
   return address;
+}
+
+/** What is printed once the server listens: a warning first when it listens beyond this machine. */
+export function startupLines(host: string, address: string): string[] {
+  const served = `Chancewise is served at ${address} (press Ctrl+C to stop)`;
+  return isLoopbackAddress(host) ? [served] : [exposureWarning(host), served];
 }
