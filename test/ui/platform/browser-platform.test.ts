@@ -9,14 +9,15 @@ afterEach(() => {
 /** Run pickTextFile with the file input answering as if the person picked `file`. */
 function pick(file: File): Promise<unknown> {
   const create = document.createElement.bind(document);
-  vi.spyOn(document, 'createElement').mockImplementation((name: string) => {
+  const answering = (name: string): HTMLElement => {
     const element = create(name);
     if (element instanceof HTMLInputElement) {
       Object.defineProperty(element, 'files', { value: [file] });
       element.click = () => element.dispatchEvent(new Event('change'));
     }
     return element;
-  });
+  };
+  vi.spyOn(document, 'createElement').mockImplementation(answering as typeof document.createElement);
   return pickTextFile('.cwtopic,.json');
 }
 
