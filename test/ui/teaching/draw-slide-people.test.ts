@@ -31,7 +31,7 @@ describe('drawing a slide’s people', () => {
   it('draws one path per person, each with its look, in a square view box for 100', () => {
     const { svg } = drawn(HEART, 'helped', 1);
     expect(svg.querySelectorAll('path.person')).toHaveLength(100);
-    expect(lookCounts(svg)).toEqual({ event: 11, prevented: 4, free: 85 });
+    expect(lookCounts(svg)).toEqual({ event: 11, helped: 4, free: 85 });
     const [, , width, height] = (svg.getAttribute('viewBox') ?? '').split(' ').map(Number);
     expect(width).toBeCloseTo(102.5, 6);
     expect(height).toBeCloseTo(102.5, 6);
@@ -39,11 +39,11 @@ describe('drawing a slide’s people', () => {
 
   it('fills helped people with the dot pattern and harmed people with the hatch, both defined in the drawing', () => {
     const helped = drawn(HEART, 'helped', 1).svg;
-    const dots = helped.querySelector('path[data-look="prevented"]')?.getAttribute('fill') ?? '';
+    const dots = helped.querySelector('path[data-look="helped"]')?.getAttribute('fill') ?? '';
     expect(dots).toMatch(/^url\(#test-helped-dots\)$/);
     expect(helped.querySelector('pattern#test-helped-dots')).not.toBeNull();
     const harmed = drawn(HEART, 'harmed', 1).svg;
-    expect(harmed.querySelector('path[data-look="caused"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
+    expect(harmed.querySelector('path[data-look="harmed"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
     expect(harmed.querySelector('path[data-look="event"]')?.getAttribute('fill')).toBe(colourPalette.groups.event.fill);
   });
 
@@ -66,7 +66,7 @@ describe('drawing a slide’s people', () => {
 
   it('draws a legend figure of one look in a unit box', () => {
     const svg = document.createElementNS(SVG, 'svg');
-    drawSwatch(svg, 'caused', 'swatch-test');
+    drawSwatch(svg, 'harmed', 'swatch-test');
     expect(svg.getAttribute('viewBox')).toBe('0 0 10 10');
     const figures = svg.querySelectorAll(':scope > path');
     expect(figures).toHaveLength(1);

@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
 import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
-import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
+import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
+import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
 import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
 // A slide for slide decks: 16:9 at 1920 × 1080 (ITU-R BT.709 full HD frame), standalone SVG 1.1
@@ -16,8 +17,8 @@ function parsed(text: string): Document {
 describe('a slide as an SVG file', () => {
   it.each([HEART, SCREENING])('writes every step of %s as a full-HD standalone SVG with all its people', (name) => {
     const item = itemOf(demoTopic(name));
-    for (const kind of DEFAULT_STEPS) {
-      const slide = buildSlide(item, kind);
+    for (const { kind, part } of slidePlaces([item])) {
+      const slide = buildSlide(item, kind, teachingMessagesEn, part);
       const text = slideSvgText(slide, document, 'Slide 1 of 11', 'Illustrative');
       expect(text.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg')).toBe(true);
       const doc = parsed(text);
@@ -30,7 +31,7 @@ describe('a slide as an SVG file', () => {
       const words = doc.documentElement.textContent ?? '';
       expect(words).toContain(slide.heading.split(' ')[0] ?? '');
       // Everything of the slide stays above the footer rule.
-      expect(Number(root.getAttribute('data-content-bottom')), `${name} ${kind}`).toBeLessThanOrEqual(FOOTER_TOP);
+      expect(Number(root.getAttribute('data-content-bottom')), `${name} ${kind} ${part}`).toBeLessThanOrEqual(FOOTER_TOP);
       expect(words.includes('Illustrative')).toBe(slide.illustrative);
     }
   });
