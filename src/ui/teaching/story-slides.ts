@@ -160,7 +160,18 @@ function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms
           { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
         ]
       : [];
-  const lines = changed > 0 ? [] : [line(source.messages.story.noOneChanged(group, outcome.wanted, denominator, outcome.name, option.name))];
+  const lines: SlideLine[] = [];
+  if (changed === 0) {
+    lines.push(line(source.messages.story.noOneChanged(group, outcome.wanted, denominator, outcome.name, option.name)));
+    // The option may change people the other way on this outcome: say so, in their own look.
+    const other = kind === 'helped' ? 'harmed' : 'helped';
+    const otherGroup = changedGroup(other, outcome.wanted);
+    const moved = option.groups[otherGroup];
+    if (moved > 0) {
+      const because = source.messages.callouts.changedBecause(otherGroup, outcome.wanted, moved, outcome.name, option.name);
+      lines.push(line(source.messages.story.instead(words.countIn(moved, denominator), because), 'body', other));
+    }
+  }
   return slide(kind, source, {
     layout: 'pair',
     ...(heading === undefined ? {} : { heading }),

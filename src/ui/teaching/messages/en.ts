@@ -168,6 +168,8 @@ export const teachingMessagesEn = {
     /** No one changed: "none of 100 avoid a stroke …", "none of 100 miss out on pain relief …". */
     noOneChanged: (group: 'prevented' | 'caused', wanted: boolean, denominator: number, outcome: string, option: string) =>
       `At these numbers, none of ${denominator} ${changedVerb(group, wanted, outcome, 2)} ${outcome} because of ${option}.`,
+    /** The people an option changes the other way: "Instead, 10 in 100 miss out on … because of …". */
+    instead: (count: string, because: string) => `Instead, ${count} ${because}.`,
     /** The heading of one of a step's several slides (one per harm, say): "Who is harmed (1 of 2)". */
     partOf: (heading: string, part: number, parts: number) => (parts > 1 ? `${heading} (${part} of ${parts})` : heading),
     certaintyLabel: 'Certainty of the evidence',
