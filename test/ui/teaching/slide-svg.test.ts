@@ -5,7 +5,7 @@ import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
 import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
 import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
 import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { HEART, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
 
 // A slide for slide decks: 16:9 at 1920 × 1080 (ITU-R BT.709 full HD frame), standalone SVG 1.1
 // text with its XML declaration (W3C SVG 1.1, §1.3), every person of every array drawn.
@@ -15,8 +15,12 @@ function parsed(text: string): Document {
 }
 
 describe('a slide as an SVG file', () => {
-  it.each([HEART, SCREENING])('writes every step of %s as a full-HD standalone SVG with all its people', (name) => {
-    const item = itemOf(demoTopic(name));
+  it.each([
+    [HEART, demoTopic],
+    [SCREENING, demoTopic],
+    [WANTED, fixtureTopic],
+  ])('writes every slide of %s as a full-HD standalone SVG with all its people', (name, topicOf) => {
+    const item = itemOf(topicOf(name));
     for (const { kind, part } of slidePlaces([item])) {
       const slide = buildSlide(item, kind, teachingMessagesEn, part);
       const text = slideSvgText(slide, document, 'Slide 1 of 11', 'Illustrative');

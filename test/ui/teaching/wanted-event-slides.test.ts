@@ -80,7 +80,7 @@ describe('a wanted event made more likely: 25% by day 3, risk ratio 1.8 (1.4 to 
     expect(found.absolute?.value).toBe('20 in 100 more');
     expect(found.absolute?.detail).toBe('45 − 25 = 20 more in 100');
     expect(found.nnt?.label).toBe('NNTB');
-    expect(found.nnt?.value).toBe('Treat 5 for 1 more to have it');
+    expect(found.nnt?.value).toBe('Treat 5 for 1 more');
     expect(found.nnt?.detail).toBe('100 ÷ 20 = 5, rounded up: 5');
   });
 
@@ -162,7 +162,7 @@ describe('a wanted event made less likely: 50% over 6 months, risk ratio 0.8', (
     expect(found.absolute?.value).toBe('10 in 100 fewer');
     expect(found.absolute?.detail).toBe('50 − 40 = 10 fewer in 100');
     expect(found.nnt?.label).toBe('NNTH');
-    expect(found.nnt?.value).toBe('Treat 10 for 1 fewer to have it');
+    expect(found.nnt?.value).toBe('Treat 10 for 1 fewer');
     expect(found.nnt?.detail).toBe('100 ÷ 10 = 10, rounded down: 10');
   });
 });
@@ -212,7 +212,7 @@ describe('every harm of a topic with a wanted headline, one unwanted and one wan
       '60% more people have it',
       '48 − 30 = 18 more in 100',
       'NNTB',
-      'Treat 6 for 1 more to have it',
+      'Treat 6 for 1 more',
       '100 ÷ 18 = 5.56, rounded up: 6',
     ]);
   });

@@ -192,11 +192,12 @@ export const teachingMessagesEn = {
       `${larger} − ${smaller} = ${difference} ${direction} in ${denominator}`,
     absoluteNone: (denominator: number) => `No difference in ${denominator}`,
     nntLabel: 'NNT',
-    /** Unwanted: "Treat 27 to prevent 1"; wanted: "Treat 5 for 1 more to have it". */
+    /**
+     * Unwanted: "Treat 27 to prevent 1"; wanted: "Treat 5 for 1 more" (to have it), short
+     * enough for one line of the card beside 100 people.
+     */
     nntValue: (count: number, change: 'helps' | 'harms', wanted: boolean) =>
-      wanted
-        ? `Treat ${count} for 1 ${change === 'helps' ? 'more' : 'fewer'} to have it`
-        : `Treat ${count} to ${change === 'helps' ? 'prevent' : 'cause'} 1`,
+      wanted ? `Treat ${count} for 1 ${change === 'helps' ? 'more' : 'fewer'}` : `Treat ${count} to ${change === 'helps' ? 'prevent' : 'cause'} 1`,
     /** A number needed to benefit is rounded up, one needed to harm down. */
     nntDetail: (denominator: number, difference: string, quotient: string, count: number, rounding: 'up' | 'down') =>
       `${denominator} ÷ ${difference} = ${quotient}, rounded ${rounding}: ${count}`,
