@@ -1,11 +1,13 @@
 import type { EffectQuery } from '../core/compute-effect.ts';
+import { DEFAULT_LEVEL } from '../core/check-effect.ts';
 import { checkArm } from '../core/counts/index.ts';
 import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
 import { InputError, fail } from '../core/problems.ts';
 import type { ProblemCode, ProblemValues } from '../core/problems.ts';
-import type { ArmCounts, Denominator, EffectMeasure } from '../core/types.ts';
+import { WORDS_DENOMINATORS } from '../core/types.ts';
+import type { ArmCounts, EffectMeasure, WordsDenominator } from '../core/types.ts';
 import type { FlagSpec, ParsedArgs } from './parse-args.ts';
 import { valueOf } from './parse-args.ts';
 import { UsageError } from './usage-error.ts';
@@ -82,13 +84,14 @@ export function parseYears(input: string, field: string): number {
   return value;
 }
 
-/** Read --per: 100 or 1000. */
-export function parsePer(parsed: ParsedArgs): Denominator | null {
+/** Read --per: the words' denominator, 100 to 1,000,000 (written with or without commas). */
+export function parsePer(parsed: ParsedArgs): WordsDenominator | null {
   const value = valueOf(parsed, '--per');
   if (value === undefined) return null;
-  if (value.trim() === '100') return 100;
-  if (value.trim() === '1000') return 1000;
-  throw new UsageError(words.perValue(value));
+  const cleaned = value.trim().replace(/[,_\s]/g, '');
+  const found = WORDS_DENOMINATORS.find((denominator) => String(denominator) === cleaned);
+  if (found === undefined) throw new UsageError(words.perValue(value));
+  return found;
 }
 
 function parseValue(measure: EffectMeasure, input: string, field: string): number {
@@ -111,7 +114,7 @@ function parseArm(input: string, whole: string): ArmCounts {
   const events = readNumber(match[1] ?? '', '--counts', 'counts-unparsable', { input: whole });
   const total = readNumber(match[2] ?? '', '--counts', 'counts-unparsable', { input: whole });
   const arm = { events, total };
-  checkArm(arm, '--counts');
+  checkArm(arm, '--counts', input.trim());
   return arm;
 }
 
@@ -165,7 +168,7 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
     for (const flag of ['--ci', '--over', '--to', '--followup']) {
       if (parsed.flags.has(flag)) throw new UsageError(words.effectWithCounts(flag));
     }
-    const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+    const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
     return {
       baseline: null,
       effect: { measure: 'counts', ...parseCounts(countsText), level, ...(opposite ? { opposite } : {}) },
@@ -185,7 +188,7 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
   const baseline = baselineText === undefined ? null : parseBaselineRisk(baselineText, '--baseline');
   const estimate = parseValue(measure, valueOf(parsed, flag) ?? '', flag);
   const interval = ciText === undefined ? null : parseInterval(measure, ciText);
-  const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+  const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
   const followUpYears = followUpText === undefined ? null : parseYears(followUpText, '--followup');
   return {
     baseline,
