@@ -15,6 +15,7 @@ import { patternIdsFor, personPaint } from '../../render/svg/person-paint.ts';
 import type { PatternIds } from '../../render/svg/person-paint.ts';
 import { appendPatterns } from '../../render/svg/svg-patterns.ts';
 import { svgNumber } from '../../render/svg/svg-number.ts';
+import type { PersonGroup } from '../../core/types.ts';
 import type { PersonLook } from './slide-model.ts';
 
 const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
@@ -27,9 +28,22 @@ export function drawingSize(layout: IconArrayLayout): { readonly width: number; 
   return { width: layout.geometry.width * factor, height: layout.geometry.height * factor };
 }
 
+/**
+ * The palette's group of a look: the helped look is the fill of people an option spares an
+ * unwanted event (`prevented`), the harmed look that of people it gives one (`caused`), so a
+ * trainee learns one code for every chart and slide.
+ */
+const PAINT_OF: Readonly<Record<PersonLook, PersonGroup | 'uncertain'>> = {
+  event: 'event',
+  helped: 'prevented',
+  harmed: 'caused',
+  free: 'free',
+  uncertain: 'uncertain',
+};
+
 /** Give a path the paint of a look. */
 function paint(element: Element, look: PersonLook, palette: ChartPalette, ids: PatternIds, cellSize: number): void {
-  const found = personPaint(palette, look, ids, cellSize);
+  const found = personPaint(palette, PAINT_OF[look], ids, cellSize);
   element.setAttribute('fill', found.fill);
   element.setAttribute('stroke', found.stroke);
   if (found.dash !== null) {
@@ -50,6 +64,9 @@ export function drawPeopleGroup(
   idPrefix: string,
   palette: ChartPalette = colourPalette,
 ): { readonly width: number; readonly height: number } {
+  if (looks.length !== layout.people.length) {
+    throw new RangeError(`A slide array has ${layout.people.length} people but ${looks.length} looks; build both from the same groups.`);
+  }
   const scaled = scaleLayout(layout, UNITS_PER_CELL / layout.geometry.cellSize);
   const { cellSize, iconSize, patternTile } = scaled.geometry;
   const ids = patternIdsFor(idPrefix);
@@ -60,9 +77,11 @@ export function drawPeopleGroup(
   group.setAttribute('stroke-linejoin', 'round');
   for (const person of scaled.people) {
     const element = document.createElementNS(SVG_NAMESPACE, 'path');
-    const look = looks[person.index] ?? person.group;
+    const look = looks[person.index] ?? 'uncertain';
     element.setAttribute('d', placeGlyphPath(path, person.x, person.y));
     element.setAttribute('class', 'person');
+    // The group keeps its event meaning, as in the charts; the look says how the person is drawn.
+    element.setAttribute('data-outcome', person.group);
     element.setAttribute('data-look', look);
     paint(element, look, palette, ids, cellSize);
     group.appendChild(element);
