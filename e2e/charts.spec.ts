@@ -88,17 +88,17 @@ test.describe('people charts in the browser', () => {
     // People per 1000 = risk × 1000, rounded to whole people, halves up (common practice);
     // the risk with the option is the baseline × RR (Cochrane Handbook 5.1, §12.5.4).
     // Heart attack or stroke: 15% → 150; 15% × 0.75 = 11.25% → 112.5 → 113, so 37 avoid it.
-    expect(await drawnCounts(page, 'heart-stroke')).toEqual({
+    expect(await drawnCounts(page, 'stone')).toEqual({
       none: { event: 150, free: 850 },
       standard: { event: 113, prevented: 37, free: 850 },
     });
     // Muscle pain: 5% → 50; 5% × 1.2 = 6% → 60, so 10 more have it.
-    expect(await drawnCounts(page, 'muscle')).toEqual({
+    expect(await drawnCounts(page, 'night')).toEqual({
       none: { event: 50, free: 950 },
       standard: { event: 50, caused: 10, free: 940 },
     });
     // Type 2 diabetes: 8% → 80; 8% × 1.1 = 8.8% → 88, so 8 more have it.
-    expect(await drawnCounts(page, 'diabetes')).toEqual({
+    expect(await drawnCounts(page, 'stomach')).toEqual({
       none: { event: 80, free: 920 },
       standard: { event: 80, caused: 8, free: 912 },
     });
@@ -138,7 +138,7 @@ test.describe('people charts in the browser', () => {
     // Okabe & Ito (2008) blue for events; the free look is inherited from the people's group.
     expect(paints.event).toBe('rgb(0, 114, 178)');
     expect(paints.free).toBe('rgb(232, 232, 232)');
-    expect(paints.prevented).toMatch(/^url\(".*#chart-heart-stroke-dots"\)$/);
+    expect(paints.prevented).toMatch(/^url\(".*#chart-stone-dots"\)$/);
     expect(paints.filter).toBe('grayscale(1)');
     await page.screenshot({ path: 'test-results/charts-greyscale.png', fullPage: true });
     await finish();
@@ -155,10 +155,10 @@ test.describe('people charts in the browser', () => {
       const finish = await openChartPage(page, query);
       // The first two blocks of the option's array in the benefit chart and a harm chart, where groups meet.
       for (const [outcome, kind] of [
-        ['heart-stroke', 'benefit'],
-        ['muscle', 'harm'],
+        ['stone', 'benefit'],
+        ['night', 'harm'],
       ] as const) {
-        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="standard"] g.people`);
+        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="water"] g.people`);
         const box = await people.boundingBox();
         expect(box).not.toBeNull();
         if (box === null) continue;
@@ -179,8 +179,8 @@ test.describe('people charts in the browser', () => {
     const svg = page.locator('#charts svg.people-chart').first();
     await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
     // Range 102 to 125 around 113 with the standard dose: ranks 102–124 outlined (23 people).
-    await expect(svg.locator('g.chart-array[data-option-id="standard"] g.people > [stroke-dasharray]')).toHaveCount(23);
-    await expect(svg.locator('g.chart-array[data-option-id="none"] [stroke-dasharray]')).toHaveCount(0);
+    await expect(svg.locator('g.chart-array[data-option-id="water"] g.people > [stroke-dasharray]')).toHaveCount(23);
+    await expect(svg.locator('g.chart-array[data-option-id="as-now"] [stroke-dasharray]')).toHaveCount(0);
     await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
     await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });
     await finish();

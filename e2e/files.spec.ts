@@ -79,7 +79,7 @@ test.describe('files', () => {
     const chart = page.locator('article.outcome-result').first();
     const [svgDownload] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: 'Save chart as SVG' }).click()]);
     const svg = await readFile(await svgDownload.path(), 'utf8');
-    expect(svgDownload.suggestedFilename()).toMatch(/-heart-stroke\.svg$/);
+    expect(svgDownload.suggestedFilename()).toMatch(/-stone\.svg$/);
     expect(svg.startsWith('<?xml version="1.0" encoding="UTF-8"?>')).toBe(true);
     expect(svg).toMatch(/<svg[^>]* width="180mm"/);
     expect((svg.match(/data-outcome="event"/g) ?? []).length).toBe(15 + 11 + 10);

@@ -16,7 +16,7 @@ describe('the content of a handout', () => {
 
   it('shows the headline outcome, one picture per option, the comparison first', () => {
     expect(headline.isHeadline).toBe(true);
-    expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['none', 'standard', 'higher']);
+    expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['as-now', 'water', 'citrate']);
     expect(content.chart.titles).toEqual(['No tablet', 'The standard dose', 'The higher dose']);
   });
 
@@ -67,7 +67,7 @@ describe('the content of a handout', () => {
 
   it('puts every other outcome in the table, its cells in the order of the pictures', () => {
     const rows = content.table.sections.flatMap((section) => section.rows);
-    expect(rows.map((row) => row.outcomeId)).toEqual(['muscle', 'diabetes']);
+    expect(rows.map((row) => row.outcomeId)).toEqual(['night', 'stomach']);
     for (const row of rows) expect(row.cells).toHaveLength(3);
   });
 

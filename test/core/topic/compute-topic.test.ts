@@ -17,7 +17,7 @@ function demo(name: string): Topic {
   return reading.topic;
 }
 
-const HEART = '01-heart-tablet.json';
+const STONE = '01-kidney-stone.json';
 const SCREENING = '02-bowel-screening.json';
 const FRACTURE = '03-fracture-medicine.json';
 
@@ -30,7 +30,7 @@ const codes = (result: TopicResult): string[] => result.notices.map((notice) => 
 
 describe('computeTopic on the demo topics', () => {
   it.each([
-    [HEART, 100],
+    [STONE, 100],
     [SCREENING, 1000],
     [FRACTURE, 100],
   ] as const)('gives %s one denominator, %i, for every outcome and option', (name, denominator) => {
@@ -47,7 +47,7 @@ describe('computeTopic on the demo topics', () => {
     }
   });
 
-  it.each([HEART, SCREENING, FRACTURE])('lists the options of %s in the topic’s order, the comparison as a plain baseline', (name) => {
+  it.each([STONE, SCREENING, FRACTURE])('lists the options of %s in the topic’s order, the comparison as a plain baseline', (name) => {
     const topic = demo(name);
     const result = computeTopic(topic);
     for (const outcome of result.outcomes) {
@@ -67,7 +67,7 @@ describe('computeTopic on the demo topics', () => {
   });
 
   it('computes the heart demo’s numbers for each dose', () => {
-    const result = computeTopic(demo(HEART));
+    const result = computeTopic(demo(STONE));
     expect(result.periodYears).toBe(10);
     expect(result.illustrative).toBe(true);
     // Standard dose, RR 0.75 (0.68 to 0.83) at 15%: 11.25% (10.2% to 12.45%), 15 → 11 in 100, NNTB 27.
@@ -88,7 +88,7 @@ describe('computeTopic on the demo topics', () => {
   });
 
   it('warns once that the intervals leave out the baseline’s uncertainty', () => {
-    const result = computeTopic(demo(HEART));
+    const result = computeTopic(demo(STONE));
     expect(codes(result)).toEqual(['interval-ignores-baseline-uncertainty']);
   });
 
@@ -128,7 +128,7 @@ describe('computeTopic on the demo topics', () => {
     const result = computeTopic(demo(SCREENING), { per: 100 });
     expect(result.denominator).toBe(100);
     expect(codes(result)).not.toContain('denominator-raised');
-    const heart = computeTopic(demo(HEART), { per: 1000 });
+    const heart = computeTopic(demo(STONE), { per: 1000 });
     // 0.1125 × 1000 = 112.5 → 113 (rounded half up).
     expect(entry(heart, 0, 1).perPeople).toMatchObject({ denominator: 1000, comparison: 150, intervention: 113, difference: 37 });
   });
@@ -162,7 +162,7 @@ describe('computeTopic on the demo topics', () => {
 
 describe('evaluateTopic on a topic with problems', () => {
   it('returns every problem instead of a result', () => {
-    const topic: Topic = { ...demo(HEART), title: '', periodYears: -1 };
+    const topic: Topic = { ...demo(STONE), title: '', periodYears: -1 };
     const evaluation = evaluateTopic(topic);
     expect(evaluation.ok).toBe(false);
     expect(evaluation.result).toBeNull();
@@ -170,7 +170,7 @@ describe('evaluateTopic on a topic with problems', () => {
   });
 
   it('throws a TopicError carrying the problems from computeTopic', () => {
-    const topic: Topic = { ...demo(HEART), title: '' };
+    const topic: Topic = { ...demo(STONE), title: '' };
     expect(() => computeTopic(topic)).toThrow(TopicError);
     try {
       computeTopic(topic);
@@ -180,9 +180,9 @@ describe('evaluateTopic on a topic with problems', () => {
   });
 
   it('returns no problems and a result for a valid topic', () => {
-    const evaluation = evaluateTopic(demo(HEART));
+    const evaluation = evaluateTopic(demo(STONE));
     expect(evaluation.ok).toBe(true);
     expect(evaluation.problems).toEqual([]);
-    expect(evaluation.result?.title).toBe(demo(HEART).title);
+    expect(evaluation.result?.title).toBe(demo(STONE).title);
   });
 });

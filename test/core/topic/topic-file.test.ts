@@ -12,7 +12,7 @@ import * as v from 'valibot';
 // follow from that schema and from the rule that patient details stay out of files unless asked.
 
 const fixture = (path: string): string => readFileSync(new URL(`../../../${path}`, import.meta.url), 'utf8');
-const DEMOS = ['assets/demo/01-heart-tablet.json', 'assets/demo/02-bowel-screening.json', 'assets/demo/03-fracture-medicine.json'];
+const DEMOS = ['assets/demo/01-kidney-stone.json', 'assets/demo/02-bowel-screening.json', 'assets/demo/03-fracture-medicine.json'];
 const VERSION_1 = 'test/fixtures/topics/version-1-blood-pressure.json';
 
 function topicOf(text: string): Topic {

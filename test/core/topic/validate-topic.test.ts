@@ -18,7 +18,7 @@ function demo(name: string): Topic {
 
 /** A deep, writable copy of the first demo topic to damage. */
 type Writable<T> = { -readonly [K in keyof T]: T[K] extends object ? Writable<T[K]> : T[K] };
-const heart = (): Writable<Topic> => structuredClone(demo('01-heart-tablet.json')) as Writable<Topic>;
+const heart = (): Writable<Topic> => structuredClone(demo('01-kidney-stone.json')) as Writable<Topic>;
 const fracture = (): Writable<Topic> => structuredClone(demo('03-fracture-medicine.json')) as Writable<Topic>;
 
 function outcomeOf(topic: Writable<Topic>, index: number): Writable<TopicOutcome> {
@@ -36,7 +36,7 @@ const only = (problems: readonly Problem[]): Pick<Problem, 'code' | 'field'>[] =
   problems.map(({ code, field }) => ({ code, field }));
 
 describe('validateTopic', () => {
-  it.each(['01-heart-tablet.json', '02-bowel-screening.json', '03-fracture-medicine.json'])('finds nothing wrong with the demo %s', (name) => {
+  it.each(['01-kidney-stone.json', '02-bowel-screening.json', '03-fracture-medicine.json'])('finds nothing wrong with the demo %s', (name) => {
     expect(validateTopic(demo(name))).toEqual([]);
   });
 
@@ -62,7 +62,7 @@ describe('validateTopic', () => {
     ['an outcome name too long', (t) => { outcomeOf(t, 1).name = 'x'.repeat(TOPIC_LIMITS.outcomeNameLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.1.name' }],
     ['no headline outcome', (t) => { outcomeOf(t, 0).isHeadline = false; }, { code: 'topic-headline-count', field: 'outcomes' }],
     ['two headline outcomes', (t) => { outcomeOf(t, 1).isHeadline = true; }, { code: 'topic-headline-count', field: 'outcomes' }],
-    ['two outcomes with the same id', (t) => { outcomeOf(t, 2).id = 'muscle'; }, { code: 'topic-duplicate-id', field: 'outcomes.2.id' }],
+    ['two outcomes with the same id', (t) => { outcomeOf(t, 2).id = 'night'; }, { code: 'topic-duplicate-id', field: 'outcomes.2.id' }],
     ['two outcomes with the same name', (t) => { outcomeOf(t, 2).name = 'A heart attack or stroke'; }, { code: 'topic-duplicate-name', field: 'outcomes.2.name' }],
     ['a baseline source too long', (t) => { outcomeOf(t, 0).baseline.source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.0.baseline.source' }],
     ['a baseline period of zero', (t) => { outcomeOf(t, 1).baseline.periodYears = 0; }, { code: 'period-not-positive', field: 'outcomes.1.baseline.periodYears' }],
@@ -92,7 +92,7 @@ describe('validateTopic', () => {
 
   it('reports an effect entered for the comparison, and the option left without one', () => {
     const topic = heart();
-    effectOf(topic, 0, 1).optionId = 'none';
+    effectOf(topic, 0, 1).optionId = 'as-now';
     expect(only(validateTopic(topic as Topic))).toEqual([
       { code: 'topic-effect-on-comparison', field: 'outcomes.0.effects.1.optionId' },
       { code: 'topic-effect-missing', field: 'outcomes.0.effects' },
@@ -101,7 +101,7 @@ describe('validateTopic', () => {
 
   it('reports two effects for the same option on one outcome, and the option left without one', () => {
     const topic = heart();
-    effectOf(topic, 2, 1).optionId = 'standard';
+    effectOf(topic, 2, 1).optionId = 'water';
     expect(only(validateTopic(topic as Topic))).toEqual([
       { code: 'topic-duplicate-id', field: 'outcomes.2.effects' },
       { code: 'topic-effect-missing', field: 'outcomes.2.effects' },
@@ -133,7 +133,7 @@ describe('validateTopic', () => {
   it('reports two options with the same id', () => {
     const topic = heart();
     const option = topic.options[2];
-    if (option) option.id = 'standard';
+    if (option) option.id = 'water';
     expect(only(validateTopic(topic as Topic))).toContainEqual({ code: 'topic-duplicate-id', field: 'options.2.id' });
   });
 

@@ -14,7 +14,7 @@ import { numbersIn, oneInDenominators, sentencesOf, strokeTopic, topicFixture } 
 
 /** The three invented demo topics (illustrative), computed by the core. */
 function demoResults(): readonly TopicResult[] {
-  return ['01-heart-tablet', '02-bowel-screening', '03-fracture-medicine'].map((name) => {
+  return ['01-kidney-stone', '02-bowel-screening', '03-fracture-medicine'].map((name) => {
     const reading = readTopicFile(readFileSync(new URL(`../../../assets/demo/${name}.json`, import.meta.url), 'utf8'));
     if (!reading.ok) throw new Error(`demo ${name} does not read`);
     return computeTopic(reading.topic);

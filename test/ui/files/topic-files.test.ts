@@ -29,7 +29,7 @@ describe('topic files', () => {
   });
 
   test('will not write a file while a number cannot be read, and says so', () => {
-    const saved = topicFileText(setEffectField(demo, 'muscle', 'standard', 'estimate', '1..2'), false);
+    const saved = topicFileText(setEffectField(demo, 'night', 'water', 'estimate', '1..2'), false);
     expect(saved.ok).toBe(false);
     expect(!saved.ok && saved.message).toMatch(/One number cannot be read yet/);
   });

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { colourPalette } from '../../../src/render/palette.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { drawSlidePeople, drawSwatch } from '../../../src/ui/teaching/draw-slide-people.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
 // One figure per person, the whole denominator drawn (Ancker et al. 2006); the changed groups
 // carry a pattern as well as a colour, so colour is never the only cue (WCAG 2.2, 1.4.1).
@@ -29,7 +29,7 @@ const lookCounts = (svg: SVGSVGElement): Record<string, number> => {
 
 describe('drawing a slide’s people', () => {
   it('draws one path per person, each with its look, in a square view box for 100', () => {
-    const { svg } = drawn(HEART, 'helped', 1);
+    const { svg } = drawn(STONE, 'helped', 1);
     expect(svg.querySelectorAll('path.person')).toHaveLength(100);
     expect(lookCounts(svg)).toEqual({ event: 11, prevented: 4, free: 85 });
     const [, , width, height] = (svg.getAttribute('viewBox') ?? '').split(' ').map(Number);
@@ -38,17 +38,17 @@ describe('drawing a slide’s people', () => {
   });
 
   it('fills helped people with the dot pattern and harmed people with the hatch, both defined in the drawing', () => {
-    const helped = drawn(HEART, 'helped', 1).svg;
+    const helped = drawn(STONE, 'helped', 1).svg;
     const dots = helped.querySelector('path[data-look="prevented"]')?.getAttribute('fill') ?? '';
     expect(dots).toMatch(/^url\(#test-helped-dots\)$/);
     expect(helped.querySelector('pattern#test-helped-dots')).not.toBeNull();
-    const harmed = drawn(HEART, 'harmed', 1).svg;
+    const harmed = drawn(STONE, 'harmed', 1).svg;
     expect(harmed.querySelector('path[data-look="caused"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
     expect(harmed.querySelector('path[data-look="event"]')?.getAttribute('fill')).toBe(colourPalette.groups.event.fill);
   });
 
   it('draws uncertain people with a dashed outline and no fill colour of their group', () => {
-    const { svg } = drawn(HEART, 'uncertainty', 0);
+    const { svg } = drawn(STONE, 'uncertainty', 0);
     const outlined = [...svg.querySelectorAll('path[data-look="uncertain"]')];
     expect(outlined).toHaveLength(2);
     for (const path of outlined) {

@@ -3,7 +3,7 @@ import { evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
 import { DEFAULT_SCATTER_SEED } from '../../../src/render/icon-array-layout.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import type { PeoplePanel } from '../../../src/ui/teaching/slide-model.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
 // Each demonstration states one finding with its source: Galesic, Garcia-Retamero & Gigerenzer
 // (2009, Health Psychol 28:210) for 100 vs 1000; Ancker, Weber & Kukafka (2011, Med Decis Making
@@ -21,7 +21,7 @@ function groupsAt(name: string, per: 100 | 1000) {
 }
 
 describe('the format demonstrations', () => {
-  it.each([HEART, SCREENING])('draws %s with 100 and with 1000 people, each as the core counts it', (name) => {
+  it.each([STONE, SCREENING])('draws %s with 100 and with 1000 people, each as the core counts it', (name) => {
     const slide = buildSlide(itemOf(demoTopic(name)), 'denominator');
     const [hundred, thousand] = slide.panels;
     expect(hundred?.layout.denominator).toBe(100);
@@ -37,7 +37,7 @@ describe('the format demonstrations', () => {
   });
 
   it('draws the same people grouped and scattered, with the fixed seed, so only the arrangement differs', () => {
-    const slide = buildSlide(itemOf(demoTopic(HEART)), 'arrangement');
+    const slide = buildSlide(itemOf(demoTopic(STONE)), 'arrangement');
     const [grouped, scattered] = slide.panels;
     expect(grouped?.layout.arrangement).toBe('grouped');
     expect(scattered?.layout.arrangement).toBe('scattered');
@@ -46,12 +46,12 @@ describe('the format demonstrations', () => {
     const placesOf = (panel: PeoplePanel | undefined) => panel?.layout.people.filter((person) => person.group !== 'free').map((person) => person.index);
     expect(placesOf(scattered)).not.toEqual(placesOf(grouped));
     // Drawn twice, the scattered picture is the same picture.
-    expect(placesOf(buildSlide(itemOf(demoTopic(HEART)), 'arrangement').panels[1])).toEqual(placesOf(scattered));
+    expect(placesOf(buildSlide(itemOf(demoTopic(STONE)), 'arrangement').panels[1])).toEqual(placesOf(scattered));
     expect(slide.evidence?.source).toBe('Ancker, Weber & Kukafka 2011');
   });
 
   it('draws two totals beside the change shown as its own group, and gives the comparison’s total', () => {
-    const slide = buildSlide(itemOf(demoTopic(HEART)), 'incremental');
+    const slide = buildSlide(itemOf(demoTopic(STONE)), 'incremental');
     const [totals, change] = slide.panels;
     expect(counts(totals)).toEqual({ event: 11, free: 89 });
     expect(counts(change)).toEqual({ event: 11, prevented: 4, free: 85 });

@@ -4,7 +4,7 @@ import { topicWording } from '../../../src/core/wording/topic-wording.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { framingNumbers } from '../../../src/ui/teaching/framing-slide.ts';
 import { shortDecimal } from '../../../src/ui/teaching/messages/en.ts';
-import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // NNT = 1/ARR rounded up, ARR = p0 − p1 (Cochrane Handbook 5.1, §12.5.4.1–12.5.4.3; Altman 1998,
 // BMJ 317:1309). The worked examples are the Handbook's own (§12.5.4.2 for a risk ratio,
@@ -51,7 +51,7 @@ describe('the framing step', () => {
     expect(found.nnt?.value).toBe('No number needed to treat');
   });
 
-  it.each([HEART, SCREENING])('uses the core’s own figures for %s: its relative sentence, drawn people and NNT', (name) => {
+  it.each([STONE, SCREENING])('uses the core’s own figures for %s: its relative sentence, drawn people and NNT', (name) => {
     const topic = demoTopic(name);
     const result = computeTopic(topic);
     const wording = topicWording(result);
@@ -73,7 +73,7 @@ describe('the framing step', () => {
   });
 
   it('shows the people of the same result beside the cards, with its source line', () => {
-    const slide = buildSlide(itemOf(demoTopic(HEART)), 'framing');
+    const slide = buildSlide(itemOf(demoTopic(STONE)), 'framing');
     expect(slide.layout).toBe('cards');
     expect(slide.panels.map((panel) => panel.chips.map((chip) => [chip.look, chip.count]))).toEqual([
       [

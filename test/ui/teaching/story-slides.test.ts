@@ -4,7 +4,7 @@ import { handoutSentences } from '../../../src/core/wording/topic-wording.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { totalsOnly } from '../../../src/ui/teaching/people-panel.ts';
 import type { PeoplePanel, PersonLook } from '../../../src/ui/teaching/slide-model.ts';
-import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // Icon arrays show the whole denominator (Ancker et al. 2006), the same grouped layout for each
 // option side by side (Zikmund-Fisher et al. 2012), and the change as its own group
@@ -19,11 +19,11 @@ function looksCount(panel: PeoplePanel | undefined, look: PersonLook): number {
 }
 
 describe('the story slides of the heart topic (illustrative)', () => {
-  const topic = demoTopic(HEART);
+  const topic = demoTopic(STONE);
   const item = itemOf(topic);
   const result = computeTopic(topic);
   const headline = result.outcomes[0];
-  const standard = headline?.options.find((option) => option.optionId === 'standard');
+  const standard = headline?.options.find((option) => option.optionId === 'water');
 
   it('opens on the decision: title, who the numbers are for, the period and the options compared', () => {
     const slide = buildSlide(item, 'title');
@@ -76,7 +76,7 @@ describe('the story slides of the heart topic (illustrative)', () => {
 
   it('shows who is harmed on a harm outcome, the first the option adds people to', () => {
     const slide = buildSlide(item, 'harmed');
-    expect(item.harmId).toBe('muscle');
+    expect(item.harmId).toBe('night');
     expect(counts(slide.panels[1])).toEqual({ event: 5, caused: 1, free: 94 });
     expect(slide.callouts[0]).toEqual({ look: 'caused', value: '1 in 100', text: 'gets muscle pain bad enough to stop the tablet because of the standard dose' });
   });
@@ -147,11 +147,11 @@ describe('story slides of other topics', () => {
   });
 
   it('presents the option a set names, on every step', () => {
-    const item = itemOf(demoTopic(HEART), { option: 'higher' });
+    const item = itemOf(demoTopic(STONE), { option: 'citrate' });
     const slide = buildSlide(item, 'helped');
     expect(slide.panels[1]?.title).toBe('The higher dose');
     expect(counts(slide.panels[1])).toEqual({ event: 10, prevented: 5, free: 85 });
-    const evaluation = evaluateTopic(demoTopic(HEART));
+    const evaluation = evaluateTopic(demoTopic(STONE));
     if (!evaluation.ok) throw new Error('heart topic did not compute');
     expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({ denominator: 100, event: 10, prevented: 5, caused: 0, free: 85 });
   });

@@ -5,7 +5,7 @@ import { teachingKeyAction } from '../../../src/ui/teaching/teaching-keys.ts';
 import type { KeyPress } from '../../../src/ui/teaching/teaching-keys.ts';
 import { TeachingSession, slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
 import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
 // The step order is the teaching sequence of this view: the result told with people first
 // (baseline, with the option, helped, harmed, uncertainty, patient words), then one result
@@ -13,7 +13,7 @@ import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 // Zikmund-Fisher 2008), as listed in src/ui/teaching/teaching-steps.ts.
 
 function heartSession(): TeachingSession {
-  return new TeachingSession('Heart', [itemOf(demoTopic(HEART))]);
+  return new TeachingSession('Heart', [itemOf(demoTopic(STONE))]);
 }
 
 function press(session: TeachingSession, key: KeyPress): boolean {
@@ -85,7 +85,7 @@ describe('TeachingSession', () => {
         version: 1,
         title: 'Two topics',
         items: [
-          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(HEART) })), steps: ['title', 'helped'] },
+          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(STONE) })), steps: ['title', 'helped'] },
           { topic: { format: 'chancewise-topic', version: 2, topic: demoTopic(SCREENING) }, steps: ['title', 'harmed', 'framing'] },
         ],
       }),
@@ -112,15 +112,15 @@ describe('TeachingSession', () => {
   });
 
   it('writes the presentation as a set that reads back to the same topics and steps', () => {
-    const session = new TeachingSession('Saved', [itemOf(demoTopic(HEART), { steps: ['helped', 'framing'], option: 'higher' })]);
+    const session = new TeachingSession('Saved', [itemOf(demoTopic(STONE), { steps: ['helped', 'framing'], option: 'citrate' })]);
     const reading = readTeachingSet('saved.json', session.setFileText());
     if (!reading.ok) throw new Error(reading.message);
     expect(reading.set.title).toBe('Saved');
-    expect(reading.set.items[0]).toMatchObject({ option: 'higher', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(HEART) } });
+    expect(reading.set.items[0]).toMatchObject({ option: 'citrate', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(STONE) } });
   });
 
   it('presents a copy: stepping through never changes the topic it was given', () => {
-    const topic = demoTopic(HEART);
+    const topic = demoTopic(STONE);
     const before = JSON.stringify(topic);
     const session = new TeachingSession('Heart', [itemOf(topic)]);
     while (session.next()) void session.slide;
