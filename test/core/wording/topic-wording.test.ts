@@ -282,7 +282,7 @@ describe('handoutSentences', () => {
     expect(stroke.slice(6)).toEqual(['change', 'range', 'certainty', 'change', 'range-unknown', 'certainty']);
   });
 
-  it('reads the stroke handout with the tablet at grade 8 or below (NIH advice, Rooney et al. 2021)', () => {
+  it('reads the stroke handout with the tablet at grade 8 or below (the top of the usual grade 6 to 8, common practice)', () => {
     const text = handoutSentences(strokeTopic(), { showNnt: false })
       .filter((found) => found.kind !== 'population')
       .map((found) => found.text)

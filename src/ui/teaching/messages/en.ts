@@ -5,7 +5,7 @@
  */
 import type { StepKind } from '../teaching-steps.ts';
 
-/** A finding from the research and where it comes from (author and year). */
+/** A finding from the research and where it was published. */
 export interface EvidenceWords {
   readonly finding: string;
   readonly source: string;
@@ -156,11 +156,15 @@ export const teachingMessagesEn = {
     nntNone: 'No number needed to treat',
   },
 
-  /** What the research found about each format, in one line, with its source (author and year). */
+  /**
+   * What the research found about each format, in a line or two, with its source: the first
+   * authors, journal, year, volume and pages, so that two papers of the same year stay apart.
+   */
   evidence: {
     framing: {
-      finding: 'Compared with the absolute difference, a relative reduction made little or no difference to understanding; showing the NNT reduced it.',
-      source: 'Akl et al. 2011; Zipkin et al. 2014',
+      finding:
+        'Patients, the public and clinicians saw a relative reduction as bigger, and it swayed them more. Absolute numbers were understood as well or better; the NNT less well.',
+      source: 'Akl EA et al. Cochrane Database Syst Rev 2011;(3):CD006776 · Zipkin DA et al. Ann Intern Med 2014;161(4):270–280',
     },
     denominator: {
       finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
@@ -171,8 +175,10 @@ export const teachingMessagesEn = {
       source: 'Ancker, Weber & Kukafka 2011',
     },
     incremental: {
-      finding: 'Showing the change itself, not only the two totals, reduced worry and the bias from the size of the group.',
-      source: 'Zikmund-Fisher et al. 2008',
+      finding:
+        'In studies of medicine side effects, showing the extra risk on its own lowered worry and made the group size (100 or 1000) matter less. In words alone it was understood less well; with pictures, better.',
+      source:
+        'Zikmund-Fisher BJ, Fagerlin A, et al. J Health Commun 2008;13(2):107–124 · Zikmund-Fisher BJ, Ubel PA, et al. Patient Educ Couns 2008;73(2):209–214',
     },
   } satisfies Record<string, EvidenceWords>,
 
