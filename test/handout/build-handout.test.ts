@@ -138,7 +138,7 @@ describe('building a handout', () => {
   it('prints the clinician given and the NNT sentences when asked', () => {
     const text = pdfText(writePdf(build(demo, { clinician: 'Dr A. Patel, Riverside Surgery', showNnt: true }).pdf));
     expect(text).toContain('Prepared by Dr A. Patel, Riverside Surgery');
-    expect(text).toMatch(/NNTB \d+: treating \d+ people like you with the standard dose/);
+    expect(text).toMatch(/NNTB \d+: treating \d+ people like you with extra water each day/);
   });
 
   it('builds in the black-and-white print theme too', () => {

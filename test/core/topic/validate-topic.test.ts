@@ -48,7 +48,6 @@ describe('validateTopic', () => {
     ['a population too long', (t) => { t.population = 'x'.repeat(TOPIC_LIMITS.populationLength + 1); }, { code: 'topic-text-too-long', field: 'population' }],
     ['a period of zero years', (t) => { t.periodYears = 0; }, { code: 'period-not-positive', field: 'periodYears' }],
     ['a negative period', (t) => { t.periodYears = -5; }, { code: 'period-not-positive', field: 'periodYears' }],
-    ['a period beyond the limit', (t) => { t.periodYears = TOPIC_LIMITS.maxPeriodYears + 1; }, { code: 'period-too-long', field: 'periodYears' }],
     ['a follow-up beyond the limit', (t) => { effectOf(t, 0, 0).followUpYears = 250; }, { code: 'period-too-long', field: 'outcomes.0.effects.0.followUpYears' }],
     ['an evidence summary too long', (t) => { t.evidence.summary = 'x'.repeat(TOPIC_LIMITS.evidenceSummaryLength + 1); }, { code: 'topic-text-too-long', field: 'evidence.summary' }],
     ['a clinician name too long', (t) => { t.clinician = 'x'.repeat(TOPIC_LIMITS.clinicianLength + 1); }, { code: 'topic-text-too-long', field: 'clinician' }],
@@ -57,13 +56,13 @@ describe('validateTopic', () => {
     ['a question too long', (t) => { t.questions[2] = 'x'.repeat(TOPIC_LIMITS.questionLength + 1); }, { code: 'topic-text-too-long', field: 'questions.2' }],
     ['an empty option name', (t) => { const option = t.options[1]; if (option) option.name = ''; }, { code: 'topic-text-missing', field: 'options.1.name' }],
     ['an option name too long', (t) => { const option = t.options[2]; if (option) option.name = 'x'.repeat(TOPIC_LIMITS.optionNameLength + 1); }, { code: 'topic-text-too-long', field: 'options.2.name' }],
-    ['two options with the same name, whatever the case', (t) => { const option = t.options[2]; if (option) option.name = 'The Standard Dose'; }, { code: 'topic-duplicate-name', field: 'options.2.name' }],
+    ['two options with the same name, whatever the case', (t) => { const option = t.options[2]; if (option) option.name = 'Extra Water Each Day'; }, { code: 'topic-duplicate-name', field: 'options.2.name' }],
     ['an empty outcome name', (t) => { outcomeOf(t, 2).name = ''; }, { code: 'topic-text-missing', field: 'outcomes.2.name' }],
     ['an outcome name too long', (t) => { outcomeOf(t, 1).name = 'x'.repeat(TOPIC_LIMITS.outcomeNameLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.1.name' }],
     ['no headline outcome', (t) => { outcomeOf(t, 0).isHeadline = false; }, { code: 'topic-headline-count', field: 'outcomes' }],
     ['two headline outcomes', (t) => { outcomeOf(t, 1).isHeadline = true; }, { code: 'topic-headline-count', field: 'outcomes' }],
     ['two outcomes with the same id', (t) => { outcomeOf(t, 2).id = 'night'; }, { code: 'topic-duplicate-id', field: 'outcomes.2.id' }],
-    ['two outcomes with the same name', (t) => { outcomeOf(t, 2).name = 'A heart attack or stroke'; }, { code: 'topic-duplicate-name', field: 'outcomes.2.name' }],
+    ['two outcomes with the same name', (t) => { outcomeOf(t, 2).name = 'Another kidney stone'; }, { code: 'topic-duplicate-name', field: 'outcomes.2.name' }],
     ['a baseline source too long', (t) => { outcomeOf(t, 0).baseline.source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.0.baseline.source' }],
     ['a baseline period of zero', (t) => { outcomeOf(t, 1).baseline.periodYears = 0; }, { code: 'period-not-positive', field: 'outcomes.1.baseline.periodYears' }],
     ['no baseline risk for entered effects', (t) => { outcomeOf(t, 0).baseline.risk = null; }, { code: 'baseline-missing', field: 'outcomes.0.baseline.risk' }],
@@ -77,7 +76,7 @@ describe('validateTopic', () => {
     ['a relative reduction of 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'rrr', estimate: 100 }; }, { code: 'rrr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' }],
     ['an absolute reduction beyond 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'arr', estimate: 1.5 }; }, { code: 'arr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' }],
     ['a risk ratio pushing the risk above 100%', (t) => { effectOf(t, 0, 1).effect = { measure: 'rr', estimate: 8 }; }, { code: 'rr-risk-above-one', field: 'outcomes.0.effects.1.effect.estimate' }],
-    ['an absolute reduction larger than the baseline', (t) => { effectOf(t, 1, 0).effect = { measure: 'arr', estimate: 0.1 }; }, { code: 'risk-outside', field: 'outcomes.1.effects.0.effect.estimate' }],
+    ['an absolute reduction larger than the baseline', (t) => { effectOf(t, 1, 0).effect = { measure: 'arr', estimate: 0.2 }; }, { code: 'risk-outside', field: 'outcomes.1.effects.0.effect.estimate' }],
     ['an interval that misses its estimate', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.8, upper: 0.9 }; }, { code: 'interval-excludes-estimate', field: 'outcomes.0.effects.0.effect.interval' }],
     ['an interval with one limit', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.6, upper: null }; }, { code: 'interval-incomplete', field: 'outcomes.0.effects.0.effect.interval' }],
     ['an interval limit pushing the risk above 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 2, lower: 1.5, upper: 7 }; }, { code: 'limit-risk-outside', field: 'outcomes.0.effects.0.effect.upper' }],
@@ -88,6 +87,14 @@ describe('validateTopic', () => {
     const topic = heart();
     damage(topic);
     expect(only(validateTopic(topic as Topic))).toEqual([expected]);
+  });
+
+  it('reports a period beyond the limit at its field, first', () => {
+    // Over 101 years the 15% five-year chance of broken sleep grows past what a risk ratio of 1.6
+    // can act on, so the risks it would give are reported too, after the period.
+    const topic = heart();
+    topic.periodYears = TOPIC_LIMITS.maxPeriodYears + 1;
+    expect(only(validateTopic(topic as Topic))[0]).toEqual({ code: 'period-too-long', field: 'periodYears' });
   });
 
   it('reports an effect entered for the comparison, and the option left without one', () => {
@@ -197,7 +204,7 @@ describe('validateTopic', () => {
     expect(sentences).toEqual([
       'The decision is empty. Write a short decision.',
       'A risk of "15" is ambiguous: write 15% or 0.15.',
-      'A risk ratio of 30 at a baseline risk of 5% would mean a risk of 150%. Check the numbers, or enter the effect as an odds ratio.',
+      'A risk ratio of 30 at a baseline risk of 15% would mean a risk of 450%. Check the numbers, or enter the effect as an odds ratio.',
       'A period of "150" years is too long: write at most 100 years, for example 10.',
     ]);
   });
