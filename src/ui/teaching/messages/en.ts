@@ -157,14 +157,22 @@ export const teachingMessagesEn = {
   },
 
   /**
-   * What the research found about each format, in a line or two, with its source: the first
-   * authors, journal, year, volume and pages, so that two papers of the same year stay apart.
+   * What the research found about each format, short enough for a projector, with its source:
+   * first author, journal, year, volume and first page, so that two papers of one year stay apart.
+   * framing: Akl EA, Oxman AD, Herrin J, et al. Using alternative statistical formats for presenting
+   *   risks and risk reductions. Cochrane Database Syst Rev 2011;(3):CD006776; Zipkin DA, Umscheid
+   *   CA, Keating NL, et al. Evidence-based risk communication: a systematic review. Ann Intern Med
+   *   2014;161(4):270–280.
+   * incremental: Zikmund-Fisher BJ, Fagerlin A, Roberts TR, Derry HA, Ubel PA. Alternate methods of
+   *   framing information about medication side effects: incremental risk versus total risk of
+   *   occurrence. J Health Commun 2008;13(2):107–124; Zikmund-Fisher BJ, Ubel PA, Smith DM, et al.
+   *   Communicating side effect risks in a tamoxifen prophylaxis decision aid: the debiasing
+   *   influence of pictographs. Patient Educ Couns 2008;73(2):209–214.
    */
   evidence: {
     framing: {
-      finding:
-        'Patients, the public and clinicians saw a relative reduction as bigger, and it swayed them more. Absolute numbers were understood as well or better; the NNT less well.',
-      source: 'Akl EA et al. Cochrane Database Syst Rev 2011;(3):CD006776 · Zipkin DA et al. Ann Intern Med 2014;161(4):270–280',
+      finding: 'Patients and clinicians: a relative reduction looked bigger and persuaded more; absolute numbers were as clear or clearer, the NNT less so.',
+      source: 'Akl, Cochrane 2011;CD006776 · Zipkin, Ann Intern Med 2014;161:270',
     },
     denominator: {
       finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
@@ -175,10 +183,8 @@ export const teachingMessagesEn = {
       source: 'Ancker, Weber & Kukafka 2011',
     },
     incremental: {
-      finding:
-        'In studies of medicine side effects, showing the extra risk on its own lowered worry and made the group size (100 or 1000) matter less. In words alone it was understood less well; with pictures, better.',
-      source:
-        'Zikmund-Fisher BJ, Fagerlin A, et al. J Health Commun 2008;13(2):107–124 · Zikmund-Fisher BJ, Ubel PA, et al. Patient Educ Couns 2008;73(2):209–214',
+      finding: 'Side effects: the extra risk on its own eased worry; in words alone it was less clear, with pictures clearer.',
+      source: 'Zikmund-Fisher, J Health Commun 2008;13:107 · Patient Educ Couns 2008;73:209',
     },
   } satisfies Record<string, EvidenceWords>,
 
