@@ -77,13 +77,23 @@ describe('the framing step', () => {
     expect(slide.layout).toBe('cards');
     expect(slide.panels.map((panel) => panel.chips.map((chip) => [chip.look, chip.count]))).toEqual([
       [
-        ['event', 11],
-        ['prevented', 4],
-        ['free', 85],
+        ['event', 24],
+        ['prevented', 16],
+        ['free', 60],
       ],
     ]);
-    expect(slide.cards.map((card) => card.value)).toEqual(['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1']);
-    expect(slide.evidence?.source).toBe('Akl et al. 2011; Zipkin et al. 2014');
+    // RR 0.6 at 40%: 40% lower, 40 − 24 = 16 in 100 fewer, 100 ÷ 16 = 6.25 → 7 (derived).
+    expect(slide.cards.map((card) => card.value)).toEqual(['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1']);
+    // Akl et al. (Cochrane Database Syst Rev 2011;(3):CD006776), abstract: compared with the absolute
+    // reduction, a relative reduction made little or no difference to understanding but was seen as
+    // larger and was more persuasive; the NNT was understood less well than the absolute reduction.
+    // Zipkin et al. (Ann Intern Med 2014;161:270–280), abstract: absolute formats were better
+    // understood than relative ones, and the NNT lessened understanding.
+    expect(slide.evidence).toEqual({
+      finding:
+        'Patients and clinicians: a relative reduction looked bigger and persuaded more; absolute numbers were as clear or clearer, the NNT less so.',
+      source: 'Akl, Cochrane 2011;CD006776 · Zipkin, Ann Intern Med 2014;161:270',
+    });
   });
 });
 
