@@ -49,7 +49,7 @@ describe('checkDraft', () => {
   test('reports every problem at once, each at its own field, in the order the fields appear', () => {
     let draft = setTopicText(demo, 'title', '');
     draft = setEffectField(draft, 'night', 'water', 'estimate', 'abc');
-    draft = setEffectField(draft, 'stomach', 'citrate', 'lower', '1.3');
+    draft = setEffectField(draft, 'stomach', 'citrate', 'lower', '2.8');
     const check = checkDraft(draft);
     expect(check.savable).toBe(false);
     expect(check.problems.map((found) => [found.key, found.problem.code])).toEqual([

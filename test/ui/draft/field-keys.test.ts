@@ -5,7 +5,7 @@ import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');
-// Options: none (comparison), standard, higher. Outcomes: stone, muscle, diabetes.
+// Options: as-now (comparison), water, citrate. Outcomes: stone, night, stomach.
 const draft = draftFromTopic(first.topic);
 
 describe('fieldKeyForPath', () => {
@@ -13,7 +13,7 @@ describe('fieldKeyForPath', () => {
     ['title', 'title'],
     ['periodYears', 'periodYears'],
     ['options', 'options'],
-    ['options.2.name', 'options.higher.name'],
+    ['options.2.name', 'options.citrate.name'],
     ['outcomes.0.baseline.risk', outcomeKey('stone', 'baseline.risk')],
     ['outcomes.1.baseline.periodYears', outcomeKey('night', 'baseline.periodYears')],
     ['outcomes.2.name', outcomeKey('stomach', 'name')],
@@ -62,7 +62,7 @@ describe('fieldOrder', () => {
     const order = fieldOrder(draft);
     const at = (key: string) => order.indexOf(key);
     expect(order.slice(0, 3)).toEqual(['title', 'population', 'periodYears']);
-    expect(at('options.higher.name')).toBeLessThan(at(outcomeKey('stone', 'name')));
+    expect(at('options.citrate.name')).toBeLessThan(at(outcomeKey('stone', 'name')));
     expect(at(outcomeKey('stone', 'baseline.risk'))).toBeLessThan(at(effectKey('stone', 'water', 'estimate')));
     expect(at(effectKey('stone', 'citrate', 'source'))).toBeLessThan(at(outcomeKey('night', 'name')));
     expect(at(effectKey('stone', 'as-now', 'estimate'))).toBe(-1);
@@ -71,9 +71,9 @@ describe('fieldOrder', () => {
 
 describe('fieldPlace', () => {
   test('names where a field is, for a list of problems', () => {
-    expect(fieldPlace('options.higher.name', draft)).toBe('Option 3');
-    expect(fieldPlace(outcomeKey('night', 'baseline.risk'), draft)).toBe('muscle pain bad enough to stop the tablet');
-    expect(fieldPlace(effectKey('stomach', 'water', 'estimate'), draft)).toBe('type 2 diabetes, effect of the standard dose');
+    expect(fieldPlace('options.citrate.name', draft)).toBe('Option 3');
+    expect(fieldPlace(outcomeKey('night', 'baseline.risk'), draft)).toBe('broken sleep from passing urine at night');
+    expect(fieldPlace(effectKey('stomach', 'water', 'estimate'), draft)).toBe('an upset stomach bad enough to stop, effect of extra water each day');
     expect(fieldPlace('title', draft)).toBeNull();
   });
 

@@ -46,7 +46,7 @@ describe('topic files', () => {
   });
 
   test('names a new file after the decision, and keeps the name of an opened file', () => {
-    expect(suggestedFileName(demo, null)).toBe('taking-a-daily-tablet-to-lower-the-chance.cwtopic');
+    expect(suggestedFileName(demo, null)).toBe('ways-to-cut-the-chance-of-a-second.cwtopic');
     expect(suggestedFileName({ ...demo, title: '  ' }, null)).toBe('topic.cwtopic');
     expect(suggestedFileName(demo, 'mine.cwtopic')).toBe('mine.cwtopic');
     expect(suggestedFileName(demo, 'old.json')).toBe('old.cwtopic');

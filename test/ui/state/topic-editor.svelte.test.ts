@@ -68,7 +68,7 @@ describe('TopicEditor', () => {
     const { editor, type } = setUp();
     type(baselineKey, ['2', '20', '20%']);
     expect(editor.undo()).toBe(true);
-    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('15%');
+    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('4 in 10');
     expect(editor.canRedo).toBe(true);
     expect(editor.redo()).toBe(true);
     expect(editor.draft.outcomes[0]?.baselineRisk).toBe('20%');
