@@ -18,7 +18,7 @@ function demo(name: string): Topic {
 
 /** A deep, writable copy of the first demo topic to damage. */
 type Writable<T> = { -readonly [K in keyof T]: T[K] extends object ? Writable<T[K]> : T[K] };
-const heart = (): Writable<Topic> => structuredClone(demo('01-kidney-stone.json')) as Writable<Topic>;
+const stone = (): Writable<Topic> => structuredClone(demo('01-kidney-stone.json')) as Writable<Topic>;
 const fracture = (): Writable<Topic> => structuredClone(demo('03-fracture-medicine.json')) as Writable<Topic>;
 
 function outcomeOf(topic: Writable<Topic>, index: number): Writable<TopicOutcome> {
@@ -40,7 +40,7 @@ describe('validateTopic', () => {
     expect(validateTopic(demo(name))).toEqual([]);
   });
 
-  /** [what is wrong, how to damage the heart demo, the one problem expected]. */
+  /** [what is wrong, how to damage the kidney stone demo, the one problem expected]. */
   const cases: readonly [string, (topic: Writable<Topic>) => void, Pick<Problem, 'code' | 'field'>][] = [
     ['an empty title', (t) => { t.title = '  '; }, { code: 'topic-text-missing', field: 'title' }],
     ['a title too long', (t) => { t.title = 'x'.repeat(TOPIC_LIMITS.titleLength + 1); }, { code: 'topic-text-too-long', field: 'title' }],
@@ -84,7 +84,7 @@ describe('validateTopic', () => {
   ];
 
   it.each(cases)('reports %s at its field', (_what, damage, expected) => {
-    const topic = heart();
+    const topic = stone();
     damage(topic);
     expect(only(validateTopic(topic as Topic))).toEqual([expected]);
   });
@@ -92,13 +92,13 @@ describe('validateTopic', () => {
   it('reports a period beyond the limit at its field, first', () => {
     // Over 101 years the 15% five-year chance of broken sleep grows past what a risk ratio of 1.6
     // can act on, so the risks it would give are reported too, after the period.
-    const topic = heart();
+    const topic = stone();
     topic.periodYears = TOPIC_LIMITS.maxPeriodYears + 1;
     expect(only(validateTopic(topic as Topic))[0]).toEqual({ code: 'period-too-long', field: 'periodYears' });
   });
 
   it('reports an effect entered for the comparison, and the option left without one', () => {
-    const topic = heart();
+    const topic = stone();
     effectOf(topic, 0, 1).optionId = 'as-now';
     expect(only(validateTopic(topic as Topic))).toEqual([
       { code: 'topic-effect-on-comparison', field: 'outcomes.0.effects.1.optionId' },
@@ -107,7 +107,7 @@ describe('validateTopic', () => {
   });
 
   it('reports two effects for the same option on one outcome, and the option left without one', () => {
-    const topic = heart();
+    const topic = stone();
     effectOf(topic, 2, 1).optionId = 'water';
     expect(only(validateTopic(topic as Topic))).toEqual([
       { code: 'topic-duplicate-id', field: 'outcomes.2.effects' },
@@ -116,7 +116,7 @@ describe('validateTopic', () => {
   });
 
   it('reports an effect for an option the topic does not have, and the option left without one', () => {
-    const topic = heart();
+    const topic = stone();
     effectOf(topic, 0, 1).optionId = 'lowest';
     expect(only(validateTopic(topic as Topic))).toEqual([
       { code: 'topic-effect-unknown-option', field: 'outcomes.0.effects.1.optionId' },
@@ -126,7 +126,7 @@ describe('validateTopic', () => {
   });
 
   it('reports no comparison, and then every outcome lacks an effect for the unmarked option', () => {
-    const topic = heart();
+    const topic = stone();
     const option = topic.options[0];
     if (option) option.isComparison = false;
     expect(only(validateTopic(topic as Topic))).toEqual([
@@ -138,33 +138,33 @@ describe('validateTopic', () => {
   });
 
   it('reports two options with the same id', () => {
-    const topic = heart();
+    const topic = stone();
     const option = topic.options[2];
     if (option) option.id = 'water';
     expect(only(validateTopic(topic as Topic))).toContainEqual({ code: 'topic-duplicate-id', field: 'options.2.id' });
   });
 
   it('reports too few and too many options', () => {
-    const few = heart();
+    const few = stone();
     few.options = few.options.slice(0, 1);
     expect(only(validateTopic(few as Topic))).toContainEqual({ code: 'topic-too-few-options', field: 'options' });
-    const many = heart();
+    const many = stone();
     many.options = [...many.options, { id: 'a', name: 'option a', isComparison: false }, { id: 'b', name: 'option b', isComparison: false }];
     expect(only(validateTopic(many as Topic))).toContainEqual({ code: 'topic-too-many-options', field: 'options' });
   });
 
   it('reports two comparisons', () => {
-    const topic = heart();
+    const topic = stone();
     const option = topic.options[1];
     if (option) option.isComparison = true;
     expect(only(validateTopic(topic as Topic))).toContainEqual({ code: 'topic-comparison-count', field: 'options' });
   });
 
   it('reports too few and too many outcomes', () => {
-    const none = heart();
+    const none = stone();
     none.outcomes = [];
     expect(only(validateTopic(none as Topic))).toEqual([{ code: 'topic-too-few-outcomes', field: 'outcomes' }]);
-    const many = heart();
+    const many = stone();
     const template = outcomeOf(many, 2);
     many.outcomes = [
       ...many.outcomes,
@@ -175,7 +175,7 @@ describe('validateTopic', () => {
   });
 
   it('reports every problem at once, each at its own field, in the order of the topic', () => {
-    const topic = heart();
+    const topic = stone();
     topic.title = '';
     topic.periodYears = 0;
     const option = topic.options[1];
@@ -195,7 +195,7 @@ describe('validateTopic', () => {
   });
 
   it('gives each problem a sentence that says what to do', () => {
-    const topic = heart();
+    const topic = stone();
     topic.title = '';
     outcomeOf(topic, 0).baseline.risk = '15';
     effectOf(topic, 1, 1).effect = { measure: 'rr', estimate: 30 };

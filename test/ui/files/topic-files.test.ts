@@ -14,7 +14,7 @@ describe('topic files', () => {
   test('a saved draft opens as the same draft', () => {
     const saved = topicFileText(demo, false);
     if (!saved.ok) throw new Error(saved.message);
-    const opened = openTopicText('heart.chancewise.json', saved.text);
+    const opened = openTopicText('kidney-stone.chancewise.json', saved.text);
     expect(opened.ok && opened.draft).toEqual(demo);
   });
 

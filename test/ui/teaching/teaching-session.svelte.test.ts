@@ -12,8 +12,8 @@ import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 // framed four ways, then the format demonstrations (Galesic 2009; Ancker 2011;
 // Zikmund-Fisher 2008), as listed in src/ui/teaching/teaching-steps.ts.
 
-function heartSession(): TeachingSession {
-  return new TeachingSession('Heart', [itemOf(demoTopic(STONE))]);
+function stoneSession(): TeachingSession {
+  return new TeachingSession('Kidney stone', [itemOf(demoTopic(STONE))]);
 }
 
 function press(session: TeachingSession, key: KeyPress): boolean {
@@ -23,7 +23,7 @@ function press(session: TeachingSession, key: KeyPress): boolean {
 
 describe('TeachingSession', () => {
   it('starts on the first slide, the decision, and shows every step in the teaching order', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(session.index).toBe(0);
     expect(session.slide?.kind).toBe('title');
     const kinds: string[] = [];
@@ -46,7 +46,7 @@ describe('TeachingSession', () => {
   });
 
   it('stays on the last slide going forward and on the first going back', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(session.previous()).toBe(false);
     expect(session.atStart).toBe(true);
     expect(session.last()).toBe(true);
@@ -58,7 +58,7 @@ describe('TeachingSession', () => {
   });
 
   it('steps with the keys of a keyboard and of a presentation clicker', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(press(session, { key: 'PageDown' })).toBe(true);
     expect(press(session, { key: 'ArrowRight' })).toBe(true);
     expect(press(session, { key: ' ' })).toBe(true);
@@ -93,7 +93,7 @@ describe('TeachingSession', () => {
     if (!set.ok) throw new Error(set.message);
     const resolved = await resolveTeachingSet('set.json', set.set, null);
     if (!resolved.ok) throw new Error(resolved.message);
-    const session = heartSession();
+    const session = stoneSession();
     session.next();
     session.load(resolved.title, resolved.items, 'set.json');
     expect(session.index).toBe(0);
@@ -122,7 +122,7 @@ describe('TeachingSession', () => {
   it('presents a copy: stepping through never changes the topic it was given', () => {
     const topic = demoTopic(STONE);
     const before = JSON.stringify(topic);
-    const session = new TeachingSession('Heart', [itemOf(topic)]);
+    const session = new TeachingSession('Kidney stone', [itemOf(topic)]);
     while (session.next()) void session.slide;
     expect(JSON.stringify(topic)).toBe(before);
   });
