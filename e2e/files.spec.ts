@@ -21,10 +21,10 @@ async function openFile(page: Page, name: string, text: string): Promise<void> {
 test.describe('files', () => {
   test('a saved topic reopens as the same topic', async ({ page }) => {
     await openApp(page);
-    await page.getByLabel('Decision', { exact: true }).fill('Taking the tablet, as discussed');
+    await page.getByLabel('Decision', { exact: true }).fill('Drinking more water, as discussed');
     await page.getByLabel('Baseline risk', { exact: true }).first().fill('1 in 5');
     const saved = await saveTopic(page);
-    expect(saved.name).toBe('taking-the-tablet-as-discussed.cwtopic');
+    expect(saved.name).toBe('drinking-more-water-as-discussed.cwtopic');
     expect(JSON.parse(saved.text).topic.outcomes[0].baseline.risk).toBe('1 in 5');
     await expect(page.getByText('Unsaved changes')).toHaveCount(0);
     await expect(page.locator('.document .file')).toHaveText(saved.name);
@@ -33,7 +33,7 @@ test.describe('files', () => {
     await page.getByRole('button', { name: 'New topic', exact: true }).click();
     await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('');
     await openFile(page, saved.name, saved.text);
-    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('Taking the tablet, as discussed');
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('Drinking more water, as discussed');
     await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('1 in 5');
     const again = await saveTopic(page);
     expect(again.text).toBe(saved.text);

@@ -1,6 +1,6 @@
 /**
  * The chart models of the check page: the first example topic (invented numbers), each
- * outcome with the comparison and the standard dose side by side, so every chart has two
+ * outcome with the comparison and extra water side by side, so every chart has two
  * arrays of the chosen number of people.
  */
 import demoText from '../../assets/demo/01-kidney-stone.json?raw';
