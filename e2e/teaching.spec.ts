@@ -39,7 +39,7 @@ const CONTENT: Readonly<Record<string, readonly string[]>> = {
   harmed: ['9 in 100', 'get broken sleep from passing urine at night because of extra water each day'],
   uncertainty: ['could be anywhere between 8 and 22 in 100', 'Certainty of the evidence: moderate'],
   'patient-words': ['No change: about 40 in 100 people like you will have another kidney stone in the next 5 years.', 'About 9 in 100 get broken sleep'],
-  framing: ['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1', '100 ÷ 16 = 6.25, rounded up: 7', 'Akl, Cochrane 2011;CD006776'],
+  framing: ['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1', '100 ÷ 16 = 6.25, rounded up: 7', 'Akl 2011, Cochrane · Zipkin 2014'],
   denominator: ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009'],
   arrangement: ['Grouped', 'Scattered', 'overestimated more', 'Ancker, Weber & Kukafka 2011'],
   incremental: ['Two totals', 'Change as its own group', 'Without it (no change): 40 in 100.', 'Side effects: the extra risk on its own eased worry', 'J Health Commun 2008;13:107'],

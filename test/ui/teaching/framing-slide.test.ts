@@ -91,8 +91,8 @@ describe('the framing step', () => {
     // understood than relative ones, and the NNT lessened understanding.
     expect(slide.evidence).toEqual({
       finding:
-        'Patients and clinicians: a relative reduction looked bigger and persuaded more; absolute numbers were as clear or clearer, the NNT less so.',
-      source: 'Akl, Cochrane 2011;CD006776 · Zipkin, Ann Intern Med 2014;161:270',
+        'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
+      source: 'Akl 2011, Cochrane · Zipkin 2014, Annals',
     });
   });
 });

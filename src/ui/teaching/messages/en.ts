@@ -171,8 +171,8 @@ export const teachingMessagesEn = {
    */
   evidence: {
     framing: {
-      finding: 'Patients and clinicians: a relative reduction looked bigger and persuaded more; absolute numbers were as clear or clearer, the NNT less so.',
-      source: 'Akl, Cochrane 2011;CD006776 · Zipkin, Ann Intern Med 2014;161:270',
+      finding: 'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
+      source: 'Akl 2011, Cochrane · Zipkin 2014, Annals',
     },
     denominator: {
       finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
