@@ -10,6 +10,7 @@ import { chartFrame } from '../chart-frame.ts';
 import type { ChartModel } from '../chart-model.ts';
 import { drawArrayText, drawChart, drawHeading, peopleTransform, setRootAttributes } from './draw-chart.ts';
 import { personLooks, updatePeople } from './draw-people.ts';
+import { drawRangeRings } from './draw-range-rings.ts';
 import { patternIdsFor } from './person-paint.ts';
 import { setChangedAttribute } from './set-changed-attribute.ts';
 import { type SvgChartOptions, recordedSvgOptions, resolveSvgOptions } from './svg-chart-options.ts';
@@ -61,8 +62,12 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
     const people = group.querySelector<SVGGElement>(':scope > g.people');
     if (people === null) return;
     setChangedAttribute(people, 'transform', peopleTransform(placed));
-    const looks = personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange);
-    peopleChanged += updatePeople(people, placed.grid.layout, looks, resolved.palette, ids);
+    peopleChanged += updatePeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
+    const rings = group.querySelector<SVGGElement>(':scope > g.range-outline');
+    if (rings !== null) {
+      setChangedAttribute(rings, 'transform', peopleTransform(placed));
+      drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
+    }
   });
   return { redrawn: false, peopleChanged };
 }

@@ -5,6 +5,7 @@
  * the live view and the slide export use the same drawing.
  */
 import { select } from 'd3-selection';
+import { lookOf } from '../../core/direction.ts';
 import { glyphFor } from '../../render/glyphs/glyph-for.ts';
 import { glyphPath, placeGlyphPath } from '../../render/glyphs/svg-path-context.ts';
 import { scaleLayout } from '../../render/icon-array-layout.ts';
@@ -29,7 +30,8 @@ export function drawingSize(layout: IconArrayLayout): { readonly width: number; 
 
 /** Give a path the paint of a look. */
 function paint(element: Element, look: PersonLook, palette: ChartPalette, ids: PatternIds, cellSize: number): void {
-  const found = personPaint(palette, look, ids, cellSize);
+  // The palette is keyed by look; slide looks still name the groups of an event to avoid.
+  const found = personPaint(palette, look === 'uncertain' ? look : lookOf(look, false), ids, cellSize);
   element.setAttribute('fill', found.fill);
   element.setAttribute('stroke', found.stroke);
   if (found.dash !== null) {
