@@ -179,7 +179,7 @@ test.describe('people charts in the browser', () => {
     const svg = page.locator('#charts svg.people-chart').first();
     await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
     // Range 102 to 125 around 113 with the standard dose: ranks 102–124 outlined (23 people).
-    await expect(svg.locator('g.chart-array[data-option-id="standard"] g.people > [stroke-dasharray]')).toHaveCount(23);
+    await expect(svg.locator('g.chart-array[data-option-id="standard"] g.range-outline > rect')).toHaveCount(23);
     await expect(svg.locator('g.chart-array[data-option-id="none"] [stroke-dasharray]')).toHaveCount(0);
     await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
     await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });

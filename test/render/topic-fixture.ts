@@ -10,6 +10,8 @@ interface ArmCounts {
   readonly comparison: number;
   readonly intervention: number;
   readonly range?: { readonly lower: number; readonly upper: number } | null;
+  /** The outcome's event is one people want (default false). */
+  readonly wanted?: boolean;
 }
 
 function option(id: string, name: string, isComparison: boolean, counts: ArmCounts, denominator: Denominator): OptionOutcomeResult {
@@ -44,7 +46,7 @@ function outcome(id: string, name: string, kind: 'benefit' | 'harm', counts: Arm
     outcomeId: id,
     name,
     kind,
-    wanted: false,
+    wanted: counts.wanted ?? false,
     isHeadline: kind === 'benefit',
     baselineRisk: counts.comparison / denominator,
     baselineSource: 'Invented for tests',

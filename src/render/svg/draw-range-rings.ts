@@ -39,7 +39,7 @@ export function drawRangeRings(group: SVGGElement, layout: IconArrayLayout, span
       element.setAttribute('width', svgNumber(ring.side));
       element.setAttribute('height', svgNumber(ring.side));
       element.setAttribute('rx', svgNumber(ring.radius));
-      element.setAttribute('data-rank', String(person.rank));
+      element.setAttribute('data-index', String(person.index));
       return element;
     });
   const same = rings.length === group.children.length && rings.every((ring, index) => group.children[index]?.isEqualNode(ring) === true);

@@ -23,7 +23,7 @@ function newDocument(): jsPDF {
   return doc;
 }
 
-/** How many figures the content stream filled in each group's colour. */
+/** How many figures the content stream filled in each look's colour. */
 function figuresByGroup(pdf: string) {
   const painted = paintings(pdf);
   const count = (hex: string, operators: readonly string[]) =>
@@ -33,8 +33,8 @@ function figuresByGroup(pdf: string) {
   // then overlaid through a clip and stroked (ISO 32000-1 §8.5.3).
   return {
     event: count(groups.event.fill, ['B']),
-    prevented: count(groups.prevented.fill, ['f']),
-    caused: count(groups.caused.fill, ['f']),
+    helped: count(groups.helped.fill, ['f']),
+    harmed: count(groups.harmed.fill, ['f']),
     free: count(groups.free.fill, ['B']),
   };
 }
@@ -50,7 +50,8 @@ describe('drawIconArrayPdf', () => {
     expect(first.drawn).toEqual({ event: 15, prevented: 5, caused: 0, free: 80 });
     expect(second.drawn).toEqual({ event: 20, prevented: 0, caused: 10, free: 970 });
     const pdf = doc.output();
-    expect(figuresByGroup(pdf)).toEqual({ event: 35, prevented: 5, caused: 10, free: 1050 });
+    // An event to avoid: prevented people are drawn helped, caused people harmed (lookOf).
+    expect(figuresByGroup(pdf)).toEqual({ event: 35, helped: 5, harmed: 10, free: 1050 });
     expect(pdf.startsWith('%PDF-')).toBe(true);
     expect(pdf.trimEnd().endsWith('%%EOF')).toBe(true);
     expect(pdf.match(/\/Type \/Page\b/g)).toHaveLength(1);
@@ -105,7 +106,7 @@ describe('drawChartPdf', () => {
     expect(drawing.height).toBeGreaterThan(60);
     expect(drawing.height).toBeLessThan(267);
     const pdf = doc.output();
-    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'If 100 people like you take option A for 10 years']) {
+    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'If 100 people like you choose option A, over 10']) {
       expect(pdf).toContain(`(${text}) Tj`);
     }
 

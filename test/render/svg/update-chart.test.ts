@@ -66,8 +66,8 @@ describe('updateChart', () => {
   it('keeps showing the range outline it was drawn with', () => {
     const svg = drawIntoPage(stroke(20, 15), { showRange: true });
     updateChart(svg, stroke(20, 12));
-    // Range 10 to 15 around 12: ranks 10–14 outlined.
-    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people [stroke-dasharray]')).toHaveLength(5);
+    // Range 10 to 15 around 12: ranks 10–14 ringed.
+    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.range-outline > rect')).toHaveLength(5);
   });
 
   it('redraws everything when the denominator changes or new options are given', () => {
