@@ -79,3 +79,18 @@ describe('updateChart', () => {
     expect(other.getAttribute('data-palette')).toBe('black-and-white');
   });
 });
+
+describe('updateChart and the event’s direction', () => {
+  // Invented counts: 20 without and 30 with the option. As an event to avoid the 10 extra
+  // people are harmed; as a wanted event the same 10 are helped (lookOf in core/direction.ts).
+  const pair = (wanted: boolean) => outcomeChart(topicFixture(100, { comparison: 20, intervention: 30, wanted }), 'stroke');
+
+  it('repaints the same people when the event turns out to be wanted, and matches a fresh drawing', () => {
+    const svg = drawIntoPage(pair(false));
+    const update = updateChart(svg, pair(true));
+    expect(update).toEqual({ redrawn: false, peopleChanged: 10 });
+    expect(svg.getAttribute('data-wanted')).toBe('true');
+    const updatedText = svg.outerHTML;
+    expect(updatedText).toBe(drawIntoPage(pair(true)).outerHTML);
+  });
+});
