@@ -1,4 +1,5 @@
 import type { EffectQuery } from '../core/compute-effect.ts';
+import { DEFAULT_LEVEL } from '../core/check-effect.ts';
 import { checkArm } from '../core/counts/index.ts';
 import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
@@ -165,7 +166,7 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
     for (const flag of ['--ci', '--over', '--to', '--followup']) {
       if (parsed.flags.has(flag)) throw new UsageError(words.effectWithCounts(flag));
     }
-    const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+    const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
     return {
       baseline: null,
       effect: { measure: 'counts', ...parseCounts(countsText), level, ...(opposite ? { opposite } : {}) },
@@ -185,7 +186,7 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
   const baseline = baselineText === undefined ? null : parseBaselineRisk(baselineText, '--baseline');
   const estimate = parseValue(measure, valueOf(parsed, flag) ?? '', flag);
   const interval = ciText === undefined ? null : parseInterval(measure, ciText);
-  const level = levelText === undefined ? 0.95 : parseLevel(levelText);
+  const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
   const followUpYears = followUpText === undefined ? null : parseYears(followUpText, '--followup');
   return {
     baseline,

@@ -41,6 +41,7 @@ export function effectFieldsJson(result: EffectResult): { [key: string]: Json } 
       text: result.nnt.text,
     },
     perPeople: peopleJson(result.perPeople),
+    level: result.level,
   };
 }
 

@@ -1,15 +1,18 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
 import { benefitOf, changeOf } from '../core/direction.ts';
-import { formatDecimal, formatPercent } from '../core/messages/format-number.ts';
+import { formatDecimal, formatPercentSignificant, formatSignificant } from '../core/messages/format-number.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
 import { amountIn } from '../core/time-unit.ts';
 import type { TimeUnit } from '../core/time-unit.ts';
 import type { Estimate, Notice } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
-/** One decimal, or two below 1% so that a small risk such as 0.15% is not shown as 0.1%. */
-const percent = (value: number): string => formatPercent(value, value > 0 && value < 0.01 ? 2 : 1);
-const points = (value: number): string => formatDecimal(value * 100, 1).replace(/^-/, '−');
+/**
+ * Risks and percentage points keep their meaning when written: one decimal from 1 up, two
+ * significant figures below, so that 0.02 points is not "0" and −0.01 keeps its sign.
+ */
+const percent = (value: number): string => formatPercentSignificant(value);
+const points = (value: number): string => formatSignificant(value * 100).replace(/^-/, '−');
 
 function withRange(value: Estimate, show: (number: number) => string): string {
   if (value.lower === null || value.upper === null) return show(value.estimate);
@@ -46,15 +49,25 @@ function effectLines(result: EffectResult, indent: string, wanted: boolean): str
     lines.push(row('Risk ratio', withRange(result.relativeRisk, (value) => formatDecimal(value, 3)), width));
   }
   lines.push(differenceRow(result, wanted, width));
+  const ranged = [result.interventionRisk, result.relativeRisk, result.absoluteReduction].some(
+    (value) => value !== null && value.lower !== null,
+  );
+  if (ranged && result.level !== null) {
+    lines.push(row('Intervals', `${formatSignificant(result.level * 100, 1)}% intervals (in brackets)`, width));
+  }
   lines.push(row('Number needed to treat', result.nnt.text, width));
   const people = result.perPeople;
   if (people !== null) {
+    const exact = result.absoluteReduction.estimate;
+    // "No difference" only when the difference is exactly 0, never when rounding hid it.
     const change =
-      people.difference === 0
-        ? 'no difference'
-        : people.difference > 0
+      people.difference !== 0
+        ? people.difference > 0
           ? `${people.difference} fewer`
-          : `${-people.difference} more`;
+          : `${-people.difference} more`
+        : exact === 0
+          ? 'no difference'
+          : `a difference of ${exact > 0 ? 'fewer' : 'more'} than 1 in ${people.denominator}, too small to show as whole people`;
     lines.push(row(`Out of ${people.denominator} people`, `${people.comparison} without, ${people.intervention} with the option (${change})`, width));
   }
   return lines.map((line) => `${indent}${line}`);

@@ -1,7 +1,8 @@
 import { fail } from './problems.ts';
 import type { EnteredEffect } from './types.ts';
 
-const DEFAULT_LEVEL = 0.95;
+/** The interval level used when none is given: 95% (common practice). Written here once. */
+export const DEFAULT_LEVEL = 0.95;
 
 /** An entered effect with its interval sorted (`lower ≤ upper`) and its level settled. */
 export interface CheckedEffect {

@@ -1,4 +1,4 @@
-import { checkEffect, checkLevel } from './check-effect.ts';
+import { DEFAULT_LEVEL, checkEffect, checkLevel } from './check-effect.ts';
 import { analyseCounts } from './counts/index.ts';
 import type { CountsAnalysis } from './counts/index.ts';
 import { convertRiskPeriod } from './convert-period.ts';
@@ -73,14 +73,14 @@ function countsAtBaseline(baseline: number, analysis: CountsAnalysis, field: str
   const ratio = analysis.relativeRisk;
   if (ratio !== null) {
     const interval = ratio.lower === null || ratio.upper === null ? null : { lower: ratio.lower, upper: ratio.upper };
-    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: 0.95, opposite: false }, field);
+    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: analysis.level, opposite: false }, field);
   }
   const difference = analysis.riskDifference;
   const interval =
     difference.lower === null || difference.upper === null ? null : { lower: difference.lower, upper: difference.upper };
   return effectAtBaseline(
     baseline,
-    { measure: 'arr', estimate: difference.estimate, interval, level: 0.95, opposite: false },
+    { measure: 'arr', estimate: difference.estimate, interval, level: analysis.level, opposite: false },
     field,
   );
 }
@@ -93,7 +93,7 @@ function countsOfOutcome(effect: CountsEffect): CountsEffect {
 }
 
 function fromCounts(query: EffectQuery, entered: CountsEffect, baseline: number | null, notices: Notice[]) {
-  const level = checkLevel(entered.level ?? 0.95, `${query.field ?? 'effect'}.level`);
+  const level = checkLevel(entered.level ?? DEFAULT_LEVEL, `${query.field ?? 'effect'}.level`);
   const effect = countsOfOutcome(entered);
   const analysis = analyseCounts(effect.intervention, effect.comparison, { level, method: query.method ?? 'newcombe' });
   notices.push(...analysis.notices);
@@ -129,14 +129,17 @@ export function computeEffect(query: EffectQuery): EffectComputation {
   let absoluteReduction: Estimate;
   let counts: CountsAnalysis | null = null;
   let hasInterval: boolean;
+  let level: number;
   if (effect.measure === 'counts') {
     const computed = fromCounts(query, effect, baseline, notices);
     counts = computed.analysis;
+    level = computed.analysis.level;
     comparisonRisk = computed.comparisonRisk;
     ({ interventionRisk, relativeRisk, absoluteReduction } = computed.applied);
     hasInterval = baseline !== null && absoluteReduction.lower !== null;
   } else {
     const checked = checkEffect(effect, field);
+    level = checked.level;
     hasInterval = checked.interval !== null && baseline !== null;
     if (baseline === null) {
       if (checked.measure !== 'arr') fail('baseline-missing', `${field}.baseline`);
@@ -184,6 +187,7 @@ export function computeEffect(query: EffectQuery): EffectComputation {
     relativeRisk,
     absoluteReduction,
     nnt: numberNeeded(absoluteReduction, { wanted: query.wanted === true }),
+    level,
     perPeople,
     notices,
     counts,

@@ -12,6 +12,13 @@ export function ceilWhole(value: number): number {
   return Math.ceil(value);
 }
 
+/** Round down to a whole number, but keep a value within 1e-9 (relative) of a whole number as that number. */
+export function floorWhole(value: number): number {
+  const nearest = Math.round(value);
+  if (Math.abs(value - nearest) <= RELATIVE_TOLERANCE * Math.max(1, Math.abs(value))) return nearest;
+  return Math.floor(value);
+}
+
 /**
  * Round half up on the decimal value: 14.4999999999 (from 0.145 × 100) rounds to 15. A fraction
  * within 1e-9 (relative) below one half counts as one half.

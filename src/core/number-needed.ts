@@ -1,13 +1,21 @@
 import { benefitOf } from './direction.ts';
-import { ceilWhole } from './float-safe.ts';
+import { ceilWhole, floorWhole } from './float-safe.ts';
 import { english } from './messages/en/index.ts';
 import type { Estimate, NumberNeeded } from './types.ts';
 
 type Words = (typeof english)['numbers'];
 
-/** The NNT for one absolute difference, rounded up by convention but float-safe. */
+/**
+ * The NNT for one absolute difference, rounded the cautious way so that rounding never
+ * overstates a benefit nor understates a harm: an NNTB is rounded up, an NNTH down (BMJ
+ * Clinical Evidence glossary, as cited by McQueen D, "Numbers-needed-to-treat analysis",
+ * Advances in Psychiatric Treatment 2011, correspondence; the Cochrane Handbook 5.1 §12.5.4.1
+ * rule of rounding up is stated for benefit). Float-safe: a true whole number stays itself.
+ * The label is that of the difference itself: positive (after `benefitOf`) is a benefit.
+ */
 function wholeNeeded(difference: number): number {
-  return ceilWhole(1 / Math.abs(difference));
+  const needed = 1 / Math.abs(difference);
+  return difference > 0 ? ceilWhole(needed) : floorWhole(needed);
 }
 
 /** A difference so small that its reciprocal is not a finite number counts as no difference. */

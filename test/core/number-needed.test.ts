@@ -39,8 +39,10 @@ describe('numberNeeded labels and words NNTs after Altman (1998, BMJ 317:1309)',
     expect(result.nnt.text).toBe('NNTB 17 (NNTB 11 to 47)');
   });
 
-  it('writes a harmful one-sided interval: NNTH 25 (NNTH 12 to 90)', () => {
-    expect(numberNeeded(difference(-0.04, -1 / 11.5, -1 / 90)).text).toBe('NNTH 25 (NNTH 12 to 90)');
+  // An NNTH is rounded down, so that rounding never understates a harm (BMJ Clinical Evidence
+  // glossary, as cited by McQueen D, Advances in Psychiatric Treatment 2011): 11.5 → 11.
+  it('writes a harmful one-sided interval, rounding each NNTH down: NNTH 25 (NNTH 11 to 90)', () => {
+    expect(numberNeeded(difference(-0.04, -1 / 11.5, -1 / 90)).text).toBe('NNTH 25 (NNTH 11 to 90)');
   });
 
   it('writes a limit exactly at no effect as infinity: NNTB 10 (NNTB 4 to ∞)', () => {
@@ -99,7 +101,8 @@ describe('numberNeeded for an event people want', () => {
   });
 
   it('labels a wanted event made less likely NNTH', () => {
-    expect(numberNeeded({ estimate: 0.05, lower: 0.02, upper: 0.08 }, { wanted: true }).text).toBe('NNTH 20 (NNTH 13 to 50)');
+    // 1/0.08 = 12.5, rounded down for a harm.
+    expect(numberNeeded({ estimate: 0.05, lower: 0.02, upper: 0.08 }, { wanted: true }).text).toBe('NNTH 20 (NNTH 12 to 50)');
   });
 
   it('still writes an interval that crosses no effect benefit end first', () => {
@@ -107,5 +110,25 @@ describe('numberNeeded for an event people want', () => {
     expect(numberNeeded({ estimate: -0.1, lower: -0.25, upper: 0.05 }, { wanted: true }).text).toBe(
       'NNTB 10 (NNTB 4 to ∞ to NNTH 20)',
     );
+  });
+});
+
+describe('the cautious rounding: NNTB up, NNTH down', () => {
+  // BMJ Clinical Evidence glossary, as cited by McQueen D, "Numbers-needed-to-treat analysis",
+  // Advances in Psychiatric Treatment 2011 (correspondence): rounding never overstates a benefit
+  // nor understates a harm.
+  it('gives NNTH 25 (NNTH 12 to 100) for a risk ratio of 1.4 (1.1 to 1.8) at 10%', () => {
+    const result = computeEffect({ baseline: 0.1, effect: { measure: 'rr', estimate: 1.4, lower: 1.1, upper: 1.8 } });
+    expect(result.nnt.text).toBe('NNTH 25 (NNTH 12 to 100)');
+  });
+
+  it('keeps a true whole number as itself either way (1/0.05 − 0.04 is 99.999… in binary)', () => {
+    expect(numberNeeded(difference(0.05 - 0.04)).rounded).toBe(100);
+    expect(numberNeeded(difference(0.04 - 0.05)).rounded).toBe(100);
+  });
+
+  it('rounds an interval that crosses no effect by the label of each end', () => {
+    // Benefit end 1/0.15 = 6.7 → 7 (up); harm end 1/0.06 = 16.7 → 16 (down).
+    expect(numberNeeded(difference(0.05, -0.06, 0.15)).text).toBe('NNTB 20 (NNTB 7 to ∞ to NNTH 16)');
   });
 });

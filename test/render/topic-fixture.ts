@@ -23,6 +23,7 @@ function option(id: string, name: string, isComparison: boolean, counts: ArmCoun
     optionId: id,
     name,
     isComparison,
+    level: isComparison ? null : 0.95,
     groups: peopleGroups(counts.comparison, intervention, denominator),
     certainty: isComparison ? null : 'moderate',
     importance: isComparison ? null : 'important',

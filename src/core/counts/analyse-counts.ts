@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import type { ArmCounts, Notice } from '../types.ts';
 import { checkArm } from './check-arm.ts';
 import type { CountsAnalysis, CountsOptions } from './counts-types.ts';
@@ -23,7 +24,7 @@ export function analyseCounts(
   comparison: ArmCounts,
   options: CountsOptions = {},
 ): CountsAnalysis {
-  const level = options.level ?? 0.95;
+  const level = options.level ?? DEFAULT_LEVEL;
   checkArm(intervention, 'intervention');
   checkArm(comparison, 'comparison');
   zForLevel(level);
@@ -38,6 +39,7 @@ export function analyseCounts(
   }
 
   return {
+    level,
     interventionRisk: wilsonInterval(intervention.events, intervention.total, level),
     comparisonRisk: wilsonInterval(comparison.events, comparison.total, level),
     relativeRisk,

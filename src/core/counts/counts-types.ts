@@ -42,6 +42,8 @@ export interface TwoByTwoTable {
 
 /** Everything the core reports about two trial arms. */
 export interface CountsAnalysis {
+  /** The level of every interval below. */
+  readonly level: number;
   /** The option arm's risk with its Wilson interval. */
   readonly interventionRisk: IntervalEstimate;
   /** The comparison arm's risk with its Wilson interval. */

@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import type { ArmCounts } from '../types.ts';
 import type { IntervalEstimate } from './counts-types.ts';
 import { intervalEstimate } from './interval-estimate.ts';
@@ -11,7 +12,7 @@ import { wilsonInterval } from './wilson-interval.ts';
 export function newcombeDifference(
   intervention: ArmCounts,
   comparison: ArmCounts,
-  level = 0.95,
+  level = DEFAULT_LEVEL,
 ): IntervalEstimate {
   const first = wilsonInterval(comparison.events, comparison.total, level);
   const second = wilsonInterval(intervention.events, intervention.total, level);

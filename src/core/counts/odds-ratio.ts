@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import type { ArmCounts } from '../types.ts';
 import type { RatioEstimate } from './counts-types.ts';
 import { logScaleInterval } from './log-scale-interval.ts';
@@ -13,7 +14,7 @@ import { zForLevel } from './z-for-level.ts';
 export function oddsRatio(
   intervention: ArmCounts,
   comparison: ArmCounts,
-  level = 0.95,
+  level = DEFAULT_LEVEL,
 ): RatioEstimate | null {
   const cells = ratioCells(twoByTwoTable(intervention, comparison));
   const z = zForLevel(level);

@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import type { ArmCounts } from '../types.ts';
 import type { DifferenceMethod, IntervalEstimate } from './counts-types.ts';
 import { newcombeDifference } from './newcombe-difference.ts';
@@ -10,7 +11,7 @@ import { waldDifference } from './wald-difference.ts';
 export function riskDifference(
   intervention: ArmCounts,
   comparison: ArmCounts,
-  level = 0.95,
+  level = DEFAULT_LEVEL,
   method: DifferenceMethod = 'newcombe',
 ): IntervalEstimate {
   return method === 'wald'

@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import type { ArmCounts } from '../types.ts';
 import { checkArm } from './check-arm.ts';
 import type { IntervalEstimate } from './counts-types.ts';
@@ -11,7 +12,7 @@ import { zForLevel } from './z-for-level.ts';
 export function waldDifference(
   intervention: ArmCounts,
   comparison: ArmCounts,
-  level = 0.95,
+  level = DEFAULT_LEVEL,
 ): IntervalEstimate {
   checkArm(intervention, 'intervention');
   checkArm(comparison, 'comparison');

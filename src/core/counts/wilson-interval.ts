@@ -1,3 +1,4 @@
+import { DEFAULT_LEVEL } from '../check-effect.ts';
 import { checkArm } from './check-arm.ts';
 import type { IntervalEstimate } from './counts-types.ts';
 import { intervalEstimate } from './interval-estimate.ts';
@@ -8,7 +9,7 @@ import { zForLevel } from './z-for-level.ts';
  * (x + z²/2 ± z·√(x(n − x)/n + z²/4)) / (n + z²). The lower bound is exactly 0 at
  * 0 events and the upper bound exactly 1 when every person has the event.
  */
-export function wilsonInterval(events: number, total: number, level = 0.95): IntervalEstimate {
+export function wilsonInterval(events: number, total: number, level = DEFAULT_LEVEL): IntervalEstimate {
   checkArm({ events, total }, 'arm');
   const z = zForLevel(level);
   const zSquared = z * z;

@@ -15,6 +15,8 @@ export interface EffectResult {
    */
   readonly absoluteReduction: Estimate;
   readonly nnt: NumberNeeded;
+  /** The level of the intervals (0.95 unless the effect gives another); null for the comparison itself. */
+  readonly level: number | null;
   readonly perPeople: PeopleCounts | null;
   readonly notices: readonly Notice[];
 }

@@ -46,6 +46,7 @@ export function optionFixture(spec: OptionSpec, denominator: Denominator): Optio
     optionId: spec.id,
     name: spec.name,
     isComparison,
+    level: isComparison ? null : 0.95,
     comparisonRisk: point(comparisonRisk),
     interventionRisk: (interventionRisk === null ? null : point(interventionRisk)) as OptionOutcomeResult['interventionRisk'],
     relativeRisk:
