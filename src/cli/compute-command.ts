@@ -4,7 +4,7 @@ import { describeProblem } from '../core/messages/describe.ts';
 import { english } from '../core/messages/en/index.ts';
 import type { Topic } from '../core/topic/topic.ts';
 import type { TopicResult } from '../core/topic/topic-result.ts';
-import type { Denominator } from '../core/types.ts';
+import type { WordsDenominator } from '../core/types.ts';
 import { EFFECT_FLAGS, EFFECT_ONLY_FLAGS, effectQueryFromFlags, parsePer } from './effect-flags.ts';
 import { parseArgs } from './parse-args.ts';
 import type { ParsedArgs } from './parse-args.ts';
@@ -19,7 +19,7 @@ const words = english.cli;
 const COMPUTE_FLAGS = { ...EFFECT_FLAGS, '--json': { takesValue: false }, '--demo': { takesValue: false } };
 
 /** Compute a topic or fail with the first problem, as the command line reports it. */
-export function computeTopicOrFail(topic: Topic, per: Denominator | null): TopicResult {
+export function computeTopicOrFail(topic: Topic, per: WordsDenominator | null): TopicResult {
   const evaluation = evaluateTopic(topic, { per });
   if (!evaluation.ok) {
     const [first] = evaluation.problems;

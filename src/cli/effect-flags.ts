@@ -6,7 +6,8 @@ import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
 import { InputError, fail } from '../core/problems.ts';
 import type { ProblemCode, ProblemValues } from '../core/problems.ts';
-import type { ArmCounts, Denominator, EffectMeasure } from '../core/types.ts';
+import { WORDS_DENOMINATORS } from '../core/types.ts';
+import type { ArmCounts, EffectMeasure, WordsDenominator } from '../core/types.ts';
 import type { FlagSpec, ParsedArgs } from './parse-args.ts';
 import { valueOf } from './parse-args.ts';
 import { UsageError } from './usage-error.ts';
@@ -83,13 +84,14 @@ export function parseYears(input: string, field: string): number {
   return value;
 }
 
-/** Read --per: 100 or 1000. */
-export function parsePer(parsed: ParsedArgs): Denominator | null {
+/** Read --per: the words' denominator, 100 to 1,000,000 (written with or without commas). */
+export function parsePer(parsed: ParsedArgs): WordsDenominator | null {
   const value = valueOf(parsed, '--per');
   if (value === undefined) return null;
-  if (value.trim() === '100') return 100;
-  if (value.trim() === '1000') return 1000;
-  throw new UsageError(words.perValue(value));
+  const cleaned = value.trim().replace(/[,_\s]/g, '');
+  const found = WORDS_DENOMINATORS.find((denominator) => String(denominator) === cleaned);
+  if (found === undefined) throw new UsageError(words.perValue(value));
+  return found;
 }
 
 function parseValue(measure: EffectMeasure, input: string, field: string): number {
@@ -112,7 +114,7 @@ function parseArm(input: string, whole: string): ArmCounts {
   const events = readNumber(match[1] ?? '', '--counts', 'counts-unparsable', { input: whole });
   const total = readNumber(match[2] ?? '', '--counts', 'counts-unparsable', { input: whole });
   const arm = { events, total };
-  checkArm(arm, '--counts');
+  checkArm(arm, '--counts', input.trim());
   return arm;
 }
 

@@ -1,6 +1,6 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
-import type { Estimate, PeopleCounts } from '../core/types.ts';
+import type { Denominator, Estimate, PeopleCounts } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
@@ -17,10 +17,15 @@ function estimateJson(value: Estimate | null): Json {
   return { estimate, lower: finite(value.lower), upper: finite(value.upper) };
 }
 
-function peopleJson(value: PeopleCounts | null): Json {
+/**
+ * People counts at the words' denominator (100 up to 1,000,000), with the pictures' denominator
+ * (100 or 1000) beside them.
+ */
+function peopleJson(value: PeopleCounts<number> | null, picture: Denominator | null): Json {
   if (value === null) return null;
   return {
     denominator: value.denominator,
+    pictureDenominator: picture,
     comparison: value.comparison,
     intervention: value.intervention,
     difference: value.difference,
@@ -28,7 +33,10 @@ function peopleJson(value: PeopleCounts | null): Json {
 }
 
 /** The contract fields shared by a single effect and each option of a topic. */
-export function effectFieldsJson(result: EffectResult): { [key: string]: Json } {
+export function effectFieldsJson(
+  result: EffectResult,
+  words: PeopleCounts<number> | null,
+): { [key: string]: Json } {
   return {
     comparisonRisk: estimateJson(result.comparisonRisk),
     interventionRisk: estimateJson(result.interventionRisk),
@@ -40,7 +48,7 @@ export function effectFieldsJson(result: EffectResult): { [key: string]: Json } 
       label: result.nnt.label,
       text: result.nnt.text,
     },
-    perPeople: peopleJson(result.perPeople),
+    perPeople: peopleJson(words, result.perPeople?.denominator ?? null),
     level: result.level,
   };
 }
@@ -51,7 +59,7 @@ export function effectFieldsJson(result: EffectResult): { [key: string]: Json } 
  * `perPeople.difference` stay comparison − option either way, and `nnt.label` follows help and harm.
  */
 export function effectJson(result: EffectComputation, wanted = false): Json {
-  const fields: { [key: string]: Json } = { wanted, ...effectFieldsJson(result) };
+  const fields: { [key: string]: Json } = { wanted, ...effectFieldsJson(result, result.wordsPeople) };
   const counts = result.counts;
   if (counts !== null) {
     Object.assign(fields, {
@@ -75,7 +83,8 @@ export function topicJson(result: TopicResult): Json {
     topic: result.title,
     illustrative: result.illustrative,
     population: result.population,
-    denominator: result.denominator,
+    denominator: result.wordsDenominator,
+    pictureDenominator: result.denominator,
     period: result.periodYears,
     outcomes: result.outcomes.map((outcome) => ({
       name: outcome.name,
@@ -86,7 +95,7 @@ export function topicJson(result: TopicResult): Json {
       options: outcome.options.map((option) => ({
         name: option.name,
         comparison: option.isComparison,
-        ...effectFieldsJson(option),
+        ...effectFieldsJson(option, option.wordsPeople),
         groups: {
           event: option.groups.event,
           prevented: option.groups.prevented,

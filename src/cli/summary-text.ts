@@ -1,10 +1,10 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
 import { benefitOf, changeOf } from '../core/direction.ts';
-import { formatDecimal, formatPercentSignificant, formatSignificant } from '../core/messages/format-number.ts';
+import { formatCount, formatDecimal, formatPercentSignificant, formatSignificant } from '../core/messages/format-number.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
 import { amountIn } from '../core/time-unit.ts';
 import type { TimeUnit } from '../core/time-unit.ts';
-import type { Estimate, Notice } from '../core/types.ts';
+import type { Estimate, Notice, PeopleCounts } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
 /**
@@ -38,7 +38,18 @@ function differenceRow(result: EffectResult, wanted: boolean, width: number): st
   return row('Absolute gain', `${withRange(gain, points)} percentage points${note}`, width);
 }
 
-function effectLines(result: EffectResult, indent: string, wanted: boolean): string[] {
+/** The change as people: "5 fewer", "20 more", or why no whole person shows it. */
+function changeText(people: PeopleCounts<number>, exact: number): string {
+  if (people.difference > 0) return `${formatCount(people.difference)} fewer`;
+  if (people.difference < 0) return `${formatCount(-people.difference)} more`;
+  // "No difference" only when the difference is exactly 0, never when rounding hid it.
+  if (exact === 0) return 'no difference';
+  const direction = exact > 0 ? 'fewer' : 'more';
+  if (people.denominator === 1000000) return `fewer than 1 in a million ${direction}`;
+  return `fewer than 1 in ${formatCount(people.denominator)} ${direction}: too small to show as whole people`;
+}
+
+function effectLines(result: EffectResult, words: PeopleCounts<number> | null, indent: string, wanted: boolean): string[] {
   const lines: string[] = [];
   // A wanted event is a chance, not a risk; the measure keeps its name ("risk ratio").
   const noun = wanted ? 'Chance' : 'Risk';
@@ -56,19 +67,10 @@ function effectLines(result: EffectResult, indent: string, wanted: boolean): str
     lines.push(row('Intervals', `${formatSignificant(result.level * 100, 1)}% intervals (in brackets)`, width));
   }
   lines.push(row('Number needed to treat', result.nnt.text, width));
-  const people = result.perPeople;
-  if (people !== null) {
-    const exact = result.absoluteReduction.estimate;
-    // "No difference" only when the difference is exactly 0, never when rounding hid it.
-    const change =
-      people.difference !== 0
-        ? people.difference > 0
-          ? `${people.difference} fewer`
-          : `${-people.difference} more`
-        : exact === 0
-          ? 'no difference'
-          : `a difference of ${exact > 0 ? 'fewer' : 'more'} than 1 in ${people.denominator}, too small to show as whole people`;
-    lines.push(row(`Out of ${people.denominator} people`, `${people.comparison} without, ${people.intervention} with the option (${change})`, width));
+  if (words !== null) {
+    const change = changeText(words, result.absoluteReduction.estimate);
+    const counts = `${formatCount(words.comparison)} without, ${formatCount(words.intervention)} with the option (${change})`;
+    lines.push(row(`Out of ${formatCount(words.denominator)} people`, counts, width));
   }
   return lines.map((line) => `${indent}${line}`);
 }
@@ -80,7 +82,7 @@ function warningLines(notices: readonly Notice[]): string[] {
 
 /** The readable summary of one effect, for a terminal. */
 export function effectSummary(result: EffectComputation, wanted = false): string {
-  const lines = effectLines(result, '', wanted);
+  const lines = effectLines(result, result.wordsPeople, '', wanted);
   const counts = result.counts;
   if (counts !== null) {
     if (counts.oddsRatio !== null) lines.push(`Odds ratio:              ${withRange(counts.oddsRatio, (value) => formatDecimal(value, 3))}`);
@@ -116,7 +118,7 @@ function periodText(years: number, unit: TimeUnit): string {
 export function topicSummary(result: TopicResult): string {
   const lines = [
     result.title,
-    `For ${result.population}, over ${periodText(result.periodYears, result.periodUnit)}, per ${result.denominator} people.`,
+    `For ${result.population}, over ${periodText(result.periodYears, result.periodUnit)}, per ${formatCount(result.wordsDenominator)} people.`,
   ];
   if (result.illustrative) lines.push('Illustrative example: invented numbers, not for real decisions.');
   for (const outcome of result.outcomes) {
@@ -124,10 +126,11 @@ export function topicSummary(result: TopicResult): string {
     lines.push('', `${outcome.name} (${outcome.kind}${wanted}${outcome.isHeadline ? ', headline' : ''})`);
     for (const option of outcome.options) {
       if (option.isComparison) {
-        lines.push(`  ${option.name} (comparison): ${option.perPeople.comparison} in ${result.denominator} (${percent(option.comparisonRisk.estimate)})`);
+        const shown = `${formatCount(option.wordsPeople.comparison)} in ${formatCount(result.wordsDenominator)}`;
+        lines.push(`  ${option.name} (comparison): ${shown} (${percent(option.comparisonRisk.estimate)})`);
         continue;
       }
-      lines.push(`  ${option.name}:`, ...effectLines(option, '    ', outcome.wanted));
+      lines.push(`  ${option.name}:`, ...effectLines(option, option.wordsPeople, '    ', outcome.wanted));
     }
   }
   const warnings = warningLines(result.notices);

@@ -31,12 +31,13 @@ export function checkLevel(level: number, field: string): number {
 
 /**
  * Check an entered effect: ratios above 0, a relative risk reduction below 100%, an absolute
- * reduction between −100% and 100%, an interval with both limits that contains the estimate.
- * The limits are returned sorted, so "0.9,0.6" and "0.6,0.9" mean the same interval.
+ * reduction between −100% and 100%, an interval with both limits, lower first, that contains
+ * the estimate. Limits in the wrong order ("0.9,0.6") are refused: they are almost certainly a
+ * typing mistake, and the person must say which limit is which.
  *
  * @throws InputError `ratio-not-positive`, `rrr-out-of-range`, `arr-out-of-range`, `interval-incomplete`,
- *   `interval-excludes-estimate`, `level-out-of-range`
- * @example checkEffect({ measure: 'or', estimate: 0.73, lower: 0.9, upper: 0.6 }, 'effect').interval // => { lower: 0.6, upper: 0.9 }
+ *   `interval-excludes-estimate`, `interval-reversed`, `level-out-of-range`
+ * @example checkEffect({ measure: 'or', estimate: 0.73, lower: 0.6, upper: 0.9 }, 'effect').interval // => { lower: 0.6, upper: 0.9 }
  */
 export function checkEffect(effect: EnteredEffect, field: string): CheckedEffect {
   const { measure, estimate } = effect;
@@ -49,8 +50,10 @@ export function checkEffect(effect: EnteredEffect, field: string): CheckedEffect
   if (lower === null || upper === null) return fail('interval-incomplete', `${field}.interval`);
   checkValue(measure, lower, `${field}.lower`);
   checkValue(measure, upper, `${field}.upper`);
-  const low = Math.min(lower, upper);
-  const high = Math.max(lower, upper);
+  // Limits in the wrong order are almost certainly a typing mistake: refused, not repaired.
+  if (lower > upper) fail('interval-reversed', `${field}.interval`, { lower, upper });
+  const low = lower;
+  const high = upper;
   if (estimate < low || estimate > high) {
     fail('interval-excludes-estimate', `${field}.interval`, { lower: low, upper: high, estimate });
   }

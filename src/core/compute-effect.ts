@@ -5,12 +5,13 @@ import { convertRiskPeriod } from './convert-period.ts';
 import { effectAtBaseline } from './effect-at-baseline.ts';
 import type { EffectAtBaseline } from './effect-at-baseline.ts';
 import { numberNeeded } from './number-needed.ts';
-import { chooseDenominator, peopleCounts } from './people-counts.ts';
+import { chooseDenominator, chooseWordsDenominator, peopleCounts, peopleFor, pictureDenominatorFor, roundingShift } from './people-counts.ts';
+import type { RiskPair } from './people-counts.ts';
 import { fail } from './problems.ts';
 import type { EffectResult } from './topic/topic-result.ts';
 import { amountIn } from './time-unit.ts';
 import type { TimeUnit } from './time-unit.ts';
-import type { CountsEffect, Denominator, Effect, Estimate, Notice } from './types.ts';
+import type { CountsEffect, Denominator, Effect, Estimate, Notice, PeopleCounts, WordsDenominator } from './types.ts';
 
 /** Everything needed to compute one option's effect on one outcome. */
 export interface EffectQuery {
@@ -30,8 +31,11 @@ export interface EffectQuery {
   /** The period the result is for, when known, for the follow-up warning. */
   readonly resultYears?: number | null;
   readonly resultUnit?: TimeUnit;
-  /** A fixed denominator; otherwise the rule of `chooseDenominator`. */
-  readonly per?: Denominator | null;
+  /**
+   * A fixed denominator for the words (the pictures use 1000 above 1000); otherwise the rules
+   * of `chooseDenominator` and `chooseWordsDenominator`.
+   */
+  readonly per?: WordsDenominator | null;
   readonly method?: 'newcombe' | 'wald';
   /** Where problems are reported ("effect", "outcomes.0.effects.1.effect"). */
   readonly field?: string;
@@ -44,6 +48,44 @@ export interface EffectComputation extends EffectResult {
   readonly counts: CountsAnalysis | null;
   /** The baseline after any period conversion, or null. */
   readonly baselineUsed: number | null;
+  /** The people counts at the words' denominator (10,000 and up for rare outcomes), or null. */
+  readonly wordsPeople: PeopleCounts<WordsDenominator> | null;
+}
+
+/** True when the two risks show as the same number of people at `denominator`. */
+function roundsAway(pair: RiskPair, denominator: number): boolean {
+  return peopleFor(pair.comparison, denominator) === peopleFor(pair.intervention, denominator);
+}
+
+/** The two denominators of a set of risk pairs, chosen or forced, with the notices that explain them. */
+export interface DenominatorChoice {
+  readonly picture: Denominator;
+  readonly words: WordsDenominator;
+  readonly notices: readonly Notice[];
+}
+
+/**
+ * Choose the pictures' and the words' denominators for a set of risk pairs (one topic, or one
+ * effect), or take the forced one, and say what the choice achieved: raised to show a difference,
+ * a difference still below one in a million, or rounding that moves a difference by half a
+ * person or more at the denominator used.
+ */
+export function chooseDenominators(pairs: readonly RiskPair[], per: WordsDenominator | null): DenominatorChoice {
+  const chosen = per === null ? chooseDenominator(pairs) : pictureDenominatorFor(per);
+  const words = per ?? chooseWordsDenominator(pairs, chosen);
+  // Words counted per 10,000 or more go with the larger picture, 1000.
+  const picture: Denominator = words > 100 ? 1000 : chosen;
+  const notices: Notice[] = [];
+  if (per === null && words > 100) notices.push(notice('denominator-raised', { denominator: words, picture }));
+  const tiny = pairs.some(
+    (pair) => pair.comparison !== pair.intervention && Math.abs(pair.comparison - pair.intervention) * 1000000 < 0.5,
+  );
+  if (tiny && words === 1000000) notices.push(notice('difference-below-one-in-a-million'));
+  const hidden = pairs.some((pair) => pair.comparison !== pair.intervention && roundsAway(pair, words));
+  if (hidden && words < 1000000) notices.push(notice('rounding-hides-difference', { denominator: words }));
+  const moved = pairs.reduce((largest, pair) => Math.max(largest, roundingShift(pair, words)), 0);
+  if (moved >= 0.5 - 1e-9) notices.push(notice('rounding-moves-difference', { denominator: words, people: Number(moved.toFixed(2)) }));
+  return { picture, words, notices };
 }
 
 const notice = (code: string, values: Notice['values'] = {}): Notice => ({ code, values });
@@ -173,13 +215,12 @@ export function computeEffect(query: EffectQuery): EffectComputation {
     );
   }
   let perPeople = null;
+  let wordsPeople = null;
   if (comparisonRisk !== null && interventionRisk !== null) {
-    const chosen = chooseDenominator([{ comparison: comparisonRisk.estimate, intervention: interventionRisk.estimate }]);
-    const denominator = query.per ?? chosen;
-    if (query.per === null || query.per === undefined) {
-      if (chosen === 1000) notices.push(notice('denominator-raised'));
-    }
-    perPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, denominator);
+    const choice = chooseDenominators([{ comparison: comparisonRisk.estimate, intervention: interventionRisk.estimate }], query.per ?? null);
+    notices.push(...choice.notices);
+    perPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, choice.picture);
+    wordsPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, choice.words);
   }
   return {
     comparisonRisk,
@@ -192,5 +233,6 @@ export function computeEffect(query: EffectQuery): EffectComputation {
     notices,
     counts,
     baselineUsed: baseline,
+    wordsPeople,
   };
 }

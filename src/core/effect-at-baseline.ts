@@ -18,7 +18,13 @@ function riskOrFail(effect: CheckedEffect, value: number, baseline: number, fiel
   if (outside && isLimit) fail('limit-risk-outside', field, { measure: effect.measure, limit: value, baseline, risk });
   if (outside && effect.measure === 'rr' && !effect.opposite) fail('rr-risk-above-one', field, { ratio: value, baseline, risk });
   if (outside) fail('risk-outside', field, { measure: effect.measure, value, baseline, risk });
-  return Math.min(1, Math.max(0, risk));
+  const clamped = Math.min(1, Math.max(0, risk));
+  // A ratio that makes the outcome certain or impossible (1e-320 as an odds ratio, say) is a typo.
+  const ratio = effect.measure !== 'arr';
+  if (ratio && baseline > 0 && baseline < 1 && (clamped === 0 || clamped === 1)) {
+    fail('risk-certain', field, { measure: effect.measure, value, baseline, risk: clamped });
+  }
+  return clamped;
 }
 
 function sorted(estimate: number, first: number | null, second: number | null): Estimate {

@@ -13,6 +13,9 @@ export function parseNumber(input: string, field: string): number {
   const cleaned = input.trim().replace(/^\u2212/, '-');
   if (!DECIMAL.test(cleaned)) fail('number-unparsable', field, { input });
   const value = Number(cleaned);
-  if (!Number.isFinite(value)) fail('number-unparsable', field, { input });
+  if (!Number.isFinite(value)) fail('number-out-of-reach', field, { input: input.trim(), size: 'large' });
+  // "1e-400" reads as 0: refuse it rather than compute with a number other than the one typed.
+  const mantissa = cleaned.replace(/e.*$/i, '');
+  if (value === 0 && /[1-9]/.test(mantissa)) fail('number-out-of-reach', field, { input: input.trim(), size: 'small' });
   return value;
 }

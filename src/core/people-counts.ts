@@ -1,8 +1,9 @@
 import { roundHalfUp } from './float-safe.ts';
-import type { Denominator, Estimate, PeopleCounts } from './types.ts';
+import { WORDS_DENOMINATORS } from './types.ts';
+import type { Denominator, Estimate, PeopleCounts, WordsDenominator } from './types.ts';
 
 /** A risk as a whole number of people per denominator, rounded half up (float-safe). */
-export function peopleFor(risk: number, denominator: Denominator): number {
+export function peopleFor(risk: number, denominator: number): number {
   return roundHalfUp(risk * denominator);
 }
 
@@ -12,7 +13,11 @@ export function peopleFor(risk: number, denominator: Denominator): number {
  *
  * @example peopleCounts(0.2, { estimate: 0.15, lower: null, upper: null }, 100).difference // => 5
  */
-export function peopleCounts(comparisonRisk: number, interventionRisk: Estimate, denominator: Denominator): PeopleCounts {
+export function peopleCounts<D extends number = Denominator>(
+  comparisonRisk: number,
+  interventionRisk: Estimate,
+  denominator: D,
+): PeopleCounts<D> {
   const comparison = peopleFor(comparisonRisk, denominator);
   const intervention = peopleFor(interventionRisk.estimate, denominator);
   const { lower, upper } = interventionRisk;
@@ -52,4 +57,46 @@ function misleadsAtHundred(pair: RiskPair): boolean {
  */
 export function chooseDenominator(pairs: readonly RiskPair[]): Denominator {
   return pairs.some(misleadsAtHundred) ? 1000 : 100;
+}
+
+/** True when, at `denominator`, a non-zero risk or a non-zero difference shows as 0 people. */
+function hidesAt(pair: RiskPair, denominator: number): boolean {
+  if (pair.comparison > 0 && peopleFor(pair.comparison, denominator) === 0) return true;
+  if (pair.intervention > 0 && peopleFor(pair.intervention, denominator) === 0) return true;
+  const exact = pair.comparison - pair.intervention;
+  return Math.abs(exact) > 1e-15 && peopleFor(pair.comparison, denominator) === peopleFor(pair.intervention, denominator);
+}
+
+/**
+ * The one denominator of a topic's words and tables: the picture's (100 or 1000), or the
+ * smallest of 10,000, 100,000 and 1,000,000 at which no non-zero risk and no non-zero
+ * difference shows as 0 people; 1,000,000 at most (below one in a million the words say
+ * "fewer than 1 in a million"). Common practice: natural frequencies keep one denominator
+ * for every comparison (Trevena et al. 2013, BMC Med Inform Decis Mak 13 Suppl 2:S7).
+ *
+ * @example chooseWordsDenominator([{ comparison: 0.001, intervention: 0.0008 }], 1000) // => 10000
+ */
+export function chooseWordsDenominator(pairs: readonly RiskPair[], picture: Denominator): WordsDenominator {
+  for (const denominator of WORDS_DENOMINATORS) {
+    if (denominator < picture) continue;
+    if (!pairs.some((pair) => hidesAt(pair, denominator))) return denominator;
+  }
+  return 1000000;
+}
+
+/** The picture's denominator for a words denominator: the same up to 1000, else 1000. */
+export function pictureDenominatorFor(words: WordsDenominator): Denominator {
+  return words === 100 ? 100 : 1000;
+}
+
+/**
+ * How far the shown people move a difference from its exact value, in people: a warning is
+ * due at half a person or more, at any denominator, chosen or forced.
+ *
+ * @example roundingShift({ comparison: 0.0125, intervention: 0.0075 }, 100) // => 0.5 (about: 1 − 1 = 0 shown for an exact 0.5)
+ */
+export function roundingShift(pair: RiskPair, denominator: number): number {
+  const exact = (pair.comparison - pair.intervention) * denominator;
+  const shown = peopleFor(pair.comparison, denominator) - peopleFor(pair.intervention, denominator);
+  return Math.abs(shown - exact);
 }

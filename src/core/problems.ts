@@ -7,6 +7,7 @@
 export type ProblemCode =
   // reading numbers and risks
   | 'number-unparsable'
+  | 'number-out-of-reach'
   | 'number-missing'
   | 'risk-empty'
   | 'risk-unparsable'
@@ -24,6 +25,8 @@ export type ProblemCode =
   | 'arr-out-of-range'
   | 'interval-incomplete'
   | 'interval-excludes-estimate'
+  | 'interval-reversed'
+  | 'risk-certain'
   | 'rr-risk-above-one'
   | 'limit-risk-outside'
   | 'risk-outside'
@@ -33,6 +36,7 @@ export type ProblemCode =
   | 'period-too-long'
   // trial counts
   | 'counts-not-whole'
+  | 'counts-too-large'
   | 'counts-negative'
   | 'counts-total-zero'
   | 'counts-events-above-total'

@@ -48,8 +48,17 @@ export interface CountsEffect {
 
 export type Effect = EnteredEffect | CountsEffect;
 
-/** Denominators a chart and its text may use. */
+/** Denominators a picture (icon array) may use. */
 export type Denominator = 100 | 1000;
+
+/**
+ * Denominators the words and tables may use: the picture's, or a larger one when a rare
+ * outcome's difference would round to no whole person out of 1000.
+ */
+export type WordsDenominator = 100 | 1000 | 10000 | 100000 | 1000000;
+
+/** Every words denominator, smallest first. */
+export const WORDS_DENOMINATORS: readonly WordsDenominator[] = [100, 1000, 10000, 100000, 1000000];
 
 /** NNT as reported: `label` is NNTB (benefit) or NNTH (harm), after Altman (1998). */
 export interface NumberNeeded {
@@ -60,8 +69,8 @@ export interface NumberNeeded {
 }
 
 /** Rounded people counts for one option against its comparison, per `denominator`. */
-export interface PeopleCounts {
-  readonly denominator: Denominator;
+export interface PeopleCounts<D extends number = Denominator> {
+  readonly denominator: D;
   readonly comparison: number;
   readonly intervention: number;
   /** comparison − intervention, signed: positive means fewer people have the outcome with the option. */

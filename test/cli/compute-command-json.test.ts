@@ -7,8 +7,8 @@ import { computeJson, estimatesIn, numbersIn, run } from './support.ts';
 
 const ESTIMATE_KEYS = ['estimate', 'lower', 'upper'];
 const NNT_KEYS = ['estimate', 'label', 'rounded', 'text'];
-const PEOPLE_KEYS = ['comparison', 'denominator', 'difference', 'intervention'];
-const EFFECT_KEYS = ['absoluteReduction', 'comparisonRisk', 'interventionRisk', 'nnt', 'perPeople', 'relativeRisk', 'wanted', 'warnings'];
+const PEOPLE_KEYS = ['comparison', 'denominator', 'difference', 'intervention', 'pictureDenominator'];
+const EFFECT_KEYS = ['absoluteReduction', 'comparisonRisk', 'interventionRisk', 'nnt', 'perPeople', 'level', 'relativeRisk', 'wanted', 'warnings'];
 const COUNTS_KEYS = [...EFFECT_KEYS, 'chiSquare', 'chiSquareYates', 'cramersV', 'fisherExactP', 'oddsRatio'];
 
 const keysOf = (value: unknown): string[] => Object.keys(value as object).sort();
@@ -53,7 +53,7 @@ describe('the JSON of one effect', () => {
     const json = await computeJson(['--baseline', '10%', '--arr', '3%']);
     expect(json.comparisonRisk).toEqual({ estimate: 0.1, lower: null, upper: null });
     expect(json.interventionRisk).toEqual({ estimate: expect.closeTo(0.07, 12), lower: null, upper: null });
-    expect(json.perPeople).toEqual({ denominator: 100, comparison: 10, intervention: 7, difference: 3 });
+    expect(json.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 10, intervention: 7, difference: 3 });
   });
 
   it('has no NNT number or label at exactly no difference, only a plain phrase', async () => {
@@ -176,9 +176,14 @@ function contractBreaches(json: Record<string, unknown>): string[] {
       breaches.push(`estimate outside its interval: ${JSON.stringify(value)}`);
     }
   }
-  const people = json.perPeople as { denominator: number; comparison: number; intervention: number; difference: number } | null;
+  const people = json.perPeople as
+    | { denominator: number; pictureDenominator: number; comparison: number; intervention: number; difference: number }
+    | null;
   if (people !== null) {
-    if (people.denominator !== 100 && people.denominator !== 1000) breaches.push(`denominator ${people.denominator}`);
+    if (![100, 1000, 10000, 100000, 1000000].includes(people.denominator)) breaches.push(`denominator ${people.denominator}`);
+    if (people.pictureDenominator !== Math.min(people.denominator, 1000) && !(people.denominator === 100 && people.pictureDenominator === 100)) {
+      breaches.push(`picture denominator ${people.pictureDenominator} for words per ${people.denominator}`);
+    }
     if (people.difference !== people.comparison - people.intervention) breaches.push('difference is not comparison − intervention');
     for (const count of [people.comparison, people.intervention]) {
       if (!Number.isInteger(count) || count < 0 || count > people.denominator) breaches.push(`people count ${count}`);

@@ -40,7 +40,7 @@ const refusals: readonly [string, readonly string[], readonly string[]][] = [
   // reading numbers
   ['an effect that is not a number', ['--baseline', '30%', '--rr', 'abc'], ['--rr', '"abc"', 'not a number', 'digits']],
   ['an effect written as Infinity', ['--baseline', '30%', '--rr', 'Infinity'], ['--rr', '"Infinity"', 'not a number']],
-  ['an effect too large to be a number', ['--baseline', '30%', '--or', '1e400'], ['--or', '"1e400"', 'not a number']],
+  ['an effect too large to be a number', ['--baseline', '30%', '--or', '1e400'], ['--or', '"1e400"', 'too large']],
   ['an effect written as NaN', ['--baseline', '30%', '--hr', 'NaN'], ['--hr', '"NaN"', 'not a number']],
   // reading risks
   ['a baseline that is not a risk', ['--baseline', 'abc', '--rr', '0.8'], ['--baseline', '"abc"', '20%, 0.2, 20/100, 1 in 5 or 200 per 1000']],
@@ -110,7 +110,7 @@ const refusals: readonly [string, readonly string[], readonly string[]][] = [
   ['a baseline without an effect', ['--baseline', '30%'], ['--rr', '--counts', '--demo']],
   ['nothing to compute', [], ['--rr', '--counts', '--demo']],
   // option values
-  ['a denominator other than 100 or 1000', ['--baseline', '30%', '--rr', '0.8', '--per', '10'], ['--per', '"10"', '--per 100', '--per 1000']],
+  ['a denominator other than 100 or 1000', ['--baseline', '30%', '--rr', '0.8', '--per', '10'], ['--per', '"10"', '--per 100', '1000000']],
   ['a denominator in words', ['--baseline', '30%', '--rr', '0.8', '--per', 'hundred'], ['--per', '"hundred"', '--per 100']],
   ['an unknown interval method', ['--counts', '10/100,20/100', '--method', 'exact'], ['--method', '"exact"', 'newcombe', 'wald']],
   ['an interval method without counts', ['--baseline', '30%', '--rr', '0.8', '--method', 'wald'], ['--method', '--counts']],

@@ -91,7 +91,7 @@ describe('chancewise compute with a topic', () => {
     expect(standard.name).toBe('the standard dose');
     // 0.15 × 0.75 = 0.1125 → 11 in 100 (rounded half up); 1/0.0375 = 26.7 → NNTB 27 (derived).
     expect(standard.interventionRisk.estimate).toBeCloseTo(0.1125, 12);
-    expect(standard.perPeople).toEqual({ denominator: 100, comparison: 15, intervention: 11, difference: 4 });
+    expect(standard.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 15, intervention: 11, difference: 4 });
     expect(standard.nnt).toMatchObject({ rounded: 27, label: 'NNTB' });
     expect(standard.groups).toEqual({ event: 11, prevented: 4, caused: 0, free: 85 });
     // A harm: muscle pain 5% × 1.2 = 6% → NNTH 100 (derived).
@@ -129,7 +129,7 @@ describe('chancewise compute with a topic', () => {
     const json = await topicJson(['--demo', '--per', '1000']);
     expect(json.denominator).toBe(1000);
     // 0.1125 × 1000 = 112.5 → 113 (rounded half up, common practice).
-    expect(option(json, 0, 1).perPeople).toEqual({ denominator: 1000, comparison: 150, intervention: 113, difference: 37 });
+    expect(option(json, 0, 1).perPeople).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 150, intervention: 113, difference: 37 });
     expect(json.warnings.some((sentence) => sentence.includes('per 1000 people, because'))).toBe(false);
   });
 

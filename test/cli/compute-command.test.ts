@@ -24,7 +24,7 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.276, 12);
     expect(estimateOf(json, 'absoluteReduction')?.estimate).toBeCloseTo(0.024, 12);
     expect(estimateOf(json, 'relativeRisk')?.estimate).toBeCloseTo(0.92, 12);
-    expect(peopleOf(json)).toEqual({ denominator: 1000, comparison: 300, intervention: 276, difference: 24 });
+    expect(peopleOf(json)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 300, intervention: 276, difference: 24 });
     expect(nntOf(json)).toMatchObject({ rounded: 42, label: 'NNTB', text: 'NNTB 42' });
     expect(nntOf(json).estimate).toBeCloseTo(1 / 0.024, 9);
   });
@@ -34,7 +34,7 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     // 62 fewer per 1000, NNT = 1/0.0617 → 17.
     const json = await computeJson(['--baseline', '30%', '--or', '0.73', '--per', '1000']);
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.2383, 4);
-    expect(peopleOf(json)).toEqual({ denominator: 1000, comparison: 300, intervention: 238, difference: 62 });
+    expect(peopleOf(json)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 300, intervention: 238, difference: 62 });
     expect(nntOf(json)).toMatchObject({ rounded: 17, label: 'NNTB', text: 'NNTB 17' });
     // The implied risk ratio at this baseline: 0.2383 / 0.3 (derived).
     expect(estimateOf(json, 'relativeRisk')?.estimate).toBeCloseTo(0.2383 / 0.3, 3);
@@ -103,11 +103,12 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     expect(signed).toEqual(plain);
   });
 
-  it('accepts an interval given high end first', async () => {
-    // Common practice: the limits are sorted, lower ≤ upper.
-    const reversed = await computeJson(['--baseline', '20%', '--hr', '0.8', '--ci', '0.9,0.7']);
-    const ordered = await computeJson(['--baseline', '20%', '--hr', '0.8', '--ci', '0.7,0.9']);
-    expect(reversed).toEqual(ordered);
+  it('refuses an interval given high end first, saying which limit is which', async () => {
+    // Limits in the wrong order are almost certainly a typing mistake (common practice: refuse, do not repair).
+    const found = await run(['compute', '--baseline', '20%', '--rr', '0.8', '--ci', '0.9,0.7']);
+    expect(found.code).toBe(2);
+    expect(found.stderr.trim().split('\n')).toHaveLength(1);
+    expect(found.stderr).toContain('its first limit, 0.9, is above its second, 0.7');
   });
 
   it('reads every way of writing a risk alike', async () => {
@@ -178,7 +179,7 @@ describe('chancewise compute analyses trial counts', () => {
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.8, 12);
     expect(estimateOf(json, 'comparisonRisk')?.estimate).toBeCloseTo(0.6, 12);
     expect(nntOf(json)).toMatchObject({ rounded: 5, label: 'NNTH' });
-    expect(peopleOf(json)).toEqual({ denominator: 100, comparison: 60, intervention: 80, difference: -20 });
+    expect(peopleOf(json)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 60, intervention: 80, difference: -20 });
   });
 
   it('gives the same difference with the arms swapped, sign reversed', async () => {
@@ -229,7 +230,7 @@ describe('chancewise compute counts people per 100 or per 1000', () => {
   it('keeps 100 when rounding does not distort the difference, and --per 1000 overrides it', async () => {
     // Cochrane Handbook 5.1 §12.5.4.2 example: 30% and 27.6% are 30 and 28 in 100 (common practice rounding).
     const automatic = await computeJson(['--baseline', '0.3', '--rr', '0.92']);
-    expect(peopleOf(automatic)).toEqual({ denominator: 100, comparison: 30, intervention: 28, difference: 2 });
+    expect(peopleOf(automatic)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 30, intervention: 28, difference: 2 });
     const forced = await computeJson(['--baseline', '0.3', '--rr', '0.92', '--per', '1000']);
     expect(peopleOf(forced).denominator).toBe(1000);
   });
@@ -237,10 +238,10 @@ describe('chancewise compute counts people per 100 or per 1000', () => {
   it('raises to 1000 when per 100 would round the difference away, and --per 100 overrides it', async () => {
     // Common practice: 2% and 1.8% are both 2 in 100, so the difference would vanish; per 1000 it is 20 and 18.
     const automatic = await computeJson(['--baseline', '2%', '--rr', '0.9']);
-    expect(peopleOf(automatic)).toEqual({ denominator: 1000, comparison: 20, intervention: 18, difference: 2 });
+    expect(peopleOf(automatic)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 20, intervention: 18, difference: 2 });
     expect((automatic.warnings as string[]).some((sentence) => sentence.includes('per 1000'))).toBe(true);
     const forced = await computeJson(['--baseline', '2%', '--rr', '0.9', '--per', '100']);
-    expect(peopleOf(forced)).toEqual({ denominator: 100, comparison: 2, intervention: 2, difference: 0 });
+    expect(peopleOf(forced)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 2, intervention: 2, difference: 0 });
     expect((forced.warnings as string[]).some((sentence) => sentence.includes('per 1000'))).toBe(false);
   });
 });

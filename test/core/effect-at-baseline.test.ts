@@ -123,7 +123,9 @@ describe('checkEffect refuses impossible effects', () => {
     expect(problemOf(() => checkEffect(effect, 'effect')).problem.code).toBe(code);
   });
 
-  it('sorts limits given in the wrong order', () => {
-    expect(checkEffect({ measure: 'rr', estimate: 0.75, lower: 0.9, upper: 0.6 }, 'e').interval).toEqual({ lower: 0.6, upper: 0.9 });
+  it('refuses limits given in the wrong order instead of sorting them', () => {
+    expect(() => checkEffect({ measure: 'rr', estimate: 0.75, lower: 0.9, upper: 0.6 }, 'e')).toThrow(
+      expect.objectContaining({ problem: expect.objectContaining({ code: 'interval-reversed', field: 'e.interval' }) }),
+    );
   });
 });

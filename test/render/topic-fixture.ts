@@ -19,6 +19,13 @@ interface ArmCounts {
 function option(id: string, name: string, isComparison: boolean, counts: ArmCounts, denominator: Denominator): OptionOutcomeResult {
   const intervention = isComparison ? counts.comparison : counts.intervention;
   const risk = { estimate: intervention / denominator, lower: null, upper: null };
+  const people = {
+    denominator,
+    comparison: counts.comparison,
+    intervention,
+    difference: counts.comparison - intervention,
+    interventionRange: isComparison ? null : (counts.range ?? null),
+  };
   return {
     optionId: id,
     name,
@@ -33,13 +40,8 @@ function option(id: string, name: string, isComparison: boolean, counts: ArmCoun
     relativeRisk: null,
     absoluteReduction: { estimate: (counts.comparison - intervention) / denominator, lower: null, upper: null },
     nnt: { estimate: null, rounded: null, label: null, text: '' },
-    perPeople: {
-      denominator,
-      comparison: counts.comparison,
-      intervention,
-      difference: counts.comparison - intervention,
-      interventionRange: isComparison ? null : (counts.range ?? null),
-    },
+    perPeople: people,
+    wordsPeople: people,
     notices: [],
   };
 }
@@ -71,6 +73,7 @@ export function topicFixture(
     population: 'people like you',
     periodYears: 10,
     periodUnit: 'years',
+    wordsDenominator: denominator,
     denominator,
     illustrative: true,
     outcomes: [outcome('stroke', 'a stroke', 'benefit', stroke, denominator), outcome('muscle-pain', 'muscle pain', 'harm', musclePain, denominator)],

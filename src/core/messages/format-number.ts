@@ -39,3 +39,10 @@ export function formatSignificant(value: number, digits = 1): string {
 export function formatPercentSignificant(proportion: number, digits = 1): string {
   return `${formatSignificant(proportion * 100, digits)}%`;
 }
+
+/** A whole number with a comma between thousands from 10,000 up: 1000 → "1000", 10000 → "10,000". */
+export function formatCount(value: number): string {
+  const whole = String(Math.round(value));
+  if (Math.abs(value) < 10000) return whole;
+  return whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+}

@@ -1,11 +1,18 @@
-import { computeEffect } from '../compute-effect.ts';
+import { chooseDenominators, computeEffect } from '../compute-effect.ts';
 import type { EffectComputation } from '../compute-effect.ts';
 import { numberNeeded } from '../number-needed.ts';
 import { peopleGroups } from '../people-groups.ts';
-import { chooseDenominator, peopleCounts } from '../people-counts.ts';
+import { peopleCounts } from '../people-counts.ts';
 import { parseBaselineRisk } from '../parse-risk.ts';
 import type { Problem } from '../problems.ts';
-import type { Denominator, Estimate, Notice } from '../types.ts';
+import type { Denominator, Estimate, Notice, WordsDenominator } from '../types.ts';
+
+/** Notices about the denominator: made once for the whole topic, never per effect. */
+const DENOMINATOR_NOTICES: ReadonlySet<string> = new Set([
+  'denominator-raised',
+  'rounding-moves-difference',
+  'difference-below-one-in-a-million',
+]);
 import type { Topic, TopicOption, TopicOutcome } from './topic.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from './topic-result.ts';
 import { checkTopic, trialBaseline } from './validate-topic.ts';
@@ -41,7 +48,7 @@ function baselineOf(outcome: TopicOutcome): { risk: number; fromTrial: boolean }
   return { risk: risk ?? 0.5, fromTrial: true };
 }
 
-function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator): OptionOutcomeResult {
+function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
   // The comparison against itself: no difference, whichever way the event points.
   const people = peopleCounts(risk, point(risk), denominator);
   return {
@@ -55,6 +62,7 @@ function comparisonEntry(option: TopicOption, risk: number, denominator: Denomin
     nnt: numberNeeded(point(0)),
     level: null,
     perPeople: people,
+    wordsPeople: peopleCounts(risk, point(risk), words),
     groups: peopleGroups(people.comparison, people.intervention, denominator),
     notices: [],
     certainty: null,
@@ -63,7 +71,7 @@ function comparisonEntry(option: TopicOption, risk: number, denominator: Denomin
   };
 }
 
-function optionEntry(item: Computed, baselineRisk: number, denominator: Denominator): OptionOutcomeResult {
+function optionEntry(item: Computed, baselineRisk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
   const { computation, option, entry } = item;
   const intervention = computation.interventionRisk ?? point(baselineRisk);
   const people = peopleCounts(baselineRisk, intervention, denominator);
@@ -78,8 +86,9 @@ function optionEntry(item: Computed, baselineRisk: number, denominator: Denomina
     nnt: computation.nnt,
     level: computation.level,
     perPeople: people,
+    wordsPeople: peopleCounts(baselineRisk, intervention, words),
     groups: peopleGroups(people.comparison, people.intervention, denominator),
-    notices: computation.notices.filter((found) => found.code !== 'denominator-raised'),
+    notices: computation.notices.filter((found) => !DENOMINATOR_NOTICES.has(found.code)),
     certainty: entry.certainty,
     importance: entry.importance,
     source: entry.source,
@@ -112,7 +121,7 @@ function distinctNotices(notices: readonly Notice[]): Notice[] {
  * over the topic's one period and with one denominator. Returns every problem at once when
  * the topic is not valid.
  */
-export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominator | null } = {}): TopicEvaluation {
+export function evaluateTopic(topic: Topic, settings: { readonly per?: WordsDenominator | null } = {}): TopicEvaluation {
   const check = checkTopic(topic);
   if (check.problems.length > 0) return { ok: false, result: null, problems: check.problems };
   const computed: Computed[] = [];
@@ -131,7 +140,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       for (const found of computation.notices) {
         if (found.code === 'period-beyond-followup') {
           notices.push({ code: found.code, values: { ...found.values, option: option.name, outcome: outcome.name } });
-        } else if (found.code !== 'denominator-raised') {
+        } else if (!DENOMINATOR_NOTICES.has(found.code)) {
           notices.push(found);
         }
       }
@@ -139,13 +148,16 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
     if (baseline.fromTrial) notices.push({ code: 'counts-baseline-from-trial', values: { outcome: outcome.name } });
     baselines.set(outcome.id, converted);
   }
-  const denominator = settings.per ?? chooseDenominator(
+  const choice = chooseDenominators(
     computed.map((item) => ({
       comparison: baselines.get(item.outcome.id) ?? 0,
       intervention: item.computation.interventionRisk?.estimate ?? 0,
     })),
+    settings.per ?? null,
   );
-  if (denominator === 1000 && (settings.per ?? null) === null) notices.push({ code: 'denominator-raised', values: {} });
+  const denominator = choice.picture;
+  const words = choice.words;
+  notices.push(...choice.notices);
   const byOutcome = new Map<TopicOutcome, Map<string, Computed>>();
   for (const item of computed) {
     const forOutcome = byOutcome.get(item.outcome) ?? new Map<string, Computed>();
@@ -163,10 +175,10 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       baselineRisk,
       baselineSource: outcome.baseline.source,
       options: topic.options.map((option) => {
-        if (option.isComparison) return comparisonEntry(option, baselineRisk, denominator);
+        if (option.isComparison) return comparisonEntry(option, baselineRisk, denominator, words);
         const item = byOutcome.get(outcome)?.get(option.id);
         if (item === undefined) throw new Error(`no effect for ${option.id} on ${outcome.id} after validation`);
-        return optionEntry(item, baselineRisk, denominator);
+        return optionEntry(item, baselineRisk, denominator, words);
       }),
     };
   });
@@ -179,6 +191,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
       periodYears: topic.periodYears,
       periodUnit: topic.periodUnit ?? 'years',
       denominator,
+      wordsDenominator: words,
       illustrative: topic.illustrative,
       outcomes,
       notices: distinctNotices(notices),
@@ -191,7 +204,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: Denominat
  *
  * @throws TopicError with every problem when the topic is not valid
  */
-export function computeTopic(topic: Topic, settings: { readonly per?: Denominator | null } = {}): TopicResult {
+export function computeTopic(topic: Topic, settings: { readonly per?: WordsDenominator | null } = {}): TopicResult {
   const evaluation = evaluateTopic(topic, settings);
   if (!evaluation.ok) throw new TopicError(evaluation.problems);
   return evaluation.result;

@@ -1,4 +1,4 @@
-import type { Denominator, Estimate, Notice, NumberNeeded, PeopleCounts, PeopleGroups } from '../types.ts';
+import type { Denominator, Estimate, Notice, NumberNeeded, PeopleCounts, PeopleGroups, WordsDenominator } from '../types.ts';
 import type { TimeUnit } from '../time-unit.ts';
 import type { Certainty, Importance } from './topic.ts';
 
@@ -29,6 +29,8 @@ export interface OptionOutcomeResult extends EffectResult {
   readonly comparisonRisk: Estimate;
   readonly interventionRisk: Estimate;
   readonly perPeople: PeopleCounts;
+  /** The people counts at the topic's words denominator (`TopicResult.wordsDenominator`). */
+  readonly wordsPeople: PeopleCounts<WordsDenominator>;
   /** The four icon-array groups from the rounded people counts. */
   readonly groups: PeopleGroups;
   /** GRADE certainty and importance, for the wording; null for the comparison. */
@@ -57,7 +59,13 @@ export interface TopicResult {
   readonly periodYears: number;
   /** The unit the topic's period was given in, for the wording. */
   readonly periodUnit: TimeUnit;
+  /** The pictures' denominator: 100 or 1000. */
   readonly denominator: Denominator;
+  /**
+   * The words' and tables' denominator: the pictures', or 10,000 up to 1,000,000 when a rare
+   * outcome's difference would round to no whole person out of 1000.
+   */
+  readonly wordsDenominator: WordsDenominator;
   readonly illustrative: boolean;
   readonly outcomes: readonly OutcomeResult[];
   readonly notices: readonly Notice[];

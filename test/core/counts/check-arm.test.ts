@@ -22,7 +22,16 @@ describe('checkArm', () => {
       'counts-not-whole',
     );
     expect(problemOf(() => checkArm({ events: 1, total: Infinity }, 'comparison')).code).toBe('counts-not-whole');
-    expect(problemOf(() => checkArm({ events: 1, total: 2 ** 60 }, 'comparison')).code).toBe('counts-not-whole');
+  });
+
+  it('refuses more than a billion people in an arm as too large, quoting the arm as typed', () => {
+    expect(problemOf(() => checkArm({ events: 1, total: 2 ** 60 }, 'comparison')).code).toBe('counts-too-large');
+    expect(problemOf(() => checkArm({ events: 1, total: 1e10 }, 'comparison', '1/1e10'))).toEqual({
+      code: 'counts-too-large',
+      field: 'comparison',
+      values: { input: '1/1e10', limit: '1,000,000,000' },
+    });
+    expect(() => checkArm({ events: 1, total: 1_000_000_000 }, 'comparison')).not.toThrow();
   });
 
   it('rejects negative events or totals', () => {

@@ -42,6 +42,13 @@ export function optionFixture(spec: OptionSpec, denominator: Denominator): Optio
       : { rounded: Math.ceil(1 / Math.abs(reduction) - 1e-9), label: reduction > 0 ? ('NNTB' as const) : ('NNTH' as const) };
   const nnt = spec.nnt ?? defaultNnt;
   const high = Math.max(spec.comparison, spec.intervention);
+  const people = {
+    denominator,
+    comparison: spec.comparison,
+    intervention: spec.intervention,
+    difference: spec.comparison - spec.intervention,
+    interventionRange: spec.range ?? null,
+  };
   return {
     optionId: spec.id,
     name: spec.name,
@@ -59,13 +66,8 @@ export function optionFixture(spec: OptionSpec, denominator: Denominator): Optio
           : point(spec.relativeRisk),
     absoluteReduction: point(reduction),
     nnt: { estimate: nnt.rounded, rounded: nnt.rounded, label: nnt.label, text: '' },
-    perPeople: {
-      denominator,
-      comparison: spec.comparison,
-      intervention: spec.intervention,
-      difference: spec.comparison - spec.intervention,
-      interventionRange: spec.range ?? null,
-    },
+    perPeople: people,
+    wordsPeople: people,
     groups: {
       denominator,
       event: Math.min(spec.comparison, spec.intervention),
@@ -127,6 +129,7 @@ export function topicFixture(
     periodYears: settings.periodYears ?? 10,
     periodUnit: 'years',
     denominator,
+    wordsDenominator: denominator,
     illustrative: true,
     outcomes: outcomes.map((outcome) => outcomeFixture(outcome, denominator)),
     notices: [],

@@ -20,7 +20,8 @@ export const cliMessages = {
   periodsWithArr: () => '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
   levelWithoutInterval: () => '--level is the level of --ci; give --ci LOW,HIGH too, or leave --level out.',
   ciFormat: (value: string) => `--ci "${value}" is not an interval. Write LOW,HIGH, for example --ci 0.6,0.9.`,
-  perValue: (value: string) => `--per "${value}" is not allowed. Use --per 100 or --per 1000.`,
+  perValue: (value: string) =>
+    `--per "${value}" is not allowed. Use --per 100, 1000, 10000, 100000 or 1000000 (pictures use 1000 above 1000).`,
   methodValue: (value: string) => `--method "${value}" is not allowed. Use --method newcombe or --method wald.`,
   methodWithoutCounts: () => '--method applies to --counts only.',
   paperValue: (value: string) => `--paper "${value}" is not allowed. Use --paper a4 or --paper letter.`,

@@ -1,5 +1,5 @@
 import type { ProblemValues } from '../../problems.ts';
-import { formatDecimal, formatPercent } from '../format-number.ts';
+import { formatCount, formatDecimal, formatPercent } from '../format-number.ts';
 
 type Render = (values: ProblemValues) => string;
 
@@ -36,6 +36,9 @@ export type NoticeCode =
   | 'opposite-ratio-applied'
   | 'opposite-odds-ratio-inverted'
   | 'denominator-raised'
+  | 'rounding-moves-difference'
+  | 'rounding-hides-difference'
+  | 'difference-below-one-in-a-million'
   | 'reading-grade-high';
 
 /** English sentences for every warning code. */
@@ -58,8 +61,20 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     `The ${text(v, 'measure') === 'hr' ? 'hazard ratio' : text(v, 'measure') === 'rrr' ? 'relative reduction' : text(v, 'measure') === 'arr' ? 'absolute reduction' : 'risk ratio'} was reported for the opposite event, so it was applied to the chance of not having the outcome. A ratio for one event is not the same as the inverse ratio for its opposite: check that the trial reported it this way.`,
   'opposite-odds-ratio-inverted': () =>
     'The odds ratio was reported for the opposite event, so its inverse (1 ÷ OR) was used; for odds ratios this is exact.',
-  'denominator-raised': () =>
-    'The numbers are shown per 1000 people, because per 100 they would round a difference away or move it by half a person or more.',
+  'denominator-raised': (v) => {
+    const words = typeof v.denominator === 'number' ? v.denominator : 1000;
+    const picture = typeof v.picture === 'number' ? v.picture : 1000;
+    if (words <= 1000) {
+      return `The numbers are shown per ${formatCount(words)} people, because per 100 a risk or a difference would show as 0 people, or rounding would move a difference by half a person or more.`;
+    }
+    return `The words and tables count per ${formatCount(words)} people, because per 1000 a risk or a difference would show as 0 people; the pictures show ${formatCount(picture)} people, too few to show that difference as whole people.`;
+  },
+  'rounding-moves-difference': (v) =>
+    `Rounding to whole people moves a difference by ${text(v, 'people')} of a person out of ${formatCount(Number(v.denominator))}: the people counts are approximate, so read the percentages for the exact values.`,
+  'rounding-hides-difference': (v) =>
+    `A difference is smaller than 1 person in ${formatCount(Number(v.denominator))}, so the people counts show none. There is a difference: read the percentages, or count per more people.`,
+  'difference-below-one-in-a-million': () =>
+    'A difference is smaller than 1 in a million: the words say "fewer than 1 in a million" rather than a number of people.',
   'reading-grade-high': (v) => {
     const grade = v.grade;
     const shown = typeof grade === 'number' ? formatDecimal(grade, 1) : text(v, 'grade');

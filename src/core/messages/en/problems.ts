@@ -40,6 +40,8 @@ const capitalise = (phrase: string): string => phrase.charAt(0).toUpperCase() + 
 /** English sentences for every problem code: what is wrong, and how to fix it. */
 export const problemMessages: Record<ProblemCode, Render> = {
   'number-unparsable': (v) => `"${text(v, 'input')}" is not a number. Write digits, for example 0.75.`,
+  'number-out-of-reach': (v) =>
+    `"${text(v, 'input')}" is too ${text(v, 'size') === 'large' ? 'large' : 'small'} to compute with. Check the number: it is almost certainly a typing mistake.`,
   'number-missing': (v) => `The ${text(v, 'what')} is empty. Write a number, for example ${text(v, 'example')}.`,
   'risk-empty': () => 'The risk is empty. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.',
   'risk-unparsable': (v) =>
@@ -65,6 +67,10 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'arr-out-of-range': (v) =>
     `An absolute risk reduction of ${percent(v, 'value')} is not possible: it must lie between −100% and 100%.`,
   'interval-incomplete': () => 'The interval needs both a lower and an upper limit, for example 0.6,0.9.',
+  'interval-reversed': (v) =>
+    `The interval is written the wrong way round: its first limit, ${text(v, 'lower')}, is above its second, ${text(v, 'upper')}. Write the lower limit first: ${text(v, 'upper')} to ${text(v, 'lower')}.`,
+  'risk-certain': (v) =>
+    `${capitalise(aMeasure(v))} of ${measureValue(v, 'value')} at a baseline risk of ${percent(v, 'baseline')} would make the outcome ${text(v, 'risk') === '1' ? 'certain (100%) with the option' : 'impossible (0%) with the option'}. A real effect does not do that: check the number.`,
   'interval-excludes-estimate': (v) =>
     `The interval ${text(v, 'lower')} to ${text(v, 'upper')} does not contain the estimate ${text(v, 'estimate')}. Check the numbers and their order.`,
   'rr-risk-above-one': (v) =>
@@ -79,6 +85,8 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `A period of "${text(v, 'input')}" years is too long: write at most ${text(v, 'limit')} years, for example 10.`,
   'period-pair-incomplete': () =>
     'Give both the period the baseline risk covers and the period wanted (--over YEARS --to YEARS), or neither.',
+  'counts-too-large': (v) =>
+    `"${text(v, 'input')}" is more people than Chancewise counts in one arm (at most ${text(v, 'limit')}). Check the counts.`,
   'counts-not-whole': (v) => `"${text(v, 'input')}" is not a whole number of people. Write counts like 12/100.`,
   'counts-negative': (v) => `"${text(v, 'input')}" is negative. Counts of people cannot be below 0.`,
   'counts-total-zero': (v) => `The arm "${text(v, 'input')}" has no people. Each arm needs a total of at least 1.`,
