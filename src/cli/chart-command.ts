@@ -73,6 +73,7 @@ function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
   return pairChart({
     perPeople: result.perPeople,
     periodYears,
+    ...(query.periods?.targetUnit === undefined ? {} : { periodUnit: query.periods.targetUnit }),
     kind,
     wanted: eventWanted,
     ...(wanted === undefined ? {} : { outcomeName: wanted }),

@@ -18,10 +18,10 @@ export interface RangeRing {
 
 /**
  * The ring around the glyph box at (`x`, `y`) of side `iconSize` in a grid of `cellSize`:
- * centred in the gap between that box and the cell's edge, with a line as wide as half the
- * gap, so two rings side by side never touch.
+ * centred in the gap between that box and the cell's edge, its line a twentieth of the cell
+ * wide (no wider than that gap), so it stays clear of the figure and shows at 1000 people too.
  *
- * @example rangeRing(0.06, 0.06, 0.88, 1, colourPalette) // => { x: 0.03, y: 0.03, side: 0.94, …, lineWidth: 0.03, … }
+ * @example rangeRing(0.06, 0.06, 0.88, 1, colourPalette) // => { x: 0.03, y: 0.03, side: 0.94, …, lineWidth: 0.05, … }
  */
 export function rangeRing(x: number, y: number, iconSize: number, cellSize: number, palette: ChartPalette): RangeRing {
   const inset = (cellSize - iconSize) / 2;
@@ -32,7 +32,7 @@ export function rangeRing(x: number, y: number, iconSize: number, cellSize: numb
     y: y - offset,
     side: iconSize + 2 * offset,
     radius: cellSize * 0.12,
-    lineWidth: inset / 2,
+    lineWidth: Math.min(cellSize * 0.05, inset),
     dash: [dash * cellSize, gap * cellSize],
   };
 }

@@ -42,7 +42,7 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     people.setAttribute('transform', peopleTransform(placed));
     drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
     group.node()?.appendChild(people);
-    if (resolved.showRange) {
+    if (hasRangeOutline(array, resolved)) {
       const rings = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
       rings.setAttribute('transform', peopleTransform(placed));
       drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
@@ -50,6 +50,11 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     }
   });
   return frame;
+}
+
+/** Whether an array carries a range outline: when the range is shown and the array has an interval. */
+export function hasRangeOutline(array: ChartArray, options: ResolvedSvgChartOptions): boolean {
+  return options.showRange && array.range !== null;
 }
 
 /** Root attributes: size, the text alternative, and the options an update reuses. */

@@ -94,3 +94,15 @@ describe('updateChart and the event’s direction', () => {
     expect(updatedText).toBe(drawIntoPage(pair(true)).outerHTML);
   });
 });
+
+describe('updateChart and the range outline', () => {
+  it('gives only arrays with an interval an outline, and redraws when an interval goes away', () => {
+    const svg = drawIntoPage(stroke(20, 15), { showRange: true });
+    const outlines = () => [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > g.range-outline') !== null);
+    expect(outlines()).toEqual([false, true]);
+    const noInterval = outcomeChart(topicFixture(100, { comparison: 20, intervention: 15, range: null }), 'stroke');
+    expect(updateChart(svg, noInterval).redrawn).toBe(true);
+    expect(outlines()).toEqual([false, false]);
+    expect(svg.getAttribute('data-show-range')).toBe('true');
+  });
+});
