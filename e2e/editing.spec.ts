@@ -131,7 +131,7 @@ test.describe('editing a topic', () => {
     await page.getByRole('button', { name: 'Topics' }).click();
     const panel = page.getByRole('region', { name: 'Start' });
     const examples = panel.locator('button.demo');
-    await expect(examples).toHaveCount(3);
+    await expect(examples).toHaveCount(4);
     for (const example of await examples.all()) await expect(example).toContainText('Illustrative');
     await page.screenshot({ path: `${SCREENS}/06-start-panel.png` });
     await examples.nth(1).click();

@@ -16,34 +16,45 @@ const SIZES = [
   { width: 1920, height: 1080, body: 42, heading: 60, icon: 36 },
 ] as const;
 
-const STEPS = [
-  ['title', 'Taking a daily tablet to lower the chance of a heart attack or stroke (illustrative example)'],
-  ['baseline', 'Without the option'],
-  ['with-option', 'With the option'],
-  ['helped', 'Who is helped'],
-  ['harmed', 'Who is harmed'],
-  ['uncertainty', 'How sure are we?'],
-  ['patient-words', 'What the patient hears'],
-  ['framing', 'One result, four ways'],
-  ['denominator', '100 or 1000 people?'],
-  ['arrangement', 'Grouped or scattered?'],
-  ['incremental', 'Two totals, or the change itself?'],
-] as const;
+/** Every slide of the heart topic: its step, its heading, and words it must show (from the computed numbers and the core's wording). */
+const STEPS: readonly (readonly [string, string, readonly string[]])[] = [
+  ['title', 'Taking a daily tablet to lower the chance of a heart attack or stroke (illustrative example)', ['Every number is over 10 years.', 'Comparing the standard dose with no tablet.']],
+  ['baseline', 'Without the option', ['15 in 100', 'have a heart attack or stroke over 10 years', '85 in 100']],
+  ['with-option', 'With the option', ['No tablet', 'The standard dose', '11 in 100', 'without it (no tablet)']],
+  ['helped', 'Who is helped', ['4 in 100', 'avoid a heart attack or stroke because of the standard dose', 'have it anyway']],
+  ['harmed', 'Who is harmed (1 of 2)', ['1 in 100', 'gets muscle pain bad enough to stop the tablet because of the standard dose']],
+  ['harmed', 'Who is harmed (2 of 2)', ['1 in 100', 'gets type 2 diabetes because of the standard dose']],
+  ['uncertainty', 'How sure are we?', ['could be anywhere between 3 and 5 in 100', 'Certainty of the evidence: high']],
+  ['patient-words', 'What the patient hears (1 of 2)', ['No tablet: about 15 in 100 people like you will have a heart attack or stroke in the next 10 years.']],
+  ['patient-words', 'What the patient hears (2 of 2)', ['About 1 in 100 gets muscle pain', 'About type 2 diabetes']],
+  ['framing', 'One result, four ways', ['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1', '100 ÷ 3.75 = 26.67, rounded up: 27', 'Akl et al. 2011']],
+  ['denominator', '100 or 1000 people?', ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009']],
+  ['arrangement', 'Grouped or scattered?', ['Grouped', 'Scattered', 'overestimated more', 'Ancker, Weber & Kukafka 2011']],
+  ['incremental', 'Two totals, or the change itself?', ['Two totals', 'Change as its own group', 'Without it (no tablet): 15 in 100.', 'Zikmund-Fisher et al. 2008']],
+];
 
-/** Words each step must show (from the heart topic's computed numbers and the core's wording). */
-const CONTENT: Readonly<Record<string, readonly string[]>> = {
-  title: ['Every number is over 10 years.', 'Comparing the standard dose with no tablet.'],
-  baseline: ['15 in 100', 'have a heart attack or stroke over 10 years', '85 in 100'],
-  'with-option': ['No tablet', 'The standard dose', '11 in 100', 'without it (no tablet)'],
-  helped: ['4 in 100', 'avoid a heart attack or stroke because of the standard dose', 'have it anyway'],
-  harmed: ['1 in 100', 'gets muscle pain bad enough to stop the tablet because of the standard dose'],
-  uncertainty: ['could be anywhere between 3 and 5 in 100', 'Certainty of the evidence: high'],
-  'patient-words': ['No tablet: about 15 in 100 people like you will have a heart attack or stroke in the next 10 years.', 'About 1 in 100 gets muscle pain'],
-  framing: ['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1', '100 ÷ 3.75 = 26.67, rounded up: 27', 'Akl et al. 2011'],
-  denominator: ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009'],
-  arrangement: ['Grouped', 'Scattered', 'overestimated more', 'Ancker, Weber & Kukafka 2011'],
-  incremental: ['Two totals', 'Change as its own group', 'Without it (no tablet): 15 in 100.', 'Zikmund-Fisher et al. 2008'],
-};
+/**
+ * Every slide of the invented wanted-event topic (test/fixtures/topics): relief from an itch,
+ * 30 in 100 by day 3 without the tablet, 30 × 1.6 = 48 with it; one unwanted harm and one
+ * wanted event made less likely.
+ */
+const WANTED_STEPS: readonly (readonly [string, string, readonly string[]])[] = [
+  ['title', 'Taking a night-time antihistamine tablet for an itchy rash (illustrative example)', ['Every number counts what happens by day 3.']],
+  ['baseline', 'Without the option', ['30 in 100', 'have relief from the itch by day 3']],
+  ['with-option', 'With the option', ['48 in 100', 'have relief from the itch with the night-time tablet']],
+  ['helped', 'Who is helped', ['18 in 100', 'have relief from the itch because of the night-time tablet', 'have it anyway']],
+  ['harmed', 'Who is harmed (1 of 2)', ['12 in 100', 'get drowsiness the next day because of the night-time tablet']],
+  ['harmed', 'Who is harmed (2 of 2)', ['10 in 100', 'miss out on feeling alert the next morning because of the night-time tablet']],
+  ['uncertainty', 'How sure are we?', ['the number of extra people who have relief from the itch could be anywhere between 9 and 30 in 100']],
+  ['patient-words', 'What the patient hears (1 of 2)', ['about 48 in 100 people like you will have relief from the itch by day 3', 'about 18 more of those 100 people']],
+  ['patient-words', 'What the patient hears (2 of 2)', ['About drowsiness the next day', 'about 10 fewer of those 100 people end up feeling alert the next morning']],
+  ['framing', 'One result, four ways', ['60% more people have it', '18 in 100 more', '48 − 30 = 18 more in 100', 'NNTB', 'Treat 6 for 1 more', '100 ÷ 18 = 5.56, rounded up: 6']],
+  ['denominator', '100 or 1000 people?', ['100 people', '1000 people']],
+  ['arrangement', 'Grouped or scattered?', ['Grouped', 'Scattered']],
+  ['incremental', 'Two totals, or the change itself?', ['Without it (no tablet): 30 in 100.']],
+];
+
+const WANTED_TOPIC = 'test/fixtures/topics/wanted-itch-relief.json';
 
 const view = (page: Page) => page.locator('dialog.teaching[open]');
 const slide = (page: Page) => view(page).locator('article.slide');
@@ -164,6 +175,46 @@ async function seriousViolations(page: Page): Promise<string[]> {
     .map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).slice(0, 3).join('; ')})`);
 }
 
+/**
+ * Step through every slide from the first, checking its heading and words, and measuring it:
+ * text and heading sizes, people in 100-arrays, contrast, overflow. A screenshot of each.
+ */
+async function stepThrough(
+  page: Page,
+  size: (typeof SIZES)[number],
+  steps: readonly (readonly [string, string, readonly string[]])[],
+  name: string,
+): Promise<void> {
+  for (const [index, [step, heading, words]] of steps.entries()) {
+    const where = `${step} (slide ${index + 1})`;
+    await expect(slide(page)).toHaveAttribute('data-step', step);
+    await expect(slide(page).getByRole('heading', { level: 2 })).toHaveText(heading);
+    for (const text of words) await expect(slide(page)).toContainText(text);
+    await expect(view(page).locator('.progress')).toHaveText(`${index + 1} / ${steps.length}`);
+    // Taken before the measures are checked, so that a slide that fails them can be looked at.
+    await page.screenshot({ path: `${SCREENS}/${name}-${size.width}x${size.height}-${String(index + 1).padStart(2, '0')}-${step}.png` });
+    const found = await measure(page);
+    expect(found.smallestText, `smallest text on ${where}`).toBeGreaterThanOrEqual(size.body - 0.01);
+    expect(found.smallestHeading, `heading on ${where}`).toBeGreaterThanOrEqual(size.heading);
+    if (found.iconCount > 0) expect(found.smallestIcon, `people on ${where}`).toBeGreaterThanOrEqual(size.icon);
+    expect(found.lowContrast, `text below 7:1 on ${where}`).toEqual([]);
+    expect(found.overflow, `overflow on ${where}`).toEqual([]);
+    await page.keyboard.press('ArrowRight');
+  }
+  // Every 100-person array of the story was measured.
+  expect(await view(page).locator('svg.people').count()).toBeGreaterThan(0);
+}
+
+/** Open, from the view's menu, a teaching set of one topic file written inside it. */
+async function openSetOf(page: Page, setPath: string, topicPath: string): Promise<void> {
+  const set = { format: 'chancewise-teaching-set', version: 1, title: 'One topic', items: [{ topic: JSON.parse(readFileSync(topicPath, 'utf8')) as unknown }] };
+  writeFileSync(setPath, JSON.stringify(set));
+  await view(page).getByRole('button', { name: 'File…' }).click();
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), view(page).getByRole('button', { name: 'Open set…' }).click()]);
+  await chooser.setFiles(setPath);
+  await expect(view(page).getByRole('status')).toContainText('Opened the teaching set “One topic”: 1 topic.');
+}
+
 /** Width and height from a PNG's IHDR chunk (PNG specification, W3C 2003, §11.2.2). */
 function pngSize(bytes: Buffer): { width: number; height: number } {
   expect([...bytes.subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
@@ -177,22 +228,23 @@ for (const size of SIZES) {
     test('steps through every slide of the demonstration topic, large, legible, in contrast and inside the screen', async ({ page, watch }) => {
       void watch;
       await enter(page);
-      for (const [index, [step, heading]] of STEPS.entries()) {
-        await expect(slide(page)).toHaveAttribute('data-step', step);
-        await expect(slide(page).getByRole('heading', { level: 2 })).toHaveText(heading);
-        for (const words of CONTENT[step] ?? []) await expect(slide(page)).toContainText(words);
-        await expect(view(page).locator('.progress')).toHaveText(`${index + 1} / ${STEPS.length}`);
-        const found = await measure(page);
-        expect(found.smallestText, `smallest text on ${step}`).toBeGreaterThanOrEqual(size.body - 0.01);
-        expect(found.smallestHeading, `heading on ${step}`).toBeGreaterThanOrEqual(size.heading);
-        if (found.iconCount > 0) expect(found.smallestIcon, `people on ${step}`).toBeGreaterThanOrEqual(size.icon);
-        expect(found.lowContrast, `text below 7:1 on ${step}`).toEqual([]);
-        expect(found.overflow, `overflow on ${step}`).toEqual([]);
-        await page.screenshot({ path: `${SCREENS}/teaching-${size.width}x${size.height}-${String(index + 1).padStart(2, '0')}-${step}.png` });
-        await page.keyboard.press('ArrowRight');
-      }
-      // Every 100-person array of the story was measured.
-      expect(await view(page).locator('svg.people').count()).toBeGreaterThan(0);
+      await stepThrough(page, size, STEPS, 'teaching');
+    });
+
+    test('steps through every slide of a topic whose headline event is wanted, every harm on its own slide', async ({ page, watch }, testInfo) => {
+      void watch;
+      await enter(page);
+      await openSetOf(page, testInfo.outputPath('wanted.teaching.json'), WANTED_TOPIC);
+      await stepThrough(page, size, WANTED_STEPS, 'teaching-wanted');
+      // The people who gain the wanted event keep their event meaning (caused) and wear the helped look;
+      // those who miss out on a wanted event (prevented) wear the harmed look.
+      await page.keyboard.press('Home');
+      for (let index = 0; index < 3; index += 1) await page.keyboard.press('ArrowRight');
+      await expect(slide(page).locator('figure[data-panel-id="option"] path.person[data-look="helped"][data-outcome="caused"]')).toHaveCount(18);
+      await expect(slide(page).locator('path.person[data-look="harmed"]')).toHaveCount(0);
+      await page.keyboard.press('ArrowRight');
+      await page.keyboard.press('ArrowRight');
+      await expect(slide(page).locator('figure[data-panel-id="option"] path.person[data-look="harmed"][data-outcome="prevented"]')).toHaveCount(10);
     });
   });
 }
@@ -241,7 +293,7 @@ test.describe('the teaching view', () => {
     await expect(view(page).getByRole('button', { name: 'Back' })).toBeDisabled();
     await view(page).getByRole('button', { name: 'Next' }).click();
     await expect(slide(page)).toHaveAttribute('data-step', 'baseline');
-    await expect(view(page).locator('[aria-live="polite"]')).toHaveText('Slide 2 of 11: Without the option');
+    await expect(view(page).locator('[aria-live="polite"]')).toHaveText('Slide 2 of 13: Without the option');
     await view(page).getByRole('button', { name: 'Back' }).click();
     await expect(slide(page)).toHaveAttribute('data-step', 'title');
     await view(page).getByRole('button', { name: 'Leave' }).click();

@@ -69,8 +69,9 @@ function defaultFallback(channel: InvokeChannel): ShellErrorCode {
 /**
  * Register every IPC handler of the app; the only place `ipcMain.handle` is called. Each
  * handler first checks the sender (main frame of the app's own window, on the app origin),
- * then the arguments (type guards and size limits), and only then runs the action. Every
- * reply is a `ShellResult` value: refusals and failures cross as data, never as exceptions.
+ * then the arguments (sizes first, then type guards), and only then runs the action. Every
+ * reply is a `ShellResult` value: refusals and failures cross as data, never as exceptions,
+ * even when a check itself throws.
  */
 export function registerIpcHandlers<Sender>(ipcMain: IpcMainLike, settings: IpcHandlerSettings<Sender>): void {
   const report = settings.report ?? (() => undefined);
@@ -87,12 +88,19 @@ export function registerIpcHandlers<Sender>(ipcMain: IpcMainLike, settings: IpcH
         return failure('untrusted-sender');
       }
       const sender = event.sender as Sender;
-      const checked = check(args);
-      if (!checked.ok) {
-        report(channel, checked.code, `${args.length} argument(s)`);
-        return failure(checked.code);
-      }
       try {
+        let checked: PayloadCheck<Payload>;
+        try {
+          checked = check(args);
+        } catch (error) {
+          // A payload the checks could not even inspect is refused like any malformed one.
+          report(channel, 'invalid-request', `the check failed: ${error instanceof Error ? error.message : String(error)}`);
+          return failure('invalid-request');
+        }
+        if (!checked.ok) {
+          report(channel, checked.code, `${args.length} argument(s)`);
+          return failure(checked.code);
+        }
         return { ok: true, value: await run(sender, checked.value) };
       } catch (error) {
         const code = error instanceof ShellFailure ? error.code : fallbackCode(channel);

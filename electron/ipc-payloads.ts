@@ -48,36 +48,47 @@ export function checkNoArguments(args: readonly unknown[]): PayloadCheck<null> {
 
 /**
  * Whether a request carries exactly one topic file text: a non-empty string of at most a
- * million characters with no NUL (whether it is a valid topic is checked apart).
+ * million characters with no NUL (whether it is a valid topic is checked apart). The length
+ * is checked first, in constant time, so an oversized text is refused without being scanned.
  */
 export function checkDocumentText(args: readonly unknown[]): PayloadCheck<string> {
   if (args.length !== 1) return INVALID;
   const [text] = args;
-  if (typeof text !== 'string' || text.length === 0 || text.includes('\u0000')) return INVALID;
+  if (typeof text !== 'string') return INVALID;
   if (text.length > PAYLOAD_LIMITS.documentCharacters) return TOO_LARGE;
+  if (text.length === 0 || text.includes('\u0000')) return INVALID;
   return accept(text);
 }
 
-/** Whether a request carries exactly one path of the recent list's kind: a non-empty string without NUL. */
+/** Whether a request carries exactly one path of the recent list's kind: a non-empty string without NUL (length first). */
 export function checkRecentPath(args: readonly unknown[]): PayloadCheck<string> {
   if (args.length !== 1) return INVALID;
   const [recentPath] = args;
-  if (typeof recentPath !== 'string' || recentPath.length === 0 || recentPath.includes('\u0000')) return INVALID;
+  if (typeof recentPath !== 'string') return INVALID;
   if (recentPath.length > PAYLOAD_LIMITS.pathCharacters) return TOO_LARGE;
+  if (recentPath.length === 0 || recentPath.includes('\u0000')) return INVALID;
   return accept(recentPath);
 }
 
 /**
  * Whether a value is plain JSON data: null, booleans, finite numbers, strings, arrays and
- * plain objects only (no dates, maps, typed arrays, class instances), within the depth and
- * value-count limits. Returns 'too-large' when a limit is passed.
+ * plain objects only (no dates, maps, typed arrays, class instances), within the depth,
+ * value-count and character limits. Every string and key adds its length to a running
+ * count, so a huge text is refused the moment it is met, before anything is written out as
+ * JSON. Returns 'too-large' when a limit is passed.
  */
 export function checkPlainJson(value: unknown): 'ok' | 'invalid-request' | 'too-large' {
   let values = 0;
+  let characters = 0;
+  const counted = (text: string): boolean => {
+    characters += text.length;
+    return characters <= PAYLOAD_LIMITS.snapshotCharacters;
+  };
   const visit = (item: unknown, depth: number): 'ok' | 'invalid-request' | 'too-large' => {
     values += 1;
     if (values > PAYLOAD_LIMITS.snapshotValues || depth > PAYLOAD_LIMITS.snapshotDepth) return 'too-large';
-    if (item === null || typeof item === 'boolean' || typeof item === 'string') return 'ok';
+    if (typeof item === 'string') return counted(item) ? 'ok' : 'too-large';
+    if (item === null || typeof item === 'boolean') return 'ok';
     if (typeof item === 'number') return Number.isFinite(item) ? 'ok' : 'invalid-request';
     if (Array.isArray(item)) {
       for (const element of item) {
@@ -88,6 +99,7 @@ export function checkPlainJson(value: unknown): 'ok' | 'invalid-request' | 'too-
     }
     if (!isPlainObject(item)) return 'invalid-request';
     for (const key of Object.keys(item)) {
+      if (!counted(key)) return 'too-large';
       const result = visit(item[key], depth + 1);
       if (result !== 'ok') return result;
     }
@@ -111,13 +123,32 @@ export function checkSnapshotRequest(args: readonly unknown[]): PayloadCheck<Sna
 }
 
 /**
+ * Windows' reserved device names, alone or before an extension ("NUL.pdf" is the null
+ * device too): Microsoft, "Naming Files, Paths, and Namespaces", Naming Conventions
+ * ("CON, PRN, AUX, NUL, COM0-COM9 ... LPT0-LPT9 ... also avoid these names followed
+ * immediately by an extension ... NUL.txt and NUL.tar.gz are both equivalent to NUL"),
+ * including the superscript digits ¹ ² ³ it lists.
+ */
+const RESERVED_DEVICE_NAME = /^(?:con|prn|aux|nul|com[0-9¹²³]|lpt[0-9¹²³])\s*(?:\..*)?$/iu;
+
+/**
+ * Characters that change the direction text is shown in, so a name can read as another
+ * ("handout<RLO>fdp.exe" shows as "handoutexe.pdf"): the explicit directional formatting
+ * characters of Unicode Standard Annex #9 (§2: LRE, RLE, PDF, LRO, RLO, LRI, RLI, FSI, PDI)
+ * and the marks LRM, RLM and ALM; also the byte order mark.
+ */
+const DIRECTION_CONTROLS = /[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]/u;
+
+/**
  * Whether a file name is a plain name to suggest in a save dialog: 1 to 120 characters, no
- * folder separators, no control characters, none of Windows' reserved characters, and not
- * `.` or `..`.
+ * folder separators, no control or direction-changing characters, none of Windows' reserved
+ * characters or device names, not `.` or `..`, and not ending in a space or a dot (Windows
+ * drops those, so the saved name would not be the one shown).
  */
 export function isPlainFileName(value: unknown): value is string {
   if (typeof value !== 'string' || value.length === 0 || value.length > PAYLOAD_LIMITS.fileNameCharacters) return false;
-  if (value === '.' || value === '..') return false;
+  if (value === '.' || value === '..' || value.endsWith(' ') || value.endsWith('.')) return false;
+  if (RESERVED_DEVICE_NAME.test(value.trimEnd()) || DIRECTION_CONTROLS.test(value)) return false;
   return !/[\u0000-\u001f\u007f/\\:*?"<>|]/u.test(value);
 }
 
@@ -129,8 +160,9 @@ export function checkHandoutPdfRequest(args: readonly unknown[]): PayloadCheck<H
   const [request] = args;
   if (!isPlainObject(request) || !hasExactKeys(request, ['bytes', 'suggestedName'])) return INVALID;
   const { bytes, suggestedName } = request;
-  if (!(bytes instanceof Uint8Array) || !isPlainFileName(suggestedName)) return INVALID;
+  if (!(bytes instanceof Uint8Array)) return INVALID;
   if (bytes.byteLength > PAYLOAD_LIMITS.pdfBytes) return TOO_LARGE;
+  if (!isPlainFileName(suggestedName)) return INVALID;
   if (!PDF_SIGNATURE.every((byte, index) => bytes[index] === byte)) return INVALID;
   return accept({ bytes, suggestedName });
 }

@@ -1,16 +1,23 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
-import { temporaryPrefixFor, writeFileAtomic } from './atomic-write.ts';
+import { readRegularFile, RegularFileError } from '../src/shared/regular-file.ts';
+import { resolveWriteTarget, temporaryPrefixFor, writeFileAtomic } from './atomic-write.ts';
 import type { AtomicWriteSettings } from './atomic-write.ts';
+import { nameWithin } from './file-name-fit.ts';
 
-/** The backup of a file's previous version: the same name with `.bak` added. */
+/**
+ * The backup of a file's previous version: the same name with `.bak` added (a name too
+ * long for that is shortened, see `nameWithin`).
+ */
 export function backupPathFor(target: string): string {
-  return `${target}.bak`;
+  return path.join(path.dirname(target), nameWithin('', path.basename(target), '.bak'));
 }
 
-/** Reading and tidying calls besides the atomic write's own. */
+/** The largest previous version copied to the backup (far above any topic file). */
+export const MAX_BACKUP_BYTES = 64 * 1024 * 1024;
+
+/** Tidying calls besides the atomic write's own. */
 export interface BackupFileSystem {
-  readFile(filePath: string): Promise<Uint8Array>;
   readdir(folder: string): Promise<string[]>;
   unlink(filePath: string): Promise<void>;
 }
@@ -26,13 +33,7 @@ export interface SaveOutcome {
   readonly backedUp: boolean;
 }
 
-function errorCode(error: unknown): string | null {
-  if (typeof error === 'object' && error !== null && 'code' in error && typeof error.code === 'string') return error.code;
-  return null;
-}
-
 const nodeBackupFileSystem: BackupFileSystem = {
-  readFile: (filePath) => fs.readFile(filePath),
   readdir: (folder) => fs.readdir(folder),
   unlink: (filePath) => fs.unlink(filePath),
 };
@@ -50,21 +51,31 @@ export function leftoverTemporaryNames(names: readonly string[], target: string,
   });
 }
 
+/** The previous version of a target, or null when there is none (read through the one reading primitive). */
+async function previousVersion(target: string): Promise<{ bytes: Uint8Array; mode: number } | null> {
+  try {
+    const { bytes, info } = await readRegularFile(target, { followLink: false, maxBytes: MAX_BACKUP_BYTES });
+    return { bytes, mode: info.mode };
+  } catch (error) {
+    if (error instanceof RegularFileError && error.reason === 'missing') return null;
+    throw error;
+  }
+}
+
 /**
  * Save a file safely: the current version (if any) is first copied to `name.bak` with an
  * atomic write, then the new content replaces the file with an atomic write. A crash at any
  * moment leaves the file with its old or its new content in full, and `name.bak` with the
- * version before. Temporary files left by an earlier killed run are removed afterwards.
+ * version before; the backup has the permission bits of the file it copies. A symbolic link
+ * is saved through: the file it points to is replaced and backed up beside itself, and the
+ * link stays. A pipe, a folder or a device is refused at once (`FileWriteRefusal`), never
+ * opened for writing. Temporary files left by an earlier killed run are removed afterwards.
  */
-export async function saveWithBackup(target: string, data: string | Uint8Array, settings: SaveWithBackupSettings = {}): Promise<SaveOutcome> {
+export async function saveWithBackup(named: string, data: string | Uint8Array, settings: SaveWithBackupSettings = {}): Promise<SaveOutcome> {
   const files = settings.backupFileSystem ?? nodeBackupFileSystem;
-  let previous: Uint8Array | null = null;
-  try {
-    previous = await files.readFile(target);
-  } catch (error) {
-    if (errorCode(error) !== 'ENOENT') throw error;
-  }
-  if (previous !== null) await writeFileAtomic(backupPathFor(target), previous, settings);
+  const target = await resolveWriteTarget(named);
+  const previous = await previousVersion(target);
+  if (previous !== null) await writeFileAtomic(backupPathFor(target), previous.bytes, { ...settings, mode: previous.mode });
   await writeFileAtomic(target, data, settings);
   const folder = path.dirname(target);
   try {

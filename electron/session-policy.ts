@@ -16,7 +16,17 @@ export interface PolicySession {
   webRequest: {
     onBeforeRequest(listener: (details: { url: string }, callback: (response: { cancel: boolean }) => void) => void): void;
   };
-  on(event: 'will-download', listener: (event: { preventDefault(): void }, item: { getURL(): string }) => void): unknown;
+  on(
+    event: 'will-download',
+    listener: (event: { preventDefault(): void }, item: { getURL(): string }, contents?: { getURL(): string }) => void,
+  ): unknown;
+}
+
+/** Whether a download comes from the app itself: its own blob, or a data address from its own page. */
+export function isOwnDownload(url: string, contents: { getURL(): string } | undefined): boolean {
+  if (url.startsWith('blob:')) return isAllowedRequestUrl(url);
+  if (url.startsWith('data:')) return contents !== undefined && isAppUrl(contents.getURL());
+  return false;
 }
 
 /**
@@ -25,7 +35,8 @@ export interface PolicySession {
  * except full screen asked for by the app's own page (the teaching view presents full screen);
  * the spellchecker is off (it would download dictionaries); every request outside the
  * app's own files (http, https, ws, file...) is cancelled; a download is allowed only of a
- * blob or data address made by the app's own page.
+ * blob address of the app's own origin, or of a data address asked for by a page on the
+ * app's own origin (a data address carries no origin of its own, so the page's is checked).
  */
 export function applySessionPolicy(session: PolicySession): void {
   session.setPermissionRequestHandler((_contents, permission, callback, details) => {
@@ -37,9 +48,7 @@ export function applySessionPolicy(session: PolicySession): void {
   session.webRequest.onBeforeRequest((details, callback) => {
     callback({ cancel: !isAllowedRequestUrl(details.url) });
   });
-  session.on('will-download', (event, item) => {
-    const url = item.getURL();
-    const own = url.startsWith('blob:') || url.startsWith('data:') ? isAllowedRequestUrl(url) : false;
-    if (!own) event.preventDefault();
+  session.on('will-download', (event, item, contents) => {
+    if (!isOwnDownload(item.getURL(), contents)) event.preventDefault();
   });
 }

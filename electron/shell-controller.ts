@@ -21,12 +21,14 @@ import type {
 } from './ipc-contract.ts';
 import type { ShellActions } from './ipc-handlers.ts';
 import { readJsonFile, writeJsonFile } from './json-file.ts';
+import { fileLabel } from './log-redaction.ts';
 import { createPendingWork } from './pending-work.ts';
 import { isTopicFileText, readTopicDocument } from './read-topic-document.ts';
 import { addRecentFile, parseRecentFiles } from './recent-files.ts';
 import { saveWithBackup } from './save-with-backup.ts';
 import { createShellDialogs } from './shell-dialogs.ts';
 import { ShellFailure } from './shell-messages.ts';
+import { loadSnapshotKey } from './snapshot-key.ts';
 import { createSnapshotStore } from './snapshot-store.ts';
 import { createMainWindowOptions } from './window-options.ts';
 import { fitWindowToDisplays } from './window-state.ts';
@@ -75,7 +77,8 @@ export async function startShellController(settings: ShellControllerSettings): P
   });
   const windowStatePath = path.join(settings.userDataPath, 'window-state.json');
   const recentFilesPath = path.join(settings.userDataPath, 'recent-files.json');
-  const snapshots = createSnapshotStore({ folder: path.join(settings.userDataPath, 'snapshots') });
+  const snapshotKey = await loadSnapshotKey(settings.userDataPath);
+  const snapshots = createSnapshotStore({ folder: path.join(settings.userDataPath, 'snapshots'), key: snapshotKey });
   const preloadPath = path.join(settings.appPath, 'dist-electron', 'preload.cjs');
 
   let recentFiles = parseRecentFiles(await readJsonFile(recentFilesPath));
@@ -171,7 +174,7 @@ export async function startShellController(settings: ShellControllerSettings): P
         },
         (error: unknown) => {
           const message = error instanceof Error ? error.message : String(error);
-          log(`could not open ${filePath}: ${message}`);
+          log(`could not open ${fileLabel(filePath)}: ${message}`);
           dialogs.showOpenFailure(path.basename(filePath), message);
         },
       );
@@ -214,23 +217,34 @@ export async function startShellController(settings: ShellControllerSettings): P
     return writeDocument(filePath, text);
   };
 
+  /**
+   * The file a restored snapshot may be saved back to without a dialog: its topic's file only
+   * when that is on the recent list (a file the person opened or saved), else none, so Save
+   * asks. A snapshot never decides on its own where a plain Save writes.
+   */
+  const savePathAfterRestore = (documentPath: string | null): string | null =>
+    documentPath !== null && recentFiles.includes(documentPath) ? documentPath : null;
+
   const offerRecovery = (candidate: ValidSnapshotCandidate): Promise<boolean> => {
     const launchFile = settings.launchFiles[0];
-    return dialogs.confirmRecovery(
-      candidate.record.savedAt,
-      fileNameOf(candidate.record.documentPath),
-      launchFile === undefined ? null : path.basename(launchFile),
-    );
+    const { documentPath } = candidate.record;
+    return dialogs.confirmRecovery({
+      savedAt: candidate.record.savedAt,
+      topicPath: documentPath,
+      asksWhereToSave: documentPath !== null && savePathAfterRestore(documentPath) === null,
+      skippedFile: launchFile === undefined ? null : path.basename(launchFile),
+    });
   };
 
   const runStartup = async (): Promise<void> => {
     if (recovery !== null && (await offerRecovery(recovery))) {
       const { record } = recovery;
-      topic.filePath = record.documentPath;
-      topic.lastSavedAt = recovery.documentSavedAt;
+      const savePath = savePathAfterRestore(record.documentPath);
+      topic.filePath = savePath;
+      topic.lastSavedAt = savePath === null ? null : recovery.documentSavedAt;
       topic.lastSnapshot = { content: record.content, keepPatient: record.keepsPatient, hasUnsavedChanges: true, savedAt: record.savedAt };
       updateTitle();
-      deliver({ kind: 'snapshot', content: record.content, reason: 'unexpected-exit', fileName: fileNameOf(record.documentPath) });
+      deliver({ kind: 'snapshot', content: record.content, reason: 'unexpected-exit', fileName: fileNameOf(savePath) });
       return;
     }
     if (recovery !== null) await snapshots.clear();

@@ -6,6 +6,25 @@ import { OPEN_DIALOG_FILTERS, SAVE_DIALOG_FILTERS, withTopicExtension } from './
 /** What the person chose when closing with unsaved changes. */
 export type CloseChoice = 'save' | 'discard' | 'cancel';
 
+/** What the recovery question says. */
+export interface RecoveryQuestion {
+  readonly savedAt: number;
+  /** The full path of the snapshot's topic file (shown in full), or null for a topic never saved. */
+  readonly topicPath: string | null;
+  /** Whether Save will ask where to save after restoring (the file is not one the person opened or saved lately). */
+  readonly asksWhereToSave: boolean;
+  /** A file named at launch that is not opened if the person restores. */
+  readonly skippedFile: string | null;
+}
+
+/** The detail line of the recovery question: the topic's full path, so the person sees which file it belongs to. */
+export function recoveryDetail(question: RecoveryQuestion): string {
+  const topic = question.topicPath === null ? 'an unsaved topic' : `the topic in ${question.topicPath}`;
+  const asks = question.asksWhereToSave ? ' That file is not among your recent files, so Save will ask where to save them.' : '';
+  const skipped = question.skippedFile === null ? '' : ` If you restore them, ${question.skippedFile} is not opened.`;
+  return `Restore the changes to ${topic} from ${new Date(question.savedAt).toLocaleString()}?${asks}${skipped}`;
+}
+
 /** The native dialogs of the shell, each attached to the main window. */
 export interface ShellDialogs {
   /** Choose a topic file to open; null when cancelled. */
@@ -15,7 +34,7 @@ export interface ShellDialogs {
   /** Choose where to save a handout PDF (".pdf" added when missing); null when cancelled. */
   chooseHandoutSavePath(suggested: string): Promise<string | null>;
   /** Whether to restore the changes of a snapshot left by an unexpected exit. */
-  confirmRecovery(savedAt: number, topicName: string | null, skippedFile: string | null): Promise<boolean>;
+  confirmRecovery(question: RecoveryQuestion): Promise<boolean>;
   /** Whether a file from the system may replace a topic with unsaved changes. */
   confirmReplace(fileName: string): Promise<boolean>;
   /** Save, discard or keep the window open, when closing with unsaved changes. */
@@ -64,15 +83,14 @@ export function createShellDialogs(window: BrowserWindow): ShellDialogs {
       if (chosen === null) return null;
       return chosen.toLowerCase().endsWith('.pdf') ? chosen : `${chosen}.pdf`;
     },
-    async confirmRecovery(savedAt, topicName, skippedFile) {
-      const skipped = skippedFile === null ? '' : ` If you restore them, ${skippedFile} is not opened.`;
+    async confirmRecovery(question) {
       const answer = await dialog.showMessageBox(window, {
         type: 'question',
         buttons: ['Restore', 'Discard'],
         defaultId: 0,
         cancelId: 1,
         message: 'Chancewise closed before your last changes were saved.',
-        detail: `Restore the changes to ${topicName ?? 'an unsaved topic'} from ${new Date(savedAt).toLocaleString()}?${skipped}`,
+        detail: recoveryDetail(question),
       });
       return answer.response === 0;
     },

@@ -1,38 +1,38 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
-import { app, ipcMain, protocol, session, shell } from 'electron';
+import { app, dialog, ipcMain, protocol, session, shell } from 'electron';
 import { APP_SCHEME } from './app-origin.ts';
 import { hardenWebContents } from './harden-web-contents.ts';
 import { registerIpcHandlers } from './ipc-handlers.ts';
 import { EXTERNAL_LINK_HOSTS, openExternalSafely } from './open-external.ts';
 import { prepareBeforeReady } from './prepare-before-ready.ts';
+import { NO_SANDBOX_TITLE, refuseWithoutSandbox } from './sandbox-check.ts';
 import { createAppAssetHandler } from './serve-app-asset.ts';
 import { applySessionPolicy } from './session-policy.ts';
 import { startShellController } from './shell-controller.ts';
 import type { ShellController } from './shell-controller.ts';
 import { topicPathFromCommandLine } from './topic-file-type.ts';
 
-function createLog(): (line: string) => void {
-  let folder: string | null = null;
-  return (line) => {
-    const stamped = `${new Date().toISOString()} ${line}\n`;
-    process.stderr.write(`[chancewise] ${stamped}`);
-    try {
-      folder ??= app.getPath('logs');
-      const logFolder = folder;
-      void fs
-        .mkdir(logFolder, { recursive: true })
-        .then(() => fs.appendFile(path.join(logFolder, 'main.log'), stamped))
-        .catch(() => undefined);
-    } catch {
-      // The log file is a convenience; standard error already has the line.
-    }
-  };
-}
-
-/** Run the desktop shell: called once from the main entry inside Electron. */
-export function runShell(): void {
-  const log = createLog();
+/**
+ * Run the desktop shell: called once from the main entry inside Electron. A packaged app
+ * started without the OS sandbox refuses to run and says why (`refuseWithoutSandbox`); the
+ * box waits for `ready`, before which Linux prints it to standard error only.
+ */
+export function runShell(log: (line: string) => void): void {
+  const refusal = refuseWithoutSandbox({
+    isPackaged: app.isPackaged,
+    argv: process.argv,
+    environment: process.env,
+    hasSwitch: (name) => app.commandLine.hasSwitch(name),
+  });
+  if (refusal !== null) {
+    log('refused to start: the renderer sandbox is turned off (--no-sandbox)');
+    void app.whenReady().then(() => {
+      dialog.showErrorBox(NO_SANDBOX_TITLE, refusal);
+      app.exit(1);
+    });
+    return;
+  }
   if (!prepareBeforeReady(app, protocol, process.env)) {
     app.quit();
     return;

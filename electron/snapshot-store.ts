@@ -1,17 +1,24 @@
 import fs from 'node:fs/promises';
 import path from 'node:path';
+import { readRegularFile } from '../src/shared/regular-file.ts';
 import { writeFileAtomic } from './atomic-write.ts';
 import type { AtomicWriteSettings } from './atomic-write.ts';
+import { PAYLOAD_LIMITS } from './ipc-payloads.ts';
 import { createSnapshotText, parseSnapshotText } from './snapshot-record.ts';
-import type { SnapshotInput, SnapshotRecord } from './snapshot-record.ts';
+import type { SnapshotInput, SnapshotKey, SnapshotRecord } from './snapshot-record.ts';
 
-/** File calls of the store besides the atomic write's own. */
+/** File calls of the store besides the atomic write's and the reader's own. */
 export interface SnapshotFileSystem {
   mkdir(folder: string, options: { recursive: true; mode: number }): Promise<unknown>;
   readdir(folder: string): Promise<string[]>;
-  readFile(filePath: string, encoding: 'utf8'): Promise<string>;
   unlink(filePath: string): Promise<void>;
 }
+
+/**
+ * The most bytes of a snapshot file: its content and path limits at up to three UTF-8
+ * bytes per UTF-16 unit, and room for the other fields. A larger file is refused unread.
+ */
+export const SNAPSHOT_FILE_MAX_BYTES = 3 * (PAYLOAD_LIMITS.snapshotCharacters + PAYLOAD_LIMITS.pathCharacters) + 1024;
 
 /** A snapshot file read back from the folder. */
 export interface StoredSnapshot {
@@ -33,6 +40,8 @@ export interface SnapshotStore {
 /** Settings of the store. */
 export interface SnapshotStoreSettings {
   readonly folder: string;
+  /** The secret key snapshots are sealed with (`loadSnapshotKey`). */
+  readonly key: SnapshotKey;
   /** How many snapshots to keep (a damaged newest one still leaves older good ones). */
   readonly keep?: number;
   readonly fileSystem?: SnapshotFileSystem;
@@ -59,9 +68,18 @@ export function newestFirst(names: readonly string[]): string[] {
 const nodeSnapshotFileSystem: SnapshotFileSystem = {
   mkdir: (folder, options) => fs.mkdir(folder, options),
   readdir: (folder) => fs.readdir(folder),
-  readFile: (filePath, encoding) => fs.readFile(filePath, encoding),
   unlink: (filePath) => fs.unlink(filePath),
 };
+
+/** A snapshot file's record, or null when it is damaged, not genuine, a link, not a regular file or too large. */
+async function readSnapshot(filePath: string, key: SnapshotKey): Promise<SnapshotRecord | null> {
+  try {
+    const { bytes } = await readRegularFile(filePath, { followLink: false, maxBytes: SNAPSHOT_FILE_MAX_BYTES });
+    return parseSnapshotText(new TextDecoder('utf-8', { fatal: true }).decode(bytes), key);
+  } catch {
+    return null;
+  }
+}
 
 /**
  * Open the snapshot store of a folder. Operations run one after another (never two writes
@@ -94,7 +112,7 @@ export function createSnapshotStore(settings: SnapshotStoreSettings): SnapshotSt
         await files.mkdir(settings.folder, { recursive: true, mode: 0o700 });
         sequence += 1;
         const name = `snapshot-${input.savedAt}-${sequence}.json`;
-        await writeFileAtomic(path.join(settings.folder, name), createSnapshotText(input), settings.atomicWrite);
+        await writeFileAtomic(path.join(settings.folder, name), createSnapshotText(input, settings.key), settings.atomicWrite);
         const old = (await names()).filter((item) => item !== name).slice(keep - 1);
         await Promise.all(old.map((item) => files.unlink(path.join(settings.folder, item)).catch(() => undefined)));
         return name;
@@ -103,13 +121,7 @@ export function createSnapshotStore(settings: SnapshotStoreSettings): SnapshotSt
       serial(async () => {
         const stored: StoredSnapshot[] = [];
         for (const name of await names()) {
-          let record: SnapshotRecord | null = null;
-          try {
-            record = parseSnapshotText(await files.readFile(path.join(settings.folder, name), 'utf8'));
-          } catch {
-            record = null;
-          }
-          stored.push({ name, record });
+          stored.push({ name, record: await readSnapshot(path.join(settings.folder, name), settings.key) });
         }
         return stored;
       }),

@@ -5,7 +5,7 @@ import type { SnapshotCandidate } from '../../electron/choose-recovery-snapshot.
 import type { SnapshotRecord } from '../../electron/snapshot-record.ts';
 
 function record(savedAt: number, documentPath: string | null = '/h/t.cwtopic'): SnapshotRecord {
-  return { format: 'chancewise-snapshot', version: 1, savedAt, documentPath, keepsPatient: false, content: { at: savedAt }, checksum: 'x' };
+  return { format: 'chancewise-snapshot', version: 2, savedAt, documentPath, keepsPatient: false, content: { at: savedAt }, seal: 'x' };
 }
 
 function candidate(name: string, snapshot: SnapshotRecord | null, documentSavedAt: number | null): SnapshotCandidate {

@@ -92,7 +92,20 @@ export const app = {
   showAboutPanel: vi.fn(),
   setAboutPanelOptions: vi.fn(),
   quit: vi.fn(),
+  exit: vi.fn(),
+  on: vi.fn(),
+  whenReady: vi.fn(async () => undefined),
+  getAppPath: () => '/app',
+  commandLine: { hasSwitch: vi.fn((_name: string) => false) },
+  enableSandbox: vi.fn(),
+  setPath: vi.fn(),
+  requestSingleInstanceLock: vi.fn(() => true),
 };
+
+export const protocol = { registerSchemesAsPrivileged: vi.fn(), handle: vi.fn() };
+export const ipcMain = { handle: vi.fn() };
+export const shell = { openExternal: vi.fn(async () => undefined) };
+export const session = { defaultSession: {} };
 
 export const dialog = {
   showMessageBox: vi.fn(async () => ({ response: 1, checkboxChecked: false })),

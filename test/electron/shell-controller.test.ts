@@ -5,6 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DOCUMENT_CHANNEL, COMMAND_CHANNEL } from '../../electron/ipc-contract.ts';
+import { loadSnapshotKey } from '../../electron/snapshot-key.ts';
 import { createSnapshotText } from '../../electron/snapshot-record.ts';
 import { dialog, FakeBrowserWindow, resetElectronMock } from './electron-mock.ts';
 
@@ -95,7 +96,7 @@ describe('startShellController()', () => {
 
   it('offers the newest snapshot left by an unexpected exit, and restores it when accepted', async () => {
     await fs.mkdir(path.join(userData, 'snapshots'));
-    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 1_700_000_000_000 });
+    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 1_700_000_000_000 }, await loadSnapshotKey(userData));
     await fs.writeFile(path.join(userData, 'snapshots', 'snapshot-1700000000000-1.json'), text);
     dialog.showMessageBox.mockImplementationOnce(async () => ({ response: 0, checkboxChecked: false }));
     const { controller, window, contents } = await start();
@@ -108,7 +109,7 @@ describe('startShellController()', () => {
 
   it('discards the left-behind snapshot when the person declines', async () => {
     await fs.mkdir(path.join(userData, 'snapshots'));
-    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 5 });
+    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 5 }, await loadSnapshotKey(userData));
     await fs.writeFile(path.join(userData, 'snapshots', 'snapshot-5-1.json'), text);
     const { controller, window, contents } = await start();
     await controller.actions.rendererReady(contents);

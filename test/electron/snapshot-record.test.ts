@@ -1,6 +1,9 @@
 // @vitest-environment node
 import { describe, expect, it } from 'vitest';
-import { contentChecksum, createSnapshotText, parseSnapshotText, stripPatientFields } from '../../electron/snapshot-record.ts';
+import { createSnapshotText, parseSnapshotText, sealOf, stripPatientFields } from '../../electron/snapshot-record.ts';
+
+// A fixed key for the tests (the app makes a random one, see snapshot-key.ts).
+const key = Buffer.alloc(32, 7);
 
 const draft = {
   title: 'Illustrative topic',
@@ -37,45 +40,48 @@ describe('stripPatientFields()', () => {
 
 describe('createSnapshotText()', () => {
   it('stores no patient details unless the person chose to keep them', () => {
-    const text = createSnapshotText({ content: draft, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1_700_000_000_000 });
+    const text = createSnapshotText({ content: draft, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1_700_000_000_000 }, key);
     expect(text).not.toContain('Ann Example');
     expect(text).not.toContain('NHS 000');
-    expect(parseSnapshotText(text)?.keepsPatient).toBe(false);
+    expect(parseSnapshotText(text, key)?.keepsPatient).toBe(false);
   });
 
   it('keeps the patient details when asked to', () => {
-    const text = createSnapshotText({ content: draft, keepPatient: true, documentPath: null, savedAt: 5 });
-    expect(parseSnapshotText(text)?.content).toEqual(draft);
+    const text = createSnapshotText({ content: draft, keepPatient: true, documentPath: null, savedAt: 5 }, key);
+    expect(parseSnapshotText(text, key)?.content).toEqual(draft);
   });
 });
 
 describe('parseSnapshotText()', () => {
-  const text = createSnapshotText({ content: { title: 'T' }, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1234 });
+  const text = createSnapshotText({ content: { title: 'T' }, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1234 }, key);
 
   it('reads back a snapshot it wrote', () => {
-    expect(parseSnapshotText(text)).toEqual({
+    expect(parseSnapshotText(text, key)).toEqual({
       format: 'chancewise-snapshot',
-      version: 1,
+      version: 2,
       savedAt: 1234,
       documentPath: '/h/t.cwtopic',
       keepsPatient: false,
       content: { title: 'T' },
-      // SHA-256 of the JSON text {"title":"T"} (FIPS 180-4), as `printf '{"title":"T"}' | sha256sum` gives it.
-      checksum: '6d05dcd7395808f66309c9411db93fdc57fb861efc95938239e2459de048f547',
+      // HMAC-SHA-256 under 32 bytes of 0x07 of the sealed fields as JSON, as OpenSSL gives it:
+      // printf '%s' '["chancewise-snapshot",2,1234,"/h/t.cwtopic",false,{"title":"T"}]' |
+      //   openssl dgst -sha256 -mac HMAC -macopt hexkey:0707…07
+      seal: '8853f5110af976a7e457037c68d113d571949a467ca9e05147b8ba266ccffaf2',
     });
   });
 
-  it('computes the checksum over the content as JSON', () => {
-    expect(contentChecksum({ title: 'T' })).toBe('6d05dcd7395808f66309c9411db93fdc57fb861efc95938239e2459de048f547');
+  it('seals with HMAC-SHA-256', () => {
+    // RFC 4231, §4.3, test case 2: key "Jefe", data "what do ya want for nothing?".
+    expect(sealOf(Buffer.from('Jefe'), 'what do ya want for nothing?')).toBe('5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843');
   });
 
   it('rejects a truncated, altered or foreign file', () => {
-    expect(parseSnapshotText(text.slice(0, text.length / 2))).toBeNull();
-    expect(parseSnapshotText(text.replace('"title":"T"', '"title":"U"'))).toBeNull();
-    expect(parseSnapshotText(text.replace('chancewise-snapshot', 'other'))).toBeNull();
-    expect(parseSnapshotText(text.replace('"version":1', '"version":2'))).toBeNull();
-    expect(parseSnapshotText(text.replace('"savedAt":1234', '"savedAt":-1'))).toBeNull();
-    expect(parseSnapshotText('')).toBeNull();
-    expect(parseSnapshotText('[]')).toBeNull();
+    expect(parseSnapshotText(text.slice(0, text.length / 2), key)).toBeNull();
+    expect(parseSnapshotText(text.replace('"title":"T"', '"title":"U"'), key)).toBeNull();
+    expect(parseSnapshotText(text.replace('chancewise-snapshot', 'other'), key)).toBeNull();
+    expect(parseSnapshotText(text.replace('"version":2', '"version":1'), key)).toBeNull();
+    expect(parseSnapshotText(text.replace('"savedAt":1234', '"savedAt":-1'), key)).toBeNull();
+    expect(parseSnapshotText('', key)).toBeNull();
+    expect(parseSnapshotText('[]', key)).toBeNull();
   });
 });

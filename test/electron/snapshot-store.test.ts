@@ -6,6 +6,8 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { createSnapshotStore, isSnapshotName, newestFirst } from '../../electron/snapshot-store.ts';
 
 let base: string;
+// A fixed key for the tests (the app makes a random one, see snapshot-key.ts).
+const key = Buffer.alloc(32, 7);
 
 beforeEach(async () => {
   base = await fs.mkdtemp(path.join(os.tmpdir(), 'chancewise-snapshots-'));
@@ -21,7 +23,7 @@ describe('createSnapshotStore()', () => {
 
   it('writes snapshots into its own folder, without patient details, keeping the newest three', async () => {
     const folder = path.join(base, 'userData', 'snapshots');
-    const store = createSnapshotStore({ folder });
+    const store = createSnapshotStore({ folder, key });
     for (const savedAt of [10, 20, 30, 40]) {
       await store.write({ content: { savedAt, patientName: 'Ann Example' }, keepPatient: false, documentPath: null, savedAt });
     }
@@ -34,7 +36,7 @@ describe('createSnapshotStore()', () => {
 
   it('lists a damaged snapshot with no record, and clears every snapshot', async () => {
     const folder = path.join(base, 'snapshots');
-    const store = createSnapshotStore({ folder });
+    const store = createSnapshotStore({ folder, key });
     await store.write({ content: { a: 1 }, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 100 });
     await fs.writeFile(path.join(folder, 'snapshot-200-9.json'), '{"format":"chancewise-snap');
     await fs.writeFile(path.join(folder, 'notes.txt'), 'not a snapshot');
@@ -47,11 +49,11 @@ describe('createSnapshotStore()', () => {
   });
 
   it('lists nothing when the folder does not exist yet', async () => {
-    expect(await createSnapshotStore({ folder: path.join(base, 'none') }).list()).toEqual([]);
+    expect(await createSnapshotStore({ folder: path.join(base, 'none'), key }).list()).toEqual([]);
   });
 
   it('runs writes one after another, so concurrent writes all land and pruning keeps the newest', async () => {
-    const store = createSnapshotStore({ folder: path.join(base, 's'), keep: 2 });
+    const store = createSnapshotStore({ folder: path.join(base, 's'), key, keep: 2 });
     await Promise.all([1, 2, 3, 4, 5].map((savedAt) => store.write({ content: { savedAt }, keepPatient: false, documentPath: null, savedAt })));
     expect((await store.list()).map((item) => item.record?.savedAt)).toEqual([5, 4]);
   });

@@ -132,9 +132,11 @@ function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, in
 }
 
 /** The comparison arm's risk of a trial, used as the baseline when none is given. */
-export function trialBaseline(effect: { comparison: { events: number; total: number } }): number | null {
+export function trialBaseline(effect: { comparison: { events: number; total: number }; opposite?: boolean }): number | null {
   const { events, total } = effect.comparison;
-  return total > 0 && events >= 0 && events <= total ? events / total : null;
+  if (!(total > 0 && events >= 0 && events <= total)) return null;
+  // Counts of the opposite event: the comparison arm's risk of the outcome is that of the others.
+  return effect.opposite === true ? (total - events) / total : events / total;
 }
 
 /**

@@ -18,7 +18,11 @@ import type { WordingSentence } from './wording-sentence.ts';
 export function certaintySentence(context: OptionContext): WordingSentence | null {
   const { option, catalogue } = context;
   if (option.certainty === null) return null;
-  const direction = changeDirection(context);
+  // The direction of the exact difference, so that a difference too small for whole people is
+  // not called "little or no difference" unless the clinician judged it trivial.
+  const exact = option.absoluteReduction.estimate;
+  const counted = changeDirection(context);
+  const direction = counted === 'same' && exact !== 0 ? (exact > 0 ? 'fewer' : 'more') : counted;
   const text = catalogue.certainty({
     ...optionValues(context),
     certainty: option.certainty,

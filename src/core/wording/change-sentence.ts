@@ -4,12 +4,19 @@ import type { OptionContext } from './option-context.ts';
 import type { ChangeDirection } from './wording-catalogue.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
-/** Whether the drawn counts show fewer, more or the same people with the outcome. */
+/** Whether the counts of the words show fewer, more or the same people with the outcome. */
 export function changeDirection(context: OptionContext): ChangeDirection {
-  const { prevented, caused } = context.option.groups;
-  if (prevented > 0) return 'fewer';
-  if (caused > 0) return 'more';
+  const { difference } = context.option.wordsPeople;
+  if (difference > 0) return 'fewer';
+  if (difference < 0) return 'more';
   return 'same';
+}
+
+/** For counts that show no change: the direction of a difference that rounding hid, or null when it is exactly 0. */
+function hiddenDirection(context: OptionContext): 'fewer' | 'more' | null {
+  const exact = context.option.absoluteReduction.estimate;
+  if (exact === 0) return null;
+  return exact > 0 ? 'fewer' : 'more';
 }
 
 /**
@@ -25,15 +32,16 @@ export function changeDirection(context: OptionContext): ChangeDirection {
 export function changeSentence(context: OptionContext): WordingSentence {
   const { option, denominator, catalogue } = context;
   const direction = changeDirection(context);
-  const count = direction === 'fewer' ? option.groups.prevented : direction === 'more' ? option.groups.caused : 0;
+  const count = Math.abs(option.wordsPeople.difference);
   const withOutcome = optionCount(option);
   const either = amountOf(withOutcome, denominator, optionRisk(option));
-  const text = catalogue.change({ ...optionValues(context), direction, count, either, denominator });
+  const hidden = direction === 'same' ? hiddenDirection(context) : null;
+  const text = catalogue.change({ ...optionValues(context), direction, count, either, denominator, hidden });
   const numbers: Record<string, number> =
     direction === 'fewer'
       ? { avoided: count, denominator }
       : direction === 'more'
         ? { caused: count, denominator }
-        : { ...amountNumbers(either, withOutcome), denominator };
+        : { ...amountNumbers(either, withOutcome), denominator, ...(hidden === null ? {} : { lessThan: 1 }) };
   return optionSentence(context, 'change', text, numbers);
 }

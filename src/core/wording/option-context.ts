@@ -22,14 +22,17 @@ export function optionValues(context: OptionContext): OptionValues {
   return { option: context.option.name, outcome: context.outcome.name, wanted: context.outcome.wanted };
 }
 
-/** People who have the outcome with this option, as drawn: `event` plus `caused`. */
+/**
+ * People who have the outcome with this option, at the words' denominator. Up to 1000 this is
+ * the picture's `event` plus `caused`; for rare outcomes the words count per more people.
+ */
 export function optionCount(option: OptionOutcomeResult): number {
-  return option.groups.event + option.groups.caused;
+  return option.wordsPeople.intervention;
 }
 
-/** People who have the outcome with the comparison, as drawn: `event` plus `prevented`. */
+/** People who have the outcome with the comparison, at the words' denominator. */
 export function comparisonCount(option: OptionOutcomeResult): number {
-  return option.groups.event + option.groups.prevented;
+  return option.wordsPeople.comparison;
 }
 
 /** The unrounded risk behind `optionCount`, or null when the result has none. */
@@ -38,10 +41,9 @@ export function optionRisk(option: OptionOutcomeResult): number | null {
   return risk === null ? null : risk.estimate;
 }
 
-/** The option's people counts when the result has them. */
-export function peopleOf(option: OptionOutcomeResult): PeopleCounts | null {
-  const people: PeopleCounts | null = option.perPeople;
-  return people;
+/** The option's people counts at the words' denominator. */
+export function peopleOf(option: OptionOutcomeResult): PeopleCounts<number> {
+  return option.wordsPeople;
 }
 
 /** The numbers an amount writes: its count, plus the 1 of "fewer than 1". */

@@ -36,6 +36,8 @@ const rangeNumbers = (found: RangeCase): Record<string, number> => {
       return { fewer: found.fewer, more: found.more };
     case 'no-change':
       return {};
+    case 'below-one':
+      return { lessThan: 1 };
   }
 };
 
@@ -52,10 +54,15 @@ export function rangeSentence(context: OptionContext): WordingSentence {
   const { option, denominator, catalogue } = context;
   const people = peopleOf(option);
   const values = optionValues(context);
-  if (people === null || people.interventionRange === null) {
+  if (people.interventionRange === null) {
     return optionSentence(context, 'range-unknown', catalogue.rangeUnknown(values), {});
   }
-  const found = rangeCase(people.comparison, people.interventionRange);
+  const counted = rangeCase(people.comparison, people.interventionRange);
+  const limits = option.interventionRisk;
+  const base = option.comparisonRisk.estimate;
+  // Counts that show no change over a range that is not exactly no change: say it is below one person.
+  const hidden = limits !== null && limits.lower !== null && limits.upper !== null && (limits.lower !== base || limits.upper !== base);
+  const found: RangeCase = counted.variant === 'no-change' && hidden ? { variant: 'below-one' } : counted;
   const text = catalogue.range({ ...values, range: found, denominator });
   return optionSentence(context, 'range', text, { ...rangeNumbers(found), denominator });
 }

@@ -114,7 +114,7 @@ export function topicWording(result: TopicResult, options: WordingOptions = {}):
       wanted: outcome.wanted,
       isHeadline: outcome.isHeadline,
       options: outcome.options.map((option) =>
-        optionWording(outcome, option, { years: result.periodYears, unit: result.periodUnit }, result.denominator, options),
+        optionWording(outcome, option, { years: result.periodYears, unit: result.periodUnit }, result.wordsDenominator, options),
       ),
     })),
   };

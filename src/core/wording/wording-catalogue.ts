@@ -31,7 +31,9 @@ export type RangeCase =
   | { readonly variant: 'avoid' | 'get'; readonly low: number; readonly high: number }
   | { readonly variant: 'narrow'; readonly direction: 'fewer' | 'more'; readonly count: number }
   | { readonly variant: 'either'; readonly fewer: number; readonly more: number }
-  | { readonly variant: 'no-change' };
+  | { readonly variant: 'no-change' }
+  /** The whole range is smaller than one person in the denominator, but not exactly no change. */
+  | { readonly variant: 'below-one' };
 
 /** Values every option sentence shares. */
 export interface OptionValues {
@@ -75,6 +77,11 @@ export interface WordingMessages {
       readonly count: number;
       /** How many have the outcome either way, used when `same`. */
       readonly either: Amount;
+      /**
+       * When `same`: the direction of a difference too small to show as one person in the
+       * denominator, or null when the difference is exactly 0 (only then "no difference").
+       */
+      readonly hidden: 'fewer' | 'more' | null;
       readonly denominator: number;
     },
   ) => string;

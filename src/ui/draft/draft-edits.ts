@@ -4,6 +4,7 @@
  * that would break one (a fifth option, removing the last outcome) returns the draft
  * unchanged.
  */
+import type { TimeUnit } from '../../core/time-unit.ts';
 import { TOPIC_LIMITS } from '../../core/topic/topic.ts';
 import { blankEffect } from './topic-draft.ts';
 import type { EffectDraft, OptionDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
@@ -34,6 +35,11 @@ function freshId(prefix: string, taken: readonly string[]): string {
 /** Set one text field of the topic. */
 export function setTopicText(draft: TopicDraft, field: TopicTextField, value: string): TopicDraft {
   return { ...draft, [field]: value };
+}
+
+/** Say which unit the topic's period is typed in; the amount typed stays as it is. */
+export function setPeriodUnit(draft: TopicDraft, unit: TimeUnit): TopicDraft {
+  return { ...draft, periodUnit: unit };
 }
 
 /** Mark the topic as an invented example, or not. */
@@ -115,13 +121,26 @@ export function setOutcomeKind(draft: TopicDraft, outcomeId: string, kind: 'bene
   return mapOutcome(draft, outcomeId, (outcome) => ({ ...outcome, kind }));
 }
 
+/** Say whether an outcome's event is one people want (true) or want to avoid (false). */
+export function setOutcomeWanted(draft: TopicDraft, outcomeId: string, wanted: boolean): TopicDraft {
+  return mapOutcome(draft, outcomeId, (outcome) => ({ ...outcome, wanted }));
+}
+
+/** Say which unit an outcome's baseline period is typed in. */
+export function setBaselineUnit(draft: TopicDraft, outcomeId: string, unit: TimeUnit): TopicDraft {
+  return mapOutcome(draft, outcomeId, (outcome) => ({ ...outcome, baselinePeriodUnit: unit }));
+}
+
 /** Make one outcome the headline. */
 export function setHeadline(draft: TopicDraft, outcomeId: string): TopicDraft {
   if (!draft.outcomes.some((outcome) => outcome.id === outcomeId)) return draft;
   return { ...draft, outcomes: draft.outcomes.map((outcome) => ({ ...outcome, isHeadline: outcome.id === outcomeId })) };
 }
 
-/** Add an outcome (at most TOPIC_LIMITS.maxOutcomes) over the topic's period, with a blank effect per option. */
+/**
+ * Add an outcome (at most TOPIC_LIMITS.maxOutcomes) over the topic's period, as an event to
+ * avoid, with a blank effect per option.
+ */
 export function addOutcome(draft: TopicDraft, kind: 'benefit' | 'harm'): { draft: TopicDraft; outcomeId: string | null } {
   if (draft.outcomes.length >= TOPIC_LIMITS.maxOutcomes) return { draft, outcomeId: null };
   const id = freshId('outcome', draft.outcomes.map((outcome) => outcome.id));
@@ -129,9 +148,11 @@ export function addOutcome(draft: TopicDraft, kind: 'benefit' | 'harm'): { draft
     id,
     name: '',
     kind,
+    wanted: false,
     isHeadline: draft.outcomes.length === 0,
     baselineRisk: '',
     baselinePeriodYears: draft.periodYears,
+    baselinePeriodUnit: draft.periodUnit,
     baselineSource: '',
     effects: draft.options.map((option) => blankEffect(option.id)),
   };
@@ -190,6 +211,7 @@ export function blankDraft(): TopicDraft {
     title: '',
     population: '',
     periodYears: '10',
+    periodUnit: 'years',
     illustrative: false,
     options,
     outcomes: [
@@ -197,9 +219,11 @@ export function blankDraft(): TopicDraft {
         id: 'outcome-1',
         name: '',
         kind: 'benefit',
+        wanted: false,
         isHeadline: true,
         baselineRisk: '',
         baselinePeriodYears: '10',
+        baselinePeriodUnit: 'years',
         baselineSource: '',
         effects: options.map((option) => blankEffect(option.id)),
       },

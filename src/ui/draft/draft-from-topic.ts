@@ -1,3 +1,5 @@
+import { amountIn } from '../../core/time-unit.ts';
+import type { TimeUnit } from '../../core/time-unit.ts';
 import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
 import { numberText } from './number-text.ts';
 import { blankEffect } from './topic-draft.ts';
@@ -10,11 +12,17 @@ const optionalNumber = (value: number | null | undefined): string =>
 const percentagePoints = (value: number | null | undefined): string =>
   value === null || value === undefined ? '' : numberText(value * 100);
 
+/** A period stored in years, as the amount of the unit it was given in. */
+const periodText = (years: number, unit: TimeUnit): string => numberText(amountIn(years, unit));
+
 function effectDraft(entry: OptionEffect): EffectDraft {
+  const followUpUnit = entry.followUpUnit ?? 'years';
   const base = {
     ...blankEffect(entry.optionId),
     source: entry.source,
-    followUpYears: optionalNumber(entry.followUpYears),
+    followUpYears: entry.followUpYears === null ? '' : periodText(entry.followUpYears, followUpUnit),
+    followUpUnit,
+    opposite: entry.effect.opposite === true,
     certainty: entry.certainty,
     importance: entry.importance,
   };
@@ -47,9 +55,11 @@ function outcomeDraft(outcome: TopicOutcome): OutcomeDraft {
     id: outcome.id,
     name: outcome.name,
     kind: outcome.kind,
+    wanted: outcome.wanted === true,
     isHeadline: outcome.isHeadline,
     baselineRisk: risk === null ? '' : typeof risk === 'number' ? numberText(risk) : risk,
-    baselinePeriodYears: numberText(outcome.baseline.periodYears),
+    baselinePeriodYears: periodText(outcome.baseline.periodYears, outcome.baseline.periodUnit ?? 'years'),
+    baselinePeriodUnit: outcome.baseline.periodUnit ?? 'years',
     baselineSource: outcome.baseline.source,
     effects: outcome.effects.map(effectDraft),
   };
@@ -60,7 +70,8 @@ export function draftFromTopic(topic: Topic): TopicDraft {
   return {
     title: topic.title,
     population: topic.population,
-    periodYears: numberText(topic.periodYears),
+    periodYears: periodText(topic.periodYears, topic.periodUnit ?? 'years'),
+    periodUnit: topic.periodUnit ?? 'years',
     illustrative: topic.illustrative,
     options: topic.options.map((option) => ({ id: option.id, name: option.name, isComparison: option.isComparison })),
     outcomes: topic.outcomes.map(outcomeDraft),

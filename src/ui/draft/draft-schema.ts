@@ -6,6 +6,9 @@ import * as v from 'valibot';
 import type { TopicDraft } from './topic-draft.ts';
 
 const text = v.string();
+// Drafts stored before units, wanted events and opposite-event effects existed read with their defaults.
+const unit = v.optional(v.picklist(['days', 'weeks', 'months', 'years']), 'years');
+const flag = v.optional(v.boolean(), false);
 
 const effectDraftSchema = v.object({
   optionId: text,
@@ -14,12 +17,14 @@ const effectDraftSchema = v.object({
   lower: text,
   upper: text,
   level: v.nullable(v.pipe(v.number(), v.finite())),
+  opposite: flag,
   interventionEvents: text,
   interventionTotal: text,
   comparisonEvents: text,
   comparisonTotal: text,
   source: text,
   followUpYears: text,
+  followUpUnit: unit,
   certainty: v.picklist(['high', 'moderate', 'low', 'very-low']),
   importance: v.picklist(['important', 'trivial']),
 });
@@ -29,6 +34,7 @@ export const topicDraftSchema = v.object({
   title: text,
   population: text,
   periodYears: text,
+  periodUnit: unit,
   illustrative: v.boolean(),
   options: v.array(v.object({ id: text, name: text, isComparison: v.boolean() })),
   outcomes: v.array(
@@ -36,9 +42,11 @@ export const topicDraftSchema = v.object({
       id: text,
       name: text,
       kind: v.picklist(['benefit', 'harm']),
+      wanted: flag,
       isHeadline: v.boolean(),
       baselineRisk: text,
       baselinePeriodYears: text,
+      baselinePeriodUnit: unit,
       baselineSource: text,
       effects: v.array(effectDraftSchema),
     }),

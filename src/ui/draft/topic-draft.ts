@@ -4,6 +4,7 @@
  * Effects are kept for every option (also one that is now the comparison), so that
  * switching the comparison back and forth loses nothing.
  */
+import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty, Importance } from '../../core/topic/topic.ts';
 import type { EffectMeasure } from '../../core/types.ts';
 
@@ -18,12 +19,16 @@ export interface EffectDraft {
   readonly upper: string;
   /** The interval level, when a file gave one other than 95%; not edited in the app. */
   readonly level: number | null;
+  /** The ratio or counts were reported for the opposite event ("still in pain" for "pain gone"). */
+  readonly opposite: boolean;
   readonly interventionEvents: string;
   readonly interventionTotal: string;
   readonly comparisonEvents: string;
   readonly comparisonTotal: string;
   readonly source: string;
+  /** The follow-up as typed, in `followUpUnit` (the name is the topic's field it becomes). */
   readonly followUpYears: string;
+  readonly followUpUnit: TimeUnit;
   readonly certainty: Certainty;
   readonly importance: Importance;
 }
@@ -38,10 +43,14 @@ export interface OutcomeDraft {
   readonly id: string;
   readonly name: string;
   readonly kind: 'benefit' | 'harm';
+  /** The event is one people want ("pain gone by day 3"); false: one they want to avoid. */
+  readonly wanted: boolean;
   readonly isHeadline: boolean;
   /** As typed: "15%", "1 in 5", "0.15"; empty when every effect is trial counts. */
   readonly baselineRisk: string;
+  /** The baseline's period as typed, in `baselinePeriodUnit`. */
   readonly baselinePeriodYears: string;
+  readonly baselinePeriodUnit: TimeUnit;
   readonly baselineSource: string;
   readonly effects: readonly EffectDraft[];
 }
@@ -49,7 +58,9 @@ export interface OutcomeDraft {
 export interface TopicDraft {
   readonly title: string;
   readonly population: string;
+  /** The topic's period as typed, in `periodUnit`. */
   readonly periodYears: string;
+  readonly periodUnit: TimeUnit;
   readonly illustrative: boolean;
   readonly options: readonly OptionDraft[];
   readonly outcomes: readonly OutcomeDraft[];
@@ -70,12 +81,14 @@ export function blankEffect(optionId: string): EffectDraft {
     lower: '',
     upper: '',
     level: null,
+    opposite: false,
     interventionEvents: '',
     interventionTotal: '',
     comparisonEvents: '',
     comparisonTotal: '',
     source: '',
     followUpYears: '',
+    followUpUnit: 'years',
     certainty: 'moderate',
     importance: 'important',
   };

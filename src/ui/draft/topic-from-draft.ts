@@ -2,11 +2,16 @@
  * Turning the editor's text back into a topic. Every number that cannot be read gives a
  * problem on its own field; the topic still comes back whole (with NaN standing in for
  * the unreadable numbers) so that the core can check everything else at the same time.
+ * Periods are typed in a unit and stored in years, with the unit beside them. What is
+ * the default (years, an event to avoid, an effect on the event itself) is left out, so a
+ * topic that uses none of them reads and writes as it always did.
  */
 import { checkArm } from '../../core/counts/check-arm.ts';
 import { parseNumber } from '../../core/parse-number.ts';
 import { InputError, problem } from '../../core/problems.ts';
 import type { Problem } from '../../core/problems.ts';
+import { yearsFrom } from '../../core/time-unit.ts';
+import type { TimeUnit } from '../../core/time-unit.ts';
 import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
 import type { Effect } from '../../core/types.ts';
 import { blankEffect } from './topic-draft.ts';
@@ -44,6 +49,19 @@ function readOptional(reader: Reader, text: string, field: string): number | nul
   return readNumber(reader, text, field, 'number', '10');
 }
 
+/** A period typed in a unit, in years. */
+function readPeriod(reader: Reader, text: string, unit: TimeUnit, field: string, what: string): number {
+  return yearsFrom(readNumber(reader, text, field, what, unit === 'years' ? '10' : '3'), unit);
+}
+
+/** The unit field of a topic, baseline or follow-up: left out when it is years. */
+function unitField<Name extends string>(name: Name, unit: TimeUnit): Partial<Record<Name, TimeUnit>> {
+  return unit === 'years' ? {} : ({ [name]: unit } as Record<Name, TimeUnit>);
+}
+
+/** `opposite: true` when the effect was given for the opposite event; nothing otherwise. */
+const oppositeField = (draft: EffectDraft): { opposite?: true } => (draft.opposite ? { opposite: true } : {});
+
 const MEASURE_EXAMPLES: Record<string, string> = { rr: '0.75', or: '0.73', hr: '0.8', rrr: '25', arr: '3' };
 
 function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect {
@@ -61,6 +79,7 @@ function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect 
     lower: scaled(lower),
     upper: scaled(upper),
     ...(draft.level === null ? {} : { level: draft.level }),
+    ...oppositeField(draft),
   };
 }
 
@@ -88,13 +107,16 @@ function readEffect(reader: Reader, draft: EffectDraft, field: string): OptionEf
           intervention: readArm(reader, draft.interventionEvents, draft.interventionTotal, `${effectField}.intervention`),
           comparison: readArm(reader, draft.comparisonEvents, draft.comparisonTotal, `${effectField}.comparison`),
           ...(draft.level === null ? {} : { level: draft.level }),
+          ...oppositeField(draft),
         }
       : readEntered(reader, draft, effectField);
+  const followUp = readOptional(reader, draft.followUpYears, `${field}.followUpYears`);
   return {
     optionId: draft.optionId,
     effect,
     source: draft.source,
-    followUpYears: readOptional(reader, draft.followUpYears, `${field}.followUpYears`),
+    followUpYears: followUp === null ? null : yearsFrom(followUp, draft.followUpUnit),
+    ...unitField('followUpUnit', draft.followUpUnit),
     certainty: draft.certainty,
     importance: draft.importance,
   };
@@ -110,10 +132,12 @@ function readOutcome(reader: Reader, draft: OutcomeDraft, index: number, effectO
     id: draft.id,
     name: draft.name,
     kind: draft.kind,
+    ...(draft.wanted ? { wanted: true } : {}),
     isHeadline: draft.isHeadline,
     baseline: {
       risk: draft.baselineRisk.trim() === '' ? null : draft.baselineRisk,
-      periodYears: readNumber(reader, draft.baselinePeriodYears, `${field}.baseline.periodYears`, 'period of the baseline risk', '10'),
+      periodYears: readPeriod(reader, draft.baselinePeriodYears, draft.baselinePeriodUnit, `${field}.baseline.periodYears`, 'period of the baseline risk'),
+      ...unitField('periodUnit', draft.baselinePeriodUnit),
       source: draft.baselineSource,
     },
     effects,
@@ -133,7 +157,7 @@ export function effectOptionIds(draft: TopicDraft): string[] {
 export function topicFromDraft(draft: TopicDraft): DraftReading {
   const reader: Reader = { problems: [] };
   const ids = effectOptionIds(draft);
-  const periodYears = readNumber(reader, draft.periodYears, 'periodYears', 'period', '10');
+  const periodYears = readPeriod(reader, draft.periodYears, draft.periodUnit, 'periodYears', 'period');
   const outcomes = draft.outcomes.map((outcome, index) => readOutcome(reader, outcome, index, ids));
   const questionPlaces = draft.questions.flatMap((question, place) => (question.trim() === '' ? [] : [place]));
   const patientGiven = draft.patientName.trim() !== '' || draft.patientReference.trim() !== '';
@@ -141,6 +165,7 @@ export function topicFromDraft(draft: TopicDraft): DraftReading {
     title: draft.title,
     population: draft.population,
     periodYears,
+    ...unitField('periodUnit', draft.periodUnit),
     options: draft.options.map((option) => ({ ...option })),
     outcomes,
     illustrative: draft.illustrative,

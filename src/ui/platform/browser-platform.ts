@@ -2,12 +2,16 @@
  * The platform in a plain browser: a file input to open, a download to save, local
  * storage for settings. Nothing is sent anywhere.
  */
+import { PICKED_FILE_MAX_BYTES, pickedFileTooLargeMessage } from '../../shared/picked-file-limit.ts';
 import { browserStorage } from '../state/key-value-storage.ts';
 import type { OpenedFile, Platform } from './platform.ts';
 
-/** Ask for a file with a file input; null when cancelled. */
+/**
+ * Ask for a file with a file input; null when cancelled. A file over the size limit is
+ * refused (rejected with a message saying so) before any of it is read.
+ */
 export function pickTextFile(accept: string): Promise<OpenedFile | null> {
-  return new Promise((resolve) => {
+  return new Promise((resolve, reject) => {
     const input = document.createElement('input');
     input.type = 'file';
     input.accept = accept;
@@ -15,6 +19,10 @@ export function pickTextFile(accept: string): Promise<OpenedFile | null> {
       const file = input.files?.[0];
       if (file === undefined) {
         resolve(null);
+        return;
+      }
+      if (file.size > PICKED_FILE_MAX_BYTES) {
+        reject(new Error(pickedFileTooLargeMessage(file.name, file.size)));
         return;
       }
       file.text().then(

@@ -20,7 +20,7 @@ export interface KeyNumberRow {
   readonly people: RangedText;
   /** Against the comparison: "4 fewer", range "3 to 5 fewer"; null for the comparison. */
   readonly change: RangedText | null;
-  /** The absolute risk: "11.2%", range "10.2 to 12.4%". */
+  /** The absolute risk (the chance, for a wanted event): "11.2%", range "10.2 to 12.4%". */
   readonly risk: RangedText;
   /** The core's NNT text, its interval beneath: "NNTB 27", range "NNTB 21 to 40"; null for the comparison. */
   readonly nnt: RangedText | null;
@@ -30,11 +30,16 @@ export interface KeyNumberTable {
   readonly outcomeId: string;
   readonly name: string;
   readonly kind: 'benefit' | 'harm';
+  /** The event is one people want: its column is headed "Chance", not "Risk". */
+  readonly wanted: boolean;
   readonly isHeadline: boolean;
   readonly rows: readonly KeyNumberRow[];
 }
 
-/** A signed change in people as words: 4 → "4 fewer", −2 → "2 more", 0 → "no change". */
+/**
+ * A signed change in people as words: 4 → "4 fewer", −2 → "2 more", 0 → "no change". The
+ * words say only how many people have the event; whether that helps is the event's direction.
+ */
 export function changeWords(difference: number): string {
   if (difference === 0) return 'no change';
   return difference > 0 ? `${difference} fewer` : `${-difference} more`;
@@ -86,7 +91,14 @@ function row(option: OptionOutcomeResult): KeyNumberRow {
 
 function table(outcome: OutcomeResult): KeyNumberTable {
   const ordered = [...outcome.options].sort((first, second) => Number(second.isComparison) - Number(first.isComparison));
-  return { outcomeId: outcome.outcomeId, name: outcome.name, kind: outcome.kind, isHeadline: outcome.isHeadline, rows: ordered.map(row) };
+  return {
+    outcomeId: outcome.outcomeId,
+    name: outcome.name,
+    kind: outcome.kind,
+    wanted: outcome.wanted,
+    isHeadline: outcome.isHeadline,
+    rows: ordered.map(row),
+  };
 }
 
 /** One table per outcome, the headline first, then in the topic's order; the comparison first in each. */

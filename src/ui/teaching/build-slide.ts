@@ -7,7 +7,7 @@ import { teachingMessagesEn } from './messages/en.ts';
 import type { TeachingMessages } from './messages/en.ts';
 import type { PresentationItem } from './presentation-item.ts';
 import type { Slide } from './slide-model.ts';
-import { STORY_SLIDES } from './story-slides.ts';
+import { STORY_SLIDES, patientWordsParts } from './story-slides.ts';
 import type { SlideSource } from './story-slides.ts';
 import type { StepKind } from './teaching-steps.ts';
 
@@ -17,7 +17,18 @@ const BUILDERS: Readonly<Record<StepKind, (source: SlideSource) => Slide>> = {
   ...FORMAT_SLIDES,
 };
 
-/** Build the slide of `kind` for a presented topic. */
-export function buildSlide(item: PresentationItem, kind: StepKind, messages: TeachingMessages = teachingMessagesEn): Slide {
-  return BUILDERS[kind]({ item, messages });
+/**
+ * How many slides a step has for a presented topic: one for each harm on the harm step (one
+ * that says there is none when the topic lists none), the headline and then the harms on the
+ * patient's words when there are several harms, one for every other step.
+ */
+export function slideCount(item: PresentationItem, kind: StepKind): number {
+  if (kind === 'harmed') return Math.max(1, item.harmIds.length);
+  if (kind === 'patient-words') return patientWordsParts(item).length;
+  return 1;
+}
+
+/** Build the slide of `kind` for a presented topic; `part` picks one of a step's several slides (see `slideCount`). */
+export function buildSlide(item: PresentationItem, kind: StepKind, messages: TeachingMessages = teachingMessagesEn, part = 0): Slide {
+  return BUILDERS[kind]({ item, messages, part });
 }

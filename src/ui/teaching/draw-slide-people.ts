@@ -5,7 +5,6 @@
  * the live view and the slide export use the same drawing.
  */
 import { select } from 'd3-selection';
-import { lookOf } from '../../core/direction.ts';
 import { glyphFor } from '../../render/glyphs/glyph-for.ts';
 import { glyphPath, placeGlyphPath } from '../../render/glyphs/svg-path-context.ts';
 import { scaleLayout } from '../../render/icon-array-layout.ts';
@@ -30,8 +29,8 @@ export function drawingSize(layout: IconArrayLayout): { readonly width: number; 
 
 /** Give a path the paint of a look. */
 function paint(element: Element, look: PersonLook, palette: ChartPalette, ids: PatternIds, cellSize: number): void {
-  // The palette is keyed by look; slide looks still name the groups of an event to avoid.
-  const found = personPaint(palette, look === 'uncertain' ? look : lookOf(look, false), ids, cellSize);
+  // The palette is keyed by look (helped, harmed), as the charts are: one code for every chart and slide.
+  const found = personPaint(palette, look, ids, cellSize);
   element.setAttribute('fill', found.fill);
   element.setAttribute('stroke', found.stroke);
   if (found.dash !== null) {
@@ -52,6 +51,9 @@ export function drawPeopleGroup(
   idPrefix: string,
   palette: ChartPalette = colourPalette,
 ): { readonly width: number; readonly height: number } {
+  if (looks.length !== layout.people.length) {
+    throw new RangeError(`A slide array has ${layout.people.length} people but ${looks.length} looks; build both from the same groups.`);
+  }
   const scaled = scaleLayout(layout, UNITS_PER_CELL / layout.geometry.cellSize);
   const { cellSize, iconSize, patternTile } = scaled.geometry;
   const ids = patternIdsFor(idPrefix);
@@ -62,9 +64,11 @@ export function drawPeopleGroup(
   group.setAttribute('stroke-linejoin', 'round');
   for (const person of scaled.people) {
     const element = document.createElementNS(SVG_NAMESPACE, 'path');
-    const look = looks[person.index] ?? person.group;
+    const look = looks[person.index] ?? 'uncertain';
     element.setAttribute('d', placeGlyphPath(path, person.x, person.y));
     element.setAttribute('class', 'person');
+    // The group keeps its event meaning, as in the charts; the look says how the person is drawn.
+    element.setAttribute('data-outcome', person.group);
     element.setAttribute('data-look', look);
     paint(element, look, palette, ids, cellSize);
     group.appendChild(element);

@@ -49,6 +49,7 @@ function arrangementSlide(source: SlideSource): Slide {
       groups: arms.option.groups,
       outcome: arms.outcome.name,
       option: arms.option.name,
+      wanted: arms.outcome.wanted,
       arrangement: 'scattered',
       seed: DEFAULT_SCATTER_SEED,
     },

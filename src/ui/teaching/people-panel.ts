@@ -3,6 +3,7 @@
  * person's look, and the counts under the array, counted by look so that they always
  * match what is drawn.
  */
+import { lookOf } from '../../core/direction.ts';
 import type { PeopleGroups } from '../../core/types.ts';
 import { iconArrayLayout } from '../../render/icon-array-layout.ts';
 import type { Arrangement } from '../../render/icon-array-layout.ts';
@@ -11,7 +12,7 @@ import type { TeachingMessages } from './messages/en.ts';
 import type { PanelChip, PeoplePanel, PersonLook } from './slide-model.ts';
 
 /** The order of the counts under an array: the fill order, with the outlined people after the changed ones. */
-export const LOOK_ORDER: readonly PersonLook[] = ['event', 'prevented', 'caused', 'uncertain', 'free'];
+export const LOOK_ORDER: readonly PersonLook[] = ['event', 'helped', 'harmed', 'uncertain', 'free'];
 
 /** The same people with the change folded into the totals: only "has it" and "does not". */
 export function totalsOnly(groups: PeopleGroups): PeopleGroups {
@@ -24,6 +25,16 @@ export function totalsOnly(groups: PeopleGroups): PeopleGroups {
   };
 }
 
+/**
+ * The group an option's helped or harmed people are in: `prevented` (have the event only
+ * without it) or `caused` (only with it), as `lookOf` draws them for the event's direction.
+ *
+ * @example changedGroup('helped', true) // => 'caused' (more people have a wanted event)
+ */
+export function changedGroup(look: 'helped' | 'harmed', wanted: boolean): 'prevented' | 'caused' {
+  return lookOf('prevented', wanted) === look ? 'prevented' : 'caused';
+}
+
 export interface PanelSettings {
   readonly id: string;
   readonly title: string;
@@ -31,6 +42,8 @@ export interface PanelSettings {
   /** The outcome and option the counts are worded with. */
   readonly outcome: string;
   readonly option: string;
+  /** The outcome's event is one people want: its gained people are helped, its lost people harmed. */
+  readonly wanted: boolean;
   readonly arrangement?: Arrangement;
   readonly seed?: number;
   /** Ranks of the people to outline as uncertain. */
@@ -44,16 +57,16 @@ export function peoplePanel(settings: PanelSettings, messages: TeachingMessages)
     ...(settings.seed === undefined ? {} : { seed: settings.seed }),
   });
   const span = settings.uncertain ?? null;
-  const looks: PersonLook[] = layout.people.map((person) => (isUncertain(person.rank, span) ? 'uncertain' : person.group));
+  const { wanted } = settings;
+  const looks: PersonLook[] = layout.people.map((person) => (isUncertain(person.rank, span) ? 'uncertain' : lookOf(person.group, wanted)));
   const counts = new Map<PersonLook, number>();
   for (const look of looks) counts.set(look, (counts.get(look) ?? 0) + 1);
   const words = messages.chips;
   const label = (look: PersonLook, count: number): string => {
     switch (look) {
-      case 'prevented':
-        return words.prevented(count, settings.outcome, settings.option);
-      case 'caused':
-        return words.caused(count, settings.outcome, settings.option);
+      case 'helped':
+      case 'harmed':
+        return words.changed(changedGroup(look, wanted), wanted, count, settings.outcome, settings.option);
       case 'uncertain':
         return words.uncertain(count, settings.outcome);
       case 'free':

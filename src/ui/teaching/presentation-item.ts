@@ -13,8 +13,11 @@ export interface PresentationItem extends ItemChoices {
   readonly result: TopicResult;
   /** The option shown against the comparison. */
   readonly optionId: string;
-  /** The harm outcome of the "who is harmed" step; null when the topic has no harm. */
-  readonly harmId: string | null;
+  /**
+   * The harm outcomes of the "who is harmed" step, one slide each: the harm the choices name,
+   * else every harm of the topic in its order; empty when the topic has no harm.
+   */
+  readonly harmIds: readonly string[];
 }
 
 /** Why a topic cannot be presented with the given choices. */
@@ -36,13 +39,6 @@ export function benefitOutcome(result: TopicResult): OutcomeResult | null {
   const headline = headlineOutcome(result);
   if (headline !== null && headline.kind === 'benefit') return headline;
   return result.outcomes.find((outcome) => outcome.kind === 'benefit') ?? null;
-}
-
-/** The harm shown by default: the first harm the option adds people to, else the first harm. */
-export function defaultHarm(result: TopicResult, optionId: string): string | null {
-  const harms = result.outcomes.filter((outcome) => outcome.kind === 'harm');
-  const adding = harms.find((outcome) => (outcome.options.find((option) => option.optionId === optionId)?.groups.caused ?? 0) > 0);
-  return (adding ?? harms[0])?.outcomeId ?? null;
 }
 
 /** Compute a topic and check the choices against it. */
@@ -67,5 +63,5 @@ export function presentationItem(topic: Topic, choices: ItemChoices): ItemCheck 
   if (choices.harm !== null && !harms.includes(choices.harm)) {
     return { ok: false, problem: { kind: 'unknown-harm', value: choices.harm, known: harms } };
   }
-  return { ok: true, item: { ...choices, topic, result, optionId, harmId: choices.harm ?? defaultHarm(result, optionId) } };
+  return { ok: true, item: { ...choices, topic, result, optionId, harmIds: choices.harm === null ? harms : [choices.harm] } };
 }

@@ -3,13 +3,17 @@
  * call-outs and lines beside them, framing cards, and the evidence line of a format
  * demonstration. The view and the slide export both draw this same data.
  */
-import type { PersonGroup } from '../../core/types.ts';
+import type { PersonLook as ChangeLook } from '../../core/direction.ts';
 import type { IconArrayLayout } from '../../render/icon-array-layout.ts';
 import type { EvidenceWords } from './messages/en.ts';
 import type { StepKind } from './teaching-steps.ts';
 
-/** How a person is drawn: their group, or outlined when their group depends on the range. */
-export type PersonLook = PersonGroup | 'uncertain';
+/**
+ * How a person is drawn: has the outcome either way, helped or harmed by the option (from
+ * their group and whether the event is wanted, see `lookOf`), free of it, or outlined when
+ * their group depends on the range.
+ */
+export type PersonLook = ChangeLook | 'uncertain';
 
 /** A count shown under an array with the look it counts; `label` says it in words. */
 export interface PanelChip {

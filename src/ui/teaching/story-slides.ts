@@ -4,14 +4,14 @@
  * sentences a patient would hear. Every number comes from the computed topic and
  * every patient sentence from the core's wording.
  */
-import type { OptionOutcomeResult, OutcomeResult } from '../../core/topic/topic-result.ts';
+import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
 import { topicWording } from '../../core/wording/topic-wording.ts';
 import type { TopicWording } from '../../core/wording/topic-wording.ts';
 import type { SentenceKind } from '../../core/wording/wording-sentence.ts';
 import { uncertainRanks } from '../../render/uncertain-people.ts';
 import { capitalise } from './messages/en.ts';
-import type { TeachingMessages } from './messages/en.ts';
-import { peoplePanel, totalsOnly } from './people-panel.ts';
+import type { Period, TeachingMessages } from './messages/en.ts';
+import { changedGroup, peoplePanel, totalsOnly } from './people-panel.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { PresentationItem } from './presentation-item.ts';
 import type { Callout, PeoplePanel, Slide, SlideLine } from './slide-model.ts';
@@ -21,6 +21,8 @@ import type { StepKind } from './teaching-steps.ts';
 export interface SlideSource {
   readonly item: PresentationItem;
   readonly messages: TeachingMessages;
+  /** Which slide of a step that has several (the harm step: one slide per harm), from 0. */
+  readonly part: number;
 }
 
 /** The comparison's and the presented option's results for one outcome. */
@@ -65,7 +67,7 @@ const line = (text: string, tone: SlideLine['tone'] = 'body', look: SlideLine['l
 /** The comparison's array of an outcome. */
 export function comparisonPanel(arms: OutcomeArms, source: SlideSource): PeoplePanel {
   return peoplePanel(
-    { id: 'comparison', title: capitalise(arms.comparison.name), groups: arms.comparison.groups, outcome: arms.outcome.name, option: arms.option.name },
+    { id: 'comparison', title: capitalise(arms.comparison.name), groups: arms.comparison.groups, outcome: arms.outcome.name, option: arms.option.name, wanted: arms.outcome.wanted },
     source.messages,
   );
 }
@@ -74,10 +76,20 @@ export function comparisonPanel(arms: OutcomeArms, source: SlideSource): PeopleP
 export function optionPanel(arms: OutcomeArms, source: SlideSource, settings: { readonly id?: string; readonly title?: string; readonly totals?: boolean } = {}): PeoplePanel {
   const groups = settings.totals === true ? totalsOnly(arms.option.groups) : arms.option.groups;
   return peoplePanel(
-    { id: settings.id ?? 'option', title: settings.title ?? capitalise(arms.option.name), groups, outcome: arms.outcome.name, option: arms.option.name },
+    {
+      id: settings.id ?? 'option',
+      title: settings.title ?? capitalise(arms.option.name),
+      groups,
+      outcome: arms.outcome.name,
+      option: arms.option.name,
+      wanted: arms.outcome.wanted,
+    },
     source.messages,
   );
 }
+
+/** The topic's period, in the unit it was given in. */
+const periodOf = (result: TopicResult): Period => ({ years: result.periodYears, unit: result.periodUnit });
 
 function titleSlide(source: SlideSource): Slide {
   const { topic, result, optionId } = source.item;
@@ -86,7 +98,7 @@ function titleSlide(source: SlideSource): Slide {
   const option = topic.options.find((entry) => entry.id === optionId)?.name ?? '';
   const lines: SlideLine[] = [];
   if (result.population.trim() !== '') lines.push(line(words.who(result.population.trim().replace(/[.!?]$/, ''))));
-  lines.push(line(words.period(result.periodYears)), line(words.comparing(option, comparison)));
+  lines.push(line(words.period(periodOf(result))), line(words.comparing(option, comparison)));
   if (result.illustrative) lines.push(line(words.illustrative, 'notice'));
   lines.push(line(source.messages.view.keysHint, 'note'));
   return slide('title', source, { heading: topic.title, lines });
@@ -100,7 +112,7 @@ function baselineSlide(source: SlideSource): Slide {
   const words = source.messages.callouts;
   const { denominator } = result;
   const callouts: Callout[] = [
-    { look: 'event', value: words.countIn(comparison.groups.event, denominator), text: words.have(comparison.groups.event, outcome.name, result.periodYears) },
+    { look: 'event', value: words.countIn(comparison.groups.event, denominator), text: words.have(comparison.groups.event, outcome.name, periodOf(result)) },
     { look: 'free', value: words.countIn(comparison.groups.free, denominator), text: words.doNot(comparison.groups.free) },
   ];
   const population = result.population.trim().replace(/[.!?]$/, '');
@@ -131,46 +143,65 @@ function withOptionSlide(source: SlideSource): Slide {
 }
 
 /**
- * The people an option changes, beside the comparison: the changed people and those who
- * have the outcome anyway as callouts, or one line when the option changes nobody.
+ * The people an option changes on one outcome, beside the comparison: those drawn in the
+ * helped or harmed look (which group that is follows from whether the event is wanted) and
+ * those who have the outcome anyway, as callouts; or one line when the option changes nobody.
  */
-function changedPeopleSlide(
-  kind: 'helped' | 'harmed',
-  source: SlideSource,
-  arms: OutcomeArms,
-  look: 'prevented' | 'caused',
-  because: (count: number, outcomeName: string, optionName: string) => string,
-  noOne: (denominator: number, outcomeName: string, optionName: string) => string,
-): Slide {
+function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms: OutcomeArms, heading?: string): Slide {
   const { option, outcome } = arms;
   const words = source.messages.callouts;
   const { denominator } = source.item.result;
-  const changed = option.groups[look];
+  const group = changedGroup(kind, outcome.wanted);
+  const changed = option.groups[group];
   const callouts: Callout[] =
     changed > 0
       ? [
-          { look, value: words.countIn(changed, denominator), text: because(changed, outcome.name, option.name) },
+          { look: kind, value: words.countIn(changed, denominator), text: words.changedBecause(group, outcome.wanted, changed, outcome.name, option.name) },
           { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
         ]
       : [];
-  const lines = changed > 0 ? [] : [line(noOne(denominator, outcome.name, option.name))];
-  return slide(kind, source, { layout: 'pair', panels: [comparisonPanel(arms, source), optionPanel(arms, source)], callouts, lines });
+  const lines: SlideLine[] = [];
+  if (changed === 0) {
+    lines.push(line(source.messages.story.noOneChanged(group, outcome.wanted, denominator, outcome.name, option.name)));
+    // The option may change people the other way on this outcome: say so, in their own look.
+    const other = kind === 'helped' ? 'harmed' : 'helped';
+    const otherGroup = changedGroup(other, outcome.wanted);
+    const moved = option.groups[otherGroup];
+    if (moved > 0) {
+      const because = source.messages.callouts.changedBecause(otherGroup, outcome.wanted, moved, outcome.name, option.name);
+      lines.push(line(source.messages.story.instead(words.countIn(moved, denominator), because), 'body', other));
+    }
+  }
+  return slide(kind, source, {
+    layout: 'pair',
+    ...(heading === undefined ? {} : { heading }),
+    panels: [comparisonPanel(arms, source), optionPanel(arms, source)],
+    callouts,
+    lines,
+  });
 }
 
 function helpedSlide(source: SlideSource): Slide {
   const { result, optionId } = source.item;
-  const messages = source.messages;
   const arms = armsOf(benefitOutcome(result), optionId);
-  if (arms === null) return slide('helped', source, { lines: [line(messages.story.noBenefit)] });
-  return changedPeopleSlide('helped', source, arms, 'prevented', messages.callouts.avoidBecause, messages.story.noOneHelped);
+  if (arms === null) return slide('helped', source, { lines: [line(source.messages.story.noBenefit)] });
+  return changedPeopleSlide('helped', source, arms);
+}
+
+/** The harm of one harm slide: the `part`-th harm the item shows. */
+function harmOf(source: SlideSource): OutcomeResult | null {
+  const { result, harmIds } = source.item;
+  const harmId = harmIds[source.part];
+  return result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null;
 }
 
 function harmedSlide(source: SlideSource): Slide {
-  const { result, optionId, harmId } = source.item;
+  const { optionId, harmIds } = source.item;
   const messages = source.messages;
-  const arms = armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId);
+  const arms = armsOf(harmOf(source), optionId);
   if (arms === null) return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
-  return changedPeopleSlide('harmed', source, arms, 'caused', messages.callouts.getBecause, messages.story.noOneHarmed);
+  const heading = messages.story.partOf(messages.stepNames.harmed, source.part + 1, harmIds.length);
+  return changedPeopleSlide('harmed', source, arms, heading);
 }
 
 function uncertaintySlide(source: SlideSource): Slide {
@@ -183,7 +214,7 @@ function uncertaintySlide(source: SlideSource): Slide {
   const interval = option.perPeople.interventionRange;
   const span = interval === null ? null : uncertainRanks(interval, option.groups.event + option.groups.caused);
   const panel = peoplePanel(
-    { id: 'option', title: capitalise(option.name), groups: option.groups, outcome: outcome.name, option: option.name, uncertain: span },
+    { id: 'option', title: capitalise(option.name), groups: option.groups, outcome: outcome.name, option: option.name, wanted: outcome.wanted, uncertain: span },
     messages,
   );
   const range = sentenceOf(wording, outcome.outcomeId, option.optionId, 'range') ?? sentenceOf(wording, outcome.outcomeId, option.optionId, 'range-unknown');
@@ -198,13 +229,38 @@ function uncertaintySlide(source: SlideSource): Slide {
   return slide('uncertainty', source, { layout: 'single', panels: [panel], lines });
 }
 
+/** How many harms one slide of the patient's words holds beside no other outcome, so that it fits a 16:9 screen. */
+const HARMS_PER_WORDS_SLIDE = 3;
+
+/** What one slide of the patient's words tells: the headline outcome or not, and which harms. */
+export interface PatientWordsPart {
+  readonly headline: boolean;
+  readonly harmIds: readonly string[];
+}
+
+/**
+ * The slides of the patient's words: one with the headline outcome and its harm when there is
+ * at most one; otherwise the headline on its own, then the harms, a few to a slide.
+ */
+export function patientWordsParts(item: PresentationItem): readonly PatientWordsPart[] {
+  const headlineId = headlineOutcome(item.result)?.outcomeId ?? null;
+  const harms = item.harmIds.filter((harmId) => harmId !== headlineId);
+  if (harms.length <= 1) return [{ headline: true, harmIds: harms }];
+  const parts: PatientWordsPart[] = [{ headline: true, harmIds: [] }];
+  for (let start = 0; start < harms.length; start += HARMS_PER_WORDS_SLIDE) {
+    parts.push({ headline: false, harmIds: harms.slice(start, start + HARMS_PER_WORDS_SLIDE) });
+  }
+  return parts;
+}
+
 function patientWordsSlide(source: SlideSource): Slide {
-  const { result, optionId, harmId } = source.item;
+  const { item, messages } = source;
+  const { result, optionId } = item;
   const wording = topicWording(result);
   const lines: SlideLine[] = [];
   const about = (arms: OutcomeArms | null, kinds: readonly (readonly [string, SentenceKind, SentenceKind | null])[]) => {
     if (arms === null) return;
-    lines.push(line(source.messages.story.patientTopics(arms.outcome.name), 'subheading'));
+    lines.push(line(messages.story.patientTopics(arms.outcome.name), 'subheading'));
     for (const [armId, kind, joined] of kinds) {
       const first = sentenceOf(wording, arms.outcome.outcomeId, armId, kind);
       const second = joined === null ? null : sentenceOf(wording, arms.outcome.outcomeId, armId, joined);
@@ -212,8 +268,10 @@ function patientWordsSlide(source: SlideSource): Slide {
       if (text !== '') lines.push(line(text));
     }
   };
+  const parts = patientWordsParts(item);
+  const part = parts[source.part] ?? { headline: true, harmIds: [] };
   const headline = armsOf(headlineOutcome(result), optionId);
-  if (headline !== null) {
+  if (part.headline && headline !== null) {
     about(headline, [
       [headline.comparison.optionId, 'event-frame', 'free-frame'],
       [optionId, 'event-frame', 'free-frame'],
@@ -221,12 +279,14 @@ function patientWordsSlide(source: SlideSource): Slide {
       [optionId, 'certainty', null],
     ]);
   }
-  const harm = harmId === headline?.outcome.outcomeId ? null : armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId);
-  about(harm, [
-    [optionId, 'change', null],
-    [optionId, 'certainty', null],
-  ]);
-  return slide('patient-words', source, { lines });
+  for (const harmId of part.harmIds) {
+    about(armsOf(result.outcomes.find((outcome) => outcome.outcomeId === harmId) ?? null, optionId), [
+      [optionId, 'change', null],
+      [optionId, 'certainty', null],
+    ]);
+  }
+  const heading = messages.story.partOf(messages.stepNames['patient-words'], source.part + 1, parts.length);
+  return slide('patient-words', source, { heading, lines });
 }
 
 /** The story slides, by step. */

@@ -4,7 +4,7 @@
  * sequence, so stepping forward from a topic's last step goes to the next topic's
  * first. The topics are copies: presenting never changes the editor's topic.
  */
-import { buildSlide } from './build-slide.ts';
+import { buildSlide, slideCount } from './build-slide.ts';
 import { teachingMessagesEn } from './messages/en.ts';
 import type { TeachingMessages } from './messages/en.ts';
 import type { PresentationItem } from './presentation-item.ts';
@@ -13,16 +13,20 @@ import type { TeachingAction } from './teaching-keys.ts';
 import { writeTeachingSet } from './teaching-set-file.ts';
 import type { StepKind } from './teaching-steps.ts';
 
-/** One place in the sequence: which topic, which of its steps, and the step's kind. */
+/** One place in the sequence: which topic, which of its steps, the step's kind, and which of the step's slides. */
 export interface SlidePlace {
   readonly item: number;
   readonly step: number;
   readonly kind: StepKind;
+  /** From 0; above 0 only on a step with several slides (one per harm). */
+  readonly part: number;
 }
 
 /** Every slide of every item, in order. */
 export function slidePlaces(items: readonly PresentationItem[]): SlidePlace[] {
-  return items.flatMap((item, itemIndex) => item.steps.map((kind, step) => ({ item: itemIndex, step, kind })));
+  return items.flatMap((item, itemIndex) =>
+    item.steps.flatMap((kind, step) => Array.from({ length: slideCount(item, kind) }, (_, part) => ({ item: itemIndex, step, kind, part }))),
+  );
 }
 
 export class TeachingSession {
@@ -38,7 +42,7 @@ export class TeachingSession {
   readonly places = $derived(slidePlaces(this.items));
   readonly place = $derived<SlidePlace | null>(this.places[this.index] ?? null);
   readonly item = $derived<PresentationItem | null>(this.place === null ? null : (this.items[this.place.item] ?? null));
-  readonly slide = $derived<Slide | null>(this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages));
+  readonly slide = $derived<Slide | null>(this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages, this.place.part));
 
   constructor(title: string, items: readonly PresentationItem[], messages: TeachingMessages = teachingMessagesEn) {
     this.messages = messages;

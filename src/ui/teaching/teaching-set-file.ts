@@ -26,7 +26,7 @@ export type TopicSource =
 export interface ItemChoices {
   /** The option shown against the comparison; null: the first option that is not the comparison. */
   readonly option: string | null;
-  /** The harm outcome of the "who is harmed" step; null: chosen from the result. */
+  /** The one harm outcome of the "who is harmed" step; null: every harm of the topic, a slide each. */
   readonly harm: string | null;
   /** 100 or 1000 people; null lets the core choose. */
   readonly per: Denominator | null;

@@ -16,8 +16,9 @@
  *     ]
  *   }
  *
- * `option` (the option shown against the comparison), `harm` (the harm outcome of the
- * "who is harmed" step), `per` (100 or 1000 people; null lets the core choose) and
+ * `option` (the option shown against the comparison), `harm` (the one harm outcome of the
+ * "who is harmed" step; left out, every harm is shown, a slide each), `per` (100 or 1000
+ * people; null lets the core choose) and
  * `steps` (default: every step, in order) may be left out.
  */
 import * as v from 'valibot';

@@ -237,4 +237,10 @@ describe('validateTopic with trial counts', () => {
     expect(trialBaseline({ comparison: { events: 5, total: 0 } })).toBeNull();
     expect(trialBaseline({ comparison: { events: 11, total: 10 } })).toBeNull();
   });
+
+  it('reads the trial baseline of counts of the opposite event as the others in the comparison arm', () => {
+    // 60 of 100 still in pain without the option: 40 of 100 are pain-free (plain arithmetic).
+    expect(trialBaseline({ comparison: { events: 60, total: 100 }, opposite: true })).toBe(0.4);
+    expect(trialBaseline({ comparison: { events: 60, total: 100 }, opposite: false })).toBe(0.6);
+  });
 });

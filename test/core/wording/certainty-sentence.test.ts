@@ -33,12 +33,17 @@ describe('certaintySentence', () => {
     expect(sentenceOf(result, 'certainty')?.text).toBe(text);
   });
 
-  it('uses the little-or-no-difference statement when the drawn counts show no change, whatever the importance', () => {
-    // So the statement never contradicts the picture and the "makes little or no difference" sentence.
-    const result = strokeTopic({ intervention: 15, interventionRisk: 0.147, certainty: 'moderate', importance: 'important' });
+  it('uses the little-or-no-difference statement when the difference is exactly 0, whatever the importance', () => {
+    const result = strokeTopic({ intervention: 15, interventionRisk: 0.15, certainty: 'moderate', importance: 'important' });
     expect(sentenceOf(result, 'certainty')?.text).toBe(
       'The tablet probably results in little or no difference to the chance of a stroke.',
     );
+  });
+
+  it('follows the exact difference when rounding hides it, so a small real effect is not called no difference', () => {
+    // Santesso et al. 2020: "little or no difference" is for a trivial effect, which the clinician judges, not rounding.
+    const result = strokeTopic({ intervention: 15, interventionRisk: 0.147, certainty: 'moderate', importance: 'important' });
+    expect(sentenceOf(result, 'certainty')?.text).toBe('The tablet probably reduces the chance of a stroke.');
   });
 
   it('writes no statement when the result has no certainty, and none for the comparison', () => {

@@ -38,11 +38,22 @@ describe('changeSentence', () => {
     expect(sentenceOf(result, 'change')?.text).not.toMatch(/-\d|−\d/);
   });
 
-  it('says the option makes little or no difference when the rounded counts are equal', () => {
-    const result = topicFixture([{ comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.148 }] }]);
+  // "No difference" is said only when the difference is exactly 0 (common practice: rounding
+  // must not turn a small difference into none); otherwise the sentence says it is below one person.
+  it('says the option makes little or no difference only when the difference is exactly 0', () => {
+    const result = topicFixture([{ comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.15 }] }]);
     const found = sentenceOf(result, 'change');
     expect(found?.text).toBe('The tablet makes little or no difference to how many people have a stroke: about 15 in 100 either way.');
     expect(found?.numbers).toEqual({ count: 15, denominator: 100 });
+  });
+
+  it('says a difference that rounding hides is smaller than one person, in its direction', () => {
+    const result = topicFixture([{ comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.148 }] }]);
+    const found = sentenceOf(result, 'change');
+    expect(found?.text).toBe(
+      'With the tablet, slightly fewer people have a stroke, but the difference is smaller than 1 in 100 people: about 15 in 100 either way.',
+    );
+    expect(found?.numbers).toEqual({ count: 15, denominator: 100, lessThan: 1 });
   });
 
   it('says "fewer than 1 in 1000 either way" when both counts are 0 but the risks are not', () => {
@@ -51,7 +62,7 @@ describe('changeSentence', () => {
       { denominator: 1000 },
     );
     expect(sentenceOf(result, 'change')?.text).toBe(
-      'The tablet makes little or no difference to how many people have a stroke: fewer than 1 in 1000 either way.',
+      'With the tablet, slightly fewer people have a stroke, but the difference is smaller than 1 in 1000 people: fewer than 1 in 1000 either way.',
     );
   });
 

@@ -11,7 +11,11 @@ import {
   removeOutcome,
   setComparison,
   setEffectField,
+  setBaselineUnit,
   setHeadline,
+  setOutcomeWanted,
+  setPeriodUnit,
+  setTopicText,
 } from '../../../src/ui/draft/draft-edits.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
@@ -77,5 +81,37 @@ describe('draft edits', () => {
     let draft = blankDraft();
     for (let count = 0; count < TOPIC_LIMITS.maxQuestions + 2; count += 1) draft = addQuestion(draft);
     expect(draft.questions).toHaveLength(TOPIC_LIMITS.maxQuestions);
+  });
+
+  test('a unit changes only the unit: the amount typed stays, for the topic and for one baseline', () => {
+    const days = setPeriodUnit(setTopicText(demo, 'periodYears', '3'), 'days');
+    expect([days.periodYears, days.periodUnit]).toEqual(['3', 'days']);
+    const outcomeId = demo.outcomes[1]!.id;
+    const weeks = setBaselineUnit(days, outcomeId, 'weeks');
+    expect(weeks.outcomes[1]?.baselinePeriodUnit).toBe('weeks');
+    expect(weeks.outcomes[1]?.baselinePeriodYears).toBe(demo.outcomes[1]?.baselinePeriodYears);
+    expect(weeks.outcomes[0]?.baselinePeriodUnit).toBe('years');
+  });
+
+  test('a new outcome is an event to avoid, over the topic’s period in its unit', () => {
+    const days = setPeriodUnit(setTopicText(demo, 'periodYears', '3'), 'days');
+    const added = addOutcome(days, 'harm');
+    const outcome = added.draft.outcomes.find((found) => found.id === added.outcomeId);
+    expect(outcome).toMatchObject({ wanted: false, baselinePeriodYears: '3', baselinePeriodUnit: 'days' });
+  });
+
+  test('setOutcomeWanted marks one outcome’s event as wanted and back, leaving the others', () => {
+    const outcomeId = demo.outcomes[0]!.id;
+    const wanted = setOutcomeWanted(demo, outcomeId, true);
+    expect(wanted.outcomes.map((outcome) => outcome.wanted)).toEqual([true, false, false]);
+    expect(setOutcomeWanted(wanted, outcomeId, false).outcomes.map((outcome) => outcome.wanted)).toEqual([false, false, false]);
+  });
+
+  test('an effect can be marked as given for the opposite event and its follow-up given in months', () => {
+    const outcomeId = demo.outcomes[0]!.id;
+    const optionId = demo.outcomes[0]!.effects[0]!.optionId;
+    const edited = setEffectField(setEffectField(demo, outcomeId, optionId, 'opposite', true), outcomeId, optionId, 'followUpUnit', 'months');
+    expect(edited.outcomes[0]?.effects[0]).toMatchObject({ opposite: true, followUpUnit: 'months' });
+    expect(edited.outcomes[0]?.effects[1]).toMatchObject({ opposite: false, followUpUnit: 'years' });
   });
 });

@@ -64,4 +64,31 @@ describe('key numbers', () => {
     expect(table?.rows[1]?.nnt?.value).toBe('NNTB 42');
     expect(table?.rows[1]?.risk.value).toBe('27.6%');
   });
+
+  test('gives a wanted event made more likely as more people, with NNTB at both ends of its range', () => {
+    // 40% × 1.25 = 50% (1.1 to 1.4: 44% to 56%): 10 more in 100 (4 to 16 more); NNT = 1/ARR (Altman 1998),
+    // 1/0.10 = 10 and 1/0.16 to 1/0.04 = 6.25 to 25, an NNTB rounded up: 7 to 25. A gain of a wanted event helps.
+    const outcome = topic.outcomes[0]!;
+    const wanted: Topic = {
+      ...topic,
+      outcomes: [
+        {
+          ...outcome,
+          name: 'a pain-free throat',
+          wanted: true,
+          baseline: { ...outcome.baseline, risk: '40%' },
+          effects: [{ ...outcome.effects[0]!, effect: { measure: 'rr', estimate: 1.25, lower: 1.1, upper: 1.4 } }],
+        },
+      ],
+    };
+    const [table] = keyNumberTables(computeTopic(wanted, { per: 100 }));
+    expect(table?.wanted).toBe(true);
+    expect(table?.rows[1]?.people).toEqual({ value: '50', range: '44 to 56' });
+    expect(table?.rows[1]?.change).toEqual({ value: '10 more', range: '4 to 16 more' });
+    expect(table?.rows[1]?.nnt).toEqual({ value: 'NNTB 10', range: 'NNTB 7 to 25' });
+  });
+
+  test('marks an event to avoid as not wanted', () => {
+    expect(keyNumberTables(computeTopic(topic, { per: 1000 }))[0]?.wanted).toBe(false);
+  });
 });

@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { colourPalette } from '../../../src/render/palette.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { drawSlidePeople, drawSwatch } from '../../../src/ui/teaching/draw-slide-people.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
+import { HEART, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
 
 // One figure per person, the whole denominator drawn (Ancker et al. 2006); the changed groups
 // carry a pattern as well as a colour, so colour is never the only cue (WCAG 2.2, 1.4.1).
@@ -31,7 +32,7 @@ describe('drawing a slide’s people', () => {
   it('draws one path per person, each with its look, in a square view box for 100', () => {
     const { svg } = drawn(HEART, 'helped', 1);
     expect(svg.querySelectorAll('path.person')).toHaveLength(100);
-    expect(lookCounts(svg)).toEqual({ event: 11, prevented: 4, free: 85 });
+    expect(lookCounts(svg)).toEqual({ event: 11, helped: 4, free: 85 });
     const [, , width, height] = (svg.getAttribute('viewBox') ?? '').split(' ').map(Number);
     expect(width).toBeCloseTo(102.5, 6);
     expect(height).toBeCloseTo(102.5, 6);
@@ -39,12 +40,39 @@ describe('drawing a slide’s people', () => {
 
   it('fills helped people with the dot pattern and harmed people with the hatch, both defined in the drawing', () => {
     const helped = drawn(HEART, 'helped', 1).svg;
-    const dots = helped.querySelector('path[data-look="prevented"]')?.getAttribute('fill') ?? '';
+    const dots = helped.querySelector('path[data-look="helped"]')?.getAttribute('fill') ?? '';
     expect(dots).toMatch(/^url\(#test-helped-dots\)$/);
     expect(helped.querySelector('pattern#test-helped-dots')).not.toBeNull();
     const harmed = drawn(HEART, 'harmed', 1).svg;
-    expect(harmed.querySelector('path[data-look="caused"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
+    expect(harmed.querySelector('path[data-look="harmed"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
     expect(harmed.querySelector('path[data-look="event"]')?.getAttribute('fill')).toBe(colourPalette.groups.event.fill);
+  });
+
+  it('draws the people who gain a wanted event with the helped dots and those who miss out with the harm hatch, keeping their groups', () => {
+    const item = itemOf(fixtureTopic(WANTED));
+    const helped = buildSlide(item, 'helped').panels[1];
+    const missed = buildSlide(item, 'harmed', teachingMessagesEn, 1).panels[1];
+    if (helped === undefined || missed === undefined) throw new Error('no panel');
+    const svg = document.createElementNS(SVG, 'svg');
+    drawSlidePeople(svg, helped.layout, helped.looks, 'gain');
+    const gained = [...svg.querySelectorAll('path[data-look="helped"]')];
+    expect(gained).toHaveLength(18);
+    for (const path of gained) {
+      expect(path.getAttribute('data-outcome')).toBe('caused');
+      expect(path.getAttribute('fill')).toBe('url(#gain-dots)');
+    }
+    drawSlidePeople(svg, missed.layout, missed.looks, 'miss');
+    const lost = [...svg.querySelectorAll('path[data-look="harmed"]')];
+    expect(lost).toHaveLength(10);
+    for (const path of lost) {
+      expect(path.getAttribute('data-outcome')).toBe('prevented');
+      expect(path.getAttribute('fill')).toBe('url(#miss-hatch)');
+    }
+  });
+
+  it('refuses looks that do not match the people', () => {
+    const { panel } = drawn(HEART, 'helped', 1);
+    expect(() => drawSlidePeople(document.createElementNS(SVG, 'svg'), panel.layout, panel.looks.slice(1), 'short')).toThrow(/100 people but 99 looks/);
   });
 
   it('draws uncertain people with a dashed outline and no fill colour of their group', () => {
@@ -66,7 +94,7 @@ describe('drawing a slide’s people', () => {
 
   it('draws a legend figure of one look in a unit box', () => {
     const svg = document.createElementNS(SVG, 'svg');
-    drawSwatch(svg, 'caused', 'swatch-test');
+    drawSwatch(svg, 'harmed', 'swatch-test');
     expect(svg.getAttribute('viewBox')).toBe('0 0 10 10');
     const figures = svg.querySelectorAll(':scope > path');
     expect(figures).toHaveLength(1);

@@ -21,7 +21,7 @@ describe('the framing step', () => {
     const found = cards(pairTopic({ baseline: '30%', effect: { measure: 'rr', estimate: 0.92 } }), 1000);
     expect(found.relative?.value).toBe('8% lower risk');
     expect(found.absolute?.value).toBe('24 in 1000 fewer');
-    expect(found.absolute?.detail).toBe('300 − 276 = 24 in 1000');
+    expect(found.absolute?.detail).toBe('300 − 276 = 24 fewer in 1000');
     expect(found.nnt?.value).toBe('Treat 42 to prevent 1');
     expect(found.nnt?.detail).toBe('1000 ÷ 24 = 41.67, rounded up: 42');
   });
@@ -42,6 +42,10 @@ describe('the framing step', () => {
     expect(found.absolute?.value).toBe('1 in 100 more');
     expect(found.nnt?.label).toBe('NNTH');
     expect(found.nnt?.value).toBe('Treat 100 to cause 1');
+    // Larger count first, so the subtraction reads the way the change goes: 3 − 2, not 2 − 3.
+    expect(found.absolute?.detail).toBe('3 − 2 = 1 more in 100');
+    // An NNTH is rounded down (it is whole here: 100 ÷ 1).
+    expect(found.nnt?.detail).toBe('100 ÷ 1 = 100, rounded down: 100');
   });
 
   it('says there is no difference rather than an NNT when the ratio is 1', () => {
@@ -57,7 +61,7 @@ describe('the framing step', () => {
     const wording = topicWording(result);
     for (const outcome of result.outcomes) {
       for (const option of outcome.options.filter((entry) => !entry.isComparison)) {
-        const numbers = framingNumbers(option, result.denominator);
+        const numbers = framingNumbers(option, result.denominator, outcome.wanted);
         const relative = wording.outcomes
           .find((entry) => entry.outcomeId === outcome.outcomeId)
           ?.options.find((entry) => entry.optionId === option.optionId)
@@ -78,7 +82,7 @@ describe('the framing step', () => {
     expect(slide.panels.map((panel) => panel.chips.map((chip) => [chip.look, chip.count]))).toEqual([
       [
         ['event', 11],
-        ['prevented', 4],
+        ['helped', 4],
         ['free', 85],
       ],
     ]);

@@ -3,8 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
 import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
 import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
-import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
+import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
+import { HEART, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
 
 // A slide for slide decks: 16:9 at 1920 × 1080 (ITU-R BT.709 full HD frame), standalone SVG 1.1
 // text with its XML declaration (W3C SVG 1.1, §1.3), every person of every array drawn.
@@ -14,10 +15,14 @@ function parsed(text: string): Document {
 }
 
 describe('a slide as an SVG file', () => {
-  it.each([HEART, SCREENING])('writes every step of %s as a full-HD standalone SVG with all its people', (name) => {
-    const item = itemOf(demoTopic(name));
-    for (const kind of DEFAULT_STEPS) {
-      const slide = buildSlide(item, kind);
+  it.each([
+    [HEART, demoTopic],
+    [SCREENING, demoTopic],
+    [WANTED, fixtureTopic],
+  ])('writes every slide of %s as a full-HD standalone SVG with all its people', (name, topicOf) => {
+    const item = itemOf(topicOf(name));
+    for (const { kind, part } of slidePlaces([item])) {
+      const slide = buildSlide(item, kind, teachingMessagesEn, part);
       const text = slideSvgText(slide, document, 'Slide 1 of 11', 'Illustrative');
       expect(text.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg')).toBe(true);
       const doc = parsed(text);
@@ -30,7 +35,7 @@ describe('a slide as an SVG file', () => {
       const words = doc.documentElement.textContent ?? '';
       expect(words).toContain(slide.heading.split(' ')[0] ?? '');
       // Everything of the slide stays above the footer rule.
-      expect(Number(root.getAttribute('data-content-bottom')), `${name} ${kind}`).toBeLessThanOrEqual(FOOTER_TOP);
+      expect(Number(root.getAttribute('data-content-bottom')), `${name} ${kind} ${part}`).toBeLessThanOrEqual(FOOTER_TOP);
       expect(words.includes('Illustrative')).toBe(slide.illustrative);
     }
   });

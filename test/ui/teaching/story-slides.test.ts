@@ -2,8 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { computeTopic, evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
 import { handoutSentences } from '../../../src/core/wording/topic-wording.ts';
 import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
+import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
 import { totalsOnly } from '../../../src/ui/teaching/people-panel.ts';
 import type { PeoplePanel, PersonLook } from '../../../src/ui/teaching/slide-model.ts';
+import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
 import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // Icon arrays show the whole denominator (Ancker et al. 2006), the same grouped layout for each
@@ -66,19 +68,19 @@ describe('the story slides of the heart topic (illustrative)', () => {
   it('sets the people helped apart on the headline outcome, in the places the comparison’s events held', () => {
     const slide = buildSlide(item, 'helped');
     const [comparison, option] = slide.panels;
-    expect(counts(option)).toEqual({ event: 11, prevented: 4, free: 85 });
+    expect(counts(option)).toEqual({ event: 11, helped: 4, free: 85 });
     // Grouped fill: the 4 helped sit right after the 11 who have it anyway, where the comparison's 12th to 15th were.
     const helpedRanks = option?.layout.people.filter((person) => person.group === 'prevented').map((person) => person.rank);
     expect(helpedRanks).toEqual([11, 12, 13, 14]);
     expect(comparison?.layout.people.filter((person) => person.rank >= 11 && person.rank < 15).every((person) => person.group === 'event')).toBe(true);
-    expect(slide.callouts[0]).toEqual({ look: 'prevented', value: '4 in 100', text: 'avoid a heart attack or stroke because of the standard dose' });
+    expect(slide.callouts[0]).toEqual({ look: 'helped', value: '4 in 100', text: 'avoid a heart attack or stroke because of the standard dose' });
   });
 
   it('shows who is harmed on a harm outcome, the first the option adds people to', () => {
     const slide = buildSlide(item, 'harmed');
-    expect(item.harmId).toBe('muscle');
-    expect(counts(slide.panels[1])).toEqual({ event: 5, caused: 1, free: 94 });
-    expect(slide.callouts[0]).toEqual({ look: 'caused', value: '1 in 100', text: 'gets muscle pain bad enough to stop the tablet because of the standard dose' });
+    expect(item.harmIds).toEqual(['muscle', 'diabetes']);
+    expect(counts(slide.panels[1])).toEqual({ event: 5, harmed: 1, free: 94 });
+    expect(slide.callouts[0]).toEqual({ look: 'harmed', value: '1 in 100', text: 'gets muscle pain bad enough to stop the tablet because of the standard dose' });
   });
 
   it('outlines the people whose group depends on the range, and gives the range and the certainty in words', () => {
@@ -96,21 +98,44 @@ describe('the story slides of the heart topic (illustrative)', () => {
     ]);
   });
 
-  it('gives the patient’s sentences exactly as the handout words them', () => {
-    const slide = buildSlide(item, 'patient-words');
+  it('gives the patient’s sentences exactly as the handout words them: the headline, then every harm', () => {
+    const slides = [buildSlide(item, 'patient-words', teachingMessagesEn, 0), buildSlide(item, 'patient-words', teachingMessagesEn, 1)];
     const handout = new Set(handoutSentences(result, { showNnt: false }).map((sentence) => sentence.text));
-    const spoken = slide.lines.filter((line) => line.tone === 'body').flatMap((line) => line.text.split(/(?<=\.) (?=[A-Z])/));
-    expect(spoken.length).toBeGreaterThan(5);
+    const spoken = slides.flatMap((found) => found.lines.filter((line) => line.tone === 'body').flatMap((line) => line.text.split(/(?<=\.) (?=[A-Z])/)));
+    expect(spoken.length).toBeGreaterThan(7);
     for (const sentence of spoken) expect(handout.has(sentence)).toBe(true);
+    expect(slides.map((found) => [found.heading, found.lines.filter((line) => line.tone === 'subheading').map((line) => line.text)])).toEqual([
+      ['What the patient hears (1 of 2)', ['About a heart attack or stroke']],
+      ['What the patient hears (2 of 2)', ['About muscle pain bad enough to stop the tablet', 'About type 2 diabetes']],
+    ]);
+  });
+
+  it('keeps the patient’s words on one slide when a set shows one harm', () => {
+    const slide = buildSlide(itemOf(topic, { harm: 'muscle' }), 'patient-words');
+    expect(slide.heading).toBe('What the patient hears');
     expect(slide.lines.filter((line) => line.tone === 'subheading').map((line) => line.text)).toEqual([
       'About a heart attack or stroke',
       'About muscle pain bad enough to stop the tablet',
     ]);
   });
 
+  it('shows every harm on a slide of its own, each with its own people', () => {
+    const slides = slidePlaces([item]).filter((place) => place.kind === 'harmed').map((place) => buildSlide(item, 'harmed', teachingMessagesEn, place.part));
+    expect(slides.map((found) => found.heading)).toEqual(['Who is harmed (1 of 2)', 'Who is harmed (2 of 2)']);
+    expect(slides.map((found) => counts(found.panels[1]))).toEqual([
+      { event: 5, harmed: 1, free: 94 },
+      // Type 2 diabetes: 8 in 100 without, 8 × 1.1 = 8.8, so 9 in 100 with the standard dose.
+      { event: 8, harmed: 1, free: 91 },
+    ]);
+    expect(slides[1]?.callouts.map((callout) => `${callout.value} ${callout.text}`)).toEqual([
+      '1 in 100 gets type 2 diabetes because of the standard dose',
+      '8 in 100 have it anyway',
+    ]);
+  });
+
   it('never shows a number the core did not compute: every array holds the whole denominator', () => {
-    for (const kind of item.steps) {
-      for (const panel of buildSlide(item, kind).panels) {
+    for (const { kind, part } of slidePlaces([item])) {
+      for (const panel of buildSlide(item, kind, teachingMessagesEn, part).panels) {
         const total = panel.chips.reduce((sum, chip) => sum + chip.count, 0);
         expect(total).toBe(panel.layout.denominator);
         expect(panel.looks).toHaveLength(panel.layout.denominator);
@@ -122,7 +147,7 @@ describe('the story slides of the heart topic (illustrative)', () => {
 describe('story slides of other topics', () => {
   it('says so on the harm step when a topic lists no harm', () => {
     const item = itemOf(pairTopic({ baseline: '20%', effect: { measure: 'rr', estimate: 0.8 } }));
-    expect(item.harmId).toBeNull();
+    expect(item.harmIds).toEqual([]);
     const slide = buildSlide(item, 'harmed');
     expect(slide.panels).toEqual([]);
     expect(slide.lines.map((line) => line.text)).toEqual([
@@ -141,7 +166,7 @@ describe('story slides of other topics', () => {
   it('counts per 1000 for the screening topic, as the core chose', () => {
     const item = itemOf(demoTopic(SCREENING));
     const slide = buildSlide(item, 'helped');
-    expect(counts(slide.panels[1])).toEqual({ event: 24, prevented: 6, free: 970 });
+    expect(counts(slide.panels[1])).toEqual({ event: 24, helped: 6, free: 970 });
     expect(slide.callouts[0]?.text).toBe('avoid dying of bowel cancer because of screening');
     expect(buildSlide(item, 'baseline').callouts[0]?.text).toBe('end up dying of bowel cancer over 15 years');
   });
@@ -150,7 +175,7 @@ describe('story slides of other topics', () => {
     const item = itemOf(demoTopic(HEART), { option: 'higher' });
     const slide = buildSlide(item, 'helped');
     expect(slide.panels[1]?.title).toBe('The higher dose');
-    expect(counts(slide.panels[1])).toEqual({ event: 10, prevented: 5, free: 85 });
+    expect(counts(slide.panels[1])).toEqual({ event: 10, helped: 5, free: 85 });
     const evaluation = evaluateTopic(demoTopic(HEART));
     if (!evaluation.ok) throw new Error('heart topic did not compute');
     expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({ denominator: 100, event: 10, prevented: 5, caused: 0, free: 85 });

@@ -22,27 +22,30 @@ function press(session: TeachingSession, key: KeyPress): boolean {
 }
 
 describe('TeachingSession', () => {
-  it('starts on the first slide, the decision, and shows every step in the teaching order', () => {
+  it('starts on the first slide, the decision, and shows every step in the teaching order, every harm on its own slide', () => {
     const session = heartSession();
     expect(session.index).toBe(0);
     expect(session.slide?.kind).toBe('title');
-    const kinds: string[] = [];
-    do kinds.push(session.slide?.kind ?? '');
+    const shown: string[] = [];
+    do shown.push(`${session.slide?.kind ?? ''}: ${session.slide?.heading ?? ''}`);
     while (session.next());
-    expect(kinds).toEqual([
-      'title',
-      'baseline',
-      'with-option',
-      'helped',
-      'harmed',
-      'uncertainty',
-      'patient-words',
-      'framing',
-      'denominator',
-      'arrangement',
-      'incremental',
+    expect(shown).toEqual([
+      `title: ${demoTopic(HEART).title}`,
+      'baseline: Without the option',
+      'with-option: With the option',
+      'helped: Who is helped',
+      'harmed: Who is harmed (1 of 2)',
+      'harmed: Who is harmed (2 of 2)',
+      'uncertainty: How sure are we?',
+      'patient-words: What the patient hears (1 of 2)',
+      'patient-words: What the patient hears (2 of 2)',
+      'framing: One result, four ways',
+      'denominator: 100 or 1000 people?',
+      'arrangement: Grouped or scattered?',
+      'incremental: Two totals, or the change itself?',
     ]);
-    expect(session.total).toBe(DEFAULT_STEPS.length);
+    // The heart topic has two harms: one more harm slide, and its harms' words on a slide of their own.
+    expect(session.total).toBe(DEFAULT_STEPS.length + 2);
   });
 
   it('stays on the last slide going forward and on the first going back', () => {
@@ -103,6 +106,7 @@ describe('TeachingSession', () => {
       [0, 'title'],
       [0, 'helped'],
       [1, 'title'],
+      [1, 'harmed'],
       [1, 'harmed'],
       [1, 'framing'],
     ]);

@@ -42,9 +42,9 @@ describe('reading a teaching set', () => {
     expect(set.items[1]?.steps).toEqual(['title', 'baseline', 'with-option', 'helped', 'harmed', 'framing', 'denominator']);
     const resolved = await resolveTeachingSet('example', set, null);
     if (!resolved.ok) throw new Error(resolved.message);
-    expect(resolved.items.map((item) => [item.topic.title, item.optionId, item.harmId])).toEqual([
-      [demoTopic(HEART).title, 'standard', 'muscle'],
-      [demoTopic(SCREENING).title, 'screening', 'camera'],
+    expect(resolved.items.map((item) => [item.topic.title, item.optionId, item.harmIds])).toEqual([
+      [demoTopic(HEART).title, 'standard', ['muscle']],
+      [demoTopic(SCREENING).title, 'screening', ['camera']],
     ]);
   });
 

@@ -6,7 +6,7 @@
 import type { TimeUnit } from '../../time-unit.ts';
 import { amountIn } from '../../time-unit.ts';
 import type { Amount, FrequencyBand, PeriodValues, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
-import { formatDecimal } from '../format-number.ts';
+import { formatCount, formatDecimal } from '../format-number.ts';
 
 /** English plural rule: the `one` form for exactly 1, the `other` form otherwise. */
 export function plural(count: number, one: string, other: string): string {
@@ -60,15 +60,15 @@ export const duration = ({ years, unit }: PeriodValues): string => {
 const amountPhrase = (amount: Amount, denominator: number): string => {
   switch (amount.kind) {
     case 'none':
-      return `none of ${denominator}`;
+      return `none of ${formatCount(denominator)}`;
     case 'fewer-than-one':
-      return `fewer than 1 in ${denominator}`;
+      return denominator === 1000000 ? 'fewer than 1 in a million' : `fewer than 1 in ${formatCount(denominator)}`;
     case 'about':
-      return `about ${amount.count} in ${denominator}`;
+      return `about ${formatCount(amount.count)} in ${formatCount(denominator)}`;
     case 'nearly-all':
-      return `nearly all ${denominator}`;
+      return `nearly all ${formatCount(denominator)}`;
     case 'all':
-      return `all ${denominator}`;
+      return `all ${formatCount(denominator)}`;
   }
 };
 
@@ -77,13 +77,13 @@ const freeFrame = (amount: Amount, denominator: number): string => {
     case 'none':
       return 'None of them will stay free of it.';
     case 'fewer-than-one':
-      return `Fewer than 1 in ${denominator} will not.`;
+      return `Fewer than 1 in ${formatCount(denominator)} will not.`;
     case 'about':
-      return `About ${amount.count} will not.`;
+      return `About ${formatCount(amount.count)} will not.`;
     case 'nearly-all':
-      return `Nearly all ${denominator} will not.`;
+      return `Nearly all ${formatCount(denominator)} will not.`;
     case 'all':
-      return `All ${denominator} will stay free of it.`;
+      return `All ${formatCount(denominator)} will stay free of it.`;
   }
 };
 
@@ -103,15 +103,16 @@ const bandNames: Record<FrequencyBand, string> = {
 const wantedRange = (found: RangeCase, option: string, outcome: string, denominator: number): string => {
   switch (found.variant) {
     case 'avoid':
-      return `With ${option}, the number who miss out on ${outcome} because of it could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+      return `With ${option}, the number who miss out on ${outcome} because of it could be anywhere between ${formatCount(found.low)} and ${formatCount(found.high)} in ${formatCount(denominator)}.`;
     case 'get':
-      return `With ${option}, the number of extra people who ${haveVerb(outcome)} ${outcome} could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+      return `With ${option}, the number of extra people who ${haveVerb(outcome)} ${outcome} could be anywhere between ${formatCount(found.low)} and ${formatCount(found.high)} in ${formatCount(denominator)}.`;
     case 'narrow':
       return found.direction === 'fewer'
-        ? `With ${option}, the research puts the number who miss out on ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`
-        : `With ${option}, the research puts the number of extra people who ${haveVerb(outcome)} ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`;
+        ? `With ${option}, the research puts the number who miss out on ${outcome} at about ${formatCount(found.count)} in ${formatCount(denominator)}, with little uncertainty.`
+        : `With ${option}, the research puts the number of extra people who ${haveVerb(outcome)} ${outcome} at about ${formatCount(found.count)} in ${formatCount(denominator)}, with little uncertainty.`;
     case 'either':
     case 'no-change':
+    case 'below-one':
       return range(found, option, outcome, denominator);
   }
 };
@@ -119,17 +120,19 @@ const wantedRange = (found: RangeCase, option: string, outcome: string, denomina
 const range = (found: RangeCase, option: string, outcome: string, denominator: number): string => {
   switch (found.variant) {
     case 'avoid':
-      return `With ${option}, the number who avoid ${outcome} could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+      return `With ${option}, the number who avoid ${outcome} could be anywhere between ${formatCount(found.low)} and ${formatCount(found.high)} in ${formatCount(denominator)}.`;
     case 'get':
-      return `With ${option}, the number who ${getVerb(outcome, 2)} ${outcome} because of it could be anywhere between ${found.low} and ${found.high} in ${denominator}.`;
+      return `With ${option}, the number who ${getVerb(outcome, 2)} ${outcome} because of it could be anywhere between ${formatCount(found.low)} and ${formatCount(found.high)} in ${formatCount(denominator)}.`;
     case 'narrow':
       return found.direction === 'fewer'
-        ? `With ${option}, the research puts the number who avoid ${outcome} at about ${found.count} in ${denominator}, with little uncertainty.`
-        : `With ${option}, the research puts the number who ${getVerb(outcome, 2)} ${outcome} because of it at about ${found.count} in ${denominator}, with little uncertainty.`;
+        ? `With ${option}, the research puts the number who avoid ${outcome} at about ${formatCount(found.count)} in ${formatCount(denominator)}, with little uncertainty.`
+        : `With ${option}, the research puts the number who ${getVerb(outcome, 2)} ${outcome} because of it at about ${formatCount(found.count)} in ${formatCount(denominator)}, with little uncertainty.`;
     case 'either':
-      return `With ${option}, anything from ${found.fewer} fewer to ${found.more} more people in ${denominator} could ${haveVerb(outcome)} ${outcome}.`;
+      return `With ${option}, anything from ${formatCount(found.fewer)} fewer to ${formatCount(found.more)} more people in ${formatCount(denominator)} could ${haveVerb(outcome)} ${outcome}.`;
     case 'no-change':
       return `With ${option}, the research points to little or no change in how many people ${haveVerb(outcome)} ${outcome}.`;
+    case 'below-one':
+      return `With ${option}, the research puts the whole range of the change at fewer than 1 in ${denominator === 1000000 ? 'a million' : formatCount(denominator)} people.`;
   }
 };
 
@@ -154,15 +157,19 @@ export const wordingMessages: WordingMessages = {
   eventFrame: ({ option, outcome, amount, denominator, group, years, unit }) =>
     `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome} ${within({ years, unit })}.`,
   freeFrame: ({ amount, denominator }) => freeFrame(amount, denominator),
-  change: ({ option, outcome, wanted, direction, count, either, denominator }) => {
+  change: ({ option, outcome, wanted, direction, count, either, denominator, hidden }) => {
+    if (direction === 'same' && hidden !== null) {
+      const size = denominator === 1000000 ? 'a million' : formatCount(denominator);
+      return `With ${option}, slightly ${hidden} people ${haveVerb(outcome)} ${outcome}, but the difference is smaller than 1 in ${size} people: ${amountPhrase(either, denominator)} either way.`;
+    }
     if (wanted && direction !== 'same') {
-      return `With ${option}, about ${count} ${direction === 'more' ? 'more' : 'fewer'} of those ${denominator} people ${haveVerb(outcome)} ${outcome}.`;
+      return `With ${option}, about ${formatCount(count)} ${direction === 'more' ? 'more' : 'fewer'} of those ${formatCount(denominator)} people ${haveVerb(outcome)} ${outcome}.`;
     }
     switch (direction) {
       case 'fewer':
-        return `With ${option}, about ${count} of those ${denominator} people ${plural(count, 'avoids', 'avoid')} ${outcome}.`;
+        return `With ${option}, about ${formatCount(count)} of those ${formatCount(denominator)} people ${plural(count, 'avoids', 'avoid')} ${outcome}.`;
       case 'more':
-        return `About ${count} in ${denominator} ${getVerb(outcome, count)} ${outcome} because of ${option}.`;
+        return `About ${formatCount(count)} in ${formatCount(denominator)} ${getVerb(outcome, count)} ${outcome} because of ${option}.`;
       case 'same':
         return `${capitalise(option)} makes little or no difference to how many people ${haveVerb(outcome)} ${outcome}: ${amountPhrase(either, denominator)} either way.`;
     }
@@ -192,6 +199,6 @@ export const wordingMessages: WordingMessages = {
     `There is no number needed to treat: on these numbers, ${option} makes no difference to the chance of ${outcome}.`,
   relative: ({ option, outcome, wanted, from, to, denominator, direction, percent }) =>
     wanted
-      ? `With ${option}, the number who ${haveVerb(outcome)} ${outcome} goes from ${from} in ${denominator} to ${to} in ${denominator}: ${percent}% ${direction === 'increase' ? 'more' : 'fewer'} people.`
-      : `With ${option}, the chance of ${outcome} goes from ${from} in ${denominator} to ${to} in ${denominator}: a relative ${direction} of ${percent}%.`,
+      ? `With ${option}, the number who ${haveVerb(outcome)} ${outcome} goes from ${formatCount(from)} in ${formatCount(denominator)} to ${formatCount(to)} in ${formatCount(denominator)}: ${percent}% ${direction === 'increase' ? 'more' : 'fewer'} people.`
+      : `With ${option}, the chance of ${outcome} goes from ${formatCount(from)} in ${formatCount(denominator)} to ${formatCount(to)} in ${formatCount(denominator)}: a relative ${direction} of ${percent}%.`,
 };

@@ -3,6 +3,8 @@
  * each format demonstration with its source, the controls, and the teaching-set file
  * messages. Slide builders pass numbers and names; only this file holds English.
  */
+import { amountIn } from '../../../core/time-unit.ts';
+import type { TimeUnit } from '../../../core/time-unit.ts';
 import type { StepKind } from '../teaching-steps.ts';
 
 /** A finding from the research and where it comes from (author and year). */
@@ -16,8 +18,31 @@ const plural = (count: number, one: string, other: string): string => (count ===
 /** A name as it starts a line: "no tablet" → "No tablet". */
 export const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
 
-/** A period in words: 10 → "10 years", 1 → "1 year". */
-const years = (count: number): string => `${count} ${plural(count, 'year', 'years')}`;
+/** A period as the topic gives it: its length in years and the unit it was given in. */
+export interface Period {
+  readonly years: number;
+  readonly unit: TimeUnit;
+}
+
+const UNIT_NAMES: Readonly<Record<TimeUnit, readonly [string, string]>> = {
+  days: ['day', 'days'],
+  weeks: ['week', 'weeks'],
+  months: ['month', 'months'],
+  years: ['year', 'years'],
+};
+
+/**
+ * A period with its preposition, in the unit given: "over 10 years", "over the next 6 months",
+ * "by day 3".
+ */
+const over = ({ years, unit }: Period): string => {
+  const amount = amountIn(years, unit);
+  const shown = shortDecimal(amount);
+  if (unit === 'years') return `over ${shown} ${plural(amount, 'year', 'years')}`;
+  if (unit === 'days') return amount === 1 ? 'within a day' : `by day ${shown}`;
+  const [one, other] = UNIT_NAMES[unit];
+  return amount === 1 ? `over the next ${one}` : `over the next ${shown} ${other}`;
+};
 
 /** A decimal with at most two places and no trailing zeros: 11.25, 3.75, 26.67. */
 export function shortDecimal(value: number): string {
@@ -33,6 +58,17 @@ export function shortDecimal(value: number): string {
 const startsWithVerb = (outcome: string): boolean => /^[a-z]{2,}ing$/i.test(outcome.trim().split(/\s+/)[0] ?? '');
 const have = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'has', 'have'));
 const get = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get'));
+const missOut = (count: number): string => plural(count, 'misses out on', 'miss out on');
+
+/**
+ * What the people changed by an option do, by the group they are in and whether the event is
+ * wanted: an unwanted event is avoided (`prevented`) or got (`caused`); a wanted one is had
+ * because of the option (`caused`) or missed out on (`prevented`).
+ */
+const changedVerb = (group: 'prevented' | 'caused', wanted: boolean, outcome: string, count: number): string => {
+  if (wanted) return group === 'caused' ? have(outcome, count) : missOut(count);
+  return group === 'prevented' ? plural(count, 'avoids', 'avoid') : get(outcome, count);
+};
 
 export const teachingMessagesEn = {
   /** The name of each step, as the slide's heading and in the step list. */
@@ -82,7 +118,8 @@ export const teachingMessagesEn = {
 
   title: {
     who: (population: string) => `For ${population}.`,
-    period: (periodYears: number) => `Every number is over ${years(periodYears)}.`,
+    period: (period: Period) =>
+      period.unit === 'years' ? `Every number is ${over(period)}.` : `Every number counts what happens ${over(period)}.`,
     comparing: (option: string, comparison: string) => `Comparing ${option} with ${comparison}.`,
     illustrative: 'Illustrative example: every number is invented, for teaching. Not for real decisions.',
   },
@@ -90,13 +127,13 @@ export const teachingMessagesEn = {
   /** Short call-outs beside the people: a count in large type, then what it means. */
   callouts: {
     countIn: (count: number, denominator: number) => `${count} in ${denominator}`,
-    have: (count: number, outcome: string, periodYears: number) => `${have(outcome, count)} ${outcome} over ${years(periodYears)}`,
+    have: (count: number, outcome: string, period: Period) => `${have(outcome, count)} ${outcome} ${over(period)}`,
     doNot: (count: number) => plural(count, 'does not', 'do not'),
     haveWith: (count: number, outcome: string, option: string) => `${have(outcome, count)} ${outcome} with ${option}`,
     without: (comparison: string) => `without it (${comparison})`,
-    avoidBecause: (count: number, outcome: string, option: string) =>
-      `${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
-    getBecause: (count: number, outcome: string, option: string) => `${get(outcome, count)} ${outcome} because of ${option}`,
+    /** The people an option changes: "avoid a stroke because of …", "have pain relief because of …". */
+    changedBecause: (group: 'prevented' | 'caused', wanted: boolean, count: number, outcome: string, option: string) =>
+      `${changedVerb(group, wanted, outcome, count)} ${outcome} because of ${option}`,
     anyway: (count: number) => `${plural(count, 'has', 'have')} it anyway`,
     peopleLikeYou: (denominator: number, population: string) => `Each figure is one of ${denominator} people like you: ${population}.`,
     outlined: 'Outlined: people who may or may not have it, depending on where in the range the truth lies.',
@@ -105,9 +142,8 @@ export const teachingMessagesEn = {
   /** Each count under an array, in words, for assistive technology and the slide export. */
   chips: {
     event: (count: number, outcome: string) => `${count} ${have(outcome, count)} ${outcome}`,
-    prevented: (count: number, outcome: string, option: string) =>
-      `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
-    caused: (count: number, outcome: string, option: string) => `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
+    changed: (group: 'prevented' | 'caused', wanted: boolean, count: number, outcome: string, option: string) =>
+      `${count} ${changedVerb(group, wanted, outcome, count)} ${outcome} because of ${option}`,
     free: (count: number, outcome: string) =>
       `${count} ${plural(count, 'does', 'do')} not ${startsWithVerb(outcome) ? 'end up' : 'have'} ${outcome}`,
     uncertain: (count: number, outcome: string) =>
@@ -129,10 +165,13 @@ export const teachingMessagesEn = {
     noBenefit: 'This topic lists no benefit to show.',
     noHarm: 'This topic lists no harms.',
     noHarmPrompt: 'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
-    noOneHelped: (denominator: number, outcome: string, option: string) =>
-      `At these numbers, none of ${denominator} avoid ${outcome} because of ${option}.`,
-    noOneHarmed: (denominator: number, outcome: string, option: string) =>
-      `At these numbers, none of ${denominator} get ${outcome} because of ${option}.`,
+    /** No one changed: "none of 100 avoid a stroke …", "none of 100 miss out on pain relief …". */
+    noOneChanged: (group: 'prevented' | 'caused', wanted: boolean, denominator: number, outcome: string, option: string) =>
+      `At these numbers, none of ${denominator} ${changedVerb(group, wanted, outcome, 2)} ${outcome} because of ${option}.`,
+    /** The people an option changes the other way: "Instead, 10 in 100 miss out on … because of …". */
+    instead: (count: string, because: string) => `Instead, ${count} ${because}.`,
+    /** The heading of one of a step's several slides (one per harm, say): "Who is harmed (1 of 2)". */
+    partOf: (heading: string, part: number, parts: number) => (parts > 1 ? `${heading} (${part} of ${parts})` : heading),
     certaintyLabel: 'Certainty of the evidence',
     certaintyNames: { high: 'high', moderate: 'moderate', low: 'low', 'very-low': 'very low' },
     patientTopics: (outcome: string) => `About ${outcome}`,
@@ -140,19 +179,28 @@ export const teachingMessagesEn = {
 
   framing: {
     relativeLabel: 'Relative',
-    relativeValue: (percent: number, direction: 'lower' | 'higher') => `${percent}% ${direction} risk`,
+    /** An unwanted event's relative change is a lower or higher risk; a wanted event's is more or fewer people having it. */
+    relativeValue: (percent: number, direction: 'lower' | 'higher', wanted: boolean) =>
+      wanted ? `${percent}% ${direction === 'higher' ? 'more' : 'fewer'} people have it` : `${percent}% ${direction} risk`,
     relativeDetail: (from: string, to: string, denominator: number) => `From ${from} to ${to} in ${denominator}`,
     relativeNone: 'No relative change at these numbers',
     absoluteLabel: 'Absolute',
     absoluteValue: (count: number, denominator: number, direction: 'fewer' | 'more') =>
       `${count} in ${denominator} ${direction}`,
-    absoluteDetail: (from: string, to: string, difference: string, denominator: number) =>
-      `${from} − ${to} = ${difference} in ${denominator}`,
+    /** The subtraction the larger count first: "15 − 11 = 4 fewer in 100", "45 − 25 = 20 more in 100". */
+    absoluteDetail: (larger: string, smaller: string, difference: string, denominator: number, direction: 'fewer' | 'more') =>
+      `${larger} − ${smaller} = ${difference} ${direction} in ${denominator}`,
     absoluteNone: (denominator: number) => `No difference in ${denominator}`,
     nntLabel: 'NNT',
-    nntValue: (count: number, direction: 'prevent' | 'cause') => `Treat ${count} to ${direction} 1`,
-    nntDetail: (denominator: number, difference: string, quotient: string, count: number) =>
-      `${denominator} ÷ ${difference} = ${quotient}, rounded up: ${count}`,
+    /**
+     * Unwanted: "Treat 27 to prevent 1"; wanted: "Treat 5 for 1 more" (to have it), short
+     * enough for one line of the card beside 100 people.
+     */
+    nntValue: (count: number, change: 'helps' | 'harms', wanted: boolean) =>
+      wanted ? `Treat ${count} for 1 ${change === 'helps' ? 'more' : 'fewer'}` : `Treat ${count} to ${change === 'helps' ? 'prevent' : 'cause'} 1`,
+    /** A number needed to benefit is rounded up, one needed to harm down. */
+    nntDetail: (denominator: number, difference: string, quotient: string, count: number, rounding: 'up' | 'down') =>
+      `${denominator} ÷ ${difference} = ${quotient}, rounded ${rounding}: ${count}`,
     nntNone: 'No number needed to treat',
   },
 
