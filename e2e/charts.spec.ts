@@ -179,7 +179,7 @@ test.describe('people charts in the browser', () => {
     const svg = page.locator('#charts svg.people-chart').first();
     await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
     // RR 0.45 to 0.8 at 40%: 180 to 320 around 240 with extra water, ranks 180–319 outlined (140 people).
-    await expect(svg.locator('g.chart-array[data-option-id="water"] g.people > [stroke-dasharray]')).toHaveCount(140);
+    await expect(svg.locator('g.chart-array[data-option-id="water"] g.range-outline > rect')).toHaveCount(140);
     await expect(svg.locator('g.chart-array[data-option-id="as-now"] [stroke-dasharray]')).toHaveCount(0);
     await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
     await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });

@@ -50,4 +50,29 @@ describe('chartMessagesEn', () => {
     expect(messages.summary('Title', ['a', 'b', 'c'])).toBe('Title: a, b and c.');
     expect(messages.summary('Title', ['a'])).toBe('Title: a.');
   });
+
+  // A wanted event ("pain gone by day 3") is gained or missed, never avoided or caused.
+  it('labels the groups of a wanted event without avoiding or causing it', () => {
+    const values = { outcome: 'a response', option: 'option A', role: 'option' as const };
+    expect(messages.wantedLabels.event({ ...values, count: 25 })).toBe('25 have a response anyway');
+    expect(messages.wantedLabels.caused({ ...values, count: 20 })).toBe('20 have a response because of option A');
+    expect(messages.wantedLabels.caused({ ...values, count: 1 })).toBe('1 has a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, count: 3 })).toBe('3 miss out on a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, count: 1 })).toBe('1 misses out on a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, outcome: 'being alive at 10 years', count: 2 })).toBe(
+      '2 do not end up being alive at 10 years because of option A',
+    );
+    expect(messages.wantedLabels.free({ ...values, count: 55 })).toBe('55 do not have a response');
+  });
+
+  // A year is 365.25 days and a month a twelfth of a year (common practice); the period reads in the unit given.
+  it('words the period in the unit it was given in', () => {
+    expect(messages.heading('pain gone by day 3', 3 / 365.25, 'days')).toBe('Chance of pain gone by day 3 over 3 days');
+    expect(messages.optionTitle({ denominator: 100, option: 'Tablet B', periodYears: 6 / 12, periodUnit: 'months' })).toBe(
+      'With tablet B: 100 people over 6 months',
+    );
+    expect(messages.pairTitle({ denominator: 100, option: '', periodYears: 14 / 365.25, periodUnit: 'weeks' }, 'option')).toBe(
+      'With the option: 100 people like you, over 2 weeks',
+    );
+  });
 });
