@@ -8,8 +8,11 @@ const folder = fileURLToPath(new URL('../../electron/', import.meta.url));
 const sources = new Map<string, string>();
 
 beforeAll(async () => {
-  for (const name of await fs.readdir(folder)) {
-    if (name.endsWith('.ts')) sources.set(name, await fs.readFile(path.join(folder, name), 'utf8'));
+  // Every source in every folder of the shell, by file name (the names are unique across folders).
+  for (const entry of await fs.readdir(folder, { recursive: true, withFileTypes: true })) {
+    if (!entry.isFile() || !entry.name.endsWith('.ts')) continue;
+    if (sources.has(entry.name)) throw new Error(`two shell sources are named ${entry.name}`);
+    sources.set(entry.name, await fs.readFile(path.join(entry.parentPath, entry.name), 'utf8'));
   }
 });
 
