@@ -145,7 +145,10 @@ export interface ChancewiseShellApi {
   saveSnapshot(snapshot: SnapshotRequest): Promise<ShellResult<SnapshotSaved>>;
   /** Save the handout PDF where the person chooses; null when cancelled. */
   exportHandoutPdf(request: HandoutPdfRequest): Promise<ShellResult<ExportedHandout | null>>;
-  /** Open the system print dialog for the page as it is now (show the handout view first). */
+  /**
+   * Open the system print dialog for the page as it is now, backgrounds included. The page
+   * does not call it at present: it answers the menu's `print-handout` command itself.
+   */
   printHandout(): Promise<ShellResult<PrintOutcome>>;
   /** Listen to menu commands; returns the function that stops listening. */
   onCommand(listener: (command: ShellCommand) => void): () => void;
