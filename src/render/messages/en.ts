@@ -84,12 +84,10 @@ export const chartMessagesEn: ChartMessages = {
     periodYears === null ? `Chance of ${outcome}` : `Chance of ${outcome} over ${period(periodYears)}`,
   /** Shown under the heading of an invented demonstration topic. */
   illustrative: 'Illustrative example: invented numbers, not from a real study.',
-  /** "If 100 people like you take option A for 10 years". */
-  optionTitle: ({ denominator, option, periodYears }: TitleValues) =>
-    `If ${denominator} people like you take ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
-  /** "If 100 people like you have no treatment for 10 years". */
-  comparisonTitle: ({ denominator, option, periodYears }: TitleValues) =>
-    `If ${denominator} people like you have ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
+  /** "With option A: 100 people over 10 years". */
+  optionTitle: ({ denominator, option, periodYears }: TitleValues) => groupTitle(option, denominator, periodYears),
+  /** "With no treatment: 100 people over 10 years". */
+  comparisonTitle: ({ denominator, option, periodYears }: TitleValues) => groupTitle(option, denominator, periodYears),
   /** Names of the two arms of a bare pair, with no topic. */
   pairComparisonName: 'Without the option',
   pairOptionName: 'With the option',
@@ -121,6 +119,11 @@ export const chartMessagesEn: ChartMessages = {
   /** One array in a sentence: title, then the labels joined. */
   summary: (title: string, labels: readonly string[]) => `${title}: ${joinList(labels)}.`,
 };
+
+/** One array's title: the option first, then the group and the period. */
+function groupTitle(option: string, denominator: number, periodYears: number | null): string {
+  return `With ${inSentence(option)}: ${denominator} people${periodYears === null ? '' : ` over ${period(periodYears)}`}`;
+}
 
 /** "a, b and c". */
 function joinList(items: readonly string[]): string {

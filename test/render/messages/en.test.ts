@@ -3,25 +3,25 @@ import { chartMessagesEn as messages } from '../../../src/render/messages/en.ts'
 
 describe('chartMessagesEn', () => {
   // IPDAS (Elwyn et al. 2006; IPDASi items on probabilities): each graphic names the option,
-  // the outcome, the group and the period ("If 100 people like you take tablet A for 10 years").
+  // the outcome, the group and the period ("With tablet A: 100 people over 10 years").
   it('titles an option’s array with the group, the option and the period', () => {
     expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 10 })).toBe(
-      'If 100 people like you take option A for 10 years',
+      'With option A: 100 people over 10 years',
     );
   });
 
   it('titles the comparison with its own name', () => {
     expect(messages.comparisonTitle({ denominator: 100, option: 'No treatment', periodYears: 10 })).toBe(
-      'If 100 people like you have no treatment for 10 years',
+      'With no treatment: 100 people over 10 years',
     );
   });
 
   it('keeps acronyms as written and writes short periods in months', () => {
     expect(messages.optionTitle({ denominator: 1000, option: 'ACE inhibitor', periodYears: 0.5 })).toBe(
-      'If 1000 people like you take ACE inhibitor for 6 months',
+      'With ACE inhibitor: 1000 people over 6 months',
     );
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('If 100 people like you take option A for 1 year');
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('If 100 people like you take option A');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('With option A: 100 people over 1 year');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('With option A: 100 people');
   });
 
   // Fagerlin, Zikmund-Fisher & Ubel (2011), J Natl Cancer Inst 103:1436: legends carry the numbers.

@@ -105,7 +105,7 @@ describe('drawChartPdf', () => {
     expect(drawing.height).toBeGreaterThan(60);
     expect(drawing.height).toBeLessThan(267);
     const pdf = doc.output();
-    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'If 100 people like you take option A for 10 years']) {
+    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'With option A: 100 people over 10 years']) {
       expect(pdf).toContain(`(${text}) Tj`);
     }
 
