@@ -13,7 +13,7 @@ import { HEART, SCREENING, demoText, demoTopic, pairTopic, projectFile } from '.
 // "expected" and "found" is the topic file reader's (src/core/messages/en/file-words.ts).
 
 const EXAMPLE = projectFile('assets/teaching/framing-and-format.teaching.json');
-const PATHS = projectFile('test/teaching/fixtures/paths.teaching.json');
+const PATHS = projectFile('test/teaching/fixtures/sets/paths.teaching.json');
 
 /** A valid set of the given items, as text. */
 function setText(items: unknown[], extra: Record<string, unknown> = {}): string {
