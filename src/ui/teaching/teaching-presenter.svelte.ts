@@ -50,15 +50,6 @@ export class TeachingPresenter {
   /** A slide is being saved; the menu waits. */
   busy = $state(false);
 
-  readonly topics = $derived(this.session.items.length);
-  /** Where the presenter is, in words, for the live region and the saved slide's footer. */
-  readonly progressLabel = $derived(
-    this.session.place === null
-      ? ''
-      : this.words.view.progressLabel(this.session.index + 1, this.session.total, this.session.place.item + 1, this.topics),
-  );
-  readonly announcement = $derived(this.session.slide === null || this.progressLabel === '' ? '' : `${this.progressLabel}: ${this.session.slide.heading}`);
-
   readonly #options: TeachingPresenterOptions;
   #leaving = false;
 
@@ -68,6 +59,22 @@ export class TeachingPresenter {
     const first = presentationItem(options.topic, { option: null, harm: null, per: options.per, steps: DEFAULT_STEPS });
     this.session = new TeachingSession(options.topic.title, first.ok ? [first.item] : [], this.words);
     this.problem = first.ok ? null : this.words.view.cannotPresent(first.problem.kind === 'not-computed' ? first.problem.detail : first.problem.kind);
+  }
+
+  /** How many topics the presentation has. */
+  get topics(): number {
+    return this.session.items.length;
+  }
+
+  /** Where the presenter is, in words, for the live region and the saved slide's footer. */
+  get progressLabel(): string {
+    const { session } = this;
+    return session.place === null ? '' : this.words.view.progressLabel(session.index + 1, session.total, session.place.item + 1, this.topics);
+  }
+
+  get announcement(): string {
+    const label = this.progressLabel;
+    return this.session.slide === null || label === '' ? '' : `${label}: ${this.session.slide.heading}`;
   }
 
   /** Step through the presentation; a message given on the slide left goes with it. */
