@@ -35,8 +35,8 @@ test.describe('accessibility and privacy', () => {
     expect(await seriousViolations(page)).toEqual([]);
     await page.getByRole('navigation', { name: 'Topic' }).getByRole('button', { name: /^Save/ }).click();
     await page.keyboard.press('Escape');
-    await page.getByLabel('Baseline risk', { exact: true }).first().fill('15%');
-    await page.getByLabel('Estimate').nth(1).fill('0.65');
+    await page.getByLabel('Baseline risk', { exact: true }).first().fill('4 in 10');
+    await page.getByLabel('Estimate').nth(1).fill('0.45');
     await page.getByRole('navigation', { name: 'Topic' }).getByRole('button', { name: /^Save/ }).click();
     await expect(page.getByRole('dialog', { name: 'Save the topic' })).toBeVisible();
     expect(await seriousViolations(page)).toEqual([]);

@@ -87,20 +87,20 @@ test.describe('people charts in the browser', () => {
     const finish = await openChartPage(page);
     // People per 1000 = risk × 1000, rounded to whole people, halves up (common practice);
     // the risk with the option is the baseline × RR (Cochrane Handbook 5.1, §12.5.4).
-    // Heart attack or stroke: 15% → 150; 15% × 0.75 = 11.25% → 112.5 → 113, so 37 avoid it.
-    expect(await drawnCounts(page, 'heart-stroke')).toEqual({
-      none: { event: 150, free: 850 },
-      standard: { event: 113, prevented: 37, free: 850 },
+    // Another kidney stone: 40% → 400; 40% × 0.6 = 24% → 240, so 160 avoid it.
+    expect(await drawnCounts(page, 'stone')).toEqual({
+      'as-now': { event: 400, free: 600 },
+      water: { event: 240, prevented: 160, free: 600 },
     });
-    // Muscle pain: 5% → 50; 5% × 1.2 = 6% → 60, so 10 more have it.
-    expect(await drawnCounts(page, 'muscle')).toEqual({
-      none: { event: 50, free: 950 },
-      standard: { event: 50, caused: 10, free: 940 },
+    // Broken sleep: 15% → 150; 15% × 1.6 = 24% → 240, so 90 more have it.
+    expect(await drawnCounts(page, 'night')).toEqual({
+      'as-now': { event: 150, free: 850 },
+      water: { event: 150, caused: 90, free: 760 },
     });
-    // Type 2 diabetes: 8% → 80; 8% × 1.1 = 8.8% → 88, so 8 more have it.
-    expect(await drawnCounts(page, 'diabetes')).toEqual({
-      none: { event: 80, free: 920 },
-      standard: { event: 80, caused: 8, free: 912 },
+    // An upset stomach: 5% → 50; a risk ratio of 1 with extra water leaves it at 50.
+    expect(await drawnCounts(page, 'stomach')).toEqual({
+      'as-now': { event: 50, free: 950 },
+      water: { event: 50, free: 950 },
     });
     // Exactly one element per person, and nothing else carries data-outcome.
     const shape = await page.evaluate(() => ({
@@ -138,7 +138,7 @@ test.describe('people charts in the browser', () => {
     // Okabe & Ito (2008) blue for events; the free look is inherited from the people's group.
     expect(paints.event).toBe('rgb(0, 114, 178)');
     expect(paints.free).toBe('rgb(232, 232, 232)');
-    expect(paints.prevented).toMatch(/^url\(".*#chart-heart-stroke-dots"\)$/);
+    expect(paints.prevented).toMatch(/^url\(".*#chart-stone-dots"\)$/);
     expect(paints.filter).toBe('grayscale(1)');
     await page.screenshot({ path: 'test-results/charts-greyscale.png', fullPage: true });
     await finish();
@@ -155,10 +155,10 @@ test.describe('people charts in the browser', () => {
       const finish = await openChartPage(page, query);
       // The first two blocks of the option's array in the benefit chart and a harm chart, where groups meet.
       for (const [outcome, kind] of [
-        ['heart-stroke', 'benefit'],
-        ['muscle', 'harm'],
+        ['stone', 'benefit'],
+        ['night', 'harm'],
       ] as const) {
-        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="standard"] g.people`);
+        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="water"] g.people`);
         const box = await people.boundingBox();
         expect(box).not.toBeNull();
         if (box === null) continue;
@@ -178,9 +178,9 @@ test.describe('people charts in the browser', () => {
     const finish = await openChartPage(page, '?palette=black-and-white&range=on');
     const svg = page.locator('#charts svg.people-chart').first();
     await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
-    // Range 102 to 125 around 113 with the standard dose: ranks 102–124 outlined (23 people).
-    await expect(svg.locator('g.chart-array[data-option-id="standard"] g.people > [stroke-dasharray]')).toHaveCount(23);
-    await expect(svg.locator('g.chart-array[data-option-id="none"] [stroke-dasharray]')).toHaveCount(0);
+    // RR 0.45 to 0.8 at 40%: 180 to 320 around 240 with extra water, ranks 180–319 outlined (140 people).
+    await expect(svg.locator('g.chart-array[data-option-id="water"] g.range-outline > rect')).toHaveCount(140);
+    await expect(svg.locator('g.chart-array[data-option-id="as-now"] [stroke-dasharray]')).toHaveCount(0);
     await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
     await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });
     await finish();

@@ -4,15 +4,15 @@ test.describe('editing a topic', () => {
   test('opens on the first example, marked illustrative, with numbers, charts and words', async ({ page, watch }) => {
     await openApp(page);
     await expect(page.getByRole('note', { name: 'Illustrative example' })).toContainText('Every number here is invented');
-    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/Taking a daily tablet/);
-    // The example: 15% over 10 years, RR 0.75 for the standard dose.
-    const headline = page.locator('table[data-outcome-id="heart-stroke"]');
-    await expect(headline.locator('tr[data-option-id="none"] td.people .value')).toHaveText('15');
-    await expect(headline.locator('tr[data-option-id="standard"] td.people .value')).toHaveText('11');
-    await expect(people(page, 'heart-stroke', 'none', 'event')).toHaveCount(15);
-    await expect(people(page, 'heart-stroke', 'none', 'free')).toHaveCount(85);
-    await expect(page.locator('article[data-outcome-id="heart-stroke"] ul[data-option-id="none"]')).toContainText(
-      'about 15 in 100 people like you will have a heart attack or stroke',
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/second kidney stone/);
+    // The example: 4 in 10 over 5 years, RR 0.6 with extra water: 24 in 100.
+    const headline = page.locator('table[data-outcome-id="stone"]');
+    await expect(headline.locator('tr[data-option-id="as-now"] td.people .value')).toHaveText('40');
+    await expect(headline.locator('tr[data-option-id="water"] td.people .value')).toHaveText('24');
+    await expect(people(page, 'stone', 'as-now', 'event')).toHaveCount(40);
+    await expect(people(page, 'stone', 'as-now', 'free')).toHaveCount(60);
+    await expect(page.locator('article[data-outcome-id="stone"] ul[data-option-id="as-now"]')).toContainText(
+      'about 40 in 100 people like you will have another kidney stone',
     );
     await expect(page.locator('svg.people-chart').first()).toContainText('Illustrative');
     await page.screenshot({ path: `${SCREENS}/01-start.png` });
@@ -23,14 +23,14 @@ test.describe('editing a topic', () => {
     await openApp(page);
     const baseline = page.getByLabel('Baseline risk', { exact: true }).first();
     await baseline.fill('20%');
-    const headline = page.locator('table[data-outcome-id="heart-stroke"]');
-    await expect(headline.locator('tr[data-option-id="none"] td.people .value')).toHaveText('20');
-    // 20% × 0.75 = 15%: 15 of 100, so 5 avoid it; 20% × 0.65 = 13%, so 7 avoid it with the higher dose.
-    await expect(headline.locator('tr[data-option-id="standard"] td.people .value')).toHaveText('15');
-    await expect(people(page, 'heart-stroke', 'none', 'event')).toHaveCount(20);
-    await expect(people(page, 'heart-stroke', 'standard', 'prevented')).toHaveCount(5);
-    await expect(people(page, 'heart-stroke', 'higher', 'prevented')).toHaveCount(7);
-    await expect(page.locator('article[data-outcome-id="heart-stroke"] ul[data-option-id="none"]')).toContainText('about 20 in 100');
+    const headline = page.locator('table[data-outcome-id="stone"]');
+    await expect(headline.locator('tr[data-option-id="as-now"] td.people .value')).toHaveText('20');
+    // 20% × 0.6 = 12%: 12 of 100, so 8 avoid it; 20% × 0.45 = 9%, so 11 avoid it with the citrate drink.
+    await expect(headline.locator('tr[data-option-id="water"] td.people .value')).toHaveText('12');
+    await expect(people(page, 'stone', 'as-now', 'event')).toHaveCount(20);
+    await expect(people(page, 'stone', 'water', 'prevented')).toHaveCount(8);
+    await expect(people(page, 'stone', 'citrate', 'prevented')).toHaveCount(11);
+    await expect(page.locator('article[data-outcome-id="stone"] ul[data-option-id="as-now"]')).toContainText('about 20 in 100');
     await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
     await expect(page.getByText('Unsaved changes')).toBeVisible();
     await page.screenshot({ path: `${SCREENS}/02-baseline-20.png` });
@@ -49,7 +49,7 @@ test.describe('editing a topic', () => {
     await expect(blocks).toHaveCount(3);
     for (const block of await blocks.all()) await block.getByLabel('Estimate').fill('0.9');
     await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
-    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array')).toHaveCount(4);
+    await expect(page.locator('article[data-outcome-id="stone"] g.chart-array')).toHaveCount(4);
 
     await page.getByRole('button', { name: 'Add a harm' }).click();
     const outcomeName = page.getByLabel('Outcome', { exact: true }).last();
@@ -63,7 +63,7 @@ test.describe('editing a topic', () => {
     await expect(headache.locator('g.chart-array')).toHaveCount(4);
     // 10% × 1.5 = 15%: 5 more people in 100 (50 in 1000) have a headache with each option.
     const denominator = Number(await headache.locator('svg.people-chart').getAttribute('data-denominator'));
-    await expect(headache.locator('g.chart-array[data-option-id="standard"] path[data-outcome="caused"]')).toHaveCount(denominator * 0.05);
+    await expect(headache.locator('g.chart-array[data-option-id="water"] path[data-outcome="caused"]')).toHaveCount(denominator * 0.05);
     await page.screenshot({ path: `${SCREENS}/03-added-option-and-outcome.png`, fullPage: false });
   });
 
@@ -83,7 +83,7 @@ test.describe('editing a topic', () => {
     expect(problemBox && fieldBox && problemBox.y - (fieldBox.y + fieldBox.height)).toBeLessThan(20);
     await expect(baseline).toHaveValue('150%');
     await expect(page.getByText('These results are from before your latest change.')).toBeVisible();
-    await expect(page.locator('table[data-outcome-id="heart-stroke"] tr[data-option-id="none"] td.people .value')).toHaveText('15');
+    await expect(page.locator('table[data-outcome-id="stone"] tr[data-option-id="as-now"] td.people .value')).toHaveText('40');
     await baseline.evaluate((element) => element.scrollIntoView({ block: 'center' }));
     await page.screenshot({ path: `${SCREENS}/04-impossible-value.png` });
 
@@ -101,15 +101,15 @@ test.describe('editing a topic', () => {
     await title.fill('A different decision');
     await page.getByLabel('Baseline risk', { exact: true }).first().fill('20%');
     await page.keyboard.press('Control+z');
-    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('15%');
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('4 in 10');
     await page.keyboard.press('Control+z');
-    await expect(title).toHaveValue(/Taking a daily tablet/);
+    await expect(title).toHaveValue(/second kidney stone/);
     await page.keyboard.press('Control+Shift+z');
     await expect(title).toHaveValue('A different decision');
     await page.keyboard.press('Control+y');
     await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('20%');
     await page.getByRole('button', { name: 'Undo' }).click();
-    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('15%');
+    await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('4 in 10');
     await page.getByRole('button', { name: 'Redo' }).click();
     await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('20%');
   });
@@ -117,13 +117,13 @@ test.describe('editing a topic', () => {
   test('switches between 100 and 1000 people', async ({ page }) => {
     await openApp(page);
     await page.getByRole('radio', { name: '1000 people' }).check();
-    await expect(page.locator('table[data-outcome-id="heart-stroke"] tr[data-option-id="none"] td.people .value')).toHaveText('150');
-    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array[data-option-id="none"] path[data-outcome]')).toHaveCount(1000);
-    // 15% × 0.75 = 11.25%: 113 of 1000 (to the nearest person), so 37 avoid it.
-    await expect(people(page, 'heart-stroke', 'standard', 'prevented')).toHaveCount(37);
+    await expect(page.locator('table[data-outcome-id="stone"] tr[data-option-id="as-now"] td.people .value')).toHaveText('400');
+    await expect(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')).toHaveCount(1000);
+    // 40% × 0.6 = 24%: 240 of 1000, so 160 avoid it.
+    await expect(people(page, 'stone', 'water', 'prevented')).toHaveCount(160);
     await page.screenshot({ path: `${SCREENS}/05-per-1000.png` });
     await page.getByRole('radio', { name: '100 people' }).check();
-    await expect(page.locator('article[data-outcome-id="heart-stroke"] g.chart-array[data-option-id="none"] path[data-outcome]')).toHaveCount(100);
+    await expect(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')).toHaveCount(100);
   });
 
   test('the start panel offers a new topic and the other examples, each marked illustrative', async ({ page }) => {

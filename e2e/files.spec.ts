@@ -21,10 +21,10 @@ async function openFile(page: Page, name: string, text: string): Promise<void> {
 test.describe('files', () => {
   test('a saved topic reopens as the same topic', async ({ page }) => {
     await openApp(page);
-    await page.getByLabel('Decision', { exact: true }).fill('Taking the tablet, as discussed');
+    await page.getByLabel('Decision', { exact: true }).fill('Drinking more water, as discussed');
     await page.getByLabel('Baseline risk', { exact: true }).first().fill('1 in 5');
     const saved = await saveTopic(page);
-    expect(saved.name).toBe('taking-the-tablet-as-discussed.cwtopic');
+    expect(saved.name).toBe('drinking-more-water-as-discussed.cwtopic');
     expect(JSON.parse(saved.text).topic.outcomes[0].baseline.risk).toBe('1 in 5');
     await expect(page.getByText('Unsaved changes')).toHaveCount(0);
     await expect(page.locator('.document .file')).toHaveText(saved.name);
@@ -33,7 +33,7 @@ test.describe('files', () => {
     await page.getByRole('button', { name: 'New topic', exact: true }).click();
     await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('');
     await openFile(page, saved.name, saved.text);
-    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('Taking the tablet, as discussed');
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('Drinking more water, as discussed');
     await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('1 in 5');
     const again = await saveTopic(page);
     expect(again.text).toBe(saved.text);
@@ -68,7 +68,7 @@ test.describe('files', () => {
     await expect(page.getByText('Unsaved changes')).toBeVisible();
     await page.screenshot({ path: `${SCREENS}/08-damaged-file.png` });
 
-    const wrongField = good.text.replace('"periodYears": 10', '"periodYears": "ten"');
+    const wrongField = good.text.replace('"periodYears": 5', '"periodYears": "five"');
     await openFile(page, 'wrong.chancewise.json', wrongField);
     await expect(page.getByRole('alert')).toContainText('damaged at "topic.periodYears"');
     await expect(page.getByLabel('Baseline risk', { exact: true }).first()).toHaveValue('12%');
@@ -79,10 +79,11 @@ test.describe('files', () => {
     const chart = page.locator('article.outcome-result').first();
     const [svgDownload] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: 'Save chart as SVG' }).click()]);
     const svg = await readFile(await svgDownload.path(), 'utf8');
-    expect(svgDownload.suggestedFilename()).toMatch(/-heart-stroke\.svg$/);
+    expect(svgDownload.suggestedFilename()).toMatch(/-stone\.svg$/);
     expect(svg.startsWith('<?xml version="1.0" encoding="UTF-8"?>')).toBe(true);
     expect(svg).toMatch(/<svg[^>]* width="180mm"/);
-    expect((svg.match(/data-outcome="event"/g) ?? []).length).toBe(15 + 11 + 10);
+    // The headline chart: 40 with no change, 24 with extra water and 18 with the citrate drink have a stone.
+    expect((svg.match(/data-outcome="event"/g) ?? []).length).toBe(40 + 24 + 18);
 
     const [pngDownload] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: /Save as PNG/ }).click()]);
     const png = await readFile(await pngDownload.path());

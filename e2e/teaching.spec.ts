@@ -16,21 +16,21 @@ const SIZES = [
   { width: 1920, height: 1080, body: 42, heading: 60, icon: 36 },
 ] as const;
 
-/** Every slide of the heart topic: its step, its heading, and words it must show (from the computed numbers and the core's wording). */
+/** Every slide of the kidney stone topic: its step, its heading, and words it must show (from the computed numbers and the core's wording). */
 const STEPS: readonly (readonly [string, string, readonly string[]])[] = [
-  ['title', 'Taking a daily tablet to lower the chance of a heart attack or stroke (illustrative example)', ['Every number is over 10 years.', 'Comparing the standard dose with no tablet.']],
-  ['baseline', 'Without the option', ['15 in 100', 'have a heart attack or stroke over 10 years', '85 in 100']],
-  ['with-option', 'With the option', ['No tablet', 'The standard dose', '11 in 100', 'without it (no tablet)']],
-  ['helped', 'Who is helped', ['4 in 100', 'avoid a heart attack or stroke because of the standard dose', 'have it anyway']],
-  ['harmed', 'Who is harmed (1 of 2)', ['1 in 100', 'gets muscle pain bad enough to stop the tablet because of the standard dose']],
-  ['harmed', 'Who is harmed (2 of 2)', ['1 in 100', 'gets type 2 diabetes because of the standard dose']],
-  ['uncertainty', 'How sure are we?', ['could be anywhere between 3 and 5 in 100', 'Certainty of the evidence: high']],
-  ['patient-words', 'What the patient hears (1 of 2)', ['No tablet: about 15 in 100 people like you will have a heart attack or stroke in the next 10 years.']],
-  ['patient-words', 'What the patient hears (2 of 2)', ['About 1 in 100 gets muscle pain', 'About type 2 diabetes']],
-  ['framing', 'One result, four ways', ['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1', '100 ÷ 3.75 = 26.67, rounded up: 27', 'Akl et al. 2011']],
+  ['title', 'Ways to cut the chance of a second kidney stone (illustrative)', ['Every number is over 5 years.', 'Comparing extra water each day with no change.']],
+  ['baseline', 'Without the option', ['40 in 100', 'have another kidney stone over 5 years', '60 in 100']],
+  ['with-option', 'With the option', ['No change', 'Extra water each day', '24 in 100', 'without it (no change)']],
+  ['helped', 'Who is helped', ['16 in 100', 'avoid another kidney stone because of extra water each day', 'have it anyway']],
+  ['harmed', 'Who is harmed (1 of 2)', ['9 in 100', 'get broken sleep from passing urine at night because of extra water each day']],
+  ['harmed', 'Who is harmed (2 of 2)', ['an upset stomach bad enough to stop']],
+  ['uncertainty', 'How sure are we?', ['could be anywhere between 8 and 22 in 100', 'Certainty of the evidence: moderate']],
+  ['patient-words', 'What the patient hears (1 of 2)', ['No change: about 40 in 100 people like you will have another kidney stone in the next 5 years.']],
+  ['patient-words', 'What the patient hears (2 of 2)', ['About 9 in 100 get broken sleep']],
+  ['framing', 'One result, four ways', ['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1', '100 ÷ 16 = 6.25, rounded up: 7', 'Akl 2011, Cochrane · Zipkin 2014']],
   ['denominator', '100 or 1000 people?', ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009']],
   ['arrangement', 'Grouped or scattered?', ['Grouped', 'Scattered', 'overestimated more', 'Ancker, Weber & Kukafka 2011']],
-  ['incremental', 'Two totals, or the change itself?', ['Two totals', 'Change as its own group', 'Without it (no tablet): 15 in 100.', 'Zikmund-Fisher et al. 2008']],
+  ['incremental', 'Two totals, or the change itself?', ['Two totals', 'Change as its own group', 'Without it (no change): 40 in 100.', 'J Health Commun 2008;13:107']],
 ];
 
 /**
@@ -372,21 +372,21 @@ test.describe('the teaching view', () => {
     const menu = view(page).getByRole('button', { name: 'File…' });
     await menu.click();
     const [png] = await Promise.all([page.waitForEvent('download'), view(page).getByRole('button', { name: 'PNG' }).click()]);
-    expect(png.suggestedFilename()).toBe('taking-a-daily-tablet-to-lower-04-helped.png');
+    expect(png.suggestedFilename()).toBe('ways-to-cut-the-chance-of-04-helped.png');
     const pngBytes = readFileSync((await png.path()) ?? '');
     expect(pngSize(pngBytes)).toEqual({ width: 1920, height: 1080 });
     await menu.click();
     const [svg] = await Promise.all([page.waitForEvent('download'), view(page).getByRole('button', { name: 'SVG' }).click()]);
     const svgText = readFileSync((await svg.path()) ?? '', 'utf8');
     expect(svgText).toContain('viewBox="0 0 1920 1080"');
-    expect(svgText).toContain('avoid a heart attack or stroke because of the standard dose');
+    expect(svgText).toContain('avoid another kidney stone because of extra water each day');
     expect((svgText.match(/class="person"/g) ?? []).length).toBe(200);
     await menu.click();
     const [set] = await Promise.all([page.waitForEvent('download'), view(page).getByRole('button', { name: 'Save set' }).click()]);
     const setText = readFileSync((await set.path()) ?? '', 'utf8');
     const saved = JSON.parse(setText) as { format: string; items: { topic: { topic: { title: string } } }[] };
     expect(saved.format).toBe('chancewise-teaching-set');
-    expect(saved.items[0]?.topic.topic.title).toBe('Taking a daily tablet to lower the chance of a heart attack or stroke (illustrative example)');
+    expect(saved.items[0]?.topic.topic.title).toBe('Ways to cut the chance of a second kidney stone (illustrative)');
     // The view keeps its place after saving.
     await expect(slide(page)).toHaveAttribute('data-step', 'helped');
   });

@@ -10,7 +10,7 @@ import { fileURLToPath } from 'node:url';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const electronPackage = join(root, 'node_modules', 'electron');
-const demoTopic = join(root, 'assets', 'demo', '01-heart-tablet.json');
+const demoTopic = join(root, 'assets', 'demo', '01-kidney-stone.json');
 const npm = process.platform === 'win32' ? 'npm.cmd' : 'npm';
 const FETCH_TIMEOUT_MS = 5 * 60_000;
 const EARLY_EXIT_MS = 15_000;

@@ -95,7 +95,7 @@ export async function timeAppLoad(browser, url, runs) {
 
 /** The first example reduced to its headline outcome, the comparison and one option. */
 export function twoArrayTopic(projectRoot) {
-  const file = JSON.parse(readFileSync(join(projectRoot, 'assets/demo/01-heart-tablet.json'), 'utf8'));
+  const file = JSON.parse(readFileSync(join(projectRoot, 'assets/demo/01-kidney-stone.json'), 'utf8'));
   const topic = file.topic;
   const comparison = topic.options.find((option) => option.isComparison);
   const option = topic.options.find((candidate) => !candidate.isComparison);

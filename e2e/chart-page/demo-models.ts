@@ -1,9 +1,9 @@
 /**
  * The chart models of the check page: the first example topic (invented numbers), each
- * outcome with the comparison and the standard dose side by side, so every chart has two
+ * outcome with the comparison and extra water side by side, so every chart has two
  * arrays of the chosen number of people.
  */
-import demoText from '../../assets/demo/01-heart-tablet.json?raw';
+import demoText from '../../assets/demo/01-kidney-stone.json?raw';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import type { Topic } from '../../src/core/topic/topic.ts';
 import { readTopicFile } from '../../src/core/topic/topic-file.ts';
@@ -11,7 +11,7 @@ import type { Denominator } from '../../src/core/types.ts';
 import { type ChartModel, outcomeChart } from '../../src/render/chart-model.ts';
 
 /** The option drawn beside the comparison. */
-export const SHOWN_OPTION = 'standard';
+export const SHOWN_OPTION = 'water';
 
 /** The example topic as read from its file. */
 export function demoTopic(): Topic {

@@ -1,6 +1,6 @@
 /**
  * The people-chart check page: the first example topic per 1000 people (or per 100 with
- * `?per=100`), every outcome as the comparison beside the standard dose. `?palette=black-and-white`
+ * `?per=100`), every outcome as the comparison beside extra water. `?palette=black-and-white`
  * draws the print theme, `?range=on` outlines the people who depend on the interval,
  * `?greyscale=on` shows the page through a greyscale filter. Timing hooks for the chart
  * benchmark are on `window.chartPage`.

@@ -8,7 +8,7 @@ import { electronExecutable, hasDisplay, launchEnvironment, projectRoot } from '
 
 const executable = electronExecutable();
 const hasBinary = executable !== null;
-const demoTopic = join(projectRoot, 'assets', 'demo', '01-heart-tablet.json');
+const demoTopic = join(projectRoot, 'assets', 'demo', '01-kidney-stone.json');
 
 test.describe('the desktop shell', () => {
   test.skip(!hasBinary, 'no Electron binary on this machine (offline)');

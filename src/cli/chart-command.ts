@@ -1,9 +1,10 @@
 import { writeFileSync } from 'node:fs';
 import { computeEffect } from '../core/compute-effect.ts';
+import { changeOf } from '../core/direction.ts';
 import { english } from '../core/messages/en/index.ts';
 import type { TopicResult } from '../core/topic/topic-result.ts';
-import { outcomeChart, pairChart } from '../render/index.ts';
-import type { ChartModel } from '../render/index.ts';
+import { outcomeChart, pairChart } from '../render/chart-model.ts';
+import type { ChartModel } from '../render/chart-model.ts';
 import { renderChartSvg } from '../render/node.ts';
 import type { CommandOutput } from './command-output.ts';
 import { computeTopicOrFail, refuseEffectFlags } from './compute-command.ts';
@@ -67,8 +68,16 @@ function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
   const result = computeEffect(query);
   if (result.perPeople === null) throw new UsageError(words.chartNeedsBaseline());
   const periodYears = query.periods?.targetYears ?? null;
-  const kind = result.perPeople.difference < 0 ? 'harm' : 'benefit';
-  return pairChart({ perPeople: result.perPeople, periodYears, kind, ...(wanted === undefined ? {} : { outcomeName: wanted }) });
+  const eventWanted = query.wanted === true;
+  const kind = changeOf(result.perPeople.difference, eventWanted) === 'harms' ? 'harm' : 'benefit';
+  return pairChart({
+    perPeople: result.perPeople,
+    periodYears,
+    ...(query.periods?.targetUnit === undefined ? {} : { periodUnit: query.periods.targetUnit }),
+    kind,
+    wanted: eventWanted,
+    ...(wanted === undefined ? {} : { outcomeName: wanted }),
+  });
 }
 
 /** `chancewise chart`: an SVG of the people charts for a topic's outcome or a bare effect. */

@@ -133,11 +133,6 @@ function parsePeriods(parsed: ParsedArgs): EffectQuery['periods'] {
   return { baselineYears: parseYears(over, '--over'), targetYears: parseYears(to, '--to') };
 }
 
-/** True when any effect flag is present. */
-export function hasEffectFlags(parsed: ParsedArgs): boolean {
-  return EFFECT_ONLY_FLAGS.some((flag) => parsed.flags.has(flag));
-}
-
 /**
  * Build the core's effect query from the effect flags of `compute` (and `chart`).
  *

@@ -69,8 +69,3 @@ export function parseBaselineRisk(input: RiskInput, field: string): number {
   if (value <= 0 || value >= 1) fail('baseline-out-of-range', field, { risk: value });
   return value;
 }
-
-/** True when the error is one of the risk-reading problems. */
-export function isRiskProblem(error: unknown): error is InputError {
-  return error instanceof InputError && error.problem.code.startsWith('risk-');
-}

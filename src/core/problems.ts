@@ -94,8 +94,3 @@ export class InputError extends Error {
 export function fail(code: ProblemCode, field: string, values: ProblemValues = {}): never {
   throw new InputError(problem(code, field, values));
 }
-
-/** Re-label an InputError's field (for example a core field to a command-line flag). */
-export function withField(error: InputError, field: string): InputError {
-  return new InputError({ ...error.problem, field });
-}

@@ -38,7 +38,7 @@ export function drawPage(doc: jsPDF, items: readonly PageItem[], palette: ChartP
       }
       case 'figure': {
         const { x, y, size } = item;
-        drawFigurePdf(doc, glyphFor(item.glyph), item.group, {
+        drawFigurePdf(doc, glyphFor(item.glyph), item.look, {
           x,
           y,
           size,

@@ -5,6 +5,7 @@
  * module, evidence, prompts, questions, caution and footer.
  */
 import type { Certainty, Topic } from '../core/topic/topic.ts';
+import { type PersonLook, lookOf } from '../core/direction.ts';
 import type { PersonGroup } from '../core/types.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { amountOf } from '../core/wording/amount-of.ts';
@@ -14,7 +15,7 @@ import { handoutSentences } from '../core/wording/topic-wording.ts';
 import type { WordingSentence } from '../core/wording/wording-sentence.ts';
 import { type ChartModel, outcomeChart } from '../render/chart-model.ts';
 import { FILL_ORDER } from '../render/fill-sequence.ts';
-import type { HandoutMessages } from './messages/en.ts';
+import type { BenefitAim, HandoutMessages } from './messages/en.ts';
 
 /** One cell of the outcomes table: the people count, and how sure the research is. */
 export interface TableCell {
@@ -47,6 +48,8 @@ export interface OutcomeTable {
 /** One line of the key to the pictures. */
 export interface KeyEntry {
   readonly group: PersonGroup;
+  /** How the group's figures are drawn: `lookOf(group, wanted)`. */
+  readonly look: PersonLook;
   readonly text: string;
 }
 
@@ -144,14 +147,22 @@ function outcomeTable(result: TopicResult, model: ChartModel, headlineId: string
     cells: cellsInChartOrder(outcome, model).map((option) => tableCell(option, outcome.kind, result.denominator, messages)),
   });
   const others = result.outcomes.filter((outcome) => outcome.outcomeId !== headlineId);
+  const benefits = others.filter((outcome) => outcome.kind === 'benefit');
   const sections: TableSection[] = [
-    { heading: messages.tableBenefitRows, rows: others.filter((outcome) => outcome.kind === 'benefit').map(rowOf) },
+    { heading: messages.tableBenefitRows(benefitAim(benefits)), rows: benefits.map(rowOf) },
     { heading: messages.tableHarmRows, rows: others.filter((outcome) => outcome.kind === 'harm').map(rowOf) },
   ].filter((section) => section.rows.length > 0);
   return {
     sections,
     noSideEffects: result.outcomes.some((outcome) => outcome.kind === 'harm') ? null : messages.noSideEffects,
   };
+}
+
+/** What the options aim to do to these benefit outcomes: lower events to avoid, raise wanted ones. */
+function benefitAim(benefits: readonly OutcomeResult[]): BenefitAim {
+  const wanted = benefits.filter((outcome) => outcome.wanted).length;
+  if (wanted === 0) return 'lower';
+  return wanted === benefits.length ? 'raise' : 'both';
 }
 
 /**
@@ -172,9 +183,11 @@ const FRAME_KINDS: ReadonlySet<string> = new Set(['event-frame', 'free-frame']);
 
 /** The key: one line per look of figure that the pictures use, in fill order. */
 function keyEntries(model: ChartModel, messages: HandoutMessages): KeyEntry[] {
+  const words = model.wanted ? messages.wantedKeyGroups : messages.keyGroups;
   return FILL_ORDER.filter((group) => model.arrays.some((array) => array.groups[group] > 0)).map((group) => ({
     group,
-    text: messages.keyGroups[group],
+    look: lookOf(group, model.wanted),
+    text: words[group],
   }));
 }
 
@@ -190,7 +203,7 @@ function keyEntries(model: ChartModel, messages: HandoutMessages): KeyEntry[] {
  */
 export function handoutContent(result: TopicResult, topic: Topic, options: ContentOptions): HandoutContent {
   const { messages } = options;
-  const sheet = { denominator: result.denominator, years: result.periodYears };
+  const sheet = { denominator: result.denominator, years: result.periodYears, unit: result.periodUnit };
   const headline = headlineOutcome(result);
   const sentences = handoutSentences(result, { showNnt: options.showNnt });
   const population = sentences.filter((sentence) => sentence.kind === 'population');

@@ -2,7 +2,7 @@
  * A laid-out page as plain data: text blocks, rules, boxes and charts at
  * positions in millimetres. Layout produces blocks of items; drawing paints them.
  */
-import type { PersonGroup } from '../core/types.ts';
+import type { PersonLook } from '../core/direction.ts';
 import type { ChartModel } from '../render/chart-model.ts';
 import type { GlyphName } from '../render/icon-array-layout.ts';
 import type { TextBlock } from './text-layout.ts';
@@ -33,7 +33,7 @@ export type PageItem =
       readonly y: number;
       readonly size: number;
       readonly glyph: GlyphName;
-      readonly group: PersonGroup;
+      readonly look: PersonLook;
     }
   | {
       readonly kind: 'chart';

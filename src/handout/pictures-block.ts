@@ -92,7 +92,7 @@ function keyBlock(
     const text = textBlock(entry.text, width - indent, styles.list, measure);
     const height = Math.max(size, text.height);
     const items: PageItem[] = [
-      { kind: 'figure', x: 0, y: (height - size) / 2, size, glyph, group: entry.group },
+      { kind: 'figure', x: 0, y: (height - size) / 2, size, glyph, look: entry.look },
       ...placeBlock(textItem(text), indent, (height - text.height) / 2),
     ];
     return { items, height };

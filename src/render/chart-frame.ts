@@ -3,7 +3,7 @@
  * as plain numbers for a given width and font size. The SVG and PDF renderers
  * both draw this frame, so a chart has the same arrangement on screen and paper.
  */
-import type { PersonGroup } from '../core/types.ts';
+import type { PersonLook } from '../core/direction.ts';
 import type { ChartModel } from './chart-model.ts';
 import { type IconArrayLayout, scaleLayout } from './icon-array-layout.ts';
 import { type MeasureText, measureDejaVuSans, wrapText } from './text/measure-text.ts';
@@ -17,12 +17,12 @@ export interface FrameText {
   readonly tone: 'text' | 'muted';
 }
 
-/** A legend's sample figure: a group's look, or the outline of uncertain people. */
+/** A legend's sample figure: a group's look, or a ringed figure for the range outline. */
 export interface FrameSwatch {
   readonly x: number;
   readonly y: number;
   readonly size: number;
-  readonly look: PersonGroup | 'uncertain';
+  readonly look: PersonLook | 'uncertain';
 }
 
 export interface FrameLegendRow {
@@ -52,7 +52,7 @@ export interface FrameOptions {
   readonly width?: number;
   /** Body font size, in the same units (default 14). */
   readonly fontSize?: number;
-  /** Draw the people whose group depends on the interval outlined, with a legend line. */
+  /** Ring the people whose group depends on the interval, with a legend line. */
   readonly showRange?: boolean;
   readonly measure?: MeasureText;
 }
@@ -118,7 +118,7 @@ export function chartFrame(model: ChartModel, options: FrameOptions = {}): Chart
       height = Math.max(height, top + blockHeight);
       top += blockHeight + fontSize * 0.4;
     };
-    for (const label of array.labels) row(label.text, label.group, 'text');
+    for (const label of array.labels) row(label.text, label.look, 'text');
     if (array.note !== null) row(array.note, null, 'muted');
     if (array.range !== null) {
       top += fontSize * 0.3;

@@ -3,7 +3,9 @@
  * side — one icon array per option, each with its title, labelled groups, range
  * sentence and layout — as plain data, with no DOM and no drawing.
  */
+import { type PersonLook, lookOf } from '../core/direction.ts';
 import { peopleGroups } from '../core/people-groups.ts';
+import type { TimeUnit } from '../core/time-unit.ts';
 import type { OptionOutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { Denominator, PeopleCounts, PeopleGroups, PersonGroup } from '../core/types.ts';
 import { FILL_ORDER } from './fill-sequence.ts';
@@ -14,6 +16,8 @@ import { type RankSpan, uncertainRanks } from './uncertain-people.ts';
 /** One group's label: "4 avoid a stroke because of option A". */
 export interface ChartLabel {
   readonly group: PersonGroup;
+  /** How the group is drawn: `lookOf(group, wanted)`. */
+  readonly look: PersonLook;
   readonly count: number;
   readonly text: string;
 }
@@ -55,8 +59,12 @@ export interface ChartModel {
   readonly illustrative: string | null;
   readonly outcomeName: string;
   readonly kind: 'benefit' | 'harm' | null;
+  /** The event is one people want: gained people are drawn helped, people who lose it harmed. */
+  readonly wanted: boolean;
   readonly denominator: Denominator;
   readonly periodYears: number | null;
+  /** The unit the period was given in, for its wording. */
+  readonly periodUnit: TimeUnit;
   readonly arrangement: Arrangement;
   /** Comparison first, then the options: same size, same grid. */
   readonly arrays: readonly ChartArray[];
@@ -87,8 +95,10 @@ interface ChartContext {
   readonly id: string;
   readonly outcomeName: string;
   readonly kind: 'benefit' | 'harm' | null;
+  readonly wanted: boolean;
   readonly denominator: Denominator;
   readonly periodYears: number | null;
+  readonly periodUnit: TimeUnit;
   readonly illustrative: boolean;
   /** A bare pair, with no topic: arms are named "Without/With the option". */
   readonly bare: boolean;
@@ -124,8 +134,10 @@ export function outcomeChart(result: TopicResult, outcomeId: string, options: Ch
     id: outcome.outcomeId,
     outcomeName: outcome.name,
     kind: outcome.kind,
+    wanted: outcome.wanted,
     denominator: result.denominator,
     periodYears: result.periodYears,
+    periodUnit: result.periodUnit,
     illustrative: result.illustrative,
     bare: false,
   };
@@ -138,7 +150,11 @@ export interface PairInput {
   /** The outcome in a sentence ("a stroke"); default "the outcome". */
   readonly outcomeName?: string;
   readonly periodYears?: number | null;
+  /** The unit the period was given in (default years). */
+  readonly periodUnit?: TimeUnit;
   readonly kind?: 'benefit' | 'harm' | null;
+  /** The event is one people want (default false). */
+  readonly wanted?: boolean;
 }
 
 /**
@@ -154,8 +170,10 @@ export function pairChart(pair: PairInput, options: ChartOptions = {}): ChartMod
     id: 'pair',
     outcomeName: pair.outcomeName ?? messages.defaultOutcome,
     kind: pair.kind ?? null,
+    wanted: pair.wanted ?? false,
     denominator,
     periodYears: pair.periodYears ?? null,
+    periodUnit: pair.periodUnit ?? 'years',
     illustrative: false,
     bare: true,
   };
@@ -182,7 +200,7 @@ function buildChart(arms: readonly ArmInput[], context: ChartContext, options: C
   const messages = options.messages ?? chartMessagesEn;
   const arrangement = options.arrangement ?? 'grouped';
   const arrays = arms.map((arm) => buildArray(arm, context, messages, arrangement, options.seed));
-  const heading = messages.heading(context.outcomeName, context.periodYears);
+  const heading = messages.heading(context.outcomeName, context.periodYears, context.periodUnit);
   const illustrative = context.illustrative ? messages.illustrative : null;
   const sentences = arrays.flatMap((array) => [array.summary, array.note, array.range?.text ?? null]).filter(
     (sentence): sentence is string => sentence !== null,
@@ -193,8 +211,10 @@ function buildChart(arms: readonly ArmInput[], context: ChartContext, options: C
     illustrative,
     outcomeName: context.outcomeName,
     kind: context.kind,
+    wanted: context.wanted,
     denominator: context.denominator,
     periodYears: context.periodYears,
+    periodUnit: context.periodUnit,
     arrangement,
     arrays,
     sentences,
@@ -215,17 +235,19 @@ function buildArray(
   if (arm.role === 'comparison' && (arm.groups.prevented !== 0 || arm.groups.caused !== 0)) {
     throw new RangeError(`outcomeChart requires the comparison to have only event and free people (${arm.name})`);
   }
-  const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears };
+  const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears, periodUnit: context.periodUnit };
   const title = context.bare
     ? messages.pairTitle(titleValues, arm.role)
     : arm.role === 'comparison'
       ? messages.comparisonTitle(titleValues)
       : messages.optionTitle(titleValues);
   const cause = messages.causeName(arm.name, context.bare);
+  const words = context.wanted ? messages.wantedLabels : messages.labels;
   const labels = FILL_ORDER.filter((group) => arm.groups[group] > 0).map((group) => ({
     group,
+    look: lookOf(group, context.wanted),
     count: arm.groups[group],
-    text: messages.labels[group]({ count: arm.groups[group], outcome: context.outcomeName, option: cause, role: arm.role }),
+    text: words[group]({ count: arm.groups[group], outcome: context.outcomeName, option: cause, role: arm.role }),
   }));
   const unchanged = arm.role === 'option' && arm.groups.prevented === 0 && arm.groups.caused === 0;
   const interval = arm.role === 'option' ? (arm.perPeople?.interventionRange ?? null) : null;

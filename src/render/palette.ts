@@ -4,12 +4,12 @@
  * (Okabe & Ito 2008, Color Universal Design); the incremental groups also carry a
  * pattern so that a greyscale print never relies on colour alone (WCAG 2.2, 1.4.1).
  */
-import type { PersonGroup } from '../core/types.ts';
+import type { PersonLook } from '../core/direction.ts';
 
 /** The fill pattern of a group: solid, white dots (benefit) or white diagonal hatching (harm). */
 export type PatternName = 'solid' | 'dots' | 'hatch';
 
-/** How one group of people is drawn. */
+/** How one look of person is drawn (see `lookOf` in `core/direction.ts`). */
 export interface GroupStyle {
   /** Fill of the figure. */
   readonly fill: string;
@@ -28,10 +28,14 @@ export interface ChartPalette {
   readonly text: string;
   /** Secondary text such as the range sentence (≥ 4.5:1 on the background). */
   readonly mutedText: string;
-  readonly groups: Readonly<Record<PersonGroup, GroupStyle>>;
-  /** Outline of people whose group depends on where in the interval the truth lies. */
+  /**
+   * The four looks: `helped` is the look of people the option helps (fewer unwanted or more
+   * wanted events), `harmed` of those it harms. A group becomes a look through `lookOf`.
+   */
+  readonly groups: Readonly<Record<PersonLook, GroupStyle>>;
+  /** Dashed ring drawn around people whose group depends on where in the interval the truth lies. */
   readonly uncertainOutline: string;
-  /** Dash of that outline, in cell sizes (dash, gap). */
+  /** Dash of that ring, in cell sizes (dash, gap). */
   readonly uncertainDash: readonly [number, number];
   /** Width of every figure's outline, as a share of the cell size. */
   readonly outlineWidth: number;
@@ -61,8 +65,8 @@ export const colourPalette: ChartPalette = {
   mutedText: '#4D4D4D',
   groups: {
     event: { fill: OKABE_ITO.blue, outline: '#005A8C', pattern: 'solid', patternInk: OKABE_ITO.blue },
-    prevented: { fill: OKABE_ITO.bluishGreen, outline: '#00664A', pattern: 'dots', patternInk: '#FFFFFF' },
-    caused: { fill: OKABE_ITO.vermillion, outline: '#9C4500', pattern: 'hatch', patternInk: '#FFFFFF' },
+    helped: { fill: OKABE_ITO.bluishGreen, outline: '#00664A', pattern: 'dots', patternInk: '#FFFFFF' },
+    harmed: { fill: OKABE_ITO.vermillion, outline: '#9C4500', pattern: 'hatch', patternInk: '#FFFFFF' },
     free: { fill: '#E8E8E8', outline: '#767676', pattern: 'solid', patternInk: '#E8E8E8' },
   },
   uncertainOutline: '#1A1A1A',
@@ -81,8 +85,8 @@ export const blackAndWhitePalette: ChartPalette = {
   mutedText: '#333333',
   groups: {
     event: { fill: '#000000', outline: '#000000', pattern: 'solid', patternInk: '#000000' },
-    prevented: { fill: '#6E6E6E', outline: '#000000', pattern: 'dots', patternInk: '#FFFFFF' },
-    caused: { fill: '#6E6E6E', outline: '#000000', pattern: 'hatch', patternInk: '#FFFFFF' },
+    helped: { fill: '#6E6E6E', outline: '#000000', pattern: 'dots', patternInk: '#FFFFFF' },
+    harmed: { fill: '#6E6E6E', outline: '#000000', pattern: 'hatch', patternInk: '#FFFFFF' },
     free: { fill: '#FFFFFF', outline: '#595959', pattern: 'solid', patternInk: '#FFFFFF' },
   },
   uncertainOutline: '#000000',

@@ -15,7 +15,6 @@ import { patternIdsFor, personPaint } from '../render/svg/person-paint.ts';
 import type { PatternIds } from '../render/svg/person-paint.ts';
 import { appendPatterns } from '../render/svg/svg-patterns.ts';
 import { svgNumber } from '../render/svg/svg-number.ts';
-import type { PersonGroup } from '../core/types.ts';
 import type { PersonLook } from './slide-model.ts';
 
 const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
@@ -28,22 +27,10 @@ export function drawingSize(layout: IconArrayLayout): { readonly width: number; 
   return { width: layout.geometry.width * factor, height: layout.geometry.height * factor };
 }
 
-/**
- * The palette's group of a look: the helped look is the fill of people an option spares an
- * unwanted event (`prevented`), the harmed look that of people it gives one (`caused`), so a
- * trainee learns one code for every chart and slide.
- */
-const PAINT_OF: Readonly<Record<PersonLook, PersonGroup | 'uncertain'>> = {
-  event: 'event',
-  helped: 'prevented',
-  harmed: 'caused',
-  free: 'free',
-  uncertain: 'uncertain',
-};
-
 /** Give a path the paint of a look. */
 function paint(element: Element, look: PersonLook, palette: ChartPalette, ids: PatternIds, cellSize: number): void {
-  const found = personPaint(palette, PAINT_OF[look], ids, cellSize);
+  // The palette is keyed by look (helped, harmed), as the charts are: one code for every chart and slide.
+  const found = personPaint(palette, look, ids, cellSize);
   element.setAttribute('fill', found.fill);
   element.setAttribute('stroke', found.stroke);
   if (found.dash !== null) {

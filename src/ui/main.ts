@@ -13,10 +13,10 @@ import './styles/app.css';
 /** Share the people charts' colours with the rest of the interface (set through the CSSOM, which the policy allows). */
 function applyPaletteTokens(root: HTMLElement): void {
   const { groups } = colourPalette;
-  root.style.setProperty('--benefit-fill', groups.prevented.fill);
-  root.style.setProperty('--benefit', groups.prevented.outline);
-  root.style.setProperty('--harm-fill', groups.caused.fill);
-  root.style.setProperty('--harm', groups.caused.outline);
+  root.style.setProperty('--benefit-fill', groups.helped.fill);
+  root.style.setProperty('--benefit', groups.helped.outline);
+  root.style.setProperty('--harm-fill', groups.harmed.fill);
+  root.style.setProperty('--harm', groups.harmed.outline);
   root.style.setProperty('--event-fill', groups.event.fill);
 }
 

@@ -12,7 +12,7 @@ import { ROOT, run } from './support.ts';
 const folder = mkdtempSync(join(tmpdir(), 'chancewise-refusals-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
 
-const demo = join(ROOT, 'assets/demo/01-heart-tablet.json');
+const demo = join(ROOT, 'assets/demo/01-kidney-stone.json');
 const truncated = join(folder, 'truncated.json');
 writeFileSync(truncated, readFileSync(demo, 'utf8').slice(0, 400));
 const wrongType = join(folder, 'wrong-type.json');

@@ -82,22 +82,22 @@ describe('chancewise compute with a topic', () => {
     }
   });
 
-  it('computes the first demo: a risk ratio of 0.75 at 15% is 11 in 100 and NNTB 27', async () => {
+  it('computes the first demo: a risk ratio of 0.6 at 4 in 10 is 24 in 100 and NNTB 7', async () => {
     const json = await topicJson(['--demo']);
     expect(json.topic).toMatch(/illustrative/i);
     expect(json.denominator).toBe(100);
-    expect(json.period).toBe(10);
-    const standard = option(json, 0, 1);
-    expect(standard.name).toBe('the standard dose');
-    // 0.15 × 0.75 = 0.1125 → 11 in 100 (rounded half up); 1/0.0375 = 26.7 → NNTB 27 (derived).
-    expect(standard.interventionRisk.estimate).toBeCloseTo(0.1125, 12);
-    expect(standard.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 15, intervention: 11, difference: 4 });
-    expect(standard.nnt).toMatchObject({ rounded: 27, label: 'NNTB' });
-    expect(standard.groups).toEqual({ event: 11, prevented: 4, caused: 0, free: 85 });
-    // A harm: muscle pain 5% × 1.2 = 6% → NNTH 100 (derived).
-    const muscle = option(json, 1, 1);
-    expect(muscle.nnt).toMatchObject({ rounded: 100, label: 'NNTH' });
-    expect(muscle.groups).toEqual({ event: 5, prevented: 0, caused: 1, free: 94 });
+    expect(json.period).toBe(5);
+    const water = option(json, 0, 1);
+    expect(water.name).toBe('extra water each day');
+    // 0.4 × 0.6 = 0.24 → 24 in 100; 1/0.16 = 6.25 → NNTB 7 (derived).
+    expect(water.interventionRisk.estimate).toBeCloseTo(0.24, 12);
+    expect(water.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 40, intervention: 24, difference: 16 });
+    expect(water.nnt).toMatchObject({ rounded: 7, label: 'NNTB' });
+    expect(water.groups).toEqual({ event: 24, prevented: 16, caused: 0, free: 60 });
+    // A harm: broken sleep 15% × 1.6 = 24% → 9 more in 100, 1/0.09 = 11.1 → NNTH 11 (derived; an NNTH is rounded down).
+    const night = option(json, 1, 1);
+    expect(night.nnt).toMatchObject({ rounded: 11, label: 'NNTH' });
+    expect(night.groups).toEqual({ event: 15, prevented: 0, caused: 9, free: 76 });
   });
 
   it('computes the screening demo over 15 years from a 10-year baseline, per 1000', async () => {
@@ -128,15 +128,15 @@ describe('chancewise compute with a topic', () => {
   it('uses the denominator given with --per for every option', async () => {
     const json = await topicJson(['--demo', '--per', '1000']);
     expect(json.denominator).toBe(1000);
-    // 0.1125 × 1000 = 112.5 → 113 (rounded half up, common practice).
-    expect(option(json, 0, 1).perPeople).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 150, intervention: 113, difference: 37 });
+    // 0.45 × 0.4 = 0.18 → 180 in 1000 with the citrate drink; the comparison 0.4 → 400 (derived).
+    expect(option(json, 0, 2).perPeople).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 400, intervention: 180, difference: 220 });
     expect(json.warnings.some((sentence) => sentence.includes('per 1000 people, because'))).toBe(false);
   });
 
   it('prints a readable summary of the demo with its numbers', async () => {
     const found = await run(['compute', '--demo']);
     expect(found.code).toBe(0);
-    for (const part of ['Illustrative', 'a heart attack or stroke', 'no tablet (comparison): 15 in 100', 'NNTB 27', 'NNTH 100', '15 without, 11 with the option (4 fewer)']) {
+    for (const part of ['Illustrative', 'another kidney stone', 'no change (comparison): 40 in 100', 'NNTB 7', 'NNTH 11', '40 without, 24 with the option (16 fewer)']) {
       expect(found.stdout).toContain(part);
     }
     expect(found.stdout).not.toMatch(/NaN|Infinity|undefined/);

@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { isTopicFileText, readTopicDocument } from '../../electron/read-topic-document.ts';
 
-const demo = fileURLToPath(new URL('../../assets/demo/01-heart-tablet.json', import.meta.url));
+const demo = fileURLToPath(new URL('../../assets/demo/01-kidney-stone.json', import.meta.url));
 let folder: string;
 
 beforeAll(async () => {

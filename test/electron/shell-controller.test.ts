@@ -13,7 +13,7 @@ vi.mock('electron', () => import('./electron-mock.ts'));
 
 const { startShellController } = await import('../../electron/shell-controller.ts');
 
-const demo = fileURLToPath(new URL('../../assets/demo/01-heart-tablet.json', import.meta.url));
+const demo = fileURLToPath(new URL('../../assets/demo/01-kidney-stone.json', import.meta.url));
 let base: string;
 let userData: string;
 
@@ -63,9 +63,9 @@ describe('startShellController()', () => {
     await vi.waitFor(() => expect(window.webContents.sent).toHaveLength(1));
     expect(window.webContents.sent[0]).toEqual([
       DOCUMENT_CHANNEL,
-      { kind: 'file', text: await fs.readFile(demo, 'utf8'), fileName: '01-heart-tablet.json' },
+      { kind: 'file', text: await fs.readFile(demo, 'utf8'), fileName: '01-kidney-stone.json' },
     ]);
-    expect(window.title).toBe('01-heart-tablet.json — Chancewise');
+    expect(window.title).toBe('01-kidney-stone.json — Chancewise');
   });
 
   it('after a renderer crash, reloads the page and restores the last snapshot in full', async () => {
@@ -146,8 +146,8 @@ describe('startShellController()', () => {
     const { controller, contents } = await start();
     await expect(controller.actions.openRecentDocument(contents, '/etc/passwd')).rejects.toMatchObject({ code: 'not-in-recent-list' });
     dialog.showOpenDialog.mockImplementationOnce(async () => ({ canceled: false, filePaths: [demo] }));
-    expect((await controller.actions.openDocument(contents))?.fileName).toBe('01-heart-tablet.json');
-    expect((await controller.actions.openRecentDocument(contents, demo))?.fileName).toBe('01-heart-tablet.json');
+    expect((await controller.actions.openDocument(contents))?.fileName).toBe('01-kidney-stone.json');
+    expect((await controller.actions.openRecentDocument(contents, demo))?.fileName).toBe('01-kidney-stone.json');
   });
 
   it('asks before closing with unsaved changes, and saves first when asked to', async () => {

@@ -16,7 +16,7 @@ vi.mock('electron', () => import('./electron-mock.ts'));
 
 const { startShellController } = await import('../../electron/shell-controller.ts');
 
-const demo = fileURLToPath(new URL('../../assets/demo/01-heart-tablet.json', import.meta.url));
+const demo = fileURLToPath(new URL('../../assets/demo/01-kidney-stone.json', import.meta.url));
 let base: string;
 let userData: string;
 let autostart: string;
@@ -94,7 +94,7 @@ describe('snapshots found at start-up', () => {
   });
 
   it('after restoring a snapshot of a file on the recent list, Save writes that file', async () => {
-    const topic = path.join(base, 'heart.cwtopic');
+    const topic = path.join(base, 'kidney.cwtopic');
     const text = await fs.readFile(demo, 'utf8');
     await fs.writeFile(topic, text);
     await fs.writeFile(path.join(userData, 'recent-files.json'), JSON.stringify([topic]));
@@ -106,15 +106,15 @@ describe('snapshots found at start-up', () => {
     acceptRestore();
     const { controller, contents } = await start();
     await controller.actions.rendererReady(contents);
-    expect((await controller.actions.saveDocument(contents, text))?.fileName).toBe('heart.cwtopic');
+    expect((await controller.actions.saveDocument(contents, text))?.fileName).toBe('kidney.cwtopic');
     expect(dialog.showSaveDialog).not.toHaveBeenCalled();
   });
 });
 
 describe('recoveryDetail()', () => {
   it('names the topic by its full path', () => {
-    const detail = recoveryDetail({ savedAt: 0, topicPath: '/home/a/Clinic/heart.cwtopic', asksWhereToSave: false, skippedFile: null });
-    expect(detail).toContain('/home/a/Clinic/heart.cwtopic');
+    const detail = recoveryDetail({ savedAt: 0, topicPath: '/home/a/Clinic/kidney.cwtopic', asksWhereToSave: false, skippedFile: null });
+    expect(detail).toContain('/home/a/Clinic/kidney.cwtopic');
     expect(recoveryDetail({ savedAt: 0, topicPath: null, asksWhereToSave: false, skippedFile: 'x.cwtopic' })).toContain(
       'an unsaved topic',
     );

@@ -123,7 +123,8 @@ describe('building a handout', () => {
     expect(pdfText(writePdf(handout.pdf))).toContain('people aged ≥ 65 with a risk ≤ 15% – Zoë’s clinic, café ∞');
   });
 
-  // Flesch–Kincaid grade (Kincaid et al. 1975); NIH advises grade 8 or below for patient material (Rooney et al. 2021).
+  // Flesch–Kincaid grade (Kincaid et al. 1975); patient material at grade 8 or below, the top of the usual
+  // plain-language target of grade 6 to 8 (common practice).
   it('returns the Flesch Reading Ease and Flesch–Kincaid grade of its prose, at grade 8 or below for the demos', () => {
     for (const each of demos()) {
       const handout = build(each);
@@ -137,7 +138,7 @@ describe('building a handout', () => {
   it('prints the clinician given and the NNT sentences when asked', () => {
     const text = pdfText(writePdf(build(demo, { clinician: 'Dr A. Patel, Riverside Surgery', showNnt: true }).pdf));
     expect(text).toContain('Prepared by Dr A. Patel, Riverside Surgery');
-    expect(text).toMatch(/NNTB \d+: treating \d+ people like you with the standard dose/);
+    expect(text).toMatch(/NNTB \d+: treating \d+ people like you with extra water each day/);
   });
 
   it('builds in the black-and-white print theme too', () => {

@@ -16,8 +16,8 @@ describe('the content of a handout', () => {
 
   it('shows the headline outcome, one picture per option, the comparison first', () => {
     expect(headline.isHeadline).toBe(true);
-    expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['none', 'standard', 'higher']);
-    expect(content.chart.titles).toEqual(['No tablet', 'The standard dose', 'The higher dose']);
+    expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['as-now', 'water', 'citrate']);
+    expect(content.chart.titles).toEqual(['No change', 'Extra water each day', 'A citrate drink twice a day']);
   });
 
   it('leaves the pictures themselves unchanged: the same people in the same places as the chart', () => {
@@ -67,17 +67,20 @@ describe('the content of a handout', () => {
 
   it('puts every other outcome in the table, its cells in the order of the pictures', () => {
     const rows = content.table.sections.flatMap((section) => section.rows);
-    expect(rows.map((row) => row.outcomeId)).toEqual(['muscle', 'diabetes']);
+    expect(rows.map((row) => row.outcomeId)).toEqual(['night', 'stomach']);
     for (const row of rows) expect(row.cells).toHaveLength(3);
   });
 
   // EU SmPC guideline (European Commission 2009, section 4.8) / CIOMS III: common is ≥ 1/100 and < 1/10.
-  // Demo: muscle pain 5% without the tablet, RR 1.2 and 1.4 → 6% and 7%; diabetes 8%, RR 1.1 and 1.2 → 8.8% and 9.6%.
+  // Very common is ≥ 1/10 in the same guideline. Demo: broken sleep 15% with no change, RR 1.6 with
+  // extra water → 24%, RR 1 with the citrate drink → 15%; an upset stomach 5%, RR 1 → 5%, and
+  // OR 2.6 → 2.6 × 0.05 / (0.95 + 0.13) = 12.04% with the citrate drink (derived).
   it('gives each side effect its frequency band with the number beside the word', () => {
-    const [muscle, diabetes] = content.table.sections.flatMap((section) => section.rows);
-    expect(muscle?.cells.map((cell) => cell.value)).toEqual(['common: 5 in 100', 'common: 6 in 100', 'common: 7 in 100']);
-    expect(diabetes?.cells.map((cell) => cell.value)).toEqual(['common: 8 in 100', 'common: 9 in 100', 'common: 10 in 100']);
-    expect(muscle?.cells.map((cell) => cell.note)).toEqual([null, 'moderate certainty', 'low certainty']);
+    const [night, stomach] = content.table.sections.flatMap((section) => section.rows);
+    expect(night?.cells.map((cell) => cell.value)).toEqual(['very common: 15 in 100', 'very common: 24 in 100', 'very common: 15 in 100']);
+    expect(stomach?.cells.map((cell) => cell.value)).toEqual(['common: 5 in 100', 'common: 5 in 100', 'very common: 12 in 100']);
+    expect(night?.cells.map((cell) => cell.note)).toEqual([null, 'low certainty', 'low certainty']);
+    expect(stomach?.cells.map((cell) => cell.note)).toEqual([null, 'very low certainty', 'moderate certainty']);
     expect(content.table.sections.map((section) => section.heading)).toEqual(['Side effects: how common they are']);
   });
 
@@ -94,14 +97,14 @@ describe('the content of a handout', () => {
   });
 
   it('names who the numbers are for and the one period and denominator', () => {
-    expect(content.audience.join(' ')).toContain('people aged 55 to 70');
-    expect(content.audience).toContain('Every number on this sheet is out of 100 people, over the next 10 years.');
+    expect(content.audience.join(' ')).toContain('adults who have passed one kidney stone');
+    expect(content.audience).toContain('Every number on this sheet is out of 100 people, over the next 5 years.');
   });
 
   it('gives the evidence source, the date it was checked in words, and where the starting chance comes from', () => {
     expect(content.evidence.items[0]).toBe(topic.evidence.summary);
     expect(content.evidence.items[1]).toBe('The research was last checked on 1 November 2026.');
-    expect(content.evidence.items[2]).toBe('Your starting chance of a heart attack or stroke comes from: Illustrative risk score result (invented).');
+    expect(content.evidence.items[2]).toBe('Your starting chance of another kidney stone comes from: Invented clinic follow-up figures.');
   });
 
   it('asks the topic’s questions, and general ones when it has none', () => {
@@ -119,7 +122,7 @@ describe('the content of a handout', () => {
   });
 
   it('carries the standard caution with the sheet’s denominator and period', () => {
-    expect(content.caution.text).toContain('estimates for groups of 100 people like you over the next 10 years');
+    expect(content.caution.text).toContain('estimates for groups of 100 people like you over the next 5 years');
     expect(content.caution.text).toContain('not a prediction for you');
     expect(content.caution.text).toContain('does not replace their advice');
     expect(content.caution.text).toContain('Follow local guidance');

@@ -32,7 +32,7 @@ describe('chartFrame', () => {
     const frame = chartFrame(model);
     const right = frame.arrays[1]!;
     const gridBottom = right.grid.y + right.grid.layout.geometry.height;
-    expect(right.legend.map((row) => row.swatch?.look ?? null)).toEqual(['event', 'prevented', 'free', null]);
+    expect(right.legend.map((row) => row.swatch?.look ?? null)).toEqual(['event', 'helped', 'free', null]);
     for (const row of right.legend) expect(row.text.lines[0]!.y).toBeGreaterThan(gridBottom);
     expect(frame.height).toBeGreaterThan(right.legend.at(-1)!.text.lines.at(-1)!.y);
   });

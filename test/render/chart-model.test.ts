@@ -15,8 +15,8 @@ describe('outcomeChart', () => {
   it('titles each array with the group, the option and the period', () => {
     const model = outcomeChart(result, 'stroke');
     expect(model.heading).toBe('Chance of a stroke over 10 years');
-    expect(model.arrays[0]!.title).toBe('If 100 people like you have no treatment for 10 years');
-    expect(model.arrays[1]!.title).toBe('If 100 people like you take option A for 10 years');
+    expect(model.arrays[0]!.title).toBe('With no treatment: 100 people over 10 years');
+    expect(model.arrays[1]!.title).toBe('With option A: 100 people over 10 years');
   });
 
   // Invented illustrative numbers (19 without, 15 with, per 100): groups from peopleGroups.
@@ -65,7 +65,7 @@ describe('outcomeChart', () => {
     const thousand = topicFixture(1000, { comparison: 125, intervention: 94 });
     const model = outcomeChart(thousand, 'stroke');
     expect(model.arrays[1]!.groups).toEqual({ denominator: 1000, event: 94, prevented: 31, caused: 0, free: 875 });
-    expect(model.arrays[1]!.title).toBe('If 1000 people like you take option A for 10 years');
+    expect(model.arrays[1]!.title).toBe('With option A: 1000 people over 10 years');
   });
 
   it('rejects an unknown outcome or option', () => {

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import type { PersonGroup } from '../../src/core/types.ts';
+import type { PersonLook } from '../../src/core/direction.ts';
 import { colourDifference, greyscale, simulateVision } from '../../src/render/colour/colour-vision.ts';
 import { WCAG_THRESHOLDS, contrastRatio, relativeLuminance } from '../../src/render/colour/contrast.ts';
 import { OKABE_ITO, blackAndWhitePalette, colourPalette } from '../../src/render/palette.ts';
 
-const GROUPS: readonly PersonGroup[] = ['event', 'prevented', 'caused', 'free'];
+const GROUPS: readonly PersonLook[] = ['event', 'helped', 'harmed', 'free'];
 const PAIRS = GROUPS.flatMap((first, index) => GROUPS.slice(index + 1).map((second) => [first, second] as const));
 
 describe('colourPalette', () => {
@@ -12,13 +12,13 @@ describe('colourPalette', () => {
   it('uses the Okabe–Ito blue, bluish green and vermillion for events, benefit and harm', () => {
     expect(OKABE_ITO).toMatchObject({ blue: '#0072B2', bluishGreen: '#009E73', vermillion: '#D55E00' });
     expect(colourPalette.groups.event.fill).toBe(OKABE_ITO.blue);
-    expect(colourPalette.groups.prevented.fill).toBe(OKABE_ITO.bluishGreen);
-    expect(colourPalette.groups.caused.fill).toBe(OKABE_ITO.vermillion);
+    expect(colourPalette.groups.helped.fill).toBe(OKABE_ITO.bluishGreen);
+    expect(colourPalette.groups.harmed.fill).toBe(OKABE_ITO.vermillion);
   });
 
   it('puts dots on the benefit and hatching on the harm, solid fills elsewhere', () => {
-    expect(colourPalette.groups.prevented.pattern).toBe('dots');
-    expect(colourPalette.groups.caused.pattern).toBe('hatch');
+    expect(colourPalette.groups.helped.pattern).toBe('dots');
+    expect(colourPalette.groups.harmed.pattern).toBe('hatch');
     expect(colourPalette.groups.event.pattern).toBe('solid');
     expect(colourPalette.groups.free.pattern).toBe('solid');
   });
@@ -44,7 +44,7 @@ describe.each([colourPalette, blackAndWhitePalette])('the $name palette', (palet
   });
 
   it('sets the dots and hatching at 3:1 or more against the fill they sit on', () => {
-    for (const group of ['prevented', 'caused'] as const) {
+    for (const group of ['helped', 'harmed'] as const) {
       const style = palette.groups[group];
       expect(contrastRatio(style.patternInk, style.fill)).toBeGreaterThanOrEqual(WCAG_THRESHOLDS.graphics);
     }
@@ -74,12 +74,12 @@ describe('colourPalette under simulated colour-vision deficiency', () => {
   });
 
   it('keeps benefit and harm far apart in hue for readers with normal vision', () => {
-    expect(colourDifference(colourPalette.groups.prevented.fill, colourPalette.groups.caused.fill)).toBeGreaterThan(50);
+    expect(colourDifference(colourPalette.groups.helped.fill, colourPalette.groups.harmed.fill)).toBeGreaterThan(50);
   });
 
   it('makes events the darkest group, so the total stands out in any print', () => {
     const events = relativeLuminance(colourPalette.groups.event.fill);
-    for (const group of ['prevented', 'caused', 'free'] as const) {
+    for (const group of ['helped', 'harmed', 'free'] as const) {
       expect(events).toBeLessThan(relativeLuminance(colourPalette.groups[group].fill));
     }
   });

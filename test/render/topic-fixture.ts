@@ -10,6 +10,10 @@ interface ArmCounts {
   readonly comparison: number;
   readonly intervention: number;
   readonly range?: { readonly lower: number; readonly upper: number } | null;
+  /** The outcome's event is one people want (default false). */
+  readonly wanted?: boolean;
+  /** The outcome's name in place of the fixture's. */
+  readonly name?: string;
 }
 
 function option(id: string, name: string, isComparison: boolean, counts: ArmCounts, denominator: Denominator): OptionOutcomeResult {
@@ -45,9 +49,9 @@ function option(id: string, name: string, isComparison: boolean, counts: ArmCoun
 function outcome(id: string, name: string, kind: 'benefit' | 'harm', counts: ArmCounts, denominator: Denominator): OutcomeResult {
   return {
     outcomeId: id,
-    name,
+    name: counts.name ?? name,
     kind,
-    wanted: false,
+    wanted: counts.wanted ?? false,
     isHeadline: kind === 'benefit',
     baselineRisk: counts.comparison / denominator,
     baselineSource: 'Invented for tests',

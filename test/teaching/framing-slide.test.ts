@@ -4,7 +4,7 @@ import { topicWording } from '../../src/core/wording/topic-wording.ts';
 import { buildSlide } from '../../src/teaching/build-slide.ts';
 import { framingNumbers } from '../../src/teaching/framing-slide.ts';
 import { shortDecimal } from '../../src/teaching/messages/en.ts';
-import { HEART, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // NNT = 1/ARR rounded up, ARR = p0 − p1 (Cochrane Handbook 5.1, §12.5.4.1–12.5.4.3; Altman 1998,
 // BMJ 317:1309). The worked examples are the Handbook's own (§12.5.4.2 for a risk ratio,
@@ -55,7 +55,7 @@ describe('the framing step', () => {
     expect(found.nnt?.value).toBe('No number needed to treat');
   });
 
-  it.each([HEART, SCREENING])('uses the core’s own figures for %s: its relative sentence, drawn people and NNT', (name) => {
+  it.each([STONE, SCREENING])('uses the core’s own figures for %s: its relative sentence, drawn people and NNT', (name) => {
     const topic = demoTopic(name);
     const result = computeTopic(topic);
     const wording = topicWording(result);
@@ -77,17 +77,27 @@ describe('the framing step', () => {
   });
 
   it('shows the people of the same result beside the cards, with its source line', () => {
-    const slide = buildSlide(itemOf(demoTopic(HEART)), 'framing');
+    const slide = buildSlide(itemOf(demoTopic(STONE)), 'framing');
     expect(slide.layout).toBe('cards');
     expect(slide.panels.map((panel) => panel.chips.map((chip) => [chip.look, chip.count]))).toEqual([
       [
-        ['event', 11],
-        ['helped', 4],
-        ['free', 85],
+        ['event', 24],
+        ['helped', 16],
+        ['free', 60],
       ],
     ]);
-    expect(slide.cards.map((card) => card.value)).toEqual(['25% lower risk', '4 in 100 fewer', 'Treat 27 to prevent 1']);
-    expect(slide.evidence?.source).toBe('Akl et al. 2011; Zipkin et al. 2014');
+    // RR 0.6 at 40%: 40% lower, 40 − 24 = 16 in 100 fewer, 100 ÷ 16 = 6.25 → 7 (derived).
+    expect(slide.cards.map((card) => card.value)).toEqual(['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1']);
+    // Akl et al. (Cochrane Database Syst Rev 2011;(3):CD006776), abstract: compared with the absolute
+    // reduction, a relative reduction made little or no difference to understanding but was seen as
+    // larger and was more persuasive; the NNT was understood less well than the absolute reduction.
+    // Zipkin et al. (Ann Intern Med 2014;161:270–280), abstract: absolute formats were better
+    // understood than relative ones, and the NNT lessened understanding.
+    expect(slide.evidence).toEqual({
+      finding:
+        'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
+      source: 'Akl 2011, Cochrane · Zipkin 2014, Annals',
+    });
   });
 });
 

@@ -15,7 +15,7 @@ import type { PresentationItem } from '../../src/teaching/presentation-item.ts';
 import type { ItemChoices } from '../../src/teaching/teaching-set-file.ts';
 import { DEFAULT_STEPS } from '../../src/teaching/teaching-steps.ts';
 
-export const HEART = '01-heart-tablet.json';
+export const STONE = '01-kidney-stone.json';
 export const SCREENING = '02-bowel-screening.json';
 /** An invented topic whose headline event is wanted, with an unwanted and a wanted harm (test/fixtures/topics). */
 export const WANTED = 'wanted-itch-relief.json';

@@ -6,7 +6,7 @@ import { isUsableTopicPath, resolveTeachingSet } from '../../src/teaching/resolv
 import { readTeachingSet, writeTeachingSet } from '../../src/teaching/teaching-set-file.ts';
 import type { TeachingSet } from '../../src/teaching/teaching-set-file.ts';
 import { DEFAULT_STEPS, STEP_KINDS } from '../../src/teaching/teaching-steps.ts';
-import { HEART, SCREENING, demoText, demoTopic, pairTopic, projectFile } from './teaching-fixtures.ts';
+import { STONE, SCREENING, demoText, demoTopic, pairTopic, projectFile } from './teaching-fixtures.ts';
 
 // The teaching-set format is this app's own (documented in src/teaching/teaching-set-schema.ts);
 // the checks below hold it to that definition and to JSON (RFC 8259). Expected wording of
@@ -43,24 +43,24 @@ describe('reading a teaching set', () => {
     const resolved = await resolveTeachingSet('example', set, null);
     if (!resolved.ok) throw new Error(resolved.message);
     expect(resolved.items.map((item) => [item.topic.title, item.optionId, item.harmIds])).toEqual([
-      [demoTopic(HEART).title, 'standard', ['muscle']],
+      [demoTopic(STONE).title, 'water', ['night']],
       [demoTopic(SCREENING).title, 'screening', ['camera']],
     ]);
   });
 
   it('fills in the choices an item leaves out: every step, no fixed option, harm or denominator', () => {
-    const set = readOk(setText([{ topic: embedded(HEART) }]));
+    const set = readOk(setText([{ topic: embedded(STONE) }]));
     expect(set.items[0]).toMatchObject({ option: null, harm: null, per: null, steps: [...STEP_KINDS] });
   });
 
   it('reads back what it writes, topics inside and without the patient’s details', () => {
-    const topic = { ...demoTopic(HEART), patient: { name: 'A. Patient', reference: 'X-1' } };
-    const text = writeTeachingSet('Round trip', [{ topic, option: 'higher', harm: 'diabetes', per: 1000, steps: ['helped', 'framing'] }]);
+    const topic = { ...demoTopic(STONE), patient: { name: 'A. Patient', reference: 'X-1' } };
+    const text = writeTeachingSet('Round trip', [{ topic, option: 'citrate', harm: 'stomach', per: 1000, steps: ['helped', 'framing'] }]);
     expect(text).not.toContain('A. Patient');
     const set = readOk(text);
     expect(set.title).toBe('Round trip');
     const item = set.items[0];
-    expect(item).toMatchObject({ option: 'higher', harm: 'diabetes', per: 1000, steps: ['helped', 'framing'] });
+    expect(item).toMatchObject({ option: 'citrate', harm: 'stomach', per: 1000, steps: ['helped', 'framing'] });
     expect(item?.source).toEqual({ kind: 'embedded', topic: { ...topic, patient: null } });
   });
 
@@ -73,15 +73,15 @@ describe('reading a teaching set', () => {
   it.each([
     ['text that is not JSON', '{ "format": ', '(file)', /“set\.json” is not a readable teaching set: it is not complete JSON/],
     ['an empty file', '  \n', '(file)', /“set\.json” is empty/],
-    ['a topic file', demoText(HEART), 'format', /“set\.json” is a topic, not a teaching set/],
+    ['a topic file', demoText(STONE), 'format', /“set\.json” is a topic, not a teaching set/],
     ['another format', JSON.stringify({ format: 'slides', version: 1 }), 'format', /not a Chancewise teaching set \(its format is "slides"\)/],
     ['a newer version', setText([], { version: 2 }), 'version', /version 2, newer than this version of Chancewise reads \(up to 1\)/],
-    ['a title that is a number', setText([{ topic: embedded(HEART) }], { title: 12 }), 'title', /damaged at "title": expected text, found the number 12/],
+    ['a title that is a number', setText([{ topic: embedded(STONE) }], { title: 12 }), 'title', /damaged at "title": expected text, found the number 12/],
     ['no items', setText([]), 'items', /damaged at "items": expected at least one topic, found an empty list/],
     ['items that are not a list', setText([], { items: { topic: 'a.json' } }), 'items', /damaged at "items": expected a list, found a group of fields/],
-    ['an unknown step', setText([{ topic: embedded(HEART), steps: ['baseline', 'summary'] }]), 'items.0.steps.1', /damaged at "items\.0\.steps\.1": expected one of "title", "baseline", .* or "incremental", found the text "summary"/],
-    ['no steps', setText([{ topic: embedded(HEART), steps: [] }]), 'items.0.steps', /expected at least one step, found an empty list/],
-    ['a denominator of 50', setText([{ topic: embedded(HEART), per: 50 }]), 'items.0.per', /damaged at "items\.0\.per": expected 100 or 1000 or null, found the number 50/],
+    ['an unknown step', setText([{ topic: embedded(STONE), steps: ['baseline', 'summary'] }]), 'items.0.steps.1', /damaged at "items\.0\.steps\.1": expected one of "title", "baseline", .* or "incremental", found the text "summary"/],
+    ['no steps', setText([{ topic: embedded(STONE), steps: [] }]), 'items.0.steps', /expected at least one step, found an empty list/],
+    ['a denominator of 50', setText([{ topic: embedded(STONE), per: 50 }]), 'items.0.per', /damaged at "items\.0\.per": expected 100 or 1000 or null, found the number 50/],
     ['a topic that is a number', setText([{ topic: 7 }]), 'items.0.topic', /damaged at "items\.0\.topic": expected text or a group of fields, found the number 7/],
   ])('names the first wrong field of %s', (_case, text, field, message) => {
     const found = problemOf(text);
@@ -90,7 +90,7 @@ describe('reading a teaching set', () => {
   });
 
   it('names a wrong field inside an embedded topic by its whole path in the set', () => {
-    const topic = embedded(HEART) as { topic: { periodYears: unknown } };
+    const topic = embedded(STONE) as { topic: { periodYears: unknown } };
     topic.topic.periodYears = 'ten';
     const found = problemOf(setText([{ topic: embedded(SCREENING) }, { topic }]));
     expect(found.field).toBe('items.1.topic.topic.periodYears');
@@ -111,7 +111,7 @@ describe('resolving a teaching set into topics to present', () => {
     expect(resolved.ok).toBe(false);
     if (resolved.ok) return;
     expect(resolved.field).toBe('items.0.topic');
-    expect(resolved.message).toMatch(/topic 1 is a file \(“\.\.\/\.\.\/\.\.\/\.\.\/assets\/demo\/01-heart-tablet\.json”\), which a browser cannot open by itself/);
+    expect(resolved.message).toMatch(/topic 1 is a file \(“\.\.\/\.\.\/\.\.\/\.\.\/assets\/demo\/01-kidney-stone\.json”\), which a browser cannot open by itself/);
   });
 
   it('reads topics named by path relative to the set’s folder in Node', async () => {
@@ -119,13 +119,13 @@ describe('resolving a teaching set into topics to present', () => {
     const resolved = await resolveTeachingSet('paths.teaching.json', set, nodeTopicReader(PATHS));
     if (!resolved.ok) throw new Error(resolved.message);
     expect(resolved.items.map((item) => [item.topic.title, item.optionId, item.steps.length])).toEqual([
-      [demoTopic(HEART).title, 'higher', 3],
+      [demoTopic(STONE).title, 'citrate', 3],
       [demoTopic(SCREENING).title, 'screening', STEP_KINDS.length],
     ]);
   });
 
   it('accepts only relative paths to .json files', () => {
-    expect(isUsableTopicPath('../demo/01-heart-tablet.json')).toBe(true);
+    expect(isUsableTopicPath('../demo/01-kidney-stone.json')).toBe(true);
     expect(isUsableTopicPath('topics/a.JSON')).toBe(true);
     for (const path of ['/etc/passwd.json', 'C:\\topics\\a.json', 'https://example.org/a.json', 'file:///a.json', 'a.txt', '']) {
       expect(isUsableTopicPath(path)).toBe(false);
@@ -149,18 +149,18 @@ describe('resolving a teaching set into topics to present', () => {
   });
 
   it.each([
-    [{ option: 'lower' }, 'items.0.option', /there is no option "lower" to present \(the options are "standard", "higher"\)/],
-    [{ option: 'none' }, 'items.0.option', /"none" is the comparison; name an option to compare with it/],
-    [{ harm: 'heart-stroke' }, 'items.0.harm', /there is no harm "heart-stroke" in this topic \(the harms are "muscle", "diabetes"\)/],
+    [{ option: 'lower' }, 'items.0.option', /there is no option "lower" to present \(the options are "water", "citrate"\)/],
+    [{ option: 'as-now' }, 'items.0.option', /"as-now" is the comparison; name an option to compare with it/],
+    [{ harm: 'stone' }, 'items.0.harm', /there is no harm "stone" in this topic \(the harms are "night", "stomach"\)/],
   ])('checks the choices %j against the topic', async (choices, field, message) => {
-    const resolved = await resolveTeachingSet('set.json', readOk(setText([{ topic: embedded(HEART), ...choices }])), null);
+    const resolved = await resolveTeachingSet('set.json', readOk(setText([{ topic: embedded(STONE), ...choices }])), null);
     expect(resolved).toMatchObject({ ok: false, field });
     if (!resolved.ok) expect(resolved.message).toMatch(message);
   });
 
   it('says which topic cannot be computed, and why, at its field', async () => {
     const topic = JSON.parse(writeTopicFile(pairTopic({ baseline: '150%', effect: { measure: 'rr', estimate: 0.8 } }))) as unknown;
-    const resolved = await resolveTeachingSet('set.json', readOk(setText([{ topic: embedded(HEART) }, { topic }])), null);
+    const resolved = await resolveTeachingSet('set.json', readOk(setText([{ topic: embedded(STONE) }, { topic }])), null);
     expect(resolved).toMatchObject({ ok: false, field: 'items.1.topic.topic.outcomes.0.baseline.risk' });
     if (!resolved.ok) expect(resolved.message).toMatch(/“set\.json”, topic 2 cannot be shown .*A risk of "150%" is outside 0% to 100%/);
   });

@@ -20,7 +20,11 @@ export interface Readability extends TextCounts {
   readonly grade: number | null;
 }
 
-/** The highest Flesch–Kincaid grade for handout text without a warning (NIH advice of grade 8 or below). */
+/**
+ * The highest Flesch–Kincaid grade for handout text without a warning. Plain-language advice for
+ * patient materials puts the target at about grade 6 to 8, by source (common practice); the
+ * warning comes above the top of that range.
+ */
 export const READING_GRADE_LIMIT = 8;
 
 const scorable = (counts: TextCounts): boolean => counts.sentences > 0 && counts.words > 0;

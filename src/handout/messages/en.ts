@@ -3,7 +3,8 @@
  * caution, the footer and the refusal sentence. Layout code never holds prose; a
  * second language is a sibling module with the same shape ({@link HandoutMessages}).
  */
-import { formatDecimal } from '../../core/messages/format-number.ts';
+import { duration } from '../../core/messages/en/wording.ts';
+import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
 import type { PersonGroup } from '../../core/types.ts';
 import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
@@ -15,7 +16,12 @@ export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'ques
 export interface SheetValues {
   readonly denominator: number;
   readonly years: number;
+  /** The unit the topic's period was given in. */
+  readonly unit: TimeUnit;
 }
+
+/** Whether the other benefit rows are events the options aim to make less likely, more likely, or both. */
+export type BenefitAim = 'lower' | 'raise' | 'both';
 
 /** The shape every language's handout wording provides. */
 export interface HandoutMessages {
@@ -26,10 +32,12 @@ export interface HandoutMessages {
   readonly illustrativeBadge: string;
   readonly numbersFor: (values: SheetValues) => string;
   readonly keyIntro: (values: SheetValues) => string;
-  /** What each look of figure means, in words that suit any outcome. */
+  /** What each group of figures means for an event to avoid, in words that suit any outcome. */
   readonly keyGroups: Readonly<Record<PersonGroup, string>>;
+  /** The same for an event people want: never "avoid" or "risk". */
+  readonly wantedKeyGroups: Readonly<Record<PersonGroup, string>>;
   readonly sentencesHeading: string;
-  readonly tableBenefitRows: string;
+  readonly tableBenefitRows: (aim: BenefitAim) => string;
   readonly tableHarmRows: string;
   /** A benefit's cell: people out of the denominator. */
   readonly tableCell: (amount: Amount, denominator: number) => string;
@@ -69,7 +77,11 @@ const MONTHS = [
 
 const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
 
-const period = (years: number): string => (years === 1 ? 'the next year' : `the next ${formatDecimal(years, 2)} years`);
+/** "the next 10 years", "the next 3 days", "the next year". */
+const period = ({ years, unit }: SheetValues): string => {
+  const length = duration({ years, unit });
+  return `the next ${length.startsWith('1 ') ? length.slice(2) : length}`;
+};
 
 /** What to shorten, as it ends the refusal sentence. */
 const bandWords: Readonly<Record<FrequencyBand, string>> = {
@@ -110,8 +122,7 @@ export const handoutMessagesEn: HandoutMessages = {
   documentSubject: 'Benefits and harms of the options, for talking with your clinician',
   paperName: { a4: 'A4', letter: 'US Letter' },
   illustrativeBadge: 'Illustrative example: invented numbers',
-  numbersFor: ({ denominator, years }) =>
-    `Every number on this sheet is out of ${denominator} people, over ${period(years)}.`,
+  numbersFor: (values) => `Every number on this sheet is out of ${values.denominator} people, over ${period(values)}.`,
   keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
   keyGroups: {
     event: 'People it happens to',
@@ -119,8 +130,19 @@ export const handoutMessagesEn: HandoutMessages = {
     caused: 'People it happens to because of the option',
     free: 'People it does not happen to',
   },
+  wantedKeyGroups: {
+    event: 'People who have it',
+    prevented: 'People who miss out on it because of the option',
+    caused: 'People who gain it because of the option',
+    free: 'People who do not have it',
+  },
   sentencesHeading: 'What the numbers mean',
-  tableBenefitRows: 'Other outcomes the options aim to lower',
+  tableBenefitRows: (aim) =>
+    aim === 'lower'
+      ? 'Other outcomes the options aim to lower'
+      : aim === 'raise'
+        ? 'Other outcomes the options aim to make more likely'
+        : 'Other outcomes the options aim to change',
   tableHarmRows: 'Side effects: how common they are',
   tableCell: amountCell,
   bandCell: (band, amount, denominator) =>
@@ -149,8 +171,8 @@ export const handoutMessagesEn: HandoutMessages = {
   questionsHeading: 'Questions you may want to ask',
   defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
   cautionHeading: 'Please keep in mind:',
-  caution: ({ denominator, years }) =>
-    `these numbers are estimates for groups of ${denominator} people like you over ${period(years)}, ` +
+  caution: (values) =>
+    `these numbers are estimates for groups of ${values.denominator} people like you over ${period(values)}, ` +
     'not a prediction for you. ' +
     'This sheet helps you talk with your own doctor, nurse or pharmacist, and does not replace their advice. ' +
     'Follow local guidance.',

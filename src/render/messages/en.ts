@@ -3,8 +3,9 @@
  * sentence. Drawing code never holds prose; a second language is a sibling
  * module with the same shape ({@link ChartMessages}).
  */
-import { startsWithVerb } from '../../core/messages/en/wording.ts';
-import { formatDecimal } from '../../core/messages/format-number.ts';
+import { duration, startsWithVerb } from '../../core/messages/en/wording.ts';
+import type { TimeUnit } from '../../core/time-unit.ts';
+import type { PersonGroup } from '../../core/types.ts';
 
 /** "have a stroke", but "end up dying of bowel cancer" for outcomes named with a verb in -ing. */
 const have = (outcome: string, count: number | null = null): string => {
@@ -21,6 +22,8 @@ export interface TitleValues {
   readonly denominator: number;
   readonly option: string;
   readonly periodYears: number | null;
+  /** The unit the period was given in (default years). */
+  readonly periodUnit?: TimeUnit;
 }
 
 export interface LabelValues {
@@ -50,18 +53,35 @@ function inSentence(name: string): string {
   return acronym ? trimmed : first.toLowerCase() + trimmed.slice(1);
 }
 
-/** A period in words: 10 → "10 years", 1 → "1 year", 0.5 → "6 months". */
-function period(years: number): string {
+/**
+ * A period in words, in the unit it was given in: 10 years → "10 years", 3 days → "3 days".
+ * Without a unit, whole months under a year read as months: 0.5 → "6 months".
+ */
+function period(years: number, unit: TimeUnit | undefined): string {
   const months = years * 12;
-  if (years < 1 && Math.abs(months - Math.round(months)) < 1e-9) {
-    return `${Math.round(months)} ${plural(Math.round(months), 'month', 'months')}`;
+  if (unit === undefined && years < 1 && Math.abs(months - Math.round(months)) < 1e-9) {
+    return duration({ years, unit: 'months' });
   }
-  return `${formatDecimal(years, 2)} ${plural(years, 'year', 'years')}`;
+  return duration({ years, unit: unit ?? 'years' });
 }
+
+/** ", over 10 years", or nothing without a period. */
+const over = ({ periodYears, periodUnit }: TitleValues): string =>
+  periodYears === null ? '' : `, over ${period(periodYears, periodUnit)}`;
+
+/** One array's title: "With option A: 100 people over 10 years". */
+const groupTitle = (values: TitleValues): string =>
+  `With ${inSentence(values.option)}: ${values.denominator} people${values.periodYears === null ? '' : ` over ${period(values.periodYears, values.periodUnit)}`}`;
+
+type LabelWords = Readonly<Record<PersonGroup, (values: LabelValues) => string>>;
+
+const event = ({ count, outcome, role }: LabelValues): string =>
+  `${count} ${have(outcome, count)} ${outcome}${role === 'option' ? ' anyway' : ''}`;
+const free = ({ count, outcome }: LabelValues): string => `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`;
 
 /** The shape every language's chart wording provides. */
 export interface ChartMessages {
-  readonly heading: (outcome: string, periodYears: number | null) => string;
+  readonly heading: (outcome: string, periodYears: number | null, periodUnit?: TimeUnit) => string;
   readonly illustrative: string;
   readonly optionTitle: (values: TitleValues) => string;
   readonly comparisonTitle: (values: TitleValues) => string;
@@ -70,7 +90,13 @@ export interface ChartMessages {
   readonly pairTitle: (values: TitleValues, role: ArmRole) => string;
   readonly causeName: (option: string, bare: boolean) => string;
   readonly defaultOutcome: string;
-  readonly labels: Readonly<Record<'event' | 'prevented' | 'caused' | 'free', (values: LabelValues) => string>>;
+  /** Group labels of an event people want to avoid ("a stroke"). */
+  readonly labels: LabelWords;
+  /**
+   * Group labels of an event people want ("pain gone by day 3"): `caused` people gain it
+   * because of the option, `prevented` people miss out on it. Never "avoid" or "risk".
+   */
+  readonly wantedLabels: LabelWords;
   readonly noDifference: (outcome: string, option: string) => string;
   readonly range: (values: RangeValues) => string;
   readonly rangeOutline: (outcome: string, option: string) => string;
@@ -80,34 +106,42 @@ export interface ChartMessages {
 /** English chart wording. */
 export const chartMessagesEn: ChartMessages = {
   /** Heading of one outcome's chart: "Chance of a stroke over 10 years". */
-  heading: (outcome: string, periodYears: number | null) =>
-    periodYears === null ? `Chance of ${outcome}` : `Chance of ${outcome} over ${period(periodYears)}`,
+  heading: (outcome: string, periodYears: number | null, periodUnit?: TimeUnit) =>
+    periodYears === null ? `Chance of ${outcome}` : `Chance of ${outcome} over ${period(periodYears, periodUnit)}`,
   /** Shown under the heading of an invented demonstration topic. */
   illustrative: 'Illustrative example: invented numbers, not from a real study.',
-  /** "If 100 people like you take option A for 10 years". */
-  optionTitle: ({ denominator, option, periodYears }: TitleValues) =>
-    `If ${denominator} people like you take ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
-  /** "If 100 people like you have no treatment for 10 years". */
-  comparisonTitle: ({ denominator, option, periodYears }: TitleValues) =>
-    `If ${denominator} people like you have ${inSentence(option)}${periodYears === null ? '' : ` for ${period(periodYears)}`}`,
+  /** "With option A: 100 people over 10 years" (the option first, then the group and the period). */
+  optionTitle: (values: TitleValues) => groupTitle(values),
+  /** "With no treatment: 100 people over 10 years". */
+  comparisonTitle: (values: TitleValues) => groupTitle(values),
   /** Names of the two arms of a bare pair, with no topic. */
   pairComparisonName: 'Without the option',
   pairOptionName: 'With the option',
   /** Title of an arm of a bare pair: "Without the option: 100 people like you, over 10 years". */
-  pairTitle: ({ denominator, periodYears }: TitleValues, role: ArmRole) =>
-    `${role === 'comparison' ? 'Without' : 'With'} the option: ${denominator} people like you${periodYears === null ? '' : `, over ${period(periodYears)}`}`,
+  pairTitle: (values: TitleValues, role: ArmRole) =>
+    `${role === 'comparison' ? 'Without' : 'With'} the option: ${values.denominator} people like you${over(values)}`,
   /** The option as the cause in a label: "because of option A". */
   causeName: (option: string, bare: boolean) => (bare ? 'the option' : inSentence(option)),
   /** Outcome name of a bare pair when none is given. */
   defaultOutcome: 'the outcome',
   labels: {
-    event: ({ count, outcome, role }: LabelValues) =>
-      `${count} ${have(outcome, count)} ${outcome}${role === 'option' ? ' anyway' : ''}`,
+    event,
     prevented: ({ count, outcome, option }: LabelValues) =>
       `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
     caused: ({ count, outcome, option }: LabelValues) =>
       `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
-    free: ({ count, outcome }: LabelValues) => `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`,
+    free,
+  },
+  wantedLabels: {
+    event,
+    /** "3 miss out on a response because of option B". */
+    prevented: ({ count, outcome, option }: LabelValues) =>
+      startsWithVerb(outcome)
+        ? `${count} ${plural(count, 'does', 'do')} not end up ${outcome} because of ${option}`
+        : `${count} ${plural(count, 'misses', 'miss')} out on ${outcome} because of ${option}`,
+    /** "20 have a response because of option A": only with the option. */
+    caused: ({ count, outcome, option }: LabelValues) => `${count} ${have(outcome, count)} ${outcome} because of ${option}`,
+    free,
   },
   /** When an option changes nothing at these numbers. */
   noDifference: (outcome: string, option: string) =>
@@ -117,7 +151,7 @@ export const chartMessagesEn: ChartMessages = {
     `With ${option}, anywhere between ${lower} and ${upper} of these ${denominator} could ${have(outcome)} ${outcome}.`,
   /** Legend line for the outlined people drawn when the range is shown. */
   rangeOutline: (outcome: string, option: string) =>
-    `Dotted outline: people who may or may not ${have(outcome)} ${outcome} with ${option}, depending on where in that range the truth lies.`,
+    `Dashed ring: people who may or may not ${have(outcome)} ${outcome} with ${option}, depending on where in that range the truth lies.`,
   /** One array in a sentence: title, then the labels joined. */
   summary: (title: string, labels: readonly string[]) => `${title}: ${joinList(labels)}.`,
 };

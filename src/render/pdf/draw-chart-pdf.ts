@@ -9,12 +9,13 @@ import { glyphFor } from '../glyphs/glyph-for.ts';
 import type { MeasureText } from '../text/measure-text.ts';
 import type { ChartPalette } from '../palette.ts';
 import { type PdfArrayDrawing, type PdfBox, drawIconArrayPdf } from './draw-icon-array-pdf.ts';
-import { drawFigurePdf } from './draw-figure-pdf.ts';
+import { ringedSwatch } from '../range-ring.ts';
+import { drawFigurePdf, drawRingPdf } from './draw-figure-pdf.ts';
 
 export interface PdfChartOptions {
   /** Body text size in the document's units (default 10 pt). */
   readonly fontSize?: number;
-  /** Outline the people whose group depends on where in the interval the truth lies (default off). */
+  /** Ring the people whose group depends on where in the interval the truth lies (default off). */
   readonly showRange?: boolean;
 }
 
@@ -60,22 +61,25 @@ export function drawChartPdf(
   write(frame.illustrative);
   const arrays = model.arrays.map((array, index) => {
     const placed = frame.arrays[index];
-    if (placed === undefined) return { height: 0, drawn: { event: 0, prevented: 0, caused: 0, free: 0 }, outlined: 0 };
+    if (placed === undefined) {
+      return { height: 0, drawn: { event: 0, prevented: 0, caused: 0, free: 0 }, looks: { event: 0, helped: 0, harmed: 0, free: 0 }, outlined: 0 };
+    }
     write(placed.title);
     const glyph = glyphFor(array.layout.geometry.glyph);
     for (const row of placed.legend) {
       if (row.swatch !== null) {
         const { x, y, size, look } = row.swatch;
-        drawFigurePdf(doc, glyph, look, {
-          x: box.x + x,
-          y: box.y + y,
-          size,
-          tileOriginX: box.x + x,
-          tileOriginY: box.y + y,
-          tile: size / 4,
+        const ringed = look === 'uncertain' ? ringedSwatch(box.x + x, box.y + y, size, palette) : null;
+        const figure = ringed?.figure ?? { x: box.x + x, y: box.y + y, size };
+        drawFigurePdf(doc, glyph, look === 'uncertain' ? 'free' : look, {
+          ...figure,
+          tileOriginX: figure.x,
+          tileOriginY: figure.y,
+          tile: figure.size / 4,
           lineWidth: size * palette.outlineWidth,
           cellSize: size,
         }, palette);
+        if (ringed !== null) drawRingPdf(doc, ringed.ring, palette);
       }
       write(row.text);
     }
@@ -84,7 +88,7 @@ export function drawChartPdf(
       array.layout,
       { x: box.x + placed.grid.x, y: box.y + placed.grid.y, width: placed.grid.layout.geometry.width },
       palette,
-      { uncertain: options.showRange === true ? (array.range?.uncertain ?? null) : null },
+      { uncertain: options.showRange === true ? (array.range?.uncertain ?? null) : null, wanted: model.wanted },
     );
   });
   return { height: frame.height, arrays };

@@ -4,10 +4,11 @@
  * prints still tell the groups apart), then its outline.
  */
 import type { jsPDF } from 'jspdf';
-import type { PersonGroup } from '../../core/types.ts';
+import type { PersonLook } from '../../core/direction.ts';
 import type { Glyph } from '../glyphs/path-context.ts';
 import type { ChartPalette, PatternName } from '../palette.ts';
 import { DOT_CENTRES, DOT_RADIUS, HATCH_WIDTH } from '../pattern-geometry.ts';
+import type { RangeRing } from '../range-ring.ts';
 import { PdfPathContext } from './pdf-path-context.ts';
 
 /** Where and how big a figure is, and the grid its pattern tiles align to. */
@@ -24,26 +25,9 @@ export interface FigurePlacement {
   readonly cellSize: number;
 }
 
-/** Draw one figure in the look of `look` (a group, or the dashed outline of uncertain people). */
-export function drawFigurePdf(
-  doc: jsPDF,
-  glyph: Glyph,
-  look: PersonGroup | 'uncertain',
-  placement: FigurePlacement,
-  palette: ChartPalette,
-): void {
+/** Draw one figure in `look` (from `lookOf`). */
+export function drawFigurePdf(doc: jsPDF, glyph: Glyph, look: PersonLook, placement: FigurePlacement, palette: ChartPalette): void {
   const trace = () => glyph.draw(new PdfPathContext(doc, placement.x, placement.y), placement.size);
-  if (look === 'uncertain') {
-    const [dash, gap] = palette.uncertainDash;
-    doc.setFillColor(palette.background);
-    doc.setDrawColor(palette.uncertainOutline);
-    doc.setLineWidth(placement.lineWidth * 1.6);
-    doc.setLineDashPattern([dash * placement.cellSize, gap * placement.cellSize], 0);
-    trace();
-    doc.fillStroke();
-    doc.setLineDashPattern([], 0);
-    return;
-  }
   const style = palette.groups[look];
   doc.setFillColor(style.fill);
   doc.setDrawColor(style.outline);
@@ -99,4 +83,13 @@ function drawPattern(doc: jsPDF, pattern: Exclude<PatternName, 'solid'>, ink: st
     const toX = localX + size + tile;
     doc.line(tileOriginX + fromX, tileOriginY + sum - fromX, tileOriginX + toX, tileOriginY + sum - toX);
   }
+}
+
+/** The dashed ring of the range outline around a figure (see `range-ring.ts`). */
+export function drawRingPdf(doc: jsPDF, ring: RangeRing, palette: ChartPalette): void {
+  doc.setDrawColor(palette.uncertainOutline);
+  doc.setLineWidth(ring.lineWidth);
+  doc.setLineDashPattern([...ring.dash], 0);
+  doc.roundedRect(ring.x, ring.y, ring.side, ring.side, ring.radius, ring.radius, 'S');
+  doc.setLineDashPattern([], 0);
 }

@@ -3,12 +3,14 @@
  * SVG renderer (no SVG conversion), so the handout matches the screen.
  */
 import type { jsPDF } from 'jspdf';
+import { type PersonLook, lookOf } from '../../core/direction.ts';
 import type { PersonGroup } from '../../core/types.ts';
 import { glyphFor } from '../glyphs/glyph-for.ts';
 import { type IconArrayLayout, scaleLayout } from '../icon-array-layout.ts';
 import type { ChartPalette } from '../palette.ts';
+import { rangeRing } from '../range-ring.ts';
 import { type RankSpan, isUncertain } from '../uncertain-people.ts';
-import { drawFigurePdf } from './draw-figure-pdf.ts';
+import { drawFigurePdf, drawRingPdf } from './draw-figure-pdf.ts';
 
 /** Where an array goes on the page, in the document's units; the height follows the layout. */
 export interface PdfBox {
@@ -18,15 +20,19 @@ export interface PdfBox {
 }
 
 export interface PdfArrayOptions {
-  /** Ranks of the people whose group depends on the interval, drawn outlined. */
+  /** Ranks of the people whose group depends on the interval: each is ringed, still drawn in their look. */
   readonly uncertain?: RankSpan | null;
+  /** The event is one people want, so `caused` people are drawn helped (default false). */
+  readonly wanted?: boolean;
 }
 
 /** What was drawn: the height used and how many figures of each group. */
 export interface PdfArrayDrawing {
   readonly height: number;
   readonly drawn: Readonly<Record<PersonGroup, number>>;
-  /** How many of those were drawn outlined as uncertain. */
+  /** How many figures were drawn in each look. */
+  readonly looks: Readonly<Record<PersonLook, number>>;
+  /** How many of those were ringed as uncertain. */
   readonly outlined: number;
 }
 
@@ -46,10 +52,12 @@ export function drawIconArrayPdf(
   const { cellSize, iconSize, patternTile } = scaled.geometry;
   const glyph = glyphFor(scaled.geometry.glyph);
   const drawn: Record<PersonGroup, number> = { event: 0, prevented: 0, caused: 0, free: 0 };
-  let outlined = 0;
+  const looks: Record<PersonLook, number> = { event: 0, helped: 0, harmed: 0, free: 0 };
+  const wanted = options.wanted ?? false;
+  const ringed: (typeof scaled.people)[number][] = [];
   for (const person of scaled.people) {
-    const uncertain = isUncertain(person.rank, options.uncertain ?? null);
-    drawFigurePdf(doc, glyph, uncertain ? 'uncertain' : person.group, {
+    const look = lookOf(person.group, wanted);
+    drawFigurePdf(doc, glyph, look, {
       x: box.x + person.x,
       y: box.y + person.y,
       size: iconSize,
@@ -60,7 +68,10 @@ export function drawIconArrayPdf(
       cellSize,
     }, palette);
     drawn[person.group] += 1;
-    if (uncertain) outlined += 1;
+    looks[look] += 1;
+    if (isUncertain(person.rank, options.uncertain ?? null)) ringed.push(person);
   }
-  return { height: scaled.geometry.height, drawn, outlined };
+  // Rings after every figure, so no neighbour is drawn over one.
+  for (const person of ringed) drawRingPdf(doc, rangeRing(box.x + person.x, box.y + person.y, iconSize, cellSize, palette), palette);
+  return { height: scaled.geometry.height, drawn, looks, outlined: ringed.length };
 }

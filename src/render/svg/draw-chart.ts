@@ -7,6 +7,7 @@ import { type Selection, select } from 'd3-selection';
 import { type ChartFrame, type FrameArray, chartFrame } from '../chart-frame.ts';
 import type { ChartArray, ChartModel } from '../chart-model.ts';
 import { drawPeople, personLooks } from './draw-people.ts';
+import { drawRangeRings } from './draw-range-rings.ts';
 import { appendSwatch, appendText } from './draw-text.ts';
 import { patternIdsFor } from './person-paint.ts';
 import { type ResolvedSvgChartOptions, type SvgChartOptions, resolveSvgOptions } from './svg-chart-options.ts';
@@ -39,10 +40,21 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     const people = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
     people.setAttribute('class', 'people');
     people.setAttribute('transform', peopleTransform(placed));
-    drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange), resolved.palette, ids);
+    drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
     group.node()?.appendChild(people);
+    if (hasRangeOutline(array, resolved)) {
+      const rings = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
+      rings.setAttribute('transform', peopleTransform(placed));
+      drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
+      group.node()?.appendChild(rings);
+    }
   });
   return frame;
+}
+
+/** Whether an array carries a range outline: when the range is shown and the array has an interval. */
+export function hasRangeOutline(array: ChartArray, options: ResolvedSvgChartOptions): boolean {
+  return options.showRange && array.range !== null;
 }
 
 /** Root attributes: size, the text alternative, and the options an update reuses. */
@@ -56,6 +68,7 @@ export function setRootAttributes(svgElement: SVGSVGElement, model: ChartModel, 
     ['class', 'people-chart'],
     ['font-family', options.fontFamily],
     ['data-denominator', String(model.denominator)],
+    ['data-wanted', String(model.wanted)],
     ['data-arrangement', model.arrangement],
     ['data-palette', options.palette.name],
     ['data-width', svgNumber(options.width)],

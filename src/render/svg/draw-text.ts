@@ -2,11 +2,13 @@
  * Text blocks and legend swatches of a chart frame as SVG.
  */
 import type { Selection } from 'd3-selection';
+import type { PersonLook } from '../../core/direction.ts';
 import type { FrameSwatch, FrameText } from '../chart-frame.ts';
 import { glyphFor } from '../glyphs/glyph-for.ts';
 import { glyphPath, placeGlyphPath } from '../glyphs/svg-path-context.ts';
 import type { GlyphName } from '../icon-array-layout.ts';
 import type { ChartPalette } from '../palette.ts';
+import { ringedSwatch } from '../range-ring.ts';
 import { type PatternIds, personPaint } from './person-paint.ts';
 import { svgNumber } from './svg-number.ts';
 
@@ -26,7 +28,10 @@ export function appendText(parent: Parent, block: FrameText, palette: ChartPalet
   }
 }
 
-/** Append a legend swatch: the array's glyph in a group's look (never with `data-outcome`). */
+/**
+ * Append a legend swatch: the array's glyph in a look (never with `data-outcome`), or for
+ * the range outline a figure with its dashed ring.
+ */
 export function appendSwatch(
   parent: Parent,
   swatch: FrameSwatch,
@@ -34,14 +39,42 @@ export function appendSwatch(
   palette: ChartPalette,
   patternIds: PatternIds,
 ): void {
-  const paint = personPaint(palette, swatch.look, patternIds, swatch.size);
-  const element = parent
+  if (swatch.look !== 'uncertain') {
+    appendFigure(parent, swatch.look, swatch, swatch.size, glyph, palette, patternIds);
+    return;
+  }
+  const { figure, ring } = ringedSwatch(swatch.x, swatch.y, swatch.size, palette);
+  appendFigure(parent, 'free', figure, swatch.size, glyph, palette, patternIds).attr('data-look', 'uncertain');
+  parent
+    .append('rect')
+    .attr('class', 'swatch-ring')
+    .attr('x', svgNumber(ring.x))
+    .attr('y', svgNumber(ring.y))
+    .attr('width', svgNumber(ring.side))
+    .attr('height', svgNumber(ring.side))
+    .attr('rx', svgNumber(ring.radius))
+    .attr('fill', 'none')
+    .attr('stroke', palette.uncertainOutline)
+    .attr('stroke-width', svgNumber(ring.lineWidth, 3))
+    .attr('stroke-dasharray', `${svgNumber(ring.dash[0])} ${svgNumber(ring.dash[1])}`);
+}
+
+function appendFigure(
+  parent: Parent,
+  look: PersonLook,
+  box: { readonly x: number; readonly y: number; readonly size: number },
+  cellSize: number,
+  glyph: GlyphName,
+  palette: ChartPalette,
+  patternIds: PatternIds,
+) {
+  const paint = personPaint(palette, look, patternIds, cellSize);
+  return parent
     .append('path')
     .attr('class', 'swatch')
-    .attr('data-look', swatch.look)
-    .attr('d', placeGlyphPath(glyphPath(glyphFor(glyph), swatch.size), swatch.x, swatch.y))
+    .attr('data-look', look)
+    .attr('d', placeGlyphPath(glyphPath(glyphFor(glyph), box.size), box.x, box.y))
     .attr('fill', paint.fill)
     .attr('stroke', paint.stroke)
-    .attr('stroke-width', svgNumber(swatch.size * palette.outlineWidth * (paint.dash === null ? 1 : 1.6), 3));
-  if (paint.dash !== null) element.attr('stroke-dasharray', paint.dash);
+    .attr('stroke-width', svgNumber(cellSize * palette.outlineWidth, 3));
 }

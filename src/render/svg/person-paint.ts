@@ -2,7 +2,7 @@
  * The paint of one person figure (fill, outline, dash) for a group, as SVG
  * attribute values. Plain data, shared by the first draw and by live updates.
  */
-import type { PersonGroup } from '../../core/types.ts';
+import type { PersonLook } from '../../core/direction.ts';
 import type { ChartPalette, PatternName } from '../palette.ts';
 import { svgNumber } from './svg-number.ts';
 
@@ -16,10 +16,14 @@ export interface PersonPaint {
   readonly dash: string | null;
 }
 
-/** The paint of a person of `group`, outlined when their group depends on the interval. */
+/**
+ * The paint of a person in `look` (from `lookOf`). `uncertain` is a hollow figure with a
+ * dashed outline, for views that draw only the people of the interval; the charts keep
+ * every person in their look and ring the uncertain ones instead (`range-ring.ts`).
+ */
 export function personPaint(
   palette: ChartPalette,
-  look: PersonGroup | 'uncertain',
+  look: PersonLook | 'uncertain',
   patternIds: PatternIds,
   cellSize: number,
 ): PersonPaint {

@@ -24,14 +24,14 @@ export function appendPatterns(
     .attr('patternUnits', 'userSpaceOnUse')
     .attr('width', size)
     .attr('height', size);
-  dots.append('rect').attr('width', size).attr('height', size).attr('fill', palette.groups.prevented.fill);
+  dots.append('rect').attr('width', size).attr('height', size).attr('fill', palette.groups.helped.fill);
   for (const [x, y] of DOT_CENTRES) {
     dots
       .append('circle')
       .attr('cx', svgNumber(tile * x, 3))
       .attr('cy', svgNumber(tile * y, 3))
       .attr('r', svgNumber(tile * DOT_RADIUS, 3))
-      .attr('fill', palette.groups.prevented.patternInk);
+      .attr('fill', palette.groups.helped.patternInk);
   }
 
   const hatch = defs
@@ -40,11 +40,11 @@ export function appendPatterns(
     .attr('patternUnits', 'userSpaceOnUse')
     .attr('width', size)
     .attr('height', size);
-  hatch.append('rect').attr('width', size).attr('height', size).attr('fill', palette.groups.caused.fill);
+  hatch.append('rect').attr('width', size).attr('height', size).attr('fill', palette.groups.harmed.fill);
   hatch
     .append('path')
     .attr('d', hatchPath(tile))
-    .attr('stroke', palette.groups.caused.patternInk)
+    .attr('stroke', palette.groups.harmed.patternInk)
     .attr('stroke-width', svgNumber(tile * HATCH_WIDTH, 3));
 }
 

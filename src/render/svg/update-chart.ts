@@ -8,8 +8,9 @@
 import { type Selection, select } from 'd3-selection';
 import { chartFrame } from '../chart-frame.ts';
 import type { ChartModel } from '../chart-model.ts';
-import { drawArrayText, drawChart, drawHeading, peopleTransform, setRootAttributes } from './draw-chart.ts';
+import { drawArrayText, drawChart, drawHeading, hasRangeOutline, peopleTransform, setRootAttributes } from './draw-chart.ts';
 import { personLooks, updatePeople } from './draw-people.ts';
+import { drawRangeRings } from './draw-range-rings.ts';
 import { patternIdsFor } from './person-paint.ts';
 import { setChangedAttribute } from './set-changed-attribute.ts';
 import { type SvgChartOptions, recordedSvgOptions, resolveSvgOptions } from './svg-chart-options.ts';
@@ -25,8 +26,9 @@ export interface ChartUpdate {
 
 /**
  * Update `svgElement` (drawn by `drawChart` or `renderChartSvg`) to show `model`.
- * When the arrays, denominator or arrangement differ, or options are given, the
- * chart is drawn afresh; otherwise only changed people are touched.
+ * When the arrays, denominator or arrangement differ, an interval appears or goes
+ * away under a shown range, or options are given, the chart is drawn afresh;
+ * otherwise only changed people are touched.
  */
 export function updateChart(svgElement: SVGSVGElement, model: ChartModel, options?: SvgChartOptions): ChartUpdate {
   const resolved = options === undefined ? recordedSvgOptions(svgElement, model) : resolveSvgOptions(model, options);
@@ -37,7 +39,12 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
     svgElement.getAttribute('data-denominator') === String(model.denominator) &&
     svgElement.getAttribute('data-arrangement') === model.arrangement &&
     groups.length === model.arrays.length &&
-    groups.every((group, index) => group.getAttribute('data-option-id') === model.arrays[index]?.optionId);
+    groups.every((group, index) => {
+      const array = model.arrays[index];
+      if (array === undefined || group.getAttribute('data-option-id') !== array.optionId) return false;
+      // An interval that appears or goes away adds or removes the array's range outline.
+      return (group.querySelector(':scope > g.range-outline') !== null) === hasRangeOutline(array, resolved);
+    });
   if (!sameShape) {
     drawChart(svgElement, model, resolved);
     return { redrawn: true, peopleChanged: model.denominator * model.arrays.length };
@@ -61,8 +68,12 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
     const people = group.querySelector<SVGGElement>(':scope > g.people');
     if (people === null) return;
     setChangedAttribute(people, 'transform', peopleTransform(placed));
-    const looks = personLooks(placed.grid.layout, array.range?.uncertain ?? null, resolved.showRange);
-    peopleChanged += updatePeople(people, placed.grid.layout, looks, resolved.palette, ids);
+    peopleChanged += updatePeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
+    const rings = group.querySelector<SVGGElement>(':scope > g.range-outline');
+    if (rings !== null) {
+      setChangedAttribute(rings, 'transform', peopleTransform(placed));
+      drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
+    }
   });
   return { redrawn: false, peopleChanged };
 }

@@ -7,7 +7,7 @@ import { amountIn } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { StepKind } from '../teaching-steps.ts';
 
-/** A finding from the research and where it comes from (author and year). */
+/** A finding from the research and where it was published. */
 export interface EvidenceWords {
   readonly finding: string;
   readonly source: string;
@@ -204,11 +204,23 @@ export const teachingMessagesEn = {
     nntNone: 'No number needed to treat',
   },
 
-  /** What the research found about each format, in one line, with its source (author and year). */
+  /**
+   * What the research found about each format, short enough for a projector, with its source:
+   * first author, journal, year, volume and first page, so that two papers of one year stay apart.
+   * framing: Akl EA, Oxman AD, Herrin J, et al. Using alternative statistical formats for presenting
+   *   risks and risk reductions. Cochrane Database Syst Rev 2011;(3):CD006776; Zipkin DA, Umscheid
+   *   CA, Keating NL, et al. Evidence-based risk communication: a systematic review. Ann Intern Med
+   *   2014;161(4):270–280.
+   * incremental: Zikmund-Fisher BJ, Fagerlin A, Roberts TR, Derry HA, Ubel PA. Alternate methods of
+   *   framing information about medication side effects: incremental risk versus total risk of
+   *   occurrence. J Health Commun 2008;13(2):107–124; Zikmund-Fisher BJ, Ubel PA, Smith DM, et al.
+   *   Communicating side effect risks in a tamoxifen prophylaxis decision aid: the debiasing
+   *   influence of pictographs. Patient Educ Couns 2008;73(2):209–214.
+   */
   evidence: {
     framing: {
-      finding: 'Compared with the absolute difference, a relative reduction made little or no difference to understanding; showing the NNT reduced it.',
-      source: 'Akl et al. 2011; Zipkin et al. 2014',
+      finding: 'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
+      source: 'Akl 2011, Cochrane · Zipkin 2014, Annals',
     },
     denominator: {
       finding: 'With 1000 rather than 100 people, risks seemed more serious and risk reductions larger.',
@@ -219,8 +231,8 @@ export const teachingMessagesEn = {
       source: 'Ancker, Weber & Kukafka 2011',
     },
     incremental: {
-      finding: 'Showing the change itself, not only the two totals, reduced worry and the bias from the size of the group.',
-      source: 'Zikmund-Fisher et al. 2008',
+      finding: 'Side effects: the extra risk on its own eased worry; in words alone it was less clear, with pictures clearer.',
+      source: 'Zikmund-Fisher, J Health Commun 2008;13:107 · Patient Educ Couns 2008;73:209',
     },
   } satisfies Record<string, EvidenceWords>,
 

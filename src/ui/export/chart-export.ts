@@ -14,9 +14,20 @@ export const EXPORT_DPI = 300;
 /** The width, in CSS pixels, the exported chart is laid out at (its text wraps for this width). */
 const LAYOUT_WIDTH = 720;
 
+/** What an exported chart shows besides its people: the range outline, when it is on screen. */
+export interface ChartExportOptions {
+  readonly showRange?: boolean;
+}
+
+const drawing = (model: ChartModel, options: ChartExportOptions) => ({
+  width: LAYOUT_WIDTH,
+  idPrefix: `export-${model.id}`,
+  showRange: options.showRange === true,
+});
+
 /** The chart as a standalone SVG file's text. */
-export function chartSvgFile(model: ChartModel, document: Document): string {
-  return svgForExport(chartSvgString(model, document, { width: LAYOUT_WIDTH, idPrefix: `export-${model.id}` }), {
+export function chartSvgFile(model: ChartModel, document: Document, options: ChartExportOptions = {}): string {
+  return svgForExport(chartSvgString(model, document, drawing(model, options)), {
     widthMm: EXPORT_WIDTH_MM,
   });
 }
@@ -30,8 +41,8 @@ function viewBoxSize(svgText: string): { width: number; height: number } {
 }
 
 /** The chart as PNG bytes that print 180 mm wide at 300 dpi (2126 pixels wide). */
-export async function chartPngFile(model: ChartModel, document: Document): Promise<Uint8Array> {
-  const svgText = chartSvgString(model, document, { width: LAYOUT_WIDTH, idPrefix: `export-${model.id}` });
+export async function chartPngFile(model: ChartModel, document: Document, options: ChartExportOptions = {}): Promise<Uint8Array> {
+  const svgText = chartSvgString(model, document, drawing(model, options));
   const size = viewBoxSize(svgText);
   const pixels = pngDimensionsForPrint(size, EXPORT_WIDTH_MM, EXPORT_DPI);
   // Size the image itself at the target pixels, so the vector drawing is rasterised sharp.

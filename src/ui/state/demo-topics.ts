@@ -6,7 +6,7 @@ import { readTopicFile } from '../../core/topic/topic-file.ts';
 import type { Topic } from '../../core/topic/topic.ts';
 
 export interface DemoTopic {
-  /** The file's name without folder, for example "01-heart-tablet.json". */
+  /** The file's name without folder, for example "01-kidney-stone.json". */
   readonly fileName: string;
   readonly topic: Topic;
 }

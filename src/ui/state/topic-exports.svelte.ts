@@ -45,14 +45,15 @@ export class TopicExports {
     return suggestedFileName(editor.draft, editor.fileName).replace(/\.chancewise\.json$/, '');
   }
 
-  async exportChart(model: ChartModel, format: 'svg' | 'png'): Promise<void> {
+  /** Save a chart; `showRange` keeps the outline of the people the interval leaves undecided. */
+  async exportChart(model: ChartModel, format: 'svg' | 'png', showRange: boolean): Promise<void> {
     const { platform, document } = this.#options;
     const base = this.#baseName();
     try {
       if (format === 'svg') {
-        await platform.saveFile(`${base}-${model.id}.svg`, chartSvgFile(model, document), 'image/svg+xml');
+        await platform.saveFile(`${base}-${model.id}.svg`, chartSvgFile(model, document, { showRange }), 'image/svg+xml');
       } else {
-        await platform.saveFile(`${base}-${model.id}.png`, await chartPngFile(model, document), 'image/png');
+        await platform.saveFile(`${base}-${model.id}.png`, await chartPngFile(model, document, { showRange }), 'image/png');
       }
     } catch (error) {
       this.#options.messages.fail('The chart could not be saved: ', error, '.');

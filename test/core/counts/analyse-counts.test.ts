@@ -28,6 +28,8 @@ describe('analyseCounts', () => {
   });
 
   it('applies the level to every interval (Altman 1991 §10.11.1 at 90%)', () => {
+    // python3 -c "from scipy.stats.contingency import relative_risk as r; print(r(2, 16, 33, 91).confidence_interval(0.9))"
+    // → 0.11340230472622724 to 1.0477388550886686.
     const found = analyseCounts({ events: 2, total: 16 }, { events: 33, total: 91 }, { level: 0.9 });
     expect(found.relativeRisk?.lower).toBeCloseTo(0.11, 2);
     expect(found.relativeRisk?.upper).toBeCloseTo(1.05, 2);
@@ -46,12 +48,14 @@ describe('analyseCounts', () => {
     expect(found.oddsRatio?.corrected).toBe(true);
     expect(found.notices).toEqual([{ code: 'counts-zero-cell-corrected', values: {} }]);
     expect(found.interventionRisk.lower).toBe(0);
-    // Wilson 0/10 upper bound 0.2775 (Newcombe 1998 Table II (e)/(f), from memory).
+    // Wilson 0/10 upper bound 0.2775 (Newcombe 1998 Table II (e)/(f), from memory), recomputed with SciPy:
+    // python3 -c "from scipy.stats import binomtest as b; print(b(0, 10).proportion_ci(method='wilson'))" → 0 to 0.27753279986288926.
     expect(round4(found.interventionRisk.upper)).toBe(0.2775);
   });
 
   it('leaves the ratios and tests undefined when neither arm has an event', () => {
-    // Newcombe (1998, Stat Med 17:873) Table II (e) 0/10 − 0/20, method 10: −0.1611 to 0.2775 (from memory).
+    // Newcombe (1998, Stat Med 17:873) Table II (e) 0/10 − 0/20, method 10: −0.1611 to 0.2775 (from memory),
+    // recomputed with SciPy by the method 10 command of risk-difference.test.ts (a, m, c, n = 0, 10, 0, 20).
     const found = analyseCounts({ events: 0, total: 20 }, { events: 0, total: 10 });
     expect(found.relativeRisk).toBeNull();
     expect(found.oddsRatio).toBeNull();

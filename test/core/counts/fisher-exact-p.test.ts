@@ -7,20 +7,24 @@ describe('fisherExactP', () => {
     // Fisher RA. The Design of Experiments (1935), ch. II; Agresti A. Categorical Data Analysis
     // (2002), p. 91, as cited in R's fisher.test documentation: 3 of 4 right, table
     // probabilities 1, 16, 36, 16, 1 over 70; two-sided p = (1 + 16 + 16 + 1) / 70 = 0.4857.
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[3, 1], [1, 3]]).pvalue)" → 0.48571428571428565.
     expect(fisherExactP({ events: 3, total: 4 }, { events: 1, total: 4 })).toBeCloseTo(34 / 70, 12);
   });
 
   it('reproduces SciPy’s documented whales-and-sharks example', () => {
     // SciPy documentation, scipy.stats.fisher_exact, Examples: [[8, 2], [1, 5]],
-    // pvalue 0.034965034965034975.
+    // pvalue 0.034965034965034975; a small table with a cell of 1. Recomputed with SciPy:
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[8, 2], [1, 5]]).pvalue)"
     expect(fisherExactP({ events: 8, total: 9 }, { events: 2, total: 7 })).toBeCloseTo(0.034965034965034975, 14);
   });
 
   it('reproduces R’s two-sided p for Fisher’s criminal twins', () => {
     // R documentation, fisher.test, Examples: Convictions, dizygotic 2 of 17 convicted vs
     // monozygotic 10 of 13; fisher.test(Convictions) p-value = 0.0005367 (R output, as printed in a public
-    // tutorial script; also from memory).
+    // tutorial script). Recomputed with SciPy:
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[2, 15], [10, 3]]).pvalue)" → 0.0005367241191434358.
     expect(fisherExactP({ events: 2, total: 17 }, { events: 10, total: 13 })).toBeCloseTo(0.0005367, 7);
+    expect(fisherExactP({ events: 2, total: 17 }, { events: 10, total: 13 })).toBeCloseTo(0.0005367241191434358, 12);
   });
 
   it('does not depend on which arm is named first', () => {
@@ -33,24 +37,28 @@ describe('fisherExactP', () => {
     // Equal arms make the distribution symmetric, so the mirror table has the same probability
     // and must be included: 1/5 vs 4/5 has tables 0..5 with probabilities
     // 1, 25, 100, 100, 25, 1 over 252 (hypergeometric, derived); p = (1 + 25 + 25 + 1) / 252.
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[1, 4], [4, 1]]).pvalue)" → 0.2063492063492064.
     expect(fisherExactP({ events: 1, total: 5 }, { events: 4, total: 5 })).toBeCloseTo(52 / 252, 12);
   });
 
   it('gives 1 when the observed table is the most likely one, and when the margins allow only one table', () => {
     expect(fisherExactP({ events: 2, total: 4 }, { events: 2, total: 4 })).toBeCloseTo(1, 12);
-    // R: fisher.test(matrix(c(0, 0, 10, 10), 2)) gives p-value = 1 (R output, from memory).
+    // One table only fits these margins, so p = 1 (derived); SciPy agrees:
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[0, 10], [0, 10]]).pvalue, f([[7, 0], [3, 0]]).pvalue)" → 1.0 1.0.
     expect(fisherExactP({ events: 0, total: 10 }, { events: 0, total: 10 })).toBe(1);
     expect(fisherExactP({ events: 7, total: 7 }, { events: 3, total: 3 })).toBe(1);
   });
 
-  it('handles totals in the thousands quickly, agreeing with the chi-square there', () => {
-    // For large tables the exact and chi-square p-values converge (Agresti 2002 §3.5, common
-    // practice): Physicians' Health Study, Pearson p = 5.7e−7, Fisher p of the same order.
+  it('reproduces SciPy on the large ischemic stroke table, quickly', () => {
+    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
+    // et al. (JAMA 2006;295:306), 176 of 21211 vs 230 of 21248. The exact p, with SciPy:
+    // python3 -c "from scipy.stats import fisher_exact as f; print(f([[176, 21035], [230, 21018]]).pvalue)"
+    // → 0.008149655416292926, between the Pearson (0.00747) and Yates (0.00866) p-values: with
+    // large counts the exact and chi-square p-values draw close (common practice).
     const started = performance.now();
-    const found = fisherExactP({ events: 189, total: 11034 }, { events: 104, total: 11037 });
+    const found = fisherExactP({ events: 176, total: 21211 }, { events: 230, total: 21248 });
     expect(performance.now() - started).toBeLessThan(200);
-    expect(found).toBeGreaterThan(1e-7);
-    expect(found).toBeLessThan(1e-6);
+    expect(found).toBeCloseTo(0.008149655416292926, 10);
   });
 
   it('returns a p-value in [0, 1] for extreme tables with a million people per arm', () => {

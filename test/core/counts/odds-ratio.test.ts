@@ -6,6 +6,9 @@ import { problemOf } from './support.ts';
 describe('oddsRatio', () => {
   // Altman DG. Practical Statistics for Medical Research. Chapman & Hall, 1991, §10.11.2:
   // a = 32, b = 118, c = 17, d = 127 → OR 2.026, SE(ln OR) 0.326, 95% CI 1.069 to 3.840 (Woolf).
+  // Recomputed with SciPy:
+  // python3 -c "from scipy.stats.contingency import odds_ratio as o; r = o([[32, 17], [118, 127]], kind='sample'); print(r.statistic, r.confidence_interval(0.95))"
+  // → 2.0259222333000997, 1.0689080998211271 to 3.839769664077291.
   it('reproduces the Woolf interval of Altman (1991) §10.11.2', () => {
     const found = oddsRatio({ events: 32, total: 150 }, { events: 17, total: 144 });
     expect(found?.estimate).toBeCloseTo(2.026, 3);
@@ -16,14 +19,42 @@ describe('oddsRatio', () => {
     expect(found?.corrected).toBe(false);
   });
 
-  it('reproduces the sample odds ratio of the Physicians’ Health Study table in Agresti', () => {
-    // Agresti A. Categorical Data Analysis (and An Introduction to Categorical Data Analysis),
-    // myocardial infarction on placebo 189/11034 vs aspirin 104/11037: OR 1.832, 95% CI
-    // 1.440 to 2.331 (from memory).
-    const found = oddsRatio({ events: 189, total: 11034 }, { events: 104, total: 11037 });
-    expect(found?.estimate).toBeCloseTo(1.832, 3);
-    expect(found?.lower).toBeCloseTo(1.44, 3);
-    expect(found?.upper).toBeCloseTo(2.331, 3);
+  it('reproduces SciPy’s documented ischemic stroke example, a large table', () => {
+    // SciPy documentation (1.11 to 1.13), scipy.stats.contingency.odds_ratio, Examples: women in
+    // Berger et al. (JAMA 2006;295:306), ischemic stroke 176 of 21211 on the option vs 230 of 21248
+    // on placebo; the documented (conditional) estimate is 0.7646037659999126, the same to four
+    // places as the sample odds ratio computed here. Woolf limits recomputed with SciPy:
+    // python3 -c "from scipy.stats.contingency import odds_ratio as o; r = o([[176, 230], [21035, 21018]], kind='sample'); print(r.statistic, r.confidence_interval(0.95))"
+    // → 0.7645989603249242, 0.6277463630494854 to 0.9312862718789977.
+    const found = oddsRatio({ events: 176, total: 21211 }, { events: 230, total: 21248 });
+    expect(found?.estimate).toBeCloseTo(0.7646, 4);
+    expect(found?.estimate).toBeCloseTo(0.7645989603249242, 12);
+    expect(found?.lower).toBeCloseTo(0.6277463630494854, 10);
+    expect(found?.upper).toBeCloseTo(0.9312862718789977, 10);
+    expect(found?.corrected).toBe(false);
+  });
+
+  it('reproduces SciPy’s documented whales-and-sharks table, a small table with a cell of 1', () => {
+    // SciPy documentation (1.17), scipy.stats.fisher_exact, Examples: [[8, 2], [1, 5]],
+    // res.statistic 20.0 (the sample odds ratio, 8 × 5 / (2 × 1)). Woolf limits recomputed with SciPy:
+    // python3 -c "from scipy.stats.contingency import odds_ratio as o; print(o([[8, 1], [2, 5]], kind='sample').confidence_interval(0.95))"
+    // → 1.4161851393939529 to 282.44894602634895.
+    const found = oddsRatio({ events: 8, total: 9 }, { events: 2, total: 7 });
+    expect(found?.estimate).toBeCloseTo(20, 12);
+    expect(found?.lower).toBeCloseTo(1.4161851393939529, 10);
+    expect(found?.upper).toBeCloseTo(282.44894602634895, 8);
+    expect(found?.corrected).toBe(false);
+  });
+
+  it('reproduces SciPy’s documented chemical-exposure table with the Woolf interval', () => {
+    // SciPy documentation (1.17), scipy.stats.contingency.odds_ratio, Examples: cases 7 exposed and
+    // 15 unexposed, noncases 58 and 472; sample odds ratio 7 × 472 / (15 × 58), Woolf limits:
+    // python3 -c "from scipy.stats.contingency import odds_ratio as o; r = o([[7, 15], [58, 472]], kind='sample'); print(r.statistic, r.confidence_interval(0.95))"
+    // → 3.7977011494252872, 1.4869302660564157 to 9.699536252360435.
+    const found = oddsRatio({ events: 7, total: 65 }, { events: 15, total: 487 });
+    expect(found?.estimate).toBeCloseTo(3.7977011494252872, 12);
+    expect(found?.lower).toBeCloseTo(1.4869302660564157, 10);
+    expect(found?.upper).toBeCloseTo(9.699536252360435, 10);
   });
 
   it('gives the reciprocal when the arms are swapped', () => {

@@ -3,29 +3,37 @@ import { pearsonChiSquare } from '../../../src/core/counts/pearson-chi-square.ts
 import { problemOf } from './support.ts';
 
 describe('pearsonChiSquare', () => {
-  it('reproduces the Pearson chi-square of the Physicians’ Health Study table in Agresti', () => {
-    // Agresti A. Categorical Data Analysis: myocardial infarction on placebo 189/11034 vs
-    // aspirin 104/11037, X² = 25.01 (from memory); R's chisq.test(..., correct = FALSE)
-    // prints X-squared = 25.014 (R output, as quoted in a public repository's test suite).
-    const found = pearsonChiSquare({ events: 189, total: 11034 }, { events: 104, total: 11037 });
-    expect(found?.statistic).toBeCloseTo(25.014, 3);
-    expect(found?.p).toBeGreaterThan(5e-7);
-    expect(found?.p).toBeLessThan(6e-7);
+  it('reproduces the ischemic stroke table of SciPy’s documentation, a large table', () => {
+    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
+    // et al. (JAMA 2006;295:306), [[176, 230], [21035, 21018]]. By hand, X² = N(ad − bc)² / (n₁n₂m₁m₂)
+    // = 42459 × 1138882² / (21211 × 21248 × 406 × 42053) = 7.1569; recomputed with SciPy:
+    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[176, 230], [21035, 21018]], correction=False); print(r.statistic, r.pvalue)"
+    // → 7.156900855345259, p 0.007467611213568741.
+    const found = pearsonChiSquare({ events: 176, total: 21211 }, { events: 230, total: 21248 });
+    expect(found?.statistic).toBeCloseTo(7.1569, 4);
+    expect(found?.statistic).toBeCloseTo(7.156900855345259, 10);
+    expect(found?.p).toBeCloseTo(0.007467611213568741, 12);
+  });
+
+  it('reproduces SciPy’s documented uncorrected p for a small table with a cell of 3', () => {
+    // SciPy documentation (1.17), scipy.stats.chi2_contingency, Examples: obs [[12, 3], [17, 16]]
+    // with correction=False, res.pvalue 0.0614122539870913. The statistic, recomputed with SciPy:
+    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[12, 3], [17, 16]], correction=False); print(r.statistic, r.pvalue)"
+    // → 3.498828576142551, p 0.061412253987091166.
+    const found = pearsonChiSquare({ events: 12, total: 15 }, { events: 17, total: 33 });
+    expect(found?.statistic).toBeCloseTo(3.498828576142551, 12);
+    expect(found?.p).toBeCloseTo(0.0614122539870913, 12);
   });
 
   it('gives X² = 2 for the tea-tasting table, where every |O − E| is 1 and every E is 2', () => {
-    // Fisher RA. The Design of Experiments (1935): 3 of 4 milk-first cups found; E = 2 in
-    // each cell, so X² = 4 × 1²/2 = 2 (derived), p = 0.1573 (chi-square table, 1 df).
+    // Fisher RA. The Design of Experiments (1935), ch. II; Agresti A. Categorical Data Analysis
+    // (2002), p. 91, as cited in R’s fisher.test documentation: 3 of 4 milk-first cups found; E = 2
+    // in each cell, so X² = 4 × 1²/2 = 2 (derived); recomputed with SciPy:
+    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[3, 1], [1, 3]], correction=False); print(r.statistic, r.pvalue)"
+    // → 2.0, p 0.15729920705028105.
     const found = pearsonChiSquare({ events: 3, total: 4 }, { events: 1, total: 4 });
     expect(found?.statistic).toBeCloseTo(2, 12);
-    expect(found?.p).toBeCloseTo(0.1573, 4);
-  });
-
-  it('follows X² = N(ad − bc)² / (n₁n₂m₁m₂) on the aspirin and stroke table', () => {
-    // Table of the SciPy chi2_contingency documentation, [[176, 230], [21035, 21018]], by hand:
-    // 42459 × 1138882² / (21211 × 21248 × 406 × 42053) = 7.1569 (derived).
-    const found = pearsonChiSquare({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(found?.statistic).toBeCloseTo(7.1569, 4);
+    expect(found?.p).toBeCloseTo(0.15729920705028105, 12);
   });
 
   it('is 0 with p = 1 when both arms have the same risk', () => {

@@ -3,20 +3,35 @@ import { cramersV } from '../../../src/core/counts/cramers-v.ts';
 import { phiCoefficient } from '../../../src/core/counts/phi-coefficient.ts';
 import { problemOf } from './support.ts';
 
-// Cramér H. Mathematical Methods of Statistics (1946), p. 282 (from memory): V = √(X² / (N · min(r − 1, c − 1))),
-// which for a 2×2 table is |phi|, and phi² = X² / N (common practice).
+// Cramér's V = √(X² / (N · min(r − 1, c − 1))), which for a 2×2 table is |phi|, and phi² = X² / N
+// (common practice; SciPy's scipy.stats.contingency.association documents V as an extension of
+// phi). Each expected value below is recomputed with association(method='cramer'), which uses the
+// uncorrected X².
 describe('phiCoefficient', () => {
   it('is 0.5 for the tea-tasting table: (3·3 − 1·1) / √(4·4·4·4)', () => {
     // Fisher (1935) tea-tasting table; X² = 2, N = 8, √(2/8) = 0.5 (derived).
+    // python3 -c "from scipy.stats.contingency import association as a; print(a([[3, 1], [1, 3]], method='cramer'))" → 0.5.
     expect(phiCoefficient({ events: 3, total: 4 }, { events: 1, total: 4 })).toBeCloseTo(0.5, 12);
   });
 
-  it('is positive when events go with the option arm and negative when they go with the comparison', () => {
-    // Agresti's myocardial infarction table: X² = 25.01, N = 22071, |phi| = √(25.01/22071) = 0.0337.
-    const placeboFirst = phiCoefficient({ events: 189, total: 11034 }, { events: 104, total: 11037 });
-    expect(placeboFirst).toBeCloseTo(Math.sqrt(25.014 / 22071), 5);
-    expect(phiCoefficient({ events: 104, total: 11037 }, { events: 189, total: 11034 })).toBeCloseTo(
-      -(placeboFirst ?? 0),
+  it('reproduces SciPy on the whales-and-sharks table, a small table with a cell of 1', () => {
+    // SciPy documentation, scipy.stats.fisher_exact, Examples: [[8, 2], [1, 5]]; phi = (8·5 − 2·1) /
+    // √(10·6·9·7) (derived).
+    // python3 -c "from scipy.stats.contingency import association as a; print(a([[8, 1], [2, 5]], method='cramer'))"
+    // → 0.6180700462007377.
+    expect(phiCoefficient({ events: 8, total: 9 }, { events: 2, total: 7 })).toBeCloseTo(0.6180700462007377, 12);
+  });
+
+  it('is negative when events go with the comparison arm, on the large ischemic stroke table', () => {
+    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
+    // et al. (JAMA 2006;295:306), 176 of 21211 on the option vs 230 of 21248 on placebo; X² = 7.1569,
+    // N = 42459, |phi| = √(7.1569 / 42459) (derived).
+    // python3 -c "from scipy.stats.contingency import association as a; print(a([[176, 21035], [230, 21018]], method='cramer'))"
+    // → 0.012983076610594993.
+    const optionFirst = phiCoefficient({ events: 176, total: 21211 }, { events: 230, total: 21248 });
+    expect(optionFirst).toBeCloseTo(-0.012983076610594993, 12);
+    expect(phiCoefficient({ events: 230, total: 21248 }, { events: 176, total: 21211 })).toBeCloseTo(
+      -(optionFirst ?? 0),
       14,
     );
   });
@@ -41,10 +56,9 @@ describe('phiCoefficient', () => {
 describe('cramersV', () => {
   it('is |phi| for a 2×2 table', () => {
     expect(cramersV({ events: 1, total: 4 }, { events: 3, total: 4 })).toBeCloseTo(0.5, 12);
-    expect(cramersV({ events: 104, total: 11037 }, { events: 189, total: 11034 })).toBeCloseTo(
-      Math.sqrt(25.014 / 22071),
-      5,
-    );
+    // Same SciPy commands as for phi above.
+    expect(cramersV({ events: 176, total: 21211 }, { events: 230, total: 21248 })).toBeCloseTo(0.012983076610594993, 12);
+    expect(cramersV({ events: 8, total: 9 }, { events: 2, total: 7 })).toBeCloseTo(0.6180700462007377, 12);
   });
 
   it('is null with a zero margin', () => {

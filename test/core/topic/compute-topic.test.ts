@@ -17,7 +17,7 @@ function demo(name: string): Topic {
   return reading.topic;
 }
 
-const HEART = '01-heart-tablet.json';
+const STONE = '01-kidney-stone.json';
 const SCREENING = '02-bowel-screening.json';
 const FRACTURE = '03-fracture-medicine.json';
 
@@ -30,7 +30,7 @@ const codes = (result: TopicResult): string[] => result.notices.map((notice) => 
 
 describe('computeTopic on the demo topics', () => {
   it.each([
-    [HEART, 100],
+    [STONE, 100],
     [SCREENING, 1000],
     [FRACTURE, 100],
   ] as const)('gives %s one denominator, %i, for every outcome and option', (name, denominator) => {
@@ -47,7 +47,7 @@ describe('computeTopic on the demo topics', () => {
     }
   });
 
-  it.each([HEART, SCREENING, FRACTURE])('lists the options of %s in the topic’s order, the comparison as a plain baseline', (name) => {
+  it.each([STONE, SCREENING, FRACTURE])('lists the options of %s in the topic’s order, the comparison as a plain baseline', (name) => {
     const topic = demo(name);
     const result = computeTopic(topic);
     for (const outcome of result.outcomes) {
@@ -66,29 +66,33 @@ describe('computeTopic on the demo topics', () => {
     }
   });
 
-  it('computes the heart demo’s numbers for each dose', () => {
-    const result = computeTopic(demo(HEART));
-    expect(result.periodYears).toBe(10);
+  it('computes the kidney stone demo’s numbers for each option', () => {
+    const result = computeTopic(demo(STONE));
+    expect(result.periodYears).toBe(5);
     expect(result.illustrative).toBe(true);
-    // Standard dose, RR 0.75 (0.68 to 0.83) at 15%: 11.25% (10.2% to 12.45%), 15 → 11 in 100, NNTB 27.
-    const standard = entry(result, 0, 1);
-    expect(standard.interventionRisk.estimate).toBeCloseTo(0.1125, 12);
-    expect(standard.interventionRisk.lower).toBeCloseTo(0.102, 12);
-    expect(standard.interventionRisk.upper).toBeCloseTo(0.1245, 12);
-    expect(standard.perPeople).toMatchObject({ comparison: 15, intervention: 11, difference: 4 });
-    expect(standard.nnt).toMatchObject({ rounded: 27, label: 'NNTB' });
-    expect(standard.groups).toEqual({ denominator: 100, event: 11, prevented: 4, caused: 0, free: 85 });
-    expect(standard.certainty).toBe('high');
-    // Diabetes is a harm: RR 1.2 at 8% with the higher dose → 9.6%, 8 → 10 in 100, 1/0.016 = 62.5: NNTH 62 (rounded down for a harm).
-    const diabetes = entry(result, 2, 2);
-    expect(diabetes.interventionRisk.estimate).toBeCloseTo(0.096, 12);
-    expect(diabetes.groups).toEqual({ denominator: 100, event: 8, prevented: 0, caused: 2, free: 90 });
-    expect(diabetes.nnt).toMatchObject({ rounded: 62, label: 'NNTH' });
+    // Extra water, RR 0.6 (0.45 to 0.8) at 4 in 10: 24% (18% to 32%), 40 → 24 in 100, NNTB ⌈1/0.16⌉ = 7 (derived).
+    const water = entry(result, 0, 1);
+    expect(water.interventionRisk.estimate).toBeCloseTo(0.24, 12);
+    expect(water.interventionRisk.lower).toBeCloseTo(0.18, 12);
+    expect(water.interventionRisk.upper).toBeCloseTo(0.32, 12);
+    expect(water.perPeople).toMatchObject({ comparison: 40, intervention: 24, difference: 16 });
+    expect(water.nnt).toMatchObject({ rounded: 7, label: 'NNTB' });
+    expect(water.groups).toEqual({ denominator: 100, event: 24, prevented: 16, caused: 0, free: 60 });
+    expect(water.certainty).toBe('moderate');
+    // An upset stomach is a harm given as an odds ratio: OR 2.6 at 5% with the citrate drink →
+    // 2.6 × 0.05 / (0.95 + 2.6 × 0.05) = 12.04% (risk from odds, common practice), 5 → 12 in 100,
+    // 1/0.0704 = 14.2, rounded down for a harm: NNTH 14 (derived).
+    const stomach = entry(result, 2, 2);
+    expect(stomach.interventionRisk.estimate).toBeCloseTo(0.13 / 1.08, 12);
+    expect(stomach.groups).toEqual({ denominator: 100, event: 5, prevented: 0, caused: 7, free: 88 });
+    expect(stomach.nnt).toMatchObject({ rounded: 14, label: 'NNTH' });
+    expect(stomach.certainty).toBe('moderate');
     expect(entry(result, 2, 1).importance).toBe('trivial');
+    expect(entry(result, 2, 1).certainty).toBe('very-low');
   });
 
   it('warns once that the intervals leave out the baseline’s uncertainty', () => {
-    const result = computeTopic(demo(HEART));
+    const result = computeTopic(demo(STONE));
     expect(codes(result)).toEqual(['interval-ignores-baseline-uncertainty']);
   });
 
@@ -136,9 +140,9 @@ describe('computeTopic on the demo topics', () => {
     const result = computeTopic(demo(SCREENING), { per: 100 });
     expect(result.denominator).toBe(100);
     expect(codes(result)).not.toContain('denominator-raised');
-    const heart = computeTopic(demo(HEART), { per: 1000 });
-    // 0.1125 × 1000 = 112.5 → 113 (rounded half up).
-    expect(entry(heart, 0, 1).perPeople).toMatchObject({ denominator: 1000, comparison: 150, intervention: 113, difference: 37 });
+    const stone = computeTopic(demo(STONE), { per: 1000 });
+    // 0.13 / 1.08 × 1000 = 120.4 → 120 (rounded half up); the comparison 5% → 50.
+    expect(entry(stone, 2, 2).perPeople).toMatchObject({ denominator: 1000, comparison: 50, intervention: 120, difference: -70 });
   });
 
   it('uses the trial’s comparison arm as the baseline when none is given, and says so', () => {
@@ -170,7 +174,7 @@ describe('computeTopic on the demo topics', () => {
 
 describe('evaluateTopic on a topic with problems', () => {
   it('returns every problem instead of a result', () => {
-    const topic: Topic = { ...demo(HEART), title: '', periodYears: -1 };
+    const topic: Topic = { ...demo(STONE), title: '', periodYears: -1 };
     const evaluation = evaluateTopic(topic);
     expect(evaluation.ok).toBe(false);
     expect(evaluation.result).toBeNull();
@@ -178,7 +182,7 @@ describe('evaluateTopic on a topic with problems', () => {
   });
 
   it('throws a TopicError carrying the problems from computeTopic', () => {
-    const topic: Topic = { ...demo(HEART), title: '' };
+    const topic: Topic = { ...demo(STONE), title: '' };
     expect(() => computeTopic(topic)).toThrow(TopicError);
     try {
       computeTopic(topic);
@@ -188,9 +192,9 @@ describe('evaluateTopic on a topic with problems', () => {
   });
 
   it('returns no problems and a result for a valid topic', () => {
-    const evaluation = evaluateTopic(demo(HEART));
+    const evaluation = evaluateTopic(demo(STONE));
     expect(evaluation.ok).toBe(true);
     expect(evaluation.problems).toEqual([]);
-    expect(evaluation.result?.title).toBe(demo(HEART).title);
+    expect(evaluation.result?.title).toBe(demo(STONE).title);
   });
 });

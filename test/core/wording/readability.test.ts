@@ -82,8 +82,8 @@ describe('readability', () => {
 });
 
 describe('readingWarnings', () => {
-  // Handout text at grade 8 or below: NIH advice, as cited by Rooney et al. 2021, J Patient Exp
-  // 8:2374373521998847.
+  // Handout text at grade 8 or below: the top of the grade 6 to 8 that plain-language advice for
+  // patient material usually asks for (common practice).
   it('uses grade 8 as the limit', () => {
     expect(READING_GRADE_LIMIT).toBe(8);
   });

@@ -14,7 +14,7 @@ import { numbersIn, oneInDenominators, sentencesOf, strokeTopic, topicFixture } 
 
 /** The three invented demo topics (illustrative), computed by the core. */
 function demoResults(): readonly TopicResult[] {
-  return ['01-heart-tablet', '02-bowel-screening', '03-fracture-medicine'].map((name) => {
+  return ['01-kidney-stone', '02-bowel-screening', '03-fracture-medicine'].map((name) => {
     const reading = readTopicFile(readFileSync(new URL(`../../../assets/demo/${name}.json`, import.meta.url), 'utf8'));
     if (!reading.ok) throw new Error(`demo ${name} does not read`);
     return computeTopic(reading.topic);
@@ -282,7 +282,7 @@ describe('handoutSentences', () => {
     expect(stroke.slice(6)).toEqual(['change', 'range', 'certainty', 'change', 'range-unknown', 'certainty']);
   });
 
-  it('reads the stroke handout with the tablet at grade 8 or below (NIH advice, Rooney et al. 2021)', () => {
+  it('reads the stroke handout with the tablet at grade 8 or below (the top of the usual grade 6 to 8, common practice)', () => {
     const text = handoutSentences(strokeTopic(), { showNnt: false })
       .filter((found) => found.kind !== 'population')
       .map((found) => found.text)

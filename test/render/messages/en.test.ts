@@ -3,25 +3,25 @@ import { chartMessagesEn as messages } from '../../../src/render/messages/en.ts'
 
 describe('chartMessagesEn', () => {
   // IPDAS (Elwyn et al. 2006; IPDASi items on probabilities): each graphic names the option,
-  // the outcome, the group and the period ("If 100 people like you take tablet A for 10 years").
+  // the outcome, the group and the period ("With tablet A: 100 people over 10 years").
   it('titles an option’s array with the group, the option and the period', () => {
     expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 10 })).toBe(
-      'If 100 people like you take option A for 10 years',
+      'With option A: 100 people over 10 years',
     );
   });
 
   it('titles the comparison with its own name', () => {
     expect(messages.comparisonTitle({ denominator: 100, option: 'No treatment', periodYears: 10 })).toBe(
-      'If 100 people like you have no treatment for 10 years',
+      'With no treatment: 100 people over 10 years',
     );
   });
 
   it('keeps acronyms as written and writes short periods in months', () => {
     expect(messages.optionTitle({ denominator: 1000, option: 'ACE inhibitor', periodYears: 0.5 })).toBe(
-      'If 1000 people like you take ACE inhibitor for 6 months',
+      'With ACE inhibitor: 1000 people over 6 months',
     );
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('If 100 people like you take option A for 1 year');
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('If 100 people like you take option A');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('With option A: 100 people over 1 year');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('With option A: 100 people');
   });
 
   // Fagerlin, Zikmund-Fisher & Ubel (2011), J Natl Cancer Inst 103:1436: legends carry the numbers.
@@ -49,5 +49,30 @@ describe('chartMessagesEn', () => {
   it('joins the labels of an array into one sentence', () => {
     expect(messages.summary('Title', ['a', 'b', 'c'])).toBe('Title: a, b and c.');
     expect(messages.summary('Title', ['a'])).toBe('Title: a.');
+  });
+
+  // A wanted event ("pain gone by day 3") is gained or missed, never avoided or caused.
+  it('labels the groups of a wanted event without avoiding or causing it', () => {
+    const values = { outcome: 'a response', option: 'option A', role: 'option' as const };
+    expect(messages.wantedLabels.event({ ...values, count: 25 })).toBe('25 have a response anyway');
+    expect(messages.wantedLabels.caused({ ...values, count: 20 })).toBe('20 have a response because of option A');
+    expect(messages.wantedLabels.caused({ ...values, count: 1 })).toBe('1 has a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, count: 3 })).toBe('3 miss out on a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, count: 1 })).toBe('1 misses out on a response because of option A');
+    expect(messages.wantedLabels.prevented({ ...values, outcome: 'being alive at 10 years', count: 2 })).toBe(
+      '2 do not end up being alive at 10 years because of option A',
+    );
+    expect(messages.wantedLabels.free({ ...values, count: 55 })).toBe('55 do not have a response');
+  });
+
+  // A year is 365.25 days and a month a twelfth of a year (common practice); the period reads in the unit given.
+  it('words the period in the unit it was given in', () => {
+    expect(messages.heading('pain gone by day 3', 3 / 365.25, 'days')).toBe('Chance of pain gone by day 3 over 3 days');
+    expect(messages.optionTitle({ denominator: 100, option: 'Tablet B', periodYears: 6 / 12, periodUnit: 'months' })).toBe(
+      'With tablet B: 100 people over 6 months',
+    );
+    expect(messages.pairTitle({ denominator: 100, option: '', periodYears: 14 / 365.25, periodUnit: 'weeks' }, 'option')).toBe(
+      'With the option: 100 people like you, over 2 weeks',
+    );
   });
 });

@@ -23,7 +23,7 @@ function newDocument(): jsPDF {
   return doc;
 }
 
-/** How many figures the content stream filled in each group's colour. */
+/** How many figures the content stream filled in each look's colour. */
 function figuresByGroup(pdf: string) {
   const painted = paintings(pdf);
   const count = (hex: string, operators: readonly string[]) =>
@@ -33,8 +33,8 @@ function figuresByGroup(pdf: string) {
   // then overlaid through a clip and stroked (ISO 32000-1 §8.5.3).
   return {
     event: count(groups.event.fill, ['B']),
-    prevented: count(groups.prevented.fill, ['f']),
-    caused: count(groups.caused.fill, ['f']),
+    helped: count(groups.helped.fill, ['f']),
+    harmed: count(groups.harmed.fill, ['f']),
     free: count(groups.free.fill, ['B']),
   };
 }
@@ -50,7 +50,8 @@ describe('drawIconArrayPdf', () => {
     expect(first.drawn).toEqual({ event: 15, prevented: 5, caused: 0, free: 80 });
     expect(second.drawn).toEqual({ event: 20, prevented: 0, caused: 10, free: 970 });
     const pdf = doc.output();
-    expect(figuresByGroup(pdf)).toEqual({ event: 35, prevented: 5, caused: 10, free: 1050 });
+    // An event to avoid: prevented people are drawn helped, caused people harmed (lookOf).
+    expect(figuresByGroup(pdf)).toEqual({ event: 35, helped: 5, harmed: 10, free: 1050 });
     expect(pdf.startsWith('%PDF-')).toBe(true);
     expect(pdf.trimEnd().endsWith('%%EOF')).toBe(true);
     expect(pdf.match(/\/Type \/Page\b/g)).toHaveLength(1);
@@ -105,7 +106,7 @@ describe('drawChartPdf', () => {
     expect(drawing.height).toBeGreaterThan(60);
     expect(drawing.height).toBeLessThan(267);
     const pdf = doc.output();
-    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'If 100 people like you take option A for 10 years']) {
+    for (const text of ['19 have a stroke', '4 avoid a stroke because of option A', 'With option A: 100 people over 10 years']) {
       expect(pdf).toContain(`(${text}) Tj`);
     }
 
@@ -123,5 +124,32 @@ describe('drawChartPdf', () => {
     } finally {
       rmSync(folder, { recursive: true, force: true });
     }
+  });
+});
+
+describe('drawChartPdf of a wanted event and with the range outline', () => {
+  // Invented counts per 100: 25 without and 45 with option A, range 35 to 58.
+  const model = () =>
+    outcomeChart(topicFixture(100, { comparison: 25, intervention: 45, range: { lower: 35, upper: 58 }, wanted: true, name: 'a response' }), 'stroke');
+
+  it('draws the people who gain a wanted event in the helped look, and none harmed', () => {
+    const drawing = drawChartPdf(newDocument(), model(), { x: 15, y: 15, width: 180 }, colourPalette);
+    expect(drawing.arrays[1]!.drawn).toEqual({ event: 25, prevented: 0, caused: 20, free: 55 });
+    expect(drawing.arrays[1]!.looks).toEqual({ event: 25, helped: 20, harmed: 0, free: 55 });
+  });
+
+  it('rings the uncertain people and still draws every figure in its own look, so the totals stay', () => {
+    const plain = newDocument();
+    const ringed = newDocument();
+    const without = drawChartPdf(plain, model(), { x: 15, y: 15, width: 180 }, colourPalette);
+    const withRange = drawChartPdf(ringed, model(), { x: 15, y: 15, width: 180 }, colourPalette, { showRange: true });
+    expect(withRange.arrays.map((array) => array.looks)).toEqual(without.arrays.map((array) => array.looks));
+    // Ranks 35–57: 23 people ringed, and the same fills painted as without the outline, but
+    // for the legend's ringed sample figure (drawn in the look of people without the event).
+    expect(withRange.arrays[1]!.outlined).toBe(23);
+    const before = figuresByGroup(plain.output());
+    expect(figuresByGroup(ringed.output())).toEqual({ ...before, free: before.free + 1 });
+    // One dashed stroke per ring, and one for the legend's sample (ISO 32000-1 §8.4.3.6).
+    expect(ringed.output().match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(24);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { lookOf } from '../../../src/core/direction.ts';
 import type { PersonGroup } from '../../../src/core/types.ts';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { type ChartPalette, blackAndWhitePalette, colourPalette } from '../../../src/render/palette.ts';
@@ -22,9 +23,9 @@ function effectivePaint(person: Element): { fill: string | null; stroke: string 
   };
 }
 
-/** The palette's paint of a group, with pattern fills named by the chart's ids. */
-function expectedPaint(palette: ChartPalette, group: PersonGroup, idPrefix: string): { fill: string; stroke: string } {
-  const style = palette.groups[group];
+/** The palette's paint of a group's look, with pattern fills named by the chart's ids. */
+function expectedPaint(palette: ChartPalette, group: PersonGroup, wanted: boolean, idPrefix: string): { fill: string; stroke: string } {
+  const style = palette.groups[lookOf(group, wanted)];
   const fill = style.pattern === 'solid' ? style.fill : `url(#${idPrefix}-${style.pattern})`;
   return { fill, stroke: style.outline };
 }
@@ -41,7 +42,7 @@ describe('drawn people', () => {
     expect(people).toHaveLength(2000);
     for (const person of people) {
       const group = person.getAttribute('data-outcome') as PersonGroup;
-      expect(effectivePaint(person)).toEqual(expectedPaint(palette, group, 'chart-stroke'));
+      expect(effectivePaint(person)).toEqual(expectedPaint(palette, group, false, 'chart-stroke'));
     }
   });
 

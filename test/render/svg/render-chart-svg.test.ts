@@ -116,20 +116,40 @@ describe('renderChartSvg accessibility', () => {
 });
 
 describe('renderChartSvg range', () => {
-  it('draws no one outlined by default', () => {
+  it('draws no one ringed by default', () => {
     const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'));
+    expect(svg.querySelectorAll('g.range-outline, [stroke-dasharray]')).toHaveLength(0);
+  });
+
+  it('rings the people between the lower and upper count when showRange is on', () => {
+    const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'), { showRange: true });
+    // Range 12 to 18 around 15: ranks 12–17 (six people) could be either way.
+    expect(ringedOutcomes(svg, 1)).toEqual(['event', 'event', 'event', 'prevented', 'prevented', 'prevented']);
+    expect(ringedOutcomes(svg, 0)).toEqual([]);
     expect(svg.querySelectorAll('g.people [stroke-dasharray]')).toHaveLength(0);
   });
 
-  it('outlines the people between the lower and upper count when showRange is on', () => {
-    const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'), { showRange: true });
-    const outlined = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people [stroke-dasharray]')];
-    // Range 12 to 18 around 15: ranks 12–17 (six people) could be either way.
-    expect(outlined).toHaveLength(6);
-    expect(outlined.map((element) => element.getAttribute('data-outcome'))).toEqual(['event', 'event', 'event', 'prevented', 'prevented', 'prevented']);
-    expect(svg.querySelectorAll('g.chart-array')[0]!.querySelectorAll('[stroke-dasharray]')).toHaveLength(0);
+  // The outline marks people; it never moves them between groups, so the picture shows the
+  // totals its legend gives (Ancker et al. 2006, JAMIA 13:608: part-to-whole graphics).
+  it.each([false, true])('keeps every person’s group and paint when the outline is on (wanted event: %s)', (wanted) => {
+    const model = outcomeChart(topicFixture(100, { comparison: 20, intervention: 31, range: { lower: 24, upper: 40 }, wanted }), 'stroke');
+    const paint = (svg: SVGSVGElement) =>
+      [...svg.querySelectorAll('g.people > path')].map((person) => `${person.getAttribute('data-outcome')} ${person.getAttribute('fill')} ${person.getAttribute('stroke')}`);
+    const plain = paint(drawIntoPage(model));
+    const outlined = drawIntoPage(model, { showRange: true });
+    expect(paint(outlined)).toEqual(plain);
+    expect(drawnCounts(outlined, 1)).toEqual({ event: 20, caused: 11, free: 69 });
+    // Ranks 24–39: 7 gained people and 9 without the event, every one still in their own look.
+    expect(ringedOutcomes(outlined, 1)).toEqual([...Array<string>(7).fill('caused'), ...Array<string>(9).fill('free')]);
   });
 });
+
+/** The groups of the people an array's range outline rings. */
+function ringedOutcomes(svg: SVGSVGElement, index: number): (string | null)[] {
+  const array = svg.querySelectorAll('g.chart-array')[index]!;
+  const people = [...array.querySelectorAll('g.people > path')];
+  return [...array.querySelectorAll('g.range-outline > rect')].map((ring) => people[Number(ring.getAttribute('data-index'))]?.getAttribute('data-outcome') ?? null);
+}
 
 describe('renderChartSvg output', () => {
   it('is byte-identical for the same input, with one data-outcome per person in the text', () => {

@@ -66,8 +66,8 @@ describe('updateChart', () => {
   it('keeps showing the range outline it was drawn with', () => {
     const svg = drawIntoPage(stroke(20, 15), { showRange: true });
     updateChart(svg, stroke(20, 12));
-    // Range 10 to 15 around 12: ranks 10–14 outlined.
-    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people [stroke-dasharray]')).toHaveLength(5);
+    // Range 10 to 15 around 12: ranks 10–14 ringed.
+    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.range-outline > rect')).toHaveLength(5);
   });
 
   it('redraws everything when the denominator changes or new options are given', () => {
@@ -77,5 +77,32 @@ describe('updateChart', () => {
     const other = drawIntoPage(stroke(20, 15));
     expect(updateChart(other, stroke(20, 15), { palette: blackAndWhitePalette }).redrawn).toBe(true);
     expect(other.getAttribute('data-palette')).toBe('black-and-white');
+  });
+});
+
+describe('updateChart and the event’s direction', () => {
+  // Invented counts: 20 without and 30 with the option. As an event to avoid the 10 extra
+  // people are harmed; as a wanted event the same 10 are helped (lookOf in core/direction.ts).
+  const pair = (wanted: boolean) => outcomeChart(topicFixture(100, { comparison: 20, intervention: 30, wanted }), 'stroke');
+
+  it('repaints the same people when the event turns out to be wanted, and matches a fresh drawing', () => {
+    const svg = drawIntoPage(pair(false));
+    const update = updateChart(svg, pair(true));
+    expect(update).toEqual({ redrawn: false, peopleChanged: 10 });
+    expect(svg.getAttribute('data-wanted')).toBe('true');
+    const updatedText = svg.outerHTML;
+    expect(updatedText).toBe(drawIntoPage(pair(true)).outerHTML);
+  });
+});
+
+describe('updateChart and the range outline', () => {
+  it('gives only arrays with an interval an outline, and redraws when an interval goes away', () => {
+    const svg = drawIntoPage(stroke(20, 15), { showRange: true });
+    const outlines = () => [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > g.range-outline') !== null);
+    expect(outlines()).toEqual([false, true]);
+    const noInterval = outcomeChart(topicFixture(100, { comparison: 20, intervention: 15, range: null }), 'stroke');
+    expect(updateChart(svg, noInterval).redrawn).toBe(true);
+    expect(outlines()).toEqual([false, false]);
+    expect(svg.getAttribute('data-show-range')).toBe('true');
   });
 });

@@ -37,25 +37,25 @@ describe('checkDraft', () => {
   });
 
   test('gives no result and one problem beside the baseline for a risk of 150%', () => {
-    const check = checkDraft(setOutcomeText(demo, 'heart-stroke', 'baselineRisk', '150%'));
+    const check = checkDraft(setOutcomeText(demo, 'stone', 'baselineRisk', '150%'));
     expect(check.result).toBeNull();
     expect(check.savable).toBe(true);
     expect(check.problems.map((found) => [found.key, found.problem.code])).toEqual([
-      [outcomeKey('heart-stroke', 'baseline.risk'), 'risk-out-of-range'],
+      [outcomeKey('stone', 'baseline.risk'), 'risk-out-of-range'],
     ]);
     expect(check.problems[0]?.message).toContain('150%');
   });
 
   test('reports every problem at once, each at its own field, in the order the fields appear', () => {
     let draft = setTopicText(demo, 'title', '');
-    draft = setEffectField(draft, 'muscle', 'standard', 'estimate', 'abc');
-    draft = setEffectField(draft, 'diabetes', 'higher', 'lower', '1.3');
+    draft = setEffectField(draft, 'night', 'water', 'estimate', 'abc');
+    draft = setEffectField(draft, 'stomach', 'citrate', 'lower', '2.8');
     const check = checkDraft(draft);
     expect(check.savable).toBe(false);
     expect(check.problems.map((found) => [found.key, found.problem.code])).toEqual([
       ['title', 'topic-text-missing'],
-      [effectKey('muscle', 'standard', 'estimate'), 'number-unparsable'],
-      [effectKey('diabetes', 'higher', 'interval'), 'interval-excludes-estimate'],
+      [effectKey('night', 'water', 'estimate'), 'number-unparsable'],
+      [effectKey('stomach', 'citrate', 'interval'), 'interval-excludes-estimate'],
     ]);
   });
 

@@ -35,24 +35,24 @@ describe('draft edits', () => {
   });
 
   test('removeOption keeps at least the minimum and passes the comparison on', () => {
-    const removed = removeOption(demo, 'none');
+    const removed = removeOption(demo, 'as-now');
     expect(removed.options.map((option) => [option.id, option.isComparison])).toEqual([
-      ['standard', true],
-      ['higher', false],
+      ['water', true],
+      ['citrate', false],
     ]);
-    expect(removeOption(removed, 'standard')).toBe(removed);
+    expect(removeOption(removed, 'water')).toBe(removed);
     expect(removed.options).toHaveLength(TOPIC_LIMITS.minOptions);
   });
 
   test('setComparison keeps what was typed for the old comparison’s effects', () => {
-    const typed = setEffectField(demo, 'muscle', 'higher', 'estimate', '1.45');
-    const swapped = setComparison(setComparison(typed, 'higher'), 'none');
-    expect(swapped.outcomes[1]?.effects.find((entry) => entry.optionId === 'higher')?.estimate).toBe('1.45');
+    const typed = setEffectField(demo, 'night', 'citrate', 'estimate', '1.45');
+    const swapped = setComparison(setComparison(typed, 'citrate'), 'as-now');
+    expect(swapped.outcomes[1]?.effects.find((entry) => entry.optionId === 'citrate')?.estimate).toBe('1.45');
   });
 
   test('moveOption moves an option by one place and not past either end', () => {
-    expect(moveOption(demo, 'higher', -1).options.map((option) => option.id)).toEqual(['none', 'higher', 'standard']);
-    expect(moveOption(demo, 'none', -1)).toBe(demo);
+    expect(moveOption(demo, 'citrate', -1).options.map((option) => option.id)).toEqual(['as-now', 'citrate', 'water']);
+    expect(moveOption(demo, 'as-now', -1)).toBe(demo);
   });
 
   test('addOutcome adds up to the outcome limit over the topic’s period', () => {
@@ -64,17 +64,17 @@ describe('draft edits', () => {
   });
 
   test('removeOutcome keeps one outcome and passes the headline on', () => {
-    const removed = removeOutcome(demo, 'heart-stroke');
+    const removed = removeOutcome(demo, 'stone');
     expect(removed.outcomes.map((outcome) => [outcome.id, outcome.isHeadline])).toEqual([
-      ['muscle', true],
-      ['diabetes', false],
+      ['night', true],
+      ['stomach', false],
     ]);
-    const single = removeOutcome(removeOutcome(removed, 'muscle'), 'diabetes');
+    const single = removeOutcome(removeOutcome(removed, 'night'), 'stomach');
     expect(single.outcomes).toHaveLength(TOPIC_LIMITS.minOutcomes);
   });
 
   test('setHeadline marks exactly one outcome', () => {
-    expect(setHeadline(demo, 'diabetes').outcomes.map((outcome) => outcome.isHeadline)).toEqual([false, false, true]);
+    expect(setHeadline(demo, 'stomach').outcomes.map((outcome) => outcome.isHeadline)).toEqual([false, false, true]);
   });
 
   test('addQuestion stops at the question limit', () => {

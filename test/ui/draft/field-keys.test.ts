@@ -5,7 +5,7 @@ import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');
-// Options: none (comparison), standard, higher. Outcomes: heart-stroke, muscle, diabetes.
+// Options: as-now (comparison), water, citrate. Outcomes: stone, night, stomach.
 const draft = draftFromTopic(first.topic);
 
 describe('fieldKeyForPath', () => {
@@ -13,28 +13,28 @@ describe('fieldKeyForPath', () => {
     ['title', 'title'],
     ['periodYears', 'periodYears'],
     ['options', 'options'],
-    ['options.2.name', 'options.higher.name'],
-    ['outcomes.0.baseline.risk', outcomeKey('heart-stroke', 'baseline.risk')],
-    ['outcomes.1.baseline.periodYears', outcomeKey('muscle', 'baseline.periodYears')],
-    ['outcomes.2.name', outcomeKey('diabetes', 'name')],
-    ['outcomes.2.effects', outcomeKey('diabetes', 'effects')],
-    ['outcomes.1.effects.0.effect.estimate', effectKey('muscle', 'standard', 'estimate')],
-    ['outcomes.1.effects.1.effect.upper', effectKey('muscle', 'higher', 'upper')],
-    ['outcomes.0.effects.1.effect.interval', effectKey('heart-stroke', 'higher', 'interval')],
-    ['outcomes.0.effects.0.followUpYears', effectKey('heart-stroke', 'standard', 'followUpYears')],
-    ['outcomes.0.effects.0.effect.intervention', effectKey('heart-stroke', 'standard', 'intervention')],
-    ['outcomes.0.effects.0.effect.comparison.total', effectKey('heart-stroke', 'standard', 'comparison.total')],
-    ['outcomes.0.effects.0.effect.period', outcomeKey('heart-stroke', 'baseline.periodYears')],
-    ['outcomes.0.effects.0.effect.baseline', outcomeKey('heart-stroke', 'baseline.risk')],
-    ['outcomes.0.effects.0.effect.level', effectKey('heart-stroke', 'standard')],
-    ['outcomes.0.effects.1.optionId', effectKey('heart-stroke', 'higher')],
+    ['options.2.name', 'options.citrate.name'],
+    ['outcomes.0.baseline.risk', outcomeKey('stone', 'baseline.risk')],
+    ['outcomes.1.baseline.periodYears', outcomeKey('night', 'baseline.periodYears')],
+    ['outcomes.2.name', outcomeKey('stomach', 'name')],
+    ['outcomes.2.effects', outcomeKey('stomach', 'effects')],
+    ['outcomes.1.effects.0.effect.estimate', effectKey('night', 'water', 'estimate')],
+    ['outcomes.1.effects.1.effect.upper', effectKey('night', 'citrate', 'upper')],
+    ['outcomes.0.effects.1.effect.interval', effectKey('stone', 'citrate', 'interval')],
+    ['outcomes.0.effects.0.followUpYears', effectKey('stone', 'water', 'followUpYears')],
+    ['outcomes.0.effects.0.effect.intervention', effectKey('stone', 'water', 'intervention')],
+    ['outcomes.0.effects.0.effect.comparison.total', effectKey('stone', 'water', 'comparison.total')],
+    ['outcomes.0.effects.0.effect.period', outcomeKey('stone', 'baseline.periodYears')],
+    ['outcomes.0.effects.0.effect.baseline', outcomeKey('stone', 'baseline.risk')],
+    ['outcomes.0.effects.0.effect.level', effectKey('stone', 'water')],
+    ['outcomes.0.effects.1.optionId', effectKey('stone', 'citrate')],
   ])('maps the core field %s to the editor field %s', (path, key) => {
     expect(fieldKeyForPath(path, draft)).toBe(key);
   });
 
   test('skips the comparison when counting effects: effect 0 belongs to the first other option', () => {
-    const swapped = { ...draft, options: draft.options.map((option) => ({ ...option, isComparison: option.id === 'standard' })) };
-    expect(fieldKeyForPath('outcomes.0.effects.0.effect.estimate', swapped)).toBe(effectKey('heart-stroke', 'none', 'estimate'));
+    const swapped = { ...draft, options: draft.options.map((option) => ({ ...option, isComparison: option.id === 'water' })) };
+    expect(fieldKeyForPath('outcomes.0.effects.0.effect.estimate', swapped)).toBe(effectKey('stone', 'as-now', 'estimate'));
   });
 
   test('maps a question of the topic to its place in the draft', () => {
@@ -49,7 +49,7 @@ describe('fieldKeyForPath', () => {
 
 describe('fieldId', () => {
   test('is a valid element id made of letters, digits and dashes', () => {
-    expect(fieldId('outcomes.heart-stroke.baseline.risk')).toMatch(/^field-[A-Za-z0-9-]+$/);
+    expect(fieldId('outcomes.stone.baseline.risk')).toMatch(/^field-[A-Za-z0-9-]+$/);
   });
 
   test('differs for keys that only differ in punctuation', () => {
@@ -62,23 +62,23 @@ describe('fieldOrder', () => {
     const order = fieldOrder(draft);
     const at = (key: string) => order.indexOf(key);
     expect(order.slice(0, 3)).toEqual(['title', 'population', 'periodYears']);
-    expect(at('options.higher.name')).toBeLessThan(at(outcomeKey('heart-stroke', 'name')));
-    expect(at(outcomeKey('heart-stroke', 'baseline.risk'))).toBeLessThan(at(effectKey('heart-stroke', 'standard', 'estimate')));
-    expect(at(effectKey('heart-stroke', 'higher', 'source'))).toBeLessThan(at(outcomeKey('muscle', 'name')));
-    expect(at(effectKey('heart-stroke', 'none', 'estimate'))).toBe(-1);
+    expect(at('options.citrate.name')).toBeLessThan(at(outcomeKey('stone', 'name')));
+    expect(at(outcomeKey('stone', 'baseline.risk'))).toBeLessThan(at(effectKey('stone', 'water', 'estimate')));
+    expect(at(effectKey('stone', 'citrate', 'source'))).toBeLessThan(at(outcomeKey('night', 'name')));
+    expect(at(effectKey('stone', 'as-now', 'estimate'))).toBe(-1);
   });
 });
 
 describe('fieldPlace', () => {
   test('names where a field is, for a list of problems', () => {
-    expect(fieldPlace('options.higher.name', draft)).toBe('Option 3');
-    expect(fieldPlace(outcomeKey('muscle', 'baseline.risk'), draft)).toBe('muscle pain bad enough to stop the tablet');
-    expect(fieldPlace(effectKey('diabetes', 'standard', 'estimate'), draft)).toBe('type 2 diabetes, effect of the standard dose');
+    expect(fieldPlace('options.citrate.name', draft)).toBe('Option 3');
+    expect(fieldPlace(outcomeKey('night', 'baseline.risk'), draft)).toBe('broken sleep from passing urine at night');
+    expect(fieldPlace(effectKey('stomach', 'water', 'estimate'), draft)).toBe('an upset stomach bad enough to stop, effect of extra water each day');
     expect(fieldPlace('title', draft)).toBeNull();
   });
 
   test('falls back to a number for what has no name yet', () => {
     const unnamed = { ...draft, outcomes: draft.outcomes.map((outcome, index) => (index === 1 ? { ...outcome, name: ' ' } : outcome)) };
-    expect(fieldPlace(outcomeKey('muscle', 'name'), unnamed)).toBe('Outcome 2');
+    expect(fieldPlace(outcomeKey('night', 'name'), unnamed)).toBe('Outcome 2');
   });
 });

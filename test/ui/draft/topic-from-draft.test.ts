@@ -16,8 +16,8 @@ describe('topicFromDraft', () => {
   });
 
   test('reads an absolute reduction typed in percentage points as a proportion', () => {
-    const edited = setEffectField(setEffectField(draft, 'heart-stroke', 'standard', 'measure', 'arr'), 'heart-stroke', 'standard', 'estimate', '3');
-    const cleared = setEffectField(setEffectField(edited, 'heart-stroke', 'standard', 'lower', '1.5%'), 'heart-stroke', 'standard', 'upper', '4.5');
+    const edited = setEffectField(setEffectField(draft, 'stone', 'water', 'measure', 'arr'), 'stone', 'water', 'estimate', '3');
+    const cleared = setEffectField(setEffectField(edited, 'stone', 'water', 'lower', '1.5%'), 'stone', 'water', 'upper', '4.5');
     const effect = topicFromDraft(cleared).topic.outcomes[0]?.effects[0]?.effect;
     expect(effect?.measure).toBe('arr');
     if (effect === undefined || effect.measure === 'counts') throw new Error('expected an entered effect');
@@ -27,7 +27,7 @@ describe('topicFromDraft', () => {
   });
 
   test('keeps the text of an unreadable number and reports it at its own field', () => {
-    const edited = setEffectField(draft, 'muscle', 'higher', 'estimate', '1,4');
+    const edited = setEffectField(draft, 'night', 'citrate', 'estimate', '1,4');
     const reading = topicFromDraft(edited);
     expect(reading.problems).toEqual([
       { code: 'number-unparsable', field: 'outcomes.1.effects.1.effect.estimate', values: { input: '1,4' } },
@@ -44,11 +44,11 @@ describe('topicFromDraft', () => {
   });
 
   test('checks trial arms and reports them at the arm of the effect', () => {
-    let edited = setEffectField(draft, 'heart-stroke', 'standard', 'measure', 'counts');
-    edited = setEffectField(edited, 'heart-stroke', 'standard', 'interventionEvents', '120');
-    edited = setEffectField(edited, 'heart-stroke', 'standard', 'interventionTotal', '100');
-    edited = setEffectField(edited, 'heart-stroke', 'standard', 'comparisonEvents', '15');
-    edited = setEffectField(edited, 'heart-stroke', 'standard', 'comparisonTotal', '100');
+    let edited = setEffectField(draft, 'stone', 'water', 'measure', 'counts');
+    edited = setEffectField(edited, 'stone', 'water', 'interventionEvents', '120');
+    edited = setEffectField(edited, 'stone', 'water', 'interventionTotal', '100');
+    edited = setEffectField(edited, 'stone', 'water', 'comparisonEvents', '15');
+    edited = setEffectField(edited, 'stone', 'water', 'comparisonTotal', '100');
     expect(topicFromDraft(edited).problems).toEqual([
       { code: 'counts-events-above-total', field: 'outcomes.0.effects.0.effect.intervention', values: { input: '120/100' } },
     ]);

@@ -14,7 +14,7 @@ describe('topic files', () => {
   test('a saved draft opens as the same draft', () => {
     const saved = topicFileText(demo, false);
     if (!saved.ok) throw new Error(saved.message);
-    const opened = openTopicText('heart.chancewise.json', saved.text);
+    const opened = openTopicText('kidney-stone.chancewise.json', saved.text);
     expect(opened.ok && opened.draft).toEqual(demo);
   });
 
@@ -29,7 +29,7 @@ describe('topic files', () => {
   });
 
   test('will not write a file while a number cannot be read, and says so', () => {
-    const saved = topicFileText(setEffectField(demo, 'muscle', 'standard', 'estimate', '1..2'), false);
+    const saved = topicFileText(setEffectField(demo, 'night', 'water', 'estimate', '1..2'), false);
     expect(saved.ok).toBe(false);
     expect(!saved.ok && saved.message).toMatch(/One number cannot be read yet/);
   });
@@ -46,7 +46,7 @@ describe('topic files', () => {
   });
 
   test('names a new file after the decision, and keeps the name of an opened file', () => {
-    expect(suggestedFileName(demo, null)).toBe('taking-a-daily-tablet-to-lower-the-chance.cwtopic');
+    expect(suggestedFileName(demo, null)).toBe('ways-to-cut-the-chance-of-a-second.cwtopic');
     expect(suggestedFileName({ ...demo, title: '  ' }, null)).toBe('topic.cwtopic');
     expect(suggestedFileName(demo, 'mine.cwtopic')).toBe('mine.cwtopic');
     expect(suggestedFileName(demo, 'old.json')).toBe('old.cwtopic');

@@ -15,8 +15,8 @@ import { fakePlatform } from './fake-platform.ts';
 // The messages are the app's own words; a replaced topic stays one undo away (common practice of
 // editors: an action that replaces work can be undone).
 
-const [heart, screening] = DEMO_TOPICS;
-if (heart === undefined || screening === undefined) throw new Error('the demonstration topics are missing');
+const [stone, screening] = DEMO_TOPICS;
+if (stone === undefined || screening === undefined) throw new Error('the demonstration topics are missing');
 const fixture = (name: string) => readFileSync(join(import.meta.dirname, '../../fixtures/topics', name), 'utf8');
 const screeningText = readFileSync(join(import.meta.dirname, '../../../assets/demo', screening.fileName), 'utf8');
 
@@ -31,15 +31,15 @@ function setUp(storage = new MemoryStorage(), kind: 'browser' | 'desktop' = 'bro
 describe('TopicDocument', () => {
   it('starts on the first example, named as an unsaved example', () => {
     const { topic } = setUp();
-    expect(topic.editor.draft.title).toBe(heart.topic.title);
+    expect(topic.editor.draft.title).toBe(stone.topic.title);
     expect(topic.fileLabel).toBe('Example (not saved)');
-    expect(topic.windowTitle).toBe(`${heart.topic.title} — Chancewise`);
+    expect(topic.windowTitle).toBe(`${stone.topic.title} — Chancewise`);
     expect(topic.offer).toBeNull();
   });
 
   it('offers back unsaved work from an earlier visit, and restores it as unsaved', () => {
     const storage = new MemoryStorage();
-    const earlier = setTopicText(draftFromTopic(heart.topic), 'title', 'My own topic');
+    const earlier = setTopicText(draftFromTopic(stone.topic), 'title', 'My own topic');
     new Autosave(storage).save({ draft: earlier, fileName: 'mine.cwtopic', savedAt: '2026-11-03T09:30:00.000Z', unsaved: true });
     const { topic, messages } = setUp(storage);
     expect(topic.offer?.draft.title).toBe('My own topic');
@@ -56,12 +56,12 @@ describe('TopicDocument', () => {
 
   it('forgets the offered work when it is discarded', () => {
     const storage = new MemoryStorage();
-    const earlier = setTopicText(draftFromTopic(heart.topic), 'title', 'Thrown away');
+    const earlier = setTopicText(draftFromTopic(stone.topic), 'title', 'Thrown away');
     new Autosave(storage).save({ draft: earlier, fileName: null, savedAt: '2026-11-03T09:30:00.000Z', unsaved: true });
     const first = setUp(storage);
     first.topic.discardOffer();
     expect(first.topic.offer).toBeNull();
-    expect(first.topic.editor.draft.title).toBe(heart.topic.title);
+    expect(first.topic.editor.draft.title).toBe(stone.topic.title);
   });
 
   it('opens a picked file, puts it on the recent list and keeps the replaced work one undo away', async () => {
@@ -102,7 +102,7 @@ describe('TopicDocument', () => {
     platform.picked = new Error('The file is not readable.');
     await topic.openFile();
     expect(messages.message).toEqual({ tone: 'error', text: 'The file is not readable. Your current topic is unchanged.' });
-    expect(topic.editor.draft.title).toBe(heart.topic.title);
+    expect(topic.editor.draft.title).toBe(stone.topic.title);
     expect(topic.recent).toEqual([]);
   });
 
@@ -130,9 +130,9 @@ describe('TopicDocument', () => {
     const { topic, messages } = setUp(new MemoryStorage(), 'desktop');
     topic.receive({ kind: 'file', file: { name: 'screening.cwtopic', text: screeningText } });
     expect(topic.editor.fileName).toBe('screening.cwtopic');
-    topic.receive({ kind: 'snapshot', content: draftFromTopic(heart.topic), fileName: 'heart.cwtopic' });
-    expect(topic.offer?.fileName).toBe('heart.cwtopic');
-    expect(topic.offer?.draft.title).toBe(heart.topic.title);
+    topic.receive({ kind: 'snapshot', content: draftFromTopic(stone.topic), fileName: 'stone.cwtopic' });
+    expect(topic.offer?.fileName).toBe('stone.cwtopic');
+    expect(topic.offer?.draft.title).toBe(stone.topic.title);
     topic.receive({ kind: 'snapshot', content: { not: 'a draft' }, fileName: null });
     expect(messages.message).toEqual({ tone: 'error', text: 'A copy of unsaved work was found but could not be read.' });
   });

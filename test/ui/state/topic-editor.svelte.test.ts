@@ -11,7 +11,7 @@ import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');
 const demo = draftFromTopic(first.topic);
-const baselineKey = outcomeKey('heart-stroke', 'baseline.risk');
+const baselineKey = outcomeKey('stone', 'baseline.risk');
 
 /** An editor with a clock and a scheduler the test controls. */
 function setUp() {
@@ -31,7 +31,7 @@ function setUp() {
   const type = (key: string, texts: readonly string[], gap = 100) => {
     for (const text of texts) {
       time += gap;
-      editor.change((draft) => setOutcomeText(draft, 'heart-stroke', 'baselineRisk', text), key);
+      editor.change((draft) => setOutcomeText(draft, 'stone', 'baselineRisk', text), key);
     }
   };
   return { editor, autosave, storage, tasks, type, advance: (by: number) => (time += by) };
@@ -68,7 +68,7 @@ describe('TopicEditor', () => {
     const { editor, type } = setUp();
     type(baselineKey, ['2', '20', '20%']);
     expect(editor.undo()).toBe(true);
-    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('15%');
+    expect(editor.draft.outcomes[0]?.baselineRisk).toBe('4 in 10');
     expect(editor.canRedo).toBe(true);
     expect(editor.redo()).toBe(true);
     expect(editor.draft.outcomes[0]?.baselineRisk).toBe('20%');

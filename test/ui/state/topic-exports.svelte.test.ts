@@ -46,9 +46,9 @@ describe('TopicExports', () => {
     expect(requests).toHaveLength(1);
     expect(requests[0]).toMatchObject({ paper: 'letter', showNnt: true, date: '2026-11-03' });
     expect(requests[0]?.result).toBe(topic.editor.shown);
-    expect(platform.savedHandouts.map((saved) => saved.name)).toEqual(['taking-a-daily-tablet-to-lower-the-chance.cwtopic-handout.pdf']);
+    expect(platform.savedHandouts.map((saved) => saved.name)).toEqual(['ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf']);
     expect(platform.savedHandouts[0]?.pdf).toBe(PDF_BYTES);
-    expect(messages.message?.text).toBe('The handout is saved as “taking-a-daily-tablet-to-lower-the-chance.cwtopic-handout.pdf”. Open it to print it.');
+    expect(messages.message?.text).toBe('The handout is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf”. Open it to print it.');
   });
 
   it('makes the menu’s handout on A4 without the number needed to treat', async () => {
@@ -81,10 +81,10 @@ describe('TopicExports', () => {
     const { exports, platform, topic } = setUp();
     const shown = topic.editor.shown;
     if (shown === null) throw new Error('the example has no results');
-    const model = outcomeChart(shown, 'heart-stroke');
-    await exports.exportChart(model, 'svg');
+    const model = outcomeChart(shown, 'stone');
+    await exports.exportChart(model, 'svg', false);
     expect(platform.savedFiles).toHaveLength(1);
-    expect(platform.savedFiles[0]?.name).toBe(`taking-a-daily-tablet-to-lower-the-chance.cwtopic-${model.id}.svg`);
+    expect(platform.savedFiles[0]?.name).toBe(`ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg`);
     expect(platform.savedFiles[0]?.type).toBe('image/svg+xml');
     expect(String(platform.savedFiles[0]?.contents)).toMatch(/^<\?xml version="1\.0" encoding="UTF-8"\?>\s*<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
   });
@@ -94,7 +94,7 @@ describe('TopicExports', () => {
     platform.saveAnswer = () => new Error('no room left');
     const shown = topic.editor.shown;
     if (shown === null) throw new Error('the example has no results');
-    await exports.exportChart(outcomeChart(shown, 'heart-stroke'), 'svg');
+    await exports.exportChart(outcomeChart(shown, 'stone'), 'svg', false);
     expect(messages.message).toEqual({ tone: 'error', text: 'The chart could not be saved: no room left.' });
   });
 });

@@ -19,7 +19,7 @@ function setUp(kind: 'browser' | 'desktop') {
   return { platform, messages, topic, saving: new TopicSaving(topic, platform, messages) };
 }
 
-const heartTitle = DEMO_TOPICS[0]?.topic.title ?? '';
+const stoneTitle = DEMO_TOPICS[0]?.topic.title ?? '';
 
 describe('TopicSaving', () => {
   it('asks the browser user for a file name, suggesting one made from the decision', () => {
@@ -27,7 +27,7 @@ describe('TopicSaving', () => {
     saving.request();
     expect(saving.dialogOpen).toBe(true);
     expect(saving.asksName).toBe(true);
-    expect(saving.suggestedName).toBe('taking-a-daily-tablet-to-lower-the-chance.cwtopic');
+    expect(saving.suggestedName).toBe('ways-to-cut-the-chance-of-a-second.cwtopic');
     expect(platform.savedTopics).toHaveLength(0);
   });
 
@@ -61,21 +61,21 @@ describe('TopicSaving', () => {
 
   it('says where the browser puts the file, and keeps an older .json ending', async () => {
     const { saving, platform, messages } = setUp('browser');
-    await saving.save('heart.chancewise.json', false);
-    expect(platform.savedTopics[0]?.name).toBe('heart.chancewise.json');
-    expect(messages.message?.text).toBe('Saved “heart.chancewise.json”. Your browser puts it in its downloads folder.');
+    await saving.save('stone.chancewise.json', false);
+    expect(platform.savedTopics[0]?.name).toBe('stone.chancewise.json');
+    expect(messages.message?.text).toBe('Saved “stone.chancewise.json”. Your browser puts it in its downloads folder.');
   });
 
   it('changes nothing when saving is cancelled, and keeps the work when it fails', async () => {
     const { saving, platform, topic, messages } = setUp('browser');
     platform.saveAnswer = () => null;
-    await saving.save('heart', false);
+    await saving.save('stone', false);
     expect(messages.message).toBeNull();
     expect(topic.editor.fileName).toBeNull();
     platform.saveAnswer = () => new Error('The folder is read-only.');
-    await saving.save('heart', false);
+    await saving.save('stone', false);
     expect(messages.message).toEqual({ tone: 'error', text: 'The topic was not saved: The folder is read-only. Your work is still here.' });
-    expect(topic.editor.draft.title).toBe(heartTitle);
+    expect(topic.editor.draft.title).toBe(stoneTitle);
   });
 
   it('does not save a draft with a number that cannot be read, and says how many to fix', () => {

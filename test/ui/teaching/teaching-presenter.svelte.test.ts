@@ -5,7 +5,7 @@ import { DEFAULT_STEPS } from '../../../src/teaching/teaching-steps.ts';
 import type { OpenedFile } from '../../../src/ui/platform/platform.ts';
 import { EXAMPLE_SETS } from '../../../src/ui/teaching/teaching-examples.ts';
 import { TeachingPresenter } from '../../../src/ui/teaching/teaching-presenter.svelte.ts';
-import { HEART, demoTopic } from '../../teaching/teaching-fixtures.ts';
+import { STONE, demoTopic } from '../../teaching/teaching-fixtures.ts';
 
 // The keys are those of slide software and presentation clickers (common practice, as in
 // teaching-keys.ts); the messages are the view's own words (src/teaching/messages/en.ts).
@@ -16,8 +16,8 @@ interface Saved {
   readonly type: string;
 }
 
-/** A presenter of the heart demonstration topic on a platform the test answers for. */
-function setUp(answers: { save?: (name: string) => Promise<string | null>; pick?: () => Promise<OpenedFile | null> } = {}, topic: Topic = demoTopic(HEART)) {
+/** A presenter of the kidney stone demonstration topic on a platform the test answers for. */
+function setUp(answers: { save?: (name: string) => Promise<string | null>; pick?: () => Promise<OpenedFile | null> } = {}, topic: Topic = demoTopic(STONE)) {
   const saved: Saved[] = [];
   let left = 0;
   let focused = 0;
@@ -39,21 +39,21 @@ function setUp(answers: { save?: (name: string) => Promise<string | null>; pick?
   return { presenter, saved, left: () => left, focused: () => focused };
 }
 
-const heartTitle = demoTopic(HEART).title;
-// The heart topic shows every default step, with one more slide each for its second harm and that harm's words.
-const heartSlides = DEFAULT_STEPS.length + 2;
+const stoneTitle = demoTopic(STONE).title;
+// The kidney stone topic shows every default step, with one more slide each for its second harm and that harm's words.
+const stoneSlides = DEFAULT_STEPS.length + 2;
 
 describe('TeachingPresenter', () => {
   it('opens on the topic’s first slide and says where the presenter is', () => {
     const { presenter } = setUp();
     expect(presenter.problem).toBeNull();
     expect(presenter.session.slide?.kind).toBe('title');
-    expect(presenter.progressLabel).toBe(`Slide 1 of ${heartSlides}`);
-    expect(presenter.announcement).toBe(`Slide 1 of ${heartSlides}: ${heartTitle}`);
+    expect(presenter.progressLabel).toBe(`Slide 1 of ${stoneSlides}`);
+    expect(presenter.announcement).toBe(`Slide 1 of ${stoneSlides}: ${stoneTitle}`);
   });
 
   it('says why a topic with a problem cannot be presented, and has no slides', () => {
-    const topic = demoTopic(HEART);
+    const topic = demoTopic(STONE);
     const broken: Topic = {
       ...topic,
       outcomes: topic.outcomes.map((outcome, index) => (index === 0 ? { ...outcome, baseline: { ...outcome.baseline, risk: '5/0' } } : outcome)),
@@ -70,7 +70,7 @@ describe('TeachingPresenter', () => {
     expect(presenter.key({ key: 'ArrowRight' })).toBe(true);
     expect(presenter.session.slide?.kind).toBe('with-option');
     expect(presenter.key({ key: 'End' })).toBe(true);
-    expect(presenter.announcement).toBe(`Slide ${heartSlides} of ${heartSlides}: Two totals, or the change itself?`);
+    expect(presenter.announcement).toBe(`Slide ${stoneSlides} of ${stoneSlides}: Two totals, or the change itself?`);
     expect(presenter.key({ key: 'a' })).toBe(false);
     expect(presenter.key({ key: 's', ctrlKey: true })).toBe(false);
     // Space on a button presses the button, not the slide.
@@ -115,7 +115,7 @@ describe('TeachingPresenter', () => {
     await presenter.openSet();
     expect(presenter.message?.tone).toBe('error');
     expect(presenter.message?.text).toMatch(/^“notes\.json”.* The presentation is unchanged\.$/);
-    expect(presenter.session.title).toBe(heartTitle);
+    expect(presenter.session.title).toBe(stoneTitle);
     expect(presenter.session.index).toBe(1);
     // Opening the menu again clears the message.
     presenter.toggleMenu();
@@ -130,10 +130,10 @@ describe('TeachingPresenter', () => {
     expect(presenter.menuOpen).toBe(false);
     expect(presenter.busy).toBe(false);
     expect(saved).toHaveLength(1);
-    expect(saved[0]?.name).toBe('taking-a-daily-tablet-to-lower-02-baseline.svg');
+    expect(saved[0]?.name).toBe('ways-to-cut-the-chance-of-02-baseline.svg');
     expect(saved[0]?.type).toBe('image/svg+xml');
-    expect(String(saved[0]?.contents)).toContain(`>Slide 2 of ${heartSlides}</text>`);
-    expect(presenter.message).toEqual({ tone: 'info', text: 'Saved the slide as “taking-a-daily-tablet-to-lower-02-baseline.svg”.' });
+    expect(String(saved[0]?.contents)).toContain(`>Slide 2 of ${stoneSlides}</text>`);
+    expect(presenter.message).toEqual({ tone: 'info', text: 'Saved the slide as “ways-to-cut-the-chance-of-02-baseline.svg”.' });
     expect(focused()).toBe(1);
   });
 
@@ -150,10 +150,10 @@ describe('TeachingPresenter', () => {
   it('saves the presentation as a teaching set, under the set’s own name once it came from one', async () => {
     const { presenter, saved } = setUp();
     await presenter.saveSet();
-    expect(saved[0]?.name).toBe('taking-a-daily-tablet-to-lower.teaching.json');
+    expect(saved[0]?.name).toBe('ways-to-cut-the-chance-of.teaching.json');
     expect(saved[0]?.type).toBe('application/json');
-    expect(JSON.parse(String(saved[0]?.contents))).toMatchObject({ format: 'chancewise-teaching-set', title: heartTitle });
-    expect(presenter.message).toEqual({ tone: 'info', text: 'Saved “taking-a-daily-tablet-to-lower.teaching.json”.' });
+    expect(JSON.parse(String(saved[0]?.contents))).toMatchObject({ format: 'chancewise-teaching-set', title: stoneTitle });
+    expect(presenter.message).toEqual({ tone: 'info', text: 'Saved “ways-to-cut-the-chance-of.teaching.json”.' });
     await presenter.openExample();
     await presenter.saveSet();
     expect(saved[1]?.name).toBe('framing-and-format.teaching.json');

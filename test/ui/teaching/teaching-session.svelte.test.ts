@@ -6,15 +6,15 @@ import type { KeyPress } from '../../../src/ui/teaching/teaching-keys.ts';
 import { slidePlaces } from '../../../src/teaching/slide-places.ts';
 import { TeachingSession } from '../../../src/ui/teaching/teaching-session.svelte.ts';
 import { DEFAULT_STEPS } from '../../../src/teaching/teaching-steps.ts';
-import { HEART, SCREENING, demoTopic, itemOf } from '../../teaching/teaching-fixtures.ts';
+import { STONE, SCREENING, demoTopic, itemOf } from '../../teaching/teaching-fixtures.ts';
 
 // The step order is the teaching sequence of this view: the result told with people first
 // (baseline, with the option, helped, harmed, uncertainty, patient words), then one result
 // framed four ways, then the format demonstrations (Galesic 2009; Ancker 2011;
 // Zikmund-Fisher 2008), as listed in src/teaching/teaching-steps.ts.
 
-function heartSession(): TeachingSession {
-  return new TeachingSession('Heart', [itemOf(demoTopic(HEART))]);
+function stoneSession(): TeachingSession {
+  return new TeachingSession('Kidney stone', [itemOf(demoTopic(STONE))]);
 }
 
 function press(session: TeachingSession, key: KeyPress): boolean {
@@ -24,14 +24,14 @@ function press(session: TeachingSession, key: KeyPress): boolean {
 
 describe('TeachingSession', () => {
   it('starts on the first slide, the decision, and shows every step in the teaching order, every harm on its own slide', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(session.index).toBe(0);
     expect(session.slide?.kind).toBe('title');
     const shown: string[] = [];
     do shown.push(`${session.slide?.kind ?? ''}: ${session.slide?.heading ?? ''}`);
     while (session.next());
     expect(shown).toEqual([
-      `title: ${demoTopic(HEART).title}`,
+      `title: ${demoTopic(STONE).title}`,
       'baseline: Without the option',
       'with-option: With the option',
       'helped: Who is helped',
@@ -45,12 +45,12 @@ describe('TeachingSession', () => {
       'arrangement: Grouped or scattered?',
       'incremental: Two totals, or the change itself?',
     ]);
-    // The heart topic has two harms: one more harm slide, and its harms' words on a slide of their own.
+    // The kidney stone topic has two harms: one more harm slide, and its harms' words on a slide of their own.
     expect(session.total).toBe(DEFAULT_STEPS.length + 2);
   });
 
   it('stays on the last slide going forward and on the first going back', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(session.previous()).toBe(false);
     expect(session.atStart).toBe(true);
     expect(session.last()).toBe(true);
@@ -62,7 +62,7 @@ describe('TeachingSession', () => {
   });
 
   it('steps with the keys of a keyboard and of a presentation clicker', () => {
-    const session = heartSession();
+    const session = stoneSession();
     expect(press(session, { key: 'PageDown' })).toBe(true);
     expect(press(session, { key: 'ArrowRight' })).toBe(true);
     expect(press(session, { key: ' ' })).toBe(true);
@@ -89,7 +89,7 @@ describe('TeachingSession', () => {
         version: 1,
         title: 'Two topics',
         items: [
-          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(HEART) })), steps: ['title', 'helped'] },
+          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(STONE) })), steps: ['title', 'helped'] },
           { topic: { format: 'chancewise-topic', version: 2, topic: demoTopic(SCREENING) }, steps: ['title', 'harmed', 'framing'] },
         ],
       }),
@@ -97,7 +97,7 @@ describe('TeachingSession', () => {
     if (!set.ok) throw new Error(set.message);
     const resolved = await resolveTeachingSet('set.json', set.set, null);
     if (!resolved.ok) throw new Error(resolved.message);
-    const session = heartSession();
+    const session = stoneSession();
     session.next();
     session.load(resolved.title, resolved.items, 'set.json');
     expect(session.index).toBe(0);
@@ -117,17 +117,17 @@ describe('TeachingSession', () => {
   });
 
   it('writes the presentation as a set that reads back to the same topics and steps', () => {
-    const session = new TeachingSession('Saved', [itemOf(demoTopic(HEART), { steps: ['helped', 'framing'], option: 'higher' })]);
+    const session = new TeachingSession('Saved', [itemOf(demoTopic(STONE), { steps: ['helped', 'framing'], option: 'citrate' })]);
     const reading = readTeachingSet('saved.json', session.setFileText());
     if (!reading.ok) throw new Error(reading.message);
     expect(reading.set.title).toBe('Saved');
-    expect(reading.set.items[0]).toMatchObject({ option: 'higher', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(HEART) } });
+    expect(reading.set.items[0]).toMatchObject({ option: 'citrate', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(STONE) } });
   });
 
   it('presents a copy: stepping through never changes the topic it was given', () => {
-    const topic = demoTopic(HEART);
+    const topic = demoTopic(STONE);
     const before = JSON.stringify(topic);
-    const session = new TeachingSession('Heart', [itemOf(topic)]);
+    const session = new TeachingSession('Kidney stone', [itemOf(topic)]);
     while (session.next()) void session.slide;
     expect(JSON.stringify(topic)).toBe(before);
   });

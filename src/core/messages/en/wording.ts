@@ -50,7 +50,7 @@ const within = ({ years, unit }: PeriodValues): string => {
 };
 
 /** A length of time: "10 years", "3 days". */
-const duration = ({ years, unit }: PeriodValues): string => {
+export const duration = ({ years, unit }: PeriodValues): string => {
   const amount = amountIn(years, unit);
   const [one, other] = UNIT_NAMES[unit];
   return `${formatDecimal(amount, 2)} ${plural(amount, one, other)}`;

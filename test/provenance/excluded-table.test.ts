@@ -1,0 +1,83 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { matchingHashes, sha256, wholeNumbers } from './whole-numbers.ts';
+
+/**
+ * The checks of this project must not use the 2×2 table of myocardial infarctions on placebo
+ * and on aspirin from the Physicians' Health Study. Its counts are held here only as SHA-256
+ * hashes of their digits. The large counts (the two arm totals, the two cells of people without
+ * the event, and the grand total) each give the table away; the two event counts are ordinary
+ * numbers on their own, so a file is refused only when it holds both.
+ */
+const LARGE = new Set([
+  '322142e016e988712de8c373dd1ede27b243aec64b61cd4aa5aa5137e3754b54',
+  '690c4db056e43ca1024e4878a222d0851fd0784206d10f5107ac6553e434066f',
+  '9ae07e2fab2603e3179c7ce2a7c49c18e90dfa3ae59edf48b8241125c39001ce',
+  '66f27dc2a523e6a0adc2f8076e16eda993abbe92fc5b43e6466980c143b25381',
+  '86f2a0c23daa83dc10b77df2be5d8532fee4b8af11a7dedc898cc656007108ca',
+  '9f49651db931b862285dcac1f1e7596f568264433a447509f9b7528b5b6ca6f7',
+]);
+const EVENTS = new Set([
+  '7045d16ae7f043ec25774a0a85d6f479e5bb019e9c5a1584bc76736d116b8f33',
+  '5ef6fdf32513aa7cd11f72beccf132b9224d33f271471fff402742887a171edf',
+]);
+
+const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+const FOLDERS = ['test', 'assets', 'src', 'bench', 'e2e', 'scripts', 'electron'];
+const TEXT = /\.(ts|js|mjs|cjs|json|svelte|md|html|css|svg|txt|py|yml)$/;
+
+function textFiles(folder: string): string[] {
+  return readdirSync(folder, { withFileTypes: true }).flatMap((entry) => {
+    const path = join(folder, entry.name);
+    if (entry.isDirectory()) return entry.name === 'node_modules' ? [] : textFiles(path);
+    return TEXT.test(entry.name) ? [path] : [];
+  });
+}
+
+/** Why a text gives the table away, or null when it does not. */
+function giveaway(text: string, large: ReadonlySet<string>, events: ReadonlySet<string>): string | null {
+  const found = matchingHashes(text, new Set([...large, ...events]));
+  if ([...found].some((hash) => large.has(hash))) return 'a large count of the table';
+  if ([...events].every((hash) => found.has(hash))) return 'both event counts of the table';
+  return null;
+}
+
+describe('the provenance of the test data and assets', () => {
+  const files = FOLDERS.flatMap((folder) => textFiles(join(ROOT, folder)));
+
+  it('reads the source, test and asset files', () => {
+    expect(files.length).toBeGreaterThan(300);
+    expect(files.some((path) => path.endsWith(join('assets', 'demo', '01-kidney-stone.json')))).toBe(true);
+  });
+
+  it('finds none of the excluded table’s counts in any of them', () => {
+    const refused = files
+      .map((path) => ({ path: relative(ROOT, path), why: giveaway(readFileSync(path, 'utf8'), LARGE, EVENTS) }))
+      .filter((found) => found.why !== null);
+    expect(refused).toEqual([]);
+  });
+});
+
+describe('reading whole numbers for the provenance check', () => {
+  it('finds a whole number however it is set off, but not the digits of a float or an exponent', () => {
+    expect([...wholeNumbers('a 4242 b (4242) x4242y')]).toEqual(['4242']);
+    expect(wholeNumbers('0.4242 .4242 4242.5 1e4242 2E-4242 3e+4242').has('4242')).toBe(false);
+    // A seeded random draw such as 0.424218 holds the digits but not the number.
+    expect(wholeNumbers('seed 7, draw 0.424218').has('4242')).toBe(false);
+  });
+
+  it('joins thousands separators and still sees the numbers of a list', () => {
+    const found = wholeNumbers('12,345 and 67\u2009890 and 23_456, list [12,345]');
+    for (const number of ['12345', '67890', '23456', '12', '345']) expect(found.has(number)).toBe(true);
+  });
+
+  it('refuses a text by the hash of one large count, or of both small ones together', () => {
+    const large = new Set([sha256('54321')]);
+    const events = new Set([sha256('77'), sha256('88')]);
+    expect(giveaway('total 54,321 people', large, events)).toBe('a large count of the table');
+    expect(giveaway('77 of them and 88 of the others', large, events)).toBe('both event counts of the table');
+    expect(giveaway('77 of them, 0.88 of the others, 543210 more', large, events)).toBeNull();
+  });
+});
