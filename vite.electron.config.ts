@@ -9,8 +9,8 @@ import { defineConfig } from 'vite';
  * external; everything else (the core's topic reader, valibot) is bundled in.
  */
 const entries = {
-  main: 'electron/main.ts',
-  preload: 'electron/preload.ts',
+  main: 'electron/main/main.ts',
+  preload: 'electron/preload/preload.ts',
 } as const;
 
 const external = ['electron', /^electron\/.+/u, /^node:/u, ...builtinModules];

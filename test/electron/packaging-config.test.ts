@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { TOPIC_EXTENSION, TOPIC_MEDIA_TYPE } from '../../electron/topic-file-type.ts';
+import { TOPIC_EXTENSION, TOPIC_MEDIA_TYPE } from '../../electron/main/document/topic-file-type.ts';
 
 const configPath = fileURLToPath(new URL('../../electron-builder.yml', import.meta.url));
 // The YAML reader electron-builder itself uses, found from electron-builder's own folder.

@@ -6,10 +6,19 @@ import { beforeAll, describe, expect, it } from 'vitest';
 
 const folder = fileURLToPath(new URL('../../electron/', import.meta.url));
 const sources = new Map<string, string>();
+/** Each source's relative imports, resolved to paths under electron/ (or outside it, with ../). */
+const importsByFolder = new Map<string, string[]>();
 
 beforeAll(async () => {
-  for (const name of await fs.readdir(folder)) {
-    if (name.endsWith('.ts')) sources.set(name, await fs.readFile(path.join(folder, name), 'utf8'));
+  // Every source in every folder of the shell, by file name (the names are unique across folders).
+  for (const entry of await fs.readdir(folder, { recursive: true, withFileTypes: true })) {
+    if (!entry.isFile() || !entry.name.endsWith('.ts')) continue;
+    if (sources.has(entry.name)) throw new Error(`two shell sources are named ${entry.name}`);
+    const text = await fs.readFile(path.join(entry.parentPath, entry.name), 'utf8');
+    sources.set(entry.name, text);
+    const from = path.relative(folder, entry.parentPath);
+    const targets = [...text.matchAll(/from ['"](\.{1,2}\/[^'"]+)['"]/gu)].map((match) => path.join(from, match[1] ?? ''));
+    importsByFolder.set(from, [...(importsByFolder.get(from) ?? []), ...targets]);
   }
 });
 
@@ -39,5 +48,17 @@ describe('the shell sources', () => {
 
   it('import the page API types only from the renderer side (the contract has no Electron import)', () => {
     expect(sources.get('ipc-contract.ts')).not.toMatch(/from ['"]electron['"]/u);
+  });
+
+  it('keep the three parts apart: the contract imports nothing, the preload only the contract, and neither the main process', () => {
+    // Electron process model docs (docs/tutorial/process-model.md): main, preload and renderer run
+    // in separate processes, so the only code they share is the contract's names and types.
+    expect(importsByFolder.get('contract') ?? []).toEqual([]);
+    const preloadImports = importsByFolder.get('preload') ?? [];
+    expect(preloadImports.length).toBeGreaterThan(0);
+    for (const target of preloadImports) expect(target, target).toMatch(/^(contract|preload)\//u);
+    const mainImports = [...importsByFolder].filter(([from]) => from === 'main' || from.startsWith('main/')).flatMap(([, targets]) => targets);
+    expect(mainImports.filter((target) => target.startsWith('preload/'))).toEqual([]);
+    expect(mainImports.some((target) => target.startsWith('contract/'))).toBe(true);
   });
 });

@@ -11,6 +11,7 @@ import type { Denominator, Estimate, Notice, WordsDenominator } from '../types.t
 const DENOMINATOR_NOTICES: ReadonlySet<string> = new Set([
   'denominator-raised',
   'rounding-moves-difference',
+  'rounding-hides-difference',
   'difference-below-one-in-a-million',
 ]);
 import type { Topic, TopicOption, TopicOutcome } from './topic.ts';

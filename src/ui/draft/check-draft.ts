@@ -2,13 +2,13 @@
  * Checking a draft in one call: read its numbers, let the core check and compute the
  * topic, and give every problem at once, each tied to the editor field it belongs to.
  */
-import { describeProblem } from '../../core/messages/describe.ts';
 import type { Problem } from '../../core/problems.ts';
 import { evaluateTopic } from '../../core/topic/compute-topic.ts';
 import type { Topic } from '../../core/topic/topic.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
-import type { Denominator } from '../../core/types.ts';
+import type { WordsDenominator } from '../../core/types.ts';
 import { fieldKeyForPath, fieldOrder } from './field-keys.ts';
+import { fieldMessage } from './field-messages.ts';
 import { topicFromDraft } from './topic-from-draft.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
@@ -66,9 +66,9 @@ function merged(own: readonly Problem[], core: readonly Problem[]): Problem[] {
  * Check a draft and compute its topic. A draft whose numbers cannot all be read is still
  * checked by the core, so the person sees every problem at once.
  *
- * @param settings - `per`: a fixed denominator, or null to let the core choose
+ * @param settings - `per`: a fixed words denominator (100 up to 1,000,000), or null to let the core choose
  */
-export function checkDraft(draft: TopicDraft, settings: { readonly per?: Denominator | null } = {}): DraftCheck {
+export function checkDraft(draft: TopicDraft, settings: { readonly per?: WordsDenominator | null } = {}): DraftCheck {
   const reading = topicFromDraft(draft);
   const evaluation = evaluateTopic(reading.topic, { per: settings.per ?? null });
   const problems = merged(reading.problems, evaluation.ok ? [] : evaluation.problems);
@@ -76,7 +76,7 @@ export function checkDraft(draft: TopicDraft, settings: { readonly per?: Denomin
   const placed = problems.map((found) => ({
     key: fieldKeyForPath(found.field, draft, reading.questionPlaces),
     problem: found,
-    message: describeProblem(found),
+    message: fieldMessage(found, draft),
     needed: false,
   }));
   // In the order the fields appear on screen; problems of the topic as a whole last. The sort is stable.

@@ -1,9 +1,9 @@
 /**
  * The platform in the desktop app, over the shell's preload bridge (`window.chancewise`,
- * typed by electron/ipc-contract.ts). The shell's dialogs name and place files; a refused
+ * typed by electron/contract/ipc-contract.ts). The shell's dialogs name and place files; a refused
  * request comes back as an Error with the shell's own sentence.
  */
-import type { ChancewiseShellApi, ShellResult } from '../../../electron/ipc-contract.ts';
+import type { ChancewiseShellApi, ShellResult } from '../../../electron/contract/ipc-contract.ts';
 import { browserStorage } from '../state/key-value-storage.ts';
 import { download, pickTextFile } from './browser-platform.ts';
 import type { OpenedFile, Platform } from './platform.ts';

@@ -1,10 +1,14 @@
 /**
- * The key numbers of a computed topic as rows of text for the results table: people
- * per denominator with each option, the change against the comparison with its range,
- * the absolute risk and the NNT. Every number is the core's; only the wording is here.
+ * The key numbers of a computed topic as rows of text for the results table: people per
+ * the topic's words denominator with each option (100 up to 1,000,000, so a rare outcome's
+ * change shows as whole people), the change against the comparison with its range, the
+ * absolute risk and the NNT, and the level of each range. Every number is the core's; only
+ * the wording is here.
  */
-import { formatPercent } from '../../core/messages/format-number.ts';
+import { formatCount, formatPercentSignificant } from '../../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
+import type { WordsDenominator } from '../../core/types.ts';
+import { levelText } from './interval-level.ts';
 
 /** A value and, when there is one, its range: shown as the value with the range beneath. */
 export interface RangedText {
@@ -16,7 +20,7 @@ export interface KeyNumberRow {
   readonly optionId: string;
   readonly name: string;
   readonly isComparison: boolean;
-  /** People with the outcome per denominator: "11", range "10 to 12". */
+  /** People with the outcome per the table's denominator: "11", range "10 to 12". */
   readonly people: RangedText;
   /** Against the comparison: "4 fewer", range "3 to 5 fewer"; null for the comparison. */
   readonly change: RangedText | null;
@@ -24,6 +28,8 @@ export interface KeyNumberRow {
   readonly risk: RangedText;
   /** The core's NNT text, its interval beneath: "NNTB 27", range "NNTB 21 to 40"; null for the comparison. */
   readonly nnt: RangedText | null;
+  /** The level of the row's ranges, "95%"; null when the row has no range. */
+  readonly level: string | null;
 }
 
 export interface KeyNumberTable {
@@ -33,30 +39,76 @@ export interface KeyNumberTable {
   /** The event is one people want: its column is headed "Chance", not "Risk". */
   readonly wanted: boolean;
   readonly isHeadline: boolean;
+  /** The people the counts are out of: the topic's words denominator. */
+  readonly denominator: WordsDenominator;
   readonly rows: readonly KeyNumberRow[];
 }
 
+/** A change in people: the whole people shown and the exact value they round, both signed (positive: fewer). */
+export interface PeopleChange {
+  readonly shown: number;
+  readonly exact: number;
+}
+
+type Side = 'fewer' | 'more' | 'none';
+
+/** Below a billionth of a person, a difference is floating-point noise of an exact 0. */
+const noise = (people: number): boolean => Math.abs(people) < 1e-9;
+
+/** Which way a change goes; a change that rounds to 0 people keeps the direction of its exact value. */
+function sideOf(change: PeopleChange): Side {
+  const sign = change.shown !== 0 ? change.shown : noise(change.exact) ? 0 : change.exact;
+  return sign > 0 ? 'fewer' : sign < 0 ? 'more' : 'none';
+}
+
+/** The size of a change: "4", "10,000", or "under 1" when it rounds to no one but is not exactly 0. */
+function sizeOf(change: PeopleChange): string {
+  if (change.shown === 0) return noise(change.exact) ? '0' : 'under 1';
+  return formatCount(Math.abs(change.shown));
+}
+
+const exactly = (shown: number): PeopleChange => ({ shown, exact: shown });
+
 /**
- * A signed change in people as words: 4 → "4 fewer", −2 → "2 more", 0 → "no change". The
- * words say only how many people have the event; whether that helps is the event's direction.
+ * A signed change in people as words: 4 → "4 fewer", −2 → "2 more", 0 → "no change". A change
+ * that rounds to no one but is not exactly 0 is "under 1 fewer" or "under 1 more", never "no
+ * change". The words say only how many people have the event; whether that helps is the
+ * event's direction.
  */
-export function changeWords(difference: number): string {
-  if (difference === 0) return 'no change';
-  return difference > 0 ? `${difference} fewer` : `${-difference} more`;
+export function changeWords(difference: number, exact: number = difference): string {
+  const change = { shown: difference, exact };
+  const side = sideOf(change);
+  return side === 'none' ? 'no change' : `${sizeOf(change)} ${side}`;
+}
+
+/**
+ * The range of a change in people, from its two ends: "3 to 5 fewer", "2 fewer to 1 more",
+ * "under 1 to 2 fewer". `least` is the end with the fewest people spared (the option's upper
+ * limit), `most` the other.
+ */
+export function changeRangeText(least: PeopleChange, most: PeopleChange): string {
+  const sides = [sideOf(least), sideOf(most)];
+  if (sides.every((side) => side === 'none')) return 'no change';
+  if (!sides.includes('more')) {
+    return sizeOf(least) === sizeOf(most) ? `${sizeOf(most)} fewer` : `${sizeOf(least)} to ${sizeOf(most)} fewer`;
+  }
+  if (!sides.includes('fewer')) {
+    return sizeOf(least) === sizeOf(most) ? `${sizeOf(least)} more` : `${sizeOf(most)} to ${sizeOf(least)} more`;
+  }
+  return `${sizeOf(most)} fewer to ${sizeOf(least)} more`;
 }
 
 /** The range of a change in people, from the option's range of people: "3 to 5 fewer", "2 fewer to 1 more". */
 export function changeRangeWords(comparison: number, range: { readonly lower: number; readonly upper: number }): string {
-  const most = comparison - range.lower;
-  const least = comparison - range.upper;
-  if (least >= 0 && most >= 0) return least === most ? changeWords(least) : `${least} to ${most} fewer`;
-  if (least <= 0 && most <= 0) return least === most ? changeWords(least) : `${-most} to ${-least} more`;
-  return `${most} fewer to ${-least} more`;
+  return changeRangeText(exactly(comparison - range.upper), exactly(comparison - range.lower));
 }
 
-/** A risk as a percentage with at most one decimal: 0.1125 → "11.3%" (rounded half away from zero). */
+/**
+ * A risk as a percentage that keeps its meaning: one decimal from 1% up, two significant
+ * figures below, so a risk that is not 0 never reads 0%: 0.1125 → "11.3%", 0.0008 → "0.08%".
+ */
 export function riskPercent(risk: number): string {
-  return formatPercent(risk, 1);
+  return formatPercentSignificant(risk, 1);
 }
 
 function riskText(option: OptionOutcomeResult): RangedText {
@@ -72,24 +124,39 @@ export function splitNntText(text: string): RangedText {
   return { value: text.slice(0, open), range: text.slice(open + 2, -1) };
 }
 
-function row(option: OptionOutcomeResult): KeyNumberRow {
-  const people = option.perPeople;
+function changeText(option: OptionOutcomeResult, denominator: number): RangedText {
+  const people = option.wordsPeople;
+  const base = option.comparisonRisk.estimate;
+  const { estimate, lower, upper } = option.interventionRisk;
+  const value = changeWords(people.difference, (base - estimate) * denominator);
+  const range = people.interventionRange;
+  if (range === null || lower === null || upper === null) return { value, range: null };
+  return {
+    value,
+    range: changeRangeText(
+      { shown: people.comparison - range.upper, exact: (base - upper) * denominator },
+      { shown: people.comparison - range.lower, exact: (base - lower) * denominator },
+    ),
+  };
+}
+
+function row(option: OptionOutcomeResult, denominator: number): KeyNumberRow {
+  const people = option.wordsPeople;
   const count = option.isComparison ? people.comparison : people.intervention;
   const range = option.isComparison ? null : people.interventionRange;
   return {
     optionId: option.optionId,
     name: option.name,
     isComparison: option.isComparison,
-    people: { value: String(count), range: range === null ? null : `${range.lower} to ${range.upper}` },
-    change: option.isComparison
-      ? null
-      : { value: changeWords(people.difference), range: range === null ? null : changeRangeWords(people.comparison, range) },
+    people: { value: formatCount(count), range: range === null ? null : `${formatCount(range.lower)} to ${formatCount(range.upper)}` },
+    change: option.isComparison ? null : changeText(option, denominator),
     risk: riskText(option),
     nnt: option.isComparison ? null : splitNntText(option.nnt.text),
+    level: range === null || option.level === null ? null : levelText(option.level),
   };
 }
 
-function table(outcome: OutcomeResult): KeyNumberTable {
+function table(outcome: OutcomeResult, denominator: WordsDenominator): KeyNumberTable {
   const ordered = [...outcome.options].sort((first, second) => Number(second.isComparison) - Number(first.isComparison));
   return {
     outcomeId: outcome.outcomeId,
@@ -97,12 +164,13 @@ function table(outcome: OutcomeResult): KeyNumberTable {
     kind: outcome.kind,
     wanted: outcome.wanted,
     isHeadline: outcome.isHeadline,
-    rows: ordered.map(row),
+    denominator,
+    rows: ordered.map((option) => row(option, denominator)),
   };
 }
 
 /** One table per outcome, the headline first, then in the topic's order; the comparison first in each. */
 export function keyNumberTables(result: TopicResult): KeyNumberTable[] {
-  const tables = result.outcomes.map(table);
+  const tables = result.outcomes.map((outcome) => table(outcome, result.wordsDenominator));
   return [...tables.filter((found) => found.isHeadline), ...tables.filter((found) => !found.isHeadline)];
 }

@@ -4,7 +4,7 @@
  * `load`, `undo` or `redo`, so the history, the check and the autosave never miss one.
  */
 import type { TopicResult } from '../../core/topic/topic-result.ts';
-import type { Denominator } from '../../core/types.ts';
+import type { WordsDenominator } from '../../core/types.ts';
 import { checkDraft, isMissing } from '../draft/check-draft.ts';
 import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
@@ -48,7 +48,7 @@ export class TopicEditor {
   /** The draft exactly as typed. */
   draft = $state.raw<TopicDraft>() as TopicDraft;
   /** The chosen denominator, or null to let the core choose. */
-  per = $state.raw<Denominator | null>(null);
+  per = $state.raw<WordsDenominator | null>(null);
   /** The check of the current draft: every problem, and the result when there are none. */
   check = $state.raw<DraftCheck>() as DraftCheck;
   /** The results on screen: the current draft's, or the last valid draft's while it has problems. */
@@ -145,8 +145,8 @@ export class TopicEditor {
     return true;
   }
 
-  /** Show the numbers per 100 or per 1000 people, or (null) let the core choose. */
-  setPer(per: Denominator | null): void {
+  /** Show the numbers per 100, 1000 or more people, or (null) let the core choose. */
+  setPer(per: WordsDenominator | null): void {
     this.per = per;
     this.#show(this.draft);
   }

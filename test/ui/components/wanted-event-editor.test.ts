@@ -76,7 +76,7 @@ describe('the key-number table of a wanted event', () => {
   test('heads the column Chance and shows NNTB for the option that makes it more likely', () => {
     const [table] = keyNumberTables(computeTopic(demo!.topic));
     if (table === undefined) throw new Error('no table');
-    render(KeyNumbers, { props: { table, denominator: 100 } });
+    render(KeyNumbers, { props: { table } });
     expect(screen.getByRole('columnheader', { name: 'Chance' })).toBeTruthy();
     expect(screen.queryByRole('columnheader', { name: 'Risk' })).toBeNull();
     // 35% × 1.6 = 56%: 21 more in 100; NNTB ⌈1/0.21⌉ = 5 (Altman 1998).

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import type { ChancewiseShellApi, IncomingDocument, ShellCommand } from '../../../electron/ipc-contract.ts';
+import type { ChancewiseShellApi, IncomingDocument, ShellCommand } from '../../../electron/contract/ipc-contract.ts';
 import { desktopPlatform } from '../../../src/ui/platform/desktop-platform.ts';
 import type { PlatformCommand, PlatformDocument } from '../../../src/ui/platform/platform.ts';
 
