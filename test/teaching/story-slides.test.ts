@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { computeTopic, evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
-import { handoutSentences } from '../../../src/core/wording/topic-wording.ts';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
-import { totalsOnly } from '../../../src/ui/teaching/people-panel.ts';
-import type { PeoplePanel, PersonLook } from '../../../src/ui/teaching/slide-model.ts';
-import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
+import { computeTopic, evaluateTopic } from '../../src/core/topic/compute-topic.ts';
+import { handoutSentences } from '../../src/core/wording/topic-wording.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { teachingMessagesEn } from '../../src/teaching/messages/en.ts';
+import { totalsOnly } from '../../src/teaching/people-panel.ts';
+import type { PeoplePanel, PersonLook } from '../../src/teaching/slide-model.ts';
+import { slidePlaces } from '../../src/teaching/slide-places.ts';
 import { STONE, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // Icon arrays show the whole denominator (Ancker et al. 2006), the same grouped layout for each

@@ -1,19 +1,19 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { writeTopicFile } from '../../../src/core/topic/topic-file.ts';
-import { nodeTopicReader } from '../../../src/ui/teaching/node-topic-reader.ts';
-import { isUsableTopicPath, resolveTeachingSet } from '../../../src/ui/teaching/resolve-teaching-set.ts';
-import { readTeachingSet, writeTeachingSet } from '../../../src/ui/teaching/teaching-set-file.ts';
-import type { TeachingSet } from '../../../src/ui/teaching/teaching-set-file.ts';
-import { DEFAULT_STEPS, STEP_KINDS } from '../../../src/ui/teaching/teaching-steps.ts';
+import { writeTopicFile } from '../../src/core/topic/topic-file.ts';
+import { nodeTopicReader } from '../../src/teaching/node-topic-reader.ts';
+import { isUsableTopicPath, resolveTeachingSet } from '../../src/teaching/resolve-teaching-set.ts';
+import { readTeachingSet, writeTeachingSet } from '../../src/teaching/teaching-set-file.ts';
+import type { TeachingSet } from '../../src/teaching/teaching-set-file.ts';
+import { DEFAULT_STEPS, STEP_KINDS } from '../../src/teaching/teaching-steps.ts';
 import { STONE, SCREENING, demoText, demoTopic, pairTopic, projectFile } from './teaching-fixtures.ts';
 
-// The teaching-set format is this app's own (documented in src/ui/teaching/teaching-set-schema.ts);
+// The teaching-set format is this app's own (documented in src/teaching/teaching-set-schema.ts);
 // the checks below hold it to that definition and to JSON (RFC 8259). Expected wording of
 // "expected" and "found" is the topic file reader's (src/core/messages/en/file-words.ts).
 
 const EXAMPLE = projectFile('assets/teaching/framing-and-format.teaching.json');
-const PATHS = projectFile('test/ui/teaching/fixtures/paths.teaching.json');
+const PATHS = projectFile('test/teaching/fixtures/sets/paths.teaching.json');
 
 /** A valid set of the given items, as text. */
 function setText(items: unknown[], extra: Record<string, unknown> = {}): string {

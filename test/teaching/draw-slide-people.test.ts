@@ -1,9 +1,9 @@
 // @vitest-environment jsdom
 import { describe, expect, it } from 'vitest';
-import { colourPalette } from '../../../src/render/palette.ts';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import { drawSlidePeople, drawSwatch } from '../../../src/ui/teaching/draw-slide-people.ts';
-import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
+import { colourPalette } from '../../src/render/palette.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { drawSlidePeople, drawSwatch } from '../../src/teaching/draw-slide-people.ts';
+import { teachingMessagesEn } from '../../src/teaching/messages/en.ts';
 import { STONE, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
 
 // One figure per person, the whole denominator drawn (Ancker et al. 2006); the changed groups

@@ -4,9 +4,10 @@
  * proportions (one unit is 1 px of a 1280 × 720 screen) and wrapped with the DejaVu
  * Sans metrics the charts use.
  */
-import { svgNumber } from '../../render/svg/svg-number.ts';
-import { measureDejaVuSans, wrapText } from '../../render/text/measure-text.ts';
+import { svgNumber } from '../render/svg/svg-number.ts';
+import { measureDejaVuSans, wrapText } from '../render/text/measure-text.ts';
 import { drawPeopleGroup, drawSwatch, drawingSize } from './draw-slide-people.ts';
+import { slideColours } from './slide-colours.ts';
 import type { Callout, FramingCard, PeoplePanel, Slide, SlideLine } from './slide-model.ts';
 
 const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
@@ -21,12 +22,7 @@ const GAP = 28 * U;
 const FONT = "'DejaVu Sans', Verdana, Arial, sans-serif";
 const LINE = 1.3;
 
-const INK = '#111820';
-const MUTED = '#3d4853';
-const ACCENT = '#0b4f8a';
-const NOTICE = '#5c3f00';
-const NOTICE_SOFT = '#fff4d6';
-const LINE_COLOUR = '#aeb8c2';
+const { ink: INK, muted: MUTED, accent: ACCENT, notice: NOTICE, noticeSoft: NOTICE_SOFT, line: LINE_COLOUR, surface: SURFACE } = slideColours;
 
 interface Writer {
   readonly document: Document;
@@ -135,7 +131,7 @@ function card(writer: Writer, found: FramingCard, x: number, top: number, width:
     y = text(writer, group, found.detail, bodyX, y, bodyWidth, 28 * U);
   }
   const bottom = y + 8 * U;
-  group.insertBefore(element(writer, 'rect', { x, y: top, width, height: bottom - top, rx: 8 * U, fill: '#ffffff', stroke: LINE_COLOUR, 'stroke-width': 2 * U }), group.firstChild);
+  group.insertBefore(element(writer, 'rect', { x, y: top, width, height: bottom - top, rx: 8 * U, fill: SURFACE, stroke: LINE_COLOUR, 'stroke-width': 2 * U }), group.firstChild);
   group.insertBefore(element(writer, 'rect', { x, y: top, width: 10 * U, height: bottom - top, fill: ACCENT }), group.childNodes[1] ?? null);
   return bottom;
 }
@@ -188,7 +184,7 @@ export function slideSvgElement(slide: Slide, document: Document, footer: string
   const title = element(writer, 'title', {});
   title.textContent = slide.heading;
   root.appendChild(title);
-  root.appendChild(element(writer, 'rect', { width: SLIDE_WIDTH, height: SLIDE_HEIGHT, fill: '#ffffff' }));
+  root.appendChild(element(writer, 'rect', { width: SLIDE_WIDTH, height: SLIDE_HEIGHT, fill: SURFACE }));
 
   const inner = SLIDE_WIDTH - 2 * LEFT;
   const top = text(writer, root, slide.heading, LEFT, 16 * U, inner, 44 * U, { bold: true }) + 14 * U;

@@ -3,8 +3,8 @@
  * each format demonstration with its source, the controls, and the teaching-set file
  * messages. Slide builders pass numbers and names; only this file holds English.
  */
-import { amountIn } from '../../../core/time-unit.ts';
-import type { TimeUnit } from '../../../core/time-unit.ts';
+import { amountIn } from '../../core/time-unit.ts';
+import type { TimeUnit } from '../../core/time-unit.ts';
 import type { StepKind } from '../teaching-steps.ts';
 
 /** A finding from the research and where it was published. */

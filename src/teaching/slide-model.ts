@@ -3,8 +3,8 @@
  * call-outs and lines beside them, framing cards, and the evidence line of a format
  * demonstration. The view and the slide export both draw this same data.
  */
-import type { PersonLook as ChangeLook } from '../../core/direction.ts';
-import type { IconArrayLayout } from '../../render/icon-array-layout.ts';
+import type { PersonLook as ChangeLook } from '../core/direction.ts';
+import type { IconArrayLayout } from '../render/icon-array-layout.ts';
 import type { EvidenceWords } from './messages/en.ts';
 import type { StepKind } from './teaching-steps.ts';
 

@@ -3,11 +3,11 @@
  * person's look, and the counts under the array, counted by look so that they always
  * match what is drawn.
  */
-import { lookOf } from '../../core/direction.ts';
-import type { PeopleGroups } from '../../core/types.ts';
-import { iconArrayLayout } from '../../render/icon-array-layout.ts';
-import type { Arrangement } from '../../render/icon-array-layout.ts';
-import { type RankSpan, isUncertain } from '../../render/uncertain-people.ts';
+import { lookOf } from '../core/direction.ts';
+import type { PeopleGroups } from '../core/types.ts';
+import { iconArrayLayout } from '../render/icon-array-layout.ts';
+import type { Arrangement } from '../render/icon-array-layout.ts';
+import { type RankSpan, isUncertain } from '../render/uncertain-people.ts';
 import type { TeachingMessages } from './messages/en.ts';
 import type { PanelChip, PeoplePanel, PersonLook } from './slide-model.ts';
 

@@ -2,10 +2,10 @@
  * One topic ready to present: the topic, its computed result, and the choices that
  * say what each step shows (the option against the comparison, the harm, the steps).
  */
-import { describeProblem } from '../../core/messages/describe.ts';
-import { evaluateTopic } from '../../core/topic/compute-topic.ts';
-import type { Topic } from '../../core/topic/topic.ts';
-import type { OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
+import { describeProblem } from '../core/messages/describe.ts';
+import { evaluateTopic } from '../core/topic/compute-topic.ts';
+import type { Topic } from '../core/topic/topic.ts';
+import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { ItemChoices } from './teaching-set-file.ts';
 
 export interface PresentationItem extends ItemChoices {

@@ -4,16 +4,16 @@
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describeProblem } from '../../../src/core/messages/describe.ts';
-import { readTopicFile } from '../../../src/core/topic/topic-file.ts';
-import type { Topic, TopicOutcome } from '../../../src/core/topic/topic.ts';
-import { yearsFrom } from '../../../src/core/time-unit.ts';
-import type { TimeUnit } from '../../../src/core/time-unit.ts';
-import type { Denominator, EnteredEffect } from '../../../src/core/types.ts';
-import { presentationItem } from '../../../src/ui/teaching/presentation-item.ts';
-import type { PresentationItem } from '../../../src/ui/teaching/presentation-item.ts';
-import type { ItemChoices } from '../../../src/ui/teaching/teaching-set-file.ts';
-import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
+import { describeProblem } from '../../src/core/messages/describe.ts';
+import { readTopicFile } from '../../src/core/topic/topic-file.ts';
+import type { Topic, TopicOutcome } from '../../src/core/topic/topic.ts';
+import { yearsFrom } from '../../src/core/time-unit.ts';
+import type { TimeUnit } from '../../src/core/time-unit.ts';
+import type { Denominator, EnteredEffect } from '../../src/core/types.ts';
+import { presentationItem } from '../../src/teaching/presentation-item.ts';
+import type { PresentationItem } from '../../src/teaching/presentation-item.ts';
+import type { ItemChoices } from '../../src/teaching/teaching-set-file.ts';
+import { DEFAULT_STEPS } from '../../src/teaching/teaching-steps.ts';
 
 export const STONE = '01-kidney-stone.json';
 export const SCREENING = '02-bowel-screening.json';

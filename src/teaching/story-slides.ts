@@ -4,11 +4,11 @@
  * sentences a patient would hear. Every number comes from the computed topic and
  * every patient sentence from the core's wording.
  */
-import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
-import { topicWording } from '../../core/wording/topic-wording.ts';
-import type { TopicWording } from '../../core/wording/topic-wording.ts';
-import type { SentenceKind } from '../../core/wording/wording-sentence.ts';
-import { uncertainRanks } from '../../render/uncertain-people.ts';
+import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
+import { topicWording } from '../core/wording/topic-wording.ts';
+import type { TopicWording } from '../core/wording/topic-wording.ts';
+import type { SentenceKind } from '../core/wording/wording-sentence.ts';
+import { uncertainRanks } from '../render/uncertain-people.ts';
 import { capitalise } from './messages/en.ts';
 import type { Period, TeachingMessages } from './messages/en.ts';
 import { changedGroup, peoplePanel, totalsOnly } from './people-panel.ts';

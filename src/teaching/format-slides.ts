@@ -3,9 +3,9 @@
  * grouped and scattered, and as two totals or with the change as its own group. Each
  * says in one line what the research found, with its source.
  */
-import { evaluateTopic } from '../../core/topic/compute-topic.ts';
-import type { Denominator } from '../../core/types.ts';
-import { DEFAULT_SCATTER_SEED } from '../../render/icon-array-layout.ts';
+import { evaluateTopic } from '../core/topic/compute-topic.ts';
+import type { Denominator } from '../core/types.ts';
+import { DEFAULT_SCATTER_SEED } from '../render/icon-array-layout.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { Slide } from './slide-model.ts';
 import { armsOf, optionPanel, slide } from './story-slides.ts';

@@ -5,16 +5,16 @@
  * the live view and the slide export use the same drawing.
  */
 import { select } from 'd3-selection';
-import { glyphFor } from '../../render/glyphs/glyph-for.ts';
-import { glyphPath, placeGlyphPath } from '../../render/glyphs/svg-path-context.ts';
-import { scaleLayout } from '../../render/icon-array-layout.ts';
-import type { IconArrayLayout } from '../../render/icon-array-layout.ts';
-import type { ChartPalette } from '../../render/palette.ts';
-import { colourPalette } from '../../render/palette.ts';
-import { patternIdsFor, personPaint } from '../../render/svg/person-paint.ts';
-import type { PatternIds } from '../../render/svg/person-paint.ts';
-import { appendPatterns } from '../../render/svg/svg-patterns.ts';
-import { svgNumber } from '../../render/svg/svg-number.ts';
+import { glyphFor } from '../render/glyphs/glyph-for.ts';
+import { glyphPath, placeGlyphPath } from '../render/glyphs/svg-path-context.ts';
+import { scaleLayout } from '../render/icon-array-layout.ts';
+import type { IconArrayLayout } from '../render/icon-array-layout.ts';
+import type { ChartPalette } from '../render/palette.ts';
+import { colourPalette } from '../render/palette.ts';
+import { patternIdsFor, personPaint } from '../render/svg/person-paint.ts';
+import type { PatternIds } from '../render/svg/person-paint.ts';
+import { appendPatterns } from '../render/svg/svg-patterns.ts';
+import { svgNumber } from '../render/svg/svg-number.ts';
 import type { PersonLook } from './slide-model.ts';
 
 const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';

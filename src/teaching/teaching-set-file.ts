@@ -5,14 +5,14 @@
  * details, so a saved set opens anywhere, a browser included.
  */
 import * as v from 'valibot';
-import { describeProblem } from '../../core/messages/describe.ts';
-import type { Problem } from '../../core/problems.ts';
-import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
-import { TOPIC_FORMAT } from '../../core/topic/topic-schema.ts';
-import type { Topic } from '../../core/topic/topic.ts';
-import { locateIssue } from '../../core/topic/schema-expectation.ts';
-import type { SchemaNode } from '../../core/topic/schema-expectation.ts';
-import type { Denominator } from '../../core/types.ts';
+import { describeProblem } from '../core/messages/describe.ts';
+import type { Problem } from '../core/problems.ts';
+import { readTopicFile, writeTopicFile } from '../core/topic/topic-file.ts';
+import { TOPIC_FORMAT } from '../core/topic/topic-schema.ts';
+import type { Topic } from '../core/topic/topic.ts';
+import { locateIssue } from '../core/topic/schema-expectation.ts';
+import type { SchemaNode } from '../core/topic/schema-expectation.ts';
+import type { Denominator } from '../core/types.ts';
 import { teachingMessagesEn } from './messages/en.ts';
 import { TEACHING_SET_FORMAT, TEACHING_SET_VERSION, teachingSetSchema } from './teaching-set-schema.ts';
 import type { StepKind } from './teaching-steps.ts';

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { lookOf } from '../../../src/core/direction.ts';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
-import type { PresentationItem } from '../../../src/ui/teaching/presentation-item.ts';
-import type { PeoplePanel, Slide } from '../../../src/ui/teaching/slide-model.ts';
-import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
-import type { StepKind } from '../../../src/ui/teaching/teaching-steps.ts';
+import { lookOf } from '../../src/core/direction.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { teachingMessagesEn } from '../../src/teaching/messages/en.ts';
+import type { PresentationItem } from '../../src/teaching/presentation-item.ts';
+import type { PeoplePanel, Slide } from '../../src/teaching/slide-model.ts';
+import { slidePlaces } from '../../src/teaching/slide-places.ts';
+import type { StepKind } from '../../src/teaching/teaching-steps.ts';
 import { WANTED, fixtureTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // Events people want ("a response", "relief from the itch"): more of them helps, fewer harms, and

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { evaluateTopic } from '../../../src/core/topic/compute-topic.ts';
-import type { PeopleGroups } from '../../../src/core/types.ts';
-import { DEFAULT_SCATTER_SEED } from '../../../src/render/icon-array-layout.ts';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import type { PeoplePanel } from '../../../src/ui/teaching/slide-model.ts';
+import { evaluateTopic } from '../../src/core/topic/compute-topic.ts';
+import type { PeopleGroups } from '../../src/core/types.ts';
+import { DEFAULT_SCATTER_SEED } from '../../src/render/icon-array-layout.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import type { PeoplePanel } from '../../src/teaching/slide-model.ts';
 import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
 
 // Each demonstration states one finding with its source: Galesic, Garcia-Retamero & Gigerenzer

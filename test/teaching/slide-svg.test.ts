@@ -1,10 +1,9 @@
 // @vitest-environment jsdom
 import { describe, expect, it } from 'vitest';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
-import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../../src/ui/teaching/slide-svg.ts';
-import { teachingMessagesEn } from '../../../src/ui/teaching/messages/en.ts';
-import { slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { FOOTER_TOP, SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../src/teaching/slide-svg.ts';
+import { teachingMessagesEn } from '../../src/teaching/messages/en.ts';
+import { slidePlaces } from '../../src/teaching/slide-places.ts';
 import { STONE, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
 
 // A slide for slide decks: 16:9 at 1920 × 1080 (ITU-R BT.709 full HD frame), standalone SVG 1.1
@@ -52,12 +51,5 @@ describe('a slide as an SVG file', () => {
     const slide = buildSlide(itemOf(demoTopic(STONE)), 'helped');
     const ids = [...parsed(slideSvgText(slide, document, '', '')).querySelectorAll('[id]')].map((element) => element.id);
     expect(new Set(ids).size).toBe(ids.length);
-  });
-
-  it('names the file after the presentation, the slide number and the step', () => {
-    expect(slideFileName('Taking a daily tablet to lower the chance of a heart attack (illustrative example)', 3, 'with-option', 'png')).toBe(
-      'taking-a-daily-tablet-to-lower-03-with-option.png',
-    );
-    expect(slideFileName('¿?', 12, 'framing', 'svg')).toBe('teaching-12-framing.svg');
   });
 });

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
-import { topicWording } from '../../../src/core/wording/topic-wording.ts';
-import { buildSlide } from '../../../src/ui/teaching/build-slide.ts';
-import { framingNumbers } from '../../../src/ui/teaching/framing-slide.ts';
-import { shortDecimal } from '../../../src/ui/teaching/messages/en.ts';
+import { computeTopic } from '../../src/core/topic/compute-topic.ts';
+import { topicWording } from '../../src/core/wording/topic-wording.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { framingNumbers } from '../../src/teaching/framing-slide.ts';
+import { shortDecimal } from '../../src/teaching/messages/en.ts';
 import { STONE, SCREENING, demoTopic, itemOf, pairTopic } from './teaching-fixtures.ts';
 
 // NNT = 1/ARR rounded up, ARR = p0 − p1 (Cochrane Handbook 5.1, §12.5.4.1–12.5.4.3; Altman 1998,

@@ -6,10 +6,10 @@
  * an unwanted event has a lower or higher risk and is prevented or caused; a wanted one is
  * had by more or fewer people, never a "risk".
  */
-import { changeOf } from '../../core/direction.ts';
-import type { ChangeDirection } from '../../core/direction.ts';
-import type { OptionOutcomeResult } from '../../core/topic/topic-result.ts';
-import type { Denominator } from '../../core/types.ts';
+import { changeOf } from '../core/direction.ts';
+import type { ChangeDirection } from '../core/direction.ts';
+import type { OptionOutcomeResult } from '../core/topic/topic-result.ts';
+import type { Denominator } from '../core/types.ts';
 import { shortDecimal } from './messages/en.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { FramingCard, Slide } from './slide-model.ts';

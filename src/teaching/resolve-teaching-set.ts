@@ -4,9 +4,9 @@
  * each item are checked against its topic. The first problem stops the set, with one
  * message naming its field.
  */
-import { describeProblem } from '../../core/messages/describe.ts';
-import { readTopicFile } from '../../core/topic/topic-file.ts';
-import type { Topic } from '../../core/topic/topic.ts';
+import { describeProblem } from '../core/messages/describe.ts';
+import { readTopicFile } from '../core/topic/topic-file.ts';
+import type { Topic } from '../core/topic/topic.ts';
 import { teachingMessagesEn } from './messages/en.ts';
 import { presentationItem } from './presentation-item.ts';
 import type { ItemProblem, PresentationItem } from './presentation-item.ts';
