@@ -1,7 +1,7 @@
 /**
  * Reading the topic files a teaching set names by path, in Node: each path is taken
- * relative to the folder of the set's own file. Only for Node callers (tests, the
- * command line, the desktop shell's main process); the browser bundle never imports it.
+ * relative to the folder of the set's own file. Used by the tests of teaching sets; the
+ * browser bundle never imports it (the layer test checks that nothing it bundles reaches node:).
  */
 import { readFile } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';

@@ -25,8 +25,3 @@ export type StepKind = (typeof STEP_KINDS)[number];
 
 /** The steps shown when a topic or set item names none. */
 export const DEFAULT_STEPS: readonly StepKind[] = STEP_KINDS;
-
-/** Whether a text names a step kind. */
-export function isStepKind(value: string): value is StepKind {
-  return (STEP_KINDS as readonly string[]).includes(value);
-}

@@ -85,7 +85,7 @@ describe('TopicSaving', () => {
     expect(saving.dialogOpen).toBe(false);
     expect(messages.message).toEqual({
       tone: 'error',
-      text: 'One number cannot be read yet. Fix it to save a file; meanwhile your work is kept in this browser.',
+      text: 'One number cannot be read yet. Fix it to save a file; meanwhile Chancewise keeps your work on this computer.',
     });
   });
 });
