@@ -4,6 +4,7 @@
  * sentences a patient would hear. Every number comes from the computed topic and
  * every patient sentence from the core's wording.
  */
+import { formatSignificant } from '../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { topicWording } from '../core/wording/topic-wording.ts';
 import type { TopicWording } from '../core/wording/topic-wording.ts';
@@ -221,6 +222,7 @@ function uncertaintySlide(source: SlideSource): Slide {
   const certainty = sentenceOf(wording, outcome.outcomeId, option.optionId, 'certainty');
   const lines: SlideLine[] = [];
   if (range !== null) lines.push(line(range));
+  if (interval !== null && option.level !== null) lines.push(line(messages.story.intervalLevel(formatSignificant(option.level * 100)), 'note'));
   if (span !== null) lines.push(line(messages.callouts.outlined, 'body', 'uncertain'));
   if (option.certainty !== null) {
     lines.push(line(`${messages.story.certaintyLabel}: ${messages.story.certaintyNames[option.certainty]}`, 'subheading'));

@@ -95,6 +95,7 @@ describe('the story slides of the kidney stone topic (illustrative)', () => {
     );
     expect(slide.lines.map((line) => line.text)).toEqual([
       'With extra water each day, the number who avoid another kidney stone could be anywhere between 8 and 22 in 100.',
+      'The range is the research’s 95% interval.',
       'Outlined: people who may or may not have it, depending on where in the range the truth lies.',
       'Certainty of the evidence: moderate',
       'Extra water each day probably reduces the chance of another kidney stone.',
@@ -181,5 +182,21 @@ describe('story slides of other topics', () => {
     const evaluation = evaluateTopic(demoTopic(STONE));
     if (!evaluation.ok) throw new Error('kidney stone topic did not compute');
     expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({ denominator: 100, event: 18, prevented: 22, caused: 0, free: 60 });
+  });
+});
+
+describe('the level of the range on the teaching slides', () => {
+  it('names a 90% interval when the topic carries one', () => {
+    const topic = demoTopic(STONE);
+    const at90 = {
+      ...topic,
+      outcomes: topic.outcomes.map((outcome) => ({
+        ...outcome,
+        effects: outcome.effects.map((entry) => (entry.effect.measure === 'counts' ? entry : { ...entry, effect: { ...entry.effect, level: 0.9 } })),
+      })),
+    };
+    const lines = buildSlide(itemOf(at90), 'uncertainty').lines.map((found) => found.text);
+    expect(lines).toContain('The range is the research’s 90% interval.');
+    expect(buildSlide(itemOf(topic), 'uncertainty').lines.map((found) => found.text)).toContain('The range is the research’s 95% interval.');
   });
 });

@@ -173,6 +173,8 @@ export const teachingMessagesEn = {
     /** The heading of one of a step's several slides (one per harm, say): "Who is harmed (1 of 2)". */
     partOf: (heading: string, part: number, parts: number) => (parts > 1 ? `${heading} (${part} of ${parts})` : heading),
     certaintyLabel: 'Certainty of the evidence',
+    /** The level of the range: "The range is the research's 95% interval." */
+    intervalLevel: (percent: string) => `The range is the research’s ${percent}% interval.`,
     certaintyNames: { high: 'high', moderate: 'moderate', low: 'low', 'very-low': 'very low' },
     patientTopics: (outcome: string) => `About ${outcome}`,
   },
