@@ -49,7 +49,12 @@ function baselineOf(outcome: TopicOutcome): { risk: number; fromTrial: boolean }
   return { risk: risk ?? 0.5, fromTrial: true };
 }
 
-function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
+function comparisonEntry(
+  option: TopicOption,
+  risk: number,
+  denominator: Denominator,
+  words: WordsDenominator,
+): OptionOutcomeResult {
   // The comparison against itself: no difference, whichever way the event points.
   const people = peopleCounts(risk, point(risk), denominator);
   return {
@@ -72,7 +77,12 @@ function comparisonEntry(option: TopicOption, risk: number, denominator: Denomin
   };
 }
 
-function optionEntry(item: Computed, baselineRisk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
+function optionEntry(
+  item: Computed,
+  baselineRisk: number,
+  denominator: Denominator,
+  words: WordsDenominator,
+): OptionOutcomeResult {
   const { computation, option, entry } = item;
   const intervention = computation.interventionRisk ?? point(baselineRisk);
   const people = peopleCounts(baselineRisk, intervention, denominator);
@@ -128,6 +138,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: WordsDeno
   const computed: Computed[] = [];
   const notices: Notice[] = [];
   const baselines = new Map<string, number>();
+  const conversions = new Map<string, Notice>();
   const optionsById = new Map(topic.options.map((option) => [option.id, option]));
   for (const outcome of topic.outcomes) {
     const baseline = baselineOf(outcome);
@@ -139,6 +150,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: WordsDeno
       converted = computation.baselineUsed ?? baseline.risk;
       computed.push({ option, outcome, computation, entry });
       for (const found of computation.notices) {
+        if (found.code === 'baseline-period-converted') conversions.set(outcome.id, found);
         if (found.code === 'period-beyond-followup') {
           notices.push({ code: found.code, values: { ...found.values, option: option.name, outcome: outcome.name } });
         } else if (!DENOMINATOR_NOTICES.has(found.code)) {
@@ -175,6 +187,7 @@ export function evaluateTopic(topic: Topic, settings: { readonly per?: WordsDeno
       isHeadline: outcome.isHeadline,
       baselineRisk,
       baselineSource: outcome.baseline.source,
+      baselineConversion: conversions.get(outcome.id) ?? null,
       options: topic.options.map((option) => {
         if (option.isComparison) return comparisonEntry(option, baselineRisk, denominator, words);
         const item = byOutcome.get(outcome)?.get(option.id);

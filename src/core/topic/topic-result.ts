@@ -49,6 +49,11 @@ export interface OutcomeResult {
   /** The baseline risk over the topic's period (after any period conversion). */
   readonly baselineRisk: number;
   readonly baselineSource: string;
+  /**
+   * How the baseline was converted to the topic's period (a `baseline-period-converted`
+   * notice), so the conversion can be shown beside the outcome; null or absent when it was not.
+   */
+  readonly baselineConversion?: Notice | null;
   readonly options: readonly OptionOutcomeResult[];
 }
 

@@ -32,14 +32,38 @@ function freshId(prefix: string, taken: readonly string[]): string {
   return `${prefix}-${number}`;
 }
 
-/** Set one text field of the topic. */
-export function setTopicText(draft: TopicDraft, field: TopicTextField, value: string): TopicDraft {
-  return { ...draft, [field]: value };
+/**
+ * An outcome's baseline period follows the topic's while no baseline risk is typed: a risk
+ * not yet given has no period of its own. Once a risk is typed, its period is what it was
+ * typed over, and changing the topic's period never reinterprets it ("25% over 10 years").
+ */
+export function followsTopicPeriod(outcome: OutcomeDraft): boolean {
+  return outcome.baselineRisk.trim() === '';
 }
 
-/** Say which unit the topic's period is typed in; the amount typed stays as it is. */
+function withFollowingBaselines(draft: TopicDraft): TopicDraft {
+  return {
+    ...draft,
+    outcomes: draft.outcomes.map((outcome) =>
+      followsTopicPeriod(outcome)
+        ? { ...outcome, baselinePeriodYears: draft.periodYears, baselinePeriodUnit: draft.periodUnit }
+        : outcome,
+    ),
+  };
+}
+
+/** Set one text field of the topic; a new period is taken up by the baselines with no risk typed. */
+export function setTopicText(draft: TopicDraft, field: TopicTextField, value: string): TopicDraft {
+  const next = { ...draft, [field]: value };
+  return field === 'periodYears' ? withFollowingBaselines(next) : next;
+}
+
+/**
+ * Say which unit the topic's period is typed in; the amount typed stays as it is, and the
+ * baselines with no risk typed follow. Effects' follow-ups never follow: they are facts of a trial.
+ */
 export function setPeriodUnit(draft: TopicDraft, unit: TimeUnit): TopicDraft {
-  return { ...draft, periodUnit: unit };
+  return withFollowingBaselines({ ...draft, periodUnit: unit });
 }
 
 /** Mark the topic as an invented example, or not. */
@@ -75,9 +99,15 @@ function withEffectsFor(outcome: OutcomeDraft, options: readonly OptionDraft[]):
 /** Add an option (at most TOPIC_LIMITS.maxOptions), with a blank effect on every outcome. */
 export function addOption(draft: TopicDraft, name = ''): { draft: TopicDraft; optionId: string | null } {
   if (draft.options.length >= TOPIC_LIMITS.maxOptions) return { draft, optionId: null };
-  const id = freshId('option', draft.options.map((option) => option.id));
+  const id = freshId(
+    'option',
+    draft.options.map((option) => option.id),
+  );
   const options = [...draft.options, { id, name, isComparison: false }];
-  return { draft: { ...draft, options, outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, options)) }, optionId: id };
+  return {
+    draft: { ...draft, options, outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, options)) },
+    optionId: id,
+  };
 }
 
 /** Remove an option (keeping at least TOPIC_LIMITS.minOptions); removing the comparison passes it to the first other option. */
@@ -143,7 +173,10 @@ export function setHeadline(draft: TopicDraft, outcomeId: string): TopicDraft {
  */
 export function addOutcome(draft: TopicDraft, kind: 'benefit' | 'harm'): { draft: TopicDraft; outcomeId: string | null } {
   if (draft.outcomes.length >= TOPIC_LIMITS.maxOutcomes) return { draft, outcomeId: null };
-  const id = freshId('outcome', draft.outcomes.map((outcome) => outcome.id));
+  const id = freshId(
+    'outcome',
+    draft.outcomes.map((outcome) => outcome.id),
+  );
   const outcome: OutcomeDraft = {
     id,
     name: '',

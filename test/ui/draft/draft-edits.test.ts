@@ -13,6 +13,7 @@ import {
   setEffectField,
   setBaselineUnit,
   setHeadline,
+  setOutcomeText,
   setOutcomeWanted,
   setPeriodUnit,
   setTopicText,
@@ -110,8 +111,46 @@ describe('draft edits', () => {
   test('an effect can be marked as given for the opposite event and its follow-up given in months', () => {
     const outcomeId = demo.outcomes[0]!.id;
     const optionId = demo.outcomes[0]!.effects[0]!.optionId;
-    const edited = setEffectField(setEffectField(demo, outcomeId, optionId, 'opposite', true), outcomeId, optionId, 'followUpUnit', 'months');
+    const edited = setEffectField(
+      setEffectField(demo, outcomeId, optionId, 'opposite', true),
+      outcomeId,
+      optionId,
+      'followUpUnit',
+      'months',
+    );
     expect(edited.outcomes[0]?.effects[0]).toMatchObject({ opposite: true, followUpUnit: 'months' });
     expect(edited.outcomes[0]?.effects[1]).toMatchObject({ opposite: false, followUpUnit: 'years' });
+  });
+
+  describe('periods that follow the topic', () => {
+    // A risk is only meaningful with the period it was given over (common practice), so a typed
+    // baseline keeps its period; an effect's follow-up is what the trial measured and never follows.
+    test('a baseline with no risk typed takes up the topic’s new period and unit', () => {
+      const blank = blankDraft();
+      const oneYear = setTopicText(blank, 'periodYears', '1');
+      expect(oneYear.outcomes[0]).toMatchObject({ baselinePeriodYears: '1', baselinePeriodUnit: 'years' });
+      const sixMonths = setPeriodUnit(setTopicText(oneYear, 'periodYears', '6'), 'months');
+      expect(sixMonths.outcomes[0]).toMatchObject({ baselinePeriodYears: '6', baselinePeriodUnit: 'months' });
+    });
+
+    test('once a risk is typed, its period stays when the topic’s period changes', () => {
+      const typed = setOutcomeText(blankDraft(), 'outcome-1', 'baselineRisk', '25%');
+      const oneYear = setPeriodUnit(setTopicText(typed, 'periodYears', '1'), 'weeks');
+      expect(oneYear.outcomes[0]).toMatchObject({ baselineRisk: '25%', baselinePeriodYears: '10', baselinePeriodUnit: 'years' });
+    });
+
+    test('a risk cleared again makes its baseline follow from the next change of the topic’s period', () => {
+      const typed = setOutcomeText(blankDraft(), 'outcome-1', 'baselineRisk', '25%');
+      const cleared = setOutcomeText(typed, 'outcome-1', 'baselineRisk', ' ');
+      expect(setTopicText(cleared, 'periodYears', '2').outcomes[0]?.baselinePeriodYears).toBe('2');
+    });
+
+    test('an effect’s follow-up starts empty and never follows the topic’s period', () => {
+      const changed = setPeriodUnit(setTopicText(blankDraft(), 'periodYears', '3'), 'months');
+      expect(changed.outcomes[0]?.effects.map((entry) => [entry.followUpYears, entry.followUpUnit])).toEqual([
+        ['', 'years'],
+        ['', 'years'],
+      ]);
+    });
   });
 });

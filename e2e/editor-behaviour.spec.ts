@@ -1,0 +1,65 @@
+import type { Page } from '@playwright/test';
+import { SCREENS, expect, openApp, test } from './fixtures.ts';
+
+/**
+ * The editor does what the clinician typed and nothing behind their back: periods follow
+ * the topic only while nothing depends on them, undo stays within the document on screen,
+ * messages never hide the field being typed in, focus always lands somewhere sensible, and
+ * exported files are named for what they hold.
+ */
+
+async function newTopic(page: Page): Promise<void> {
+  await page.getByRole('button', { name: 'Topics' }).click();
+  await page.getByRole('button', { name: 'New topic', exact: true }).click();
+  await expect(page.getByLabel('Decision', { exact: true })).toHaveValue('');
+}
+
+/** Fill in the rest of a new topic: its words, the option, the outcome and an effect (RR 0.8). */
+async function fillBlankTopic(page: Page): Promise<void> {
+  await page.getByLabel('Decision', { exact: true }).fill('Taking a made-up tablet (illustrative)');
+  await page.getByLabel('Who the numbers are for', { exact: true }).fill('adults with a made-up condition');
+  await page.getByLabel('Option 2 name').fill('the tablet');
+  await page.getByLabel('Outcome', { exact: true }).fill('a made-up event');
+  await page.locator('fieldset.effect').first().getByLabel('Estimate').fill('0.8');
+}
+
+test.describe('periods that follow the topic', () => {
+  test('a baseline with no risk typed follows the topic’s period; a typed one keeps its period, and its conversion shows beside it and in the results', async ({
+    page,
+  }) => {
+    await openApp(page);
+    await newTopic(page);
+    const outcome = page.locator('article.outcome').first();
+    const baselinePeriod = outcome.getByLabel('Over', { exact: true });
+    const baselineUnit = outcome.getByLabel('Over: unit');
+    const followUp = outcome.locator('fieldset.effect').first().getByLabel('Follow-up', { exact: true });
+    await expect(baselinePeriod).toHaveValue('10');
+    await expect(followUp).toHaveValue('');
+
+    // No risk typed yet: the baseline follows the topic's period and unit; the trial's follow-up does not.
+    await page.getByLabel('Over what period', { exact: true }).fill('6');
+    await page.getByLabel('Over what period: unit').selectOption('months');
+    await expect(baselinePeriod).toHaveValue('6');
+    await expect(baselineUnit).toHaveValue('months');
+    await expect(followUp).toHaveValue('');
+
+    // A typed risk keeps the period it was typed over.
+    await page.getByLabel('Over what period', { exact: true }).fill('10');
+    await page.getByLabel('Over what period: unit').selectOption('years');
+    await expect(baselinePeriod).toHaveValue('10');
+    await outcome.getByLabel('Baseline risk', { exact: true }).fill('25%');
+    await fillBlankTopic(page);
+    await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
+    await page.getByLabel('Over what period', { exact: true }).fill('1');
+    await expect(baselinePeriod).toHaveValue('10');
+    await expect(baselineUnit).toHaveValue('years');
+
+    // The conversion is said at once, beside the field and with the outcome's results:
+    // 1 − 0.75^(1/10) = 2.84% under a constant hazard (Fleurence and Hollenbeak 2007).
+    const sentence = 'The baseline risk of 25% over 10 years was converted to 2.84% over 1 year, assuming a constant hazard.';
+    await expect(outcome.locator('.conversion-note')).toHaveText(sentence);
+    await expect(baselinePeriod).toHaveAccessibleDescription(new RegExp(sentence.replace(/[.%]/g, '\\$&')));
+    await expect(page.locator('article.outcome-result .conversion-note').first()).toHaveText(sentence);
+    await page.screenshot({ path: `${SCREENS}/editor-conversion.png` });
+  });
+});
