@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
 import { SCREENS, expect, openApp, test } from './fixtures.ts';
 
@@ -22,6 +23,13 @@ async function fillBlankTopic(page: Page): Promise<void> {
   await page.getByLabel('Outcome', { exact: true }).fill('a made-up event');
   await page.locator('fieldset.effect').first().getByLabel('Estimate').fill('0.8');
 }
+
+async function openFile(page: Page, name: string, text: string): Promise<void> {
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Open…' }).click()]);
+  await chooser.setFiles({ name, mimeType: 'application/json', buffer: Buffer.from(text, 'utf8') });
+}
+
+const screeningText = readFileSync('assets/demo/02-bowel-screening.json', 'utf8');
 
 test.describe('periods that follow the topic', () => {
   test('a baseline with no risk typed follows the topic’s period; a typed one keeps its period, and its conversion shows beside it and in the results', async ({
@@ -61,5 +69,36 @@ test.describe('periods that follow the topic', () => {
     await expect(baselinePeriod).toHaveAccessibleDescription(new RegExp(sentence.replace(/[.%]/g, '\\$&')));
     await expect(page.locator('article.outcome-result .conversion-note').first()).toHaveText(sentence);
     await page.screenshot({ path: `${SCREENS}/editor-conversion.png` });
+  });
+});
+
+test.describe('undo within a document', () => {
+  test('after opening a file, undo takes back edits to it and never brings the earlier topic back', async ({ page }) => {
+    await openApp(page);
+    const decision = page.getByLabel('Decision', { exact: true });
+    await decision.fill('My unsaved work');
+    await openFile(page, 'screening.cwtopic', screeningText);
+    await expect(decision).toHaveValue(/bowel screening/);
+    const undo = page.getByRole('button', { name: 'Undo', exact: true });
+    await expect(undo).toBeDisabled();
+    // The replaced unsaved work is offered back, not hidden in the history.
+    await expect(page.getByRole('region', { name: 'Unsaved work' })).toContainText('My unsaved work');
+
+    await decision.fill('Edited screening');
+    await expect(page).toHaveTitle('• Edited screening — Chancewise');
+    await undo.click();
+    await expect(decision).toHaveValue(/bowel screening/);
+    await expect(undo).toBeDisabled();
+    await page.keyboard.press('Control+z');
+    await expect(decision).toHaveValue(/bowel screening/);
+    // The header, the title and Save describe the file on screen.
+    await expect(page.locator('.document .file')).toHaveText('screening.cwtopic');
+    await expect(page.getByText('Unsaved changes')).toHaveCount(0);
+    await expect(page).toHaveTitle(/^[^•].*bowel screening.* — Chancewise$/);
+
+    await page.getByRole('region', { name: 'Unsaved work' }).getByRole('button', { name: 'Restore it' }).click();
+    await expect(decision).toHaveValue('My unsaved work');
+    await expect(undo).toBeDisabled();
+    await expect(page.locator('.document .file')).toHaveText('Example (not saved)');
   });
 });

@@ -1,13 +1,11 @@
 /**
  * The one message the app shows at a time, at the foot of the window: information fades
- * after a while, an error stays until dismissed. A message may offer to undo what it reports.
+ * after a while, an error stays until dismissed.
  */
 
 export interface AppMessage {
   readonly tone: 'error' | 'info';
   readonly text: string;
-  /** Offer an Undo button (the message reports a replaced topic). */
-  readonly undo?: boolean;
 }
 
 /** How long information stays, in milliseconds (long enough to read two sentences; common practice). */

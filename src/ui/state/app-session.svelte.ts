@@ -71,12 +71,6 @@ export class AppSession {
     else this.messages.show({ tone: 'info', text: 'Make the handout (PDF) in the results, then print it from your PDF reader.' });
   }
 
-  /** Undo from a message's button: the replaced topic comes back and the message goes. */
-  undoFromMessage(): void {
-    this.topic.editor.undo();
-    this.messages.dismiss();
-  }
-
   /** The window is closing: keep the work, and say whether there is unsaved work to warn about. */
   closing(): boolean {
     this.topic.editor.flushAutosave();

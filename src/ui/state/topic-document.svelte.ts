@@ -2,7 +2,8 @@
  * The topic the app holds and where it came from: opening a file (asked for, dropped on
  * the desktop app, or from the recent list), a new topic, an example, and unsaved work
  * from an earlier visit offered back. Opening never loses work: the topic it replaces
- * is one undo away, and a file that cannot be read leaves the current topic alone.
+ * is a new document with its own undo history; unsaved work it replaces is kept and offered
+ * back (as the earlier visit's is), and a file that cannot be read leaves the current topic alone.
  */
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { blankDraft } from '../draft/draft-edits.ts';
@@ -93,11 +94,34 @@ export class TopicDocument {
     this.recent = this.#recentFiles.add(fileName);
   }
 
-  #load(draft: TopicDraft, fileName: string | null, what: string): void {
-    const hadWork = this.editor.hasUnsavedChanges;
-    this.editor.load(draft, { fileName, saved: true });
+  /**
+   * Put another document on screen. Unsaved work it replaces is kept as the offered work
+   * (the newest replaced work takes the place of any offered before), so nothing typed is lost.
+   */
+  #replaceWith(draft: TopicDraft, settings: { readonly fileName: string | null; readonly saved: boolean }): boolean {
+    const { editor } = this;
+    const kept = editor.hasUnsavedChanges;
+    if (kept) {
+      const record: AutosaveRecord = {
+        draft: editor.draft,
+        fileName: editor.fileName,
+        savedAt: new Date().toISOString(),
+        unsaved: true,
+      };
+      this.#earlier.save(record);
+      this.offer = record;
+    }
+    editor.load(draft, settings);
     this.startOpen = false;
-    this.#messages.show({ tone: 'info', text: `${what}${hadWork ? ' Your previous topic is one undo away (Ctrl+Z).' : ''}`, undo: hadWork });
+    return kept;
+  }
+
+  #load(draft: TopicDraft, fileName: string | null, what: string): void {
+    const kept = this.#replaceWith(draft, { fileName, saved: true });
+    this.#messages.show({
+      tone: 'info',
+      text: `${what}${kept ? ' Your previous topic had unsaved changes: they are kept above, to restore or discard.' : ''}`,
+    });
   }
 
   /** Open an opened file's text; `replacing` names the recent file the person chose, when another came. */
@@ -108,7 +132,10 @@ export class TopicDocument {
       return;
     }
     this.remember(opened.fileName);
-    const migrated = opened.migratedFrom === null ? '' : ' It was written by an older version and has been updated; saving writes the new format.';
+    const migrated =
+      opened.migratedFrom === null
+        ? ''
+        : ' It was written by an older version and has been updated; saving writes the new format.';
     const other = replacing !== null && replacing !== opened.fileName ? ` (you chose it in place of “${replacing}”)` : '';
     this.#load(opened.draft, opened.fileName, `Opened “${opened.fileName}”${other}.${migrated}`);
   }
@@ -117,7 +144,8 @@ export class TopicDocument {
   async openFile(source: OpenSource = {}): Promise<void> {
     try {
       const platform = this.#platform;
-      const picked = source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
+      const picked =
+        source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
       if (picked !== null) this.openText(picked, source.recentName ?? null);
     } catch (error) {
       this.#messages.fail('', error, ' Your current topic is unchanged.');
@@ -134,12 +162,16 @@ export class TopicDocument {
     this.#platform.topicReplaced();
   }
 
-  /** Bring the offered unsaved work back, as unsaved; the topic it replaces is one undo away. */
+  /** Bring the offered unsaved work back, as unsaved and with its file; unsaved work it replaces is offered in its place. */
   restore(record: AutosaveRecord): void {
-    this.editor.load(record.draft, { fileName: record.fileName, saved: false });
     this.#earlier.clear();
     this.offer = null;
-    this.#messages.show({ tone: 'info', text: 'Your unsaved work is back. Undo (Ctrl+Z) returns to the example.' });
+    const kept = this.#replaceWith(record.draft, { fileName: record.fileName, saved: false });
+    const where = record.fileName === null ? '' : ` Save writes it to “${record.fileName}”.`;
+    this.#messages.show({
+      tone: 'info',
+      text: `Your unsaved work is back.${where}${kept ? ' The topic it replaced had unsaved changes: they are kept above.' : ''}`,
+    });
   }
 
   discardOffer(): void {

@@ -109,11 +109,16 @@ export class TopicEditor {
     this.#queueAutosave();
   }
 
-  /** Replace the draft with another topic (a file, a demo, a new topic); undo brings the old one back. */
+  /**
+   * Replace the draft with another document (a file, an example, a new topic, restored work).
+   * Its history starts afresh: undo works within the document on screen and never brings
+   * back another, so the file name and Save always belong to what is shown.
+   */
   load(draft: TopicDraft, settings: { readonly fileName: string | null; readonly saved: boolean }): void {
-    this.#history.record(draft, null, this.#now());
+    this.#history = new UndoHistory(draft);
     this.fileName = settings.fileName;
-    if (settings.saved) this.#savedSignature = signature(draft);
+    // Unsaved restored work is unsaved against any file it came from.
+    this.#savedSignature = settings.saved ? signature(draft) : '';
     // Results of the topic left behind must never show as if they were this one's.
     this.#lastValidDraft = null;
     this.#touched = new Set();
@@ -177,7 +182,8 @@ export class TopicEditor {
   #show(draft: TopicDraft): void {
     const check = checkDraft(draft, { per: this.per });
     if (check.result !== null) this.#lastValidDraft = draft;
-    const fallback = check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
+    const fallback =
+      check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
     this.draft = draft;
     this.check = check;
     this.shown = check.result ?? fallback;

@@ -24,7 +24,10 @@ function setUp(kind: 'browser' | 'desktop' = 'desktop') {
     document,
     later: () => undefined,
     editor: { schedule: () => () => undefined },
-    loadMaker: () => Promise.resolve({ makeHandout: (request) => (made.push(request.paper), Promise.resolve({ ok: true, pdf: new Uint8Array([37]) })) }),
+    loadMaker: () =>
+      Promise.resolve({
+        makeHandout: (request) => (made.push(request.paper), Promise.resolve({ ok: true, pdf: new Uint8Array([37]) })),
+      }),
     today: () => new Date(2026, 10, 3),
   });
   return { app, platform, made };
@@ -78,14 +81,13 @@ describe('AppSession', () => {
     expect(app.topic.editor.fileName).toBe('screening.cwtopic');
   });
 
-  it('undoes a replaced topic from the message that reports it, and the message goes', () => {
+  it('a new topic is its own document: Undo does not bring the replaced one back, the offer does', () => {
     const { app } = setUp();
     app.topic.editor.change((draft) => setTopicText(draft, 'title', 'My work'), 'title');
     app.topic.newTopic();
-    expect(app.messages.message?.undo).toBe(true);
-    app.undoFromMessage();
-    expect(app.topic.editor.draft.title).toBe('My work');
-    expect(app.messages.message).toBeNull();
+    expect(app.shortcut('undo')).toBe(true);
+    expect(app.topic.editor.draft.title).toBe('');
+    expect(app.topic.offer?.draft.title).toBe('My work');
   });
 
   it('says on closing whether there is unsaved work to warn about', () => {

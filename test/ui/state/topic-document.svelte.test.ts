@@ -12,8 +12,9 @@ import { RecentFiles } from '../../../src/ui/state/recent-files.ts';
 import { EARLIER_AUTOSAVE_KEY, TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
 import { fakePlatform } from './fake-platform.ts';
 
-// The messages are the app's own words; a replaced topic stays one undo away (common practice of
-// editors: an action that replaces work can be undone).
+// The messages are the app's own words. Each opened document has its own undo history, and
+// unsaved work it replaces is kept and offered back (common practice of document editors:
+// undo acts within one document, and replacing work never throws it away).
 
 const [stone, screening] = DEMO_TOPICS;
 if (stone === undefined || screening === undefined) throw new Error('the demonstration topics are missing');
@@ -50,8 +51,12 @@ describe('TopicDocument', () => {
     expect(topic.editor.hasUnsavedChanges).toBe(true);
     expect(topic.windowTitle).toBe('• My own topic — Chancewise');
     expect(topic.fileLabel).toBe('mine.cwtopic');
-    expect(messages.message?.text).toBe('Your unsaved work is back. Undo (Ctrl+Z) returns to the example.');
+    expect(messages.message?.text).toBe('Your unsaved work is back. Save writes it to “mine.cwtopic”.');
     expect(storage.getItem(EARLIER_AUTOSAVE_KEY)).toBeNull();
+    // A restored document starts its own history: undo never brings the example back.
+    expect(topic.editor.canUndo).toBe(false);
+    expect(topic.editor.undo()).toBe(false);
+    expect(topic.editor.draft.title).toBe('My own topic');
   });
 
   it('forgets the offered work when it is discarded', () => {
@@ -64,7 +69,7 @@ describe('TopicDocument', () => {
     expect(first.topic.editor.draft.title).toBe(stone.topic.title);
   });
 
-  it('opens a picked file, puts it on the recent list and keeps the replaced work one undo away', async () => {
+  it('opens a picked file as a new document, puts it on the recent list and offers the replaced unsaved work back', async () => {
     const { topic, platform, messages } = setUp();
     topic.editor.change((draft) => setTopicText(draft, 'title', 'Work in progress'), 'title');
     platform.picked = { name: 'screening.cwtopic', text: screeningText };
@@ -76,11 +81,36 @@ describe('TopicDocument', () => {
     expect(new RecentFiles(platform.storage).list()).toEqual(['screening.cwtopic']);
     expect(messages.message).toEqual({
       tone: 'info',
-      text: 'Opened “screening.cwtopic”. Your previous topic is one undo away (Ctrl+Z).',
-      undo: true,
+      text: 'Opened “screening.cwtopic”. Your previous topic had unsaved changes: they are kept above, to restore or discard.',
     });
-    topic.editor.undo();
+    // Undo stays within the opened file: the document, its name and Save stay the file's.
+    expect(topic.editor.canUndo).toBe(false);
+    expect(topic.editor.undo()).toBe(false);
+    expect(topic.editor.draft.title).toBe(screening.topic.title);
+    expect(topic.editor.fileName).toBe('screening.cwtopic');
+    expect(topic.editor.hasUnsavedChanges).toBe(false);
+    expect(topic.offer?.draft.title).toBe('Work in progress');
+    expect(new Autosave(platform.storage, EARLIER_AUTOSAVE_KEY).load()?.draft.title).toBe('Work in progress');
+    if (topic.offer === null) throw new Error('no offer');
+    topic.restore(topic.offer);
     expect(topic.editor.draft.title).toBe('Work in progress');
+    expect(topic.fileLabel).toBe('Example (not saved)');
+    // The file had no unsaved changes, so nothing is offered in its place.
+    expect(topic.offer).toBeNull();
+  });
+
+  it('an edit then undo after opening a file comes back to the file as opened, and no further', async () => {
+    const { topic, platform } = setUp();
+    platform.picked = { name: 'screening.cwtopic', text: screeningText };
+    await topic.openFile();
+    topic.editor.change((draft) => setTopicText(draft, 'title', 'Edited'), 'title');
+    expect(topic.windowTitle).toBe('• Edited — Chancewise');
+    expect(topic.editor.undo()).toBe(true);
+    expect(topic.editor.draft.title).toBe(screening.topic.title);
+    expect(topic.windowTitle).toBe(`${screening.topic.title} — Chancewise`);
+    expect(topic.editor.undo()).toBe(false);
+    expect(topic.editor.draft.title).toBe(screening.topic.title);
+    expect(topic.fileLabel).toBe('screening.cwtopic');
   });
 
   it('says when a recent file came back under another name, and when an older file was updated', async () => {
@@ -91,14 +121,17 @@ describe('TopicDocument', () => {
     expect(messages.message?.text).toBe(
       'Opened “version-1-blood-pressure.json” (you chose it in place of “old.cwtopic”). It was written by an older version and has been updated; saving writes the new format.',
     );
-    expect(messages.message?.undo).toBe(false);
+    expect(topic.offer).toBeNull();
   });
 
   it('leaves the topic alone when a file cannot be read or opened, and says why', async () => {
     const { topic, platform, messages } = setUp();
     platform.picked = { name: 'empty.cwtopic', text: '  ' };
     await topic.openFile();
-    expect(messages.message).toEqual({ tone: 'error', text: '“empty.cwtopic” is empty, so there is no topic to open. Your current topic is unchanged.' });
+    expect(messages.message).toEqual({
+      tone: 'error',
+      text: '“empty.cwtopic” is empty, so there is no topic to open. Your current topic is unchanged.',
+    });
     platform.picked = new Error('The file is not readable.');
     await topic.openFile();
     expect(messages.message).toEqual({ tone: 'error', text: 'The file is not readable. Your current topic is unchanged.' });

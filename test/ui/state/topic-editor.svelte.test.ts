@@ -74,12 +74,20 @@ describe('TopicEditor', () => {
     expect(editor.draft.outcomes[0]?.baselineRisk).toBe('20%');
   });
 
-  test('loading another topic can be undone', () => {
-    const { editor } = setUp();
-    editor.load(blankDraft(), { fileName: null, saved: true });
+  test('loading another topic starts a new history: undo and redo stay within it', () => {
+    const { editor, type } = setUp();
+    type(baselineKey, ['20%']);
+    editor.load(blankDraft(), { fileName: 'new.cwtopic', saved: true });
+    expect([editor.canUndo, editor.canRedo]).toEqual([false, false]);
+    expect(editor.undo()).toBe(false);
     expect(editor.draft.title).toBe('');
-    editor.undo();
-    expect(editor.draft.title).toBe(first.topic.title);
+    expect(editor.fileName).toBe('new.cwtopic');
+  });
+
+  test('loaded work that was not saved counts as unsaved, even when it matches the last saved draft', () => {
+    const { editor } = setUp();
+    editor.load(editor.draft, { fileName: 'mine.cwtopic', saved: false });
+    expect(editor.hasUnsavedChanges).toBe(true);
   });
 
   test('knows about unsaved changes until the draft is saved or changed back', () => {
@@ -123,8 +131,9 @@ describe('TopicEditor after loading another topic', () => {
     const { editor } = setUp();
     editor.load(blankDraft(), { fileName: null, saved: true });
     expect(editor.shown).toBeNull();
-    editor.undo();
-    expect(editor.shown?.title).toBe(first.topic.title);
+    editor.change((draft) => setTopicText(draft, 'title', 'A new decision'), 'title');
+    expect(editor.draft.title).toBe('A new decision');
+    expect(editor.shown).toBeNull();
   });
 });
 
@@ -146,6 +155,8 @@ describe('TopicEditor problems still to fill in', () => {
   test('a wrong value is a mistake even in a field never touched', () => {
     const { editor } = setUp();
     editor.load({ ...demo, periodYears: 'ten' }, { fileName: 'x.chancewise.json', saved: true });
-    expect(editor.problemsFor('periodYears').map((found) => [found.problem.code, found.needed])).toEqual([['number-unparsable', false]]);
+    expect(editor.problemsFor('periodYears').map((found) => [found.problem.code, found.needed])).toEqual([
+      ['number-unparsable', false],
+    ]);
   });
 });
