@@ -102,3 +102,39 @@ test.describe('undo within a document', () => {
     await expect(page.locator('.document .file')).toHaveText('Example (not saved)');
   });
 });
+
+test.describe('messages that do not cover work', () => {
+  test('a message moves out from under a focused field, names the saved file, and fades after a few seconds', async ({
+    page,
+  }) => {
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await openApp(page);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Save chart as SVG' }).first().click(),
+    ]);
+    const toast = page.locator('.toast-region .toast');
+    await expect(toast).toHaveText(new RegExp(`The chart is saved as “${download.suggestedFilename().replace(/[.]/g, '\\.')}”`));
+
+    // A field at the foot of the window, where the message sits, gets focus.
+    const field = page.getByLabel('Source of the baseline risk').first();
+    await field.evaluate((element) => {
+      element.scrollIntoView({ block: 'end' });
+      window.scrollBy(0, 40);
+      (element as HTMLElement).focus({ preventScroll: true });
+    });
+    await expect(page.locator('.toast-region')).toHaveAttribute('data-place', 'top');
+    const fieldBox = await field.boundingBox();
+    const toastBox = await toast.boundingBox();
+    if (fieldBox === null || toastBox === null) throw new Error('the field or the message is not on screen');
+    const apart = fieldBox.y >= toastBox.y + toastBox.height || toastBox.y >= fieldBox.y + fieldBox.height;
+    expect(apart, `message ${JSON.stringify(toastBox)} against field ${JSON.stringify(fieldBox)}`).toBe(true);
+    // Nor does it cover the header.
+    const header = await page.locator('header.bar').boundingBox();
+    expect(toastBox.y).toBeGreaterThanOrEqual((header?.y ?? 0) + (header?.height ?? 0));
+    await page.screenshot({ path: `${SCREENS}/editor-message-top.png` });
+
+    // Information fades after a few seconds (six).
+    await expect(toast).toHaveCount(0, { timeout: 9000 });
+  });
+});

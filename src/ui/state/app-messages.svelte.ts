@@ -8,8 +8,11 @@ export interface AppMessage {
   readonly text: string;
 }
 
-/** How long information stays, in milliseconds (long enough to read two sentences; common practice). */
-export const INFO_MILLISECONDS = 9000;
+/**
+ * How long information stays, in milliseconds: a few seconds, long enough to read two short
+ * sentences (common practice); errors stay until dismissed.
+ */
+export const INFO_MILLISECONDS = 6000;
 
 /** Runs a task after a delay. */
 export type Later = (task: () => void, delay: number) => void;

@@ -45,16 +45,22 @@ export class TopicExports {
     return suggestedFileName(editor.draft, editor.fileName).replace(/\.chancewise\.json$/, '');
   }
 
+  /** Where a saved file went, when the app cannot say it itself (a browser's downloads). */
+  #where(): string {
+    return this.#options.platform.kind === 'browser' ? ' Your browser puts it in its downloads folder.' : '';
+  }
+
   /** Save a chart; `showRange` keeps the outline of the people the interval leaves undecided. */
   async exportChart(model: ChartModel, format: 'svg' | 'png', showRange: boolean): Promise<void> {
     const { platform, document } = this.#options;
     const base = this.#baseName();
     try {
-      if (format === 'svg') {
-        await platform.saveFile(`${base}-${model.id}.svg`, chartSvgFile(model, document, { showRange }), 'image/svg+xml');
-      } else {
-        await platform.saveFile(`${base}-${model.id}.png`, await chartPngFile(model, document, { showRange }), 'image/png');
-      }
+      const saved =
+        format === 'svg'
+          ? await platform.saveFile(`${base}-${model.id}.svg`, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
+          : await platform.saveFile(`${base}-${model.id}.png`, await chartPngFile(model, document, { showRange }), 'image/png');
+      if (saved !== null)
+        this.#options.messages.show({ tone: 'info', text: `The chart is saved as “${saved}”.${this.#where()}` });
     } catch (error) {
       this.#options.messages.fail('The chart could not be saved: ', error, '.');
     }
@@ -75,7 +81,8 @@ export class TopicExports {
         return;
       }
       const saved = await platform.saveHandout(`${this.#baseName()}-handout.pdf`, made.pdf);
-      if (saved !== null) messages.show({ tone: 'info', text: `The handout is saved as “${saved}”. Open it to print it.` });
+      if (saved !== null)
+        messages.show({ tone: 'info', text: `The handout is saved as “${saved}”.${this.#where()} Open it to print it.` });
     } catch (error) {
       messages.fail('The handout could not be made: ', error, '.');
     } finally {

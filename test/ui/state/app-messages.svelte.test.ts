@@ -9,12 +9,12 @@ function setUp() {
 }
 
 describe('AppMessages', () => {
-  it('lets information fade after nine seconds (common practice: time to read two sentences)', () => {
+  it('lets information fade after six seconds (common practice: time to read two sentences)', () => {
     const { messages, waiting } = setUp();
     messages.show({ tone: 'info', text: 'Saved “a.cwtopic”.' });
     expect(messages.message?.text).toBe('Saved “a.cwtopic”.');
     expect(waiting.map((entry) => entry.delay)).toEqual([INFO_MILLISECONDS]);
-    expect(INFO_MILLISECONDS).toBe(9000);
+    expect(INFO_MILLISECONDS).toBe(6000);
     waiting[0]?.task();
     expect(messages.message).toBeNull();
   });

@@ -81,8 +81,8 @@ describe('TopicExports', () => {
     expect(failed.exports.handoutBusy).toBe(false);
   });
 
-  it('saves a chart as SVG named after the topic and the chart', async () => {
-    const { exports, platform, topic } = setUp();
+  it('saves a chart as SVG named after the topic and the chart, and says so with the file name', async () => {
+    const { exports, platform, messages, topic } = setUp();
     const shown = topic.editor.shown;
     if (shown === null) throw new Error('the example has no results');
     const model = outcomeChart(shown, 'stone');
@@ -90,6 +90,10 @@ describe('TopicExports', () => {
     expect(platform.savedFiles).toHaveLength(1);
     expect(platform.savedFiles[0]?.name).toBe(`ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg`);
     expect(platform.savedFiles[0]?.type).toBe('image/svg+xml');
+    expect(messages.message).toEqual({
+      tone: 'info',
+      text: `The chart is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg”.`,
+    });
     expect(String(platform.savedFiles[0]?.contents)).toMatch(
       /^<\?xml version="1\.0" encoding="UTF-8"\?>\s*<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/,
     );
