@@ -138,3 +138,71 @@ test.describe('messages that do not cover work', () => {
     await expect(toast).toHaveCount(0, { timeout: 9000 });
   });
 });
+
+test.describe('keyboard and focus', () => {
+  test('focus lands back on Save after Escape in the save dialog, on the decision after New topic, and on the Topics button when the panel closes', async ({ page }) => {
+    await openApp(page);
+    // The save dialog: Escape, and focus is back on Save.
+    const save = page.getByRole('button', { name: /^Save/ }).first();
+    await save.click();
+    const dialog = page.getByRole('dialog', { name: 'Save the topic' });
+    await expect(dialog).toBeVisible();
+    await page.keyboard.press('Escape');
+    await expect(dialog).toHaveCount(0);
+    await expect(save).toBeFocused();
+    // Ctrl+S from a field: focus returns to that field.
+    const decision = page.getByLabel('Decision', { exact: true });
+    await decision.focus();
+    await page.keyboard.press('Control+s');
+    await expect(dialog).toBeVisible();
+    await page.keyboard.press('Escape');
+    await expect(decision).toBeFocused();
+
+    const topics = page.getByRole('button', { name: 'Topics' });
+    await topics.click();
+    await page.getByRole('button', { name: 'New topic', exact: true }).click();
+    await expect(page.getByLabel('Decision', { exact: true })).toBeFocused();
+
+    // Escape closes the Topics panel, wherever focus is in it, and gives focus back to its button.
+    await topics.click();
+    const panel = page.getByRole('region', { name: 'Start' });
+    await panel.getByRole('button', { name: 'Open a topic file…' }).focus();
+    await page.keyboard.press('Escape');
+    await expect(panel).toHaveCount(0);
+    await expect(topics).toBeFocused();
+    await expect(topics).toHaveAttribute('aria-expanded', 'false');
+    await topics.click();
+    await panel.getByRole('button', { name: 'Close' }).click();
+    await expect(topics).toBeFocused();
+
+  });
+
+  test('an example opened from the Topics panel puts focus on the topic’s heading', async ({ page }) => {
+    await openApp(page);
+    await page.getByRole('button', { name: 'Topics' }).click();
+    await page.getByRole('region', { name: 'Start' }).locator('button.demo').nth(1).click();
+    await expect(page.getByRole('heading', { name: 'Topic', exact: true })).toBeFocused();
+  });
+
+  test('what the keyboard moves to is never hidden under the sticky header (WCAG 2.2, 2.4.11)', async ({ page }) => {
+    for (const width of [1440, 800]) {
+      await page.setViewportSize({ width, height: 900 });
+      await openApp(page);
+      const header = page.locator('header.bar');
+      for (const [link, heading] of [
+        ['Skip to the topic', 'Topic'],
+        ['Skip to the results', 'Results'],
+      ] as const) {
+        await page.evaluate(() => window.scrollTo(0, document.body.scrollHeight));
+        await page.getByRole('link', { name: link }).focus();
+        await page.keyboard.press('Enter');
+        const target = page.getByRole('heading', { name: heading, exact: true });
+        await expect(target).toBeFocused();
+        const headerBox = await header.boundingBox();
+        const targetBox = await target.boundingBox();
+        if (headerBox === null || targetBox === null) throw new Error('the header or the heading is not on screen');
+        expect(targetBox.y, `${heading} at ${width} px`).toBeGreaterThanOrEqual(headerBox.y + headerBox.height);
+      }
+    }
+  });
+});

@@ -38,6 +38,14 @@ export interface OpenSource {
   readonly recentPath?: string;
 }
 
+/**
+ * Where focus goes once another document is on screen: the decision's box of a new topic, or
+ * the topic's heading of an opened one (so a keyboard user starts at its top, not the page's).
+ */
+export interface FocusRequest {
+  readonly target: 'decision' | 'topic';
+}
+
 export class TopicDocument {
   readonly editor: TopicEditor;
   /** Unsaved work from an earlier visit or a crash, offered back until restored or discarded. */
@@ -45,6 +53,8 @@ export class TopicDocument {
   recent = $state.raw<readonly string[]>([]);
   /** The start panel (new topic, files, examples) is open. */
   startOpen = $state(false);
+  /** The latest request to move focus; a new object each time, so the same target can be asked twice. */
+  focusRequest = $state.raw<FocusRequest | null>(null);
 
   readonly #platform: Platform;
   readonly #messages: AppMessages;
@@ -98,7 +108,11 @@ export class TopicDocument {
    * Put another document on screen. Unsaved work it replaces is kept as the offered work
    * (the newest replaced work takes the place of any offered before), so nothing typed is lost.
    */
-  #replaceWith(draft: TopicDraft, settings: { readonly fileName: string | null; readonly saved: boolean }): boolean {
+  #replaceWith(
+    draft: TopicDraft,
+    settings: { readonly fileName: string | null; readonly saved: boolean },
+    focus: FocusRequest['target'] = 'topic',
+  ): boolean {
     const { editor } = this;
     const kept = editor.hasUnsavedChanges;
     if (kept) {
@@ -113,11 +127,12 @@ export class TopicDocument {
     }
     editor.load(draft, settings);
     this.startOpen = false;
+    this.focusRequest = { target: focus };
     return kept;
   }
 
-  #load(draft: TopicDraft, fileName: string | null, what: string): void {
-    const kept = this.#replaceWith(draft, { fileName, saved: true });
+  #load(draft: TopicDraft, fileName: string | null, what: string, focus: FocusRequest['target'] = 'topic'): void {
+    const kept = this.#replaceWith(draft, { fileName, saved: true }, focus);
     this.#messages.show({
       tone: 'info',
       text: `${what}${kept ? ' Your previous topic had unsaved changes: they are kept above, to restore or discard.' : ''}`,
@@ -158,7 +173,7 @@ export class TopicDocument {
   }
 
   newTopic(): void {
-    this.#load(blankDraft(), null, 'Started a new topic.');
+    this.#load(blankDraft(), null, 'Started a new topic.', 'decision');
     this.#platform.topicReplaced();
   }
 

@@ -152,6 +152,23 @@ describe('TopicDocument', () => {
     expect(platform.replaced).toBe(2);
   });
 
+  it('asks for focus on the decision’s box of a new topic, and on the topic’s heading of an opened one', async () => {
+    const { topic, platform } = setUp();
+    expect(topic.focusRequest).toBeNull();
+    topic.newTopic();
+    expect(topic.focusRequest).toEqual({ target: 'decision' });
+    const first = topic.focusRequest;
+    topic.newTopic();
+    // A new request each time, so asking twice for the same place still moves focus.
+    expect(topic.focusRequest).not.toBe(first);
+    topic.openDemo(screening);
+    expect(topic.focusRequest).toEqual({ target: 'topic' });
+    topic.newTopic();
+    platform.picked = { name: 'screening.cwtopic', text: screeningText };
+    await topic.openFile();
+    expect(topic.focusRequest).toEqual({ target: 'topic' });
+  });
+
   it('knows when the patient’s details are filled in', () => {
     const { topic } = setUp();
     expect(topic.patientGiven).toBe(false);
