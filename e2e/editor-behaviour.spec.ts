@@ -140,7 +140,9 @@ test.describe('messages that do not cover work', () => {
 });
 
 test.describe('keyboard and focus', () => {
-  test('focus lands back on Save after Escape in the save dialog, on the decision after New topic, and on the Topics button when the panel closes', async ({ page }) => {
+  test('focus lands back on Save after Escape in the save dialog, on the decision after New topic, and on the Topics button when the panel closes', async ({
+    page,
+  }) => {
     await openApp(page);
     // The save dialog: Escape, and focus is back on Save.
     const save = page.getByRole('button', { name: /^Save/ }).first();
@@ -174,7 +176,6 @@ test.describe('keyboard and focus', () => {
     await topics.click();
     await panel.getByRole('button', { name: 'Close' }).click();
     await expect(topics).toBeFocused();
-
   });
 
   test('an example opened from the Topics panel puts focus on the topic’s heading', async ({ page }) => {
