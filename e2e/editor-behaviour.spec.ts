@@ -207,3 +207,53 @@ test.describe('keyboard and focus', () => {
     }
   });
 });
+
+test.describe('exports named for what they are', () => {
+  async function downloadName(page: Page, click: () => Promise<void>): Promise<string> {
+    const [download] = await Promise.all([page.waitForEvent('download'), click()]);
+    return download.suggestedFilename();
+  }
+
+  test('charts are <topic>-<outcome>.svg/.png and the handout <topic>-handout.pdf, and each says so', async ({ page }) => {
+    await openApp(page);
+    const chart = page.locator('article.outcome-result[data-outcome-id="stone"]');
+    expect(await downloadName(page, () => chart.getByRole('button', { name: 'Save chart as SVG' }).click())).toBe(
+      'ways-to-cut-the-chance-of-a-second-another-kidney-stone.svg',
+    );
+    await expect(page.locator('.toast')).toContainText('“ways-to-cut-the-chance-of-a-second-another-kidney-stone.svg”');
+    expect(await downloadName(page, () => chart.getByRole('button', { name: 'Save as PNG (300 dpi)' }).click())).toBe(
+      'ways-to-cut-the-chance-of-a-second-another-kidney-stone.png',
+    );
+    const handout = page.getByRole('region', { name: 'Handout for the patient' });
+    expect(await downloadName(page, () => handout.getByRole('button', { name: 'Make the handout (PDF)' }).click())).toBe(
+      'ways-to-cut-the-chance-of-a-second-handout.pdf',
+    );
+    await expect(page.locator('.toast')).toContainText('“ways-to-cut-the-chance-of-a-second-handout.pdf”');
+
+    // An opened file names its exports after itself, without its ending.
+    await openFile(page, 'Bowel Screening.cwtopic', screeningText);
+    const screening = page.locator('article.outcome-result').first();
+    await expect(screening).toBeVisible();
+    expect(await downloadName(page, () => screening.getByRole('button', { name: 'Save chart as SVG' }).click())).toBe(
+      'bowel-screening-dying-of-bowel-cancer.svg',
+    );
+  });
+
+  test('the handout’s choices and the outline are kept in the saved topic file', async ({ page }) => {
+    await openApp(page);
+    const handout = page.getByRole('region', { name: 'Handout for the patient' });
+    await handout.getByLabel('Paper').selectOption('letter');
+    await handout.getByLabel('Include the number needed to treat').check();
+    await page.getByLabel('Outline the people who depend on the range').check();
+    await page.getByRole('radio', { name: '1000 people' }).check();
+    await page.getByRole('navigation', { name: 'Topic' }).getByRole('button', { name: /^Save/ }).click();
+    const dialog = page.getByRole('dialog', { name: 'Save the topic' });
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      dialog.getByRole('button', { name: 'Save file' }).click(),
+    ]);
+    const saved = JSON.parse(readFileSync(await download.path(), 'utf8')) as { version: number; topic: { handout: unknown } };
+    expect(saved.version).toBe(4);
+    expect(saved.topic.handout).toEqual({ showNnt: true, per: 1000, outline: true, paper: 'letter' });
+  });
+});

@@ -8,6 +8,7 @@ import type { Paper } from '../handout/paper-size.ts';
 import { outputPath, writeOutput } from './chart-command.ts';
 import type { CommandOutput } from './command-output.ts';
 import { computeTopicOrFail } from './compute-command.ts';
+import { handoutChoices } from './handout-choices.ts';
 import { parsePer } from './effect-flags.ts';
 import { parseArgs, valueOf } from './parse-args.ts';
 import { topicFromArgs } from './topic-input.ts';
@@ -21,6 +22,7 @@ const HANDOUT_FLAGS = {
   '--paper': { takesValue: true, example: 'a4' },
   '--date': { takesValue: true, example: '2026-12-01' },
   '--show-nnt': { takesValue: false },
+  '--no-nnt': { takesValue: false },
   '--clinician': { takesValue: true, example: '"Dr A. Patel, Riverside Surgery"' },
   '--per': { takesValue: true, example: '100' },
 };
@@ -56,7 +58,8 @@ function today(): string {
 export function runHandout(args: readonly string[]): CommandOutput {
   const parsed = parseArgs(args, HANDOUT_FLAGS);
   const out = outputPath(valueOf(parsed, '--out'), '.pdf', 'handout.pdf');
-  const paper = parsePaper(valueOf(parsed, '--paper'));
+  const paperFlag = valueOf(parsed, '--paper');
+  const paper = paperFlag === undefined ? null : parsePaper(paperFlag);
   const dateFlag = valueOf(parsed, '--date');
   const date = dateFlag === undefined ? today() : parseDate(dateFlag);
   const clinician = (valueOf(parsed, '--clinician') ?? '').trim();
@@ -65,15 +68,17 @@ export function runHandout(args: readonly string[]): CommandOutput {
   }
   const topic = topicFromArgs(parsed);
   if (topic === null) throw new UsageError(words.handoutNeedsTopic());
-  const result = computeTopicOrFail(topic, parsePer(parsed));
+  const nnt = parsed.flags.has('--show-nnt') ? true : parsed.flags.has('--no-nnt') ? false : null;
+  const choices = handoutChoices({ paper, showNnt: nnt, per: parsePer(parsed) }, topic.handout);
+  const result = computeTopicOrFail(topic, choices.per);
   const built = buildHandout(
     result,
     topic,
-    { paper, date, appVersion: packageJson.version, showNnt: parsed.flags.has('--show-nnt'), clinician },
+    { paper: choices.paper, date, appVersion: packageJson.version, showNnt: choices.showNnt, clinician },
     loadHandoutFonts(),
   );
   if (!built.ok) throw new UsageError(built.message);
   writeOutput(out, built.pdf);
   const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
-  return { stdout: `${words.handoutWritten(out, handoutMessagesEn.paperName[paper], grade)}\n` };
+  return { stdout: `${words.handoutWritten(out, handoutMessagesEn.paperName[choices.paper], grade)}\n` };
 }

@@ -11,7 +11,7 @@ Usage:
   chancewise chart (TOPIC-FILE | --demo | effect flags of compute) --out FILE.svg
                      [--per 100|1000] [--outcome NAME] [--show-range]
   chancewise handout (TOPIC-FILE | --demo) --out FILE.pdf [--paper a4|letter] [--date YYYY-MM-DD]
-                     [--show-nnt] [--clinician TEXT] [--per 100|1000]
+                     [--show-nnt | --no-nnt] [--clinician TEXT] [--per 100|1000]
 
 Risks: 0.2, 20%, 20/100, 1 in 5 or 200 per 1000. --rrr and its --ci are in percent.
 --counts gives the option arm first, then the comparison arm.
@@ -19,5 +19,6 @@ Risks: 0.2, 20%, 20/100, 1 in 5 or 200 per 1000. --rrr and its --ci are in perce
 --wanted: the event is one people want (pain gone, stopped smoking); more of it is a benefit.
 --opposite: the effect (or the counts) is for the opposite event, e.g. "still in pain" for
   "pain gone"; an odds ratio is inverted, other measures are applied to 1 − the risk.
+handout: a topic file's own choices (paper, NNT, --per) are used unless a flag says otherwise.
 Exit status: 0 done, 2 input to fix (one line on stderr), 1 other failure.
 `;

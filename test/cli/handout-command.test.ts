@@ -125,3 +125,38 @@ describe('chancewise handout', () => {
     expect(readFileSync(path).equals(readFileSync(inProcess))).toBe(true);
   });
 });
+
+describe('chancewise handout with the choices a topic file keeps', () => {
+  // A version 4 file stores the handout's choices; the flags override them one by one.
+  const stored = join(folder, 'stored-choices.cwtopic');
+  writeFileSync(
+    stored,
+    JSON.stringify({
+      format: 'chancewise-topic',
+      version: 4,
+      topic: { ...firstDemo().topic, patient: null, handout: { showNnt: true, per: 1000, outline: false, paper: 'letter' } },
+    }),
+  );
+
+  it('prints on the stored paper, with the stored NNT sentences and denominator', async () => {
+    const path = out('stored.pdf');
+    const result = await run(['handout', stored, '--out', path, '--date', '2026-12-01']);
+    expect(result).toMatchObject({ code: 0, stderr: '' });
+    // US Letter, 8.5 × 11 inches = 612 × 792 points.
+    expect(pageSize(path)).toBe('612 x 792 pts (letter)');
+    const text = pdfText(path);
+    expect(text).toMatch(/NNTB \d+: treating \d+ people like you/);
+    expect(text).toContain('Every number on this sheet is out of 1000 people');
+  });
+
+  it('lets --paper, --no-nnt and --per override what the file stores', async () => {
+    const path = out('overridden.pdf');
+    const result = await run(['handout', stored, '--out', path, '--date', '2026-12-01', '--paper', 'a4', '--no-nnt', '--per', '100']);
+    expect(result).toMatchObject({ code: 0, stderr: '' });
+    // ISO 216 A4 in points.
+    expect(pageSize(path)).toBe('595.28 x 841.89 pts (A4)');
+    const text = pdfText(path);
+    expect(text).not.toMatch(/NNTB \d+/);
+    expect(text).not.toContain('out of 1000 people');
+  });
+});

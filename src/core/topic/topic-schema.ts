@@ -1,5 +1,6 @@
 import * as v from 'valibot';
 import { MEASURES } from '../effect-measures.ts';
+import { WORDS_DENOMINATORS } from '../types.ts';
 
 /** The name every topic file carries in its `format` field. */
 export const TOPIC_FORMAT = 'chancewise-topic';
@@ -7,9 +8,10 @@ export const TOPIC_FORMAT = 'chancewise-topic';
  * The version this build writes. Version 3 added `wanted` on outcomes and the time units
  * (`periodUnit`, `followUpUnit`) and the `opposite` flag of effects; a version 2 file has none
  * of them and reads with their defaults (all events unwanted, periods in years). Version 1
- * files are migrated on reading.
+ * files are migrated on reading. Version 4 added the handout's choices (`handout`: `showNnt`,
+ * `per`, `outline`, `paper`); a version 2 or 3 file has none and reads without them.
  */
-export const TOPIC_VERSION = 3;
+export const TOPIC_VERSION = 4;
 
 const text = v.string();
 const years = v.pipe(v.number(), v.finite());
@@ -40,7 +42,15 @@ const effect = v.variant('measure', [countsEffect, enteredEffect]);
 const certainty = v.picklist(['high', 'moderate', 'low', 'very-low']);
 const importance = v.picklist(['important', 'trivial']);
 
-/** Schema of one topic, as stored (versions 2 and 3; the fields version 3 added are optional). */
+/** Schema of the handout's choices (version 4). */
+export const handoutChoicesSchema = v.object({
+  showNnt: v.boolean(),
+  per: v.nullable(v.picklist(WORDS_DENOMINATORS)),
+  outline: v.boolean(),
+  paper: v.picklist(['a4', 'letter']),
+});
+
+/** Schema of one topic, as stored (versions 2 to 4; the fields versions 3 and 4 added are optional). */
 export const topicSchema = v.object({
   title: text,
   population: text,
@@ -73,12 +83,13 @@ export const topicSchema = v.object({
   questions: v.array(text),
   clinician: v.optional(text, ''),
   patient: v.optional(v.nullable(v.object({ name: text, reference: text })), null),
+  handout: v.optional(handoutChoicesSchema),
 });
 
-/** Schema of a version 2 or 3 file. */
+/** Schema of a version 2, 3 or 4 file. */
 export const topicFileSchema = v.object({
   format: v.literal(TOPIC_FORMAT),
-  version: v.picklist([2, TOPIC_VERSION]),
+  version: v.picklist([2, 3, TOPIC_VERSION]),
   topic: topicSchema,
 });
 

@@ -1,5 +1,5 @@
 import type { TimeUnit } from '../time-unit.ts';
-import type { Effect } from '../types.ts';
+import type { Effect, WordsDenominator } from '../types.ts';
 
 /** GRADE certainty of the evidence for one result (Balshem et al. 2011). */
 export type Certainty = 'high' | 'moderate' | 'low' | 'very-low';
@@ -59,6 +59,20 @@ export interface TopicOutcome {
   readonly effects: readonly OptionEffect[];
 }
 
+/** How the topic's handout and charts are made, kept with the topic so they come back with its file. */
+export interface TopicHandoutChoices {
+  /** Print the number-needed-to-treat sentences (the clinician opts in). */
+  readonly showNnt: boolean;
+  /** Count per this many people, or null to let the core choose. */
+  readonly per: WordsDenominator | null;
+  /** Outline the people who depend on the range of the interval. */
+  readonly outline: boolean;
+  readonly paper: 'a4' | 'letter';
+}
+
+/** The choices of a topic that has none stored: no NNT, the core's denominator, no outline, A4. */
+export const DEFAULT_HANDOUT_CHOICES: TopicHandoutChoices = { showNnt: false, per: null, outline: false, paper: 'a4' };
+
 /** A decision topic: everything needed to compute, draw, word and print one decision. */
 export interface Topic {
   /** The decision in one line: "Taking a statin to lower the chance of a heart attack or stroke". */
@@ -81,6 +95,8 @@ export interface Topic {
   readonly clinician: string;
   /** Patient-identifying details: never written to a file unless the user asks for it. */
   readonly patient?: { readonly name: string; readonly reference: string } | null;
+  /** The handout's choices (version 4 files); absent: {@link DEFAULT_HANDOUT_CHOICES}. */
+  readonly handout?: TopicHandoutChoices;
 }
 
 /** Limits shared by the editor, the validator and the handout. */

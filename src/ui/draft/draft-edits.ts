@@ -5,7 +5,8 @@
  * unchanged.
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
-import { TOPIC_LIMITS } from '../../core/topic/topic.ts';
+import { DEFAULT_HANDOUT_CHOICES, TOPIC_LIMITS } from '../../core/topic/topic.ts';
+import type { TopicHandoutChoices } from '../../core/topic/topic.ts';
 import { blankEffect } from './topic-draft.ts';
 import type { EffectDraft, OptionDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
 
@@ -267,5 +268,16 @@ export function blankDraft(): TopicDraft {
     clinician: '',
     patientName: '',
     patientReference: '',
+    handout: DEFAULT_HANDOUT_CHOICES,
   };
+}
+
+/** Change one of the handout's choices (kept with the topic). */
+export function setHandoutChoice<Choice extends keyof TopicHandoutChoices>(
+  draft: TopicDraft,
+  choice: Choice,
+  value: TopicHandoutChoices[Choice],
+): TopicDraft {
+  if (draft.handout[choice] === value) return draft;
+  return { ...draft, handout: { ...draft.handout, [choice]: value } };
 }

@@ -1,5 +1,6 @@
 import { amountIn } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
+import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
 import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
 import { numberText } from './number-text.ts';
 import { blankEffect } from './topic-draft.ts';
@@ -81,5 +82,6 @@ export function draftFromTopic(topic: Topic): TopicDraft {
     clinician: topic.clinician,
     patientName: topic.patient?.name ?? '',
     patientReference: topic.patient?.reference ?? '',
+    handout: topic.handout ?? DEFAULT_HANDOUT_CHOICES,
   };
 }

@@ -4,6 +4,8 @@
  */
 import * as v from 'valibot';
 import { MEASURES } from '../../core/effect-measures.ts';
+import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
+import { handoutChoicesSchema } from '../../core/topic/topic-schema.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
 const text = v.string();
@@ -58,6 +60,8 @@ export const topicDraftSchema = v.object({
   clinician: text,
   patientName: text,
   patientReference: text,
+  // Drafts stored before the handout's choices were kept read with the defaults.
+  handout: v.optional(handoutChoicesSchema, DEFAULT_HANDOUT_CHOICES),
 });
 
 /** The draft in `data`, or null when it is not a whole draft. */

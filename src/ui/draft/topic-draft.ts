@@ -5,7 +5,7 @@
  * switching the comparison back and forth loses nothing.
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
-import type { Certainty, Importance } from '../../core/topic/topic.ts';
+import type { Certainty, Importance, TopicHandoutChoices } from '../../core/topic/topic.ts';
 import type { EffectMeasure } from '../../core/types.ts';
 
 /** The measures an effect can be entered in: the core's five, or a trial's own counts. */
@@ -70,6 +70,8 @@ export interface TopicDraft {
   readonly clinician: string;
   readonly patientName: string;
   readonly patientReference: string;
+  /** How the handout and charts are made; kept in the topic's file. */
+  readonly handout: TopicHandoutChoices;
 }
 
 /** A blank effect of one option, as a new outcome or option starts. */

@@ -13,7 +13,8 @@ import { InputError, problem } from '../../core/problems.ts';
 import type { Problem } from '../../core/problems.ts';
 import { yearsFrom } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
-import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
+import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
+import type { OptionEffect, Topic, TopicHandoutChoices, TopicOutcome } from '../../core/topic/topic.ts';
 import type { Effect } from '../../core/types.ts';
 import { blankEffect } from './topic-draft.ts';
 import type { EffectDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
@@ -30,6 +31,9 @@ export interface DraftReading {
 interface Reader {
   readonly problems: Problem[];
 }
+
+const sameChoices = (first: TopicHandoutChoices, second: TopicHandoutChoices): boolean =>
+  first.showNnt === second.showNnt && first.per === second.per && first.outline === second.outline && first.paper === second.paper;
 
 function readNumber(reader: Reader, text: string, field: string, what: string, example: string): number {
   if (text.trim() === '') {
@@ -174,6 +178,8 @@ export function topicFromDraft(draft: TopicDraft): DraftReading {
     questions: questionPlaces.map((place) => draft.questions[place] ?? ''),
     clinician: draft.clinician,
     patient: patientGiven ? { name: draft.patientName, reference: draft.patientReference } : null,
+    // The default choices are left out, so a topic without stored choices reads back as it was.
+    ...(sameChoices(draft.handout, DEFAULT_HANDOUT_CHOICES) ? {} : { handout: draft.handout }),
   };
   return { topic, problems: reader.problems, questionPlaces };
 }

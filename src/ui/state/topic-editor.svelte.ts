@@ -6,6 +6,7 @@
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { WordsDenominator } from '../../core/types.ts';
 import { checkDraft, isMissing } from '../draft/check-draft.ts';
+import { setHandoutChoice } from '../draft/draft-edits.ts';
 import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 import { withoutPatient } from './autosave.ts';
@@ -47,8 +48,6 @@ function groupByKey(problems: readonly FieldProblem[]): Map<string, FieldProblem
 export class TopicEditor {
   /** The draft exactly as typed. */
   draft = $state.raw<TopicDraft>() as TopicDraft;
-  /** The chosen denominator, or null to let the core choose. */
-  per = $state.raw<WordsDenominator | null>(null);
   /** The check of the current draft: every problem, and the result when there are none. */
   check = $state.raw<DraftCheck>() as DraftCheck;
   /** The results on screen: the current draft's, or the last valid draft's while it has problems. */
@@ -92,6 +91,11 @@ export class TopicEditor {
     this.#savedSignature = signature(initial);
     this.fileName = settings.fileName ?? null;
     this.#show(initial);
+  }
+
+  /** The chosen denominator, or null to let the core choose; one of the topic's handout choices. */
+  get per(): WordsDenominator | null {
+    return this.draft.handout.per;
   }
 
   /** The problems of one field, in the order found. */
@@ -150,10 +154,9 @@ export class TopicEditor {
     return true;
   }
 
-  /** Show the numbers per 100, 1000 or more people, or (null) let the core choose. */
+  /** Show the numbers per 100, 1000 or more people, or (null) let the core choose; kept with the topic. */
   setPer(per: WordsDenominator | null): void {
-    this.per = per;
-    this.#show(this.draft);
+    this.change((draft) => setHandoutChoice(draft, 'per', per));
   }
 
   /** Write the autosave now (before the page is hidden or closed). */
@@ -180,10 +183,10 @@ export class TopicEditor {
   }
 
   #show(draft: TopicDraft): void {
-    const check = checkDraft(draft, { per: this.per });
+    const { per } = draft.handout;
+    const check = checkDraft(draft, { per });
     if (check.result !== null) this.#lastValidDraft = draft;
-    const fallback =
-      check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
+    const fallback = check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per }).result : null;
     this.draft = draft;
     this.check = check;
     this.shown = check.result ?? fallback;

@@ -1,11 +1,11 @@
 /**
  * What the app makes from the topic on screen: a chart as SVG or PNG, and the printed
- * handout (PDF). Files are named after the topic's file; nothing is made from results
- * that are out of date.
+ * handout (PDF). Files are named for what they hold (`export-file-names.ts`); nothing is
+ * made from results that are out of date.
  */
 import type { ChartModel } from '../../render/chart-model.ts';
 import { chartPngFile, chartSvgFile } from '../export/chart-export.ts';
-import { suggestedFileName } from '../files/topic-files.ts';
+import { exportFileName, topicPart } from '../files/export-file-names.ts';
 import { loadHandoutMaker, localDate } from '../handout/handout-builder.ts';
 import type { HandoutMaker } from '../handout/handout-builder.ts';
 import type { Platform } from '../platform/platform.ts';
@@ -17,8 +17,6 @@ export interface HandoutChoices {
   readonly showNnt: boolean;
 }
 
-/** The handout the desktop menu asks for: A4, without the number-needed-to-treat sentences. */
-export const MENU_HANDOUT: HandoutChoices = { paper: 'a4', showNnt: false };
 
 export interface TopicExportsOptions {
   readonly editor: TopicEditor;
@@ -39,10 +37,10 @@ export class TopicExports {
     this.#options = options;
   }
 
-  /** The start of every exported file's name: the topic file's, without its ending. */
-  #baseName(): string {
+  /** The start of every exported file's name: the topic file's, without its ending, or the decision's words. */
+  #topicPart(): string {
     const { editor } = this.#options;
-    return suggestedFileName(editor.draft, editor.fileName).replace(/\.chancewise\.json$/, '');
+    return topicPart(editor.draft.title, editor.fileName);
   }
 
   /** Where a saved file went, when the app cannot say it itself (a browser's downloads). */
@@ -53,12 +51,12 @@ export class TopicExports {
   /** Save a chart; `showRange` keeps the outline of the people the interval leaves undecided. */
   async exportChart(model: ChartModel, format: 'svg' | 'png', showRange: boolean): Promise<void> {
     const { platform, document } = this.#options;
-    const base = this.#baseName();
+    const name = exportFileName(this.#topicPart(), model.outcomeName.trim() === '' ? model.id : model.outcomeName, format);
     try {
       const saved =
         format === 'svg'
-          ? await platform.saveFile(`${base}-${model.id}.svg`, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
-          : await platform.saveFile(`${base}-${model.id}.png`, await chartPngFile(model, document, { showRange }), 'image/png');
+          ? await platform.saveFile(name, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
+          : await platform.saveFile(name, await chartPngFile(model, document, { showRange }), 'image/png');
       if (saved !== null)
         this.#options.messages.show({ tone: 'info', text: `The chart is saved as “${saved}”.${this.#where()}` });
     } catch (error) {
@@ -67,8 +65,10 @@ export class TopicExports {
   }
 
   /** Make the handout of the results on screen and save it; nothing while they are out of date. */
-  async makeHandout(choices: HandoutChoices = MENU_HANDOUT): Promise<void> {
+  async makeHandout(given: HandoutChoices | null = null): Promise<void> {
     const { editor, platform, messages } = this.#options;
+    // The desktop menu's handout is made with the topic's own choices.
+    const choices = given ?? { paper: editor.draft.handout.paper, showNnt: editor.draft.handout.showNnt };
     const result = editor.shown;
     if (result === null || editor.stale) return;
     this.handoutBusy = true;
@@ -80,7 +80,7 @@ export class TopicExports {
         messages.show({ tone: 'error', text: made.message });
         return;
       }
-      const saved = await platform.saveHandout(`${this.#baseName()}-handout.pdf`, made.pdf);
+      const saved = await platform.saveHandout(exportFileName(this.#topicPart(), 'handout', 'pdf'), made.pdf);
       if (saved !== null)
         messages.show({ tone: 'info', text: `The handout is saved as “${saved}”.${this.#where()} Open it to print it.` });
     } catch (error) {

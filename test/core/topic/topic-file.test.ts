@@ -175,11 +175,11 @@ describe('reading a version 1 file', () => {
 describe('reading a file from a newer version', () => {
   it('refuses it and asks for an update', () => {
     const data = JSON.parse(fixture(DEMOS[0] ?? '')) as Record<string, unknown>;
-    data.version = 4;
+    data.version = 5;
     const found = refusal(JSON.stringify(data));
     expect(found).toMatchObject({ code: 'file-version-unsupported', field: 'version' });
     expect(found.message).toBe(
-      'This topic file was made by a newer Chancewise (file version 4; this one reads up to version 3). Update Chancewise to open it; the file has not been changed.',
+      'This topic file was made by a newer Chancewise (file version 5; this one reads up to version 4). Update Chancewise to open it; the file has not been changed.',
     );
   });
 });
@@ -240,9 +240,9 @@ const damagedFiles: readonly [string, string, string, string][] = [
   ['a long text shortened in the message', damaged((d) => { d.topic.options[0].isComparison = 'this is a very long piece of text indeed'; }), 'topic.options.0.isComparison', at('topic.options.0.isComparison', 'true or false', 'the text "this is a very long piece of t…"')],
   ['the topic given as a list', damaged((d) => { d.topic = []; }), 'topic', at('topic', 'a group of fields', 'a list')],
   ['no topic at all', damaged((d) => { delete d.topic; }), 'topic', at('topic', 'a group of fields', 'nothing')],
-  ['a version written as text', damaged((d) => { d.version = '2'; }), 'version', at('version', '2 or 3', 'the text "2"')],
-  ['a version of 0', damaged((d) => { d.version = 0; }), 'version', at('version', '2 or 3', 'the number 0')],
-  ['a missing version', damaged((d) => { delete d.version; }), 'version', at('version', '2 or 3', 'nothing')],
+  ['a version written as text', damaged((d) => { d.version = '2'; }), 'version', at('version', 'one of 2, 3 or 4', 'the text "2"')],
+  ['a version of 0', damaged((d) => { d.version = 0; }), 'version', at('version', 'one of 2, 3 or 4', 'the number 0')],
+  ['a missing version', damaged((d) => { delete d.version; }), 'version', at('version', 'one of 2, 3 or 4', 'nothing')],
   ['the wrong format', damaged((d) => { d.format = 'spreadsheet'; }), 'format', 'This file is not a Chancewise topic (its format is "spreadsheet").'],
   ['no format', damaged((d) => { delete d.format; }), 'format', NOT_A_TOPIC],
   ['a list instead of a topic file', '[1, 2]', 'format', NOT_A_TOPIC],

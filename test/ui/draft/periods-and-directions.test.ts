@@ -140,7 +140,7 @@ describe('saving and opening', () => {
     const saved = topicFileText(draft, false);
     if (!saved.ok) throw new Error(saved.message);
     const file = JSON.parse(saved.text) as { version: number; topic: { periodUnit: string; outcomes: { wanted: boolean; effects: { effect: { opposite: boolean } }[] }[] } };
-    expect(file.version).toBe(3);
+    expect(file.version).toBe(4);
     expect(file.topic.periodUnit).toBe('days');
     expect(file.topic.outcomes[0]?.wanted).toBe(true);
     expect(file.topic.outcomes[0]?.effects[0]?.effect.opposite).toBe(true);

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import { setEffectField, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
+import { setEffectField, setHandoutChoice, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { topicFromDraft } from '../../../src/ui/draft/topic-from-draft.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
@@ -64,5 +64,28 @@ describe('topicFromDraft', () => {
   test('gives the topic a patient only when a name or reference was typed', () => {
     expect(topicFromDraft(draft).topic.patient).toBeNull();
     expect(topicFromDraft({ ...draft, patientReference: 'A-12' }).topic.patient).toEqual({ name: '', reference: 'A-12' });
+  });
+});
+
+describe('the handout’s choices in a draft', () => {
+  const stone = DEMO_TOPICS[0];
+  if (stone === undefined) throw new Error('no demonstration topic');
+
+  test('a topic without stored choices gets the defaults, and none are written back', () => {
+    const draft = draftFromTopic(stone.topic);
+    expect(draft.handout).toEqual({ showNnt: false, per: null, outline: false, paper: 'a4' });
+    expect(topicFromDraft(draft).topic.handout).toBeUndefined();
+  });
+
+  test('changed choices go into the topic, and come back from it', () => {
+    const draft = setHandoutChoice(setHandoutChoice(draftFromTopic(stone.topic), 'paper', 'letter'), 'outline', true);
+    const topic = topicFromDraft(draft).topic;
+    expect(topic.handout).toEqual({ showNnt: false, per: null, outline: true, paper: 'letter' });
+    expect(draftFromTopic(topic).handout).toEqual(topic.handout);
+  });
+
+  test('setting a choice to what it already is changes nothing', () => {
+    const draft = draftFromTopic(stone.topic);
+    expect(setHandoutChoice(draft, 'showNnt', false)).toBe(draft);
   });
 });

@@ -66,16 +66,16 @@ describe('older topic files', () => {
     expect(rows(check.result)).toEqual(expected);
   });
 
-  test.each(CASES)('$file saved from the editor as version 3 gives identical results', ({ file }) => {
+  test.each(CASES)('$file saved from the editor as version 4 gives identical results', ({ file }) => {
     const original = readTopicFile(fixture(file));
     if (!original.ok) throw new Error('fixture does not read');
     const opened = openTopicText(file, fixture(file));
     if (!opened.ok) throw new Error(opened.message);
     const saved = topicFileText(opened.draft, false);
     if (!saved.ok) throw new Error(saved.message);
-    expect((JSON.parse(saved.text) as { version: number }).version).toBe(3);
-    // Nothing of version 3 is written for a topic that uses none of it.
-    expect(saved.text).not.toMatch(/"wanted"|"periodUnit"|"followUpUnit"|"opposite"/);
+    expect((JSON.parse(saved.text) as { version: number }).version).toBe(4);
+    // Nothing of versions 3 and 4 is written for a topic that uses none of it.
+    expect(saved.text).not.toMatch(/"wanted"|"periodUnit"|"followUpUnit"|"opposite"|"handout"/);
     const again = readTopicFile(saved.text);
     if (!again.ok) throw new Error('saved file does not read');
     expect(computeTopic(again.topic)).toEqual(computeTopic(original.topic));

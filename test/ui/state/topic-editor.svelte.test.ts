@@ -115,6 +115,17 @@ describe('TopicEditor', () => {
     expect(saved?.savedAt).toBe('2026-11-03T09:30:00.000Z');
   });
 
+  test('the chosen number of people is kept with the topic, as an unsaved change that undo takes back', () => {
+    const { editor } = setUp();
+    editor.setPer(1000);
+    expect(editor.draft.handout.per).toBe(1000);
+    expect(editor.per).toBe(1000);
+    expect(editor.hasUnsavedChanges).toBe(true);
+    editor.undo();
+    expect(editor.per).toBeNull();
+    expect(editor.shown?.denominator).toBe(100);
+  });
+
   test('switches between 100 and 1000 people, also for out-of-date results', () => {
     const { editor, type } = setUp();
     editor.setPer(1000);

@@ -1,13 +1,13 @@
 // @vitest-environment jsdom
 import { describe, expect, it } from 'vitest';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
-import { setTopicText } from '../../../src/ui/draft/draft-edits.ts';
+import { setHandoutChoice, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import type { HandoutMaker, HandoutRequest } from '../../../src/ui/handout/handout-builder.ts';
 import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
-import { MENU_HANDOUT, TopicExports } from '../../../src/ui/state/topic-exports.svelte.ts';
+import { TopicExports } from '../../../src/ui/state/topic-exports.svelte.ts';
 import { fakePlatform } from './fake-platform.ts';
 
 // A PDF file starts with "%PDF-" (ISO 32000-1:2008, 7.5.2); SVG is served as image/svg+xml
@@ -48,18 +48,20 @@ describe('TopicExports', () => {
     expect(requests).toHaveLength(1);
     expect(requests[0]).toMatchObject({ paper: 'letter', showNnt: true, date: '2026-11-03' });
     expect(requests[0]?.result).toBe(topic.editor.shown);
-    expect(platform.savedHandouts.map((saved) => saved.name)).toEqual(['ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf']);
+    expect(platform.savedHandouts.map((saved) => saved.name)).toEqual(['ways-to-cut-the-chance-of-a-second-handout.pdf']);
     expect(platform.savedHandouts[0]?.pdf).toBe(PDF_BYTES);
     expect(messages.message?.text).toBe(
-      'The handout is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf”. Open it to print it.',
+      'The handout is saved as “ways-to-cut-the-chance-of-a-second-handout.pdf”. Open it to print it.',
     );
   });
 
-  it('makes the menu’s handout on A4 without the number needed to treat', async () => {
-    const { exports, requests } = setUp();
+  it('makes the menu’s handout with the topic’s own choices: A4 without the NNT unless the topic says otherwise', async () => {
+    const { exports, requests, topic } = setUp();
     await exports.makeHandout();
-    expect(MENU_HANDOUT).toEqual({ paper: 'a4', showNnt: false });
     expect(requests[0]).toMatchObject({ paper: 'a4', showNnt: false });
+    topic.editor.change((draft) => setHandoutChoice(setHandoutChoice(draft, 'paper', 'letter'), 'showNnt', true));
+    await exports.makeHandout();
+    expect(requests[1]).toMatchObject({ paper: 'letter', showNnt: true });
   });
 
   it('makes nothing from results that are out of date', async () => {
@@ -88,11 +90,11 @@ describe('TopicExports', () => {
     const model = outcomeChart(shown, 'stone');
     await exports.exportChart(model, 'svg', false);
     expect(platform.savedFiles).toHaveLength(1);
-    expect(platform.savedFiles[0]?.name).toBe(`ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg`);
+    expect(platform.savedFiles[0]?.name).toBe('ways-to-cut-the-chance-of-a-second-another-kidney-stone.svg');
     expect(platform.savedFiles[0]?.type).toBe('image/svg+xml');
     expect(messages.message).toEqual({
       tone: 'info',
-      text: `The chart is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg”.`,
+      text: `The chart is saved as “ways-to-cut-the-chance-of-a-second-another-kidney-stone.svg”.`,
     });
     expect(String(platform.savedFiles[0]?.contents)).toMatch(
       /^<\?xml version="1\.0" encoding="UTF-8"\?>\s*<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/,
