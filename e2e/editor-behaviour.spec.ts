@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import AxeBuilder from '@axe-core/playwright';
 import type { Page } from '@playwright/test';
 import { SCREENS, expect, openApp, test } from './fixtures.ts';
 
@@ -255,5 +256,65 @@ test.describe('exports named for what they are', () => {
     const saved = JSON.parse(readFileSync(await download.path(), 'utf8')) as { version: number; topic: { handout: unknown } };
     expect(saved.version).toBe(4);
     expect(saved.topic.handout).toEqual({ showNnt: true, per: 1000, outline: true, paper: 'letter' });
+  });
+});
+
+test.describe('narrow windows', () => {
+  test('at 800 × 900 the headline results stay in view while typing a baseline, and the header stays reachable', async ({
+    page,
+  }) => {
+    await page.setViewportSize({ width: 800, height: 900 });
+    await openApp(page);
+    const summary = page.getByRole('group', { name: 'Headline results' });
+    await expect(summary).toBeVisible();
+    const baseline = page.getByLabel('Baseline risk', { exact: true }).first();
+    await baseline.scrollIntoViewIfNeeded();
+    await baseline.fill('20%');
+    await expect(baseline).toBeFocused();
+    // 20% without an option; × RR 0.6 = 12% and × RR 0.45 = 9% with the two options (plain arithmetic).
+    await expect(summary.locator('[data-option-id="as-now"] strong')).toHaveText('20');
+    await expect(summary.locator('[data-option-id="water"] strong')).toHaveText('12');
+    await expect(summary.locator('[data-option-id="citrate"] strong')).toHaveText('9');
+    const box = await summary.boundingBox();
+    const field = await baseline.boundingBox();
+    if (box === null || field === null) throw new Error('the summary or the field is not on screen');
+    expect(box.y).toBeGreaterThanOrEqual(0);
+    expect(box.y + box.height).toBeLessThanOrEqual(900);
+    // The field being typed in is not under the pinned header.
+    expect(field.y).toBeGreaterThanOrEqual(box.y + box.height);
+    // The header (Save, Undo) is still on screen after scrolling down.
+    await expect(page.getByRole('button', { name: 'Undo', exact: true })).toBeInViewport();
+    await page.screenshot({ path: `${SCREENS}/editor-800-typing.png` });
+
+    // An out-of-date entry says so in the summary too.
+    await baseline.fill('20%%');
+    await expect(summary).toContainText('Out of date');
+    await summary.getByRole('link', { name: 'All results' }).click();
+    await expect(page.getByRole('heading', { name: 'Results', exact: true })).toBeFocused();
+  });
+
+  test('has no serious or critical axe findings at 800 × 900', async ({ page }) => {
+    test.setTimeout(180_000);
+    await page.setViewportSize({ width: 800, height: 900 });
+    await openApp(page);
+    const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
+    const serious = results.violations
+      .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
+      .map(
+        (violation) =>
+          `${violation.id}: ${violation.nodes
+            .map((node) => node.target.join(' '))
+            .slice(0, 3)
+            .join('; ')}`,
+      );
+    expect(serious).toEqual([]);
+    await page.screenshot({ path: `${SCREENS}/editor-800-start.png` });
+  });
+
+  test('screens at 1440 × 900 for a person to look at', async ({ page }) => {
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await openApp(page);
+    await expect(page.getByRole('group', { name: 'Headline results' })).toBeHidden();
+    await page.screenshot({ path: `${SCREENS}/editor-1440-start.png` });
   });
 });
