@@ -318,3 +318,27 @@ test.describe('narrow windows', () => {
     await page.screenshot({ path: `${SCREENS}/editor-1440-start.png` });
   });
 });
+
+test.describe('printing the handout in the browser', () => {
+  test('opens the handout’s PDF in a new tab, where the browser prints it, with the page’s policy unchanged', async ({
+    page,
+    context,
+  }) => {
+    await openApp(page);
+    const policy = await page.evaluate(async () => (await fetch('/')).headers.get('content-security-policy'));
+    const [tab] = await Promise.all([
+      context.waitForEvent('page'),
+      page.getByRole('region', { name: 'Handout for the patient' }).getByRole('button', { name: 'Print the handout…' }).click(),
+    ]);
+    await tab.waitForURL(/^blob:/);
+    // The tab shows the handout itself, as a PDF document in the browser's viewer.
+    expect(await tab.evaluate(() => document.contentType)).toBe('application/pdf');
+    // The handout's tab cannot reach back into the app.
+    expect(await tab.evaluate(() => window.opener)).toBeNull();
+    await expect(page.locator('.toast')).toHaveText(
+      /The handout “ways-to-cut-the-chance-of-a-second-handout\.pdf” is open in a new tab: print it from there \(Ctrl\+P\)\./,
+    );
+    expect(await page.evaluate(async () => (await fetch('/')).headers.get('content-security-policy'))).toBe(policy);
+    await tab.close();
+  });
+});

@@ -101,9 +101,10 @@ export interface ExportedHandout {
   readonly fileName: string;
 }
 
-/** Whether the print dialog ended in printing. */
+/** The handout opened in the system's PDF viewer for printing. */
 export interface PrintOutcome {
-  readonly printed: boolean;
+  /** The name of the file the viewer was opened on. */
+  readonly fileName: string;
 }
 
 /** A document the shell hands the renderer without being asked for it right then. */
@@ -146,10 +147,10 @@ export interface ChancewiseShellApi {
   /** Save the handout PDF where the person chooses; null when cancelled. */
   exportHandoutPdf(request: HandoutPdfRequest): Promise<ShellResult<ExportedHandout | null>>;
   /**
-   * Open the system print dialog for the page as it is now, backgrounds included. The page
-   * does not call it at present: it answers the menu's `print-handout` command itself.
+   * Print the handout: the shell writes the PDF to a private folder and opens it in the
+   * system's PDF viewer, whose Print prints the handout itself (not the app's window).
    */
-  printHandout(): Promise<ShellResult<PrintOutcome>>;
+  printHandout(request: HandoutPdfRequest): Promise<ShellResult<PrintOutcome>>;
   /** Listen to menu commands; returns the function that stops listening. */
   onCommand(listener: (command: ShellCommand) => void): () => void;
   /** Listen to documents the shell hands over; returns the function that stops listening. */

@@ -1,9 +1,9 @@
 import path from 'node:path';
-import { app, Menu } from 'electron';
+import { app, Menu, shell } from 'electron';
 import type { WebContents } from 'electron';
 import { buildMenuTemplate } from './application-menu.ts';
 import { createDocumentSession } from './document/document-session.ts';
-import { exportHandoutPdf, printHandout } from './document/handout-output.ts';
+import { exportHandoutPdf, openHandoutForPrinting } from './document/handout-output.ts';
 import { loadRecentFiles } from './document/recent-files-store.ts';
 import type { ShellActions } from './ipc/ipc-handlers.ts';
 import { createPendingWork } from './pending-work.ts';
@@ -100,7 +100,7 @@ export async function startShellController(settings: ShellControllerSettings): P
     saveDocumentAs: (_sender, text) => session.saveDocumentAs(text),
     saveSnapshot: (_sender, snapshot) => session.saveSnapshot(snapshot),
     exportHandoutPdf: (_sender, request) => exportHandoutPdf(request, dialogs, app.getPath('documents')),
-    printHandout: (sender) => printHandout(sender),
+    printHandout: (_sender, request) => openHandoutForPrinting(request, shell, path.join(app.getPath('temp'), 'chancewise-print')),
   };
 
   rebuildMenu();

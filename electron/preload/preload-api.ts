@@ -57,7 +57,7 @@ export function createShellApi(ipc: IpcRendererLike): ChancewiseShellApi {
     saveDocumentAs: (text) => invoke(INVOKE_CHANNELS.saveDocumentAs, text),
     saveSnapshot: (snapshot) => invoke(INVOKE_CHANNELS.saveSnapshot, snapshot),
     exportHandoutPdf: (request) => invoke(INVOKE_CHANNELS.exportHandoutPdf, request),
-    printHandout: () => invoke(INVOKE_CHANNELS.printHandout),
+    printHandout: (request) => invoke(INVOKE_CHANNELS.printHandout, request),
     onCommand: (listener) => subscribe(COMMAND_CHANNEL, isShellCommand, listener),
     onDocument: (listener) => subscribe(DOCUMENT_CHANNEL, isIncomingDocument, listener),
   };

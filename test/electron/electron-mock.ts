@@ -104,7 +104,7 @@ export const app = {
 
 export const protocol = { registerSchemesAsPrivileged: vi.fn(), handle: vi.fn() };
 export const ipcMain = { handle: vi.fn() };
-export const shell = { openExternal: vi.fn(async () => undefined) };
+export const shell = { openExternal: vi.fn(async () => undefined), openPath: vi.fn(async (_path: string) => '') };
 export const session = { defaultSession: {} };
 
 export const dialog = {

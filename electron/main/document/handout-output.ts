@@ -1,3 +1,4 @@
+import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import type { ExportedHandout, HandoutPdfRequest, PrintOutcome } from '../../contract/ipc-contract.ts';
 import { writeFileAtomic } from '../files/atomic-write.ts';
@@ -28,18 +29,31 @@ export async function exportHandoutPdf(
   return { fileName: path.basename(target) };
 }
 
-/** The part of Electron's `WebContents` that prints. */
-export interface PrintableContents {
-  print(options: { printBackground: boolean }, callback: (success: boolean, failureReason: string) => void): void;
+/** The part of Electron's `shell` that opens a file in the application the system chose for it. */
+export interface PathOpener {
+  /** Resolves to "" when the file was opened, else to the reason it was not. */
+  openPath(path: string): Promise<string>;
 }
 
-/** Print the page through the system dialog; a cancelled dialog is not a failure. */
-export function printHandout(contents: PrintableContents): Promise<PrintOutcome> {
-  return new Promise((resolve, reject) => {
-    contents.print({ printBackground: true }, (success, failureReason) => {
-      if (success) resolve({ printed: true });
-      else if (failureReason === 'cancelled' || failureReason === 'Print job canceled') resolve({ printed: false });
-      else reject(new ShellFailure('print-failed', failureReason));
-    });
-  });
+/**
+ * Print the handout by opening its PDF in the system's PDF viewer, where Print is one step
+ * away and prints the page exactly as made. Why not the print dialog: `webContents.print()`
+ * prints the window it belongs to (the app, not the handout), and a hidden window showing the
+ * PDF would need Chromium's PDF viewer plugin (`webPreferences.plugins`, off by default), whose
+ * inner frame `print()` does not print reliably (from memory of Electron's issue tracker). The
+ * file goes to `folder` (made private, 0700) under the handout's own name, replacing an earlier
+ * copy, so the viewer's title names the handout.
+ */
+export async function openHandoutForPrinting(request: HandoutPdfRequest, opener: PathOpener, folder: string): Promise<PrintOutcome> {
+  const fileName = handoutFileName(path.basename(request.suggestedName));
+  const target = path.join(folder, fileName);
+  try {
+    await mkdir(folder, { recursive: true, mode: 0o700 });
+    await writeFileAtomic(target, request.bytes);
+  } catch (error) {
+    throw new ShellFailure('write-failed', error instanceof Error ? error.message : undefined);
+  }
+  const refusal = await opener.openPath(target);
+  if (refusal !== '') throw new ShellFailure('print-failed', refusal);
+  return { fileName };
 }

@@ -37,7 +37,7 @@ export interface ShellActions<Sender> {
   saveDocumentAs(sender: Sender, text: string): Promise<SavedDocument | null>;
   saveSnapshot(sender: Sender, snapshot: SnapshotRequest): Promise<SnapshotSaved>;
   exportHandoutPdf(sender: Sender, request: HandoutPdfRequest): Promise<ExportedHandout | null>;
-  printHandout(sender: Sender): Promise<PrintOutcome>;
+  printHandout(sender: Sender, request: HandoutPdfRequest): Promise<PrintOutcome>;
 }
 
 /** The part of Electron's `ipcMain` used: `handle` only (every channel is request and reply). */
@@ -119,5 +119,5 @@ export function registerIpcHandlers<Sender>(ipcMain: IpcMainLike, settings: IpcH
   register(INVOKE_CHANNELS.saveDocumentAs, checkDocumentText, (sender, text) => actions.saveDocumentAs(sender, text));
   register(INVOKE_CHANNELS.saveSnapshot, checkSnapshotRequest, (sender, snapshot) => actions.saveSnapshot(sender, snapshot));
   register(INVOKE_CHANNELS.exportHandoutPdf, checkHandoutPdfRequest, (sender, request) => actions.exportHandoutPdf(sender, request));
-  register(INVOKE_CHANNELS.printHandout, checkNoArguments, (sender) => actions.printHandout(sender));
+  register(INVOKE_CHANNELS.printHandout, checkHandoutPdfRequest, (sender, request) => actions.printHandout(sender, request));
 }

@@ -5,6 +5,8 @@
 import { PICKED_FILE_MAX_BYTES, pickedFileTooLargeMessage } from '../../shared/picked-file-limit.ts';
 import { browserStorage } from '../state/key-value-storage.ts';
 import type { OpenedFile, Platform } from './platform.ts';
+import { printInNewTab } from './print-in-tab.ts';
+import type { TabOpener } from './print-in-tab.ts';
 
 /**
  * Ask for a file with a file input; null when cancelled. A file over the size limit is
@@ -65,6 +67,7 @@ export function browserPlatform(): Platform {
     pickTextFile,
     saveFile: async (suggestedName, contents, type) => download(suggestedName, contents, type),
     saveHandout: async (suggestedName, pdf) => download(suggestedName, pdf, 'application/pdf'),
+    printHandout: async (suggestedName, make) => ((await printInNewTab(make, window as unknown as TabOpener)) ? suggestedName : null),
     topicReplaced: () => undefined,
     snapshot: () => undefined,
     connect: () => undefined,

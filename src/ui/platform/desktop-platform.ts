@@ -31,6 +31,10 @@ export function desktopPlatform(shell: ChancewiseShellApi): Platform {
     pickTextFile,
     saveFile: async (suggestedName, contents, type) => download(suggestedName, contents, type),
     saveHandout: async (suggestedName, pdf) => (await value(shell.exportHandoutPdf({ bytes: pdf, suggestedName })))?.fileName ?? null,
+    printHandout: async (suggestedName, make) => {
+      const pdf = await make();
+      return pdf === null ? null : (await value(shell.printHandout({ bytes: pdf, suggestedName }))).fileName;
+    },
     topicReplaced: () => void shell.newDocument(),
     snapshot: (content, hasUnsavedChanges) => void shell.saveSnapshot({ content, keepPatient: false, hasUnsavedChanges }),
     connect: (events) => {

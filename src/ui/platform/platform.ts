@@ -42,6 +42,11 @@ export interface Platform {
   saveFile(suggestedName: string, contents: string | Uint8Array, type: string): Promise<string | null>;
   /** Save the handout PDF; returns the name used, or null when cancelled. */
   saveHandout(suggestedName: string, pdf: Uint8Array): Promise<string | null>;
+  /**
+   * Print the handout `make` gives (called once; null: nothing to print): the desktop opens it
+   * in the system's PDF viewer, a browser in a new tab. Returns the name shown, or null.
+   */
+  printHandout(suggestedName: string, make: () => Promise<Uint8Array | null>): Promise<string | null>;
   /** The editor now holds a new, unsaved topic (the desktop shell forgets its current file). */
   topicReplaced(): void;
   /** Keep a crash-recovery copy of the draft (the desktop shell; the browser keeps its own autosave). */

@@ -68,7 +68,7 @@ export class AppSession {
     else if (command.name === 'open') void this.topic.openFile();
     else if (command.name === 'save' || command.name === 'save-as') this.saving.request(command.name);
     else if (command.name === 'export-handout') void this.exports.makeHandout();
-    else this.messages.show({ tone: 'info', text: 'Make the handout (PDF) in the results, then print it from your PDF reader.' });
+    else void this.exports.printHandout();
   }
 
   /** The window is closing: keep the work, and say whether there is unsaved work to warn about. */

@@ -64,23 +64,58 @@ export class TopicExports {
     }
   }
 
+  /** The handout's PDF of the results on screen, or null (with a message) when it cannot be made. */
+  async #make(choices: HandoutChoices): Promise<Uint8Array | null> {
+    const { editor, messages } = this.#options;
+    const result = editor.shown;
+    if (result === null) return null;
+    const maker = await (this.#options.loadMaker ?? loadHandoutMaker)();
+    const today = this.#options.today?.() ?? new Date();
+    const made = await maker.makeHandout({ topic: editor.check.topic, result, date: localDate(today), ...choices });
+    if (made.ok) return made.pdf;
+    messages.show({ tone: 'error', text: made.message });
+    return null;
+  }
+
+  /** The topic's own handout choices (the desktop menu's handout and printing use them). */
+  #choices(): HandoutChoices {
+    const { handout } = this.#options.editor.draft;
+    return { paper: handout.paper, showNnt: handout.showNnt };
+  }
+
+  /** Print the handout of the results on screen: in the system's PDF viewer, or a browser's new tab. */
+  async printHandout(): Promise<void> {
+    const { editor, platform, messages } = this.#options;
+    if (editor.shown === null || editor.stale) {
+      messages.show({ tone: 'error', text: 'Fix the marked fields first: the handout is only made from up-to-date results.' });
+      return;
+    }
+    this.handoutBusy = true;
+    try {
+      // Called at once, so a browser can open the handout's tab while the click still counts.
+      const name = exportFileName(this.#topicPart(), 'handout', 'pdf');
+      const shown = await platform.printHandout(name, () => this.#make(this.#choices()));
+      if (shown !== null) {
+        const where = platform.kind === 'browser' ? 'in a new tab: print it from there (Ctrl+P)' : 'in your PDF viewer: print it from there';
+        messages.show({ tone: 'info', text: `The handout “${shown}” is open ${where}.` });
+      }
+    } catch (error) {
+      // The shell's and the browser's refusals say what failed and what to do in their own words.
+      messages.fail('', error, '');
+    } finally {
+      this.handoutBusy = false;
+    }
+  }
+
   /** Make the handout of the results on screen and save it; nothing while they are out of date. */
   async makeHandout(given: HandoutChoices | null = null): Promise<void> {
     const { editor, platform, messages } = this.#options;
-    // The desktop menu's handout is made with the topic's own choices.
-    const choices = given ?? { paper: editor.draft.handout.paper, showNnt: editor.draft.handout.showNnt };
-    const result = editor.shown;
-    if (result === null || editor.stale) return;
+    if (editor.shown === null || editor.stale) return;
     this.handoutBusy = true;
     try {
-      const maker = await (this.#options.loadMaker ?? loadHandoutMaker)();
-      const today = this.#options.today?.() ?? new Date();
-      const made = await maker.makeHandout({ topic: editor.check.topic, result, date: localDate(today), ...choices });
-      if (!made.ok) {
-        messages.show({ tone: 'error', text: made.message });
-        return;
-      }
-      const saved = await platform.saveHandout(exportFileName(this.#topicPart(), 'handout', 'pdf'), made.pdf);
+      const pdf = await this.#make(given ?? this.#choices());
+      if (pdf === null) return;
+      const saved = await platform.saveHandout(exportFileName(this.#topicPart(), 'handout', 'pdf'), pdf);
       if (saved !== null)
         messages.show({ tone: 'info', text: `The handout is saved as “${saved}”.${this.#where()} Open it to print it.` });
     } catch (error) {

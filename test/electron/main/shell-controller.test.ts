@@ -7,7 +7,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DOCUMENT_CHANNEL, COMMAND_CHANNEL } from '../../../electron/contract/ipc-contract.ts';
 import { loadSnapshotKey } from '../../../electron/main/snapshot/snapshot-key.ts';
 import { createSnapshotText } from '../../../electron/main/snapshot/snapshot-record.ts';
-import { dialog, FakeBrowserWindow, resetElectronMock } from '../electron-mock.ts';
+import { app, dialog, FakeBrowserWindow, resetElectronMock, shell } from '../electron-mock.ts';
 
 vi.mock('electron', () => import('../electron-mock.ts'));
 
@@ -187,13 +187,16 @@ describe('startShellController()', () => {
     await vi.waitFor(() => expect(window.webContents.sent.map(([channel]) => channel)).toEqual([DOCUMENT_CHANNEL]));
   });
 
-  it('prints the page through the system dialog', async () => {
+  it('prints the handout itself: its PDF is opened in the system’s viewer from a private folder of the temporary files, never the app’s window', async () => {
     const { controller, window, contents } = await start();
-    expect(await controller.actions.printHandout(contents)).toEqual({ printed: true });
-    expect(window.webContents.print).toHaveBeenCalledOnce();
-    window.webContents.print.mockImplementationOnce((_options, callback) => callback(false, 'cancelled'));
-    expect(await controller.actions.printHandout(contents)).toEqual({ printed: false });
-    window.webContents.print.mockImplementationOnce((_options, callback) => callback(false, 'failed'));
-    await expect(controller.actions.printHandout(contents)).rejects.toMatchObject({ code: 'print-failed' });
+    app.getPath.mockImplementation((name: string) => (name === 'temp' ? base : `/fake/${name}`));
+    const bytes = new TextEncoder().encode('%PDF-1.7\n');
+    expect(await controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).toEqual({ fileName: 'heart-handout.pdf' });
+    const target = path.join(base, 'chancewise-print', 'heart-handout.pdf');
+    expect(shell.openPath).toHaveBeenCalledWith(target);
+    expect(new Uint8Array(await fs.readFile(target))).toEqual(bytes);
+    expect(window.webContents.print).not.toHaveBeenCalled();
+    shell.openPath.mockResolvedValueOnce('no viewer');
+    await expect(controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).rejects.toMatchObject({ code: 'print-failed' });    app.getPath.mockImplementation((name: string) => `/fake/${name}`);
   });
 });

@@ -51,12 +51,13 @@ describe('createShellApi()', () => {
     const api = createShellApi(ipc);
     await api.saveDocument('text');
     await api.openRecentDocument('/h/t.cwtopic');
-    await api.printHandout();
+    const handout = { bytes: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d]), suggestedName: 'h.pdf' };
+    await api.printHandout(handout);
     await api.saveSnapshot({ content: { a: 1 }, keepPatient: false, hasUnsavedChanges: true });
     expect(vi.mocked(ipc.invoke).mock.calls).toEqual([
       [INVOKE_CHANNELS.saveDocument, 'text'],
       [INVOKE_CHANNELS.openRecentDocument, '/h/t.cwtopic'],
-      [INVOKE_CHANNELS.printHandout],
+      [INVOKE_CHANNELS.printHandout, handout],
       [INVOKE_CHANNELS.saveSnapshot, { content: { a: 1 }, keepPatient: false, hasUnsavedChanges: true }],
     ]);
   });

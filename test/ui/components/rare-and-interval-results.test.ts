@@ -75,7 +75,7 @@ describe('the results of a rare outcome', () => {
   });
 
   test('say that the words count per more people than the pictures show', () => {
-    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(RARE)), onexport: noop, onhandout: noop, handoutBusy: false } });
+    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(RARE)), onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
     const basis = document.querySelector('.basis')?.textContent?.replace(/\s+/g, ' ').trim();
     expect(basis).toBe(
       'The pictures show 1000 people like this, over 1 year; the tables and words count per 10,000, because out of 1000 a difference would show as no one. Headline first.',
@@ -95,7 +95,7 @@ describe('a topic with 90% intervals', () => {
     results(NINETY);
     expect(screen.getByRole('row', { name: /the tablet/ }).textContent).toContain('ranges: 90% interval');
     cleanup();
-    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(NINETY)), onexport: noop, onhandout: noop, handoutBusy: false } });
+    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(NINETY)), onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
     expect(document.querySelector('.footnote')?.textContent).toContain('Ranges are 90% intervals for the effect');
   });
 });
@@ -127,7 +127,7 @@ describe('an interval whose limits are the wrong way round', () => {
     const editor = new TopicEditor(draftFromTopic(RARE));
     editor.load(opened.draft, { fileName: opened.fileName, saved: true });
     render(EditorPanel, { props: { editor } });
-    render(ResultsPanel, { props: { editor, onexport: noop, onhandout: noop, handoutBusy: false } });
+    render(ResultsPanel, { props: { editor, onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
     expect(limits('95%').map((box) => [box.value, box.getAttribute('aria-invalid')])).toEqual([
       ['0.9', 'true'],
       ['0.7', 'true'],

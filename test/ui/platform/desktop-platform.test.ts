@@ -18,7 +18,7 @@ function fakeShell(overrides: Partial<ChancewiseShellApi> = {}) {
     saveDocumentAs: (text) => (calls.push(['saveDocumentAs', text]), ok(null)),
     saveSnapshot: (snapshot) => (calls.push(['saveSnapshot', snapshot]), ok({ savedAt: 1 })),
     exportHandoutPdf: (request) => (calls.push(['exportHandoutPdf', request.suggestedName]), ok({ fileName: 'h.pdf' })),
-    printHandout: () => ok({ printed: false }),
+    printHandout: (request) => (calls.push(['printHandout', request.suggestedName]), ok({ fileName: request.suggestedName })),
     onCommand: (listener) => ((commandListener = listener), () => undefined),
     onDocument: (listener) => ((documentListener = listener), () => undefined),
     ...overrides,
@@ -27,6 +27,14 @@ function fakeShell(overrides: Partial<ChancewiseShellApi> = {}) {
 }
 
 describe('desktopPlatform', () => {
+  test('prints the handout by sending its PDF to the shell, which opens it in the system’s viewer', async () => {
+    const { shell, calls } = fakeShell();
+    const platform = desktopPlatform(shell);
+    expect(await platform.printHandout('topic-handout.pdf', async () => new Uint8Array([37, 80, 68, 70, 45]))).toBe('topic-handout.pdf');
+    expect(await platform.printHandout('nothing.pdf', async () => null)).toBeNull();
+    expect(calls).toEqual([['printHandout', 'topic-handout.pdf']]);
+  });
+
   test('opens and saves through the shell, which names the files itself', async () => {
     const { shell, calls } = fakeShell();
     const platform = desktopPlatform(shell);

@@ -49,8 +49,11 @@ describe('AppSession', () => {
     platform.send({ name: 'export-handout' });
     await settle();
     expect(made).toEqual(['a4']);
+    // The menu's Print Handout prints the handout itself, with the topic's choices.
     platform.send({ name: 'print-handout' });
-    expect(app.messages.message?.text).toBe('Make the handout (PDF) in the results, then print it from your PDF reader.');
+    await settle();
+    expect(made).toEqual(['a4', 'a4']);
+    expect(platform.printedHandouts.map((printed) => printed.name)).toEqual(['screening-handout.pdf']);
   });
 
   it('opens a file the shell hands over', () => {

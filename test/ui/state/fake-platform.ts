@@ -10,6 +10,8 @@ export interface FakePlatform extends Platform {
   readonly savedTopics: { readonly text: string; readonly name: string; readonly mode: 'save' | 'save-as' }[];
   readonly savedFiles: { readonly name: string; readonly contents: string | Uint8Array; readonly type: string }[];
   readonly savedHandouts: { readonly name: string; readonly pdf: Uint8Array }[];
+  /** Handouts sent to print, by name. */
+  readonly printedHandouts: { readonly name: string; readonly pdf: Uint8Array }[];
   readonly recentPathsOpened: string[];
   replaced: number;
   /** Send a menu command or a document as the desktop shell would. */
@@ -31,6 +33,7 @@ export function fakePlatform(kind: 'browser' | 'desktop' = 'browser', storage = 
     savedTopics: [],
     savedFiles: [],
     savedHandouts: [],
+    printedHandouts: [],
     recentPathsOpened: [],
     replaced: 0,
     openTopicFile: () => answer(platform.picked),
@@ -49,6 +52,12 @@ export function fakePlatform(kind: 'browser' | 'desktop' = 'browser', storage = 
     },
     saveHandout: (name, pdf) => {
       platform.savedHandouts.push({ name, pdf });
+      return answer(platform.saveAnswer(name));
+    },
+    printHandout: async (name, make) => {
+      const pdf = await make();
+      if (pdf === null) return null;
+      platform.printedHandouts.push({ name, pdf });
       return answer(platform.saveAnswer(name));
     },
     topicReplaced: () => {

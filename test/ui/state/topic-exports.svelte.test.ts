@@ -64,6 +64,35 @@ describe('TopicExports', () => {
     expect(requests[1]).toMatchObject({ paper: 'letter', showNnt: true });
   });
 
+  it('prints the handout with the topic’s choices and says where it is open, by file name', async () => {
+    const { exports, platform, messages, requests } = setUp();
+    await exports.printHandout();
+    expect(requests[0]).toMatchObject({ paper: 'a4', showNnt: false });
+    expect(platform.printedHandouts.map((printed) => printed.name)).toEqual(['ways-to-cut-the-chance-of-a-second-handout.pdf']);
+    expect(platform.printedHandouts[0]?.pdf).toBe(PDF_BYTES);
+    expect(messages.message).toEqual({
+      tone: 'info',
+      text: 'The handout “ways-to-cut-the-chance-of-a-second-handout.pdf” is open in your PDF viewer: print it from there.',
+    });
+    expect(exports.handoutBusy).toBe(false);
+  });
+
+  it('prints nothing from out-of-date results, and says why', async () => {
+    const { exports, topic, platform, messages, loads } = setUp();
+    topic.editor.change((draft) => setTopicText(draft, 'periodYears', 'ten'), 'periodYears');
+    await exports.printHandout();
+    expect(loads()).toBe(0);
+    expect(platform.printedHandouts).toHaveLength(0);
+    expect(messages.message).toEqual({ tone: 'error', text: 'Fix the marked fields first: the handout is only made from up-to-date results.' });
+  });
+
+  it('says when the handout could not be printed, in the shell’s own words', async () => {
+    const { exports, platform, messages } = setUp();
+    platform.saveAnswer = () => new Error('The handout could not be printed. (no viewer)');
+    await exports.printHandout();
+    expect(messages.message).toEqual({ tone: 'error', text: 'The handout could not be printed. (no viewer)' });
+  });
+
   it('makes nothing from results that are out of date', async () => {
     const { exports, topic, loads } = setUp();
     topic.editor.change((draft) => setTopicText(draft, 'periodYears', 'ten'), 'periodYears');

@@ -3,8 +3,8 @@ import fs from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { exportHandoutPdf, handoutFileName, printHandout } from '../../../../electron/main/document/handout-output.ts';
-import type { PrintableContents } from '../../../../electron/main/document/handout-output.ts';
+import { exportHandoutPdf, handoutFileName, openHandoutForPrinting } from '../../../../electron/main/document/handout-output.ts';
+import { shell } from '../../electron-mock.ts';
 
 let base: string;
 
@@ -51,27 +51,55 @@ describe('exportHandoutPdf()', () => {
   });
 });
 
-describe('printHandout()', () => {
-  const contentsAnswering = (success: boolean, failureReason: string): PrintableContents & { print: ReturnType<typeof vi.fn> } => ({
-    print: vi.fn((_options: { printBackground: boolean }, callback: (success: boolean, failureReason: string) => void) => {
-      callback(success, failureReason);
-    }),
+describe('openHandoutForPrinting(), with electron mocked', () => {
+  beforeEach(() => {
+    shell.openPath.mockReset();
   });
 
-  it('prints with backgrounds (the icon arrays are filled shapes)', async () => {
-    const contents = contentsAnswering(true, '');
-    expect(await printHandout(contents)).toEqual({ printed: true });
-    expect(contents.print).toHaveBeenCalledWith({ printBackground: true }, expect.any(Function));
+  it('writes the handout under its own name in a private folder and opens it in the system’s PDF viewer', async () => {
+    shell.openPath.mockResolvedValue('');
+    const folder = path.join(base, 'chancewise-print');
+    const outcome = await openHandoutForPrinting({ suggestedName: 'heart-handout.pdf', bytes: pdfBytes }, shell, folder);
+    const target = path.join(folder, 'heart-handout.pdf');
+    expect(outcome).toEqual({ fileName: 'heart-handout.pdf' });
+    expect(shell.openPath).toHaveBeenCalledWith(target);
+    expect(new Uint8Array(await fs.readFile(target))).toEqual(pdfBytes);
+    // Owner only: rwx------ (POSIX permission bits, common practice for private temporary folders).
+    if (process.platform !== 'win32') expect((await fs.stat(folder)).mode & 0o777).toBe(0o700);
   });
 
-  it('treats a cancelled print dialog as nothing printed, not as a failure', async () => {
-    // Electron's webContents.print() reports a cancelled dialog as 'cancelled'; 'Print job canceled'
-    // is the wording some Electron versions used (from memory).
-    expect(await printHandout(contentsAnswering(false, 'cancelled'))).toEqual({ printed: false });
-    expect(await printHandout(contentsAnswering(false, 'Print job canceled'))).toEqual({ printed: false });
+  it('replaces an earlier copy, so printing twice opens the newest handout', async () => {
+    shell.openPath.mockResolvedValue('');
+    const folder = path.join(base, 'chancewise-print');
+    await openHandoutForPrinting({ suggestedName: 'heart-handout.pdf', bytes: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d, 0x31]) }, shell, folder);
+    await openHandoutForPrinting({ suggestedName: 'heart-handout.pdf', bytes: pdfBytes }, shell, folder);
+    expect(new Uint8Array(await fs.readFile(path.join(folder, 'heart-handout.pdf')))).toEqual(pdfBytes);
+    expect(shell.openPath).toHaveBeenCalledTimes(2);
   });
 
-  it('reports any other failure as print-failed, with the reason', async () => {
-    await expect(printHandout(contentsAnswering(false, 'failed'))).rejects.toMatchObject({ code: 'print-failed', message: expect.stringContaining('(failed)') });
+  it('keeps a name that tries to leave the folder inside it, and adds ".pdf" when missing', async () => {
+    shell.openPath.mockResolvedValue('');
+    const folder = path.join(base, 'chancewise-print');
+    const outcome = await openHandoutForPrinting({ suggestedName: '../../evil', bytes: pdfBytes }, shell, folder);
+    expect(outcome).toEqual({ fileName: 'evil.pdf' });
+    expect(shell.openPath).toHaveBeenCalledWith(path.join(folder, 'evil.pdf'));
+  });
+
+  it('reports a system that cannot open the file as print-failed, with its reason', async () => {
+    // Electron's shell.openPath resolves to an error message, or "" on success (Electron documentation, shell).
+    shell.openPath.mockResolvedValue('No application knows how to open this file');
+    await expect(openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(base, 'p'))).rejects.toMatchObject({
+      code: 'print-failed',
+      message: expect.stringContaining('(No application knows how to open this file)'),
+    });
+  });
+
+  it('reports a folder that cannot be made as write-failed, and opens nothing', async () => {
+    const blocker = path.join(base, 'a-file');
+    await fs.writeFile(blocker, 'x');
+    await expect(openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(blocker, 'print'))).rejects.toMatchObject({
+      code: 'write-failed',
+    });
+    expect(shell.openPath).not.toHaveBeenCalled();
   });
 });

@@ -34,7 +34,7 @@ function setUp() {
     saveDocumentAs: vi.fn(async () => null),
     saveSnapshot: vi.fn(async () => ({ savedAt: 7 })),
     exportHandoutPdf: vi.fn(async () => ({ fileName: 'h.pdf' })),
-    printHandout: vi.fn(async () => ({ printed: true })),
+    printHandout: vi.fn(async () => ({ fileName: 'h.pdf' })),
   };
   const report = vi.fn();
   registerIpcHandlers(ipcMain, { isOwnContents: (contents): contents is FakeContents => contents === own, actions, report });
@@ -91,6 +91,15 @@ describe('registerIpcHandlers()', () => {
       error: { code: 'invalid-request' },
     });
     expect(await call(INVOKE_CHANNELS.printHandout, trusted, 'extra')).toMatchObject({ ok: false, error: { code: 'invalid-request' } });
+    // The handout to print must be a PDF under a plain file name, as for saving it.
+    expect(await call(INVOKE_CHANNELS.printHandout, trusted, { bytes: new TextEncoder().encode('not a pdf'), suggestedName: 'h.pdf' })).toMatchObject({
+      ok: false,
+      error: { code: 'invalid-request' },
+    });
+    expect(await call(INVOKE_CHANNELS.printHandout, trusted, { bytes: new TextEncoder().encode('%PDF-1.7'), suggestedName: '../h.pdf' })).toMatchObject({
+      ok: false,
+      error: { code: 'invalid-request' },
+    });
     expect(actions.saveDocument).not.toHaveBeenCalled();
     expect(actions.saveSnapshot).not.toHaveBeenCalled();
     expect(actions.openRecentDocument).not.toHaveBeenCalled();
@@ -128,5 +137,14 @@ describe('registerIpcHandlers()', () => {
     const { call } = setUp();
     const result = await call(INVOKE_CHANNELS.saveSnapshot, trusted, { content: { a: 1 }, keepPatient: false, hasUnsavedChanges: true });
     expect(structuredClone(result)).toEqual({ ok: true, value: { savedAt: 7 } });
+  });
+});
+
+describe('the print channel', () => {
+  it('hands a checked handout PDF to the print action and replies with the file it opened', async () => {
+    const { actions, call } = setUp();
+    const request = { bytes: new TextEncoder().encode('%PDF-1.7'), suggestedName: 'heart-handout.pdf' };
+    expect(await call(INVOKE_CHANNELS.printHandout, trusted, request)).toEqual({ ok: true, value: { fileName: 'h.pdf' } });
+    expect(actions.printHandout).toHaveBeenCalledWith(own, request);
   });
 });
