@@ -12,7 +12,9 @@ let moduleUrl = null;
 try {
   moduleUrl = await builtCli(cliLayout(root));
 } catch (error) {
-  process.stderr.write(`chancewise: ${error instanceof Error ? error.message : String(error)}; run "npm run build:cli" to see why.\n`);
+  process.stderr.write(
+    `chancewise: ${error instanceof Error ? error.message : String(error)}; run "npm run build:cli" to see why.\n`,
+  );
   process.exitCode = 1;
 }
 if (moduleUrl !== null) {

@@ -63,7 +63,9 @@ if (process.argv[1] !== undefined && resolve(process.argv[1]) === THIS_FILE) {
   const layout = cliLayout(join(dirname(THIS_FILE), '..'));
   try {
     const { bytes, sources } = await buildCli(layout);
-    process.stdout.write(`Built ${relative(layout.root, layout.outFile)} (${Math.round(bytes / 1024)} KiB) from ${sources} sources.\n`);
+    process.stdout.write(
+      `Built ${relative(layout.root, layout.outFile)} (${Math.round(bytes / 1024)} KiB) from ${sources} sources.\n`,
+    );
   } catch (error) {
     process.stderr.write(`build-cli: ${error instanceof Error ? error.message : String(error)}\n`);
     process.exitCode = 1;

@@ -38,7 +38,8 @@ function writeWord(word: string, secondsAhead = 0): void {
 
 const runEntry = (...args: string[]) =>
   spawnSync(process.execPath, [join(project, 'bin', 'chancewise.mjs'), ...args], { encoding: 'utf8', timeout: 30_000 });
-const buildStart = () => (JSON.parse(readFileSync(join(project, 'dist-cli', 'cli', 'build-inputs.json'), 'utf8')) as { startedAt: number }).startedAt;
+const buildStart = () =>
+  (JSON.parse(readFileSync(join(project, 'dist-cli', 'cli', 'build-inputs.json'), 'utf8')) as { startedAt: number }).startedAt;
 
 describe('the built command line', () => {
   it('is built on the first run, passes the arguments and exit status through, and is reused while nothing changed', () => {
@@ -82,7 +83,12 @@ describe('the built command line', () => {
       await buildCli(layout);`;
     execFileSync(process.execPath, ['--input-type=module', '-e', script], { cwd: ROOT });
     const record = JSON.parse(readFileSync(join(folder, 'cli', 'build-inputs.json'), 'utf8')) as { inputs: string[] };
-    for (const source of ['src/cli/main.ts', 'src/cli/handout-command.ts', 'src/render/svg/svg-text-document.ts', 'package.json']) {
+    for (const source of [
+      'src/cli/main.ts',
+      'src/cli/handout-command.ts',
+      'src/render/svg/svg-text-document.ts',
+      'package.json',
+    ]) {
       expect(record.inputs).toContain(join(ROOT, source));
     }
     expect(record.inputs.some((input) => input.includes('node_modules'))).toBe(false);

@@ -28,7 +28,9 @@ async function cliChart(topicFile: string, outcomeId: string, showRange: boolean
 
 describe('chancewise chart and the app’s SVG export', () => {
   const cases = demos().flatMap((demo) =>
-    demo.result.outcomes.flatMap((outcome) => [false, true].map((showRange) => [demo.name, outcome.outcomeId, showRange] as const)),
+    demo.result.outcomes.flatMap((outcome) =>
+      [false, true].map((showRange) => [demo.name, outcome.outcomeId, showRange] as const),
+    ),
   );
 
   it.each(cases)('%s, outcome %s, range outline %s: the same bytes', async (name, outcomeId, showRange) => {
@@ -37,7 +39,9 @@ describe('chancewise chart and the app’s SVG export', () => {
     const app = chartSvgFile(outcomeChart(demo.result, outcomeId), testDocument, { showRange });
     const cli = await cliChart(join(ROOT, 'assets', 'demo', name), outcomeId, showRange);
     expect(cli).toBe(app);
-    expect(cli.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg" viewBox="')).toBe(true);
+    expect(cli.startsWith('<?xml version="1.0" encoding="UTF-8"?>\n<svg xmlns="http://www.w3.org/2000/svg" viewBox="')).toBe(
+      true,
+    );
   });
 
   it('escapes names with &, <, > and quotes as the app’s serialiser does', async () => {

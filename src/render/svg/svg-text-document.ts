@@ -83,7 +83,8 @@ class TextElement {
   }
 
   appendChild<T extends Child>(child: T): T {
-    child.parentNode?.#remove(child);
+    const parent = child.parentNode;
+    if (parent !== null) parent.#remove(child);
     child.parentNode = this;
     this.#childNodes.push(child);
     return child;
@@ -117,11 +118,14 @@ class TextElement {
   }
 
   isEqualNode(other: unknown): boolean {
-    if (!(other instanceof TextElement) || other.namespaceURI !== this.namespaceURI || other.localName !== this.localName) return false;
+    if (!(other instanceof TextElement) || other.namespaceURI !== this.namespaceURI || other.localName !== this.localName)
+      return false;
     if (other.#attributes.size !== this.#attributes.size) return false;
     for (const [name, value] of this.#attributes) if (other.#attributes.get(name) !== value) return false;
     const theirs = other.#childNodes;
-    return theirs.length === this.#childNodes.length && this.#childNodes.every((child, index) => child.isEqualNode(theirs[index]));
+    return (
+      theirs.length === this.#childNodes.length && this.#childNodes.every((child, index) => child.isEqualNode(theirs[index]))
+    );
   }
 
   /** The element as XML text; `inherited` is the namespace its parent's text declared. */
@@ -130,7 +134,9 @@ class TextElement {
     let markup = `<${this.localName}${declaration}`;
     for (const [name, value] of this.#attributes) markup += ` ${name}="${escapeAttribute(value)}"`;
     if (this.#childNodes.length === 0) return `${markup}/>`;
-    const inner = this.#childNodes.map((child) => (child instanceof TextElement ? child.serialise(this.namespaceURI) : child.serialise())).join('');
+    const inner = this.#childNodes
+      .map((child) => (child instanceof TextElement ? child.serialise(this.namespaceURI) : child.serialise()))
+      .join('');
     return `${markup}>${inner}</${this.localName}>`;
   }
 

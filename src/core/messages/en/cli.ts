@@ -41,4 +41,10 @@ export const cliMessages = {
     `--clinician is ${length} characters long; the handout allows up to ${limit}. Shorten it.`,
   handoutWritten: (path: string, paper: string, grade: string) =>
     `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
+  outWithSeveral: (count: number) =>
+    `--out names one file, but ${count} topic files were given: use --out-dir FOLDER to write one handout per file.`,
+  outAndOutDir: () => 'Give --out FILE.pdf for one handout or --out-dir FOLDER for one per topic file, not both.',
+  folderUnusable: (path: string, reason: string) => `Cannot make the folder "${path}": ${reason}.`,
+  batchWritten: (written: number, total: number, folder: string) =>
+    `Wrote ${written} of ${total} handout${total === 1 ? '' : 's'} to ${folder}.`,
 } as const;
