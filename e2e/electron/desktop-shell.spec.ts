@@ -78,7 +78,6 @@ test.describe('the desktop shell', () => {
     expect(
       await page.evaluate(() => {
         try {
-          // eslint-disable-next-line no-eval
           eval('1');
           return 'allowed';
         } catch {

@@ -1,6 +1,7 @@
 import type { EffectQuery } from '../core/compute-effect.ts';
 import { DEFAULT_LEVEL } from '../core/check-effect.ts';
 import { checkArm } from '../core/counts/index.ts';
+import { EFFECT_MEASURES, MEASURES } from '../core/effect-measures.ts';
 import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
@@ -14,14 +15,17 @@ import { UsageError } from './usage-error.ts';
 
 const words = english.cli;
 
+/** The flag of each measure, from the registry: `--rr`, `--or`, `--hr`, `--rrr`, `--arr`. */
+const MEASURE_FLAGS: readonly [string, EffectMeasure][] = MEASURES.map((measure) => [EFFECT_MEASURES[measure].flag, measure]);
+
+/** An example value for a measure's flag, as typed on the command line (an absolute reduction in percent). */
+const flagExample = (measure: EffectMeasure): string =>
+  EFFECT_MEASURES[measure].example.estimate + (EFFECT_MEASURES[measure].input === 'difference' ? '%' : '');
+
 /** The flags that describe one effect, shared by `compute` and `chart`. */
 export const EFFECT_FLAGS: Readonly<Record<string, FlagSpec>> = {
   '--baseline': { takesValue: true, example: '15%' },
-  '--rr': { takesValue: true, example: '0.75' },
-  '--or': { takesValue: true, example: '0.73' },
-  '--hr': { takesValue: true, example: '0.8' },
-  '--rrr': { takesValue: true, example: '25' },
-  '--arr': { takesValue: true, example: '2%' },
+  ...Object.fromEntries(MEASURE_FLAGS.map(([flag, measure]) => [flag, { takesValue: true, example: flagExample(measure) }])),
   '--ci': { takesValue: true, example: '0.6,0.9' },
   '--level': { takesValue: true, example: '0.95' },
   '--over': { takesValue: true, example: '10' },
@@ -34,13 +38,6 @@ export const EFFECT_FLAGS: Readonly<Record<string, FlagSpec>> = {
   '--opposite': { takesValue: false },
 };
 
-const MEASURE_FLAGS: readonly [string, EffectMeasure][] = [
-  ['--rr', 'rr'],
-  ['--or', 'or'],
-  ['--hr', 'hr'],
-  ['--rrr', 'rrr'],
-  ['--arr', 'arr'],
-];
 
 /** Flags that only make sense with bare effect flags, not with a topic. */
 export const EFFECT_ONLY_FLAGS = Object.keys(EFFECT_FLAGS).filter((flag) => flag !== '--per');
@@ -95,9 +92,14 @@ export function parsePer(parsed: ParsedArgs): WordsDenominator | null {
 }
 
 function parseValue(measure: EffectMeasure, input: string, field: string): number {
-  if (measure === 'rrr') return parsePercent(input, field);
-  if (measure === 'arr') return parseSignedRisk(input, field);
-  return parseNumber(input, field);
+  switch (EFFECT_MEASURES[measure].input) {
+    case 'percent':
+      return parsePercent(input, field);
+    case 'difference':
+      return parseSignedRisk(input, field);
+    case 'ratio':
+      return parseNumber(input, field);
+  }
 }
 
 function parseInterval(measure: EffectMeasure, input: string): { lower: number; upper: number } {

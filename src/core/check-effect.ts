@@ -1,3 +1,4 @@
+import { EFFECT_MEASURES } from './effect-measures.ts';
 import { fail } from './problems.ts';
 import type { EnteredEffect } from './types.ts';
 
@@ -16,11 +17,8 @@ export interface CheckedEffect {
 
 function checkValue(measure: EnteredEffect['measure'], value: number, field: string): void {
   if (!Number.isFinite(value)) fail('number-unparsable', field, { input: String(value) });
-  if ((measure === 'rr' || measure === 'or' || measure === 'hr') && !(value > 0)) {
-    fail('ratio-not-positive', field, { measure, value });
-  }
-  if (measure === 'rrr' && !(value < 100)) fail('rrr-out-of-range', field, { value });
-  if (measure === 'arr' && !(value > -1 && value < 1)) fail('arr-out-of-range', field, { value });
+  const spec = EFFECT_MEASURES[measure];
+  if (!spec.allows(value)) fail(spec.problem, field, { measure, value });
 }
 
 /** Check an interval level: more than 50% and at most 99.9%. */

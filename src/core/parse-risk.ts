@@ -1,5 +1,5 @@
 import { parseNumber } from './parse-number.ts';
-import { InputError, fail } from './problems.ts';
+import { fail } from './problems.ts';
 import type { RiskInput } from './topic/topic.ts';
 
 const NUMBER = String.raw`([-+\u2212]?(?:\d+(?:\.\d*)?|\.\d+))`;

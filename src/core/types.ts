@@ -10,8 +10,10 @@ export interface Estimate {
   readonly upper: number | null;
 }
 
-/** The kinds of effect a clinician can enter for an option. */
-export type EffectMeasure = 'rr' | 'or' | 'hr' | 'rrr' | 'arr';
+import type { EffectMeasure } from './effect-measures.ts';
+
+/** The kinds of effect a clinician can enter for an option, from the registry in `effect-measures.ts`. */
+export type { EffectMeasure };
 
 /** One arm of a trial: events out of a total. */
 export interface ArmCounts {

@@ -124,7 +124,6 @@ export function wrapLines(
     }
     if (line !== '' || (lines.length === 0 && firstLineIndent > 0)) {
       lines.push(line);
-      line = '';
     }
     if (measure(word, style.size, style.bold) <= room()) {
       line = word;

@@ -149,6 +149,7 @@ export function isPlainFileName(value: unknown): value is string {
   if (typeof value !== 'string' || value.length === 0 || value.length > PAYLOAD_LIMITS.fileNameCharacters) return false;
   if (value === '.' || value === '..' || value.endsWith(' ') || value.endsWith('.')) return false;
   if (RESERVED_DEVICE_NAME.test(value.trimEnd()) || DIRECTION_CONTROLS.test(value)) return false;
+  // eslint-disable-next-line no-control-regex -- control characters are exactly what this refuses
   return !/[\u0000-\u001f\u007f/\\:*?"<>|]/u.test(value);
 }
 

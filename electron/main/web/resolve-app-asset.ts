@@ -26,6 +26,7 @@ export const ENTRY_FILE = 'index.html';
 const MAX_ADDRESS_LENGTH = 2048;
 
 /** Control characters (including NUL), and characters that mean a drive, a stream or a wildcard on Windows. */
+// eslint-disable-next-line no-control-regex -- control characters are exactly what this refuses
 const FORBIDDEN_CHARACTERS = /[\u0000-\u001f\u007f:*?"<>|]/u;
 
 function refuse(status: 400 | 404, reason: AssetRefusal): AssetResolution {

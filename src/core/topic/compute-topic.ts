@@ -1,4 +1,4 @@
-import { chooseDenominators, computeEffect } from '../compute-effect.ts';
+import { chooseDenominators } from '../compute-effect.ts';
 import type { EffectComputation } from '../compute-effect.ts';
 import { numberNeeded } from '../number-needed.ts';
 import { peopleGroups } from '../people-groups.ts';

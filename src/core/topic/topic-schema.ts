@@ -1,4 +1,5 @@
 import * as v from 'valibot';
+import { MEASURES } from '../effect-measures.ts';
 
 /** The name every topic file carries in its `format` field. */
 export const TOPIC_FORMAT = 'chancewise-topic';
@@ -20,7 +21,7 @@ const unit = v.optional(v.picklist(['days', 'weeks', 'months', 'years']));
 const opposite = v.optional(v.boolean());
 
 const enteredEffect = v.object({
-  measure: v.picklist(['rr', 'or', 'hr', 'rrr', 'arr']),
+  measure: v.picklist(MEASURES),
   estimate: finite,
   lower: bound,
   upper: bound,

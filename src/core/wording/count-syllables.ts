@@ -127,6 +127,7 @@ export function countSyllables(word: string): number {
 }
 
 const PLAIN_LETTERS = /^[A-Za-z]+$/;
+// eslint-disable-next-line no-control-regex -- the range is all of ASCII, control characters included
 const NON_ASCII = /[^\u0000-\u007f]/;
 
 /** Syllables of a run of letters: short capitals without a vowel spelled out, else by the rules. */

@@ -44,7 +44,7 @@ export function splitSentences(text: string): readonly string[] {
     const pieces = paragraph.split(/(?<=[.!?]['"’”)\]]*)\s+/);
     for (const piece of pieces) {
       current = current === '' ? piece : `${current} ${piece}`;
-      const lastWord = (piece.trim().split(/\s+/).pop() ?? '').replace(/^['"‘“(\[]+/, '').toLowerCase();
+      const lastWord = (piece.trim().split(/\s+/).pop() ?? '').replace(/^['"‘“([]+/, '').toLowerCase();
       const endsSentence = /[.!?]['"’”)\]]*$/.test(piece) && !ABBREVIATIONS.has(lastWord.replace(/\.$/, ''));
       if (endsSentence) {
         sentences.push(current.trim());

@@ -3,6 +3,7 @@
  * copy in the browser's storage is refused rather than loaded half-way.
  */
 import * as v from 'valibot';
+import { MEASURES } from '../../core/effect-measures.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
 const text = v.string();
@@ -12,7 +13,7 @@ const flag = v.optional(v.boolean(), false);
 
 const effectDraftSchema = v.object({
   optionId: text,
-  measure: v.picklist(['rr', 'or', 'hr', 'rrr', 'arr', 'counts']),
+  measure: v.picklist([...MEASURES, 'counts']),
   estimate: text,
   lower: text,
   upper: text,

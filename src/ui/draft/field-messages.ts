@@ -7,19 +7,16 @@
 import { describeProblem } from '../../core/messages/describe.ts';
 import type { Problem } from '../../core/problems.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
+import { EFFECT_MEASURES } from '../../core/effect-measures.ts';
 import { TOPIC_LIMITS } from '../../core/topic/topic.ts';
 import { effectOptionIds } from './topic-from-draft.ts';
 import type { DraftMeasure, EffectDraft, TopicDraft } from './topic-draft.ts';
 
-/** Two limits of the measure, as an example of a whole interval. */
-const INTERVAL_EXAMPLES: Record<DraftMeasure, string> = {
-  rr: '0.6 and 0.9',
-  or: '0.6 and 0.9',
-  hr: '0.6 and 0.9',
-  rrr: '10 and 40',
-  arr: '1 and 5',
-  counts: '0.6 and 0.9',
-};
+/** Two limits of the measure, as an example of a whole interval (from the registry of measures). */
+function intervalExample(measure: DraftMeasure): string {
+  const { lower, upper } = EFFECT_MEASURES[measure === 'counts' ? 'rr' : measure].example;
+  return `${lower} and ${upper}`;
+}
 
 /** The effect a core field path belongs to: "outcomes.0.effects.1.effect.interval" → its draft and the rest. */
 function effectAt(path: string, draft: TopicDraft): { effect: EffectDraft; rest: string } | null {
@@ -49,7 +46,7 @@ function intervalMessage(found: Problem, effect: EffectDraft): string | null {
   const upper = effect.upper.trim();
   switch (found.code) {
     case 'interval-incomplete':
-      return `The interval needs both limits: fill in both boxes, for example ${INTERVAL_EXAMPLES[effect.measure]}, or leave both empty.`;
+      return `The interval needs both limits: fill in both boxes, for example ${intervalExample(effect.measure)}, or leave both empty.`;
     case 'interval-reversed':
       return `The limits are the wrong way round: the lower limit, ${lower}, is above the upper limit, ${upper}. Put ${upper} in the lower box (the first) and ${lower} in the upper box (the second).`;
     case 'interval-excludes-estimate':

@@ -6,6 +6,7 @@
  * the default (years, an event to avoid, an effect on the event itself) is left out, so a
  * topic that uses none of them reads and writes as it always did.
  */
+import { EFFECT_MEASURES } from '../../core/effect-measures.ts';
 import { checkArm } from '../../core/counts/check-arm.ts';
 import { parseNumber } from '../../core/parse-number.ts';
 import { InputError, problem } from '../../core/problems.ts';
@@ -62,14 +63,14 @@ function unitField<Name extends string>(name: Name, unit: TimeUnit): Partial<Rec
 /** `opposite: true` when the effect was given for the opposite event; nothing otherwise. */
 const oppositeField = (draft: EffectDraft): { opposite?: true } => (draft.opposite ? { opposite: true } : {});
 
-const MEASURE_EXAMPLES: Record<string, string> = { rr: '0.75', or: '0.73', hr: '0.8', rrr: '25', arr: '3' };
+
 
 function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect {
   const measure = draft.measure === 'counts' ? 'rr' : draft.measure;
   // An absolute reduction is typed in percentage points; the core takes a proportion.
   const scale = measure === 'arr' ? 0.01 : 1;
   const scaled = (value: number | null): number | null => (value === null ? null : value * scale);
-  const example = MEASURE_EXAMPLES[measure] ?? '0.75';
+  const example = EFFECT_MEASURES[measure].example.estimate;
   const estimate = readNumber(reader, draft.estimate, `${field}.estimate`, 'effect estimate', example);
   const lower = readOptional(reader, draft.lower, `${field}.lower`);
   const upper = readOptional(reader, draft.upper, `${field}.upper`);

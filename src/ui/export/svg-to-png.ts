@@ -30,7 +30,7 @@ export async function svgTextToPng(svgText: string, document: Document, pixels: 
     canvas.width = pixels.width;
     canvas.height = pixels.height;
     const context = canvas.getContext('2d');
-    if (context === null) throw new Error('this browser cannot draw images');
+    if (context === null) throw new Error('images cannot be drawn here (no 2D canvas)');
     context.fillStyle = '#ffffff';
     context.fillRect(0, 0, pixels.width, pixels.height);
     context.drawImage(image, 0, 0, pixels.width, pixels.height);

@@ -33,7 +33,7 @@ export function topicFileText(draft: TopicDraft, includePatient: boolean): Saved
     const count = reading.problems.length;
     return {
       ok: false,
-      message: `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile your work is kept in this browser.`,
+      message: `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile Chancewise keeps your work on this computer.`,
     };
   }
   return { ok: true, text: writeTopicFile(reading.topic, { includePatient }) };

@@ -4,9 +4,9 @@
  */
 import { svgTextToPng } from '../export/svg-to-png.ts';
 import { plainFileStem } from '../files/plain-file-stem.ts';
-import { SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from './slide-svg.ts';
-import type { Slide } from './slide-model.ts';
-import type { StepKind } from './teaching-steps.ts';
+import { SLIDE_HEIGHT, SLIDE_WIDTH, slideSvgText } from '../../teaching/slide-svg.ts';
+import type { Slide } from '../../teaching/slide-model.ts';
+import type { StepKind } from '../../teaching/teaching-steps.ts';
 
 /** A file name for a slide: the presentation's title in plain letters, the slide number and step. */
 export function slideFileName(title: string, number: number, kind: StepKind, extension: string): string {

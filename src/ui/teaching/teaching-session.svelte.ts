@@ -4,30 +4,15 @@
  * sequence, so stepping forward from a topic's last step goes to the next topic's
  * first. The topics are copies: presenting never changes the editor's topic.
  */
-import { buildSlide, slideCount } from './build-slide.ts';
-import { teachingMessagesEn } from './messages/en.ts';
-import type { TeachingMessages } from './messages/en.ts';
-import type { PresentationItem } from './presentation-item.ts';
-import type { Slide } from './slide-model.ts';
+import { buildSlide } from '../../teaching/build-slide.ts';
+import { teachingMessagesEn } from '../../teaching/messages/en.ts';
+import type { TeachingMessages } from '../../teaching/messages/en.ts';
+import type { PresentationItem } from '../../teaching/presentation-item.ts';
+import { slidePlaces } from '../../teaching/slide-places.ts';
+import type { SlidePlace } from '../../teaching/slide-places.ts';
+import type { Slide } from '../../teaching/slide-model.ts';
+import { writeTeachingSet } from '../../teaching/teaching-set-file.ts';
 import type { TeachingAction } from './teaching-keys.ts';
-import { writeTeachingSet } from './teaching-set-file.ts';
-import type { StepKind } from './teaching-steps.ts';
-
-/** One place in the sequence: which topic, which of its steps, the step's kind, and which of the step's slides. */
-export interface SlidePlace {
-  readonly item: number;
-  readonly step: number;
-  readonly kind: StepKind;
-  /** From 0; above 0 only on a step with several slides (one per harm). */
-  readonly part: number;
-}
-
-/** Every slide of every item, in order. */
-export function slidePlaces(items: readonly PresentationItem[]): SlidePlace[] {
-  return items.flatMap((item, itemIndex) =>
-    item.steps.flatMap((kind, step) => Array.from({ length: slideCount(item, kind) }, (_, part) => ({ item: itemIndex, step, kind, part }))),
-  );
-}
 
 export class TeachingSession {
   /** The presentation's title: the set's, or the topic's. */

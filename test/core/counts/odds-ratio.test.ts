@@ -19,18 +19,19 @@ describe('oddsRatio', () => {
     expect(found?.corrected).toBe(false);
   });
 
-  it('reproduces SciPy’s documented ischemic stroke example, a large table', () => {
-    // SciPy documentation (1.11 to 1.13), scipy.stats.contingency.odds_ratio, Examples: women in
-    // Berger et al. (JAMA 2006;295:306), ischemic stroke 176 of 21211 on the option vs 230 of 21248
-    // on placebo; the documented (conditional) estimate is 0.7646037659999126, the same to four
-    // places as the sample odds ratio computed here. Woolf limits recomputed with SciPy:
-    // python3 -c "from scipy.stats.contingency import odds_ratio as o; r = o([[176, 230], [21035, 21018]], kind='sample'); print(r.statistic, r.confidence_interval(0.95))"
-    // → 0.7645989603249242, 0.6277463630494854 to 0.9312862718789977.
-    const found = oddsRatio({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(found?.estimate).toBeCloseTo(0.7646, 4);
-    expect(found?.estimate).toBeCloseTo(0.7645989603249242, 12);
-    expect(found?.lower).toBeCloseTo(0.6277463630494854, 10);
-    expect(found?.upper).toBeCloseTo(0.9312862718789977, 10);
+  it('reproduces the Berkeley admissions table of R’s documentation, a large table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details and Examples: 1198 of 2691 men and
+    // 557 of 1835 women admitted (Bickel PJ, Hammel EA, O'Connell JW. Sex bias in graduate
+    // admissions: data from Berkeley. Science 1975;187:398–403). The help text gives "a sample odds
+    // ratio of 1.83", but 1198 × 1278 / (557 × 1493) = 1.8411 (derived), so the check takes 1.84,
+    // and the Woolf limits, from SciPy:
+    // python3 -c "from scipy.stats.contingency import odds_ratio as o; r = o([[1198, 557], [1493, 1278]], kind='sample'); print(r.statistic, r.confidence_interval(0.95))"
+    // → 1.8410800371812925, 1.6243769097450054 to 2.0866928623354815.
+    const found = oddsRatio({ events: 1198, total: 2691 }, { events: 557, total: 1835 });
+    expect(found?.estimate).toBeCloseTo(1.84, 2);
+    expect(found?.estimate).toBeCloseTo(1.8410800371812925, 12);
+    expect(found?.lower).toBeCloseTo(1.6243769097450054, 10);
+    expect(found?.upper).toBeCloseTo(2.0866928623354815, 10);
     expect(found?.corrected).toBe(false);
   });
 

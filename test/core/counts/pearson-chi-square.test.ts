@@ -3,16 +3,18 @@ import { pearsonChiSquare } from '../../../src/core/counts/pearson-chi-square.ts
 import { problemOf } from './support.ts';
 
 describe('pearsonChiSquare', () => {
-  it('reproduces the ischemic stroke table of SciPy’s documentation, a large table', () => {
-    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
-    // et al. (JAMA 2006;295:306), [[176, 230], [21035, 21018]]. By hand, X² = N(ad − bc)² / (n₁n₂m₁m₂)
-    // = 42459 × 1138882² / (21211 × 21248 × 406 × 42053) = 7.1569; recomputed with SciPy:
-    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[176, 230], [21035, 21018]], correction=False); print(r.statistic, r.pvalue)"
-    // → 7.156900855345259, p 0.007467611213568741.
-    const found = pearsonChiSquare({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(found?.statistic).toBeCloseTo(7.1569, 4);
-    expect(found?.statistic).toBeCloseTo(7.156900855345259, 10);
-    expect(found?.p).toBeCloseTo(0.007467611213568741, 12);
+  it('reproduces SciPy on the Berkeley admissions table of R’s documentation, a large table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details and Examples, apply(UCBAdmissions,
+    // c(1, 2), sum): 1198 of 2691 men and 557 of 1835 women admitted, from Bickel PJ, Hammel EA,
+    // O'Connell JW. Sex bias in graduate admissions: data from Berkeley. Science 1975;187:398–403.
+    // By hand, X² = N(ad − bc)² / (n₁n₂m₁m₂) = 4526 × 699443² / (2691 × 1835 × 1755 × 2771) = 92.205
+    // (derived); recomputed with SciPy:
+    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[1198, 557], [1493, 1278]], correction=False); print(r.statistic, r.pvalue)"
+    // → 92.20528041152764, p 7.813600388994667e-22, checked to ten significant digits.
+    const found = pearsonChiSquare({ events: 1198, total: 2691 }, { events: 557, total: 1835 });
+    expect(found?.statistic).toBeCloseTo(92.205, 3);
+    expect(found?.statistic).toBeCloseTo(92.20528041152764, 10);
+    expect((found?.p ?? 0) / 7.813600388994667e-22).toBeCloseTo(1, 10);
   });
 
   it('reproduces SciPy’s documented uncorrected p for a small table with a cell of 3', () => {

@@ -22,15 +22,15 @@ describe('phiCoefficient', () => {
     expect(phiCoefficient({ events: 8, total: 9 }, { events: 2, total: 7 })).toBeCloseTo(0.6180700462007377, 12);
   });
 
-  it('is negative when events go with the comparison arm, on the large ischemic stroke table', () => {
-    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
-    // et al. (JAMA 2006;295:306), 176 of 21211 on the option vs 230 of 21248 on placebo; X² = 7.1569,
-    // N = 42459, |phi| = √(7.1569 / 42459) (derived).
-    // python3 -c "from scipy.stats.contingency import association as a; print(a([[176, 21035], [230, 21018]], method='cramer'))"
-    // → 0.012983076610594993.
-    const optionFirst = phiCoefficient({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(optionFirst).toBeCloseTo(-0.012983076610594993, 12);
-    expect(phiCoefficient({ events: 230, total: 21248 }, { events: 176, total: 21211 })).toBeCloseTo(
+  it('is negative when events go with the comparison arm, on the large Berkeley admissions table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details and Examples: 1198 of 2691 men and
+    // 557 of 1835 women admitted (Bickel, Hammel and O'Connell, Science 1975;187:398–403); with the
+    // women as the option arm, X² = 92.205, N = 4526, |phi| = √(92.205 / 4526) (derived).
+    // python3 -c "from scipy.stats.contingency import association as a; print(a([[557, 1278], [1198, 1493]], method='cramer'))"
+    // → 0.142731760206081.
+    const optionFirst = phiCoefficient({ events: 557, total: 1835 }, { events: 1198, total: 2691 });
+    expect(optionFirst).toBeCloseTo(-0.142731760206081, 12);
+    expect(phiCoefficient({ events: 1198, total: 2691 }, { events: 557, total: 1835 })).toBeCloseTo(
       -(optionFirst ?? 0),
       14,
     );
@@ -57,7 +57,7 @@ describe('cramersV', () => {
   it('is |phi| for a 2×2 table', () => {
     expect(cramersV({ events: 1, total: 4 }, { events: 3, total: 4 })).toBeCloseTo(0.5, 12);
     // Same SciPy commands as for phi above.
-    expect(cramersV({ events: 176, total: 21211 }, { events: 230, total: 21248 })).toBeCloseTo(0.012983076610594993, 12);
+    expect(cramersV({ events: 557, total: 1835 }, { events: 1198, total: 2691 })).toBeCloseTo(0.142731760206081, 12);
     expect(cramersV({ events: 8, total: 9 }, { events: 2, total: 7 })).toBeCloseTo(0.6180700462007377, 12);
   });
 

@@ -51,6 +51,18 @@ describe('newcombeDifference', () => {
     });
   }
 
+  it('reproduces SciPy’s Wilson intervals squared and added on the large Berkeley admissions table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details: 1198 of 2691 men and 557 of 1835
+    // women admitted (Bickel, Hammel and O'Connell, Science 1975;187:398–403); the women are the
+    // option arm. Newcombe's method 10 as in the command above the table, with SciPy:
+    // python3 -c "from scipy.stats import binomtest as b; a, m, c, n = 1198, 2691, 557, 1835; p, q = a / m, c / n; l1, u1 = b(a, m).proportion_ci(method='wilson'); l2, u2 = b(c, n).proportion_ci(method='wilson'); print(p - q, p - q - ((p - l1)**2 + (u2 - q)**2)**.5, p - q + ((u1 - p)**2 + (q - l2)**2)**.5)"
+    // → 0.14164542824654186, 0.1132131214425282 to 0.1695695110299901.
+    const found = newcombeDifference({ events: 557, total: 1835 }, { events: 1198, total: 2691 });
+    expect(found.estimate).toBeCloseTo(0.14164542824654186, 14);
+    expect(found.lower).toBeCloseTo(0.1132131214425282, 12);
+    expect(found.upper).toBeCloseTo(0.1695695110299901, 12);
+  });
+
   it('reports comparison − option: a better option gives a positive difference, and swapping negates it', () => {
     // Newcombe (1998) Table II (a): option 48/80, comparison 56/70 → +0.2000, 0.0524 to 0.3339;
     // option 56/70, comparison 48/80 → −0.2000, −0.3339 to −0.0524.
@@ -79,15 +91,20 @@ describe('waldDifference', () => {
     expect(limits(found)).toEqual([-0.9395, -0.2605]);
   });
 
-  it('reproduces SciPy’s Wald difference on the large ischemic stroke table', () => {
-    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
-    // et al. (JAMA 2006;295:306), placebo 230 of 21248 vs the option 176 of 21211:
-    // python3 -c "from scipy.stats import norm; a, m, c, n = 230, 21248, 176, 21211; p, q = a / m, c / n; h = norm.ppf(0.975) * (p * (1 - p) / m + q * (1 - q) / n)**.5; print(p - q, p - q - h, p - q + h)"
-    // → 0.002526966749180494, 0.0006759984781495687 to 0.004377935020211419.
-    const found = waldDifference({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(found.estimate).toBeCloseTo(0.002526966749180494, 14);
-    expect(found.lower).toBeCloseTo(0.0006759984781495687, 12);
-    expect(found.upper).toBeCloseTo(0.004377935020211419, 12);
+  it('reproduces SciPy’s Wald difference on the large Berkeley admissions table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details: "2691 male applicants, of whom 1198
+    // (44.5%) were admitted, compared with 1835 female applicants of whom 557 (30.4%)" (Bickel,
+    // Hammel and O'Connell, Science 1975;187:398–403). With the women as the option arm and the men
+    // as the comparison, percentages rounded to 0.1 put the difference between 0.4445 − 0.3045 and
+    // 0.4455 − 0.3035 (derived from the text); with SciPy:
+    // python3 -c "from scipy.stats import norm; a, m, c, n = 1198, 2691, 557, 1835; p, q = a / m, c / n; h = norm.ppf(0.975) * (p * (1 - p) / m + q * (1 - q) / n)**.5; print(p - q, p - q - h, p - q + h)"
+    // → 0.14164542824654186, 0.11344696549125992 to 0.16984389100182382.
+    const found = waldDifference({ events: 557, total: 1835 }, { events: 1198, total: 2691 });
+    expect(found.estimate).toBeGreaterThan(0.4445 - 0.3045);
+    expect(found.estimate).toBeLessThan(0.4455 - 0.3035);
+    expect(found.estimate).toBeCloseTo(0.14164542824654186, 14);
+    expect(found.lower).toBeCloseTo(0.11344696549125992, 12);
+    expect(found.upper).toBeCloseTo(0.16984389100182382, 12);
   });
 
   it('truncates an overshooting interval to [−1, 1] (common practice)', () => {

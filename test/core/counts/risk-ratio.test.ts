@@ -18,6 +18,37 @@ describe('riskRatio', () => {
     expect(found.corrected).toBe(false);
   });
 
+  it('reproduces SciPy’s documented heart disease example of relative_risk', () => {
+    // SciPy documentation (1.17), scipy.stats.contingency.relative_risk, Examples, from Example 3.1
+    // of Sahai H, Khurshid A. Statistics in Epidemiology, CRC Press, 1996: coronary heart disease in
+    // 27 of 122 with high and 44 of 487 with low catecholamine; result.relative_risk
+    // 2.4495156482861398, confidence_interval(0.95) 1.5836990926700116 to 3.7886786315466354
+    // (the same Katz log interval). Recomputed with SciPy:
+    // python3 -c "from scipy.stats.contingency import relative_risk as r; x = r(27, 122, 44, 487); print(x.relative_risk, x.confidence_interval(0.95))"
+    const found = riskRatio({ events: 27, total: 122 }, { events: 44, total: 487 });
+    expect(found?.estimate).toBeCloseTo(2.4495156482861398, 12);
+    expect(found?.lower).toBeCloseTo(1.5836990926700116, 10);
+    expect(found?.upper).toBeCloseTo(3.7886786315466354, 10);
+    expect(found?.corrected).toBe(false);
+  });
+
+  it('reproduces SciPy on the Berkeley admissions table of R’s documentation, a large table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details: "2691 male applicants, of whom 1198
+    // (44.5%) were admitted, compared with 1835 female applicants of whom 557 (30.4%)" (Bickel PJ,
+    // Hammel EA, O'Connell JW. Sex bias in graduate admissions: data from Berkeley. Science
+    // 1975;187:398–403). Percentages rounded to 0.1 put the ratio between 44.45 / 30.45 and
+    // 44.55 / 30.35 (derived from the text). With SciPy:
+    // python3 -c "from scipy.stats.contingency import relative_risk as r; x = r(1198, 2691, 557, 1835); print(x.relative_risk, x.confidence_interval(0.95))"
+    // → 1.4666415813867224, 1.3523499753756096 to 1.5905923521425023.
+    const found = riskRatio({ events: 1198, total: 2691 }, { events: 557, total: 1835 });
+    expect(found?.estimate).toBeGreaterThan(44.45 / 30.45);
+    expect(found?.estimate).toBeLessThan(44.55 / 30.35);
+    expect(found?.estimate).toBeCloseTo(1.4666415813867224, 12);
+    expect(found?.lower).toBeCloseTo(1.3523499753756096, 10);
+    expect(found?.upper).toBeCloseTo(1.5905923521425023, 10);
+    expect(found?.corrected).toBe(false);
+  });
+
   it('divides the option risk by the comparison risk, so swapping the arms inverts the ratio', () => {
     // Altman (1991) §10.11.1 again: the reciprocal orientation gives 1/0.345 with inverted limits.
     const forward = riskRatio({ events: 2, total: 16 }, { events: 33, total: 91 }, 0.9);

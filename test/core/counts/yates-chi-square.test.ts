@@ -4,14 +4,17 @@ import { yatesChiSquare } from '../../../src/core/counts/yates-chi-square.ts';
 import { problemOf } from './support.ts';
 
 describe('yatesChiSquare', () => {
-  it('reproduces SciPy’s documented ischemic stroke example, a large table', () => {
-    // SciPy documentation (1.11 to 1.13), scipy.stats.chi2_contingency, Examples: women in Berger
-    // et al. (JAMA 2006;295:306), [[176, 230], [21035, 21018]], res.statistic 6.892569132546561,
-    // res.pvalue 0.008655478161175739 (Yates correction on by default). Recomputed with SciPy:
-    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[176, 230], [21035, 21018]]); print(r.statistic, r.pvalue)"
-    const found = yatesChiSquare({ events: 176, total: 21211 }, { events: 230, total: 21248 });
-    expect(found?.statistic).toBeCloseTo(6.892569132546561, 9);
-    expect(found?.p).toBeCloseTo(0.008655478161175739, 12);
+  it('reproduces SciPy on the Berkeley admissions table of R’s documentation, a large table', () => {
+    // R documentation (datasets 4.2), UCBAdmissions, Details and Examples: 1198 of 2691 men and
+    // 557 of 1835 women admitted (Bickel, Hammel and O'Connell, Science 1975;187:398–403). By hand,
+    // X² = 4526 × (699443 − 2263)² / (2691 × 1835 × 1755 × 2771) = 91.610 (derived); with SciPy
+    // (Yates correction on by default):
+    // python3 -c "from scipy.stats import chi2_contingency as c; r = c([[1198, 557], [1493, 1278]]); print(r.statistic, r.pvalue)"
+    // → 91.60959785812125, p 1.0557968087828395e-21, checked to ten significant digits.
+    const found = yatesChiSquare({ events: 1198, total: 2691 }, { events: 557, total: 1835 });
+    expect(found?.statistic).toBeCloseTo(91.61, 3);
+    expect(found?.statistic).toBeCloseTo(91.60959785812125, 10);
+    expect((found?.p ?? 0) / 1.0557968087828395e-21).toBeCloseTo(1, 10);
   });
 
   it('reproduces SciPy on the small table of its documentation with a cell of 3', () => {

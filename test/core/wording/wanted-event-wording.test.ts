@@ -95,3 +95,13 @@ describe('the verbs of every sentence agree with help and harm', () => {
     );
   });
 });
+
+describe('an outcome whose name already says the period', () => {
+  it('does not say the period twice', () => {
+    const topic = topicOf({ wanted: true, kind: 'benefit', measure: 'rr', estimate: 1.8, lower: 1.4, upper: 2.3, baseline: 0.25, period: { amount: 3, unit: 'days' } });
+    const named = { ...topic, outcomes: topic.outcomes.map((outcome) => ({ ...outcome, name: 'pain gone by day 3' })) };
+    const sentences = sentencesOf(named);
+    expect(sentences).toContain('No treatment: about 25 in 100 people like you will have pain gone by day 3.');
+    expect(sentences.join(' ')).not.toContain('by day 3 by day 3');
+  });
+});

@@ -1,16 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { readTeachingSet } from '../../../src/ui/teaching/teaching-set-file.ts';
-import { resolveTeachingSet } from '../../../src/ui/teaching/resolve-teaching-set.ts';
+import { readTeachingSet } from '../../../src/teaching/teaching-set-file.ts';
+import { resolveTeachingSet } from '../../../src/teaching/resolve-teaching-set.ts';
 import { teachingKeyAction } from '../../../src/ui/teaching/teaching-keys.ts';
 import type { KeyPress } from '../../../src/ui/teaching/teaching-keys.ts';
-import { TeachingSession, slidePlaces } from '../../../src/ui/teaching/teaching-session.svelte.ts';
-import { DEFAULT_STEPS } from '../../../src/ui/teaching/teaching-steps.ts';
-import { STONE, SCREENING, demoTopic, itemOf } from './teaching-fixtures.ts';
+import { slidePlaces } from '../../../src/teaching/slide-places.ts';
+import { TeachingSession } from '../../../src/ui/teaching/teaching-session.svelte.ts';
+import { DEFAULT_STEPS } from '../../../src/teaching/teaching-steps.ts';
+import { STONE, SCREENING, demoTopic, itemOf } from '../../teaching/teaching-fixtures.ts';
 
 // The step order is the teaching sequence of this view: the result told with people first
 // (baseline, with the option, helped, harmed, uncertainty, patient words), then one result
 // framed four ways, then the format demonstrations (Galesic 2009; Ancker 2011;
-// Zikmund-Fisher 2008), as listed in src/ui/teaching/teaching-steps.ts.
+// Zikmund-Fisher 2008), as listed in src/teaching/teaching-steps.ts.
 
 function stoneSession(): TeachingSession {
   return new TeachingSession('Kidney stone', [itemOf(demoTopic(STONE))]);

@@ -1,17 +1,12 @@
+import { measureNamesEn } from './measure-names.ts';
+
 /**
  * English words for what a topic file should hold and what it holds instead, used inside
  * the `file-field-invalid` sentence ("expected a whole number, found the text "12"").
  */
 
 /** Plain names of the fixed values a topic file may hold, shown beside the value itself. */
-const choiceNames: Readonly<Record<string, string>> = {
-  counts: 'trial counts',
-  rr: 'risk ratio',
-  or: 'odds ratio',
-  hr: 'hazard ratio',
-  rrr: 'relative risk reduction',
-  arr: 'absolute risk reduction',
-};
+const choiceNames: Readonly<Record<string, string>> = { counts: 'trial counts', ...measureNamesEn };
 
 /** "a, b or c" */
 function listWithOr(items: readonly string[]): string {

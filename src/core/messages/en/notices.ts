@@ -1,5 +1,7 @@
 import type { ProblemValues } from '../../problems.ts';
+import { isEffectMeasure } from '../../effect-measures.ts';
 import { formatCount, formatDecimal, formatPercent } from '../format-number.ts';
+import { measureNamesEn } from './measure-names.ts';
 
 type Render = (values: ProblemValues) => string;
 
@@ -58,7 +60,7 @@ export const noticeMessages: Record<NoticeCode, Render> = {
   'hr-proportional-hazards': () =>
     'The hazard ratio was applied assuming proportional hazards over the whole period.',
   'opposite-ratio-applied': (v) =>
-    `The ${text(v, 'measure') === 'hr' ? 'hazard ratio' : text(v, 'measure') === 'rrr' ? 'relative reduction' : text(v, 'measure') === 'arr' ? 'absolute reduction' : 'risk ratio'} was reported for the opposite event, so it was applied to the chance of not having the outcome. A ratio for one event is not the same as the inverse ratio for its opposite: check that the trial reported it this way.`,
+    `The ${isEffectMeasure(v.measure) ? measureNamesEn[v.measure] : 'effect'} was reported for the opposite event, so it was applied to the chance of not having the outcome. A ratio for one event is not the same as the inverse ratio for its opposite: check that the trial reported it this way.`,
   'opposite-odds-ratio-inverted': () =>
     'The odds ratio was reported for the opposite event, so its inverse (1 ÷ OR) was used; for odds ratios this is exact.',
   'denominator-raised': (v) => {

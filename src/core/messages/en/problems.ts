@@ -1,5 +1,7 @@
 import type { ProblemCode, ProblemValues } from '../../problems.ts';
+import { isEffectMeasure } from '../../effect-measures.ts';
 import { formatPercent } from '../format-number.ts';
+import { measureNamesEn } from './measure-names.ts';
 
 type Render = (values: ProblemValues) => string;
 
@@ -9,14 +11,10 @@ const percent = (values: ProblemValues, key: string): string => {
   return typeof value === 'number' ? formatPercent(value) : String(value ?? '');
 };
 
-const measureNames: Record<string, string> = {
-  rr: 'risk ratio',
-  or: 'odds ratio',
-  hr: 'hazard ratio',
-  rrr: 'relative risk reduction',
-  arr: 'absolute risk reduction',
+const measure = (values: ProblemValues): string => {
+  const name = text(values, 'measure');
+  return isEffectMeasure(name) ? measureNamesEn[name] : 'effect';
 };
-const measure = (values: ProblemValues): string => measureNames[text(values, 'measure')] ?? 'effect';
 /** The measure with its article: "a risk ratio", "an odds ratio". */
 const aMeasure = (values: ProblemValues): string => {
   const name = measure(values);

@@ -49,6 +49,12 @@ const within = ({ years, unit }: PeriodValues): string => {
   return amount === 1 ? `in the next ${one}` : `in the next ${shown} ${other}`;
 };
 
+/** The period after an outcome's name, unless the name already says it ("pain gone by day 3"). */
+const periodAfter = (outcome: string, period: PeriodValues): string => {
+  const phrase = within(period);
+  return outcome.toLowerCase().includes(phrase.toLowerCase()) ? '' : ` ${phrase}`;
+};
+
 /** A length of time: "10 years", "3 days". */
 export const duration = ({ years, unit }: PeriodValues): string => {
   const amount = amountIn(years, unit);
@@ -155,7 +161,7 @@ export const wordingMessages: WordingMessages = {
     return `In these numbers, "${group}" means ${trimmed}${/[.!?]$/.test(trimmed) ? '' : '.'}`;
   },
   eventFrame: ({ option, outcome, amount, denominator, group, years, unit }) =>
-    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome} ${within({ years, unit })}.`,
+    `${capitalise(option)}: ${amountPhrase(amount, denominator)} ${group} will ${haveVerb(outcome)} ${outcome}${periodAfter(outcome, { years, unit })}.`,
   freeFrame: ({ amount, denominator }) => freeFrame(amount, denominator),
   change: ({ option, outcome, wanted, direction, count, either, denominator, hidden }) => {
     if (direction === 'same' && hidden !== null) {

@@ -1,0 +1,163 @@
+/**
+ * The topic the app holds and where it came from: opening a file (asked for, dropped on
+ * the desktop app, or from the recent list), a new topic, an example, and unsaved work
+ * from an earlier visit offered back. Opening never loses work: the topic it replaces
+ * is one undo away, and a file that cannot be read leaves the current topic alone.
+ */
+import { draftFromTopic } from '../draft/draft-from-topic.ts';
+import { blankDraft } from '../draft/draft-edits.ts';
+import { parseDraft } from '../draft/draft-schema.ts';
+import type { TopicDraft } from '../draft/topic-draft.ts';
+import { openTopicText } from '../files/topic-files.ts';
+import type { OpenedFile, Platform, PlatformDocument } from '../platform/platform.ts';
+import type { AppMessages } from './app-messages.svelte.ts';
+import { Autosave } from './autosave.ts';
+import type { AutosaveRecord } from './autosave.ts';
+import type { DemoTopic } from './demo-topics.ts';
+import { RecentFiles } from './recent-files.ts';
+import { TopicEditor } from './topic-editor.svelte.ts';
+import type { EditorSettings } from './topic-editor.svelte.ts';
+
+/** Where the earlier visit's unsaved work is kept while it is offered back. */
+export const EARLIER_AUTOSAVE_KEY = 'chancewise.autosave.earlier.v1';
+
+export interface TopicDocumentOptions {
+  readonly platform: Platform;
+  /** The examples; the first is the topic shown at start. */
+  readonly demos: readonly DemoTopic[];
+  readonly messages: AppMessages;
+  /** The editor's clock and scheduler (tests); the autosave is the document's own. */
+  readonly editor?: Omit<EditorSettings, 'autosave' | 'onAutosave' | 'fileName'>;
+}
+
+/** Where a file to open comes from: asked for, or (desktop menu) a path from the shell's recent list. */
+export interface OpenSource {
+  /** The recent file the person chose, to say so when they pick another. */
+  readonly recentName?: string;
+  readonly recentPath?: string;
+}
+
+export class TopicDocument {
+  readonly editor: TopicEditor;
+  /** Unsaved work from an earlier visit or a crash, offered back until restored or discarded. */
+  offer = $state.raw<AutosaveRecord | null>(null);
+  recent = $state.raw<readonly string[]>([]);
+  /** The start panel (new topic, files, examples) is open. */
+  startOpen = $state(false);
+
+  readonly #platform: Platform;
+  readonly #messages: AppMessages;
+  readonly #earlier: Autosave;
+  readonly #recentFiles: RecentFiles;
+
+  constructor(options: TopicDocumentOptions) {
+    const { platform, demos } = options;
+    this.#platform = platform;
+    this.#messages = options.messages;
+    const autosave = new Autosave(platform.storage);
+    this.#earlier = new Autosave(platform.storage, EARLIER_AUTOSAVE_KEY);
+    this.#recentFiles = new RecentFiles(platform.storage);
+    const firstDemo = demos[0];
+    const initial: TopicDraft = firstDemo === undefined ? blankDraft() : draftFromTopic(firstDemo.topic);
+    // Unsaved work from an earlier visit is moved aside before this visit autosaves over it.
+    const left = autosave.load();
+    if (left !== null && left.unsaved && JSON.stringify(left.draft) !== JSON.stringify(initial)) this.#earlier.save(left);
+    this.editor = new TopicEditor(initial, {
+      ...options.editor,
+      autosave,
+      onAutosave: (record) => platform.snapshot(record.draft, record.unsaved),
+    });
+    this.offer = this.#earlier.load();
+    this.recent = this.#recentFiles.list();
+  }
+
+  /** The window's title: an unsaved mark, the topic's decision, the app. */
+  get windowTitle(): string {
+    const { draft, hasUnsavedChanges } = this.editor;
+    return `${hasUnsavedChanges ? '• ' : ''}${draft.title.trim() === '' ? 'New topic' : draft.title} — Chancewise`;
+  }
+
+  /** Where the topic is kept: its file, or that it is an example or not saved yet. */
+  get fileLabel(): string {
+    return this.editor.fileName ?? (this.editor.draft.illustrative ? 'Example (not saved)' : 'Not saved yet');
+  }
+
+  /** The patient's name or reference is filled in. */
+  get patientGiven(): boolean {
+    const { draft } = this.editor;
+    return draft.patientName.trim() !== '' || draft.patientReference.trim() !== '';
+  }
+
+  /** Put a file name at the top of the recent list. */
+  remember(fileName: string): void {
+    this.recent = this.#recentFiles.add(fileName);
+  }
+
+  #load(draft: TopicDraft, fileName: string | null, what: string): void {
+    const hadWork = this.editor.hasUnsavedChanges;
+    this.editor.load(draft, { fileName, saved: true });
+    this.startOpen = false;
+    this.#messages.show({ tone: 'info', text: `${what}${hadWork ? ' Your previous topic is one undo away (Ctrl+Z).' : ''}`, undo: hadWork });
+  }
+
+  /** Open an opened file's text; `replacing` names the recent file the person chose, when another came. */
+  openText(picked: OpenedFile, replacing: string | null): void {
+    const opened = openTopicText(picked.name, picked.text);
+    if (!opened.ok) {
+      this.#messages.show({ tone: 'error', text: `${opened.message} Your current topic is unchanged.` });
+      return;
+    }
+    this.remember(opened.fileName);
+    const migrated = opened.migratedFrom === null ? '' : ' It was written by an older version and has been updated; saving writes the new format.';
+    const other = replacing !== null && replacing !== opened.fileName ? ` (you chose it in place of “${replacing}”)` : '';
+    this.#load(opened.draft, opened.fileName, `Opened “${opened.fileName}”${other}.${migrated}`);
+  }
+
+  /** Open a file: by asking, or (desktop menu) a path from the shell's recent list. */
+  async openFile(source: OpenSource = {}): Promise<void> {
+    try {
+      const platform = this.#platform;
+      const picked = source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
+      if (picked !== null) this.openText(picked, source.recentName ?? null);
+    } catch (error) {
+      this.#messages.fail('', error, ' Your current topic is unchanged.');
+    }
+  }
+
+  openDemo(demo: DemoTopic): void {
+    this.#load(draftFromTopic(demo.topic), null, `Opened the example “${demo.topic.title}”. Its numbers are invented.`);
+    this.#platform.topicReplaced();
+  }
+
+  newTopic(): void {
+    this.#load(blankDraft(), null, 'Started a new topic.');
+    this.#platform.topicReplaced();
+  }
+
+  /** Bring the offered unsaved work back, as unsaved; the topic it replaces is one undo away. */
+  restore(record: AutosaveRecord): void {
+    this.editor.load(record.draft, { fileName: record.fileName, saved: false });
+    this.#earlier.clear();
+    this.offer = null;
+    this.#messages.show({ tone: 'info', text: 'Your unsaved work is back. Undo (Ctrl+Z) returns to the example.' });
+  }
+
+  discardOffer(): void {
+    this.#earlier.clear();
+    this.offer = null;
+  }
+
+  /** Documents the desktop shell hands over: a file to open, or the last snapshot after a crash. */
+  receive(incoming: PlatformDocument): void {
+    if (incoming.kind === 'file') {
+      this.openText(incoming.file, null);
+      return;
+    }
+    const draft = parseDraft(incoming.content);
+    if (draft === null) {
+      this.#messages.show({ tone: 'error', text: 'A copy of unsaved work was found but could not be read.' });
+      return;
+    }
+    this.offer = { draft, fileName: incoming.fileName, savedAt: new Date().toISOString(), unsaved: true };
+  }
+}

@@ -1,0 +1,105 @@
+// @vitest-environment jsdom
+import { describe, expect, it } from 'vitest';
+import { colourPalette } from '../../src/render/palette.ts';
+import { buildSlide } from '../../src/teaching/build-slide.ts';
+import { drawSlidePeople, drawSwatch } from '../../src/teaching/draw-slide-people.ts';
+import { teachingMessagesEn } from '../../src/teaching/messages/en.ts';
+import { STONE, SCREENING, WANTED, demoTopic, fixtureTopic, itemOf } from './teaching-fixtures.ts';
+
+// One figure per person, the whole denominator drawn (Ancker et al. 2006); the changed groups
+// carry a pattern as well as a colour, so colour is never the only cue (WCAG 2.2, 1.4.1).
+
+const SVG = 'http://www.w3.org/2000/svg';
+
+function drawn(name: string, kind: 'helped' | 'harmed' | 'uncertainty', index: number) {
+  const panel = buildSlide(itemOf(demoTopic(name)), kind).panels[index];
+  if (panel === undefined) throw new Error('no panel');
+  const svg = document.createElementNS(SVG, 'svg');
+  drawSlidePeople(svg, panel.layout, panel.looks, `test-${kind}`);
+  return { svg, panel };
+}
+
+const lookCounts = (svg: SVGSVGElement): Record<string, number> => {
+  const found: Record<string, number> = {};
+  for (const path of svg.querySelectorAll('path.person')) {
+    const look = path.getAttribute('data-look') ?? '';
+    found[look] = (found[look] ?? 0) + 1;
+  }
+  return found;
+};
+
+describe('drawing a slide’s people', () => {
+  it('draws one path per person, each with its look, in a square view box for 100', () => {
+    const { svg } = drawn(STONE, 'helped', 1);
+    expect(svg.querySelectorAll('path.person')).toHaveLength(100);
+    expect(lookCounts(svg)).toEqual({ event: 24, helped: 16, free: 60 });
+    const [, , width, height] = (svg.getAttribute('viewBox') ?? '').split(' ').map(Number);
+    expect(width).toBeCloseTo(102.5, 6);
+    expect(height).toBeCloseTo(102.5, 6);
+  });
+
+  it('fills helped people with the dot pattern and harmed people with the hatch, both defined in the drawing', () => {
+    const helped = drawn(STONE, 'helped', 1).svg;
+    const dots = helped.querySelector('path[data-look="helped"]')?.getAttribute('fill') ?? '';
+    expect(dots).toMatch(/^url\(#test-helped-dots\)$/);
+    expect(helped.querySelector('pattern#test-helped-dots')).not.toBeNull();
+    const harmed = drawn(STONE, 'harmed', 1).svg;
+    expect(harmed.querySelector('path[data-look="harmed"]')?.getAttribute('fill')).toBe('url(#test-harmed-hatch)');
+    expect(harmed.querySelector('path[data-look="event"]')?.getAttribute('fill')).toBe(colourPalette.groups.event.fill);
+  });
+
+  it('draws the people who gain a wanted event with the helped dots and those who miss out with the harm hatch, keeping their groups', () => {
+    const item = itemOf(fixtureTopic(WANTED));
+    const helped = buildSlide(item, 'helped').panels[1];
+    const missed = buildSlide(item, 'harmed', teachingMessagesEn, 1).panels[1];
+    if (helped === undefined || missed === undefined) throw new Error('no panel');
+    const svg = document.createElementNS(SVG, 'svg');
+    drawSlidePeople(svg, helped.layout, helped.looks, 'gain');
+    const gained = [...svg.querySelectorAll('path[data-look="helped"]')];
+    expect(gained).toHaveLength(18);
+    for (const path of gained) {
+      expect(path.getAttribute('data-outcome')).toBe('caused');
+      expect(path.getAttribute('fill')).toBe('url(#gain-dots)');
+    }
+    drawSlidePeople(svg, missed.layout, missed.looks, 'miss');
+    const lost = [...svg.querySelectorAll('path[data-look="harmed"]')];
+    expect(lost).toHaveLength(10);
+    for (const path of lost) {
+      expect(path.getAttribute('data-outcome')).toBe('prevented');
+      expect(path.getAttribute('fill')).toBe('url(#miss-hatch)');
+    }
+  });
+
+  it('refuses looks that do not match the people', () => {
+    const { panel } = drawn(STONE, 'helped', 1);
+    expect(() => drawSlidePeople(document.createElementNS(SVG, 'svg'), panel.layout, panel.looks.slice(1), 'short')).toThrow(/100 people but 99 looks/);
+  });
+
+  it('draws uncertain people with a dashed outline and no fill colour of their group', () => {
+    const { svg } = drawn(STONE, 'uncertainty', 0);
+    const outlined = [...svg.querySelectorAll('path[data-look="uncertain"]')];
+    // Between 18 and 32 in 100 with extra water, 24 the estimate: 14 people outlined (derived).
+    expect(outlined).toHaveLength(14);
+    for (const path of outlined) {
+      expect(path.getAttribute('stroke-dasharray')).not.toBeNull();
+      expect(path.getAttribute('fill')).toBe(colourPalette.background);
+    }
+  });
+
+  it('draws 1000 people in blocks, wider than tall', () => {
+    const { svg } = drawn(SCREENING, 'helped', 1);
+    expect(svg.querySelectorAll('path.person')).toHaveLength(1000);
+    const [, , width, height] = (svg.getAttribute('viewBox') ?? '').split(' ').map(Number);
+    expect((width ?? 0) / (height ?? 1)).toBeCloseTo(54 / 21, 6);
+  });
+
+  it('draws a legend figure of one look in a unit box', () => {
+    const svg = document.createElementNS(SVG, 'svg');
+    drawSwatch(svg, 'harmed', 'swatch-test');
+    expect(svg.getAttribute('viewBox')).toBe('0 0 10 10');
+    const figures = svg.querySelectorAll(':scope > path');
+    expect(figures).toHaveLength(1);
+    expect(figures[0]?.getAttribute('fill')).toBe('url(#swatch-test-hatch)');
+    expect(svg.querySelector('pattern#swatch-test-hatch')).not.toBeNull();
+  });
+});

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { AppMessages, INFO_MILLISECONDS } from '../../../src/ui/state/app-messages.svelte.ts';
+
+/** Messages whose fading the test runs by hand. */
+function setUp() {
+  const waiting: { task: () => void; delay: number }[] = [];
+  const messages = new AppMessages((task, delay) => waiting.push({ task, delay }));
+  return { messages, waiting };
+}
+
+describe('AppMessages', () => {
+  it('lets information fade after nine seconds (common practice: time to read two sentences)', () => {
+    const { messages, waiting } = setUp();
+    messages.show({ tone: 'info', text: 'Saved “a.cwtopic”.' });
+    expect(messages.message?.text).toBe('Saved “a.cwtopic”.');
+    expect(waiting.map((entry) => entry.delay)).toEqual([INFO_MILLISECONDS]);
+    expect(INFO_MILLISECONDS).toBe(9000);
+    waiting[0]?.task();
+    expect(messages.message).toBeNull();
+  });
+
+  it('keeps an error until it is dismissed', () => {
+    const { messages, waiting } = setUp();
+    messages.show({ tone: 'error', text: 'The topic was not saved.' });
+    expect(waiting).toHaveLength(0);
+    expect(messages.message?.tone).toBe('error');
+    messages.dismiss();
+    expect(messages.message).toBeNull();
+  });
+
+  it('never lets an older message’s fading take a newer message away', () => {
+    const { messages, waiting } = setUp();
+    messages.show({ tone: 'info', text: 'first' });
+    messages.show({ tone: 'error', text: 'second' });
+    waiting[0]?.task();
+    expect(messages.message?.text).toBe('second');
+  });
+
+  it('says a failure in the error’s own words, between what failed and what still holds', () => {
+    const { messages } = setUp();
+    messages.fail('The chart could not be saved: ', new Error('the disk is full'), '.');
+    expect(messages.message).toEqual({ tone: 'error', text: 'The chart could not be saved: the disk is full.' });
+    messages.fail('', 'no permission', ' Your current topic is unchanged.');
+    expect(messages.message?.text).toBe('no permission Your current topic is unchanged.');
+  });
+});

@@ -1,0 +1,139 @@
+// @vitest-environment jsdom
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
+import { setTopicText } from '../../../src/ui/draft/draft-edits.ts';
+import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
+import { Autosave } from '../../../src/ui/state/autosave.ts';
+import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
+import { RecentFiles } from '../../../src/ui/state/recent-files.ts';
+import { EARLIER_AUTOSAVE_KEY, TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
+import { fakePlatform } from './fake-platform.ts';
+
+// The messages are the app's own words; a replaced topic stays one undo away (common practice of
+// editors: an action that replaces work can be undone).
+
+const [stone, screening] = DEMO_TOPICS;
+if (stone === undefined || screening === undefined) throw new Error('the demonstration topics are missing');
+const fixture = (name: string) => readFileSync(join(import.meta.dirname, '../../fixtures/topics', name), 'utf8');
+const screeningText = readFileSync(join(import.meta.dirname, '../../../assets/demo', screening.fileName), 'utf8');
+
+/** A document on a browser platform whose autosave never fires on its own. */
+function setUp(storage = new MemoryStorage(), kind: 'browser' | 'desktop' = 'browser') {
+  const platform = fakePlatform(kind, storage);
+  const messages = new AppMessages(() => undefined);
+  const topic = new TopicDocument({ platform, demos: DEMO_TOPICS, messages, editor: { schedule: () => () => undefined } });
+  return { platform, messages, topic };
+}
+
+describe('TopicDocument', () => {
+  it('starts on the first example, named as an unsaved example', () => {
+    const { topic } = setUp();
+    expect(topic.editor.draft.title).toBe(stone.topic.title);
+    expect(topic.fileLabel).toBe('Example (not saved)');
+    expect(topic.windowTitle).toBe(`${stone.topic.title} — Chancewise`);
+    expect(topic.offer).toBeNull();
+  });
+
+  it('offers back unsaved work from an earlier visit, and restores it as unsaved', () => {
+    const storage = new MemoryStorage();
+    const earlier = setTopicText(draftFromTopic(stone.topic), 'title', 'My own topic');
+    new Autosave(storage).save({ draft: earlier, fileName: 'mine.cwtopic', savedAt: '2026-11-03T09:30:00.000Z', unsaved: true });
+    const { topic, messages } = setUp(storage);
+    expect(topic.offer?.draft.title).toBe('My own topic');
+    if (topic.offer === null) throw new Error('no offer');
+    topic.restore(topic.offer);
+    expect(topic.offer).toBeNull();
+    expect(topic.editor.draft.title).toBe('My own topic');
+    expect(topic.editor.hasUnsavedChanges).toBe(true);
+    expect(topic.windowTitle).toBe('• My own topic — Chancewise');
+    expect(topic.fileLabel).toBe('mine.cwtopic');
+    expect(messages.message?.text).toBe('Your unsaved work is back. Undo (Ctrl+Z) returns to the example.');
+    expect(storage.getItem(EARLIER_AUTOSAVE_KEY)).toBeNull();
+  });
+
+  it('forgets the offered work when it is discarded', () => {
+    const storage = new MemoryStorage();
+    const earlier = setTopicText(draftFromTopic(stone.topic), 'title', 'Thrown away');
+    new Autosave(storage).save({ draft: earlier, fileName: null, savedAt: '2026-11-03T09:30:00.000Z', unsaved: true });
+    const first = setUp(storage);
+    first.topic.discardOffer();
+    expect(first.topic.offer).toBeNull();
+    expect(first.topic.editor.draft.title).toBe(stone.topic.title);
+  });
+
+  it('opens a picked file, puts it on the recent list and keeps the replaced work one undo away', async () => {
+    const { topic, platform, messages } = setUp();
+    topic.editor.change((draft) => setTopicText(draft, 'title', 'Work in progress'), 'title');
+    platform.picked = { name: 'screening.cwtopic', text: screeningText };
+    topic.startOpen = true;
+    await topic.openFile();
+    expect(topic.editor.draft.title).toBe(screening.topic.title);
+    expect(topic.startOpen).toBe(false);
+    expect(topic.recent).toEqual(['screening.cwtopic']);
+    expect(new RecentFiles(platform.storage).list()).toEqual(['screening.cwtopic']);
+    expect(messages.message).toEqual({
+      tone: 'info',
+      text: 'Opened “screening.cwtopic”. Your previous topic is one undo away (Ctrl+Z).',
+      undo: true,
+    });
+    topic.editor.undo();
+    expect(topic.editor.draft.title).toBe('Work in progress');
+  });
+
+  it('says when a recent file came back under another name, and when an older file was updated', async () => {
+    const { topic, platform, messages } = setUp(new MemoryStorage(), 'desktop');
+    platform.picked = { name: 'version-1-blood-pressure.json', text: fixture('version-1-blood-pressure.json') };
+    await topic.openFile({ recentName: 'old.cwtopic', recentPath: '/home/gp/old.cwtopic' });
+    expect(platform.recentPathsOpened).toEqual(['/home/gp/old.cwtopic']);
+    expect(messages.message?.text).toBe(
+      'Opened “version-1-blood-pressure.json” (you chose it in place of “old.cwtopic”). It was written by an older version and has been updated; saving writes the new format.',
+    );
+    expect(messages.message?.undo).toBe(false);
+  });
+
+  it('leaves the topic alone when a file cannot be read or opened, and says why', async () => {
+    const { topic, platform, messages } = setUp();
+    platform.picked = { name: 'empty.cwtopic', text: '  ' };
+    await topic.openFile();
+    expect(messages.message).toEqual({ tone: 'error', text: '“empty.cwtopic” is empty, so there is no topic to open. Your current topic is unchanged.' });
+    platform.picked = new Error('The file is not readable.');
+    await topic.openFile();
+    expect(messages.message).toEqual({ tone: 'error', text: 'The file is not readable. Your current topic is unchanged.' });
+    expect(topic.editor.draft.title).toBe(stone.topic.title);
+    expect(topic.recent).toEqual([]);
+  });
+
+  it('starts a new topic or an example and tells the desktop shell the topic was replaced', () => {
+    const { topic, platform, messages } = setUp();
+    topic.newTopic();
+    expect(topic.editor.draft.title).toBe('');
+    expect(topic.windowTitle).toBe('New topic — Chancewise');
+    expect(topic.fileLabel).toBe('Not saved yet');
+    expect(messages.message?.text).toBe('Started a new topic.');
+    topic.openDemo(screening);
+    expect(topic.editor.draft.title).toBe(screening.topic.title);
+    expect(messages.message?.text).toBe(`Opened the example “${screening.topic.title}”. Its numbers are invented.`);
+    expect(platform.replaced).toBe(2);
+  });
+
+  it('knows when the patient’s details are filled in', () => {
+    const { topic } = setUp();
+    expect(topic.patientGiven).toBe(false);
+    topic.editor.change((draft) => setTopicText(draft, 'patientReference', 'A-17'), 'patientReference');
+    expect(topic.patientGiven).toBe(true);
+  });
+
+  it('opens a file the desktop shell hands over, and offers a snapshot back after a crash', () => {
+    const { topic, messages } = setUp(new MemoryStorage(), 'desktop');
+    topic.receive({ kind: 'file', file: { name: 'screening.cwtopic', text: screeningText } });
+    expect(topic.editor.fileName).toBe('screening.cwtopic');
+    topic.receive({ kind: 'snapshot', content: draftFromTopic(stone.topic), fileName: 'stone.cwtopic' });
+    expect(topic.offer?.fileName).toBe('stone.cwtopic');
+    expect(topic.offer?.draft.title).toBe(stone.topic.title);
+    topic.receive({ kind: 'snapshot', content: { not: 'a draft' }, fileName: null });
+    expect(messages.message).toEqual({ tone: 'error', text: 'A copy of unsaved work was found but could not be read.' });
+  });
+});
