@@ -71,8 +71,14 @@ function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
   const periodYears = query.periods?.targetYears ?? null;
   const eventWanted = query.wanted === true;
   const kind = changeOf(result.perPeople.difference, eventWanted) === 'harms' ? 'harm' : 'benefit';
+  const comparison = result.comparisonRisk?.estimate ?? result.baselineUsed;
+  const intervention = result.interventionRisk?.estimate ?? null;
+  if (comparison === null || intervention === null) throw new UsageError(words.chartNeedsBaseline());
   return pairChart({
     perPeople: result.perPeople,
+    risks: { comparison, intervention },
+    level: result.level,
+    wordsPeople: result.wordsPeople,
     periodYears,
     ...(query.periods?.targetUnit === undefined ? {} : { periodUnit: query.periods.targetUnit }),
     kind,

@@ -110,7 +110,8 @@ describe('fitting any topic within the editor’s limits', () => {
         // Every tenth handout is also counted by poppler, from the file itself.
         if (built % 10 === 1) expect(pdfInfo(writePdf(handout.pdf)).Pages).toBe('1');
       }),
-      { numRuns: 200 },
+      // A fixed seed: the share that fits is a count over one sample, and should not move from run to run.
+      { numRuns: 200, seed: 7 },
     );
     expect(built + refused).toBe(200);
     // Most random topics fit; a refusal is for long texts on many options and outcomes.

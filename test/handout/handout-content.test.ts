@@ -43,9 +43,9 @@ describe('the content of a handout', () => {
     });
   });
 
-  it('keeps every other headline sentence of the wording, a paragraph per option', () => {
+  it('keeps every other headline sentence of the wording, a paragraph per option, the ranges’ one level after the last', () => {
     const rest = wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.text);
-    expect(content.paragraphs.flat()).toEqual(rest);
+    expect(content.paragraphs.flat()).toEqual([...rest.slice(0, -1), 'Each range is a 95% interval.', ...rest.slice(-1)]);
     expect(content.paragraphs).toHaveLength(2);
     expect(new Set(wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.kind))).toEqual(
       new Set(['change', 'range', 'certainty']),

@@ -48,7 +48,10 @@ describe('renderChartSvg people', () => {
 
   // A bare pair: baseline 20%, RR 0.75 → 15% (p1 = p0 × RR; Cochrane Handbook 5.1, §12.5.4), per 100.
   it('draws 200 people for a bare pair of 20% and RR 0.75 per 100', () => {
-    const model = pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } });
+    const model = pairChart({
+      perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null },
+      risks: { comparison: 0.2, intervention: 0.15 },
+    });
     const svg = parseSvg(render(model));
     expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
     expect(drawnCounts(svg, 0)).toEqual({ event: 20, free: 80 });
@@ -110,7 +113,7 @@ describe('renderChartSvg accessibility', () => {
       '95 do not have muscle pain',
     ]);
     expect([...svg.querySelectorAll('text.legend-note')].map(lineText)).toEqual([
-      'With option A, anywhere between 4 and 7 of these 100 could have muscle pain.',
+      'With option A, anywhere between 4 and 7 of these 100 could have muscle pain (range: 95% interval).',
     ]);
   });
 });
