@@ -104,8 +104,10 @@ describe('snapshots found at start-up', () => {
     );
     await plant('snapshot-9999999999999-1.json', genuine);
     acceptRestore();
-    const { controller, contents } = await start();
+    const { controller, contents, window } = await start();
     await controller.actions.rendererReady(contents);
+    // Save only once the restored snapshot has reached the page (under load it can take a moment).
+    await vi.waitFor(() => expect(window.webContents.sent.length).toBeGreaterThan(0));
     expect((await controller.actions.saveDocument(contents, text))?.fileName).toBe('kidney.cwtopic');
     expect(dialog.showSaveDialog).not.toHaveBeenCalled();
   });
