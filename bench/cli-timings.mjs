@@ -51,7 +51,11 @@ const processes = [
   { name: 'node -e 0 (floor)', command: ['-e', '0'], target: null },
   { name: 'compute --demo', command: [entry, 'compute', '--demo'], target: 250 },
   { name: 'chart --demo', command: [entry, 'chart', '--demo', '--out', join(scratch, 'chart.svg')], target: 400 },
-  { name: 'handout --demo', command: [entry, 'handout', '--demo', '--out', join(scratch, 'handout.pdf'), '--date', DATE], target: 700 },
+  {
+    name: 'handout --demo',
+    command: [entry, 'handout', '--demo', '--out', join(scratch, 'handout.pdf'), '--date', DATE],
+    target: 700,
+  },
 ];
 
 // One untimed run each first (a build after a source change, the disk cache), then the
@@ -67,7 +71,9 @@ let batch = null;
 if (batchSize > 0) {
   // The demo topics copied under distinct names, taken in turn, to make `batchSize` inputs.
   const demoFolder = join(ROOT, 'assets', 'demo');
-  const demos = readdirSync(demoFolder).filter((name) => name.endsWith('.json')).sort();
+  const demos = readdirSync(demoFolder)
+    .filter((name) => name.endsWith('.json'))
+    .sort();
   const inputs = join(scratch, 'inputs');
   mkdirSync(inputs);
   const files = Array.from({ length: batchSize }, (_, index) => {
@@ -80,7 +86,8 @@ if (batchSize > 0) {
   for (let run = 0; run < batchRuns; run += 1) {
     rmSync(out, { recursive: true, force: true });
     times.push(timed([entry, 'handout', ...files, '--out-dir', out, '--date', DATE]));
-    if (readdirSync(out).length !== batchSize) throw new Error(`the batch wrote ${readdirSync(out).length} of ${batchSize} handouts`);
+    if (readdirSync(out).length !== batchSize)
+      throw new Error(`the batch wrote ${readdirSync(out).length} of ${batchSize} handouts`);
   }
   batch = { name: `handout ×${batchSize} in one --out-dir call`, target: 20_000, ...summary(times) };
 }

@@ -15,14 +15,26 @@ const folder = mkdtempSync(join(tmpdir(), 'chancewise-e2e-cli-chart-'));
 /** Save the chart of `outcomeId` from the app, as the app's button does. */
 async function savedFromApp(page: Page, outcomeId: string): Promise<string> {
   const chart = page.locator(`article.outcome-result[data-outcome-id="${outcomeId}"]`);
-  const [download] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: 'Save chart as SVG' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    chart.getByRole('button', { name: 'Save chart as SVG' }).click(),
+  ]);
   return readFileSync(await download.path(), 'utf8');
 }
 
 /** The same chart from the command line, on the first demo topic (the one the app opens with). */
 function writtenByCli(outcomeId: string, showRange: boolean): string {
   const out = join(folder, `${outcomeId}-${String(showRange)}.svg`);
-  execFileSync(process.execPath, ['bin/chancewise.mjs', 'chart', '--demo', '--outcome', outcomeId, '--out', out, ...(showRange ? ['--show-range'] : [])]);
+  execFileSync(process.execPath, [
+    'bin/chancewise.mjs',
+    'chart',
+    '--demo',
+    '--outcome',
+    outcomeId,
+    '--out',
+    out,
+    ...(showRange ? ['--show-range'] : []),
+  ]);
   return readFileSync(out, 'utf8');
 }
 

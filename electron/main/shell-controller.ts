@@ -66,7 +66,11 @@ export async function startShellController(settings: ShellControllerSettings): P
     Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   };
 
-  const recentFiles = await loadRecentFiles({ filePath: path.join(userDataPath, 'recent-files.json'), pending, onChange: rebuildMenu });
+  const recentFiles = await loadRecentFiles({
+    filePath: path.join(userDataPath, 'recent-files.json'),
+    pending,
+    onChange: rebuildMenu,
+  });
   const recovery = await findRecoverySnapshot(snapshots);
   const window = await openMainWindow({
     preloadPath: path.join(settings.appPath, 'dist-electron', 'preload.cjs'),

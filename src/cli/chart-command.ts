@@ -52,7 +52,8 @@ export function writeOutput(path: string, contents: string | Uint8Array): void {
     writeFileSync(path, contents);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const reason = code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : (code ?? 'write failed');
+    const reason =
+      code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : (code ?? 'write failed');
     throw new UsageError(words.fileUnwritable(path, reason));
   }
 }

@@ -47,21 +47,29 @@ export function drawPage(doc: jsPDF, items: readonly PageItem[], palette: ChartP
       }
       case 'figure': {
         const { x, y, size } = item;
-        drawFigurePdf(doc, glyphFor(item.glyph), item.look, {
-          x,
-          y,
-          size,
-          tileOriginX: x,
-          tileOriginY: y,
-          tile: size / 4,
-          lineWidth: size * palette.outlineWidth,
-          cellSize: size,
-        }, palette);
+        drawFigurePdf(
+          doc,
+          glyphFor(item.glyph),
+          item.look,
+          {
+            x,
+            y,
+            size,
+            tileOriginX: x,
+            tileOriginY: y,
+            tile: size / 4,
+            lineWidth: size * palette.outlineWidth,
+            cellSize: size,
+          },
+          palette,
+        );
         break;
       }
       case 'chart': {
         doc.setFont(HANDOUT_FONT_FAMILY, 'normal');
-        const drawn = drawChartPdf(doc, item.model, { x: item.x, y: item.y, width: item.width }, palette, { fontSize: item.fontSize });
+        const drawn = drawChartPdf(doc, item.model, { x: item.x, y: item.y, width: item.width }, palette, {
+          fontSize: item.fontSize,
+        });
         if (Math.abs(drawn.height - item.height) > HEIGHT_TOLERANCE) {
           throw new Error(`the chart took ${drawn.height} mm, not the ${item.height} mm planned`);
         }

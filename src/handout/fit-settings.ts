@@ -66,7 +66,17 @@ const STEPS: readonly Partial<FitSettings>[] = [
   { cell100: 3.3, bodyLeading: 1.3, title: 14 },
   { body: 11.5, heading: 12 },
   { body: 11, heading: 11.5, space: 3 },
-  { cell100: 3, cell1000: 1.2, closeUpCell: 2.2, space: 2.5, title: 13, heading: 11, bodyLeading: 1.25, listLeading: 1.2, rowPadding: 0.7 },
+  {
+    cell100: 3,
+    cell1000: 1.2,
+    closeUpCell: 2.2,
+    space: 2.5,
+    title: 13,
+    heading: 11,
+    bodyLeading: 1.25,
+    listLeading: 1.2,
+    rowPadding: 0.7,
+  },
   { cell100: 2.8, space: 2, rowPadding: 0.5 },
 ];
 

@@ -142,7 +142,8 @@ function paragraphsOf(sentences: readonly WordingSentence[]): string[][] {
  * after each range when they differ.
  */
 function withLevels(sentences: readonly WordingSentence[], outcome: OutcomeResult, messages: HandoutMessages): string[][] {
-  const levelOf = (sentence: WordingSentence) => outcome.options.find((option) => option.optionId === sentence.optionId)?.level ?? null;
+  const levelOf = (sentence: WordingSentence) =>
+    outcome.options.find((option) => option.optionId === sentence.optionId)?.level ?? null;
   const ranges = sentences.filter((sentence) => sentence.kind === 'range' && levelOf(sentence) !== null);
   const levels = new Set(ranges.map(levelOf));
   const last = ranges[ranges.length - 1];
@@ -171,9 +172,15 @@ function closeUpOf(model: ChartModel, messages: HandoutMessages): CloseUp | null
  * for a side effect, its EU SmPC frequency band with the number beside the word, the row
  * written per as many people as it takes for the word and the number to agree.
  */
-function tableCell(option: OptionOutcomeResult, kind: 'benefit' | 'harm', denominator: WordsDenominator, messages: HandoutMessages): TableCell {
+function tableCell(
+  option: OptionOutcomeResult,
+  kind: 'benefit' | 'harm',
+  denominator: WordsDenominator,
+  messages: HandoutMessages,
+): TableCell {
   const risk = optionRisk(option);
-  const count = denominator === option.wordsPeople.denominator ? option.wordsPeople.intervention : peopleFor(risk ?? 0, denominator);
+  const count =
+    denominator === option.wordsPeople.denominator ? option.wordsPeople.intervention : peopleFor(risk ?? 0, denominator);
   const amount = amountOf(count, denominator, risk);
   const certainty: Certainty | null = option.isComparison ? null : option.certainty;
   const band = frequencyBand(risk);
@@ -196,7 +203,8 @@ function cellsInChartOrder(outcome: OutcomeResult, model: ChartModel): OptionOut
 function outcomeTable(result: TopicResult, model: ChartModel, headlineId: string, messages: HandoutMessages): OutcomeTable {
   const rowOf = (outcome: OutcomeResult): TableRow => {
     const options = cellsInChartOrder(outcome, model);
-    const denominator = outcome.kind === 'harm' ? rowDenominator(options.map(optionRisk), result.wordsDenominator) : result.wordsDenominator;
+    const denominator =
+      outcome.kind === 'harm' ? rowDenominator(options.map(optionRisk), result.wordsDenominator) : result.wordsDenominator;
     return {
       outcomeId: outcome.outcomeId,
       outcome: messages.capitalise(outcome.name.trim()),
@@ -266,16 +274,28 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
   const model = outcomeChart(result, headline.outcomeId);
   const table = outcomeTable(result, model, headline.outcomeId, messages);
   const rareRows = table.sections.some((section) => section.rows.some((row) => row.denominator !== result.wordsDenominator));
-  const sheet = { denominator: result.denominator, wordsDenominator: result.wordsDenominator, rareRows, years: result.periodYears, unit: result.periodUnit };
+  const sheet = {
+    denominator: result.denominator,
+    wordsDenominator: result.wordsDenominator,
+    rareRows,
+    years: result.periodYears,
+    unit: result.periodUnit,
+  };
   const sentences = handoutSentences(result, { showNnt: options.showNnt });
   const population = sentences.filter((sentence) => sentence.kind === 'population');
   const headlineSentences = sentences.filter((sentence) => sentence.outcomeId === headline.outcomeId);
   const frames = headlineSentences.filter((sentence) => FRAME_KINDS.has(sentence.kind));
   const others = headlineSentences.filter((sentence) => !FRAME_KINDS.has(sentence.kind));
   const captions = model.arrays.map((array) =>
-    frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text).join(' '),
+    frames
+      .filter((sentence) => sentence.optionId === array.optionId)
+      .map((sentence) => sentence.text)
+      .join(' '),
   );
-  const evidence = [messages.evidenceSummary(topic.evidence.summary), messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed))];
+  const evidence = [
+    messages.evidenceSummary(topic.evidence.summary),
+    messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed)),
+  ];
   if (headline.baselineSource.trim() !== '') evidence.push(messages.baselineSource(headline.name, headline.baselineSource));
   const clinician = options.clinician.trim() !== '' ? options.clinician.trim() : topic.clinician.trim();
   const questions = topic.questions.map((question) => question.trim()).filter((question) => question !== '');
@@ -302,12 +322,16 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     questions: { heading: messages.questionsHeading, items: questions.length > 0 ? questions : messages.defaultQuestions },
     caution: { heading: messages.cautionHeading, text: messages.caution(sheet) },
     footer: {
-      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join(messages.footerSeparator),
+      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join(
+        messages.footerSeparator,
+      ),
       right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
     wordingSentences: [
       ...population.map((sentence) => sentence.text),
-      ...model.arrays.flatMap((array) => frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text)),
+      ...model.arrays.flatMap((array) =>
+        frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text),
+      ),
       ...others.map((sentence) => sentence.text),
     ],
   };

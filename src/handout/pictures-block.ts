@@ -16,9 +16,7 @@ import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } f
 import { type MeasureWidth, POINTS_PER_MM, type TextBlock, type TextStyle, lineHeight, textBlock } from './text-layout.ts';
 
 /** The block, or the part whose words cannot fit their column. */
-export type PicturesBlock =
-  | { readonly ok: true; readonly block: Block }
-  | { readonly ok: false; readonly part: 'options' };
+export type PicturesBlock = { readonly ok: true; readonly block: Block } | { readonly ok: false; readonly part: 'options' };
 
 /** Padding left and right of table text, in millimetres. */
 const PAD_X = 1.8;
@@ -122,11 +120,26 @@ function blockOutline(layout: IconArrayLayout, block: number, x: number, y: numb
   const top = Math.min(...people.map((person) => person.y)) - offset;
   const right = Math.max(...people.map((person) => person.x)) + iconSize + offset;
   const bottom = Math.max(...people.map((person) => person.y)) + iconSize + offset;
-  return { kind: 'outline', x: x + left, y: y + top, width: right - left, height: bottom - top, colour, thickness: OUTLINE_WIDTH };
+  return {
+    kind: 'outline',
+    x: x + left,
+    y: y + top,
+    width: right - left,
+    height: bottom - top,
+    colour,
+    thickness: OUTLINE_WIDTH,
+  };
 }
 
 /** The enlarged block: its people at the close-up's cell size, outlined as the block is in the picture, and its label under it. */
-function closeUpFigure(layout: IconArrayLayout, label: string, wanted: boolean, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {
+function closeUpFigure(
+  layout: IconArrayLayout,
+  label: string,
+  wanted: boolean,
+  settings: FitSettings,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
   const width = layout.geometry.width * settings.closeUpCell;
   const scale = width / layout.geometry.width;
   const offset = OUTLINE_OFFSET * settings.closeUpCell;
@@ -165,7 +178,10 @@ function underPicture(
   if (besideWidth >= CAPTION_BESIDE_CLOSE_UP) {
     // The block under the picture's outlined block, the caption beside it, any note across both.
     const text = captionOf(besideWidth);
-    const top: Block = { items: [...figure.items, ...placeBlock(text, figureWidth + CLOSE_UP_GAP, 0)], height: Math.max(figure.height, text.height) };
+    const top: Block = {
+      items: [...figure.items, ...placeBlock(text, figureWidth + CLOSE_UP_GAP, 0)],
+      height: Math.max(figure.height, text.height),
+    };
     return stack([top, noteBlock], gap);
   }
   const centredFigure: Block = { items: placeBlock(figure, Math.max(0, (width - figureWidth) / 2), 0), height: figure.height };
@@ -202,9 +218,14 @@ export function picturesBlock(
   // chartFrame's own margin is half an em on each side of its one array.
   const margin = fontSize * 0.5;
   const unit = first.layout.geometry;
-  const column = Math.min(slot - fontSize * 1.2, (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width);
+  const column = Math.min(
+    slot - fontSize * 1.2,
+    (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width,
+  );
   const frameWidth = column + 2 * margin;
-  const frames = model.arrays.map((array) => chartFrame({ ...model, arrays: [array] }, { width: frameWidth, fontSize, measure: measureMm }));
+  const frames = model.arrays.map((array) =>
+    chartFrame({ ...model, arrays: [array] }, { width: frameWidth, fontSize, measure: measureMm }),
+  );
   if (frames.some((frame) => frame.arrays.some((array) => overflows(array.title, array.x + array.width, measureMm)))) {
     return { ok: false, part: 'options' };
   }
@@ -229,7 +250,16 @@ export function picturesBlock(
   const captions = content.chart.captions.map((caption, index) => {
     const layout = closeUp?.layouts[index];
     const enlarged = closeUp === null || layout === undefined ? null : { layout, label: closeUp.label };
-    return underPicture(caption, content.chart.notes[index] ?? null, enlarged, slot - 2 * CAPTION_PAD, model.wanted, settings, styles, measure);
+    return underPicture(
+      caption,
+      content.chart.notes[index] ?? null,
+      enlarged,
+      slot - 2 * CAPTION_PAD,
+      model.wanted,
+      settings,
+      styles,
+      measure,
+    );
   });
   const captionsBottom = picturesBottom + Math.max(0, ...captions.map((caption) => caption.height));
   const key = keyBlock(content, labelWidth - PAD_X, gridTop, Math.max(gridBottom, captionsBottom), styles, measure);
@@ -249,7 +279,8 @@ export function picturesBlock(
   if (closeUp !== null) {
     pictures.forEach((picture) => {
       const grid = picture.frame.arrays[0]?.grid;
-      if (grid !== undefined) items.push(blockOutline(grid.layout, closeUp.block, picture.x + grid.x, picture.y + grid.y, styles.colours.text));
+      if (grid !== undefined)
+        items.push(blockOutline(grid.layout, closeUp.block, picture.x + grid.x, picture.y + grid.y, styles.colours.text));
     });
   }
 

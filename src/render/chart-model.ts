@@ -126,13 +126,13 @@ export function outcomeChart(result: TopicResult, outcomeId: string, options: Ch
   if (outcome === undefined) throw new RangeError(`outcomeChart requires a known outcome (got ${outcomeId})`);
   const comparison = outcome.options.find((option) => option.isComparison);
   if (comparison === undefined) throw new RangeError(`outcomeChart requires a comparison for ${outcomeId}`);
-  const others = (options.optionIds ?? outcome.options.filter((option) => !option.isComparison).map((option) => option.optionId)).map(
-    (optionId) => {
-      const found = outcome.options.find((option) => option.optionId === optionId && !option.isComparison);
-      if (found === undefined) throw new RangeError(`outcomeChart requires a known option (got ${optionId})`);
-      return found;
-    },
-  );
+  const others = (
+    options.optionIds ?? outcome.options.filter((option) => !option.isComparison).map((option) => option.optionId)
+  ).map((optionId) => {
+    const found = outcome.options.find((option) => option.optionId === optionId && !option.isComparison);
+    if (found === undefined) throw new RangeError(`outcomeChart requires a known option (got ${optionId})`);
+    return found;
+  });
   const arm = (option: OptionOutcomeResult): ArmInput => ({
     optionId: option.optionId,
     name: option.name,
@@ -228,9 +228,9 @@ function buildChart(arms: readonly ArmInput[], context: ChartContext, options: C
   const arrays = arms.map((arm) => buildArray(arm, context, messages, arrangement, options.seed));
   const heading = messages.heading(context.outcomeName, context.periodYears, context.periodUnit);
   const illustrative = context.illustrative ? messages.illustrative : null;
-  const sentences = arrays.flatMap((array) => [array.summary, array.note, array.range?.text ?? null]).filter(
-    (sentence): sentence is string => sentence !== null,
-  );
+  const sentences = arrays
+    .flatMap((array) => [array.summary, array.note, array.range?.text ?? null])
+    .filter((sentence): sentence is string => sentence !== null);
   return {
     id: context.id,
     heading,
@@ -256,12 +256,19 @@ function buildArray(
   seed: number | undefined,
 ): ChartArray {
   if (arm.groups.denominator !== context.denominator) {
-    throw new RangeError(`outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`);
+    throw new RangeError(
+      `outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`,
+    );
   }
   if (arm.role === 'comparison' && (arm.groups.prevented !== 0 || arm.groups.caused !== 0)) {
     throw new RangeError(`outcomeChart requires the comparison to have only event and free people (${arm.name})`);
   }
-  const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears, periodUnit: context.periodUnit };
+  const titleValues = {
+    denominator: context.denominator,
+    option: arm.name,
+    periodYears: context.periodYears,
+    periodUnit: context.periodUnit,
+  };
   const title = context.bare
     ? messages.pairTitle(titleValues, arm.role)
     : arm.role === 'comparison'
@@ -295,7 +302,10 @@ function buildArray(
     labels,
     note: noteOf(arm, context, messages, cause),
     range,
-    summary: messages.summary(title, labels.map((label) => label.text)),
+    summary: messages.summary(
+      title,
+      labels.map((label) => label.text),
+    ),
     layout: iconArrayLayout(context.denominator, arm.groups, { arrangement, ...(seed === undefined ? {} : { seed }) }),
   };
 }

@@ -45,7 +45,8 @@ export function closeUpBlock(layouts: readonly IconArrayLayout[]): number | null
  */
 export function blockLayout(layout: IconArrayLayout, block: number): IconArrayLayout {
   if (layout.denominator !== 1000) throw new RangeError(`blockLayout requires a picture of 1000 (got ${layout.denominator})`);
-  if (!Number.isInteger(block) || block < 0 || block > 9) throw new RangeError(`blockLayout requires a block from 0 to 9 (got ${block})`);
+  if (!Number.isInteger(block) || block < 0 || block > 9)
+    throw new RangeError(`blockLayout requires a block from 0 to 9 (got ${block})`);
   const people = layout.people.slice(block * BLOCK, (block + 1) * BLOCK);
   const counts: Record<PersonGroup, number> = { event: 0, prevented: 0, caused: 0, free: 0 };
   for (const person of people) counts[person.group] += 1;

@@ -51,7 +51,19 @@ describe('chancewise chart', () => {
   // and 0.25 × 2.3 = 0.575, rounded half up).
   it('writes the contract attributes for a wanted event: data-wanted, the gained people as "caused" in the helped look', async () => {
     const out = join(folder, 'wanted.svg');
-    const args = ['chart', '--baseline', '25%', '--rr', '1.8', '--ci', '1.4,2.3', '--per', '100', '--outcome', 'pain gone by day 3'];
+    const args = [
+      'chart',
+      '--baseline',
+      '25%',
+      '--rr',
+      '1.8',
+      '--ci',
+      '1.4,2.3',
+      '--per',
+      '100',
+      '--outcome',
+      'pain gone by day 3',
+    ];
     expect(await run([...args, '--wanted', '--show-range', '--out', out])).toMatchObject({ code: 0, stderr: '' });
     const svg = readFileSync(out, 'utf8');
     expect(/<svg [^>]*data-wanted="true"/.test(svg)).toBe(true);

@@ -115,7 +115,9 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
     expect(bleed?.cells.map((cell) => cell.value)).toEqual(['rare: 5 in 10,000', 'uncommon: 15 in 10,000']);
     const camera = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'camera');
     expect(camera?.cells.map((cell) => cell.value)).toEqual(['common: 10 in 1000', 'common: 90 in 1000']);
-    expect(content.audience.at(-1)).toBe('Every number on this sheet is out of 1000 people unless it says otherwise, over the next 15 years.');
+    expect(content.audience.at(-1)).toBe(
+      'Every number on this sheet is out of 1000 people unless it says otherwise, over the next 15 years.',
+    );
   });
 });
 
@@ -140,7 +142,9 @@ describe('a rare outcome’s handout: baseline 0.1%, HR 0.8 (0.7 to 0.9)', () =>
   it('writes the table and the sheet at the words’ denominator, 10,000, with the pictures at 1000', () => {
     const rash = content.table.sections[0]?.rows[0];
     expect(rash?.cells.map((cell) => cell.value)).toEqual(['rare: 3 in 10,000', 'rare: 6 in 10,000']);
-    expect(content.audience.at(-1)).toBe('The pictures show 1000 people; every other number is out of 10,000, over the next 5 years.');
+    expect(content.audience.at(-1)).toBe(
+      'The pictures show 1000 people; every other number is out of 10,000, over the next 5 years.',
+    );
   });
 
   it('prints on one page, with no "same number" and no range of 1 to 1', () => {

@@ -76,7 +76,10 @@ describe('outcomeChart', () => {
   it('rejects an option counted per another denominator than the topic', () => {
     const mixed = topicFixture();
     const outcome = mixed.outcomes[0]!;
-    const perThousand = { ...outcome.options[1]!, groups: { denominator: 1000 as const, event: 150, prevented: 40, caused: 0, free: 810 } };
+    const perThousand = {
+      ...outcome.options[1]!,
+      groups: { denominator: 1000 as const, event: 150, prevented: 40, caused: 0, free: 810 },
+    };
     const broken = { ...mixed, outcomes: [{ ...outcome, options: [outcome.options[0]!, perThousand] }] };
     expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
   });
@@ -84,7 +87,10 @@ describe('outcomeChart', () => {
   it('rejects a comparison with people the option changed', () => {
     const mixed = topicFixture();
     const outcome = mixed.outcomes[0]!;
-    const comparison = { ...outcome.options[0]!, groups: { denominator: 100 as const, event: 15, prevented: 4, caused: 0, free: 81 } };
+    const comparison = {
+      ...outcome.options[0]!,
+      groups: { denominator: 100 as const, event: 15, prevented: 4, caused: 0, free: 81 },
+    };
     const broken = { ...mixed, outcomes: [{ ...outcome, options: [comparison, outcome.options[1]!] }] };
     expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
   });
@@ -123,6 +129,8 @@ describe('pairChart', () => {
       '5 avoid the outcome because of the option',
       '80 do not have the outcome',
     ]);
-    expect(pairChart({ perPeople, risks, outcomeName: 'a fracture' }).arrays[1]!.labels[1]!.text).toBe('5 avoid a fracture because of the option');
+    expect(pairChart({ perPeople, risks, outcomeName: 'a fracture' }).arrays[1]!.labels[1]!.text).toBe(
+      '5 avoid a fracture because of the option',
+    );
   });
 });

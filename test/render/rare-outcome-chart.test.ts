@@ -29,7 +29,9 @@ function rareTopic(baseline: number, effect: EnteredEffect, wanted = false): Top
         wanted,
         isHeadline: true,
         baseline: { risk: baseline, periodYears: 5, source: 'Invented' },
-        effects: [{ optionId: 'tablet', effect, source: 'Invented', followUpYears: 5, certainty: 'moderate', importance: 'important' }],
+        effects: [
+          { optionId: 'tablet', effect, source: 'Invented', followUpYears: 5, certainty: 'moderate', importance: 'important' },
+        ],
       },
     ],
     evidence: { summary: 'Invented.', reviewed: '2026-11-01' },
@@ -77,7 +79,9 @@ describe('a rare outcome: baseline 0.1%, hazard ratio 0.8 (0.7 to 0.9)', () => {
 describe('"the same number" only for an exact difference of 0', () => {
   it('keeps it for a ratio of exactly 1', () => {
     const result = computeTopic(rareTopic(0.001, { measure: 'rr', estimate: 1 }));
-    expect(outcomeChart(result, 'bleed').arrays[1]!.note).toBe('The same number have a serious bleed with and without the tablet.');
+    expect(outcomeChart(result, 'bleed').arrays[1]!.note).toBe(
+      'The same number have a serious bleed with and without the tablet.',
+    );
   });
 
   // Property: over baselines from 1 in a million to 2% and ratios from 0.5 to 2 (never 1), the

@@ -81,8 +81,18 @@ export interface HandoutMessages {
 }
 
 const MONTHS = [
-  'January', 'February', 'March', 'April', 'May', 'June',
-  'July', 'August', 'September', 'October', 'November', 'December',
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
 ];
 
 const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
@@ -178,7 +188,9 @@ export const handoutMessagesEn: HandoutMessages = {
     return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
   },
   evidenceReviewed: (reviewed) =>
-    reviewed.trim() === '' ? 'The date the research was checked was not given.' : `The research was last checked on ${reviewed.trim()}.`,
+    reviewed.trim() === ''
+      ? 'The date the research was checked was not given.'
+      : `The research was last checked on ${reviewed.trim()}.`,
   baselineSource: (outcome, source) => {
     const trimmed = source.trim().replace(/[.!?]+$/, '');
     return `Your starting chance of ${outcome} comes from: ${trimmed}.`;

@@ -99,7 +99,8 @@ type LabelWords = Readonly<Record<PersonGroup, (values: LabelValues) => string>>
 
 const event = ({ count, outcome, role }: LabelValues): string =>
   `${count} ${have(outcome, count)} ${outcome}${role === 'option' ? ' anyway' : ''}`;
-const free = ({ count, outcome }: LabelValues): string => `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`;
+const free = ({ count, outcome }: LabelValues): string =>
+  `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`;
 
 /** The shape every language's chart wording provides. */
 export interface ChartMessages {
@@ -154,8 +155,7 @@ export const chartMessagesEn: ChartMessages = {
     event,
     prevented: ({ count, outcome, option }: LabelValues) =>
       `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
-    caused: ({ count, outcome, option }: LabelValues) =>
-      `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
+    caused: ({ count, outcome, option }: LabelValues) => `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
     free,
   },
   wantedLabels: {
@@ -170,8 +170,7 @@ export const chartMessagesEn: ChartMessages = {
     free,
   },
   /** When an option changes nothing: the exact difference is 0. */
-  noDifference: (outcome: string, option: string) =>
-    `The same number ${have(outcome)} ${outcome} with and without ${option}.`,
+  noDifference: (outcome: string, option: string) => `The same number ${have(outcome)} ${outcome} with and without ${option}.`,
   /** "Fewer than 1 in 1000: about 2 in 10,000 fewer have a stroke with option A, too few to show as a whole person here." */
   belowOnePerson: ({ outcome, option, denominator, direction, count, wordsDenominator }: BelowOneValues) =>
     wordsDenominator === null || count === 0

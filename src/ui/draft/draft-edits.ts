@@ -75,9 +75,15 @@ function withEffectsFor(outcome: OutcomeDraft, options: readonly OptionDraft[]):
 /** Add an option (at most TOPIC_LIMITS.maxOptions), with a blank effect on every outcome. */
 export function addOption(draft: TopicDraft, name = ''): { draft: TopicDraft; optionId: string | null } {
   if (draft.options.length >= TOPIC_LIMITS.maxOptions) return { draft, optionId: null };
-  const id = freshId('option', draft.options.map((option) => option.id));
+  const id = freshId(
+    'option',
+    draft.options.map((option) => option.id),
+  );
   const options = [...draft.options, { id, name, isComparison: false }];
-  return { draft: { ...draft, options, outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, options)) }, optionId: id };
+  return {
+    draft: { ...draft, options, outcomes: draft.outcomes.map((outcome) => withEffectsFor(outcome, options)) },
+    optionId: id,
+  };
 }
 
 /** Remove an option (keeping at least TOPIC_LIMITS.minOptions); removing the comparison passes it to the first other option. */
@@ -143,7 +149,10 @@ export function setHeadline(draft: TopicDraft, outcomeId: string): TopicDraft {
  */
 export function addOutcome(draft: TopicDraft, kind: 'benefit' | 'harm'): { draft: TopicDraft; outcomeId: string | null } {
   if (draft.outcomes.length >= TOPIC_LIMITS.maxOutcomes) return { draft, outcomeId: null };
-  const id = freshId('outcome', draft.outcomes.map((outcome) => outcome.id));
+  const id = freshId(
+    'outcome',
+    draft.outcomes.map((outcome) => outcome.id),
+  );
   const outcome: OutcomeDraft = {
     id,
     name: '',

@@ -63,8 +63,6 @@ function unitField<Name extends string>(name: Name, unit: TimeUnit): Partial<Rec
 /** `opposite: true` when the effect was given for the opposite event; nothing otherwise. */
 const oppositeField = (draft: EffectDraft): { opposite?: true } => (draft.opposite ? { opposite: true } : {});
 
-
-
 function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect {
   const measure = draft.measure === 'counts' ? 'rr' : draft.measure;
   // An absolute reduction is typed in percentage points; the core takes a proportion.
@@ -137,7 +135,13 @@ function readOutcome(reader: Reader, draft: OutcomeDraft, index: number, effectO
     isHeadline: draft.isHeadline,
     baseline: {
       risk: draft.baselineRisk.trim() === '' ? null : draft.baselineRisk,
-      periodYears: readPeriod(reader, draft.baselinePeriodYears, draft.baselinePeriodUnit, `${field}.baseline.periodYears`, 'period of the baseline risk'),
+      periodYears: readPeriod(
+        reader,
+        draft.baselinePeriodYears,
+        draft.baselinePeriodUnit,
+        `${field}.baseline.periodYears`,
+        'period of the baseline risk',
+      ),
       ...unitField('periodUnit', draft.baselinePeriodUnit),
       source: draft.baselineSource,
     },

@@ -15,7 +15,10 @@ export const EXPORT_DPI = 300;
 /** Width and height of the SVG's view box. */
 function viewBoxSize(svgText: string): { width: number; height: number } {
   const found = /viewBox="([^"]*)"/.exec(svgText);
-  const [, , width, height] = (found?.[1] ?? '').trim().split(/[\s,]+/).map(Number);
+  const [, , width, height] = (found?.[1] ?? '')
+    .trim()
+    .split(/[\s,]+/)
+    .map(Number);
   if (width === undefined || height === undefined || !(width > 0) || !(height > 0)) throw new RangeError('chart has no view box');
   return { width, height };
 }

@@ -97,7 +97,11 @@ export class TopicDocument {
     const hadWork = this.editor.hasUnsavedChanges;
     this.editor.load(draft, { fileName, saved: true });
     this.startOpen = false;
-    this.#messages.show({ tone: 'info', text: `${what}${hadWork ? ' Your previous topic is one undo away (Ctrl+Z).' : ''}`, undo: hadWork });
+    this.#messages.show({
+      tone: 'info',
+      text: `${what}${hadWork ? ' Your previous topic is one undo away (Ctrl+Z).' : ''}`,
+      undo: hadWork,
+    });
   }
 
   /** Open an opened file's text; `replacing` names the recent file the person chose, when another came. */
@@ -108,7 +112,10 @@ export class TopicDocument {
       return;
     }
     this.remember(opened.fileName);
-    const migrated = opened.migratedFrom === null ? '' : ' It was written by an older version and has been updated; saving writes the new format.';
+    const migrated =
+      opened.migratedFrom === null
+        ? ''
+        : ' It was written by an older version and has been updated; saving writes the new format.';
     const other = replacing !== null && replacing !== opened.fileName ? ` (you chose it in place of “${replacing}”)` : '';
     this.#load(opened.draft, opened.fileName, `Opened “${opened.fileName}”${other}.${migrated}`);
   }
@@ -117,7 +124,8 @@ export class TopicDocument {
   async openFile(source: OpenSource = {}): Promise<void> {
     try {
       const platform = this.#platform;
-      const picked = source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
+      const picked =
+        source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
       if (picked !== null) this.openText(picked, source.recentName ?? null);
     } catch (error) {
       this.#messages.fail('', error, ' Your current topic is unchanged.');

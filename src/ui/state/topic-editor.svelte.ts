@@ -177,7 +177,8 @@ export class TopicEditor {
   #show(draft: TopicDraft): void {
     const check = checkDraft(draft, { per: this.per });
     if (check.result !== null) this.#lastValidDraft = draft;
-    const fallback = check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
+    const fallback =
+      check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per: this.per }).result : null;
     this.draft = draft;
     this.check = check;
     this.shown = check.result ?? fallback;

@@ -20,7 +20,9 @@ describe('chartMessagesEn', () => {
     expect(messages.optionTitle({ denominator: 1000, option: 'ACE inhibitor', periodYears: 0.5 })).toBe(
       'With ACE inhibitor: 1000 people over 6 months',
     );
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('With option A: 100 people over 1 year');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe(
+      'With option A: 100 people over 1 year',
+    );
     expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('With option A: 100 people');
   });
 
@@ -37,12 +39,16 @@ describe('chartMessagesEn', () => {
   });
 
   it('drops “anyway” for the comparison, where nothing is compared', () => {
-    expect(messages.labels.event({ count: 19, outcome: 'a stroke', option: 'no treatment', role: 'comparison' })).toBe('19 have a stroke');
+    expect(messages.labels.event({ count: 19, outcome: 'a stroke', option: 'no treatment', role: 'comparison' })).toBe(
+      '19 have a stroke',
+    );
   });
 
   it('states the range as people out of the denominator, with its level when known', () => {
     const values = { lower: 3, upper: 7, denominator: 100, outcome: 'a stroke', option: 'option A' };
-    expect(messages.range({ ...values, level: null })).toBe('With option A, anywhere between 3 and 7 of these 100 could have a stroke.');
+    expect(messages.range({ ...values, level: null })).toBe(
+      'With option A, anywhere between 3 and 7 of these 100 could have a stroke.',
+    );
     expect(messages.range({ ...values, level: 0.9 })).toBe(
       'With option A, anywhere between 3 and 7 of these 100 could have a stroke (range: 90% interval).',
     );

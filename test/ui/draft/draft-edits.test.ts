@@ -110,7 +110,13 @@ describe('draft edits', () => {
   test('an effect can be marked as given for the opposite event and its follow-up given in months', () => {
     const outcomeId = demo.outcomes[0]!.id;
     const optionId = demo.outcomes[0]!.effects[0]!.optionId;
-    const edited = setEffectField(setEffectField(demo, outcomeId, optionId, 'opposite', true), outcomeId, optionId, 'followUpUnit', 'months');
+    const edited = setEffectField(
+      setEffectField(demo, outcomeId, optionId, 'opposite', true),
+      outcomeId,
+      optionId,
+      'followUpUnit',
+      'months',
+    );
     expect(edited.outcomes[0]?.effects[0]).toMatchObject({ opposite: true, followUpUnit: 'months' });
     expect(edited.outcomes[0]?.effects[1]).toMatchObject({ opposite: false, followUpUnit: 'years' });
   });

@@ -23,7 +23,11 @@ function fakeShell(overrides: Partial<ChancewiseShellApi> = {}) {
     onDocument: (listener) => ((documentListener = listener), () => undefined),
     ...overrides,
   };
-  return { shell, calls, send: { command: (c: ShellCommand) => commandListener?.(c), document: (d: IncomingDocument) => documentListener?.(d) } };
+  return {
+    shell,
+    calls,
+    send: { command: (c: ShellCommand) => commandListener?.(c), document: (d: IncomingDocument) => documentListener?.(d) },
+  };
 }
 
 describe('desktopPlatform', () => {
@@ -40,7 +44,8 @@ describe('desktopPlatform', () => {
 
   test('turns a refused request into an error carrying the shell’s sentence', async () => {
     const { shell } = fakeShell({
-      openDocument: () => Promise.resolve({ ok: false, error: { code: 'not-a-topic-file', message: 'That file is not a topic.' } }),
+      openDocument: () =>
+        Promise.resolve({ ok: false, error: { code: 'not-a-topic-file', message: 'That file is not a topic.' } }),
     });
     await expect(desktopPlatform(shell).openTopicFile()).rejects.toThrow('That file is not a topic.');
   });

@@ -24,7 +24,10 @@ function setUp(kind: 'browser' | 'desktop' = 'desktop') {
     document,
     later: () => undefined,
     editor: { schedule: () => () => undefined },
-    loadMaker: () => Promise.resolve({ makeHandout: (request) => (made.push(request.paper), Promise.resolve({ ok: true, pdf: new Uint8Array([37]) })) }),
+    loadMaker: () =>
+      Promise.resolve({
+        makeHandout: (request) => (made.push(request.paper), Promise.resolve({ ok: true, pdf: new Uint8Array([37]) })),
+      }),
     today: () => new Date(2026, 10, 3),
   });
   return { app, platform, made };

@@ -98,7 +98,10 @@ describe('TopicDocument', () => {
     const { topic, platform, messages } = setUp();
     platform.picked = { name: 'empty.cwtopic', text: '  ' };
     await topic.openFile();
-    expect(messages.message).toEqual({ tone: 'error', text: '“empty.cwtopic” is empty, so there is no topic to open. Your current topic is unchanged.' });
+    expect(messages.message).toEqual({
+      tone: 'error',
+      text: '“empty.cwtopic” is empty, so there is no topic to open. Your current topic is unchanged.',
+    });
     platform.picked = new Error('The file is not readable.');
     await topic.openFile();
     expect(messages.message).toEqual({ tone: 'error', text: 'The file is not readable. Your current topic is unchanged.' });

@@ -146,6 +146,8 @@ describe('TopicEditor problems still to fill in', () => {
   test('a wrong value is a mistake even in a field never touched', () => {
     const { editor } = setUp();
     editor.load({ ...demo, periodYears: 'ten' }, { fileName: 'x.chancewise.json', saved: true });
-    expect(editor.problemsFor('periodYears').map((found) => [found.problem.code, found.needed])).toEqual([['number-unparsable', false]]);
+    expect(editor.problemsFor('periodYears').map((found) => [found.problem.code, found.needed])).toEqual([
+      ['number-unparsable', false],
+    ]);
   });
 });

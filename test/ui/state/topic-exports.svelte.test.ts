@@ -16,7 +16,9 @@ import { fakePlatform } from './fake-platform.ts';
 const PDF_BYTES = new TextEncoder().encode('%PDF-1.7\n');
 
 /** Exports of the first example, with a handout maker that records what it was asked. */
-function setUp(made: () => Promise<Awaited<ReturnType<HandoutMaker['makeHandout']>>> = () => Promise.resolve({ ok: true, pdf: PDF_BYTES })) {
+function setUp(
+  made: () => Promise<Awaited<ReturnType<HandoutMaker['makeHandout']>>> = () => Promise.resolve({ ok: true, pdf: PDF_BYTES }),
+) {
   const platform = fakePlatform('desktop', new MemoryStorage());
   const messages = new AppMessages(() => undefined);
   const topic = new TopicDocument({ platform, demos: DEMO_TOPICS, messages, editor: { schedule: () => () => undefined } });
@@ -48,7 +50,9 @@ describe('TopicExports', () => {
     expect(requests[0]?.result).toBe(topic.editor.shown);
     expect(platform.savedHandouts.map((saved) => saved.name)).toEqual(['ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf']);
     expect(platform.savedHandouts[0]?.pdf).toBe(PDF_BYTES);
-    expect(messages.message?.text).toBe('The handout is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf”. Open it to print it.');
+    expect(messages.message?.text).toBe(
+      'The handout is saved as “ways-to-cut-the-chance-of-a-second.cwtopic-handout.pdf”. Open it to print it.',
+    );
   });
 
   it('makes the menu’s handout on A4 without the number needed to treat', async () => {
@@ -86,7 +90,9 @@ describe('TopicExports', () => {
     expect(platform.savedFiles).toHaveLength(1);
     expect(platform.savedFiles[0]?.name).toBe(`ways-to-cut-the-chance-of-a-second.cwtopic-${model.id}.svg`);
     expect(platform.savedFiles[0]?.type).toBe('image/svg+xml');
-    expect(String(platform.savedFiles[0]?.contents)).toMatch(/^<\?xml version="1\.0" encoding="UTF-8"\?>\s*<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
+    expect(String(platform.savedFiles[0]?.contents)).toMatch(
+      /^<\?xml version="1\.0" encoding="UTF-8"\?>\s*<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/,
+    );
   });
 
   it('says when a chart could not be saved', async () => {

@@ -17,7 +17,8 @@ export const cliMessages = {
   notWithTopic: (flag: string) => `${flag} cannot be used with a topic file or --demo: the topic holds its own numbers.`,
   topicAndDemo: () => 'Give a topic file or --demo, not both.',
   overAndTo: () => 'Give both --over YEARS (the period the baseline covers) and --to YEARS (the period wanted), or neither.',
-  periodsWithArr: () => '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
+  periodsWithArr: () =>
+    '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
   levelWithoutInterval: () => '--level is the level of --ci; give --ci LOW,HIGH too, or leave --level out.',
   ciFormat: (value: string) => `--ci "${value}" is not an interval. Write LOW,HIGH, for example --ci 0.6,0.9.`,
   perValue: (value: string) =>

@@ -31,28 +31,41 @@ describe('exportHandoutPdf()', () => {
   it('starts the dialog in the documents folder with the suggested name, and writes the bytes where chosen', async () => {
     const target = path.join(base, 'chosen.pdf');
     const chooseHandoutSavePath = vi.fn(async () => target);
-    const exported = await exportHandoutPdf({ suggestedName: 'heart-handout', bytes: pdfBytes }, { chooseHandoutSavePath }, '/home/nurse/Documents');
+    const exported = await exportHandoutPdf(
+      { suggestedName: 'heart-handout', bytes: pdfBytes },
+      { chooseHandoutSavePath },
+      '/home/nurse/Documents',
+    );
     expect(chooseHandoutSavePath).toHaveBeenCalledWith(path.join('/home/nurse/Documents', 'heart-handout.pdf'));
     expect(exported).toEqual({ fileName: 'chosen.pdf' });
     expect(new Uint8Array(await fs.readFile(target))).toEqual(pdfBytes);
   });
 
   it('writes nothing when the dialog is cancelled', async () => {
-    const exported = await exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => null }, base);
+    const exported = await exportHandoutPdf(
+      { suggestedName: 'heart', bytes: pdfBytes },
+      { chooseHandoutSavePath: async () => null },
+      base,
+    );
     expect(exported).toBeNull();
     expect(await fs.readdir(base)).toEqual([]);
   });
 
   it('reports a write that fails as write-failed', async () => {
     const target = path.join(base, 'no-such-folder', 'heart.pdf');
-    await expect(exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => target }, base)).rejects.toMatchObject({
+    await expect(
+      exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => target }, base),
+    ).rejects.toMatchObject({
       code: 'write-failed',
     });
   });
 });
 
 describe('printHandout()', () => {
-  const contentsAnswering = (success: boolean, failureReason: string): PrintableContents & { print: ReturnType<typeof vi.fn> } => ({
+  const contentsAnswering = (
+    success: boolean,
+    failureReason: string,
+  ): PrintableContents & { print: ReturnType<typeof vi.fn> } => ({
     print: vi.fn((_options: { printBackground: boolean }, callback: (success: boolean, failureReason: string) => void) => {
       callback(success, failureReason);
     }),
@@ -72,6 +85,9 @@ describe('printHandout()', () => {
   });
 
   it('reports any other failure as print-failed, with the reason', async () => {
-    await expect(printHandout(contentsAnswering(false, 'failed'))).rejects.toMatchObject({ code: 'print-failed', message: expect.stringContaining('(failed)') });
+    await expect(printHandout(contentsAnswering(false, 'failed'))).rejects.toMatchObject({
+      code: 'print-failed',
+      message: expect.stringContaining('(failed)'),
+    });
   });
 });
