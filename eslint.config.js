@@ -8,7 +8,18 @@ import svelteConfig from './svelte.config.js';
 
 export default tseslint.config(
   {
-    ignores: ['dist/', 'dist-electron/', 'release/', 'node_modules/', 'test-results/', 'playwright-report/', 'bench/results/', 'coverage/'],
+    ignores: [
+      '**/dist/',
+      'dist-electron/',
+      'dist-cli/',
+      'release/',
+      'node_modules/',
+      'test-results/',
+      'playwright-report/',
+      'bench/results/',
+      'coverage/',
+      'out/',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,

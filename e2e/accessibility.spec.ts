@@ -8,21 +8,31 @@ async function seriousViolations(page: Page): Promise<string[]> {
   const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
   return results.violations
     .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).slice(0, 3).join('; ')})`);
+    .map(
+      (violation) =>
+        `${violation.id}: ${violation.help} (${violation.nodes
+          .map((node) => node.target.join(' '))
+          .slice(0, 3)
+          .join('; ')})`,
+    );
 }
 
 test.describe('accessibility and privacy', () => {
   test('the page is served with the strict policy, and the build carries it too', async ({ page }) => {
     const response = await page.goto('/');
     expect(response?.headers()['content-security-policy']).toBe(contentSecurityPolicy());
-    expect(await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content')).toContain("script-src 'self'");
+    expect(await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content')).toContain(
+      "script-src 'self'",
+    );
     // No inline script or style in the page as delivered.
     const html = (await response?.text()) ?? '';
     expect(html).not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/);
     expect(html).not.toMatch(/<style|\sstyle="/);
   });
 
-  test('has no serious or critical axe findings: on start, with problems, and with the start panel and save dialog open', async ({ page }) => {
+  test('has no serious or critical axe findings: on start, with problems, and with the start panel and save dialog open', async ({
+    page,
+  }) => {
     // Four full scans of a page with about 3000 chart elements: slow on a loaded machine.
     test.setTimeout(240_000);
     await openApp(page);

@@ -67,7 +67,9 @@ async function openChartPage(page: Page, query = ''): Promise<() => Promise<void
 /** Count of each `data-outcome` value in every array of the chart of `outcomeId`. */
 function drawnCounts(page: Page, outcomeId: string) {
   return page.evaluate((id) => {
-    const svg = [...document.querySelectorAll('#charts svg.people-chart')].find((chart) => chart.getAttribute('data-id-prefix') === `chart-${id}`);
+    const svg = [...document.querySelectorAll('#charts svg.people-chart')].find(
+      (chart) => chart.getAttribute('data-id-prefix') === `chart-${id}`,
+    );
     if (svg === undefined) return null;
     return Object.fromEntries(
       [...svg.querySelectorAll('g.chart-array')].map((array) => {
@@ -158,7 +160,9 @@ test.describe('people charts in the browser', () => {
         ['stone', 'benefit'],
         ['night', 'harm'],
       ] as const) {
-        const people = page.locator(`#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="water"] g.people`);
+        const people = page.locator(
+          `#charts svg[data-id-prefix="chart-${outcome}"] g.chart-array[data-option-id="water"] g.people`,
+        );
         const box = await people.boundingBox();
         expect(box).not.toBeNull();
         if (box === null) continue;

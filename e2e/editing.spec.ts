@@ -63,11 +63,15 @@ test.describe('editing a topic', () => {
     await expect(headache.locator('g.chart-array')).toHaveCount(4);
     // 10% × 1.5 = 15%: 5 more people in 100 (50 in 1000) have a headache with each option.
     const denominator = Number(await headache.locator('svg.people-chart').getAttribute('data-denominator'));
-    await expect(headache.locator('g.chart-array[data-option-id="water"] path[data-outcome="caused"]')).toHaveCount(denominator * 0.05);
+    await expect(headache.locator('g.chart-array[data-option-id="water"] path[data-outcome="caused"]')).toHaveCount(
+      denominator * 0.05,
+    );
     await page.screenshot({ path: `${SCREENS}/03-added-option-and-outcome.png`, fullPage: false });
   });
 
-  test('an impossible value is explained beside its field; what was typed stays, and results show as out of date', async ({ page }) => {
+  test('an impossible value is explained beside its field; what was typed stays, and results show as out of date', async ({
+    page,
+  }) => {
     await openApp(page);
     const baseline = page.getByLabel('Baseline risk', { exact: true }).first();
     await baseline.fill('150%');
@@ -118,12 +122,16 @@ test.describe('editing a topic', () => {
     await openApp(page);
     await page.getByRole('radio', { name: '1000 people' }).check();
     await expect(page.locator('table[data-outcome-id="stone"] tr[data-option-id="as-now"] td.people .value')).toHaveText('400');
-    await expect(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')).toHaveCount(1000);
+    await expect(
+      page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]'),
+    ).toHaveCount(1000);
     // 40% × 0.6 = 24%: 240 of 1000, so 160 avoid it.
     await expect(people(page, 'stone', 'water', 'prevented')).toHaveCount(160);
     await page.screenshot({ path: `${SCREENS}/05-per-1000.png` });
     await page.getByRole('radio', { name: '100 people' }).check();
-    await expect(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')).toHaveCount(100);
+    await expect(
+      page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]'),
+    ).toHaveCount(100);
   });
 
   test('the start panel offers a new topic and the other examples, each marked illustrative', async ({ page }) => {

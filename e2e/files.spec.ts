@@ -8,7 +8,10 @@ async function saveTopic(page: Page, includePatient = false): Promise<{ name: st
   const dialog = page.getByRole('dialog', { name: 'Save the topic' });
   await expect(dialog).toBeVisible();
   if (includePatient) await dialog.getByLabel(/Include the patient/).check();
-  const [download] = await Promise.all([page.waitForEvent('download'), dialog.getByRole('button', { name: 'Save file' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    dialog.getByRole('button', { name: 'Save file' }).click(),
+  ]);
   const path = await download.path();
   return { name: download.suggestedFilename(), text: await readFile(path, 'utf8') };
 }
@@ -77,7 +80,10 @@ test.describe('files', () => {
   test('charts are saved as SVG 180 mm wide and as PNG at 300 dpi', async ({ page }) => {
     await openApp(page);
     const chart = page.locator('article.outcome-result').first();
-    const [svgDownload] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: 'Save chart as SVG' }).click()]);
+    const [svgDownload] = await Promise.all([
+      page.waitForEvent('download'),
+      chart.getByRole('button', { name: 'Save chart as SVG' }).click(),
+    ]);
     const svg = await readFile(await svgDownload.path(), 'utf8');
     expect(svgDownload.suggestedFilename()).toMatch(/-stone\.svg$/);
     expect(svg.startsWith('<?xml version="1.0" encoding="UTF-8"?>')).toBe(true);
@@ -85,7 +91,10 @@ test.describe('files', () => {
     // The headline chart: 40 with no change, 24 with extra water and 18 with the citrate drink have a stone.
     expect((svg.match(/data-outcome="event"/g) ?? []).length).toBe(40 + 24 + 18);
 
-    const [pngDownload] = await Promise.all([page.waitForEvent('download'), chart.getByRole('button', { name: /Save as PNG/ }).click()]);
+    const [pngDownload] = await Promise.all([
+      page.waitForEvent('download'),
+      chart.getByRole('button', { name: /Save as PNG/ }).click(),
+    ]);
     const png = await readFile(await pngDownload.path());
     expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
     // IHDR width: 180 mm at 300 dpi = 180 / 25.4 × 300 = 2125.98, so 2126 pixels.

@@ -68,7 +68,9 @@ export async function openApp(page: Page): Promise<void> {
 
 /** The people of one option's array in one outcome's chart, by group. */
 export function people(page: Page, outcomeId: string, optionId: string, group: string) {
-  return page.locator(`article[data-outcome-id="${outcomeId}"] g.chart-array[data-option-id="${optionId}"] path[data-outcome="${group}"]`);
+  return page.locator(
+    `article[data-outcome-id="${outcomeId}"] g.chart-array[data-option-id="${optionId}"] path[data-outcome="${group}"]`,
+  );
 }
 
 /** Where screenshots go. */

@@ -34,12 +34,16 @@ test.describe('a rare outcome', () => {
     await openFile(page, 'rare-bleed.cwtopic', writeTopicFile(RARE, { includePatient: false }));
     const table = page.locator('table[data-outcome-id="bleed"]');
     await expect(table).toBeVisible();
-    await expect(page.locator('.basis')).toContainText('The pictures show 1000 people like this, over 1 year; the tables and words count per 10,000');
+    await expect(page.locator('.basis')).toContainText(
+      'The pictures show 1000 people like this, over 1 year; the tables and words count per 10,000',
+    );
     await expect(table.getByRole('columnheader', { name: /out of 10,000/ })).toBeVisible();
     const row = table.locator('tr[data-option-id="tablet"]');
     await expect(row.locator('td .value')).toHaveText(['8', '2 fewer', '0.08%', 'NNTB 5003']);
     await expect(row.locator('th')).toContainText('ranges: 95% interval');
-    await expect(page.locator('article[data-outcome-id="bleed"] .words')).toContainText('about 2 of those 10,000 people avoid a serious bleed');
+    await expect(page.locator('article[data-outcome-id="bleed"] .words')).toContainText(
+      'about 2 of those 10,000 people avoid a serious bleed',
+    );
     await expect(page.locator('article[data-outcome-id="bleed"]')).not.toContainText(/no difference|no change/);
     await expect(page.locator('.footnote')).toContainText('Ranges are 95% intervals for the effect');
     await page.screenshot({ path: `${SCREENS}/rare-01-results.png`, fullPage: true });
@@ -47,19 +51,27 @@ test.describe('a rare outcome', () => {
     expect(watch.pageErrors).toEqual([]);
   });
 
-  test('a reversed interval typed in the editor marks both boxes with one message, and fixing it clears both', async ({ page, watch }) => {
+  test('a reversed interval typed in the editor marks both boxes with one message, and fixing it clears both', async ({
+    page,
+    watch,
+  }) => {
     await openApp(page);
     await openFile(page, 'rare-bleed.cwtopic', writeTopicFile(RARE, { includePatient: false }));
     await lower(page).fill('0.9');
     await upper(page).fill('0.7');
     for (const box of [lower(page), upper(page)]) {
       await expect(box).toHaveAttribute('aria-invalid', 'true');
-      expect(await description(page, box)).toContain('The limits are the wrong way round: the lower limit, 0.9, is above the upper limit, 0.7.');
+      expect(await description(page, box)).toContain(
+        'The limits are the wrong way round: the lower limit, 0.9, is above the upper limit, 0.7.',
+      );
       // The red border of a marked box (the app's --problem colour), not only the attribute.
       expect(await box.evaluate((element) => getComputedStyle(element).borderTopWidth)).toBe('2px');
     }
     await expect(page.locator('.stale-banner')).toBeVisible();
-    await page.locator('fieldset.effect').first().screenshot({ path: `${SCREENS}/rare-03-reversed-typed.png` });
+    await page
+      .locator('fieldset.effect')
+      .first()
+      .screenshot({ path: `${SCREENS}/rare-03-reversed-typed.png` });
     await lower(page).fill('0.7');
     await upper(page).fill('0.9');
     await expect(lower(page)).toHaveAttribute('aria-invalid', 'false');

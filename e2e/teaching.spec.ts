@@ -18,19 +18,49 @@ const SIZES = [
 
 /** Every slide of the kidney stone topic: its step, its heading, and words it must show (from the computed numbers and the core's wording). */
 const STEPS: readonly (readonly [string, string, readonly string[]])[] = [
-  ['title', 'Ways to cut the chance of a second kidney stone (illustrative)', ['Every number is over 5 years.', 'Comparing extra water each day with no change.']],
+  [
+    'title',
+    'Ways to cut the chance of a second kidney stone (illustrative)',
+    ['Every number is over 5 years.', 'Comparing extra water each day with no change.'],
+  ],
   ['baseline', 'Without the option', ['40 in 100', 'have another kidney stone over 5 years', '60 in 100']],
   ['with-option', 'With the option', ['No change', 'Extra water each day', '24 in 100', 'without it (no change)']],
   ['helped', 'Who is helped', ['16 in 100', 'avoid another kidney stone because of extra water each day', 'have it anyway']],
-  ['harmed', 'Who is harmed (1 of 2)', ['9 in 100', 'get broken sleep from passing urine at night because of extra water each day']],
+  [
+    'harmed',
+    'Who is harmed (1 of 2)',
+    ['9 in 100', 'get broken sleep from passing urine at night because of extra water each day'],
+  ],
   ['harmed', 'Who is harmed (2 of 2)', ['an upset stomach bad enough to stop']],
   ['uncertainty', 'How sure are we?', ['could be anywhere between 8 and 22 in 100', 'Certainty of the evidence: moderate']],
-  ['patient-words', 'What the patient hears (1 of 2)', ['No change: about 40 in 100 people like you will have another kidney stone in the next 5 years.']],
+  [
+    'patient-words',
+    'What the patient hears (1 of 2)',
+    ['No change: about 40 in 100 people like you will have another kidney stone in the next 5 years.'],
+  ],
   ['patient-words', 'What the patient hears (2 of 2)', ['About 9 in 100 get broken sleep']],
-  ['framing', 'One result, four ways', ['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1', '100 ÷ 16 = 6.25, rounded up: 7', 'Akl 2011, Cochrane · Zipkin 2014']],
-  ['denominator', '100 or 1000 people?', ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009']],
+  [
+    'framing',
+    'One result, four ways',
+    [
+      '40% lower risk',
+      '16 in 100 fewer',
+      'Treat 7 to prevent 1',
+      '100 ÷ 16 = 6.25, rounded up: 7',
+      'Akl 2011, Cochrane · Zipkin 2014',
+    ],
+  ],
+  [
+    'denominator',
+    '100 or 1000 people?',
+    ['100 people', '1000 people', 'risks seemed more serious', 'Galesic, Garcia-Retamero & Gigerenzer 2009'],
+  ],
   ['arrangement', 'Grouped or scattered?', ['Grouped', 'Scattered', 'overestimated more', 'Ancker, Weber & Kukafka 2011']],
-  ['incremental', 'Two totals, or the change itself?', ['Two totals', 'Change as its own group', 'Without it (no change): 40 in 100.', 'J Health Commun 2008;13:107']],
+  [
+    'incremental',
+    'Two totals, or the change itself?',
+    ['Two totals', 'Change as its own group', 'Without it (no change): 40 in 100.', 'J Health Commun 2008;13:107'],
+  ],
 ];
 
 /**
@@ -39,16 +69,47 @@ const STEPS: readonly (readonly [string, string, readonly string[]])[] = [
  * wanted event made less likely.
  */
 const WANTED_STEPS: readonly (readonly [string, string, readonly string[]])[] = [
-  ['title', 'Taking a night-time antihistamine tablet for an itchy rash (illustrative example)', ['Every number counts what happens by day 3.']],
+  [
+    'title',
+    'Taking a night-time antihistamine tablet for an itchy rash (illustrative example)',
+    ['Every number counts what happens by day 3.'],
+  ],
   ['baseline', 'Without the option', ['30 in 100', 'have relief from the itch by day 3']],
   ['with-option', 'With the option', ['48 in 100', 'have relief from the itch with the night-time tablet']],
   ['helped', 'Who is helped', ['18 in 100', 'have relief from the itch because of the night-time tablet', 'have it anyway']],
   ['harmed', 'Who is harmed (1 of 2)', ['12 in 100', 'get drowsiness the next day because of the night-time tablet']],
-  ['harmed', 'Who is harmed (2 of 2)', ['10 in 100', 'miss out on feeling alert the next morning because of the night-time tablet']],
-  ['uncertainty', 'How sure are we?', ['the number of extra people who have relief from the itch could be anywhere between 9 and 30 in 100']],
-  ['patient-words', 'What the patient hears (1 of 2)', ['about 48 in 100 people like you will have relief from the itch by day 3', 'about 18 more of those 100 people']],
-  ['patient-words', 'What the patient hears (2 of 2)', ['About drowsiness the next day', 'about 10 fewer of those 100 people end up feeling alert the next morning']],
-  ['framing', 'One result, four ways', ['60% more people have it', '18 in 100 more', '48 − 30 = 18 more in 100', 'NNTB', 'Treat 6 for 1 more', '100 ÷ 18 = 5.56, rounded up: 6']],
+  [
+    'harmed',
+    'Who is harmed (2 of 2)',
+    ['10 in 100', 'miss out on feeling alert the next morning because of the night-time tablet'],
+  ],
+  [
+    'uncertainty',
+    'How sure are we?',
+    ['the number of extra people who have relief from the itch could be anywhere between 9 and 30 in 100'],
+  ],
+  [
+    'patient-words',
+    'What the patient hears (1 of 2)',
+    ['about 48 in 100 people like you will have relief from the itch by day 3', 'about 18 more of those 100 people'],
+  ],
+  [
+    'patient-words',
+    'What the patient hears (2 of 2)',
+    ['About drowsiness the next day', 'about 10 fewer of those 100 people end up feeling alert the next morning'],
+  ],
+  [
+    'framing',
+    'One result, four ways',
+    [
+      '60% more people have it',
+      '18 in 100 more',
+      '48 − 30 = 18 more in 100',
+      'NNTB',
+      'Treat 6 for 1 more',
+      '100 ÷ 18 = 5.56, rounded up: 6',
+    ],
+  ],
   ['denominator', '100 or 1000 people?', ['100 people', '1000 people']],
   ['arrangement', 'Grouped or scattered?', ['Grouped', 'Scattered']],
   ['incremental', 'Two totals, or the change itself?', ['Without it (no tablet): 30 in 100.']],
@@ -69,8 +130,14 @@ async function enter(page: Page): Promise<void> {
 /** Everything the editor holds: every field's value, the page title and the results' text. */
 async function editorState(page: Page): Promise<string> {
   return page.evaluate(() => {
-    const fields = [...document.querySelectorAll<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>('.editor-column input, .editor-column select, .editor-column textarea')].map(
-      (field) => (field instanceof HTMLInputElement && (field.type === 'checkbox' || field.type === 'radio') ? String(field.checked) : field.value),
+    const fields = [
+      ...document.querySelectorAll<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>(
+        '.editor-column input, .editor-column select, .editor-column textarea',
+      ),
+    ].map((field) =>
+      field instanceof HTMLInputElement && (field.type === 'checkbox' || field.type === 'radio')
+        ? String(field.checked)
+        : field.value,
     );
     const results = document.querySelector('.results-column')?.textContent?.replace(/\s+/g, ' ') ?? '';
     return JSON.stringify({ fields, title: document.title, results });
@@ -112,17 +179,30 @@ async function measure(page: Page): Promise<Measures> {
       }
       let colour: [number, number, number] = [255, 255, 255];
       for (const [red, green, blue, alpha] of layers.reverse()) {
-        colour = [red * alpha + colour[0] * (1 - alpha), green * alpha + colour[1] * (1 - alpha), blue * alpha + colour[2] * (1 - alpha)];
+        colour = [
+          red * alpha + colour[0] * (1 - alpha),
+          green * alpha + colour[1] * (1 - alpha),
+          blue * alpha + colour[2] * (1 - alpha),
+        ];
       }
       return colour;
     };
     const visible = (element: Element): boolean => {
       const box = element.getBoundingClientRect();
       const style = getComputedStyle(element);
-      return box.width > 2 && box.height > 2 && style.visibility !== 'hidden' && style.display !== 'none' && !element.closest('.visually-hidden');
+      return (
+        box.width > 2 &&
+        box.height > 2 &&
+        style.visibility !== 'hidden' &&
+        style.display !== 'none' &&
+        !element.closest('.visually-hidden')
+      );
     };
     const texts = [...root.querySelectorAll('*')].filter(
-      (element) => !(element instanceof SVGElement) && [...element.childNodes].some((node) => node.nodeType === Node.TEXT_NODE && (node.textContent ?? '').trim() !== '') && visible(element),
+      (element) =>
+        !(element instanceof SVGElement) &&
+        [...element.childNodes].some((node) => node.nodeType === Node.TEXT_NODE && (node.textContent ?? '').trim() !== '') &&
+        visible(element),
     );
     const headings = texts.filter((element) => /^H[1-6]$/.test(element.tagName));
     const lowContrast: string[] = [];
@@ -131,15 +211,22 @@ async function measure(page: Page): Promise<Measures> {
       const lighter = Math.max(luminance(foreground), luminance(backgroundOf(element)));
       const darker = Math.min(luminance(foreground), luminance(backgroundOf(element)));
       const ratio = (lighter + 0.05) / (darker + 0.05);
-      if (ratio < 7) lowContrast.push(`${element.tagName}.${element.className} “${element.textContent?.trim().slice(0, 30)}” ${ratio.toFixed(2)}:1`);
+      if (ratio < 7)
+        lowContrast.push(
+          `${element.tagName}.${element.className} “${element.textContent?.trim().slice(0, 30)}” ${ratio.toFixed(2)}:1`,
+        );
     }
-    const icons = [...root.querySelectorAll('svg.people[data-denominator="100"] path.person')].map((path) => path.getBoundingClientRect());
+    const icons = [...root.querySelectorAll('svg.people[data-denominator="100"] path.person')].map((path) =>
+      path.getBoundingClientRect(),
+    );
     const overflow: string[] = [];
     const html = document.documentElement;
     // The editor behind the view is longer than the screen; the page must not scroll while presenting.
-    if (html.scrollWidth > innerWidth || getComputedStyle(html).overflowY !== 'hidden') overflow.push(`page ${html.scrollWidth} wide, overflow ${getComputedStyle(html).overflowY}`);
+    if (html.scrollWidth > innerWidth || getComputedStyle(html).overflowY !== 'hidden')
+      overflow.push(`page ${html.scrollWidth} wide, overflow ${getComputedStyle(html).overflowY}`);
     const own = root.getBoundingClientRect();
-    if (own.left !== 0 || own.top !== 0 || own.width !== innerWidth || own.height !== innerHeight) overflow.push(`view ${own.width}×${own.height} at ${own.left},${own.top}`);
+    if (own.left !== 0 || own.top !== 0 || own.width !== innerWidth || own.height !== innerHeight)
+      overflow.push(`view ${own.width}×${own.height} at ${own.left},${own.top}`);
     const frame = root.querySelector('.frame');
     for (const box of [root, frame, root.querySelector('.stage')]) {
       if (box !== null && (box.scrollWidth > box.clientWidth + 1 || box.scrollHeight > box.clientHeight + 1)) {
@@ -151,7 +238,9 @@ async function measure(page: Page): Promise<Measures> {
       const box = element.getBoundingClientRect();
       if (box.width === 0 || element.closest('.visually-hidden')) continue;
       if (box.right > innerWidth + 0.5 || box.left < -0.5 || box.bottom > controlsTop + 0.5) {
-        overflow.push(`${element.tagName}.${element.getAttribute('class') ?? ''} ends at ${Math.round(box.right)}, ${Math.round(box.bottom)}`);
+        overflow.push(
+          `${element.tagName}.${element.getAttribute('class') ?? ''} ends at ${Math.round(box.right)}, ${Math.round(box.bottom)}`,
+        );
       }
     }
     return {
@@ -169,10 +258,20 @@ async function measure(page: Page): Promise<Measures> {
 /** Axe-core against WCAG 2.0, 2.1 and 2.2 A and AA, on the view; serious and critical findings fail. */
 async function seriousViolations(page: Page): Promise<string[]> {
   // The people inside a drawing are presentational (the drawing is one role="img" with its text), so axe skips them.
-  const results = await new AxeBuilder({ page }).include('dialog.teaching').exclude('dialog.teaching svg path').withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
+  const results = await new AxeBuilder({ page })
+    .include('dialog.teaching')
+    .exclude('dialog.teaching svg path')
+    .withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'])
+    .analyze();
   return results.violations
     .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .map((violation) => `${violation.id}: ${violation.help} (${violation.nodes.map((node) => node.target.join(' ')).slice(0, 3).join('; ')})`);
+    .map(
+      (violation) =>
+        `${violation.id}: ${violation.help} (${violation.nodes
+          .map((node) => node.target.join(' '))
+          .slice(0, 3)
+          .join('; ')})`,
+    );
 }
 
 /**
@@ -192,7 +291,9 @@ async function stepThrough(
     for (const text of words) await expect(slide(page)).toContainText(text);
     await expect(view(page).locator('.progress')).toHaveText(`${index + 1} / ${steps.length}`);
     // Taken before the measures are checked, so that a slide that fails them can be looked at.
-    await page.screenshot({ path: `${SCREENS}/${name}-${size.width}x${size.height}-${String(index + 1).padStart(2, '0')}-${step}.png` });
+    await page.screenshot({
+      path: `${SCREENS}/${name}-${size.width}x${size.height}-${String(index + 1).padStart(2, '0')}-${step}.png`,
+    });
     const found = await measure(page);
     expect(found.smallestText, `smallest text on ${where}`).toBeGreaterThanOrEqual(size.body - 0.01);
     expect(found.smallestHeading, `heading on ${where}`).toBeGreaterThanOrEqual(size.heading);
@@ -207,10 +308,18 @@ async function stepThrough(
 
 /** Open, from the view's menu, a teaching set of one topic file written inside it. */
 async function openSetOf(page: Page, setPath: string, topicPath: string): Promise<void> {
-  const set = { format: 'chancewise-teaching-set', version: 1, title: 'One topic', items: [{ topic: JSON.parse(readFileSync(topicPath, 'utf8')) as unknown }] };
+  const set = {
+    format: 'chancewise-teaching-set',
+    version: 1,
+    title: 'One topic',
+    items: [{ topic: JSON.parse(readFileSync(topicPath, 'utf8')) as unknown }],
+  };
   writeFileSync(setPath, JSON.stringify(set));
   await view(page).getByRole('button', { name: 'File…' }).click();
-  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), view(page).getByRole('button', { name: 'Open set…' }).click()]);
+  const [chooser] = await Promise.all([
+    page.waitForEvent('filechooser'),
+    view(page).getByRole('button', { name: 'Open set…' }).click(),
+  ]);
   await chooser.setFiles(setPath);
   await expect(view(page).getByRole('status')).toContainText('Opened the teaching set “One topic”: 1 topic.');
 }
@@ -225,13 +334,19 @@ for (const size of SIZES) {
   test.describe(`the teaching view at ${size.width} × ${size.height}`, () => {
     test.use({ viewport: { width: size.width, height: size.height } });
 
-    test('steps through every slide of the demonstration topic, large, legible, in contrast and inside the screen', async ({ page, watch }) => {
+    test('steps through every slide of the demonstration topic, large, legible, in contrast and inside the screen', async ({
+      page,
+      watch,
+    }) => {
       void watch;
       await enter(page);
       await stepThrough(page, size, STEPS, 'teaching');
     });
 
-    test('steps through every slide of a topic whose headline event is wanted, every harm on its own slide', async ({ page, watch }, testInfo) => {
+    test('steps through every slide of a topic whose headline event is wanted, every harm on its own slide', async ({
+      page,
+      watch,
+    }, testInfo) => {
       void watch;
       await enter(page);
       await openSetOf(page, testInfo.outputPath('wanted.teaching.json'), WANTED_TOPIC);
@@ -240,11 +355,15 @@ for (const size of SIZES) {
       // those who miss out on a wanted event (prevented) wear the harmed look.
       await page.keyboard.press('Home');
       for (let index = 0; index < 3; index += 1) await page.keyboard.press('ArrowRight');
-      await expect(slide(page).locator('figure[data-panel-id="option"] path.person[data-look="helped"][data-outcome="caused"]')).toHaveCount(18);
+      await expect(
+        slide(page).locator('figure[data-panel-id="option"] path.person[data-look="helped"][data-outcome="caused"]'),
+      ).toHaveCount(18);
       await expect(slide(page).locator('path.person[data-look="harmed"]')).toHaveCount(0);
       await page.keyboard.press('ArrowRight');
       await page.keyboard.press('ArrowRight');
-      await expect(slide(page).locator('figure[data-panel-id="option"] path.person[data-look="harmed"][data-outcome="prevented"]')).toHaveCount(10);
+      await expect(
+        slide(page).locator('figure[data-panel-id="option"] path.person[data-look="harmed"][data-outcome="prevented"]'),
+      ).toHaveCount(10);
     });
   });
 }
@@ -252,7 +371,10 @@ for (const size of SIZES) {
 test.describe('the teaching view', () => {
   test.use({ viewport: { width: 1280, height: 720 } });
 
-  test('goes full screen, steps forward and back with keyboard and clicker keys, and leaves with Escape, the topic unchanged', async ({ page, watch }) => {
+  test('goes full screen, steps forward and back with keyboard and clicker keys, and leaves with Escape, the topic unchanged', async ({
+    page,
+    watch,
+  }) => {
     void watch;
     await openApp(page);
     const before = await editorState(page);
@@ -312,18 +434,28 @@ test.describe('the teaching view', () => {
     expect(await seriousViolations(page)).toEqual([]);
   });
 
-  test('runs a teaching set of two topics opened with the file input, and reports a damaged set without losing the presentation', async ({ page, watch }, testInfo) => {
+  test('runs a teaching set of two topics opened with the file input, and reports a damaged set without losing the presentation', async ({
+    page,
+    watch,
+  }, testInfo) => {
     void watch;
     await enter(page);
     const menu = view(page).getByRole('button', { name: 'File…' });
     await menu.click();
-    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), view(page).getByRole('button', { name: 'Open set…' }).click()]);
+    const [chooser] = await Promise.all([
+      page.waitForEvent('filechooser'),
+      view(page).getByRole('button', { name: 'Open set…' }).click(),
+    ]);
     await chooser.setFiles('assets/teaching/framing-and-format.teaching.json');
-    await expect(view(page).getByRole('status')).toHaveText(/Opened the teaching set “Framing and format: two illustrative topics”: 2 topics\./);
+    await expect(view(page).getByRole('status')).toHaveText(
+      /Opened the teaching set “Framing and format: two illustrative topics”: 2 topics\./,
+    );
     await expect(view(page).locator('.progress')).toHaveText('1 / 18 · Topic 1 of 2');
     for (let index = 0; index < 11; index += 1) await page.keyboard.press('PageDown');
     await expect(view(page).locator('.progress')).toHaveText('12 / 18 · Topic 2 of 2');
-    await expect(slide(page).getByRole('heading', { level: 2 })).toHaveText('Having a home bowel screening test every 2 years (illustrative example)');
+    await expect(slide(page).getByRole('heading', { level: 2 })).toHaveText(
+      'Having a home bowel screening test every 2 years (illustrative example)',
+    );
     await page.keyboard.press('PageDown');
     await expect(slide(page)).toContainText('30 in 1000');
     await page.keyboard.press('PageDown');
@@ -353,12 +485,17 @@ test.describe('the teaching view', () => {
 
     // A damaged set: one message naming the field, and the presentation stays as it was.
     const damaged = testInfo.outputPath('damaged.teaching.json');
-    const text = JSON.parse(readFileSync('assets/teaching/framing-and-format.teaching.json', 'utf8')) as { items: { steps: string[] }[] };
+    const text = JSON.parse(readFileSync('assets/teaching/framing-and-format.teaching.json', 'utf8')) as {
+      items: { steps: string[] }[];
+    };
     const first = text.items[0];
     if (first !== undefined) first.steps = ['title', 'summary'];
     writeFileSync(damaged, JSON.stringify(text));
     await menu.click();
-    const [again] = await Promise.all([page.waitForEvent('filechooser'), view(page).getByRole('button', { name: 'Open set…' }).click()]);
+    const [again] = await Promise.all([
+      page.waitForEvent('filechooser'),
+      view(page).getByRole('button', { name: 'Open set…' }).click(),
+    ]);
     await again.setFiles(damaged);
     await expect(view(page).getByRole('alert')).toContainText('“damaged.teaching.json” is damaged at "items.0.steps.1"');
     await expect(view(page).getByRole('alert')).toContainText('found the text "summary". The presentation is unchanged.');
@@ -382,7 +519,10 @@ test.describe('the teaching view', () => {
     expect(svgText).toContain('avoid another kidney stone because of extra water each day');
     expect((svgText.match(/class="person"/g) ?? []).length).toBe(200);
     await menu.click();
-    const [set] = await Promise.all([page.waitForEvent('download'), view(page).getByRole('button', { name: 'Save set' }).click()]);
+    const [set] = await Promise.all([
+      page.waitForEvent('download'),
+      view(page).getByRole('button', { name: 'Save set' }).click(),
+    ]);
     const setText = readFileSync((await set.path()) ?? '', 'utf8');
     const saved = JSON.parse(setText) as { format: string; items: { topic: { topic: { title: string } } }[] };
     expect(saved.format).toBe('chancewise-teaching-set');

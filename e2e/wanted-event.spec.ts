@@ -31,7 +31,12 @@ async function tableRows(page: Page, outcomeId: string): Promise<string[][]> {
     rows.map((row) => {
       const value = (cell: Element | null | undefined) => cell?.querySelector('.value')?.textContent?.trim() ?? '—';
       const cells = [...row.querySelectorAll('td')];
-      return [row.querySelector('th')?.childNodes[0]?.textContent?.trim() ?? '', value(cells[0]), value(cells[1]), value(cells[3])];
+      return [
+        row.querySelector('th')?.childNodes[0]?.textContent?.trim() ?? '',
+        value(cells[0]),
+        value(cells[1]),
+        value(cells[3]),
+      ];
     }),
   );
 }
@@ -39,7 +44,10 @@ async function tableRows(page: Page, outcomeId: string): Promise<string[][]> {
 const SORE_THROAT = /sore throat/;
 
 test.describe('an outcome people want', () => {
-  test('the example shows more people with a pain-free throat as a benefit: NNTB, gained people and a chance', async ({ page, watch }) => {
+  test('the example shows more people with a pain-free throat as a benefit: NNTB, gained people and a chance', async ({
+    page,
+    watch,
+  }) => {
     await openApp(page);
     await openExample(page, SORE_THROAT);
     await expect(page.locator('.basis')).toContainText('over 3 days');
@@ -66,12 +74,17 @@ test.describe('an outcome people want', () => {
     if (wantedMark !== null) {
       // Where the charts mark their event's direction, a wanted event's chart says so and the side effect's does not.
       expect(wantedMark).toBe('true');
-      await expect(page.locator('article[data-outcome-id="stomach"] svg.people-chart').first()).toHaveAttribute('data-wanted', 'false');
+      await expect(page.locator('article[data-outcome-id="stomach"] svg.people-chart').first()).toHaveAttribute(
+        'data-wanted',
+        'false',
+      );
     }
 
     const words = page.locator('article[data-outcome-id="pain-free"] .words');
     await expect(words).toContainText('about 21 more of those 100 people have a pain-free throat');
-    await expect(words.locator('[data-audience="clinician"]')).toContainText('NNTB 5: treating 5 people like you with one steroid tablet for 3 days');
+    await expect(words.locator('[data-audience="clinician"]')).toContainText(
+      'NNTB 5: treating 5 people like you with one steroid tablet for 3 days',
+    );
     await expect(words).not.toContainText(/causes a pain-free|avoid a pain-free|risk of a pain-free/);
     await page.locator('article[data-outcome-id="pain-free"]').scrollIntoViewIfNeeded();
     await page.screenshot({ path: `${SCREENS}/wanted-01-results.png` });
@@ -103,7 +116,9 @@ test.describe('an outcome people want', () => {
     // where a risk ratio of 1.6 would give more than 100%, so the results wait for a fix and say why.
     await page.getByLabel('Over what period: unit').selectOption('weeks');
     await expect(page.getByRole('status').filter({ hasText: 'Out of date' })).toBeVisible();
-    await expect(page.getByText('A risk ratio of 1.6 at a baseline risk of 95.1% would mean a risk of 152.16%.').first()).toBeVisible();
+    await expect(
+      page.getByText('A risk ratio of 1.6 at a baseline risk of 95.1% would mean a risk of 152.16%.').first(),
+    ).toBeVisible();
     await page.screenshot({ path: `${SCREENS}/wanted-04-period-in-weeks.png` });
     await page.getByLabel('Over what period: unit').selectOption('days');
     await expect(page.locator('.basis')).toContainText('over 3 days');
@@ -115,7 +130,10 @@ test.describe('an outcome people want', () => {
     await openExample(page, SORE_THROAT);
     const handout = page.getByRole('region', { name: 'Handout for the patient' });
     await handout.getByLabel('Include the number needed to treat').check();
-    const [download] = await Promise.all([page.waitForEvent('download'), handout.getByRole('button', { name: 'Make the handout (PDF)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      handout.getByRole('button', { name: 'Make the handout (PDF)' }).click(),
+    ]);
     const path = await download.path();
     // Poppler's pdftotext reads the file independently of the code that wrote it.
     const text = execFileSync('pdftotext', [path, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
@@ -134,12 +152,18 @@ test.describe('older topic files', () => {
     {
       file: 'version-1-blood-pressure.json',
       outcome: 'stroke',
-      rows: [['no tablet', '3', '—', '—'], ['the tablet', '2', '1 fewer', 'NNTB 132']],
+      rows: [
+        ['no tablet', '3', '—', '—'],
+        ['the tablet', '2', '1 fewer', 'NNTB 132'],
+      ],
     },
     {
       file: 'version-2-knee-exercise.json',
       outcome: 'sore',
-      rows: [['no programme', '10', '—', '—'], ['the exercise programme', '18', '8 more', 'NNTH 12']],
+      rows: [
+        ['no programme', '10', '—', '—'],
+        ['the exercise programme', '18', '8 more', 'NNTH 12'],
+      ],
     },
   ] as const;
 

@@ -26,7 +26,15 @@ const median = (values) => {
 const address = await serveApp(projectRoot, { port, host: '127.0.0.1', build: true }, () => undefined);
 const browser = await chromium.launch({
   executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-  args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+    '--no-first-run',
+    '--disable-quic',
+  ],
 });
 const load = [];
 const typing = { 100: [], 1000: [] };

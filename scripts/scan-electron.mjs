@@ -27,7 +27,10 @@ const unexpected = [];
 for (const issue of result.issues) {
   const sample = typeof issue.sample === 'string' ? issue.sample : '';
   const match = accepted.findIndex(
-    (entry) => entry.check === issue.id && entry.file === issue.file && (entry.snippet === '' ? sample === '' || sample === 'N/A' : sample.includes(entry.snippet)),
+    (entry) =>
+      entry.check === issue.id &&
+      entry.file === issue.file &&
+      (entry.snippet === '' ? sample === '' || sample === 'N/A' : sample.includes(entry.snippet)),
   );
   if (match === -1) unexpected.push(issue);
   else used.add(match);
@@ -40,7 +43,8 @@ for (const issue of unexpected) {
   );
 }
 accepted.forEach((entry, index) => {
-  if (!used.has(index)) process.stdout.write(`note: accepted finding no longer reported, remove it from the list: ${entry.check} ${entry.file}\n`);
+  if (!used.has(index))
+    process.stdout.write(`note: accepted finding no longer reported, remove it from the list: ${entry.check} ${entry.file}\n`);
 });
 
 const summary = `electronegativity ${require('@doyensec/electronegativity/package.json').version} on electron/ (Electron ${electronVersion}): ${result.issues.length} finding(s), ${result.issues.length - unexpected.length} accepted, ${unexpected.length} new, ${result.errors.length} file error(s)`;

@@ -29,7 +29,8 @@ function electronExecutable() {
 function fetchElectron() {
   const installer = join(electronPackage, 'install.js');
   if (!existsSync(installer)) return { ok: false, why: 'the electron package is not installed (run npm ci)' };
-  if (process.env.CHANCEWISE_NO_DOWNLOAD === '1') return { ok: false, why: 'downloading is turned off (CHANCEWISE_NO_DOWNLOAD=1)' };
+  if (process.env.CHANCEWISE_NO_DOWNLOAD === '1')
+    return { ok: false, why: 'downloading is turned off (CHANCEWISE_NO_DOWNLOAD=1)' };
   // On a terminal a progress note is shown and wiped again, so a failure still leaves one line only.
   const note = process.stdout.isTTY === true;
   if (note) process.stdout.write('Fetching the Electron runtime for the desktop app (first start only)…');
@@ -37,9 +38,10 @@ function fetchElectron() {
   if (note) process.stdout.write('\r\u001b[K');
   if (result.status === 0 && electronExecutable() !== null) return { ok: true, why: '' };
   const output = `${result.stderr?.toString() ?? ''}${result.stdout?.toString() ?? ''}`;
-  const reason = /ENOTFOUND|EAI_AGAIN|fetch failed|ECONNREFUSED|ETIMEDOUT|ENETUNREACH/u.test(output) || result.error !== undefined
-    ? 'it could not be downloaded (offline?)'
-    : 'its download failed';
+  const reason =
+    /ENOTFOUND|EAI_AGAIN|fetch failed|ECONNREFUSED|ETIMEDOUT|ENETUNREACH/u.test(output) || result.error !== undefined
+      ? 'it could not be downloaded (offline?)'
+      : 'its download failed';
   return { ok: false, why: reason };
 }
 
@@ -82,7 +84,10 @@ async function startWeb(reason) {
 }
 
 function startDesktop(executable) {
-  for (const [script, label] of [['build', 'the app page'], ['build:electron', 'the desktop shell']]) {
+  for (const [script, label] of [
+    ['build', 'the app page'],
+    ['build:electron', 'the desktop shell'],
+  ]) {
     const built = runNpm(['run', '--silent', script]);
     if (built.status !== 0) return Promise.resolve(`building ${label} failed`);
   }
@@ -105,7 +110,11 @@ function startDesktop(executable) {
       process.off('SIGTERM', stop);
       const early = Date.now() - started < EARLY_EXIT_MS;
       if (early && code !== 0 && signal === null) {
-        const line = errors.split('\n').map((text) => text.trim()).find((text) => text !== '') ?? `exit code ${code}`;
+        const line =
+          errors
+            .split('\n')
+            .map((text) => text.trim())
+            .find((text) => text !== '') ?? `exit code ${code}`;
         resolve(`Electron stopped at start-up (${line.slice(0, 160)})`);
         return;
       }

@@ -41,10 +41,13 @@ function filesUnder(folder: string): string[] {
   });
 }
 
-const STATEMENT = /(?:^|[\s;])(import|export)\s+(type\s+)?(?:[^'"`;]*?\s+from\s+)?['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g;
+const STATEMENT =
+  /(?:^|[\s;])(import|export)\s+(type\s+)?(?:[^'"`;]*?\s+from\s+)?['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g;
 
 function importsOf(file: string): ImportLine[] {
-  const text = readFileSync(join(ROOT, file), 'utf8').replace(/\/\*[\s\S]*?\*\//g, '').replace(/^\s*\/\/.*$/gm, '');
+  const text = readFileSync(join(ROOT, file), 'utf8')
+    .replace(/\/\*[\s\S]*?\*\//g, '')
+    .replace(/^\s*\/\/.*$/gm, '');
   const found: ImportLine[] = [];
   for (const match of text.matchAll(STATEMENT)) {
     const specifier = match[3] ?? match[4];
@@ -125,7 +128,8 @@ describe('the layers', () => {
         if (layerOf(file) === layer) continue;
         for (const line of importsOf(file)) {
           const target = resolveLocal(file, line.specifier);
-          if (target !== null && layerOf(target) === layer && target !== entry) bypassing.push(`${file} imports ${target}, not ${entry}`);
+          if (target !== null && layerOf(target) === layer && target !== entry)
+            bypassing.push(`${file} imports ${target}, not ${entry}`);
         }
       }
     }

@@ -63,19 +63,27 @@ export async function timeAppLoad(browser, url, runs) {
     await page.addInitScript(watchInteractive);
     await page.goto(url);
     const times = await page
-      .waitForFunction(() => {
-        const state = /** @type {{ interactive: number | null, rendered: number | null } | undefined} */ (
-          /** @type {unknown} */ (window)['chancewiseBench']
-        );
-        return state !== undefined && state.rendered !== null ? state : null;
-      }, undefined, { timeout: 30_000 })
+      .waitForFunction(
+        () => {
+          const state = /** @type {{ interactive: number | null, rendered: number | null } | undefined} */ (
+            /** @type {unknown} */ (window)['chancewiseBench']
+          );
+          return state !== undefined && state.rendered !== null ? state : null;
+        },
+        undefined,
+        { timeout: 30_000 },
+      )
       .then((handle) => handle.jsonValue());
     interactive.push(times.interactive);
     rendered.push(times.rendered);
     const navigation = await page.evaluate(() => {
       const entry = /** @type {PerformanceNavigationTiming | undefined} */ (performance.getEntriesByType('navigation')[0]);
       const script = performance.getEntriesByType('resource').find((resource) => resource.name.endsWith('.js'));
-      return { responseEnd: entry?.responseEnd ?? null, scriptEnd: script?.responseEnd ?? null, contentLoaded: entry?.domContentLoadedEventEnd ?? null };
+      return {
+        responseEnd: entry?.responseEnd ?? null,
+        scriptEnd: script?.responseEnd ?? null,
+        contentLoaded: entry?.domContentLoadedEventEnd ?? null,
+      };
     });
     if (navigation.responseEnd !== null) responseEnd.push(navigation.responseEnd);
     if (navigation.scriptEnd !== null) scriptFetched.push(navigation.scriptEnd);
@@ -125,11 +133,21 @@ export async function timeInputToCharts(browser, url, settings) {
   await page.locator('.results svg.people-chart').first().waitFor();
   const chooser = page.waitForEvent('filechooser');
   await page.getByRole('button', { name: 'Open…' }).click();
-  await (await chooser).setFiles({ name: 'two-arrays.chancewise.json', mimeType: 'application/json', buffer: Buffer.from(twoArrayTopic(settings.projectRoot)) });
+  await (
+    await chooser
+  ).setFiles({
+    name: 'two-arrays.chancewise.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(twoArrayTopic(settings.projectRoot)),
+  });
   await page.getByRole('radio', { name: '1000 people' }).check();
   await page.waitForFunction(() => {
     const charts = document.querySelectorAll('.results svg.people-chart');
-    return charts.length === 1 && charts[0]?.getAttribute('data-denominator') === '1000' && charts[0].querySelectorAll('[data-outcome]').length === 2000;
+    return (
+      charts.length === 1 &&
+      charts[0]?.getAttribute('data-denominator') === '1000' &&
+      charts[0].querySelectorAll('[data-outcome]').length === 2000
+    );
   });
   const field = await page.getByLabel('Baseline risk', { exact: true }).first().elementHandle();
   if (field === null) throw new Error('the app has no baseline risk field');

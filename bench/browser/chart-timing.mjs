@@ -15,7 +15,17 @@ import { MARK_CATEGORIES, markedCpuSpans } from './trace-cpu.mjs';
  */
 export async function timeCharts(browser, url, settings) {
   /** @type {Record<'firstDraw' | 'firstDrawScript' | 'firstDrawCpu' | 'redraw' | 'redrawScript' | 'redrawCpu' | 'loadDraw' | 'bare' | 'bareCpu', number[]>} */
-  const samples = { firstDraw: [], firstDrawScript: [], firstDrawCpu: [], redraw: [], redrawScript: [], redrawCpu: [], loadDraw: [], bare: [], bareCpu: [] };
+  const samples = {
+    firstDraw: [],
+    firstDrawScript: [],
+    firstDrawCpu: [],
+    redraw: [],
+    redrawScript: [],
+    redrawCpu: [],
+    loadDraw: [],
+    bare: [],
+    bareCpu: [],
+  };
   for (let load = 0; load < settings.loads; load += 1) {
     const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
     const page = await context.newPage();

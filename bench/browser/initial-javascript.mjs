@@ -50,7 +50,12 @@ export function initialJavaScript(indexFile) {
     if (files.has(file)) continue;
     const code = readFileSync(file);
     const text = code.toString('utf8');
-    files.set(file, { file: relative(root, file), bytes: code.length, gzipBytes: gzipSync(code).length, pdfCode: text.includes(PDF_MARK) });
+    files.set(file, {
+      file: relative(root, file),
+      bytes: code.length,
+      gzipBytes: gzipSync(code).length,
+      pdfCode: text.includes(PDF_MARK),
+    });
     for (const specifier of staticImports(text)) queue.push(normalize(join(dirname(file), specifier)));
   }
   const list = [...files.values()];

@@ -17,5 +17,9 @@ export const CHROMIUM_ARGS = [
 
 /** Launch headless Chromium (`CHROMIUM_PATH`, default /usr/bin/chromium). */
 export function launchChromium() {
-  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', headless: true, args: CHROMIUM_ARGS });
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: CHROMIUM_ARGS,
+  });
 }

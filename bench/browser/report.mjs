@@ -25,6 +25,9 @@ export function formatTable(rows) {
   ]);
   const widths = header.map((title, column) => Math.max(title.length, ...body.map((line) => (line[column] ?? '').length)));
   const line = (/** @type {string[]} */ cells) =>
-    cells.map((text, column) => (column === 0 ? text.padEnd(widths[column] ?? 0) : text.padStart(widths[column] ?? 0))).join('  ').trimEnd();
+    cells
+      .map((text, column) => (column === 0 ? text.padEnd(widths[column] ?? 0) : text.padStart(widths[column] ?? 0)))
+      .join('  ')
+      .trimEnd();
   return [line(header), widths.map((width) => '-'.repeat(width)).join('  '), ...body.map(line)].join('\n');
 }

@@ -28,5 +28,10 @@ export function quantile(values, share) {
  */
 export function summarise(values) {
   const round = (/** @type {number | null} */ value) => (value === null ? null : Math.round(value * 100) / 100);
-  return { median: round(quantile(values, 0.5)), p25: round(quantile(values, 0.25)), p75: round(quantile(values, 0.75)), n: values.length };
+  return {
+    median: round(quantile(values, 0.5)),
+    p25: round(quantile(values, 0.25)),
+    p75: round(quantile(values, 0.75)),
+    n: values.length,
+  };
 }

@@ -19,7 +19,8 @@ export function markedCpuSpans(trace, kind) {
   const parsed = JSON.parse(trace.toString());
   /** @type {{ name: string, ts: number, tts?: number, pid: number, tid: number }[]} */
   const events = (Array.isArray(parsed) ? parsed : parsed.traceEvents).filter(
-    (/** @type {{ name?: string, cat?: string }} */ event) => event.cat === 'blink.user_timing' && (event.name === `${kind}:start` || event.name === `${kind}:end`),
+    (/** @type {{ name?: string, cat?: string }} */ event) =>
+      event.cat === 'blink.user_timing' && (event.name === `${kind}:start` || event.name === `${kind}:end`),
   );
   events.sort((first, second) => first.ts - second.ts);
   /** @type {Map<string, number>} */

@@ -24,7 +24,9 @@ export function demoTopic(): Topic {
 export function withBaseline(topic: Topic, outcomeId: string, risk: string): Topic {
   return {
     ...topic,
-    outcomes: topic.outcomes.map((outcome) => (outcome.id === outcomeId ? { ...outcome, baseline: { ...outcome.baseline, risk } } : outcome)),
+    outcomes: topic.outcomes.map((outcome) =>
+      outcome.id === outcomeId ? { ...outcome, baseline: { ...outcome.baseline, risk } } : outcome,
+    ),
   };
 }
 

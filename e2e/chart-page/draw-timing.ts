@@ -40,7 +40,11 @@ function mark(name: string): void {
 }
 
 /** Draw `model` into a fresh svg appended to `container`, timed; the svg is left in place. */
-export function timedFirstDraw(container: HTMLElement, model: ChartModel, options: SvgChartOptions = {}): { svg: SVGSVGElement; sample: DrawSample } {
+export function timedFirstDraw(
+  container: HTMLElement,
+  model: ChartModel,
+  options: SvgChartOptions = {},
+): { svg: SVGSVGElement; sample: DrawSample } {
   mark(`${SAMPLE_MARKS.firstDraw}:start`);
   const start = performance.now();
   const svg = document.createElementNS(SVG_NAMESPACE, 'svg');
@@ -70,7 +74,11 @@ export async function timeFirstDraws(container: HTMLElement, model: ChartModel, 
  * `repetitions` live redraws with `updateChart` of one svg, alternating between the
  * models given (which differ in their counts), after one untimed first draw.
  */
-export async function timeRedraws(container: HTMLElement, models: readonly ChartModel[], repetitions: number): Promise<DrawSample[]> {
+export async function timeRedraws(
+  container: HTMLElement,
+  models: readonly ChartModel[],
+  repetitions: number,
+): Promise<DrawSample[]> {
   const [first] = models;
   if (first === undefined || models.length < 2) throw new Error('redraw timing needs at least two models');
   const svg = document.createElementNS(SVG_NAMESPACE, 'svg');

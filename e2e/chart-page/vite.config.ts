@@ -16,7 +16,11 @@ function policyMetaTag(): Plugin {
     name: 'chart-page-policy-meta',
     apply: 'build',
     transformIndexHtml: () => [
-      { tag: 'meta', attrs: { 'http-equiv': 'Content-Security-Policy', content: metaContentSecurityPolicy() }, injectTo: 'head-prepend' },
+      {
+        tag: 'meta',
+        attrs: { 'http-equiv': 'Content-Security-Policy', content: metaContentSecurityPolicy() },
+        injectTo: 'head-prepend',
+      },
     ],
   };
 }

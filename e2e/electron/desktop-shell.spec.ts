@@ -23,7 +23,10 @@ test.describe('the desktop shell', () => {
   test.beforeAll(async () => {
     test.setTimeout(180_000);
     for (const script of ['build', 'build:electron']) {
-      const built = spawnSync(process.platform === 'win32' ? 'npm.cmd' : 'npm', ['run', '--silent', script], { cwd: projectRoot, stdio: 'inherit' });
+      const built = spawnSync(process.platform === 'win32' ? 'npm.cmd' : 'npm', ['run', '--silent', script], {
+        cwd: projectRoot,
+        stdio: 'inherit',
+      });
       expect(built.status, `npm run ${script}`).toBe(0);
     }
     userData = mkdtempSync(join(os.tmpdir(), 'chancewise-e2e-'));
@@ -49,15 +52,18 @@ test.describe('the desktop shell', () => {
     // Electron security checklist items 1 and 18.
     expect(await page.evaluate(() => location.origin)).toBe('app://chancewise');
     const addresses = await page.evaluate(() => performance.getEntriesByType('resource').map((entry) => entry.name));
-    for (const address of addresses) expect(address.startsWith('app://chancewise/') || address.startsWith('data:'), address).toBe(true);
+    for (const address of addresses)
+      expect(address.startsWith('app://chancewise/') || address.startsWith('data:'), address).toBe(true);
   });
 
   test('gives the page no Node.js and only the shell API', async () => {
     // Checklist items 2, 3 and 20.
-    expect(await page.evaluate(() => [typeof (globalThis as { require?: unknown }).require, typeof (globalThis as { process?: unknown }).process])).toEqual([
-      'undefined',
-      'undefined',
-    ]);
+    expect(
+      await page.evaluate(() => [
+        typeof (globalThis as { require?: unknown }).require,
+        typeof (globalThis as { process?: unknown }).process,
+      ]),
+    ).toEqual(['undefined', 'undefined']);
     expect(await page.evaluate(() => Object.keys(window.chancewise ?? {}).sort())).toEqual([
       'exportHandoutPdf',
       'newDocument',
@@ -104,7 +110,9 @@ test.describe('the desktop shell', () => {
   });
 
   test('answers a request from the page through the checked IPC channel', async () => {
-    const result = await page.evaluate(() => window.chancewise?.saveSnapshot({ content: { title: 'x' }, keepPatient: false, hasUnsavedChanges: false }));
+    const result = await page.evaluate(() =>
+      window.chancewise?.saveSnapshot({ content: { title: 'x' }, keepPatient: false, hasUnsavedChanges: false }),
+    );
     expect(result?.ok).toBe(true);
   });
 
@@ -124,7 +132,11 @@ test.describe('the desktop shell', () => {
   test('lets a second launch hand over and quit, keeping one window', async () => {
     // Chromium refuses to run as root without --no-sandbox (Playwright adds it to its own launches).
     const asRoot = typeof process.getuid === 'function' && process.getuid() === 0 ? ['--no-sandbox'] : [];
-    const second = spawn(executable ?? '', [...asRoot, '.', demoTopic], { cwd: projectRoot, env: launchEnvironment(userData), stdio: 'ignore' });
+    const second = spawn(executable ?? '', [...asRoot, '.', demoTopic], {
+      cwd: projectRoot,
+      env: launchEnvironment(userData),
+      stdio: 'ignore',
+    });
     const code = await new Promise<number | null>((resolve) => second.once('exit', (exitCode) => resolve(exitCode)));
     expect(code).toBe(0);
     expect(application.windows()).toHaveLength(1);

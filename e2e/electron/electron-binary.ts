@@ -10,7 +10,10 @@ export function electronExecutable(): string | null {
   const packageFolder = join(projectRoot, 'node_modules', 'electron');
   const pathFile = join(packageFolder, 'path.txt');
   if (!existsSync(pathFile)) return null;
-  const executable = join(process.env.ELECTRON_OVERRIDE_DIST_PATH ?? join(packageFolder, 'dist'), readFileSync(pathFile, 'utf8').trim());
+  const executable = join(
+    process.env.ELECTRON_OVERRIDE_DIST_PATH ?? join(packageFolder, 'dist'),
+    readFileSync(pathFile, 'utf8').trim(),
+  );
   return existsSync(executable) ? executable : null;
 }
 
@@ -22,7 +25,8 @@ export function hasDisplay(): boolean {
 /** The environment for a launch: no ELECTRON_RUN_AS_NODE (it would make the binary plain Node), warnings on. */
 export function launchEnvironment(userData: string): Record<string, string> {
   const environment: Record<string, string> = {};
-  for (const [name, value] of Object.entries(process.env)) if (value !== undefined && name !== 'ELECTRON_RUN_AS_NODE') environment[name] = value;
+  for (const [name, value] of Object.entries(process.env))
+    if (value !== undefined && name !== 'ELECTRON_RUN_AS_NODE') environment[name] = value;
   environment.CHANCEWISE_USER_DATA_DIR = userData;
   environment.ELECTRON_ENABLE_SECURITY_WARNINGS = '1';
   return environment;

@@ -37,9 +37,7 @@ export type PlainCommandName = (typeof PLAIN_COMMANDS)[number];
  * changes) and then calls the matching API function; `open-recent` names a file from the
  * shell's own recent list, which is the only place `openRecentDocument` accepts paths from.
  */
-export type ShellCommand =
-  | { readonly name: PlainCommandName }
-  | { readonly name: 'open-recent'; readonly recentPath: string };
+export type ShellCommand = { readonly name: PlainCommandName } | { readonly name: 'open-recent'; readonly recentPath: string };
 
 /** Why a request failed. */
 export type ShellErrorCode =

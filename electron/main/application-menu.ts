@@ -12,7 +12,12 @@ export interface MenuSettings {
   readonly showAbout: () => void;
 }
 
-function commandItem(label: string, accelerator: string | null, command: ShellCommand, settings: MenuSettings): MenuItemConstructorOptions {
+function commandItem(
+  label: string,
+  accelerator: string | null,
+  command: ShellCommand,
+  settings: MenuSettings,
+): MenuItemConstructorOptions {
   return {
     label,
     ...(accelerator === null ? {} : { accelerator }),
@@ -75,13 +80,27 @@ export function buildMenuTemplate(settings: MenuSettings): MenuItemConstructorOp
   };
   const viewMenu: MenuItemConstructorOptions = {
     label: 'View',
-    submenu: [{ role: 'resetZoom' }, { role: 'zoomIn' }, { role: 'zoomOut' }, { type: 'separator' }, { role: 'togglefullscreen' }],
+    submenu: [
+      { role: 'resetZoom' },
+      { role: 'zoomIn' },
+      { role: 'zoomOut' },
+      { type: 'separator' },
+      { role: 'togglefullscreen' },
+    ],
   };
   const windowMenu: MenuItemConstructorOptions = { role: 'windowMenu' };
   if (isMac) {
     const appMenu: MenuItemConstructorOptions = {
       label: 'Chancewise',
-      submenu: [about, { type: 'separator' }, { role: 'hide' }, { role: 'hideOthers' }, { role: 'unhide' }, { type: 'separator' }, { role: 'quit' }],
+      submenu: [
+        about,
+        { type: 'separator' },
+        { role: 'hide' },
+        { role: 'hideOthers' },
+        { role: 'unhide' },
+        { type: 'separator' },
+        { role: 'quit' },
+      ],
     };
     return [appMenu, fileMenu, editMenu, viewMenu, windowMenu];
   }

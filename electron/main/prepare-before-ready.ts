@@ -22,7 +22,11 @@ export const USER_DATA_VARIABLE = 'CHANCEWISE_USER_DATA_DIR';
  * unpackaged test run asks for it, and take the single-instance lock. Returns whether this
  * process holds the lock (if not, another copy is running and this one must quit).
  */
-export function prepareBeforeReady(app: EarlyApp, protocol: EarlyProtocol, environment: Readonly<Record<string, string | undefined>>): boolean {
+export function prepareBeforeReady(
+  app: EarlyApp,
+  protocol: EarlyProtocol,
+  environment: Readonly<Record<string, string | undefined>>,
+): boolean {
   protocol.registerSchemesAsPrivileged([{ scheme: APP_SCHEME, privileges: APP_SCHEME_PRIVILEGES }]);
   app.enableSandbox();
   const userData = environment[USER_DATA_VARIABLE];

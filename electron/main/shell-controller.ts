@@ -66,7 +66,11 @@ export async function startShellController(settings: ShellControllerSettings): P
     Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   };
 
-  const recentFiles = await loadRecentFiles({ filePath: path.join(userDataPath, 'recent-files.json'), pending, onChange: rebuildMenu });
+  const recentFiles = await loadRecentFiles({
+    filePath: path.join(userDataPath, 'recent-files.json'),
+    pending,
+    onChange: rebuildMenu,
+  });
   const recovery = await findRecoverySnapshot(snapshots);
   const window = await openMainWindow({
     preloadPath: path.join(settings.appPath, 'dist-electron', 'preload.cjs'),
@@ -100,7 +104,8 @@ export async function startShellController(settings: ShellControllerSettings): P
     saveDocumentAs: (_sender, text) => session.saveDocumentAs(text),
     saveSnapshot: (_sender, snapshot) => session.saveSnapshot(snapshot),
     exportHandoutPdf: (_sender, request) => exportHandoutPdf(request, dialogs, app.getPath('documents')),
-    printHandout: (_sender, request) => openHandoutForPrinting(request, shell, path.join(app.getPath('temp'), 'chancewise-print')),
+    printHandout: (_sender, request) =>
+      openHandoutForPrinting(request, shell, path.join(app.getPath('temp'), 'chancewise-print')),
   };
 
   rebuildMenu();

@@ -44,6 +44,8 @@ export function runShell(log: (line: string) => void): void {
   if (launchFile !== null) waitingFiles.push(launchFile);
 
   const openLink = (url: string): void => {
+    // Kept on one line: the source-rule test and the security scan's accepted finding read it as written.
+    // prettier-ignore
     void openExternalSafely(url, { allowedHosts: EXTERNAL_LINK_HOSTS, openExternal: (address) => shell.openExternal(address) }).then(
       (opened) => {
         if (!opened) log(`refused to open ${url.slice(0, 200)}`);

@@ -5,7 +5,8 @@ import { english } from '../core/messages/en/index.ts';
 import type { TopicResult } from '../core/topic/topic-result.ts';
 import { outcomeChart, pairChart } from '../render/chart-model.ts';
 import type { ChartModel } from '../render/chart-model.ts';
-import { renderChartSvg } from '../render/node.ts';
+import { chartSvgFile } from '../render/export/chart-svg-file.ts';
+import { svgTextDocument } from '../render/svg/svg-text-document.ts';
 import type { CommandOutput } from './command-output.ts';
 import { computeTopicOrFail, refuseEffectFlags } from './compute-command.ts';
 import { EFFECT_FLAGS, effectQueryFromFlags, parsePer } from './effect-flags.ts';
@@ -51,7 +52,8 @@ export function writeOutput(path: string, contents: string | Uint8Array): void {
     writeFileSync(path, contents);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const reason = code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : (code ?? 'write failed');
+    const reason =
+      code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : (code ?? 'write failed');
     throw new UsageError(words.fileUnwritable(path, reason));
   }
 }
@@ -70,8 +72,14 @@ function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
   const periodYears = query.periods?.targetYears ?? null;
   const eventWanted = query.wanted === true;
   const kind = changeOf(result.perPeople.difference, eventWanted) === 'harms' ? 'harm' : 'benefit';
+  const comparison = result.comparisonRisk?.estimate ?? result.baselineUsed;
+  const intervention = result.interventionRisk?.estimate ?? null;
+  if (comparison === null || intervention === null) throw new UsageError(words.chartNeedsBaseline());
   return pairChart({
     perPeople: result.perPeople,
+    risks: { comparison, intervention },
+    level: result.level,
+    wordsPeople: result.wordsPeople,
     periodYears,
     ...(query.periods?.targetUnit === undefined ? {} : { periodUnit: query.periods.targetUnit }),
     kind,
@@ -80,12 +88,12 @@ function chartModel(args: ReturnType<typeof parseArgs>): ChartModel {
   });
 }
 
-/** `chancewise chart`: an SVG of the people charts for a topic's outcome or a bare effect. */
+/** `chancewise chart`: an SVG of the people charts for a topic's outcome or a bare effect, the file the app saves. */
 export function runChart(args: readonly string[]): CommandOutput {
   const parsed = parseArgs(args, CHART_FLAGS);
   const out = outputPath(valueOf(parsed, '--out'), '.svg', 'chart.svg');
   const model = chartModel(parsed);
-  const svg = renderChartSvg(model, { showRange: parsed.flags.has('--show-range') });
+  const svg = chartSvgFile(model, svgTextDocument(), { showRange: parsed.flags.has('--show-range') });
   writeOutput(out, svg);
   const people = model.arrays.length * model.denominator;
   return { stdout: `Wrote ${out}: ${model.arrays.length} arrays, ${people} people.\n` };

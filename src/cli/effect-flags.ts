@@ -38,7 +38,6 @@ export const EFFECT_FLAGS: Readonly<Record<string, FlagSpec>> = {
   '--opposite': { takesValue: false },
 };
 
-
 /** Flags that only make sense with bare effect flags, not with a topic. */
 export const EFFECT_ONLY_FLAGS = Object.keys(EFFECT_FLAGS).filter((flag) => flag !== '--per');
 

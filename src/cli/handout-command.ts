@@ -1,6 +1,6 @@
 import packageJson from '../../package.json' with { type: 'json' };
 import { english } from '../core/messages/en/index.ts';
-import { TOPIC_LIMITS } from '../core/topic/topic.ts';
+import { TOPIC_LIMITS, type Topic } from '../core/topic/topic.ts';
 import { buildHandout } from '../handout/build-handout.ts';
 import { handoutMessagesEn } from '../handout/messages/en.ts';
 import { loadHandoutFonts } from '../handout/node-fonts.ts';
@@ -10,8 +10,9 @@ import type { CommandOutput } from './command-output.ts';
 import { computeTopicOrFail } from './compute-command.ts';
 import { handoutChoices } from './handout-choices.ts';
 import { parsePer } from './effect-flags.ts';
-import { parseArgs, valueOf } from './parse-args.ts';
-import { topicFromArgs } from './topic-input.ts';
+import { type MadeHandout, runHandoutBatch } from './handout-batch.ts';
+import { type ParsedArgs, parseArgs, valueOf } from './parse-args.ts';
+import { demoFiles, topicFromArgs } from './topic-input.ts';
 import { UsageError } from './usage-error.ts';
 
 const words = english.cli;
@@ -19,6 +20,7 @@ const words = english.cli;
 const HANDOUT_FLAGS = {
   '--demo': { takesValue: false },
   '--out': { takesValue: true, example: 'handout.pdf' },
+  '--out-dir': { takesValue: true, example: 'handouts' },
   '--paper': { takesValue: true, example: 'a4' },
   '--date': { takesValue: true, example: '2026-12-01' },
   '--show-nnt': { takesValue: false },
@@ -54,31 +56,65 @@ function today(): string {
   return `${now.getFullYear()}-${two(now.getMonth() + 1)}-${two(now.getDate())}`;
 }
 
-/** `chancewise handout`: the one-page patient handout of a topic, as a PDF. */
-export function runHandout(args: readonly string[]): CommandOutput {
-  const parsed = parseArgs(args, HANDOUT_FLAGS);
-  const out = outputPath(valueOf(parsed, '--out'), '.pdf', 'handout.pdf');
+/**
+ * The handout flags of a call, read once and applied to every topic of it; each flag given
+ * overrides the choice the topic's file keeps (`topic.handout`, version 4 files).
+ */
+function handoutOf(parsed: ParsedArgs): (topic: Topic) => MadeHandout {
   const paperFlag = valueOf(parsed, '--paper');
   const paper = paperFlag === undefined ? null : parsePaper(paperFlag);
+  const showNnt = parsed.flags.has('--show-nnt') ? true : parsed.flags.has('--no-nnt') ? false : null;
   const dateFlag = valueOf(parsed, '--date');
   const date = dateFlag === undefined ? today() : parseDate(dateFlag);
   const clinician = (valueOf(parsed, '--clinician') ?? '').trim();
   if (clinician.length > TOPIC_LIMITS.clinicianLength) {
     throw new UsageError(words.clinicianTooLong(clinician.length, TOPIC_LIMITS.clinicianLength));
   }
+  const per = parsePer(parsed);
+  const fonts = loadHandoutFonts();
+  return (topic) => {
+    const choices = handoutChoices({ paper, showNnt, per }, topic.handout);
+    const result = computeTopicOrFail(topic, choices.per);
+    const built = buildHandout(
+      result,
+      topic,
+      { paper: choices.paper, date, appVersion: packageJson.version, showNnt: choices.showNnt, clinician },
+      fonts,
+    );
+    if (!built.ok) throw new UsageError(built.message);
+    const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
+    return { pdf: built.pdf, report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade) };
+  };
+}
+
+/** The topic files of a batch call (`--out-dir`): the files given, or the first demo topic. */
+function batchInputs(parsed: ParsedArgs): string[] {
+  const demo = parsed.flags.has('--demo');
+  if (demo && parsed.positionals.length > 0) throw new UsageError(words.topicAndDemo());
+  const first = demo ? demoFiles()[0] : undefined;
+  const inputs = first === undefined ? [...parsed.positionals] : [first];
+  if (inputs.length === 0) throw new UsageError(words.handoutNeedsTopic());
+  return inputs;
+}
+
+/**
+ * `chancewise handout`: the one-page patient handout of a topic, as a PDF (`--out`), or of
+ * each of several topic files into a folder (`--out-dir`, see handout-batch.ts).
+ */
+export function runHandout(args: readonly string[]): CommandOutput {
+  const parsed = parseArgs(args, HANDOUT_FLAGS);
+  const folder = valueOf(parsed, '--out-dir');
+  if (folder !== undefined) {
+    if (parsed.flags.has('--out')) throw new UsageError(words.outAndOutDir());
+    const inputs = batchInputs(parsed);
+    return runHandoutBatch(inputs, folder, handoutOf(parsed));
+  }
+  if (parsed.positionals.length > 1) throw new UsageError(words.outWithSeveral(parsed.positionals.length));
+  const out = outputPath(valueOf(parsed, '--out'), '.pdf', 'handout.pdf');
+  const make = handoutOf(parsed);
   const topic = topicFromArgs(parsed);
   if (topic === null) throw new UsageError(words.handoutNeedsTopic());
-  const nnt = parsed.flags.has('--show-nnt') ? true : parsed.flags.has('--no-nnt') ? false : null;
-  const choices = handoutChoices({ paper, showNnt: nnt, per: parsePer(parsed) }, topic.handout);
-  const result = computeTopicOrFail(topic, choices.per);
-  const built = buildHandout(
-    result,
-    topic,
-    { paper: choices.paper, date, appVersion: packageJson.version, showNnt: choices.showNnt, clinician },
-    loadHandoutFonts(),
-  );
-  if (!built.ok) throw new UsageError(built.message);
-  writeOutput(out, built.pdf);
-  const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
-  return { stdout: `${words.handoutWritten(out, handoutMessagesEn.paperName[choices.paper], grade)}\n` };
+  const made = make(topic);
+  writeOutput(out, made.pdf);
+  return { stdout: `${made.report(out)}\n` };
 }

@@ -12,6 +12,7 @@ Usage:
                      [--per 100|1000] [--outcome NAME] [--show-range]
   chancewise handout (TOPIC-FILE | --demo) --out FILE.pdf [--paper a4|letter] [--date YYYY-MM-DD]
                      [--show-nnt | --no-nnt] [--clinician TEXT] [--per 100|1000]
+  chancewise handout TOPIC-FILE... --out-dir FOLDER [the other handout flags, for every file]
 
 Risks: 0.2, 20%, 20/100, 1 in 5 or 200 per 1000. --rrr and its --ci are in percent.
 --counts gives the option arm first, then the comparison arm.
@@ -20,5 +21,8 @@ Risks: 0.2, 20%, 20/100, 1 in 5 or 200 per 1000. --rrr and its --ci are in perce
 --opposite: the effect (or the counts) is for the opposite event, e.g. "still in pain" for
   "pain gone"; an odds ratio is inverted, other measures are applied to 1 − the risk.
 handout: a topic file's own choices (paper, NNT, --per) are used unless a flag says otherwise.
-Exit status: 0 done, 2 input to fix (one line on stderr), 1 other failure.
+--out-dir writes one PDF per topic file, named after it (-2, -3 when names repeat), and goes on
+  past a bad file: each gets its line on stderr.
+Exit status: 0 done, 2 input to fix (one line on stderr), 1 other failure (with --out-dir: a file
+  that could not be written).
 `;

@@ -48,7 +48,8 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
     const command = await load();
     const output = await command(rest);
     io.stdout(output.stdout);
-    return 0;
+    if (output.stderr !== undefined && output.stderr !== '') io.stderr(output.stderr);
+    return output.exitCode ?? 0;
   } catch (error) {
     if (error instanceof InputError) {
       const flag = flagForField(error.problem.field);

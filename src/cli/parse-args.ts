@@ -47,7 +47,11 @@ export function parseArgs(args: readonly string[], specs: Readonly<Record<string
       value = args[index + 1];
       index += 1;
     }
-    if (value === undefined || value.trim() === '' || (value.startsWith('--') && specs[value.split('=')[0] ?? ''] !== undefined)) {
+    if (
+      value === undefined ||
+      value.trim() === '' ||
+      (value.startsWith('--') && specs[value.split('=')[0] ?? ''] !== undefined)
+    ) {
       throw new UsageError(words.missingValue(name, spec.example ?? 'VALUE'));
     }
     flags.set(name, value);

@@ -33,10 +33,7 @@ function peopleJson(value: PeopleCounts<number> | null, picture: Denominator | n
 }
 
 /** The contract fields shared by a single effect and each option of a topic. */
-export function effectFieldsJson(
-  result: EffectResult,
-  words: PeopleCounts<number> | null,
-): { [key: string]: Json } {
+export function effectFieldsJson(result: EffectResult, words: PeopleCounts<number> | null): { [key: string]: Json } {
   return {
     comparisonRisk: estimateJson(result.comparisonRisk),
     interventionRisk: estimateJson(result.interventionRisk),
@@ -64,7 +61,8 @@ export function effectJson(result: EffectComputation, wanted = false): Json {
   if (counts !== null) {
     Object.assign(fields, {
       oddsRatio: estimateJson(counts.oddsRatio),
-      chiSquare: counts.chiSquare === null ? null : { statistic: finite(counts.chiSquare.statistic), p: finite(counts.chiSquare.p) },
+      chiSquare:
+        counts.chiSquare === null ? null : { statistic: finite(counts.chiSquare.statistic), p: finite(counts.chiSquare.p) },
       chiSquareYates:
         counts.chiSquareYates === null
           ? null

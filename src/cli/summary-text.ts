@@ -54,10 +54,18 @@ function effectLines(result: EffectResult, words: PeopleCounts<number> | null, i
   // A wanted event is a chance, not a risk; the measure keeps its name ("risk ratio").
   const noun = wanted ? 'Chance' : 'Risk';
   const width = wanted ? 26 : 24;
-  if (result.comparisonRisk !== null) lines.push(row(`${noun} without the option`, withRange(result.comparisonRisk, percent), width));
-  if (result.interventionRisk !== null) lines.push(row(`${noun} with the option`, withRange(result.interventionRisk, percent), width));
+  if (result.comparisonRisk !== null)
+    lines.push(row(`${noun} without the option`, withRange(result.comparisonRisk, percent), width));
+  if (result.interventionRisk !== null)
+    lines.push(row(`${noun} with the option`, withRange(result.interventionRisk, percent), width));
   if (result.relativeRisk !== null) {
-    lines.push(row('Risk ratio', withRange(result.relativeRisk, (value) => formatDecimal(value, 3)), width));
+    lines.push(
+      row(
+        'Risk ratio',
+        withRange(result.relativeRisk, (value) => formatDecimal(value, 3)),
+        width,
+      ),
+    );
   }
   lines.push(differenceRow(result, wanted, width));
   const ranged = [result.interventionRisk, result.relativeRisk, result.absoluteReduction].some(
@@ -85,9 +93,12 @@ export function effectSummary(result: EffectComputation, wanted = false): string
   const lines = effectLines(result, result.wordsPeople, '', wanted);
   const counts = result.counts;
   if (counts !== null) {
-    if (counts.oddsRatio !== null) lines.push(`Odds ratio:              ${withRange(counts.oddsRatio, (value) => formatDecimal(value, 3))}`);
+    if (counts.oddsRatio !== null)
+      lines.push(`Odds ratio:              ${withRange(counts.oddsRatio, (value) => formatDecimal(value, 3))}`);
     if (counts.chiSquare !== null) {
-      lines.push(`Chi-square:              ${formatDecimal(counts.chiSquare.statistic, 3)}, p = ${formatDecimal(counts.chiSquare.p, 4)}`);
+      lines.push(
+        `Chi-square:              ${formatDecimal(counts.chiSquare.statistic, 3)}, p = ${formatDecimal(counts.chiSquare.p, 4)}`,
+      );
     }
     if (counts.chiSquareYates !== null) {
       lines.push(

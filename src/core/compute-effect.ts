@@ -5,7 +5,14 @@ import { convertRiskPeriod } from './convert-period.ts';
 import { effectAtBaseline } from './effect-at-baseline.ts';
 import type { EffectAtBaseline } from './effect-at-baseline.ts';
 import { numberNeeded } from './number-needed.ts';
-import { chooseDenominator, chooseWordsDenominator, peopleCounts, peopleFor, pictureDenominatorFor, roundingShift } from './people-counts.ts';
+import {
+  chooseDenominator,
+  chooseWordsDenominator,
+  peopleCounts,
+  peopleFor,
+  pictureDenominatorFor,
+  roundingShift,
+} from './people-counts.ts';
 import type { RiskPair } from './people-counts.ts';
 import { fail } from './problems.ts';
 import type { EffectResult } from './topic/topic-result.ts';
@@ -84,7 +91,8 @@ export function chooseDenominators(pairs: readonly RiskPair[], per: WordsDenomin
   const hidden = pairs.some((pair) => pair.comparison !== pair.intervention && roundsAway(pair, words));
   if (hidden && words < 1000000) notices.push(notice('rounding-hides-difference', { denominator: words }));
   const moved = pairs.reduce((largest, pair) => Math.max(largest, roundingShift(pair, words)), 0);
-  if (moved >= 0.5 - 1e-9) notices.push(notice('rounding-moves-difference', { denominator: words, people: Number(moved.toFixed(2)) }));
+  if (moved >= 0.5 - 1e-9)
+    notices.push(notice('rounding-moves-difference', { denominator: words, people: Number(moved.toFixed(2)) }));
   return { picture, words, notices };
 }
 
@@ -115,7 +123,11 @@ function countsAtBaseline(baseline: number, analysis: CountsAnalysis, field: str
   const ratio = analysis.relativeRisk;
   if (ratio !== null) {
     const interval = ratio.lower === null || ratio.upper === null ? null : { lower: ratio.lower, upper: ratio.upper };
-    return effectAtBaseline(baseline, { measure: 'rr', estimate: ratio.estimate, interval, level: analysis.level, opposite: false }, field);
+    return effectAtBaseline(
+      baseline,
+      { measure: 'rr', estimate: ratio.estimate, interval, level: analysis.level, opposite: false },
+      field,
+    );
   }
   const difference = analysis.riskDifference;
   const interval =
@@ -196,7 +208,11 @@ export function computeEffect(query: EffectQuery): EffectComputation {
     }
     if (checked.measure === 'hr') notices.push(notice('hr-proportional-hazards'));
     if (checked.opposite && baseline !== null) {
-      notices.push(notice(checked.measure === 'or' ? 'opposite-odds-ratio-inverted' : 'opposite-ratio-applied', { measure: checked.measure }));
+      notices.push(
+        notice(checked.measure === 'or' ? 'opposite-odds-ratio-inverted' : 'opposite-ratio-applied', {
+          measure: checked.measure,
+        }),
+      );
     }
   }
   if (hasInterval) notices.push(notice('interval-ignores-baseline-uncertainty'));
@@ -217,7 +233,10 @@ export function computeEffect(query: EffectQuery): EffectComputation {
   let perPeople = null;
   let wordsPeople = null;
   if (comparisonRisk !== null && interventionRisk !== null) {
-    const choice = chooseDenominators([{ comparison: comparisonRisk.estimate, intervention: interventionRisk.estimate }], query.per ?? null);
+    const choice = chooseDenominators(
+      [{ comparison: comparisonRisk.estimate, intervention: interventionRisk.estimate }],
+      query.per ?? null,
+    );
     notices.push(...choice.notices);
     perPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, choice.picture);
     wordsPeople = peopleCounts(comparisonRisk.estimate, interventionRisk, choice.words);

@@ -34,7 +34,7 @@ export function benefitOf(difference: Estimate, wanted: boolean): Estimate {
  */
 export function changeOf(difference: number, wanted: boolean): ChangeDirection {
   if (difference === 0 || !Number.isFinite(difference)) return 'none';
-  return (difference > 0) !== wanted ? 'helps' : 'harms';
+  return difference > 0 !== wanted ? 'helps' : 'harms';
 }
 
 /**

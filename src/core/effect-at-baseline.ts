@@ -13,7 +13,9 @@ export interface EffectAtBaseline {
 const RISK_TOLERANCE = 1e-12;
 
 function riskOrFail(effect: CheckedEffect, value: number, baseline: number, field: string, isLimit: boolean): number {
-  const risk = effect.opposite ? riskWithOppositeEffect(effect.measure, value, baseline) : riskWithEffect(effect.measure, value, baseline);
+  const risk = effect.opposite
+    ? riskWithOppositeEffect(effect.measure, value, baseline)
+    : riskWithEffect(effect.measure, value, baseline);
   const outside = risk < -RISK_TOLERANCE || risk > 1 + RISK_TOLERANCE;
   if (outside && isLimit) fail('limit-risk-outside', field, { measure: effect.measure, limit: value, baseline, risk });
   if (outside && effect.measure === 'rr' && !effect.opposite) fail('rr-risk-above-one', field, { ratio: value, baseline, risk });

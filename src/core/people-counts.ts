@@ -22,9 +22,7 @@ export function peopleCounts<D extends number = Denominator>(
   const intervention = peopleFor(interventionRisk.estimate, denominator);
   const { lower, upper } = interventionRisk;
   const interventionRange =
-    lower === null || upper === null
-      ? null
-      : { lower: peopleFor(lower, denominator), upper: peopleFor(upper, denominator) };
+    lower === null || upper === null ? null : { lower: peopleFor(lower, denominator), upper: peopleFor(upper, denominator) };
   return { denominator, comparison, intervention, difference: comparison - intervention, interventionRange };
 }
 

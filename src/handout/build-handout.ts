@@ -113,11 +113,18 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     precision: 2,
     floatPrecision: 2,
   });
-  // Every character the page sets; the chart model is left out, its pictures have no text (and many people).
-  registerFonts(doc, fonts, codePointsOf({ ...content, chart: { ...content.chart, model: null } }));
+  // Every character the page sets; the chart model and close-ups are left out, their pictures have no text (and many people).
+  const closeUpLabel = content.chart.closeUp?.label ?? null;
+  registerFonts(doc, fonts, codePointsOf({ ...content, chart: { ...content.chart, model: null, closeUp: closeUpLabel } }));
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
-  const fitted = firstFit((settings) => layoutPage(content, settings, box, palette, measure));
+  // The enlarged blocks of pictures of 1000 give way last: a sheet that fits only without them is printed without them.
+  const withCloseUps = firstFit((settings) => layoutPage(content, settings, box, palette, measure));
+  const plain: HandoutContent = { ...content, chart: { ...content.chart, closeUp: null } };
+  const fitted =
+    withCloseUps.layout.fits || content.chart.closeUp === null
+      ? withCloseUps
+      : firstFit((settings) => layoutPage(plain, settings, box, palette, measure));
   if (!fitted.layout.fits) {
     const part = fitted.layout.tooLong ?? 'outcomes';
     const over = Math.max(0, fitted.layout.needed - box.height);

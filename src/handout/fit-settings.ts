@@ -18,6 +18,8 @@ export interface FitSettings {
   /** Distance between people in an array of 100, and of 1000, in millimetres. */
   readonly cell100: number;
   readonly cell1000: number;
+  /** Distance between people in the enlarged block of 100 beside a picture of 1000, in millimetres. */
+  readonly closeUpCell: number;
   /** Space between sections, in millimetres. */
   readonly space: number;
   /** Ruled lines left for the patient to write what matters to them. */
@@ -44,6 +46,7 @@ export const ROOMY: FitSettings = {
   chartText: 10,
   cell100: 5.2,
   cell1000: 1.6,
+  closeUpCell: 2.6,
   space: 6,
   writingLines: 2,
   bodyLeading: 1.35,
@@ -59,11 +62,21 @@ const STEPS: readonly Partial<FitSettings>[] = [
   { list: 9.5, table: 9.5, cell100: 4.4, rowPadding: 1.1 },
   { writingLines: 0, space: 4 },
   { list: 9, table: 9, chartText: 9, cell100: 4, title: 15, rowPadding: 1 },
-  { cell100: 3.6, cell1000: 1.4, space: 3.5, listLeading: 1.25, rowPadding: 0.9 },
+  { cell100: 3.6, cell1000: 1.4, closeUpCell: 2.4, space: 3.5, listLeading: 1.25, rowPadding: 0.9 },
   { cell100: 3.3, bodyLeading: 1.3, title: 14 },
   { body: 11.5, heading: 12 },
   { body: 11, heading: 11.5, space: 3 },
-  { cell100: 3, cell1000: 1.2, space: 2.5, title: 13, heading: 11, bodyLeading: 1.25, listLeading: 1.2, rowPadding: 0.7 },
+  {
+    cell100: 3,
+    cell1000: 1.2,
+    closeUpCell: 2.2,
+    space: 2.5,
+    title: 13,
+    heading: 11,
+    bodyLeading: 1.25,
+    listLeading: 1.2,
+    rowPadding: 0.7,
+  },
   { cell100: 2.8, space: 2, rowPadding: 0.5 },
 ];
 

@@ -298,7 +298,9 @@ export function subsetTrueType(font: ParsedFont, codes: Iterable<number>): Uint8
   for (const glyph of glyphs) {
     const long = glyph < font.horizontalMetricCount;
     hmtx.uint16(long ? source.getUint16(hmtxAt + 4 * glyph) : lastAdvance);
-    const bearingAt = long ? hmtxAt + 4 * glyph + 2 : hmtxAt + 4 * font.horizontalMetricCount + 2 * (glyph - font.horizontalMetricCount);
+    const bearingAt = long
+      ? hmtxAt + 4 * glyph + 2
+      : hmtxAt + 4 * font.horizontalMetricCount + 2 * (glyph - font.horizontalMetricCount);
     hmtx.uint16(source.getUint16(bearingAt));
   }
 
@@ -351,10 +353,10 @@ export function subsetTrueType(font: ParsedFont, codes: Iterable<number>): Uint8
     file.pad();
   }
   const result = file.result();
-  const headOffset = 12 + 16 * count + KEPT_TABLES.slice(0, KEPT_TABLES.indexOf('head')).reduce(
-    (sum, tag) => sum + Math.ceil(contents[tag].length / 4) * 4,
-    0,
-  );
+  const headOffset =
+    12 +
+    16 * count +
+    KEPT_TABLES.slice(0, KEPT_TABLES.indexOf('head')).reduce((sum, tag) => sum + Math.ceil(contents[tag].length / 4) * 4, 0);
   view(result).setUint32(headOffset + 8, (CHECKSUM_MAGIC - checksum(result)) >>> 0);
   return result;
 }

@@ -6,15 +6,19 @@
  */
 import type { Certainty, Topic } from '../core/topic/topic.ts';
 import { type PersonLook, lookOf } from '../core/direction.ts';
-import type { PersonGroup } from '../core/types.ts';
+import { peopleFor } from '../core/people-counts.ts';
+import type { PersonGroup, WordsDenominator } from '../core/types.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { amountOf } from '../core/wording/amount-of.ts';
 import { frequencyBand } from '../core/wording/frequency-band.ts';
-import { optionCount, optionRisk } from '../core/wording/option-context.ts';
+import { optionRisk } from '../core/wording/option-context.ts';
 import { handoutSentences } from '../core/wording/topic-wording.ts';
 import type { WordingSentence } from '../core/wording/wording-sentence.ts';
 import { type ChartModel, outcomeChart } from '../render/chart-model.ts';
+import { blockLayout, closeUpBlock } from '../render/close-up.ts';
 import { FILL_ORDER } from '../render/fill-sequence.ts';
+import type { IconArrayLayout } from '../render/icon-array-layout.ts';
+import { bandOfCount, rowDenominator } from './band-denominator.ts';
 import type { BenefitAim, HandoutMessages } from './messages/en.ts';
 
 /** One cell of the outcomes table: the people count, and how sure the research is. */
@@ -28,6 +32,8 @@ export interface TableRow {
   readonly outcome: string;
   /** The outcome the pictures show. */
   readonly isHeadline: boolean;
+  /** The people every cell of the row is out of: the topic's words denominator, or more for a rare side effect. */
+  readonly denominator: WordsDenominator;
   /** One cell per option, in the order of the pictures (comparison first). */
   readonly cells: readonly TableCell[];
 }
@@ -73,6 +79,10 @@ export interface HandoutContent {
     readonly titles: readonly string[];
     /** One caption per picture, in the pictures' order: the wording's event and free frames. */
     readonly captions: readonly string[];
+    /** Under each caption, the chart's note when the picture shows no one changed (a difference below one person), or null. */
+    readonly notes: readonly (string | null)[];
+    /** For pictures of 1000, the block of 100 holding the people who differ, enlarged; null otherwise. */
+    readonly closeUp: CloseUp | null;
   };
   /** The other outcomes, lined up under the pictures. */
   readonly table: OutcomeTable;
@@ -86,6 +96,15 @@ export interface HandoutContent {
   readonly footer: { readonly left: string; readonly right: string };
   /** Every sentence taken from the wording module, in the order printed. */
   readonly wordingSentences: readonly string[];
+}
+
+/** One block of 100 of every picture of 1000, to be printed larger and outlined in the pictures. */
+export interface CloseUp {
+  /** The block (0 to 9, from the bottom-left) outlined in each picture. */
+  readonly block: number;
+  /** The block of each picture as a picture of 100, in the pictures' order. */
+  readonly layouts: readonly IconArrayLayout[];
+  readonly label: string;
 }
 
 export interface ContentOptions {
@@ -118,14 +137,56 @@ function paragraphsOf(sentences: readonly WordingSentence[]): string[][] {
 }
 
 /**
- * A cell: the option's drawn count (as in the pictures and the sentences); for a
- * side effect, its EU SmPC frequency band with the number beside the word.
+ * The paragraphs with the level of each range said: once, after the last range, when every
+ * option's interval has the same level ("Each range is the research's 95% interval."), or
+ * after each range when they differ.
  */
-function tableCell(option: OptionOutcomeResult, kind: 'benefit' | 'harm', denominator: number, messages: HandoutMessages): TableCell {
+function withLevels(sentences: readonly WordingSentence[], outcome: OutcomeResult, messages: HandoutMessages): string[][] {
+  const levelOf = (sentence: WordingSentence) =>
+    outcome.options.find((option) => option.optionId === sentence.optionId)?.level ?? null;
+  const ranges = sentences.filter((sentence) => sentence.kind === 'range' && levelOf(sentence) !== null);
+  const levels = new Set(ranges.map(levelOf));
+  const last = ranges[ranges.length - 1];
+  const [only] = levels;
+  const shared = levels.size === 1 && only !== undefined && only !== null ? only : null;
+  return paragraphsOf(
+    sentences.flatMap((sentence) => {
+      if (!ranges.includes(sentence)) return [sentence];
+      const level = shared ?? levelOf(sentence);
+      if (level === null || (shared !== null && sentence !== last)) return [sentence];
+      return [sentence, { ...sentence, kind: 'range', text: messages.rangeLevel(level, shared === null ? 1 : ranges.length) }];
+    }),
+  );
+}
+
+/** The enlarged block of every picture of 1000 that holds the people who differ; null for 100 or when no one differs. */
+function closeUpOf(model: ChartModel, messages: HandoutMessages): CloseUp | null {
+  const layouts = model.arrays.map((array) => array.layout);
+  const block = closeUpBlock(layouts);
+  if (block === null) return null;
+  return { block, layouts: layouts.map((layout) => blockLayout(layout, block)), label: messages.closeUpLabel };
+}
+
+/**
+ * A cell: the option's count at the row's denominator (the words' one, as in the sentences);
+ * for a side effect, its EU SmPC frequency band with the number beside the word, the row
+ * written per as many people as it takes for the word and the number to agree.
+ */
+function tableCell(
+  option: OptionOutcomeResult,
+  kind: 'benefit' | 'harm',
+  denominator: WordsDenominator,
+  messages: HandoutMessages,
+): TableCell {
   const risk = optionRisk(option);
-  const amount = amountOf(optionCount(option), denominator, risk);
+  const count =
+    denominator === option.wordsPeople.denominator ? option.wordsPeople.intervention : peopleFor(risk ?? 0, denominator);
+  const amount = amountOf(count, denominator, risk);
   const certainty: Certainty | null = option.isComparison ? null : option.certainty;
-  const value = kind === 'harm' ? messages.bandCell(frequencyBand(risk), amount, denominator) : messages.tableCell(amount, denominator);
+  const band = frequencyBand(risk);
+  // Only a risk within rounding of a band's edge, even per million, reads otherwise: then the word follows the number.
+  const written = risk === null || risk === 0 ? band : (bandOfCount(count, denominator) ?? band);
+  const value = kind === 'harm' ? messages.bandCell(written, amount, denominator) : messages.tableCell(amount, denominator);
   return { value, note: certainty === null ? null : messages.certaintyShort[certainty] };
 }
 
@@ -140,12 +201,18 @@ function cellsInChartOrder(outcome: OutcomeResult, model: ChartModel): OptionOut
 
 /** Every outcome but the headline: other benefits, then side effects, each under its sub-heading. */
 function outcomeTable(result: TopicResult, model: ChartModel, headlineId: string, messages: HandoutMessages): OutcomeTable {
-  const rowOf = (outcome: OutcomeResult): TableRow => ({
-    outcomeId: outcome.outcomeId,
-    outcome: messages.capitalise(outcome.name.trim()),
-    isHeadline: false,
-    cells: cellsInChartOrder(outcome, model).map((option) => tableCell(option, outcome.kind, result.denominator, messages)),
-  });
+  const rowOf = (outcome: OutcomeResult): TableRow => {
+    const options = cellsInChartOrder(outcome, model);
+    const denominator =
+      outcome.kind === 'harm' ? rowDenominator(options.map(optionRisk), result.wordsDenominator) : result.wordsDenominator;
+    return {
+      outcomeId: outcome.outcomeId,
+      outcome: messages.capitalise(outcome.name.trim()),
+      isHeadline: false,
+      denominator,
+      cells: options.map((option) => tableCell(option, outcome.kind, denominator, messages)),
+    };
+  };
   const others = result.outcomes.filter((outcome) => outcome.outcomeId !== headlineId);
   const benefits = others.filter((outcome) => outcome.kind === 'benefit');
   const sections: TableSection[] = [
@@ -203,18 +270,32 @@ function keyEntries(model: ChartModel, messages: HandoutMessages): KeyEntry[] {
  */
 export function handoutContent(result: TopicResult, topic: Topic, options: ContentOptions): HandoutContent {
   const { messages } = options;
-  const sheet = { denominator: result.denominator, years: result.periodYears, unit: result.periodUnit };
   const headline = headlineOutcome(result);
+  const model = outcomeChart(result, headline.outcomeId);
+  const table = outcomeTable(result, model, headline.outcomeId, messages);
+  const rareRows = table.sections.some((section) => section.rows.some((row) => row.denominator !== result.wordsDenominator));
+  const sheet = {
+    denominator: result.denominator,
+    wordsDenominator: result.wordsDenominator,
+    rareRows,
+    years: result.periodYears,
+    unit: result.periodUnit,
+  };
   const sentences = handoutSentences(result, { showNnt: options.showNnt });
   const population = sentences.filter((sentence) => sentence.kind === 'population');
   const headlineSentences = sentences.filter((sentence) => sentence.outcomeId === headline.outcomeId);
   const frames = headlineSentences.filter((sentence) => FRAME_KINDS.has(sentence.kind));
   const others = headlineSentences.filter((sentence) => !FRAME_KINDS.has(sentence.kind));
-  const model = outcomeChart(result, headline.outcomeId);
   const captions = model.arrays.map((array) =>
-    frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text).join(' '),
+    frames
+      .filter((sentence) => sentence.optionId === array.optionId)
+      .map((sentence) => sentence.text)
+      .join(' '),
   );
-  const evidence = [messages.evidenceSummary(topic.evidence.summary), messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed))];
+  const evidence = [
+    messages.evidenceSummary(topic.evidence.summary),
+    messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed)),
+  ];
   if (headline.baselineSource.trim() !== '') evidence.push(messages.baselineSource(headline.name, headline.baselineSource));
   const clinician = options.clinician.trim() !== '' ? options.clinician.trim() : topic.clinician.trim();
   const questions = topic.questions.map((question) => question.trim()).filter((question) => question !== '');
@@ -230,21 +311,27 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
       keyIntro: messages.keyIntro(sheet),
       key: keyEntries(model, messages),
       captions,
+      notes: model.arrays.map((array) => array.note),
+      closeUp: closeUpOf(model, messages),
     },
-    table: outcomeTable(result, model, headline.outcomeId, messages),
-    paragraphs: paragraphsOf(others),
+    table,
+    paragraphs: withLevels(others, headline, messages),
     sentencesHeading: messages.sentencesHeading,
     evidence: { heading: messages.evidenceHeading, items: evidence },
     matters: { heading: messages.mattersHeading, prompt: messages.mattersPrompt },
     questions: { heading: messages.questionsHeading, items: questions.length > 0 ? questions : messages.defaultQuestions },
     caution: { heading: messages.cautionHeading, text: messages.caution(sheet) },
     footer: {
-      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join(messages.footerSeparator),
+      left: [clinician === '' ? messages.preparedByBlank : messages.preparedBy(clinician), printed].join(
+        messages.footerSeparator,
+      ),
       right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
     wordingSentences: [
       ...population.map((sentence) => sentence.text),
-      ...model.arrays.flatMap((array) => frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text)),
+      ...model.arrays.flatMap((array) =>
+        frames.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text),
+      ),
       ...others.map((sentence) => sentence.text),
     ],
   };

@@ -14,7 +14,12 @@ const BADGE_PADDING = 1.6;
 const BADGE_GAP = 4;
 
 /** The illustrative badge, or null for a topic with real numbers. */
-function illustrativeBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth): { block: Block; width: number } | null {
+function illustrativeBlock(
+  content: HandoutContent,
+  width: number,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): { block: Block; width: number } | null {
   if (content.illustrative === null) return null;
   const text = textBlock(content.illustrative, width - 2 * BADGE_PADDING, styles.listBold, measure);
   const badgeWidth = text.width + 2 * BADGE_PADDING;

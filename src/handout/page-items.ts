@@ -4,7 +4,7 @@
  */
 import type { PersonLook } from '../core/direction.ts';
 import type { ChartModel } from '../render/chart-model.ts';
-import type { GlyphName } from '../render/icon-array-layout.ts';
+import type { GlyphName, IconArrayLayout } from '../render/icon-array-layout.ts';
 import type { TextBlock } from './text-layout.ts';
 
 export type PageItem =
@@ -34,6 +34,26 @@ export type PageItem =
       readonly size: number;
       readonly glyph: GlyphName;
       readonly look: PersonLook;
+    }
+  | {
+      /** A rectangle's outline: the block of a picture that is shown enlarged, and the enlargement. */
+      readonly kind: 'outline';
+      readonly x: number;
+      readonly y: number;
+      readonly width: number;
+      readonly height: number;
+      readonly colour: string;
+      readonly thickness: number;
+    }
+  | {
+      /** People laid out by the render module, drawn without a chart's text: the enlarged block of 100. */
+      readonly kind: 'people';
+      readonly x: number;
+      readonly y: number;
+      readonly width: number;
+      readonly layout: IconArrayLayout;
+      /** The event is one people want (see `lookOf`). */
+      readonly wanted: boolean;
     }
   | {
       readonly kind: 'chart';

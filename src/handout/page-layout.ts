@@ -72,18 +72,36 @@ function sideBySide(left: Block, right: Block, width: number): Block {
  * questions to ask: at least the settings' number of lines, more where the
  * questions leave room.
  */
-function promptsBlock(content: HandoutContent, width: number, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {
+function promptsBlock(
+  content: HandoutContent,
+  width: number,
+  settings: FitSettings,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
   const columnWidth = (width - COLUMN_GUTTER) / 2;
   const heading = (text: string) => headingBlock(text, columnWidth, styles, measure);
   const spacing = lineHeight(styles.list) * 1.6;
-  const questions = section(heading(content.questions.heading), bulletsBlock(content.questions.items, columnWidth, styles.list, measure));
-  const prompt = section(heading(content.matters.heading), textItem(textBlock(content.matters.prompt, columnWidth, styles.listMuted, measure)));
+  const questions = section(
+    heading(content.questions.heading),
+    bulletsBlock(content.questions.items, columnWidth, styles.list, measure),
+  );
+  const prompt = section(
+    heading(content.matters.heading),
+    textItem(textBlock(content.matters.prompt, columnWidth, styles.listMuted, measure)),
+  );
   const room = Math.floor((questions.height - prompt.height - 0.5) / spacing);
   const writing = writingLines(Math.max(settings.writingLines, room), columnWidth, spacing, styles.colours.rule);
   return sideBySide(stack([prompt, writing], 0), questions, width);
 }
 
-function footBlock(content: HandoutContent, width: number, settings: FitSettings, styles: HandoutStyles, measure: MeasureWidth): Block {
+function footBlock(
+  content: HandoutContent,
+  width: number,
+  settings: FitSettings,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
   const padding = 3;
   const inner = width - 2 * padding;
   // The caution and where the numbers come from, together in one calm box.
@@ -103,12 +121,21 @@ function footBlock(content: HandoutContent, width: number, settings: FitSettings
   const rightWidth = measure(content.footer.right, styles.footer.size, false);
   const oneLine = left.width + rightWidth + 8 <= width && left.lines.length === 1;
   const right = textBlock(content.footer.right, width, styles.footer, measure);
-  const rightBlock = { ...right, lines: right.lines.map((line) => ({ ...line, x: width - measure(line.text, styles.footer.size, false) })) };
+  const rightBlock = {
+    ...right,
+    lines: right.lines.map((line) => ({ ...line, x: width - measure(line.text, styles.footer.size, false) })),
+  };
   // The footer sits on the bottom margin, so its height reaches down to the descenders.
   const footer: Block = oneLine
     ? { items: [...textItem(left).items, ...textItem(rightBlock).items], height: inkDepth(left) }
-    : { items: [...textItem(left).items, ...textItem(rightBlock, 0, left.height).items], height: left.height + inkDepth(rightBlock) };
-  const rule: Block = { items: [{ kind: 'rule', x: 0, y: 0, width, colour: styles.colours.rule, thickness: 0.25 }], height: 0.25 };
+    : {
+        items: [...textItem(left).items, ...textItem(rightBlock, 0, left.height).items],
+        height: left.height + inkDepth(rightBlock),
+      };
+  const rule: Block = {
+    items: [{ kind: 'rule', x: 0, y: 0, width, colour: styles.colours.rule, thickness: 0.25 }],
+    height: 0.25,
+  };
   return stack([caution, rule, footer], settings.space * 0.45);
 }
 
@@ -149,7 +176,9 @@ export function layoutPage(
     questions: prompts.height,
   };
   const overBudget = (part: HandoutPart) => partHeights[part] - PART_SHARE[part] * box.height;
-  const worst = (Object.keys(PART_SHARE) as HandoutPart[]).reduce((found, part) => (overBudget(part) > overBudget(found) ? part : found));
+  const worst = (Object.keys(PART_SHARE) as HandoutPart[]).reduce((found, part) =>
+    overBudget(part) > overBudget(found) ? part : found,
+  );
 
   if (!pictures.ok || needed > box.height) {
     return { items: [], fits: false, needed, tooLong: pictures.ok ? worst : pictures.part, parts: partHeights };

@@ -21,7 +21,12 @@ export const PAPER_SIZES: Readonly<Record<Paper, PaperSize>> = {
 export const HANDOUT_MARGIN = 15;
 
 /** The box text and pictures may use: the page less its margins. */
-export function contentBox(paper: Paper): { readonly x: number; readonly y: number; readonly width: number; readonly height: number } {
+export function contentBox(paper: Paper): {
+  readonly x: number;
+  readonly y: number;
+  readonly width: number;
+  readonly height: number;
+} {
   const size = PAPER_SIZES[paper];
   return {
     x: HANDOUT_MARGIN,

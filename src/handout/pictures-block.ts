@@ -7,17 +7,16 @@
  */
 import { chartFrame } from '../render/chart-frame.ts';
 import type { ChartFrame, FrameText } from '../render/chart-frame.ts';
+import type { IconArrayLayout } from '../render/icon-array-layout.ts';
 import type { MeasureText } from '../render/text/measure-text.ts';
 import type { FitSettings } from './fit-settings.ts';
 import type { HandoutContent, TableCell } from './handout-content.ts';
 import type { HandoutStyles } from './handout-styles.ts';
-import { type Block, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
+import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
 import { type MeasureWidth, POINTS_PER_MM, type TextBlock, type TextStyle, lineHeight, textBlock } from './text-layout.ts';
 
 /** The block, or the part whose words cannot fit their column. */
-export type PicturesBlock =
-  | { readonly ok: true; readonly block: Block }
-  | { readonly ok: false; readonly part: 'options' };
+export type PicturesBlock = { readonly ok: true; readonly block: Block } | { readonly ok: false; readonly part: 'options' };
 
 /** Padding left and right of table text, in millimetres. */
 const PAD_X = 1.8;
@@ -25,6 +24,14 @@ const PAD_X = 1.8;
 const CAPTION_PAD = 2;
 /** Tolerance for a line that ends exactly at its column edge, in millimetres. */
 const EDGE = 0.01;
+/** The narrowest caption set beside an enlarged block; narrower slots put the block under the caption, in millimetres. */
+const CAPTION_BESIDE_CLOSE_UP = 30;
+/** Space between an enlarged block and its caption, in millimetres. */
+const CLOSE_UP_GAP = 3;
+/** The outlines of a block and of its enlargement, in millimetres. */
+const OUTLINE_WIDTH = 0.35;
+/** How far an outline stands off the people it frames, in cells (inside the gutter between blocks). */
+const OUTLINE_OFFSET = 0.4;
 
 /**
  * Share of the width left of the pictures for the key and the outcome names, by
@@ -104,6 +111,83 @@ function keyBlock(
   return { items: placeBlock(block, 0, top), height: top + block.height };
 }
 
+/** A rectangle's outline around the people of `block` in a placed, scaled layout. */
+function blockOutline(layout: IconArrayLayout, block: number, x: number, y: number, colour: string): PageItem {
+  const { cellSize, iconSize } = layout.geometry;
+  const people = layout.people.filter((person) => person.block === block);
+  const offset = OUTLINE_OFFSET * cellSize;
+  const left = Math.min(...people.map((person) => person.x)) - offset;
+  const top = Math.min(...people.map((person) => person.y)) - offset;
+  const right = Math.max(...people.map((person) => person.x)) + iconSize + offset;
+  const bottom = Math.max(...people.map((person) => person.y)) + iconSize + offset;
+  return {
+    kind: 'outline',
+    x: x + left,
+    y: y + top,
+    width: right - left,
+    height: bottom - top,
+    colour,
+    thickness: OUTLINE_WIDTH,
+  };
+}
+
+/** The enlarged block: its people at the close-up's cell size, outlined as the block is in the picture, and its label under it. */
+function closeUpFigure(
+  layout: IconArrayLayout,
+  label: string,
+  wanted: boolean,
+  settings: FitSettings,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
+  const width = layout.geometry.width * settings.closeUpCell;
+  const scale = width / layout.geometry.width;
+  const offset = OUTLINE_OFFSET * settings.closeUpCell;
+  const boxWidth = width + 2 * offset;
+  const boxHeight = layout.geometry.height * scale + 2 * offset;
+  const text = centred(label, boxWidth, styles.tableNote, measure);
+  const items: PageItem[] = [
+    { kind: 'people', x: offset, y: offset, width, layout, wanted },
+    { kind: 'outline', x: 0, y: 0, width: boxWidth, height: boxHeight, colour: styles.colours.text, thickness: OUTLINE_WIDTH },
+    ...textItem(text, 0, boxHeight + 0.8).items,
+  ];
+  return { items, height: boxHeight + 0.8 + text.height };
+}
+
+/**
+ * Under a picture: its caption and any note in words; for a picture of 1000, the enlarged
+ * block beside them (or under them where the slot is narrow).
+ */
+function underPicture(
+  caption: string,
+  note: string | null,
+  closeUp: { readonly layout: IconArrayLayout; readonly label: string } | null,
+  width: number,
+  wanted: boolean,
+  settings: FitSettings,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+): Block {
+  const gap = lineHeight(styles.list) * 0.3;
+  const captionOf = (columnWidth: number) => textItem(textBlock(caption, columnWidth, styles.list, measure));
+  const noteBlock = note === null ? EMPTY_BLOCK : textItem(textBlock(note, width, styles.listMuted, measure));
+  if (closeUp === null) return stack([captionOf(width), noteBlock], gap);
+  const figure = closeUpFigure(closeUp.layout, closeUp.label, wanted, settings, styles, measure);
+  const figureWidth = closeUp.layout.geometry.width * settings.closeUpCell + 2 * OUTLINE_OFFSET * settings.closeUpCell;
+  const besideWidth = width - figureWidth - CLOSE_UP_GAP;
+  if (besideWidth >= CAPTION_BESIDE_CLOSE_UP) {
+    // The block under the picture's outlined block, the caption beside it, any note across both.
+    const text = captionOf(besideWidth);
+    const top: Block = {
+      items: [...figure.items, ...placeBlock(text, figureWidth + CLOSE_UP_GAP, 0)],
+      height: Math.max(figure.height, text.height),
+    };
+    return stack([top, noteBlock], gap);
+  }
+  const centredFigure: Block = { items: placeBlock(figure, Math.max(0, (width - figureWidth) / 2), 0), height: figure.height };
+  return stack([captionOf(width), noteBlock, centredFigure], gap);
+}
+
 /** A picture's placement: its own one-array chart frame, and where that frame goes in the block. */
 interface PlacedPicture {
   readonly frame: ChartFrame;
@@ -134,9 +218,14 @@ export function picturesBlock(
   // chartFrame's own margin is half an em on each side of its one array.
   const margin = fontSize * 0.5;
   const unit = first.layout.geometry;
-  const column = Math.min(slot - fontSize * 1.2, (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width);
+  const column = Math.min(
+    slot - fontSize * 1.2,
+    (model.denominator === 1000 ? settings.cell1000 : settings.cell100) * unit.width,
+  );
   const frameWidth = column + 2 * margin;
-  const frames = model.arrays.map((array) => chartFrame({ ...model, arrays: [array] }, { width: frameWidth, fontSize, measure: measureMm }));
+  const frames = model.arrays.map((array) =>
+    chartFrame({ ...model, arrays: [array] }, { width: frameWidth, fontSize, measure: measureMm }),
+  );
   if (frames.some((frame) => frame.arrays.some((array) => overflows(array.title, array.x + array.width, measureMm)))) {
     return { ok: false, part: 'options' };
   }
@@ -156,8 +245,22 @@ export function picturesBlock(
   const picturesBottom = gridTop + firstFrame.height - gridOf(firstFrame);
   const gridBottom = gridTop + (firstFrame.arrays[0]?.grid.layout.geometry.height ?? 0);
 
-  // Under each picture, its option's two frames in words, across its slot.
-  const captions = content.chart.captions.map((caption) => textBlock(caption, slot - 2 * CAPTION_PAD, styles.list, measure));
+  // Under each picture, its option's two frames in words, across its slot, and for 1000 people the enlarged block.
+  const closeUp = content.chart.closeUp;
+  const captions = content.chart.captions.map((caption, index) => {
+    const layout = closeUp?.layouts[index];
+    const enlarged = closeUp === null || layout === undefined ? null : { layout, label: closeUp.label };
+    return underPicture(
+      caption,
+      content.chart.notes[index] ?? null,
+      enlarged,
+      slot - 2 * CAPTION_PAD,
+      model.wanted,
+      settings,
+      styles,
+      measure,
+    );
+  });
   const captionsBottom = picturesBottom + Math.max(0, ...captions.map((caption) => caption.height));
   const key = keyBlock(content, labelWidth - PAD_X, gridTop, Math.max(gridBottom, captionsBottom), styles, measure);
   const items: PageItem[] = [
@@ -173,8 +276,15 @@ export function picturesBlock(
     ...key.items,
     ...titles.flatMap((title, index) => textItem(title, slotLeft(index) + CAPTION_PAD, titlesHeight - title.height).items),
   ];
+  if (closeUp !== null) {
+    pictures.forEach((picture) => {
+      const grid = picture.frame.arrays[0]?.grid;
+      if (grid !== undefined)
+        items.push(blockOutline(grid.layout, closeUp.block, picture.x + grid.x, picture.y + grid.y, styles.colours.text));
+    });
+  }
 
-  captions.forEach((caption, index) => items.push(...textItem(caption, slotLeft(index) + CAPTION_PAD, picturesBottom).items));
+  captions.forEach((caption, index) => items.push(...placeBlock(caption, slotLeft(index) + CAPTION_PAD, picturesBottom)));
   // The key may run on beside the captions; the table starts below both.
   let top = Math.max(captionsBottom, key.height + lineHeight(styles.list) * 0.3);
   if (content.table.sections.length === 0 && content.table.noSideEffects === null) {

@@ -154,7 +154,11 @@ export function textBlock(
   const step = lineHeight(style);
   const first = (style.size * ASCENT) / POINTS_PER_MM + (step - style.size / POINTS_PER_MM) / 2;
   return {
-    lines: wrapped.map((line, index) => ({ text: line, x: indent + (index === 0 ? firstLineIndent : 0), y: first + index * step })),
+    lines: wrapped.map((line, index) => ({
+      text: line,
+      x: indent + (index === 0 ? firstLineIndent : 0),
+      y: first + index * step,
+    })),
     style,
     height: wrapped.length * step,
     width: wrapped.reduce((widest, line) => Math.max(widest, indent + measure(line, style.size, style.bold)), 0),

@@ -70,7 +70,15 @@ export function chartFrame(model: ChartModel, options: FrameOptions = {}): Chart
   const fontSize = options.fontSize ?? 14;
   const measure = options.measure ?? measureDejaVuSans;
   const margin = fontSize * 0.5;
-  const text = (content: string, x: number, top: number, maxWidth: number, size: number, bold: boolean, tone: FrameText['tone']) => {
+  const text = (
+    content: string,
+    x: number,
+    top: number,
+    maxWidth: number,
+    size: number,
+    bold: boolean,
+    tone: FrameText['tone'],
+  ) => {
     const lines = wrapText(content, maxWidth, size, bold, measure).map((line, index) => ({
       text: line,
       x,
@@ -81,7 +89,8 @@ export function chartFrame(model: ChartModel, options: FrameOptions = {}): Chart
 
   const inner = width - 2 * margin;
   const heading = text(model.heading, margin, margin, inner, fontSize * 1.3, true, 'text');
-  const illustrative = model.illustrative === null ? null : text(model.illustrative, margin, heading.bottom, inner, fontSize * 0.9, false, 'muted');
+  const illustrative =
+    model.illustrative === null ? null : text(model.illustrative, margin, heading.bottom, inner, fontSize * 0.9, false, 'muted');
   const titlesTop = (illustrative?.bottom ?? heading.bottom) + fontSize * 0.6;
 
   const count = model.arrays.length;
@@ -137,4 +146,3 @@ export function chartFrame(model: ChartModel, options: FrameOptions = {}): Chart
     arrays,
   };
 }
-

@@ -7,8 +7,9 @@ import { type PersonLook, lookOf } from '../core/direction.ts';
 import { peopleGroups } from '../core/people-groups.ts';
 import type { TimeUnit } from '../core/time-unit.ts';
 import type { OptionOutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
-import type { Denominator, PeopleCounts, PeopleGroups, PersonGroup } from '../core/types.ts';
+import type { Denominator, PeopleCounts, PeopleGroups, PersonGroup, WordsDenominator } from '../core/types.ts';
 import { FILL_ORDER } from './fill-sequence.ts';
+import { type ExactRisks, hiddenDifference } from './hidden-difference.ts';
 import { type Arrangement, type IconArrayLayout, iconArrayLayout } from './icon-array-layout.ts';
 import { type ArmRole, type ChartMessages, chartMessagesEn } from './messages/en.ts';
 import { type RankSpan, uncertainRanks } from './uncertain-people.ts';
@@ -42,7 +43,10 @@ export interface ChartArray {
   readonly groups: PeopleGroups;
   /** Labels of the groups drawn, in fill order. */
   readonly labels: readonly ChartLabel[];
-  /** A sentence when the option changes nothing at these numbers. */
+  /**
+   * A sentence when the picture shows the option changing no one: "the same number" only when
+   * the exact difference is 0, otherwise the difference counted per more people.
+   */
   readonly note: string | null;
   readonly range: ChartRange | null;
   /** The array in one sentence, with every count. */
@@ -89,6 +93,12 @@ interface ArmInput {
   readonly role: ArmRole;
   readonly groups: PeopleGroups;
   readonly perPeople: PeopleCounts | null;
+  /** The risks behind the counts, to tell a difference rounded away from none at all. */
+  readonly risks: ExactRisks;
+  /** The level of the option's interval, or null. */
+  readonly level: number | null;
+  /** The counts at the words' denominator (10,000 and up for rare outcomes), or null. */
+  readonly wordsPeople: PeopleCounts<WordsDenominator> | null;
 }
 
 interface ChartContext {
@@ -116,19 +126,22 @@ export function outcomeChart(result: TopicResult, outcomeId: string, options: Ch
   if (outcome === undefined) throw new RangeError(`outcomeChart requires a known outcome (got ${outcomeId})`);
   const comparison = outcome.options.find((option) => option.isComparison);
   if (comparison === undefined) throw new RangeError(`outcomeChart requires a comparison for ${outcomeId}`);
-  const others = (options.optionIds ?? outcome.options.filter((option) => !option.isComparison).map((option) => option.optionId)).map(
-    (optionId) => {
-      const found = outcome.options.find((option) => option.optionId === optionId && !option.isComparison);
-      if (found === undefined) throw new RangeError(`outcomeChart requires a known option (got ${optionId})`);
-      return found;
-    },
-  );
+  const others = (
+    options.optionIds ?? outcome.options.filter((option) => !option.isComparison).map((option) => option.optionId)
+  ).map((optionId) => {
+    const found = outcome.options.find((option) => option.optionId === optionId && !option.isComparison);
+    if (found === undefined) throw new RangeError(`outcomeChart requires a known option (got ${optionId})`);
+    return found;
+  });
   const arm = (option: OptionOutcomeResult): ArmInput => ({
     optionId: option.optionId,
     name: option.name,
     role: option.isComparison ? 'comparison' : 'option',
     groups: option.groups,
     perPeople: option.perPeople,
+    risks: { comparison: option.comparisonRisk.estimate, intervention: option.interventionRisk.estimate },
+    level: option.isComparison ? null : option.level,
+    wordsPeople: option.wordsPeople,
   });
   const context: ChartContext = {
     id: outcome.outcomeId,
@@ -147,6 +160,12 @@ export function outcomeChart(result: TopicResult, outcomeId: string, options: Ch
 /** A comparison and one option with no topic: "Without the option" and "With the option". */
 export interface PairInput {
   readonly perPeople: PeopleCounts;
+  /** The comparison's and the option's risks behind the counts. */
+  readonly risks: ExactRisks;
+  /** The level of the option's interval (default none). */
+  readonly level?: number | null;
+  /** The counts at the words' denominator, when it is larger than the pictures'. */
+  readonly wordsPeople?: PeopleCounts<WordsDenominator> | null;
   /** The outcome in a sentence ("a stroke"); default "the outcome". */
   readonly outcomeName?: string;
   readonly periodYears?: number | null;
@@ -160,7 +179,8 @@ export interface PairInput {
 /**
  * The chart model of a bare pair: the comparison's and the option's people counts.
  *
- * @example pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } })
+ * @example pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null },
+ *   risks: { comparison: 0.2, intervention: 0.15 } })
  *   .arrays[1].groups // => { denominator: 100, event: 15, prevented: 5, caused: 0, free: 80 }
  */
 export function pairChart(pair: PairInput, options: ChartOptions = {}): ChartModel {
@@ -184,6 +204,9 @@ export function pairChart(pair: PairInput, options: ChartOptions = {}): ChartMod
       role: 'comparison',
       groups: peopleGroups(comparison, comparison, denominator),
       perPeople: null,
+      risks: { comparison: pair.risks.comparison, intervention: pair.risks.comparison },
+      level: null,
+      wordsPeople: null,
     },
     {
       optionId: 'with',
@@ -191,6 +214,9 @@ export function pairChart(pair: PairInput, options: ChartOptions = {}): ChartMod
       role: 'option',
       groups: peopleGroups(comparison, intervention, denominator),
       perPeople: pair.perPeople,
+      risks: pair.risks,
+      level: pair.level ?? null,
+      wordsPeople: pair.wordsPeople ?? null,
     },
   ];
   return buildChart(arms, context, options);
@@ -202,9 +228,9 @@ function buildChart(arms: readonly ArmInput[], context: ChartContext, options: C
   const arrays = arms.map((arm) => buildArray(arm, context, messages, arrangement, options.seed));
   const heading = messages.heading(context.outcomeName, context.periodYears, context.periodUnit);
   const illustrative = context.illustrative ? messages.illustrative : null;
-  const sentences = arrays.flatMap((array) => [array.summary, array.note, array.range?.text ?? null]).filter(
-    (sentence): sentence is string => sentence !== null,
-  );
+  const sentences = arrays
+    .flatMap((array) => [array.summary, array.note, array.range?.text ?? null])
+    .filter((sentence): sentence is string => sentence !== null);
   return {
     id: context.id,
     heading,
@@ -230,12 +256,19 @@ function buildArray(
   seed: number | undefined,
 ): ChartArray {
   if (arm.groups.denominator !== context.denominator) {
-    throw new RangeError(`outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`);
+    throw new RangeError(
+      `outcomeChart requires one denominator (${arm.name} is per ${arm.groups.denominator}, not ${context.denominator})`,
+    );
   }
   if (arm.role === 'comparison' && (arm.groups.prevented !== 0 || arm.groups.caused !== 0)) {
     throw new RangeError(`outcomeChart requires the comparison to have only event and free people (${arm.name})`);
   }
-  const titleValues = { denominator: context.denominator, option: arm.name, periodYears: context.periodYears, periodUnit: context.periodUnit };
+  const titleValues = {
+    denominator: context.denominator,
+    option: arm.name,
+    periodYears: context.periodYears,
+    periodUnit: context.periodUnit,
+  };
   const title = context.bare
     ? messages.pairTitle(titleValues, arm.role)
     : arm.role === 'comparison'
@@ -249,7 +282,6 @@ function buildArray(
     count: arm.groups[group],
     text: words[group]({ count: arm.groups[group], outcome: context.outcomeName, option: cause, role: arm.role }),
   }));
-  const unchanged = arm.role === 'option' && arm.groups.prevented === 0 && arm.groups.caused === 0;
   const interval = arm.role === 'option' ? (arm.perPeople?.interventionRange ?? null) : null;
   const range =
     interval === null || arm.perPeople === null
@@ -257,7 +289,7 @@ function buildArray(
       : {
           lower: interval.lower,
           upper: interval.upper,
-          text: messages.range({ ...interval, denominator: context.denominator, outcome: context.outcomeName, option: cause }),
+          text: rangeText(arm, interval, context, messages, cause),
           outlineText: messages.rangeOutline(context.outcomeName, cause),
           uncertain: uncertainRanks(interval, arm.groups.event + arm.groups.caused),
         };
@@ -268,9 +300,49 @@ function buildArray(
     title,
     groups: arm.groups,
     labels,
-    note: unchanged ? messages.noDifference(context.outcomeName, cause) : null,
+    note: noteOf(arm, context, messages, cause),
     range,
-    summary: messages.summary(title, labels.map((label) => label.text)),
+    summary: messages.summary(
+      title,
+      labels.map((label) => label.text),
+    ),
     layout: iconArrayLayout(context.denominator, arm.groups, { arrangement, ...(seed === undefined ? {} : { seed }) }),
   };
+}
+
+/**
+ * The sentence beside an option's picture that shows no one changed: "the same number" only
+ * when the exact difference is 0; a difference rounded away is said in words, per more people.
+ */
+function noteOf(arm: ArmInput, context: ChartContext, messages: ChartMessages, cause: string): string | null {
+  if (arm.role !== 'option' || arm.groups.prevented !== 0 || arm.groups.caused !== 0) return null;
+  const hidden = hiddenDifference(arm.risks, context.denominator, arm.wordsPeople);
+  if (hidden === null) return messages.noDifference(context.outcomeName, cause);
+  return messages.belowOnePerson({
+    outcome: context.outcomeName,
+    option: cause,
+    denominator: context.denominator,
+    direction: hidden.direction,
+    count: hidden.count,
+    wordsDenominator: hidden.denominator,
+  });
+}
+
+/**
+ * The option's range as people, with its level; ends that show as the same count say the range
+ * is less than one person, with the words' counts when they show the ends apart.
+ */
+function rangeText(
+  arm: ArmInput,
+  interval: { readonly lower: number; readonly upper: number },
+  context: ChartContext,
+  messages: ChartMessages,
+  cause: string,
+): string {
+  const values = { ...interval, denominator: context.denominator, outcome: context.outcomeName, option: cause, level: arm.level };
+  if (interval.lower !== interval.upper) return messages.range(values);
+  const people = arm.wordsPeople;
+  const counted = people === null || people.denominator <= context.denominator ? null : people.interventionRange;
+  const apart = people !== null && counted !== null && counted.lower !== counted.upper;
+  return messages.narrowRange({ ...values, words: apart ? { ...counted, denominator: people.denominator } : null });
 }

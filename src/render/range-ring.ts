@@ -52,5 +52,8 @@ export function ringedSwatch(
 ): { readonly figure: { readonly x: number; readonly y: number; readonly size: number }; readonly ring: RangeRing } {
   const figureSize = size * SWATCH_FIGURE;
   const inset = (size - figureSize) / 2;
-  return { figure: { x: x + inset, y: y + inset, size: figureSize }, ring: rangeRing(x + inset, y + inset, figureSize, size, palette) };
+  return {
+    figure: { x: x + inset, y: y + inset, size: figureSize },
+    ring: rangeRing(x + inset, y + inset, figureSize, size, palette),
+  };
 }

@@ -54,7 +54,9 @@ export interface ReadableHandle {
 /** The file calls the reader makes (`node:fs/promises` in the app; a fake in tests). */
 export interface RegularFileSystem<Handle extends ReadableHandle = ReadableHandle> {
   open(filePath: string, flags: number): Promise<Handle>;
-  lstat(filePath: string): Promise<{ readonly dev: number; readonly ino: number; isSymbolicLink(): boolean; isDirectory(): boolean }>;
+  lstat(
+    filePath: string,
+  ): Promise<{ readonly dev: number; readonly ino: number; isSymbolicLink(): boolean; isDirectory(): boolean }>;
 }
 
 /** How a file may be opened. */

@@ -29,6 +29,11 @@ export function slideCount(item: PresentationItem, kind: StepKind): number {
 }
 
 /** Build the slide of `kind` for a presented topic; `part` picks one of a step's several slides (see `slideCount`). */
-export function buildSlide(item: PresentationItem, kind: StepKind, messages: TeachingMessages = teachingMessagesEn, part = 0): Slide {
+export function buildSlide(
+  item: PresentationItem,
+  kind: StepKind,
+  messages: TeachingMessages = teachingMessagesEn,
+  part = 0,
+): Slide {
   return BUILDERS[kind]({ item, messages, part });
 }

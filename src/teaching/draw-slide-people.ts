@@ -52,7 +52,9 @@ export function drawPeopleGroup(
   palette: ChartPalette = colourPalette,
 ): { readonly width: number; readonly height: number } {
   if (looks.length !== layout.people.length) {
-    throw new RangeError(`A slide array has ${layout.people.length} people but ${looks.length} looks; build both from the same groups.`);
+    throw new RangeError(
+      `A slide array has ${layout.people.length} people but ${looks.length} looks; build both from the same groups.`,
+    );
   }
   const scaled = scaleLayout(layout, UNITS_PER_CELL / layout.geometry.cellSize);
   const { cellSize, iconSize, patternTile } = scaled.geometry;
@@ -77,7 +79,12 @@ export function drawPeopleGroup(
 }
 
 /** Draw a whole array into an `<svg>` element, replacing its content; the view box is the drawing's size. */
-export function drawSlidePeople(svg: SVGSVGElement, layout: IconArrayLayout, looks: readonly PersonLook[], idPrefix: string): void {
+export function drawSlidePeople(
+  svg: SVGSVGElement,
+  layout: IconArrayLayout,
+  looks: readonly PersonLook[],
+  idPrefix: string,
+): void {
   svg.replaceChildren();
   const group = svg.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
   const size = drawPeopleGroup(group, svg, layout, looks, idPrefix);

@@ -15,10 +15,13 @@ import { peoplePanel } from './people-panel.ts';
 /** The arms of the result shown by the demonstrations, computed per `per` people. */
 function demonstrationArms(source: SlideSource, per: Denominator | null): OutcomeArms | null {
   const { item } = source;
-  const result = per === null ? item.result : (() => {
-    const evaluation = evaluateTopic(item.topic, { per });
-    return evaluation.ok ? evaluation.result : null;
-  })();
+  const result =
+    per === null
+      ? item.result
+      : (() => {
+          const evaluation = evaluateTopic(item.topic, { per });
+          return evaluation.ok ? evaluation.result : null;
+        })();
   if (result === null) return null;
   return armsOf(benefitOutcome(result) ?? headlineOutcome(result), item.optionId);
 }
@@ -74,7 +77,11 @@ function incrementalSlide(source: SlideSource): Slide {
     ],
     lines: [
       {
-        text: source.messages.story.totalWithout(arms.comparison.groups.event, arms.comparison.groups.denominator, arms.comparison.name),
+        text: source.messages.story.totalWithout(
+          arms.comparison.groups.event,
+          arms.comparison.groups.denominator,
+          arms.comparison.name,
+        ),
         tone: 'note',
         look: null,
       },

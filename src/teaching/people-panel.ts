@@ -58,7 +58,9 @@ export function peoplePanel(settings: PanelSettings, messages: TeachingMessages)
   });
   const span = settings.uncertain ?? null;
   const { wanted } = settings;
-  const looks: PersonLook[] = layout.people.map((person) => (isUncertain(person.rank, span) ? 'uncertain' : lookOf(person.group, wanted)));
+  const looks: PersonLook[] = layout.people.map((person) =>
+    isUncertain(person.rank, span) ? 'uncertain' : lookOf(person.group, wanted),
+  );
   const counts = new Map<PersonLook, number>();
   for (const look of looks) counts.set(look, (counts.get(look) ?? 0) + 1);
   const words = messages.chips;
@@ -85,6 +87,9 @@ export function peoplePanel(settings: PanelSettings, messages: TeachingMessages)
     layout,
     looks,
     chips,
-    description: messages.panels.description(settings.title, chips.map((chip) => chip.label)),
+    description: messages.panels.description(
+      settings.title,
+      chips.map((chip) => chip.label),
+    ),
   };
 }

@@ -27,7 +27,8 @@ export type ItemProblem =
   | { readonly kind: 'comparison-option'; readonly value: string }
   | { readonly kind: 'unknown-harm'; readonly value: string; readonly known: readonly string[] };
 
-export type ItemCheck = { readonly ok: true; readonly item: PresentationItem } | { readonly ok: false; readonly problem: ItemProblem };
+export type ItemCheck =
+  { readonly ok: true; readonly item: PresentationItem } | { readonly ok: false; readonly problem: ItemProblem };
 
 /** The headline outcome (the first outcome when none is marked). */
 export function headlineOutcome(result: TopicResult): OutcomeResult | null {
@@ -46,7 +47,10 @@ export function presentationItem(topic: Topic, choices: ItemChoices): ItemCheck 
   const evaluation = evaluateTopic(topic, { per: choices.per });
   if (!evaluation.ok) {
     const first = evaluation.problems[0];
-    return { ok: false, problem: { kind: 'not-computed', field: first?.field ?? '', detail: first === undefined ? '' : describeProblem(first) } };
+    return {
+      ok: false,
+      problem: { kind: 'not-computed', field: first?.field ?? '', detail: first === undefined ? '' : describeProblem(first) },
+    };
   }
   const result = evaluation.result;
   const options = topic.options.filter((option) => !option.isComparison);

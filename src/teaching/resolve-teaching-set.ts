@@ -34,7 +34,10 @@ function itemProblem(fileName: string, index: number, problem: ItemProblem): Set
       return { field, message: words.topicNotComputed(fileName, index + 1, field, problem.detail) };
     }
     case 'unknown-option':
-      return { field: `${base}.option`, message: words.unknownOption(fileName, `${base}.option`, problem.value, problem.known.map((id) => `"${id}"`).join(', ')) };
+      return {
+        field: `${base}.option`,
+        message: words.unknownOption(fileName, `${base}.option`, problem.value, problem.known.map((id) => `"${id}"`).join(', ')),
+      };
     case 'comparison-option':
       return { field: `${base}.option`, message: words.comparisonOption(fileName, `${base}.option`, problem.value) };
     case 'unknown-harm': {
@@ -59,7 +62,11 @@ async function topicOf(
   try {
     text = await readTopicText(path);
   } catch (error) {
-    return { ok: false, field, message: words.pathUnreadable(fileName, index + 1, path, error instanceof Error ? error.message : String(error)) };
+    return {
+      ok: false,
+      field,
+      message: words.pathUnreadable(fileName, index + 1, path, error instanceof Error ? error.message : String(error)),
+    };
   }
   const reading = readTopicFile(text);
   if (!reading.ok) {
@@ -73,7 +80,11 @@ async function topicOf(
  *
  * @param readTopicText - reads topic files named by path; null where files cannot be read (a browser)
  */
-export async function resolveTeachingSet(fileName: string, set: TeachingSet, readTopicText: ReadTopicText | null): Promise<ResolvedTeachingSet> {
+export async function resolveTeachingSet(
+  fileName: string,
+  set: TeachingSet,
+  readTopicText: ReadTopicText | null,
+): Promise<ResolvedTeachingSet> {
   const items: PresentationItem[] = [];
   for (const [index, item] of set.items.entries()) {
     const found = await topicOf(fileName, index, item, readTopicText);

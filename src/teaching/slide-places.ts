@@ -18,6 +18,8 @@ export interface SlidePlace {
 /** Every slide of every item, in order. */
 export function slidePlaces(items: readonly PresentationItem[]): SlidePlace[] {
   return items.flatMap((item, itemIndex) =>
-    item.steps.flatMap((kind, step) => Array.from({ length: slideCount(item, kind) }, (_, part) => ({ item: itemIndex, step, kind, part }))),
+    item.steps.flatMap((kind, step) =>
+      Array.from({ length: slideCount(item, kind) }, (_, part) => ({ item: itemIndex, step, kind, part })),
+    ),
   );
 }

@@ -22,7 +22,15 @@ const GAP = 28 * U;
 const FONT = "'DejaVu Sans', Verdana, Arial, sans-serif";
 const LINE = 1.3;
 
-const { ink: INK, muted: MUTED, accent: ACCENT, notice: NOTICE, noticeSoft: NOTICE_SOFT, line: LINE_COLOUR, surface: SURFACE } = slideColours;
+const {
+  ink: INK,
+  muted: MUTED,
+  accent: ACCENT,
+  notice: NOTICE,
+  noticeSoft: NOTICE_SOFT,
+  line: LINE_COLOUR,
+  surface: SURFACE,
+} = slideColours;
 
 interface Writer {
   readonly document: Document;
@@ -41,17 +49,35 @@ interface TextSettings {
   readonly oneLine?: boolean;
 }
 
-function element<K extends keyof SVGElementTagNameMap>(writer: Writer, name: K, attributes: Record<string, string | number>): SVGElementTagNameMap[K] {
+function element<K extends keyof SVGElementTagNameMap>(
+  writer: Writer,
+  name: K,
+  attributes: Record<string, string | number>,
+): SVGElementTagNameMap[K] {
   const made = writer.document.createElementNS(SVG_NAMESPACE, name);
-  for (const [key, value] of Object.entries(attributes)) made.setAttribute(key, typeof value === 'number' ? svgNumber(value) : value);
+  for (const [key, value] of Object.entries(attributes))
+    made.setAttribute(key, typeof value === 'number' ? svgNumber(value) : value);
   return made;
 }
 
 /** Write wrapped text from `top`; returns the bottom of the block. */
-function text(writer: Writer, parent: Element, content: string, x: number, top: number, width: number, size: number, settings: TextSettings = {}): number {
+function text(
+  writer: Writer,
+  parent: Element,
+  content: string,
+  x: number,
+  top: number,
+  width: number,
+  size: number,
+  settings: TextSettings = {},
+): number {
   const bold = settings.bold === true;
   const lines = settings.oneLine === true ? [content] : wrapText(content, width, size, bold, measureDejaVuSans);
-  const block = element(writer, 'text', { 'font-size': size, fill: settings.colour ?? INK, ...(bold ? { 'font-weight': 'bold' } : {}) });
+  const block = element(writer, 'text', {
+    'font-size': size,
+    fill: settings.colour ?? INK,
+    ...(bold ? { 'font-weight': 'bold' } : {}),
+  });
   lines.forEach((line, index) => {
     const span = element(writer, 'tspan', { x, y: top + size * 0.8 + index * size * LINE });
     span.textContent = line;
@@ -108,7 +134,10 @@ function panel(writer: Writer, slide: Slide, found: PeoplePanel, x: number, top:
 function callout(writer: Writer, found: Callout, x: number, top: number, width: number): number {
   swatch(writer, found.look, x, top, 48 * U);
   const indent = found.look === null ? 0 : 62 * U;
-  const valueBottom = text(writer, writer.root, found.value, x + indent, top, width - indent, 48 * U, { bold: true, oneLine: true });
+  const valueBottom = text(writer, writer.root, found.value, x + indent, top, width - indent, 48 * U, {
+    bold: true,
+    oneLine: true,
+  });
   return text(writer, writer.root, found.text, x + indent, valueBottom, width - indent, 28 * U);
 }
 
@@ -123,7 +152,11 @@ function card(writer: Writer, found: FramingCard, x: number, top: number, width:
   const bodyX = labelX + 166 * U;
   const bodyWidth = x + width - 18 * U - bodyX;
   text(writer, group, found.label, labelX, top + 18 * U, 150 * U, 28 * U, { bold: true, colour: MUTED });
-  let y = text(writer, group, found.value, bodyX, top + 8 * U, bodyWidth, 40 * U, { bold: true, colour: ACCENT, oneLine: oneRow });
+  let y = text(writer, group, found.value, bodyX, top + 8 * U, bodyWidth, 40 * U, {
+    bold: true,
+    colour: ACCENT,
+    oneLine: oneRow,
+  });
   if (found.detail !== null && oneRow) {
     const after = bodyX + measureDejaVuSans(found.value, 40 * U, true) + 24 * U;
     text(writer, group, found.detail, after, top + 18 * U, x + width - 18 * U - after, 28 * U, { oneLine: true });
@@ -131,8 +164,23 @@ function card(writer: Writer, found: FramingCard, x: number, top: number, width:
     y = text(writer, group, found.detail, bodyX, y, bodyWidth, 28 * U);
   }
   const bottom = y + 8 * U;
-  group.insertBefore(element(writer, 'rect', { x, y: top, width, height: bottom - top, rx: 8 * U, fill: SURFACE, stroke: LINE_COLOUR, 'stroke-width': 2 * U }), group.firstChild);
-  group.insertBefore(element(writer, 'rect', { x, y: top, width: 10 * U, height: bottom - top, fill: ACCENT }), group.childNodes[1] ?? null);
+  group.insertBefore(
+    element(writer, 'rect', {
+      x,
+      y: top,
+      width,
+      height: bottom - top,
+      rx: 8 * U,
+      fill: SURFACE,
+      stroke: LINE_COLOUR,
+      'stroke-width': 2 * U,
+    }),
+    group.firstChild,
+  );
+  group.insertBefore(
+    element(writer, 'rect', { x, y: top, width: 10 * U, height: bottom - top, fill: ACCENT }),
+    group.childNodes[1] ?? null,
+  );
   return bottom;
 }
 
@@ -151,10 +199,15 @@ function evidence(writer: Writer, slide: Slide, x: number, top: number, width: n
   const group = element(writer, 'g', {});
   writer.root.appendChild(group);
   let y = text(writer, group, slide.evidence.finding, x + 28 * U, top + 12 * U, width - 46 * U, 28 * U);
-  y = text(writer, group, slide.evidence.source, x + 28 * U, y + 6 * U, width - 46 * U, 28 * U, { bold: true, colour: NOTICE }) + 12 * U;
+  y =
+    text(writer, group, slide.evidence.source, x + 28 * U, y + 6 * U, width - 46 * U, 28 * U, { bold: true, colour: NOTICE }) +
+    12 * U;
   writer.bottom = Math.max(writer.bottom, y);
   group.insertBefore(element(writer, 'rect', { x, y: top, width, height: y - top, fill: NOTICE_SOFT }), group.firstChild);
-  group.insertBefore(element(writer, 'rect', { x, y: top, width: 10 * U, height: y - top, fill: NOTICE }), group.childNodes[1] ?? null);
+  group.insertBefore(
+    element(writer, 'rect', { x, y: top, width: 10 * U, height: y - top, fill: NOTICE }),
+    group.childNodes[1] ?? null,
+  );
   return y;
 }
 
@@ -169,14 +222,22 @@ function side(writer: Writer, slide: Slide, x: number, top: number, width: numbe
 
 /** The height of the tallest panel title, so that side-by-side grids line up as on screen. */
 function titleHeight(slide: Slide): number {
-  const lines = slide.panels.map((found) => wrapText(found.title, panelWidth(slide, found), 28 * U, true, measureDejaVuSans).length);
+  const lines = slide.panels.map(
+    (found) => wrapText(found.title, panelWidth(slide, found), 28 * U, true, measureDejaVuSans).length,
+  );
   return Math.max(1, ...lines) * 28 * U * LINE;
 }
 
 /** Draw `slide` in a detached 1920 × 1080 `<svg>` of `document`, with `footer` at its foot. */
 export function slideSvgElement(slide: Slide, document: Document, footer: string, illustrative: string): SVGSVGElement {
   const root = document.createElementNS(SVG_NAMESPACE, 'svg');
-  const attributes = { viewBox: `0 0 ${SLIDE_WIDTH} ${SLIDE_HEIGHT}`, width: SLIDE_WIDTH, height: SLIDE_HEIGHT, 'font-family': FONT, role: 'img' };
+  const attributes = {
+    viewBox: `0 0 ${SLIDE_WIDTH} ${SLIDE_HEIGHT}`,
+    width: SLIDE_WIDTH,
+    height: SLIDE_HEIGHT,
+    'font-family': FONT,
+    role: 'img',
+  };
   for (const [key, value] of Object.entries(attributes)) root.setAttribute(key, String(value));
   const defs = document.createElementNS(SVG_NAMESPACE, 'defs');
   root.appendChild(defs);
@@ -226,7 +287,14 @@ export function slideSvgElement(slide: Slide, document: Document, footer: string
   footerText.textContent = footer;
   root.appendChild(footerText);
   if (slide.illustrative) {
-    const mark = element(writer, 'text', { 'font-size': 24 * U, 'font-weight': 'bold', fill: NOTICE, x: SLIDE_WIDTH - LEFT, y: footerTop + 24 * U * 0.8, 'text-anchor': 'end' });
+    const mark = element(writer, 'text', {
+      'font-size': 24 * U,
+      'font-weight': 'bold',
+      fill: NOTICE,
+      x: SLIDE_WIDTH - LEFT,
+      y: footerTop + 24 * U * 0.8,
+      'text-anchor': 'end',
+    });
     mark.textContent = illustrative;
     root.appendChild(mark);
   }
@@ -238,6 +306,8 @@ export function slideSvgText(slide: Slide, document: Document, footer: string, i
   const svg = slideSvgElement(slide, document, footer, illustrative);
   const Serializer = document.defaultView?.XMLSerializer ?? globalThis.XMLSerializer;
   const body =
-    Serializer === undefined ? svg.outerHTML.replace('<svg', `<svg xmlns="${SVG_NAMESPACE}"`) : new Serializer().serializeToString(svg);
+    Serializer === undefined
+      ? svg.outerHTML.replace('<svg', `<svg xmlns="${SVG_NAMESPACE}"`)
+      : new Serializer().serializeToString(svg);
   return `<?xml version="1.0" encoding="UTF-8"?>\n${body}\n`;
 }

@@ -63,18 +63,33 @@ export function slide(kind: StepKind, source: SlideSource, parts: Partial<Omit<S
   };
 }
 
-const line = (text: string, tone: SlideLine['tone'] = 'body', look: SlideLine['look'] = null): SlideLine => ({ text, tone, look });
+const line = (text: string, tone: SlideLine['tone'] = 'body', look: SlideLine['look'] = null): SlideLine => ({
+  text,
+  tone,
+  look,
+});
 
 /** The comparison's array of an outcome. */
 export function comparisonPanel(arms: OutcomeArms, source: SlideSource): PeoplePanel {
   return peoplePanel(
-    { id: 'comparison', title: capitalise(arms.comparison.name), groups: arms.comparison.groups, outcome: arms.outcome.name, option: arms.option.name, wanted: arms.outcome.wanted },
+    {
+      id: 'comparison',
+      title: capitalise(arms.comparison.name),
+      groups: arms.comparison.groups,
+      outcome: arms.outcome.name,
+      option: arms.option.name,
+      wanted: arms.outcome.wanted,
+    },
     source.messages,
   );
 }
 
 /** The option's array of an outcome: with the change as its own group, or folded into the totals. */
-export function optionPanel(arms: OutcomeArms, source: SlideSource, settings: { readonly id?: string; readonly title?: string; readonly totals?: boolean } = {}): PeoplePanel {
+export function optionPanel(
+  arms: OutcomeArms,
+  source: SlideSource,
+  settings: { readonly id?: string; readonly title?: string; readonly totals?: boolean } = {},
+): PeoplePanel {
   const groups = settings.totals === true ? totalsOnly(arms.option.groups) : arms.option.groups;
   return peoplePanel(
     {
@@ -113,7 +128,11 @@ function baselineSlide(source: SlideSource): Slide {
   const words = source.messages.callouts;
   const { denominator } = result;
   const callouts: Callout[] = [
-    { look: 'event', value: words.countIn(comparison.groups.event, denominator), text: words.have(comparison.groups.event, outcome.name, periodOf(result)) },
+    {
+      look: 'event',
+      value: words.countIn(comparison.groups.event, denominator),
+      text: words.have(comparison.groups.event, outcome.name, periodOf(result)),
+    },
     { look: 'free', value: words.countIn(comparison.groups.free, denominator), text: words.doNot(comparison.groups.free) },
   ];
   const population = result.population.trim().replace(/[.!?]$/, '');
@@ -138,7 +157,11 @@ function withOptionSlide(source: SlideSource): Slide {
     panels: [comparisonPanel(arms, source), optionPanel(arms, source, { totals: true })],
     callouts: [
       { look: 'event', value: words.countIn(comparison.groups.event, result.denominator), text: words.without(comparison.name) },
-      { look: 'event', value: words.countIn(withCount, result.denominator), text: words.haveWith(withCount, outcome.name, option.name) },
+      {
+        look: 'event',
+        value: words.countIn(withCount, result.denominator),
+        text: words.haveWith(withCount, outcome.name, option.name),
+      },
     ],
   });
 }
@@ -157,7 +180,11 @@ function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms
   const callouts: Callout[] =
     changed > 0
       ? [
-          { look: kind, value: words.countIn(changed, denominator), text: words.changedBecause(group, outcome.wanted, changed, outcome.name, option.name) },
+          {
+            look: kind,
+            value: words.countIn(changed, denominator),
+            text: words.changedBecause(group, outcome.wanted, changed, outcome.name, option.name),
+          },
           { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
         ]
       : [];
@@ -200,7 +227,8 @@ function harmedSlide(source: SlideSource): Slide {
   const { optionId, harmIds } = source.item;
   const messages = source.messages;
   const arms = armsOf(harmOf(source), optionId);
-  if (arms === null) return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
+  if (arms === null)
+    return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
   const heading = messages.story.partOf(messages.stepNames.harmed, source.part + 1, harmIds.length);
   return changedPeopleSlide('harmed', source, arms, heading);
 }
@@ -215,14 +243,25 @@ function uncertaintySlide(source: SlideSource): Slide {
   const interval = option.perPeople.interventionRange;
   const span = interval === null ? null : uncertainRanks(interval, option.groups.event + option.groups.caused);
   const panel = peoplePanel(
-    { id: 'option', title: capitalise(option.name), groups: option.groups, outcome: outcome.name, option: option.name, wanted: outcome.wanted, uncertain: span },
+    {
+      id: 'option',
+      title: capitalise(option.name),
+      groups: option.groups,
+      outcome: outcome.name,
+      option: option.name,
+      wanted: outcome.wanted,
+      uncertain: span,
+    },
     messages,
   );
-  const range = sentenceOf(wording, outcome.outcomeId, option.optionId, 'range') ?? sentenceOf(wording, outcome.outcomeId, option.optionId, 'range-unknown');
+  const range =
+    sentenceOf(wording, outcome.outcomeId, option.optionId, 'range') ??
+    sentenceOf(wording, outcome.outcomeId, option.optionId, 'range-unknown');
   const certainty = sentenceOf(wording, outcome.outcomeId, option.optionId, 'certainty');
   const lines: SlideLine[] = [];
   if (range !== null) lines.push(line(range));
-  if (interval !== null && option.level !== null) lines.push(line(messages.story.intervalLevel(formatSignificant(option.level * 100)), 'note'));
+  if (interval !== null && option.level !== null)
+    lines.push(line(messages.story.intervalLevel(formatSignificant(option.level * 100)), 'note'));
   if (span !== null) lines.push(line(messages.callouts.outlined, 'body', 'uncertain'));
   if (option.certainty !== null) {
     lines.push(line(`${messages.story.certaintyLabel}: ${messages.story.certaintyNames[option.certainty]}`, 'subheading'));

@@ -18,9 +18,7 @@ import { TEACHING_SET_FORMAT, TEACHING_SET_VERSION, teachingSetSchema } from './
 import type { StepKind } from './teaching-steps.ts';
 
 /** Where an item's topic comes from: written inside the set, or a file path relative to the set. */
-export type TopicSource =
-  | { readonly kind: 'embedded'; readonly topic: Topic }
-  | { readonly kind: 'path'; readonly path: string };
+export type TopicSource = { readonly kind: 'embedded'; readonly topic: Topic } | { readonly kind: 'path'; readonly path: string };
 
 /** How one topic is presented. */
 export interface ItemChoices {
@@ -48,7 +46,7 @@ export interface SetProblem {
   readonly message: string;
 }
 
-export type TeachingSetReading = ({ readonly ok: true; readonly set: TeachingSet }) | ({ readonly ok: false } & SetProblem);
+export type TeachingSetReading = { readonly ok: true; readonly set: TeachingSet } | ({ readonly ok: false } & SetProblem);
 
 const words = teachingMessagesEn.file;
 
@@ -62,7 +60,10 @@ function firstIssue(fileName: string, issues: readonly v.BaseIssue<unknown>[]): 
   if (issue?.type === 'min_length' && Array.isArray(issue.input)) {
     return fail(path, words.emptyList(fileName, path, path === 'items' ? 'topic' : 'step'));
   }
-  return fail(path === '' ? '(file)' : path, words.damaged(fileName, path === '' ? '(the whole file)' : path, expected ?? '', received));
+  return fail(
+    path === '' ? '(file)' : path,
+    words.damaged(fileName, path === '' ? '(the whole file)' : path, expected ?? '', received),
+  );
 }
 
 /** A topic file's problem, placed at the item's path inside the set. */

@@ -53,7 +53,10 @@ const SOURCES = ['src', 'assets', 'index.html', 'vite.config.ts', 'svelte.config
 /** Build if needed, then serve `dist/` until the process is stopped; resolves with the address. */
 export async function serveApp(projectRoot: string, settings: ServeSettings, log: (line: string) => void): Promise<string> {
   const dist = join(projectRoot, 'dist');
-  const stale = isBuildStale(join(dist, 'index.html'), SOURCES.map((source) => join(projectRoot, source)));
+  const stale = isBuildStale(
+    join(dist, 'index.html'),
+    SOURCES.map((source) => join(projectRoot, source)),
+  );
   if (settings.build && stale) {
     log('Building the app (sources changed since the last build)…');
     const { build } = await import('vite');

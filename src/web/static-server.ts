@@ -72,7 +72,9 @@ async function openServedFile(
   file: string,
   fileSystem: RegularFileSystem<FileHandle>,
 ): Promise<(OpenedRegularFile<FileHandle> & { readonly target: string }) | Unserved> {
-  const parts = relative(root, file).split(sep).filter((part) => part !== '');
+  const parts = relative(root, file)
+    .split(sep)
+    .filter((part) => part !== '');
   if (parts.some((part) => part.startsWith('.'))) return 404;
   let current = root;
   let isFolder = true;

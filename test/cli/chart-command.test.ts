@@ -51,14 +51,26 @@ describe('chancewise chart', () => {
   // and 0.25 × 2.3 = 0.575, rounded half up).
   it('writes the contract attributes for a wanted event: data-wanted, the gained people as "caused" in the helped look', async () => {
     const out = join(folder, 'wanted.svg');
-    const args = ['chart', '--baseline', '25%', '--rr', '1.8', '--ci', '1.4,2.3', '--per', '100', '--outcome', 'pain gone by day 3'];
+    const args = [
+      'chart',
+      '--baseline',
+      '25%',
+      '--rr',
+      '1.8',
+      '--ci',
+      '1.4,2.3',
+      '--per',
+      '100',
+      '--outcome',
+      'pain gone by day 3',
+    ];
     expect(await run([...args, '--wanted', '--show-range', '--out', out])).toMatchObject({ code: 0, stderr: '' });
     const svg = readFileSync(out, 'utf8');
     expect(/<svg [^>]*data-wanted="true"/.test(svg)).toBe(true);
     expect(groupCounts(svg)).toEqual({ event: 50, caused: 20, free: 130 });
     // Each gained person is painted with the dot pattern of the helped look, none with the hatch of harm.
-    expect(svg.match(/data-outcome="caused" fill="url\(#chart-pair-dots\)"/g)).toHaveLength(20);
-    expect(svg).not.toContain('url(#chart-pair-hatch)"');
+    expect(svg.match(/data-outcome="caused" fill="url\(#export-pair-dots\)"/g)).toHaveLength(20);
+    expect(svg).not.toContain('url(#export-pair-hatch)"');
     expect(svg).toContain('20 have pain gone by day 3 because of the option');
     // What a person reads (the text alternative and every text), not the attribute values.
     const read = `${/aria-label="([^"]*)"/.exec(svg)?.[1] ?? ''} ${svg.replace(/<[^>]*>/g, ' ')}`;
@@ -71,7 +83,7 @@ describe('chancewise chart', () => {
     expect((await run([...args, '--out', plain])).code).toBe(0);
     const unwanted = readFileSync(plain, 'utf8');
     expect(/<svg [^>]*data-wanted="false"/.test(unwanted)).toBe(true);
-    expect(unwanted.match(/data-outcome="caused" fill="url\(#chart-pair-hatch\)"/g)).toHaveLength(20);
+    expect(unwanted.match(/data-outcome="caused" fill="url\(#export-pair-hatch\)"/g)).toHaveLength(20);
   });
 
   it('draws people who lose a wanted event in the harmed look', async () => {
@@ -79,7 +91,7 @@ describe('chancewise chart', () => {
     expect((await run(['chart', '--baseline', '40%', '--rr', '0.75', '--per', '100', '--wanted', '--out', out])).code).toBe(0);
     const svg = readFileSync(out, 'utf8');
     expect(groupCounts(svg)).toEqual({ event: 70, prevented: 10, free: 120 });
-    expect(svg.match(/data-outcome="prevented" fill="url\(#chart-pair-hatch\)"/g)).toHaveLength(10);
+    expect(svg.match(/data-outcome="prevented" fill="url\(#export-pair-hatch\)"/g)).toHaveLength(10);
     expect(svg).toContain('10 miss out on the outcome because of the option');
   });
 

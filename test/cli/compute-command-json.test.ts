@@ -8,7 +8,17 @@ import { computeJson, estimatesIn, numbersIn, run } from './support.ts';
 const ESTIMATE_KEYS = ['estimate', 'lower', 'upper'];
 const NNT_KEYS = ['estimate', 'label', 'rounded', 'text'];
 const PEOPLE_KEYS = ['comparison', 'denominator', 'difference', 'intervention', 'pictureDenominator'];
-const EFFECT_KEYS = ['absoluteReduction', 'comparisonRisk', 'interventionRisk', 'nnt', 'perPeople', 'level', 'relativeRisk', 'wanted', 'warnings'];
+const EFFECT_KEYS = [
+  'absoluteReduction',
+  'comparisonRisk',
+  'interventionRisk',
+  'nnt',
+  'perPeople',
+  'level',
+  'relativeRisk',
+  'wanted',
+  'warnings',
+];
 const COUNTS_KEYS = [...EFFECT_KEYS, 'chiSquare', 'chiSquareYates', 'cramersV', 'fisherExactP', 'oddsRatio'];
 
 const keysOf = (value: unknown): string[] => Object.keys(value as object).sort();
@@ -24,8 +34,16 @@ describe('the JSON of one effect', () => {
     expect(keysOf(json.perPeople)).toEqual(PEOPLE_KEYS);
     expect(json.comparisonRisk).toEqual({ estimate: 0.2, lower: null, upper: null });
     // Cochrane Handbook 5.1 §12.5.4.5: each limit goes through the same formula, 0.2·0.6 and 0.2·0.9.
-    expect(json.interventionRisk).toEqual({ estimate: expect.closeTo(0.15, 12), lower: expect.closeTo(0.12, 12), upper: expect.closeTo(0.18, 12) });
-    expect(json.absoluteReduction).toEqual({ estimate: expect.closeTo(0.05, 12), lower: expect.closeTo(0.02, 12), upper: expect.closeTo(0.08, 12) });
+    expect(json.interventionRisk).toEqual({
+      estimate: expect.closeTo(0.15, 12),
+      lower: expect.closeTo(0.12, 12),
+      upper: expect.closeTo(0.18, 12),
+    });
+    expect(json.absoluteReduction).toEqual({
+      estimate: expect.closeTo(0.05, 12),
+      lower: expect.closeTo(0.02, 12),
+      upper: expect.closeTo(0.08, 12),
+    });
     expect(json.warnings).toEqual(['The intervals reflect uncertainty in the effect only, not in the baseline risk.']);
   });
 
@@ -46,7 +64,12 @@ describe('the JSON of one effect', () => {
     expect(json.perPeople).toBeNull();
     expect(json.absoluteReduction).toEqual({ estimate: 0.03, lower: 0.01, upper: 0.05 });
     // 1/0.03 = 33.3 → 34; limits 1/0.05 = 20 and 1/0.01 = 100 (Cochrane Handbook 5.1 §12.5.4.1 rounding up).
-    expect(json.nnt).toEqual({ estimate: expect.closeTo(100 / 3, 9), rounded: 34, label: 'NNTB', text: 'NNTB 34 (NNTB 20 to 100)' });
+    expect(json.nnt).toEqual({
+      estimate: expect.closeTo(100 / 3, 9),
+      rounded: 34,
+      label: 'NNTB',
+      text: 'NNTB 34 (NNTB 20 to 100)',
+    });
   });
 
   it('has the risks when an absolute reduction comes with a baseline', async () => {
@@ -131,7 +154,8 @@ const effectArgs = fc
     return withInterval ? [flag, write(mid), '--ci', `${write(low)},${write(high)}`] : [flag, write(mid)];
   });
 
-const optional = (args: fc.Arbitrary<string[]>): fc.Arbitrary<string[]> => fc.option(args, { nil: undefined }).map((found) => found ?? []);
+const optional = (args: fc.Arbitrary<string[]>): fc.Arbitrary<string[]> =>
+  fc.option(args, { nil: undefined }).map((found) => found ?? []);
 
 /** Arguments of `compute` for one entered effect, mostly valid, sometimes impossible at the baseline. */
 const effectCommand = fc
@@ -139,7 +163,11 @@ const effectCommand = fc
     riskText,
     effectArgs,
     fc.boolean(),
-    optional(fc.tuple(fc.integer({ min: 1, max: 40 }), fc.integer({ min: 1, max: 40 })).map(([over, to]) => ['--over', String(over), '--to', String(to)])),
+    optional(
+      fc
+        .tuple(fc.integer({ min: 1, max: 40 }), fc.integer({ min: 1, max: 40 }))
+        .map(([over, to]) => ['--over', String(over), '--to', String(to)]),
+    ),
     optional(fc.integer({ min: 1, max: 30 }).map((years) => ['--followup', String(years)])),
     optional(fc.constantFrom('100', '1000').map((per) => ['--per', per])),
   )
@@ -158,7 +186,15 @@ const countsCommand = fc
     optional(fc.constantFrom('newcombe', 'wald').map((method) => ['--method', method])),
     optional(fc.constantFrom('100', '1000').map((per) => ['--per', per])),
   )
-  .map(([option, comparison, level, method, per]) => ['compute', '--counts', `${option},${comparison}`, ...level, ...method, ...per, '--json']);
+  .map(([option, comparison, level, method, per]) => [
+    'compute',
+    '--counts',
+    `${option},${comparison}`,
+    ...level,
+    ...method,
+    ...per,
+    '--json',
+  ]);
 
 const TOLERANCE = 1e-12;
 
@@ -176,15 +212,23 @@ function contractBreaches(json: Record<string, unknown>): string[] {
       breaches.push(`estimate outside its interval: ${JSON.stringify(value)}`);
     }
   }
-  const people = json.perPeople as
-    | { denominator: number; pictureDenominator: number; comparison: number; intervention: number; difference: number }
-    | null;
+  const people = json.perPeople as {
+    denominator: number;
+    pictureDenominator: number;
+    comparison: number;
+    intervention: number;
+    difference: number;
+  } | null;
   if (people !== null) {
     if (![100, 1000, 10000, 100000, 1000000].includes(people.denominator)) breaches.push(`denominator ${people.denominator}`);
-    if (people.pictureDenominator !== Math.min(people.denominator, 1000) && !(people.denominator === 100 && people.pictureDenominator === 100)) {
+    if (
+      people.pictureDenominator !== Math.min(people.denominator, 1000) &&
+      !(people.denominator === 100 && people.pictureDenominator === 100)
+    ) {
       breaches.push(`picture denominator ${people.pictureDenominator} for words per ${people.denominator}`);
     }
-    if (people.difference !== people.comparison - people.intervention) breaches.push('difference is not comparison − intervention');
+    if (people.difference !== people.comparison - people.intervention)
+      breaches.push('difference is not comparison − intervention');
     for (const count of [people.comparison, people.intervention]) {
       if (!Number.isInteger(count) || count < 0 || count > people.denominator) breaches.push(`people count ${count}`);
     }
@@ -194,7 +238,8 @@ function contractBreaches(json: Record<string, unknown>): string[] {
   if (reduction.estimate === 0) {
     if (nnt.estimate !== null || nnt.rounded !== null || nnt.label !== null) breaches.push('an NNT at no difference');
   } else {
-    if (nnt.label !== (reduction.estimate > 0 ? 'NNTB' : 'NNTH')) breaches.push(`label ${String(nnt.label)} for ${reduction.estimate}`);
+    if (nnt.label !== (reduction.estimate > 0 ? 'NNTB' : 'NNTH'))
+      breaches.push(`label ${String(nnt.label)} for ${reduction.estimate}`);
     if (!Number.isInteger(nnt.rounded)) breaches.push(`rounded NNT ${String(nnt.rounded)}`);
     if (!nnt.text.startsWith(`${nnt.label ?? ''} ${String(nnt.rounded)}`)) breaches.push(`NNT text "${nnt.text}"`);
   }
@@ -206,7 +251,8 @@ async function expectContract(args: readonly string[]): Promise<'done' | 'refuse
   const found = await run(args);
   const where = `${args.join(' ')} → exit ${found.code}: ${found.stderr}`;
   if (found.code === 2) {
-    const oneLine = found.stdout === '' && found.stderr.trimEnd().split('\n').length === 1 && !/Infinity|NaN|undefined/.test(found.stderr);
+    const oneLine =
+      found.stdout === '' && found.stderr.trimEnd().split('\n').length === 1 && !/Infinity|NaN|undefined/.test(found.stderr);
     if (!oneLine) expect.fail(`a refusal broke the contract: ${where}`);
     return 'refused';
   }
@@ -242,8 +288,44 @@ describe('the JSON for many random inputs', () => {
 
   it('answers every mixture of options with exit 0 or 2, never a crash', async () => {
     const token = fc.oneof(
-      fc.constantFrom('--baseline', '--rr', '--or', '--hr', '--rrr', '--arr', '--ci', '--level', '--over', '--to', '--followup', '--counts', '--method', '--per', '--json', '--demo'),
-      fc.constantFrom('0.2', '20%', '1 in 5', '-0.05,0.25', '0.6,0.9', '5', '0', '-1', '1e400', 'wald', '1000', '12/100,20/100', '', ',', '%', '∞', '--', '-'),
+      fc.constantFrom(
+        '--baseline',
+        '--rr',
+        '--or',
+        '--hr',
+        '--rrr',
+        '--arr',
+        '--ci',
+        '--level',
+        '--over',
+        '--to',
+        '--followup',
+        '--counts',
+        '--method',
+        '--per',
+        '--json',
+        '--demo',
+      ),
+      fc.constantFrom(
+        '0.2',
+        '20%',
+        '1 in 5',
+        '-0.05,0.25',
+        '0.6,0.9',
+        '5',
+        '0',
+        '-1',
+        '1e400',
+        'wald',
+        '1000',
+        '12/100,20/100',
+        '',
+        ',',
+        '%',
+        '∞',
+        '--',
+        '-',
+      ),
       fc.string({ maxLength: 6 }),
     );
     await fc.assert(

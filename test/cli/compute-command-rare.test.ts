@@ -24,7 +24,13 @@ describe('a rare outcome: baseline 0.1%, hazard ratio 0.8 (0.7 to 0.9)', () => {
 
   it('gives the words denominator and the pictures denominator in the JSON', async () => {
     const json = await computeJson(['--baseline', '0.1%', '--hr', '0.8', '--ci', '0.7,0.9']);
-    expect(json.perPeople).toEqual({ denominator: 10000, pictureDenominator: 1000, comparison: 10, intervention: 8, difference: 2 });
+    expect(json.perPeople).toEqual({
+      denominator: 10000,
+      pictureDenominator: 1000,
+      comparison: 10,
+      intervention: 8,
+      difference: 2,
+    });
     expect(json.level).toBe(0.95);
   });
 });
@@ -86,10 +92,7 @@ describe('what is almost certainly a typing mistake is refused, not repaired', (
 });
 
 describe('for baselines from 1 in a million to 99%', () => {
-  const baseline = fc.oneof(
-    fc.double({ min: 1e-6, max: 0.001, noNaN: true }),
-    fc.double({ min: 0.001, max: 0.99, noNaN: true }),
-  );
+  const baseline = fc.oneof(fc.double({ min: 1e-6, max: 0.001, noNaN: true }), fc.double({ min: 0.001, max: 0.99, noNaN: true }));
   const ratio = fc.double({ min: 0.5, max: 1.6, noNaN: true });
 
   it('no text says "no difference" unless the exact difference is 0, the counts add up, and rounding that moves a difference by half a person is warned of', () => {
@@ -110,7 +113,8 @@ describe('for baselines from 1 in a million to 99%', () => {
         expect(people.comparison).toBeLessThanOrEqual(people.denominator);
         const shift = Math.abs(people.difference - exact * people.denominator);
         if (shift >= 0.5) expect(result.notices.map((found) => found.code)).toContain('rounding-moves-difference');
-        if (per === null && exact !== 0 && Math.abs(exact) * 1e6 >= 1) expect(Math.abs(people.difference)).toBeGreaterThanOrEqual(1);
+        if (per === null && exact !== 0 && Math.abs(exact) * 1e6 >= 1)
+          expect(Math.abs(people.difference)).toBeGreaterThanOrEqual(1);
       }),
       { numRuns: 3000 },
     );
@@ -118,20 +122,28 @@ describe('for baselines from 1 in a million to 99%', () => {
 
   it('every printed limit of the difference has the sign of its exact value', () => {
     fc.assert(
-      fc.property(baseline, fc.double({ min: 0.5, max: 0.99, noNaN: true }), fc.double({ min: 1.01, max: 1.5, noNaN: true }), (risk, low, high) => {
-        let result;
-        try {
-          result = computeEffect({ baseline: risk, effect: { measure: 'rr', estimate: 1, lower: low, upper: high } });
-        } catch {
-          return;
-        }
-        const line = effectSummary(result).split('\n').find((found) => found.startsWith('Absolute reduction')) ?? '';
-        const match = /\((\S+) to (\S+)\)/.exec(line);
-        expect(match).not.toBeNull();
-        const sign = (value: string) => (value.startsWith('−') ? -1 : value === '0' ? 0 : 1);
-        expect(sign(match?.[1] ?? '')).toBe(Math.sign(result.absoluteReduction.lower ?? 0));
-        expect(sign(match?.[2] ?? '')).toBe(Math.sign(result.absoluteReduction.upper ?? 0));
-      }),
+      fc.property(
+        baseline,
+        fc.double({ min: 0.5, max: 0.99, noNaN: true }),
+        fc.double({ min: 1.01, max: 1.5, noNaN: true }),
+        (risk, low, high) => {
+          let result;
+          try {
+            result = computeEffect({ baseline: risk, effect: { measure: 'rr', estimate: 1, lower: low, upper: high } });
+          } catch {
+            return;
+          }
+          const line =
+            effectSummary(result)
+              .split('\n')
+              .find((found) => found.startsWith('Absolute reduction')) ?? '';
+          const match = /\((\S+) to (\S+)\)/.exec(line);
+          expect(match).not.toBeNull();
+          const sign = (value: string) => (value.startsWith('−') ? -1 : value === '0' ? 0 : 1);
+          expect(sign(match?.[1] ?? '')).toBe(Math.sign(result.absoluteReduction.lower ?? 0));
+          expect(sign(match?.[2] ?? '')).toBe(Math.sign(result.absoluteReduction.upper ?? 0));
+        },
+      ),
       { numRuns: 3000 },
     );
   });

@@ -66,7 +66,15 @@ describe('chancewise compute with a topic', () => {
       expect(outcome.options.filter((entry) => entry.comparison)).toHaveLength(1);
       for (const entry of outcome.options) {
         expect(Object.keys(entry)).toEqual(
-          expect.arrayContaining(['name', 'comparisonRisk', 'interventionRisk', 'relativeRisk', 'absoluteReduction', 'nnt', 'perPeople']),
+          expect.arrayContaining([
+            'name',
+            'comparisonRisk',
+            'interventionRisk',
+            'relativeRisk',
+            'absoluteReduction',
+            'nnt',
+            'perPeople',
+          ]),
         );
         // One denominator for the whole topic (Trevena et al. 2013, BMC Med Inform Decis Mak 13 Suppl 2:S7, risk communication primer).
         expect(entry.perPeople.denominator).toBe(json.denominator);
@@ -91,7 +99,13 @@ describe('chancewise compute with a topic', () => {
     expect(water.name).toBe('extra water each day');
     // 0.4 × 0.6 = 0.24 → 24 in 100; 1/0.16 = 6.25 → NNTB 7 (derived).
     expect(water.interventionRisk.estimate).toBeCloseTo(0.24, 12);
-    expect(water.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 40, intervention: 24, difference: 16 });
+    expect(water.perPeople).toEqual({
+      denominator: 100,
+      pictureDenominator: 100,
+      comparison: 40,
+      intervention: 24,
+      difference: 16,
+    });
     expect(water.nnt).toMatchObject({ rounded: 7, label: 'NNTB' });
     expect(water.groups).toEqual({ event: 24, prevented: 16, caused: 0, free: 60 });
     // A harm: broken sleep 15% × 1.6 = 24% → 9 more in 100, 1/0.09 = 11.1 → NNTH 11 (derived; an NNTH is rounded down).
@@ -129,14 +143,27 @@ describe('chancewise compute with a topic', () => {
     const json = await topicJson(['--demo', '--per', '1000']);
     expect(json.denominator).toBe(1000);
     // 0.45 × 0.4 = 0.18 → 180 in 1000 with the citrate drink; the comparison 0.4 → 400 (derived).
-    expect(option(json, 0, 2).perPeople).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 400, intervention: 180, difference: 220 });
+    expect(option(json, 0, 2).perPeople).toEqual({
+      denominator: 1000,
+      pictureDenominator: 1000,
+      comparison: 400,
+      intervention: 180,
+      difference: 220,
+    });
     expect(json.warnings.some((sentence) => sentence.includes('per 1000 people, because'))).toBe(false);
   });
 
   it('prints a readable summary of the demo with its numbers', async () => {
     const found = await run(['compute', '--demo']);
     expect(found.code).toBe(0);
-    for (const part of ['Illustrative', 'another kidney stone', 'no change (comparison): 40 in 100', 'NNTB 7', 'NNTH 11', '40 without, 24 with the option (16 fewer)']) {
+    for (const part of [
+      'Illustrative',
+      'another kidney stone',
+      'no change (comparison): 40 in 100',
+      'NNTB 7',
+      'NNTH 11',
+      '40 without, 24 with the option (16 fewer)',
+    ]) {
       expect(found.stdout).toContain(part);
     }
     expect(found.stdout).not.toMatch(/NaN|Infinity|undefined/);

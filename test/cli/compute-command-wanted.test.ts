@@ -15,7 +15,13 @@ describe('compute --wanted', () => {
       lower: expect.closeTo(-0.27, 12),
       upper: expect.closeTo(-0.06, 12),
     });
-    expect(json.perPeople).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 30, intervention: 45, difference: -15 });
+    expect(json.perPeople).toEqual({
+      denominator: 100,
+      pictureDenominator: 100,
+      comparison: 30,
+      intervention: 45,
+      difference: -15,
+    });
   });
 
   it('says wanted is false without the flag, and the rest is as before', async () => {

@@ -24,7 +24,13 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.276, 12);
     expect(estimateOf(json, 'absoluteReduction')?.estimate).toBeCloseTo(0.024, 12);
     expect(estimateOf(json, 'relativeRisk')?.estimate).toBeCloseTo(0.92, 12);
-    expect(peopleOf(json)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 300, intervention: 276, difference: 24 });
+    expect(peopleOf(json)).toEqual({
+      denominator: 1000,
+      pictureDenominator: 1000,
+      comparison: 300,
+      intervention: 276,
+      difference: 24,
+    });
     expect(nntOf(json)).toMatchObject({ rounded: 42, label: 'NNTB', text: 'NNTB 42' });
     expect(nntOf(json).estimate).toBeCloseTo(1 / 0.024, 9);
   });
@@ -34,7 +40,13 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
     // 62 fewer per 1000, NNT = 1/0.0617 → 17.
     const json = await computeJson(['--baseline', '30%', '--or', '0.73', '--per', '1000']);
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.2383, 4);
-    expect(peopleOf(json)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 300, intervention: 238, difference: 62 });
+    expect(peopleOf(json)).toEqual({
+      denominator: 1000,
+      pictureDenominator: 1000,
+      comparison: 300,
+      intervention: 238,
+      difference: 62,
+    });
     expect(nntOf(json)).toMatchObject({ rounded: 17, label: 'NNTB', text: 'NNTB 17' });
     // The implied risk ratio at this baseline: 0.2383 / 0.3 (derived).
     expect(estimateOf(json, 'relativeRisk')?.estimate).toBeCloseTo(0.2383 / 0.3, 3);
@@ -91,7 +103,10 @@ describe('chancewise compute applies an effect to a baseline risk', () => {
       expect(reduction?.lower).toBeCloseTo(ratio?.lower ?? Number.NaN, 12);
       expect(reduction?.upper).toBeCloseTo(ratio?.upper ?? Number.NaN, 12);
     }
-    expect(estimateOf(fromReduction, 'relativeRisk')).toMatchObject({ lower: expect.closeTo(0.6, 12), upper: expect.closeTo(0.9, 12) });
+    expect(estimateOf(fromReduction, 'relativeRisk')).toMatchObject({
+      lower: expect.closeTo(0.6, 12),
+      upper: expect.closeTo(0.9, 12),
+    });
     expect(nntOf(fromReduction)).toEqual(nntOf(fromRatio));
     expect(peopleOf(fromReduction)).toEqual(peopleOf(fromRatio));
   });
@@ -149,7 +164,9 @@ describe('chancewise compute converts the baseline between periods', () => {
     expect(estimateOf(json, 'comparisonRisk')?.estimate).toBeCloseTo(0.1507, 4);
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.1507 / 2, 4);
     const warnings = json.warnings as string[];
-    expect(warnings.some((sentence) => sentence.includes('4%') && sentence.includes('15.07%') && sentence.includes('constant hazard'))).toBe(true);
+    expect(
+      warnings.some((sentence) => sentence.includes('4%') && sentence.includes('15.07%') && sentence.includes('constant hazard')),
+    ).toBe(true);
   });
 
   it('warns when the period asked for is longer than the follow-up of the effect', async () => {
@@ -179,7 +196,13 @@ describe('chancewise compute analyses trial counts', () => {
     expect(estimateOf(json, 'interventionRisk')?.estimate).toBeCloseTo(0.8, 12);
     expect(estimateOf(json, 'comparisonRisk')?.estimate).toBeCloseTo(0.6, 12);
     expect(nntOf(json)).toMatchObject({ rounded: 5, label: 'NNTH' });
-    expect(peopleOf(json)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 60, intervention: 80, difference: -20 });
+    expect(peopleOf(json)).toEqual({
+      denominator: 100,
+      pictureDenominator: 100,
+      comparison: 60,
+      intervention: 80,
+      difference: -20,
+    });
   });
 
   it('gives the same difference with the arms swapped, sign reversed', async () => {
@@ -230,7 +253,13 @@ describe('chancewise compute counts people per 100 or per 1000', () => {
   it('keeps 100 when rounding does not distort the difference, and --per 1000 overrides it', async () => {
     // Cochrane Handbook 5.1 §12.5.4.2 example: 30% and 27.6% are 30 and 28 in 100 (common practice rounding).
     const automatic = await computeJson(['--baseline', '0.3', '--rr', '0.92']);
-    expect(peopleOf(automatic)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 30, intervention: 28, difference: 2 });
+    expect(peopleOf(automatic)).toEqual({
+      denominator: 100,
+      pictureDenominator: 100,
+      comparison: 30,
+      intervention: 28,
+      difference: 2,
+    });
     const forced = await computeJson(['--baseline', '0.3', '--rr', '0.92', '--per', '1000']);
     expect(peopleOf(forced).denominator).toBe(1000);
   });
@@ -238,10 +267,22 @@ describe('chancewise compute counts people per 100 or per 1000', () => {
   it('raises to 1000 when per 100 would round the difference away, and --per 100 overrides it', async () => {
     // Common practice: 2% and 1.8% are both 2 in 100, so the difference would vanish; per 1000 it is 20 and 18.
     const automatic = await computeJson(['--baseline', '2%', '--rr', '0.9']);
-    expect(peopleOf(automatic)).toEqual({ denominator: 1000, pictureDenominator: 1000, comparison: 20, intervention: 18, difference: 2 });
+    expect(peopleOf(automatic)).toEqual({
+      denominator: 1000,
+      pictureDenominator: 1000,
+      comparison: 20,
+      intervention: 18,
+      difference: 2,
+    });
     expect((automatic.warnings as string[]).some((sentence) => sentence.includes('per 1000'))).toBe(true);
     const forced = await computeJson(['--baseline', '2%', '--rr', '0.9', '--per', '100']);
-    expect(peopleOf(forced)).toEqual({ denominator: 100, pictureDenominator: 100, comparison: 2, intervention: 2, difference: 0 });
+    expect(peopleOf(forced)).toEqual({
+      denominator: 100,
+      pictureDenominator: 100,
+      comparison: 2,
+      intervention: 2,
+      difference: 0,
+    });
     expect((forced.warnings as string[]).some((sentence) => sentence.includes('per 1000'))).toBe(false);
   });
 });
@@ -279,7 +320,18 @@ describe('chancewise compute prints a readable summary without --json', () => {
   it('shows the trial statistics for counts', async () => {
     const found = await run(['compute', '--counts', '56/70,48/80']);
     expect(found.code).toBe(0);
-    for (const part of ['80%', '60%', 'Odds ratio', 'Chi-square', '7.023', 'Yates', '6.114', "Fisher's exact p", 'Cramér', 'NNTH 5']) {
+    for (const part of [
+      '80%',
+      '60%',
+      'Odds ratio',
+      'Chi-square',
+      '7.023',
+      'Yates',
+      '6.114',
+      "Fisher's exact p",
+      'Cramér',
+      'NNTH 5',
+    ]) {
       expect(found.stdout).toContain(part);
     }
   });

@@ -28,7 +28,9 @@ describe('chancewise handout', () => {
     const { topic, result: computed } = firstDemo();
     const built = buildHandout(computed, topic, { date: '2026-12-01', appVersion: version }, loadHandoutFonts());
     if (!built.ok) throw new Error(built.message);
-    expect(result.stdout).toBe(`Wrote ${path}: 1 page, A4, reading grade ${built.readability.grade?.toFixed(1)} (Flesch–Kincaid).\n`);
+    expect(result.stdout).toBe(
+      `Wrote ${path}: 1 page, A4, reading grade ${built.readability.grade?.toFixed(1)} (Flesch–Kincaid).\n`,
+    );
     // ISO 216 A4 in points.
     expect(pageSize(path)).toBe('595.28 x 841.89 pts (A4)');
     expect(Buffer.from(readFileSync(path)).equals(Buffer.from(built.pdf))).toBe(true);
@@ -53,7 +55,17 @@ describe('chancewise handout', () => {
   it('prints the clinician, the NNT sentences and the denominator asked for', async () => {
     const path = out('options.pdf');
     const result = await run([
-      'handout', '--demo', '--out', path, '--date', '2026-12-01', '--clinician', 'Dr A. Patel, Riverside Surgery', '--show-nnt', '--per', '1000',
+      'handout',
+      '--demo',
+      '--out',
+      path,
+      '--date',
+      '2026-12-01',
+      '--clinician',
+      'Dr A. Patel, Riverside Surgery',
+      '--show-nnt',
+      '--per',
+      '1000',
     ]);
     expect(result.code).toBe(0);
     const text = pdfText(path);
@@ -86,7 +98,9 @@ describe('chancewise handout', () => {
         outcomes: TOPIC_LIMITS.maxOutcomes,
         optionName: (index) => wordsOfLength(TOPIC_LIMITS.optionNameLength, 'treatment', String(index)),
         outcomeName: (index) => wordsOfLength(TOPIC_LIMITS.outcomeNameLength, 'complication', String(index)),
-        questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) => wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index))),
+        questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) =>
+          wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index)),
+        ),
       }),
     );
     const path = out('long.pdf');
@@ -151,7 +165,19 @@ describe('chancewise handout with the choices a topic file keeps', () => {
 
   it('lets --paper, --no-nnt and --per override what the file stores', async () => {
     const path = out('overridden.pdf');
-    const result = await run(['handout', stored, '--out', path, '--date', '2026-12-01', '--paper', 'a4', '--no-nnt', '--per', '100']);
+    const result = await run([
+      'handout',
+      stored,
+      '--out',
+      path,
+      '--date',
+      '2026-12-01',
+      '--paper',
+      'a4',
+      '--no-nnt',
+      '--per',
+      '100',
+    ]);
     expect(result).toMatchObject({ code: 0, stderr: '' });
     // ISO 216 A4 in points.
     expect(pageSize(path)).toBe('595.28 x 841.89 pts (A4)');

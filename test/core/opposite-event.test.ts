@@ -70,7 +70,12 @@ describe('computeEffect with an effect for the opposite event', () => {
   it('turns trial counts of the opposite event into counts of the outcome (events = total − events)', () => {
     const opposite = computeEffect({
       baseline: null,
-      effect: { measure: 'counts', intervention: { events: 30, total: 100 }, comparison: { events: 50, total: 100 }, opposite: true },
+      effect: {
+        measure: 'counts',
+        intervention: { events: 30, total: 100 },
+        comparison: { events: 50, total: 100 },
+        opposite: true,
+      },
       wanted: true,
     });
     const direct = computeEffect({

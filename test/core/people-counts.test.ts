@@ -20,7 +20,13 @@ describe('people counts are rounded half up on the decimal value (common practic
 
   it('turns an interval into people the same way', () => {
     const counts = peopleCounts(0.2, { estimate: 0.15, lower: 0.12, upper: 0.18 }, 100);
-    expect(counts).toEqual({ denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: { lower: 12, upper: 18 } });
+    expect(counts).toEqual({
+      denominator: 100,
+      comparison: 20,
+      intervention: 15,
+      difference: 5,
+      interventionRange: { lower: 12, upper: 18 },
+    });
   });
 });
 
@@ -41,7 +47,12 @@ describe('chooseDenominator keeps 100 unless it hides or distorts a number', () 
     expect(chooseDenominator([{ comparison: 0.2, intervention: 0.198 }])).toBe(1000);
   });
   it('uses one denominator for every pair of a topic', () => {
-    expect(chooseDenominator([{ comparison: 0.2, intervention: 0.15 }, { comparison: 0.125, intervention: 0.09375 }])).toBe(1000);
+    expect(
+      chooseDenominator([
+        { comparison: 0.2, intervention: 0.15 },
+        { comparison: 0.125, intervention: 0.09375 },
+      ]),
+    ).toBe(1000);
   });
   it('keeps 100 for a difference of exactly 0', () => {
     expect(chooseDenominator([{ comparison: 0.2, intervention: 0.2 }])).toBe(100);

@@ -42,7 +42,10 @@ function computeOrRefuse(risk: number, effect: EnteredEffect): EffectComputation
 }
 
 const ordered = (value: Estimate | null): boolean =>
-  value === null || value.lower === null || value.upper === null || (value.lower <= value.estimate && value.estimate <= value.upper);
+  value === null ||
+  value.lower === null ||
+  value.upper === null ||
+  (value.lower <= value.estimate && value.estimate <= value.upper);
 const inUnit = (value: Estimate | null): boolean =>
   value === null || [value.estimate, value.lower ?? 0, value.upper ?? 0].every((number) => number >= 0 && number <= 1);
 const finiteDeep = (value: unknown): boolean => {
@@ -99,7 +102,9 @@ describe('properties of the risk engine', () => {
         if (people === null) return true;
         const groups = peopleGroups(people.comparison, people.intervention, people.denominator);
         const values = [groups.event, groups.prevented, groups.caused, groups.free];
-        return values.every((value) => Number.isInteger(value) && value >= 0) && values.reduce((a, b) => a + b) === people.denominator;
+        return (
+          values.every((value) => Number.isInteger(value) && value >= 0) && values.reduce((a, b) => a + b) === people.denominator
+        );
       }),
       RUNS,
     );

@@ -36,7 +36,13 @@ describe('the packaging configuration', () => {
 
   it('associates the .cwtopic topic files with the app', () => {
     expect(config.fileAssociations).toEqual([
-      { ext: 'cwtopic', name: 'Chancewise topic', description: 'Chancewise topic file', mimeType: 'application/x-chancewise-topic', role: 'Editor' },
+      {
+        ext: 'cwtopic',
+        name: 'Chancewise topic',
+        description: 'Chancewise topic file',
+        mimeType: 'application/x-chancewise-topic',
+        role: 'Editor',
+      },
     ]);
     // The same extension and media type as the shell's open and save dialogs.
     expect(TOPIC_EXTENSION).toBe('cwtopic');
@@ -44,6 +50,12 @@ describe('the packaging configuration', () => {
   });
 
   it('packs only the built renderer and shell, no node_modules', () => {
-    expect(config.files).toEqual(['package.json', 'dist/**/*', 'dist-electron/main.cjs', 'dist-electron/preload.cjs', '!node_modules/**/*']);
+    expect(config.files).toEqual([
+      'package.json',
+      'dist/**/*',
+      'dist-electron/main.cjs',
+      'dist-electron/preload.cjs',
+      '!node_modules/**/*',
+    ]);
   });
 });

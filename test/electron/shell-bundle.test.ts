@@ -13,7 +13,9 @@ const root = fileURLToPath(new URL('../../', import.meta.url));
 let outDir: string;
 
 async function buildEntry(mode: 'main' | 'preload'): Promise<string> {
-  const config = (typeof makeConfig === 'function' ? makeConfig({ mode, command: 'build', isSsrBuild: true, isPreview: false }) : makeConfig) as UserConfig;
+  const config = (
+    typeof makeConfig === 'function' ? makeConfig({ mode, command: 'build', isSsrBuild: true, isPreview: false }) : makeConfig
+  ) as UserConfig;
   await build({ ...config, root, configFile: false, mode, build: { ...config.build, outDir, emptyOutDir: false } });
   return fs.readFile(path.join(outDir, `${mode}.cjs`), 'utf8');
 }
@@ -57,8 +59,16 @@ describe('the shell build', () => {
     // Electron security checklist item 20 and context-isolation docs: expose one function per message,
     // never ipcRenderer or its methods.
     const exposed = new Map<string, unknown>();
-    const ipcRenderer = { invoke: () => Promise.resolve(null), on: () => undefined, removeListener: () => undefined, send: () => undefined };
-    const electron = { contextBridge: { exposeInMainWorld: (key: string, value: unknown) => exposed.set(key, value) }, ipcRenderer };
+    const ipcRenderer = {
+      invoke: () => Promise.resolve(null),
+      on: () => undefined,
+      removeListener: () => undefined,
+      send: () => undefined,
+    };
+    const electron = {
+      contextBridge: { exposeInMainWorld: (key: string, value: unknown) => exposed.set(key, value) },
+      ipcRenderer,
+    };
     const module = { exports: {} };
     const context = vm.createContext({
       require: (name: string) => {

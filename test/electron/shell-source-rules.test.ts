@@ -23,7 +23,10 @@ beforeAll(async () => {
 });
 
 function filesMatching(pattern: RegExp): string[] {
-  return [...sources].filter(([, text]) => pattern.test(text)).map(([name]) => name).sort();
+  return [...sources]
+    .filter(([, text]) => pattern.test(text))
+    .map(([name]) => name)
+    .sort();
 }
 
 describe('the shell sources', () => {
@@ -35,7 +38,9 @@ describe('the shell sources', () => {
 
   it('call shell.openExternal only through the allow-listing helper', () => {
     expect(filesMatching(/shell\.openExternal\(/u)).toEqual(['shell.ts']);
-    expect(sources.get('shell.ts')).toMatch(/openExternalSafely\(url, \{ allowedHosts: EXTERNAL_LINK_HOSTS, openExternal: \(address\) => shell\.openExternal\(address\) \}\)/u);
+    expect(sources.get('shell.ts')).toMatch(
+      /openExternalSafely\(url, \{ allowedHosts: EXTERNAL_LINK_HOSTS, openExternal: \(address\) => shell\.openExternal\(address\) \}\)/u,
+    );
   });
 
   it('never load file:// pages, remote pages or turn security features off', () => {
@@ -57,7 +62,9 @@ describe('the shell sources', () => {
     const preloadImports = importsByFolder.get('preload') ?? [];
     expect(preloadImports.length).toBeGreaterThan(0);
     for (const target of preloadImports) expect(target, target).toMatch(/^(contract|preload)\//u);
-    const mainImports = [...importsByFolder].filter(([from]) => from === 'main' || from.startsWith('main/')).flatMap(([, targets]) => targets);
+    const mainImports = [...importsByFolder]
+      .filter(([from]) => from === 'main' || from.startsWith('main/'))
+      .flatMap(([, targets]) => targets);
     expect(mainImports.filter((target) => target.startsWith('preload/'))).toEqual([]);
     expect(mainImports.some((target) => target.startsWith('contract/'))).toBe(true);
   });

@@ -11,7 +11,28 @@ import { buildHandout } from '../../src/handout/build-handout.ts';
 import { MIN_BODY_SIZE, MIN_LIST_SIZE } from '../../src/handout/fit-settings.ts';
 import { pdfInfo, testFonts, writePdf } from './support.ts';
 
-const WORDS = ['a', 'the', 'stroke', 'tablet', 'heart', 'café', 'naïve', 'Zoë’s', 'risk', '≥ 65', '≤ 5%', 'daily', 'long-term', 'bleeding', 'pain', 'test', 'cancer', 'of', 'with', 'doctor'];
+const WORDS = [
+  'a',
+  'the',
+  'stroke',
+  'tablet',
+  'heart',
+  'café',
+  'naïve',
+  'Zoë’s',
+  'risk',
+  '≥ 65',
+  '≤ 5%',
+  'daily',
+  'long-term',
+  'bleeding',
+  'pain',
+  'test',
+  'cancer',
+  'of',
+  'with',
+  'doctor',
+];
 
 /** Text of up to `limit` characters from everyday and clinical words, at least one word long. */
 const text = (limit: number, minimum = 1) =>
@@ -34,10 +55,19 @@ const topicArbitrary = fc
     summary: text(TOPIC_LIMITS.evidenceSummaryLength, 0),
     clinician: text(TOPIC_LIMITS.clinicianLength, 0),
     questions: fc.array(text(TOPIC_LIMITS.questionLength), { maxLength: TOPIC_LIMITS.maxQuestions }),
-    optionNames: fc.array(text(TOPIC_LIMITS.optionNameLength), { minLength: TOPIC_LIMITS.maxOptions, maxLength: TOPIC_LIMITS.maxOptions }),
-    outcomeNames: fc.array(text(TOPIC_LIMITS.outcomeNameLength), { minLength: TOPIC_LIMITS.maxOutcomes, maxLength: TOPIC_LIMITS.maxOutcomes }),
+    optionNames: fc.array(text(TOPIC_LIMITS.optionNameLength), {
+      minLength: TOPIC_LIMITS.maxOptions,
+      maxLength: TOPIC_LIMITS.maxOptions,
+    }),
+    outcomeNames: fc.array(text(TOPIC_LIMITS.outcomeNameLength), {
+      minLength: TOPIC_LIMITS.maxOutcomes,
+      maxLength: TOPIC_LIMITS.maxOutcomes,
+    }),
     harms: fc.array(fc.boolean(), { minLength: TOPIC_LIMITS.maxOutcomes, maxLength: TOPIC_LIMITS.maxOutcomes }),
-    baselines: fc.array(fc.double({ min: 0.002, max: 0.6, noNaN: true }), { minLength: TOPIC_LIMITS.maxOutcomes, maxLength: TOPIC_LIMITS.maxOutcomes }),
+    baselines: fc.array(fc.double({ min: 0.002, max: 0.6, noNaN: true }), {
+      minLength: TOPIC_LIMITS.maxOutcomes,
+      maxLength: TOPIC_LIMITS.maxOutcomes,
+    }),
     ratios: fc.array(fc.double({ min: 0.4, max: 2.2, noNaN: true }), { minLength: 32, maxLength: 32 }),
     certainties: fc.array(certainty, { minLength: 32, maxLength: 32 }),
     periodYears: fc.integer({ min: 1, max: 30 }),
@@ -110,7 +140,8 @@ describe('fitting any topic within the editor’s limits', () => {
         // Every tenth handout is also counted by poppler, from the file itself.
         if (built % 10 === 1) expect(pdfInfo(writePdf(handout.pdf)).Pages).toBe('1');
       }),
-      { numRuns: 200 },
+      // A fixed seed: the share that fits is a count over one sample, and should not move from run to run.
+      { numRuns: 200, seed: 7 },
     );
     expect(built + refused).toBe(200);
     // Most random topics fit; a refusal is for long texts on many options and outcomes.

@@ -1,7 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import { FIT_LADDER, type FitSettings, MIN_BODY_SIZE, MIN_LIST_SIZE, ROOMY } from '../../src/handout/fit-settings.ts';
 
-const SIZES = ['body', 'title', 'heading', 'list', 'table', 'chartText', 'cell100', 'cell1000', 'space', 'writingLines', 'bodyLeading', 'listLeading', 'rowPadding'] as const;
+const SIZES = [
+  'body',
+  'title',
+  'heading',
+  'list',
+  'table',
+  'chartText',
+  'cell100',
+  'cell1000',
+  'closeUpCell',
+  'space',
+  'writingLines',
+  'bodyLeading',
+  'listLeading',
+  'rowPadding',
+] as const;
 
 describe('the fit ladder', () => {
   it('starts with body text at 12 points', () => {

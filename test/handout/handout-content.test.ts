@@ -6,7 +6,13 @@ import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
 import { outcomeChart } from '../../src/render/chart-model.ts';
 import { firstDemo } from './support.ts';
 
-const options: ContentOptions = { date: '2026-12-01', appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn };
+const options: ContentOptions = {
+  date: '2026-12-01',
+  appVersion: '0.1.0',
+  showNnt: false,
+  clinician: '',
+  messages: handoutMessagesEn,
+};
 
 describe('the content of a handout', () => {
   const { topic, result } = firstDemo();
@@ -43,9 +49,9 @@ describe('the content of a handout', () => {
     });
   });
 
-  it('keeps every other headline sentence of the wording, a paragraph per option', () => {
+  it('keeps every other headline sentence of the wording, a paragraph per option, the ranges’ one level after the last', () => {
     const rest = wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.text);
-    expect(content.paragraphs.flat()).toEqual(rest);
+    expect(content.paragraphs.flat()).toEqual([...rest.slice(0, -1), 'Each range is a 95% interval.', ...rest.slice(-1)]);
     expect(content.paragraphs).toHaveLength(2);
     expect(new Set(wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.kind))).toEqual(
       new Set(['change', 'range', 'certainty']),
@@ -77,7 +83,11 @@ describe('the content of a handout', () => {
   // OR 2.6 → 2.6 × 0.05 / (0.95 + 0.13) = 12.04% with the citrate drink (derived).
   it('gives each side effect its frequency band with the number beside the word', () => {
     const [night, stomach] = content.table.sections.flatMap((section) => section.rows);
-    expect(night?.cells.map((cell) => cell.value)).toEqual(['very common: 15 in 100', 'very common: 24 in 100', 'very common: 15 in 100']);
+    expect(night?.cells.map((cell) => cell.value)).toEqual([
+      'very common: 15 in 100',
+      'very common: 24 in 100',
+      'very common: 15 in 100',
+    ]);
     expect(stomach?.cells.map((cell) => cell.value)).toEqual(['common: 5 in 100', 'common: 5 in 100', 'very common: 12 in 100']);
     expect(night?.cells.map((cell) => cell.note)).toEqual([null, 'low certainty', 'low certainty']);
     expect(stomach?.cells.map((cell) => cell.note)).toEqual([null, 'very low certainty', 'moderate certainty']);
@@ -104,7 +114,9 @@ describe('the content of a handout', () => {
   it('gives the evidence source, the date it was checked in words, and where the starting chance comes from', () => {
     expect(content.evidence.items[0]).toBe(topic.evidence.summary);
     expect(content.evidence.items[1]).toBe('The research was last checked on 1 November 2026.');
-    expect(content.evidence.items[2]).toBe('Your starting chance of another kidney stone comes from: Invented clinic follow-up figures.');
+    expect(content.evidence.items[2]).toBe(
+      'Your starting chance of another kidney stone comes from: Invented clinic follow-up figures.',
+    );
   });
 
   it('asks the topic’s questions, and general ones when it has none', () => {
@@ -118,7 +130,9 @@ describe('the content of a handout', () => {
     expect(content.footer.right).toBe('Chancewise 0.1.0  ·  Page 1 of 1');
     const named = { ...topic, clinician: 'Riverside Surgery' };
     expect(handoutContent(result, named, options).footer.left).toContain('Prepared by Riverside Surgery');
-    expect(handoutContent(result, named, { ...options, clinician: 'Dr A. Patel' }).footer.left).toContain('Prepared by Dr A. Patel');
+    expect(handoutContent(result, named, { ...options, clinician: 'Dr A. Patel' }).footer.left).toContain(
+      'Prepared by Dr A. Patel',
+    );
   });
 
   it('carries the standard caution with the sheet’s denominator and period', () => {

@@ -95,11 +95,13 @@ export interface WordBox {
 /** Every word's box, from `pdftotext -bbox`. */
 export function wordBoxes(path: string): WordBox[] {
   const html = execFileSync('pdftotext', ['-bbox', path, '-'], { encoding: 'utf8' });
-  return [...html.matchAll(/<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g)].map((found) => ({
-    word: found[5] ?? '',
-    xMin: Number(found[1]),
-    yMin: Number(found[2]),
-    xMax: Number(found[3]),
-    yMax: Number(found[4]),
-  }));
+  return [...html.matchAll(/<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g)].map(
+    (found) => ({
+      word: found[5] ?? '',
+      xMin: Number(found[1]),
+      yMin: Number(found[2]),
+      xMax: Number(found[3]),
+      yMax: Number(found[4]),
+    }),
+  );
 }

@@ -1,7 +1,15 @@
 import { jsPDF } from 'jspdf';
 import { describe, expect, it } from 'vitest';
 import { HANDOUT_FONT_FAMILY, codePointsOf, registerFonts } from '../../src/handout/handout-fonts.ts';
-import { POINTS_PER_MM, type TextStyle, inkDepth, jsPdfMeasure, lineHeight, textBlock, wrapLines } from '../../src/handout/text-layout.ts';
+import {
+  POINTS_PER_MM,
+  type TextStyle,
+  inkDepth,
+  jsPdfMeasure,
+  lineHeight,
+  textBlock,
+  wrapLines,
+} from '../../src/handout/text-layout.ts';
 import { testFonts } from './support.ts';
 
 const SAMPLES = [

@@ -13,7 +13,13 @@ import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
 import { pdfText, testFonts, writePdf } from './support.ts';
 import { wantedTopic } from './wanted-topic.ts';
 
-const options: ContentOptions = { date: '2026-12-01', appVersion: '0.1.0', showNnt: true, clinician: '', messages: handoutMessagesEn };
+const options: ContentOptions = {
+  date: '2026-12-01',
+  appVersion: '0.1.0',
+  showNnt: true,
+  clinician: '',
+  messages: handoutMessagesEn,
+};
 const topic = wantedTopic();
 const result = computeTopic(topic);
 /** Words that say a good event is a harm to avoid (the failure this guards against). */

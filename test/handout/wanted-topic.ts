@@ -19,7 +19,12 @@ const effect = (estimate: number, lower: number, upper: number) => ({
   importance: 'important' as const,
 });
 
-const baseline = (risk: string) => ({ risk, periodYears: threeDays.years, periodUnit: threeDays.unit, source: 'Invented comparison-arm rate' });
+const baseline = (risk: string) => ({
+  risk,
+  periodYears: threeDays.years,
+  periodUnit: threeDays.unit,
+  source: 'Invented comparison-arm rate',
+});
 
 /** The topic, with the period given in days. */
 export function wantedTopic(): Topic {
@@ -34,9 +39,32 @@ export function wantedTopic(): Topic {
       { id: 'tablet', name: 'tablet B', isComparison: false },
     ],
     outcomes: [
-      { id: 'pain-gone', name: 'pain gone by day 3', kind: 'benefit', wanted: true, isHeadline: true, baseline: baseline('25%'), effects: [effect(1.8, 1.4, 2.3)] },
-      { id: 'activities', name: 'a return to usual activities', kind: 'benefit', wanted: true, isHeadline: false, baseline: baseline('40%'), effects: [effect(1.3, 1.1, 1.5)] },
-      { id: 'stomach', name: 'an upset stomach', kind: 'harm', isHeadline: false, baseline: baseline('5%'), effects: [effect(2, 1.3, 3)] },
+      {
+        id: 'pain-gone',
+        name: 'pain gone by day 3',
+        kind: 'benefit',
+        wanted: true,
+        isHeadline: true,
+        baseline: baseline('25%'),
+        effects: [effect(1.8, 1.4, 2.3)],
+      },
+      {
+        id: 'activities',
+        name: 'a return to usual activities',
+        kind: 'benefit',
+        wanted: true,
+        isHeadline: false,
+        baseline: baseline('40%'),
+        effects: [effect(1.3, 1.1, 1.5)],
+      },
+      {
+        id: 'stomach',
+        name: 'an upset stomach',
+        kind: 'harm',
+        isHeadline: false,
+        baseline: baseline('5%'),
+        effects: [effect(2, 1.3, 3)],
+      },
     ],
     evidence: { summary: 'Invented numbers for tests.', reviewed: '2026-11-01' },
     questions: ['How much does getting back to normal quickly matter to me?'],

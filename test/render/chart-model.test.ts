@@ -42,7 +42,7 @@ describe('outcomeChart', () => {
 
   it('states the option’s interval as people and which ranks it makes uncertain', () => {
     const range = outcomeChart(result, 'stroke').arrays[1]!.range!;
-    expect(range.text).toBe('With option A, anywhere between 12 and 18 of these 100 could have a stroke.');
+    expect(range.text).toBe('With option A, anywhere between 12 and 18 of these 100 could have a stroke (range: 95% interval).');
     expect(range.uncertain).toEqual({ from: 12, to: 18 });
     expect(outcomeChart(result, 'stroke').arrays[0]!.range).toBeNull();
   });
@@ -76,7 +76,10 @@ describe('outcomeChart', () => {
   it('rejects an option counted per another denominator than the topic', () => {
     const mixed = topicFixture();
     const outcome = mixed.outcomes[0]!;
-    const perThousand = { ...outcome.options[1]!, groups: { denominator: 1000 as const, event: 150, prevented: 40, caused: 0, free: 810 } };
+    const perThousand = {
+      ...outcome.options[1]!,
+      groups: { denominator: 1000 as const, event: 150, prevented: 40, caused: 0, free: 810 },
+    };
     const broken = { ...mixed, outcomes: [{ ...outcome, options: [outcome.options[0]!, perThousand] }] };
     expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
   });
@@ -84,7 +87,10 @@ describe('outcomeChart', () => {
   it('rejects a comparison with people the option changed', () => {
     const mixed = topicFixture();
     const outcome = mixed.outcomes[0]!;
-    const comparison = { ...outcome.options[0]!, groups: { denominator: 100 as const, event: 15, prevented: 4, caused: 0, free: 81 } };
+    const comparison = {
+      ...outcome.options[0]!,
+      groups: { denominator: 100 as const, event: 15, prevented: 4, caused: 0, free: 81 },
+    };
     const broken = { ...mixed, outcomes: [{ ...outcome, options: [comparison, outcome.options[1]!] }] };
     expect(() => outcomeChart(broken, 'stroke')).toThrow(RangeError);
   });
@@ -100,28 +106,31 @@ describe('pairChart', () => {
   // Baseline 20%, RR 0.75 gives 0.20 × 0.75 = 15% (p1 = p0 × RR, Cochrane Handbook 5.1 §12.5.4);
   // per 100: 20 without, 15 with.
   const perPeople = { denominator: 100 as const, comparison: 20, intervention: 15, difference: 5, interventionRange: null };
+  const risks = { comparison: 0.2, intervention: 0.15 };
 
   it('names the arms “Without the option” and “With the option”', () => {
-    const model = pairChart({ perPeople });
+    const model = pairChart({ perPeople, risks });
     expect(model.arrays.map((array) => array.name)).toEqual(['Without the option', 'With the option']);
     expect(model.arrays[0]!.groups).toEqual({ denominator: 100, event: 20, prevented: 0, caused: 0, free: 80 });
     expect(model.arrays[1]!.groups).toEqual({ denominator: 100, event: 15, prevented: 5, caused: 0, free: 80 });
   });
 
   it('uses the period in the titles when one is given', () => {
-    expect(pairChart({ perPeople, periodYears: 5 }).arrays.map((array) => array.title)).toEqual([
+    expect(pairChart({ perPeople, risks, periodYears: 5 }).arrays.map((array) => array.title)).toEqual([
       'Without the option: 100 people like you, over 5 years',
       'With the option: 100 people like you, over 5 years',
     ]);
-    expect(pairChart({ perPeople }).arrays[1]!.title).toBe('With the option: 100 people like you');
+    expect(pairChart({ perPeople, risks }).arrays[1]!.title).toBe('With the option: 100 people like you');
   });
 
   it('labels the groups with “the outcome” unless it is named', () => {
-    expect(pairChart({ perPeople }).arrays[1]!.labels.map((label) => label.text)).toEqual([
+    expect(pairChart({ perPeople, risks }).arrays[1]!.labels.map((label) => label.text)).toEqual([
       '15 have the outcome anyway',
       '5 avoid the outcome because of the option',
       '80 do not have the outcome',
     ]);
-    expect(pairChart({ perPeople, outcomeName: 'a fracture' }).arrays[1]!.labels[1]!.text).toBe('5 avoid a fracture because of the option');
+    expect(pairChart({ perPeople, risks, outcomeName: 'a fracture' }).arrays[1]!.labels[1]!.text).toBe(
+      '5 avoid a fracture because of the option',
+    );
   });
 });

@@ -10,7 +10,8 @@ const groups = (denominator: 100 | 1000, event: number, prevented = 0, caused = 
   free: denominator - event - prevented - caused,
 });
 
-const countOf = (people: readonly { group: PersonGroup }[], group: PersonGroup) => people.filter((person) => person.group === group).length;
+const countOf = (people: readonly { group: PersonGroup }[], group: PersonGroup) =>
+  people.filter((person) => person.group === group).length;
 
 describe('iconArrayLayout for 100 people', () => {
   it('places 100 people on one 10 × 10 grid', () => {

@@ -58,7 +58,9 @@ function topicOf(measure: Measure, wanted: boolean, kind: 'benefit' | 'harm', ef
         wanted,
         isHeadline: true,
         baseline: { risk: baseline, periodYears: 1, source: 'Invented' },
-        effects: [{ optionId: 'a', effect, source: 'Invented', followUpYears: 1, certainty: 'moderate', importance: 'important' }],
+        effects: [
+          { optionId: 'a', effect, source: 'Invented', followUpYears: 1, certainty: 'moderate', importance: 'important' },
+        ],
       },
     ],
     evidence: { summary: 'Invented.', reviewed: '2026-11-01' },

@@ -38,7 +38,15 @@ describe('roundedDecimal', () => {
   });
 
   it('matches the rounded number for huge and non-finite values too', () => {
-    for (const value of [1e20, -1e21, 2 ** 60, Number.MAX_VALUE, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, Number.NaN]) {
+    for (const value of [
+      1e20,
+      -1e21,
+      2 ** 60,
+      Number.MAX_VALUE,
+      Number.POSITIVE_INFINITY,
+      Number.NEGATIVE_INFINITY,
+      Number.NaN,
+    ]) {
       expect(roundedDecimal(value, 2)).toBe(reference(value, 2));
     }
   });

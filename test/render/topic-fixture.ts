@@ -16,7 +16,13 @@ interface ArmCounts {
   readonly name?: string;
 }
 
-function option(id: string, name: string, isComparison: boolean, counts: ArmCounts, denominator: Denominator): OptionOutcomeResult {
+function option(
+  id: string,
+  name: string,
+  isComparison: boolean,
+  counts: ArmCounts,
+  denominator: Denominator,
+): OptionOutcomeResult {
   const intervention = isComparison ? counts.comparison : counts.intervention;
   const risk = { estimate: intervention / denominator, lower: null, upper: null };
   const people = {
@@ -55,10 +61,7 @@ function outcome(id: string, name: string, kind: 'benefit' | 'harm', counts: Arm
     isHeadline: kind === 'benefit',
     baselineRisk: counts.comparison / denominator,
     baselineSource: 'Invented for tests',
-    options: [
-      option('none', 'No treatment', true, counts, denominator),
-      option('a', 'Option A', false, counts, denominator),
-    ],
+    options: [option('none', 'No treatment', true, counts, denominator), option('a', 'Option A', false, counts, denominator)],
   };
 }
 
@@ -76,7 +79,10 @@ export function topicFixture(
     wordsDenominator: denominator,
     denominator,
     illustrative: true,
-    outcomes: [outcome('stroke', 'a stroke', 'benefit', stroke, denominator), outcome('muscle-pain', 'muscle pain', 'harm', musclePain, denominator)],
+    outcomes: [
+      outcome('stroke', 'a stroke', 'benefit', stroke, denominator),
+      outcome('muscle-pain', 'muscle pain', 'harm', musclePain, denominator),
+    ],
     notices: [],
   };
 }

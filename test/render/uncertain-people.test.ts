@@ -16,7 +16,12 @@ describe('uncertainRanks', () => {
   // between the limits (the comparison fixed), using the same fill sequence as the layout.
   it('marks exactly the people whose group changes somewhere in the interval', () => {
     const comparison = 20;
-    for (const [lower, upper, estimate] of [[13, 18, 15], [18, 26, 22], [0, 4, 2], [15, 25, 20]] as const) {
+    for (const [lower, upper, estimate] of [
+      [13, 18, 15],
+      [18, 26, 22],
+      [0, 4, 2],
+      [15, 25, 20],
+    ] as const) {
       const span = uncertainRanks({ lower, upper }, estimate);
       const sequences = [];
       for (let count = lower; count <= upper; count += 1) sequences.push(fillSequence(peopleGroups(comparison, count, 100)));

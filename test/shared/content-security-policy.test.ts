@@ -1,9 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import {
-  contentSecurityPolicy,
-  metaContentSecurityPolicy,
-  securityHeaders,
-} from '../../src/shared/content-security-policy.ts';
+import { contentSecurityPolicy, metaContentSecurityPolicy, securityHeaders } from '../../src/shared/content-security-policy.ts';
 
 /** Parse a serialised policy (CSP Level 3, W3C, §2.2.1: directives split on ";", names and sources on spaces). */
 function parse(policy: string): Map<string, string[]> {

@@ -60,30 +60,42 @@ describe('readRegularFile()', () => {
   it('never reads past the limit, whatever size the file claimed when it was checked', async () => {
     // A file that said 1 KB at its check and is 314 MB when read.
     const { asked, fileSystem } = swappingFileSystem(1000, 314_000_000);
-    await expect(readRegularFile('/x', { followLink: false, maxBytes: 4_000_000 }, fileSystem)).rejects.toMatchObject({ reason: 'too-large' });
+    await expect(readRegularFile('/x', { followLink: false, maxBytes: 4_000_000 }, fileSystem)).rejects.toMatchObject({
+      reason: 'too-large',
+    });
     expect(asked.bytes).toBe(4_000_001);
   });
 
   it('refuses a file whose size is over the limit before reading any of it', async () => {
     const { asked, fileSystem } = swappingFileSystem(600_000_000, 600_000_000);
-    await expect(readRegularFile('/x', { followLink: false, maxBytes: 4_000_000 }, fileSystem)).rejects.toMatchObject({ reason: 'too-large' });
+    await expect(readRegularFile('/x', { followLink: false, maxBytes: 4_000_000 }, fileSystem)).rejects.toMatchObject({
+      reason: 'too-large',
+    });
     expect(asked.reads).toBe(0);
   });
 
   it.runIf(process.platform === 'linux')('caps a file that reports size 0 but has content (Linux /proc)', async () => {
     // proc(5): files under /proc report a size of 0 although reading them gives text.
-    await expect(readRegularFile('/proc/self/status', { followLink: true, maxBytes: 100 })).rejects.toMatchObject({ reason: 'too-large' });
+    await expect(readRegularFile('/proc/self/status', { followLink: true, maxBytes: 100 })).rejects.toMatchObject({
+      reason: 'too-large',
+    });
   });
 
   it('refuses a symbolic link where links are not expected, and follows it where they are', async () => {
-    await expect(readRegularFile(path.join(folder, 'link.txt'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({ reason: 'link' });
+    await expect(readRegularFile(path.join(folder, 'link.txt'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({
+      reason: 'link',
+    });
     const { bytes } = await readRegularFile(path.join(folder, 'link.txt'), { followLink: true, maxBytes: 100 });
     expect(new TextDecoder().decode(bytes)).toBe('plain text');
   });
 
   it('refuses a folder and a missing file with their own reasons', async () => {
-    await expect(readRegularFile(path.join(folder, 'sub'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({ reason: 'not-a-file' });
-    await expect(readRegularFile(path.join(folder, 'none'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({ reason: 'missing' });
+    await expect(readRegularFile(path.join(folder, 'sub'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({
+      reason: 'not-a-file',
+    });
+    await expect(readRegularFile(path.join(folder, 'none'), { followLink: false, maxBytes: 100 })).rejects.toMatchObject({
+      reason: 'missing',
+    });
   });
 
   it.runIf(posix)('refuses a named pipe at once instead of waiting for a writer', async () => {
@@ -108,6 +120,8 @@ describe('openRegularFile()', () => {
       open: async () => real,
       lstat: async () => ({ dev: 0, ino: 0, isSymbolicLink: () => false, isDirectory: () => false }),
     };
-    await expect(openRegularFile(path.join(folder, 'plain.txt'), { followLink: false }, fileSystem)).rejects.toMatchObject({ reason: 'link' });
+    await expect(openRegularFile(path.join(folder, 'plain.txt'), { followLink: false }, fileSystem)).rejects.toMatchObject({
+      reason: 'link',
+    });
   });
 });

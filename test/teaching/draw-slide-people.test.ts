@@ -72,7 +72,9 @@ describe('drawing a slide’s people', () => {
 
   it('refuses looks that do not match the people', () => {
     const { panel } = drawn(STONE, 'helped', 1);
-    expect(() => drawSlidePeople(document.createElementNS(SVG, 'svg'), panel.layout, panel.looks.slice(1), 'short')).toThrow(/100 people but 99 looks/);
+    expect(() => drawSlidePeople(document.createElementNS(SVG, 'svg'), panel.layout, panel.looks.slice(1), 'short')).toThrow(
+      /100 people but 99 looks/,
+    );
   });
 
   it('draws uncertain people with a dashed outline and no fill colour of their group', () => {

@@ -23,7 +23,12 @@ function groupsAt(name: string, per: 100 | 1000) {
 
 /** The counts of each look for an unwanted event's groups, the empty ones left out. */
 function looksOf(groups: PeopleGroups | undefined): Record<string, number> {
-  const found = { event: groups?.event ?? 0, helped: groups?.prevented ?? 0, harmed: groups?.caused ?? 0, free: groups?.free ?? 0 };
+  const found = {
+    event: groups?.event ?? 0,
+    helped: groups?.prevented ?? 0,
+    harmed: groups?.caused ?? 0,
+    free: groups?.free ?? 0,
+  };
   return Object.fromEntries(Object.entries(found).filter(([, value]) => value > 0));
 }
 
@@ -51,7 +56,8 @@ describe('the format demonstrations', () => {
     expect(scattered?.layout.arrangement).toBe('scattered');
     expect(scattered?.layout.seed).toBe(DEFAULT_SCATTER_SEED);
     expect(counts(scattered)).toEqual(counts(grouped));
-    const placesOf = (panel: PeoplePanel | undefined) => panel?.layout.people.filter((person) => person.group !== 'free').map((person) => person.index);
+    const placesOf = (panel: PeoplePanel | undefined) =>
+      panel?.layout.people.filter((person) => person.group !== 'free').map((person) => person.index);
     expect(placesOf(scattered)).not.toEqual(placesOf(grouped));
     // Drawn twice, the scattered picture is the same picture.
     expect(placesOf(buildSlide(itemOf(demoTopic(STONE)), 'arrangement').panels[1])).toEqual(placesOf(scattered));

@@ -104,6 +104,14 @@ describe('the framing step', () => {
 describe('the working shown on the cards', () => {
   it('writes decimals to at most two places, trailing zeros dropped, without float noise', () => {
     // 1.005 is stored as 1.00499999999999989…; a risk of 1.005 in 100 still reads 1.01 (common practice: decimal rounding).
-    expect([11.25, 3.75, 26.666666, 15, 1.005, 0.1 + 0.2, 169.5560560966].map(shortDecimal)).toEqual(['11.25', '3.75', '26.67', '15', '1.01', '0.3', '169.56']);
+    expect([11.25, 3.75, 26.666666, 15, 1.005, 0.1 + 0.2, 169.5560560966].map(shortDecimal)).toEqual([
+      '11.25',
+      '3.75',
+      '26.67',
+      '15',
+      '1.01',
+      '0.3',
+      '169.56',
+    ]);
   });
 });

@@ -41,7 +41,10 @@ describe('a slide as an SVG file', () => {
 
   it('keeps the framing cards, the evidence and its source in the file', () => {
     const slide = buildSlide(itemOf(demoTopic(STONE)), 'framing');
-    const words = (parsed(slideSvgText(slide, document, 'footer', 'Illustrative')).documentElement.textContent ?? '').replace(/\s+/g, ' ');
+    const words = (parsed(slideSvgText(slide, document, 'footer', 'Illustrative')).documentElement.textContent ?? '').replace(
+      /\s+/g,
+      ' ',
+    );
     for (const text of ['40% lower risk', '16 in 100 fewer', 'Treat 7 to prevent 1', 'Akl 2011', 'footer']) {
       expect(words).toContain(text);
     }

@@ -72,15 +72,27 @@ describe('the story slides of the kidney stone topic (illustrative)', () => {
     // Grouped fill: the 16 helped sit right after the 24 who have it anyway, where the comparison's 25th to 40th were.
     const helpedRanks = option?.layout.people.filter((person) => person.group === 'prevented').map((person) => person.rank);
     expect(helpedRanks).toEqual(Array.from({ length: 16 }, (_, index) => 24 + index));
-    expect(comparison?.layout.people.filter((person) => person.rank >= 24 && person.rank < 40).every((person) => person.group === 'event')).toBe(true);
-    expect(slide.callouts[0]).toEqual({ look: 'helped', value: '16 in 100', text: 'avoid another kidney stone because of extra water each day' });
+    expect(
+      comparison?.layout.people
+        .filter((person) => person.rank >= 24 && person.rank < 40)
+        .every((person) => person.group === 'event'),
+    ).toBe(true);
+    expect(slide.callouts[0]).toEqual({
+      look: 'helped',
+      value: '16 in 100',
+      text: 'avoid another kidney stone because of extra water each day',
+    });
   });
 
   it('shows who is harmed on a harm outcome, the first the option adds people to', () => {
     const slide = buildSlide(item, 'harmed');
     expect(item.harmIds).toEqual(['night', 'stomach']);
     expect(counts(slide.panels[1])).toEqual({ event: 15, harmed: 9, free: 76 });
-    expect(slide.callouts[0]).toEqual({ look: 'harmed', value: '9 in 100', text: 'get broken sleep from passing urine at night because of extra water each day' });
+    expect(slide.callouts[0]).toEqual({
+      look: 'harmed',
+      value: '9 in 100',
+      text: 'get broken sleep from passing urine at night because of extra water each day',
+    });
   });
 
   it('outlines the people whose group depends on the range, and gives the range and the certainty in words', () => {
@@ -90,9 +102,11 @@ describe('the story slides of the kidney stone topic (illustrative)', () => {
     expect(range).toEqual({ lower: 18, upper: 32 });
     // Between 18 and 32 have it with the option (estimate 24): the people ranked 18 to 31 may or may not.
     expect(looksCount(slide.panels[0], 'uncertain')).toBe(14);
-    expect(slide.panels[0]?.layout.people.filter((person, index) => slide.panels[0]?.looks[index] === 'uncertain').map((person) => person.rank)).toEqual(
-      Array.from({ length: 14 }, (_, index) => 18 + index),
-    );
+    expect(
+      slide.panels[0]?.layout.people
+        .filter((person, index) => slide.panels[0]?.looks[index] === 'uncertain')
+        .map((person) => person.rank),
+    ).toEqual(Array.from({ length: 14 }, (_, index) => 18 + index));
     expect(slide.lines.map((line) => line.text)).toEqual([
       'With extra water each day, the number who avoid another kidney stone could be anywhere between 8 and 22 in 100.',
       'The range is the research’s 95% interval.',
@@ -103,14 +117,24 @@ describe('the story slides of the kidney stone topic (illustrative)', () => {
   });
 
   it('gives the patient’s sentences exactly as the handout words them: the headline, then every harm', () => {
-    const slides = [buildSlide(item, 'patient-words', teachingMessagesEn, 0), buildSlide(item, 'patient-words', teachingMessagesEn, 1)];
+    const slides = [
+      buildSlide(item, 'patient-words', teachingMessagesEn, 0),
+      buildSlide(item, 'patient-words', teachingMessagesEn, 1),
+    ];
     const handout = new Set(handoutSentences(result, { showNnt: false }).map((sentence) => sentence.text));
-    const spoken = slides.flatMap((found) => found.lines.filter((line) => line.tone === 'body').flatMap((line) => line.text.split(/(?<=\.) (?=[A-Z])/)));
+    const spoken = slides.flatMap((found) =>
+      found.lines.filter((line) => line.tone === 'body').flatMap((line) => line.text.split(/(?<=\.) (?=[A-Z])/)),
+    );
     expect(spoken.length).toBeGreaterThan(7);
     for (const sentence of spoken) expect(handout.has(sentence)).toBe(true);
-    expect(slides.map((found) => [found.heading, found.lines.filter((line) => line.tone === 'subheading').map((line) => line.text)])).toEqual([
+    expect(
+      slides.map((found) => [found.heading, found.lines.filter((line) => line.tone === 'subheading').map((line) => line.text)]),
+    ).toEqual([
       ['What the patient hears (1 of 2)', ['About another kidney stone']],
-      ['What the patient hears (2 of 2)', ['About broken sleep from passing urine at night', 'About an upset stomach bad enough to stop']],
+      [
+        'What the patient hears (2 of 2)',
+        ['About broken sleep from passing urine at night', 'About an upset stomach bad enough to stop'],
+      ],
     ]);
   });
 
@@ -124,7 +148,9 @@ describe('the story slides of the kidney stone topic (illustrative)', () => {
   });
 
   it('shows every harm on a slide of its own, each with its own people', () => {
-    const slides = slidePlaces([item]).filter((place) => place.kind === 'harmed').map((place) => buildSlide(item, 'harmed', teachingMessagesEn, place.part));
+    const slides = slidePlaces([item])
+      .filter((place) => place.kind === 'harmed')
+      .map((place) => buildSlide(item, 'harmed', teachingMessagesEn, place.part));
     expect(slides.map((found) => found.heading)).toEqual(['Who is harmed (1 of 2)', 'Who is harmed (2 of 2)']);
     expect(slides.map((found) => counts(found.panels[1]))).toEqual([
       // Broken sleep: 15 in 100 without, 15 × 1.6 = 24 with extra water (derived).
@@ -181,7 +207,13 @@ describe('story slides of other topics', () => {
     expect(counts(slide.panels[1])).toEqual({ event: 18, helped: 22, free: 60 });
     const evaluation = evaluateTopic(demoTopic(STONE));
     if (!evaluation.ok) throw new Error('kidney stone topic did not compute');
-    expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({ denominator: 100, event: 18, prevented: 22, caused: 0, free: 60 });
+    expect(evaluation.result.outcomes[0]?.options[2]?.groups).toEqual({
+      denominator: 100,
+      event: 18,
+      prevented: 22,
+      caused: 0,
+      free: 60,
+    });
   });
 });
 
@@ -192,11 +224,15 @@ describe('the level of the range on the teaching slides', () => {
       ...topic,
       outcomes: topic.outcomes.map((outcome) => ({
         ...outcome,
-        effects: outcome.effects.map((entry) => (entry.effect.measure === 'counts' ? entry : { ...entry, effect: { ...entry.effect, level: 0.9 } })),
+        effects: outcome.effects.map((entry) =>
+          entry.effect.measure === 'counts' ? entry : { ...entry, effect: { ...entry.effect, level: 0.9 } },
+        ),
       })),
     };
     const lines = buildSlide(itemOf(at90), 'uncertainty').lines.map((found) => found.text);
     expect(lines).toContain('The range is the research’s 90% interval.');
-    expect(buildSlide(itemOf(topic), 'uncertainty').lines.map((found) => found.text)).toContain('The range is the research’s 95% interval.');
+    expect(buildSlide(itemOf(topic), 'uncertainty').lines.map((found) => found.text)).toContain(
+      'The range is the research’s 95% interval.',
+    );
   });
 });

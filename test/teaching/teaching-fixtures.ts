@@ -51,7 +51,12 @@ export interface PairSettings {
   readonly name?: string;
   readonly wanted?: boolean;
   /** A harm outcome, when asked for: its baseline and effect, and whether its event is wanted. */
-  readonly harm?: { readonly baseline: string; readonly effect: EnteredEffect; readonly name?: string; readonly wanted?: boolean };
+  readonly harm?: {
+    readonly baseline: string;
+    readonly effect: EnteredEffect;
+    readonly name?: string;
+    readonly wanted?: boolean;
+  };
   /** The period (default 5 years), in a unit. */
   readonly period?: { readonly amount: number; readonly unit: TimeUnit };
 }
@@ -75,7 +80,15 @@ function outcome(settings: OutcomeSettings, periodYears: number, periodUnit: Tim
     isHeadline: kind === 'benefit',
     baseline: { risk: baseline, periodYears, periodUnit, source: 'Invented for a test' },
     effects: [
-      { optionId: 'treated', effect, source: 'Invented for a test', followUpYears: periodYears, followUpUnit: periodUnit, certainty: 'moderate', importance: 'important' },
+      {
+        optionId: 'treated',
+        effect,
+        source: 'Invented for a test',
+        followUpYears: periodYears,
+        followUpUnit: periodUnit,
+        certainty: 'moderate',
+        importance: 'important',
+      },
     ],
   };
 }
@@ -86,7 +99,14 @@ export function pairTopic(settings: PairSettings): Topic {
   const periodYears = yearsFrom(period.amount, period.unit);
   const outcomes = [
     outcome(
-      { id: 'stroke', name: settings.name ?? 'a stroke', kind: 'benefit', wanted: settings.wanted === true, baseline: settings.baseline, effect: settings.effect },
+      {
+        id: 'stroke',
+        name: settings.name ?? 'a stroke',
+        kind: 'benefit',
+        wanted: settings.wanted === true,
+        baseline: settings.baseline,
+        effect: settings.effect,
+      },
       periodYears,
       period.unit,
     ),
@@ -95,7 +115,14 @@ export function pairTopic(settings: PairSettings): Topic {
     const { harm } = settings;
     outcomes.push(
       outcome(
-        { id: 'bleed', name: harm.name ?? 'a serious bleed', kind: 'harm', wanted: harm.wanted === true, baseline: harm.baseline, effect: harm.effect },
+        {
+          id: 'bleed',
+          name: harm.name ?? 'a serious bleed',
+          kind: 'harm',
+          wanted: harm.wanted === true,
+          baseline: harm.baseline,
+          effect: harm.effect,
+        },
         periodYears,
         period.unit,
       ),

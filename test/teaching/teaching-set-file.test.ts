@@ -55,7 +55,9 @@ describe('reading a teaching set', () => {
 
   it('reads back what it writes, topics inside and without the patient’s details', () => {
     const topic = { ...demoTopic(STONE), patient: { name: 'A. Patient', reference: 'X-1' } };
-    const text = writeTeachingSet('Round trip', [{ topic, option: 'citrate', harm: 'stomach', per: 1000, steps: ['helped', 'framing'] }]);
+    const text = writeTeachingSet('Round trip', [
+      { topic, option: 'citrate', harm: 'stomach', per: 1000, steps: ['helped', 'framing'] },
+    ]);
     expect(text).not.toContain('A. Patient');
     const set = readOk(text);
     expect(set.title).toBe('Round trip');
@@ -74,15 +76,55 @@ describe('reading a teaching set', () => {
     ['text that is not JSON', '{ "format": ', '(file)', /“set\.json” is not a readable teaching set: it is not complete JSON/],
     ['an empty file', '  \n', '(file)', /“set\.json” is empty/],
     ['a topic file', demoText(STONE), 'format', /“set\.json” is a topic, not a teaching set/],
-    ['another format', JSON.stringify({ format: 'slides', version: 1 }), 'format', /not a Chancewise teaching set \(its format is "slides"\)/],
-    ['a newer version', setText([], { version: 2 }), 'version', /version 2, newer than this version of Chancewise reads \(up to 1\)/],
-    ['a title that is a number', setText([{ topic: embedded(STONE) }], { title: 12 }), 'title', /damaged at "title": expected text, found the number 12/],
+    [
+      'another format',
+      JSON.stringify({ format: 'slides', version: 1 }),
+      'format',
+      /not a Chancewise teaching set \(its format is "slides"\)/,
+    ],
+    [
+      'a newer version',
+      setText([], { version: 2 }),
+      'version',
+      /version 2, newer than this version of Chancewise reads \(up to 1\)/,
+    ],
+    [
+      'a title that is a number',
+      setText([{ topic: embedded(STONE) }], { title: 12 }),
+      'title',
+      /damaged at "title": expected text, found the number 12/,
+    ],
     ['no items', setText([]), 'items', /damaged at "items": expected at least one topic, found an empty list/],
-    ['items that are not a list', setText([], { items: { topic: 'a.json' } }), 'items', /damaged at "items": expected a list, found a group of fields/],
-    ['an unknown step', setText([{ topic: embedded(STONE), steps: ['baseline', 'summary'] }]), 'items.0.steps.1', /damaged at "items\.0\.steps\.1": expected one of "title", "baseline", .* or "incremental", found the text "summary"/],
-    ['no steps', setText([{ topic: embedded(STONE), steps: [] }]), 'items.0.steps', /expected at least one step, found an empty list/],
-    ['a denominator of 50', setText([{ topic: embedded(STONE), per: 50 }]), 'items.0.per', /damaged at "items\.0\.per": expected 100 or 1000 or null, found the number 50/],
-    ['a topic that is a number', setText([{ topic: 7 }]), 'items.0.topic', /damaged at "items\.0\.topic": expected text or a group of fields, found the number 7/],
+    [
+      'items that are not a list',
+      setText([], { items: { topic: 'a.json' } }),
+      'items',
+      /damaged at "items": expected a list, found a group of fields/,
+    ],
+    [
+      'an unknown step',
+      setText([{ topic: embedded(STONE), steps: ['baseline', 'summary'] }]),
+      'items.0.steps.1',
+      /damaged at "items\.0\.steps\.1": expected one of "title", "baseline", .* or "incremental", found the text "summary"/,
+    ],
+    [
+      'no steps',
+      setText([{ topic: embedded(STONE), steps: [] }]),
+      'items.0.steps',
+      /expected at least one step, found an empty list/,
+    ],
+    [
+      'a denominator of 50',
+      setText([{ topic: embedded(STONE), per: 50 }]),
+      'items.0.per',
+      /damaged at "items\.0\.per": expected 100 or 1000 or null, found the number 50/,
+    ],
+    [
+      'a topic that is a number',
+      setText([{ topic: 7 }]),
+      'items.0.topic',
+      /damaged at "items\.0\.topic": expected text or a group of fields, found the number 7/,
+    ],
   ])('names the first wrong field of %s', (_case, text, field, message) => {
     const found = problemOf(text);
     expect(found.field).toBe(field);
@@ -94,13 +136,17 @@ describe('reading a teaching set', () => {
     topic.topic.periodYears = 'ten';
     const found = problemOf(setText([{ topic: embedded(SCREENING) }, { topic }]));
     expect(found.field).toBe('items.1.topic.topic.periodYears');
-    expect(found.message).toBe('“set.json” is damaged at "items.1.topic.topic.periodYears": expected a number, found the text "ten".');
+    expect(found.message).toBe(
+      '“set.json” is damaged at "items.1.topic.topic.periodYears": expected a number, found the text "ten".',
+    );
   });
 
   it('says which item holds a file that is not a topic', () => {
     const found = problemOf(setText([{ topic: { format: 'notes', text: 'hello' } }]));
     expect(found.field).toBe('items.0.topic.format');
-    expect(found.message).toBe('“set.json”, topic 1 ("items.0.topic"): This file is not a Chancewise topic (its format is "notes").');
+    expect(found.message).toBe(
+      '“set.json”, topic 1 ("items.0.topic"): This file is not a Chancewise topic (its format is "notes").',
+    );
   });
 });
 
@@ -111,7 +157,9 @@ describe('resolving a teaching set into topics to present', () => {
     expect(resolved.ok).toBe(false);
     if (resolved.ok) return;
     expect(resolved.field).toBe('items.0.topic');
-    expect(resolved.message).toMatch(/topic 1 is a file \(“\.\.\/\.\.\/\.\.\/\.\.\/assets\/demo\/01-kidney-stone\.json”\), which a browser cannot open by itself/);
+    expect(resolved.message).toMatch(
+      /topic 1 is a file \(“\.\.\/\.\.\/\.\.\/\.\.\/assets\/demo\/01-kidney-stone\.json”\), which a browser cannot open by itself/,
+    );
   });
 
   it('reads topics named by path relative to the set’s folder in Node', async () => {
@@ -140,12 +188,21 @@ describe('resolving a teaching set into topics to present', () => {
   });
 
   it('says when a named topic file cannot be read or is not a topic', async () => {
-    const missing = await resolveTeachingSet('set.json', readOk(setText([{ topic: 'no-such-topic.json' }])), nodeTopicReader(PATHS));
+    const missing = await resolveTeachingSet(
+      'set.json',
+      readOk(setText([{ topic: 'no-such-topic.json' }])),
+      nodeTopicReader(PATHS),
+    );
     expect(missing).toMatchObject({ ok: false, field: 'items.0.topic' });
     if (!missing.ok) expect(missing.message).toMatch(/topic 1 \(“no-such-topic\.json”\) could not be read: ENOENT/);
-    const notTopic = await resolveTeachingSet('set.json', readOk(setText([{ topic: 'paths.teaching.json' }])), nodeTopicReader(PATHS));
+    const notTopic = await resolveTeachingSet(
+      'set.json',
+      readOk(setText([{ topic: 'paths.teaching.json' }])),
+      nodeTopicReader(PATHS),
+    );
     expect(notTopic).toMatchObject({ ok: false, field: 'items.0.topic' });
-    if (!notTopic.ok) expect(notTopic.message).toMatch(/This file is not a Chancewise topic \(its format is "chancewise-teaching-set"\)/);
+    if (!notTopic.ok)
+      expect(notTopic.message).toMatch(/This file is not a Chancewise topic \(its format is "chancewise-teaching-set"\)/);
   });
 
   it.each([
@@ -159,9 +216,12 @@ describe('resolving a teaching set into topics to present', () => {
   });
 
   it('says which topic cannot be computed, and why, at its field', async () => {
-    const topic = JSON.parse(writeTopicFile(pairTopic({ baseline: '150%', effect: { measure: 'rr', estimate: 0.8 } }))) as unknown;
+    const topic = JSON.parse(
+      writeTopicFile(pairTopic({ baseline: '150%', effect: { measure: 'rr', estimate: 0.8 } })),
+    ) as unknown;
     const resolved = await resolveTeachingSet('set.json', readOk(setText([{ topic: embedded(STONE) }, { topic }])), null);
     expect(resolved).toMatchObject({ ok: false, field: 'items.1.topic.topic.outcomes.0.baseline.risk' });
-    if (!resolved.ok) expect(resolved.message).toMatch(/“set\.json”, topic 2 cannot be shown .*A risk of "150%" is outside 0% to 100%/);
+    if (!resolved.ok)
+      expect(resolved.message).toMatch(/“set\.json”, topic 2 cannot be shown .*A risk of "150%" is outside 0% to 100%/);
   });
 });

@@ -57,7 +57,10 @@ describe('a wanted event made more likely: 25% by day 3, risk ratio 1.8 (1.4 to 
   });
 
   it('shows 45 in 100 with the option: 25 × 1.8', () => {
-    expect(callouts(slideOf('with-option'))).toEqual(['25 in 100 without it (no treatment)', `45 in 100 have ${outcome} with the treatment`]);
+    expect(callouts(slideOf('with-option'))).toEqual([
+      '25 in 100 without it (no treatment)',
+      `45 in 100 have ${outcome} with the treatment`,
+    ]);
   });
 
   it('draws the 20 who gain the event in the helped look and says they have it because of the option', () => {
@@ -65,12 +68,18 @@ describe('a wanted event made more likely: 25% by day 3, risk ratio 1.8 (1.4 to 
     const option = helped.panels[1];
     expect(counts(option)).toEqual({ event: 25, helped: 20, free: 55 });
     // The helped people are those who have the event only with the option: the core's `caused`.
-    const groups = new Set(option?.layout.people.filter((person) => option.looks[person.index] === 'helped').map((person) => person.group));
+    const groups = new Set(
+      option?.layout.people.filter((person) => option.looks[person.index] === 'helped').map((person) => person.group),
+    );
     expect([...groups]).toEqual(['caused']);
     expect(lookOf('caused', true)).toBe('helped');
     expect(helped.callouts[0]).toEqual({ look: 'helped', value: '20 in 100', text: `have ${outcome} because of the treatment` });
     expect(callouts(helped)[1]).toBe('25 in 100 have it anyway');
-    expect(option?.chips.map((chip) => chip.label)).toEqual([`25 have ${outcome}`, `20 have ${outcome} because of the treatment`, `55 do not have ${outcome}`]);
+    expect(option?.chips.map((chip) => chip.label)).toEqual([
+      `25 have ${outcome}`,
+      `20 have ${outcome} because of the treatment`,
+      `55 do not have ${outcome}`,
+    ]);
   });
 
   it('frames the result four ways, the subtraction the larger count first and the NNT a benefit', () => {
@@ -87,7 +96,9 @@ describe('a wanted event made more likely: 25% by day 3, risk ratio 1.8 (1.4 to 
   it('gives the range as extra people who have it, 10 to 33 in 100', () => {
     // 25 × 1.4 = 35 and 25 × 2.3 = 57.5, which rounds half up to 58: 10 to 33 more than 25.
     const range = slideOf('uncertainty');
-    expect(range.lines[0]?.text).toBe(`With the treatment, the number of extra people who have ${outcome} could be anywhere between 10 and 33 in 100.`);
+    expect(range.lines[0]?.text).toBe(
+      `With the treatment, the number of extra people who have ${outcome} could be anywhere between 10 and 33 in 100.`,
+    );
     expect(range.panels[0]?.looks.filter((look) => look === 'uncertain')).toHaveLength(58 - 35);
   });
 
@@ -139,7 +150,15 @@ describe('the same numbers for an event to avoid keep their words', () => {
 
 describe('a wanted event made less likely: 50% over 6 months, risk ratio 0.8', () => {
   const outcome = 'pain relief';
-  const item = itemOf(pairTopic({ baseline: '50%', effect: { measure: 'rr', estimate: 0.8 }, name: outcome, wanted: true, period: { amount: 6, unit: 'months' } }));
+  const item = itemOf(
+    pairTopic({
+      baseline: '50%',
+      effect: { measure: 'rr', estimate: 0.8 },
+      name: outcome,
+      wanted: true,
+      period: { amount: 6, unit: 'months' },
+    }),
+  );
 
   it('words the period in months', () => {
     expect(buildSlide(item, 'title').lines[1]?.text).toBe('Every number counts what happens over the next 6 months.');
@@ -190,7 +209,9 @@ describe('every harm of a topic with a wanted headline, one unwanted and one wan
     ]);
     // The people who lose a wanted event are those who have it only without the option: `prevented`.
     const alert = harms[1]?.panels[1];
-    const groups = new Set(alert?.layout.people.filter((person) => alert.looks[person.index] === 'harmed').map((person) => person.group));
+    const groups = new Set(
+      alert?.layout.people.filter((person) => alert.looks[person.index] === 'harmed').map((person) => person.group),
+    );
     expect([...groups]).toEqual(['prevented']);
   });
 
@@ -202,8 +223,12 @@ describe('every harm of a topic with a wanted headline, one unwanted and one wan
       ['About relief from the itch'],
       ['About drowsiness the next day', 'About feeling alert the next morning'],
     ]);
-    expect(words[0]?.lines[1]?.text).toBe('No tablet: about 30 in 100 people like you will have relief from the itch by day 3. About 70 will not.');
-    expect(words[1]?.lines.map((line) => line.text)).toContain('With the night-time tablet, about 10 fewer of those 100 people end up feeling alert the next morning.');
+    expect(words[0]?.lines[1]?.text).toBe(
+      'No tablet: about 30 in 100 people like you will have relief from the itch by day 3. About 70 will not.',
+    );
+    expect(words[1]?.lines.map((line) => line.text)).toContain(
+      'With the night-time tablet, about 10 fewer of those 100 people end up feeling alert the next morning.',
+    );
   });
 
   it('frames the headline as 18 more in 100: 30 × 1.6 = 48, NNTB 100 ÷ 18 = 5.56, rounded up to 6', () => {

@@ -33,12 +33,17 @@ if (posix) {
 const lockedFileSystem: RegularFileSystem<FileHandle> = {
   ...nodeRegularFileSystem,
   open: async (filePath, flags) => {
-    if (filePath.endsWith('locked.js')) throw Object.assign(new Error(`EACCES: permission denied, open '${filePath}'`), { code: 'EACCES' });
+    if (filePath.endsWith('locked.js'))
+      throw Object.assign(new Error(`EACCES: permission denied, open '${filePath}'`), { code: 'EACCES' });
     return nodeRegularFileSystem.open(filePath, flags);
   },
 };
 
-const server = createStaticServer({ root, headers: { 'Content-Security-Policy': "default-src 'self'" }, fileSystem: lockedFileSystem });
+const server = createStaticServer({
+  root,
+  headers: { 'Content-Security-Policy': "default-src 'self'" },
+  fileSystem: lockedFileSystem,
+});
 const allowing = createStaticServer({ root, headers: {}, allowedHosts: ['clinic-laptop.local'] });
 let port = 0;
 let allowingPort = 0;
@@ -97,7 +102,13 @@ describe('Host header', () => {
   });
 
   test('refuses any other name, another port, and a missing Host (DNS rebinding)', async () => {
-    for (const host of [`evil.example:${port}`, `127.0.0.1:${port + 1}`, 'localhost', `localhost.evil.example:${port}`, `127.0.0.1@evil:${port}`]) {
+    for (const host of [
+      `evil.example:${port}`,
+      `127.0.0.1:${port + 1}`,
+      'localhost',
+      `localhost.evil.example:${port}`,
+      `127.0.0.1@evil:${port}`,
+    ]) {
       const answer = await get('/', host);
       expect(answer.status, host).toBe(421);
       expect(answer.body).not.toContain('<title>app</title>');
@@ -129,7 +140,8 @@ describe('Host header', () => {
 
 describe('hidden files', () => {
   test('are never served, nor anything in a hidden folder', async () => {
-    for (const path of ['/.env', '/.git/config', '/%2eenv', '/assets/../.env']) expect((await get(path, local())).status, path).toBe(404);
+    for (const path of ['/.env', '/.git/config', '/%2eenv', '/assets/../.env'])
+      expect((await get(path, local())).status, path).toBe(404);
   });
 });
 
@@ -138,7 +150,9 @@ describe('listening beyond this machine', () => {
     const wide = startupLines('0.0.0.0', 'http://0.0.0.0:8080/');
     expect(wide).toHaveLength(2);
     expect(wide[0]).toMatch(/^Warning: listening on 0\.0\.0\.0 makes the app reachable from other machines/u);
-    expect(startupLines('127.0.0.1', 'http://127.0.0.1:8080/')).toEqual(['Chancewise is served at http://127.0.0.1:8080/ (press Ctrl+C to stop)']);
+    expect(startupLines('127.0.0.1', 'http://127.0.0.1:8080/')).toEqual([
+      'Chancewise is served at http://127.0.0.1:8080/ (press Ctrl+C to stop)',
+    ]);
   });
 
   test('takes extra Host names only through --allow-host', () => {

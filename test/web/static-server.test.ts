@@ -72,7 +72,11 @@ describe('isBuildStale', () => {
 describe('parseServeArguments', () => {
   test('reads the port, host and build switch', () => {
     expect(parseServeArguments(['--port', '4321'])).toEqual({ port: 4321, host: '127.0.0.1', build: true });
-    expect(parseServeArguments(['--port', '80', '--host', '0.0.0.0', '--no-build'])).toEqual({ port: 80, host: '0.0.0.0', build: false });
+    expect(parseServeArguments(['--port', '80', '--host', '0.0.0.0', '--no-build'])).toEqual({
+      port: 80,
+      host: '0.0.0.0',
+      build: false,
+    });
   });
 
   test('refuses an unknown flag or a port that is not a number', () => {

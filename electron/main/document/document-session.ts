@@ -151,7 +151,12 @@ export function createDocumentSession(settings: DocumentSessionSettings): Docume
         const savePath = savePathAfterRestore(record.documentPath);
         topic.filePath = savePath;
         topic.lastSavedAt = savePath === null ? null : recovery.documentSavedAt;
-        topic.lastSnapshot = { content: record.content, keepPatient: record.keepsPatient, hasUnsavedChanges: true, savedAt: record.savedAt };
+        topic.lastSnapshot = {
+          content: record.content,
+          keepPatient: record.keepsPatient,
+          hasUnsavedChanges: true,
+          savedAt: record.savedAt,
+        };
         window.showFile(topic.filePath);
         window.deliver({ kind: 'snapshot', content: record.content, reason: 'unexpected-exit', fileName: fileNameOf(savePath) });
         return;
@@ -194,7 +199,12 @@ export function createDocumentSession(settings: DocumentSessionSettings): Docume
       window.markEdited(snapshot.hasUnsavedChanges);
       if (snapshot.hasUnsavedChanges) {
         await pending.track(
-          snapshots.write({ content: snapshot.content, keepPatient: snapshot.keepPatient, documentPath: topic.filePath, savedAt }),
+          snapshots.write({
+            content: snapshot.content,
+            keepPatient: snapshot.keepPatient,
+            documentPath: topic.filePath,
+            savedAt,
+          }),
         );
       } else {
         await pending.track(snapshots.clear());
@@ -207,7 +217,12 @@ export function createDocumentSession(settings: DocumentSessionSettings): Docume
     handBack() {
       const last = topic.lastSnapshot;
       if (last !== null) {
-        window.deliver({ kind: 'snapshot', content: last.content, reason: 'renderer-crashed', fileName: fileNameOf(topic.filePath) });
+        window.deliver({
+          kind: 'snapshot',
+          content: last.content,
+          reason: 'renderer-crashed',
+          fileName: fileNameOf(topic.filePath),
+        });
       } else if (topic.filePath !== null) {
         const filePath = topic.filePath;
         void readTopicDocument(filePath).then(

@@ -44,7 +44,11 @@ export interface PathOpener {
  * file goes to `folder` (made private, 0700) under the handout's own name, replacing an earlier
  * copy, so the viewer's title names the handout.
  */
-export async function openHandoutForPrinting(request: HandoutPdfRequest, opener: PathOpener, folder: string): Promise<PrintOutcome> {
+export async function openHandoutForPrinting(
+  request: HandoutPdfRequest,
+  opener: PathOpener,
+  folder: string,
+): Promise<PrintOutcome> {
   const fileName = handoutFileName(path.basename(request.suggestedName));
   const target = path.join(folder, fileName);
   try {

@@ -27,7 +27,10 @@ export const TOPIC_FILE_MAX_BYTES = PAYLOAD_LIMITS.documentCharacters * 4;
  * `ShellFailure` (`read-failed`, `too-large` or `not-a-topic-file`), so the shell never
  * takes on a file it could not save back.
  */
-export async function readTopicDocument(filePath: string, fileSystem: RegularFileSystem = nodeRegularFileSystem): Promise<TopicDocument> {
+export async function readTopicDocument(
+  filePath: string,
+  fileSystem: RegularFileSystem = nodeRegularFileSystem,
+): Promise<TopicDocument> {
   let content: RegularFileContent;
   try {
     content = await readRegularFile(filePath, { followLink: true, maxBytes: TOPIC_FILE_MAX_BYTES }, fileSystem);

@@ -39,11 +39,7 @@ export function withTopicExtension(filePath: string): string {
  * switch (`--flag`, `-r` and its value are not topic files), and anything without an
  * openable extension; `file://` addresses (as Linux desktops pass them) are converted.
  */
-export function topicPathFromCommandLine(
-  argv: readonly string[],
-  workingDirectory: string,
-  isPackaged: boolean,
-): string | null {
+export function topicPathFromCommandLine(argv: readonly string[], workingDirectory: string, isPackaged: boolean): string | null {
   const rest = argv.slice(isPackaged ? 1 : 2);
   for (const argument of rest) {
     if (argument.startsWith('-') || argument.includes('\u0000')) continue;

@@ -183,7 +183,11 @@ async function syncFolder(folder: string, fileSystem: AtomicFileSystem): Promise
  * regular file refused (`resolveWriteTarget`). On failure the temporary file is removed and
  * the target is untouched.
  */
-export async function writeFileAtomic(named: string, data: string | Uint8Array, settings: AtomicWriteSettings = {}): Promise<void> {
+export async function writeFileAtomic(
+  named: string,
+  data: string | Uint8Array,
+  settings: AtomicWriteSettings = {},
+): Promise<void> {
   const fileSystem = settings.fileSystem ?? nodeFileSystem;
   const platform = settings.platform ?? process.platform;
   const target = await resolveWriteTarget(named);

@@ -71,7 +71,11 @@ async function previousVersion(target: string): Promise<{ bytes: Uint8Array; mod
  * link stays. A pipe, a folder or a device is refused at once (`FileWriteRefusal`), never
  * opened for writing. Temporary files left by an earlier killed run are removed afterwards.
  */
-export async function saveWithBackup(named: string, data: string | Uint8Array, settings: SaveWithBackupSettings = {}): Promise<SaveOutcome> {
+export async function saveWithBackup(
+  named: string,
+  data: string | Uint8Array,
+  settings: SaveWithBackupSettings = {},
+): Promise<SaveOutcome> {
   const files = settings.backupFileSystem ?? nodeBackupFileSystem;
   const target = await resolveWriteTarget(named);
   const previous = await previousVersion(target);

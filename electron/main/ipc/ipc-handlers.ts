@@ -118,6 +118,8 @@ export function registerIpcHandlers<Sender>(ipcMain: IpcMainLike, settings: IpcH
   register(INVOKE_CHANNELS.saveDocument, checkDocumentText, (sender, text) => actions.saveDocument(sender, text));
   register(INVOKE_CHANNELS.saveDocumentAs, checkDocumentText, (sender, text) => actions.saveDocumentAs(sender, text));
   register(INVOKE_CHANNELS.saveSnapshot, checkSnapshotRequest, (sender, snapshot) => actions.saveSnapshot(sender, snapshot));
-  register(INVOKE_CHANNELS.exportHandoutPdf, checkHandoutPdfRequest, (sender, request) => actions.exportHandoutPdf(sender, request));
+  register(INVOKE_CHANNELS.exportHandoutPdf, checkHandoutPdfRequest, (sender, request) =>
+    actions.exportHandoutPdf(sender, request),
+  );
   register(INVOKE_CHANNELS.printHandout, checkHandoutPdfRequest, (sender, request) => actions.printHandout(sender, request));
 }

@@ -20,8 +20,7 @@ export const PAYLOAD_LIMITS = {
 
 /** The outcome of checking one request's arguments. */
 export type PayloadCheck<T> =
-  | { readonly ok: true; readonly value: T }
-  | { readonly ok: false; readonly code: 'invalid-request' | 'too-large' };
+  { readonly ok: true; readonly value: T } | { readonly ok: false; readonly code: 'invalid-request' | 'too-large' };
 
 const INVALID = { ok: false, code: 'invalid-request' } as const;
 const TOO_LARGE = { ok: false, code: 'too-large' } as const;

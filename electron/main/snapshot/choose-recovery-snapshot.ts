@@ -28,7 +28,11 @@ export function chooseRecoverySnapshot(candidates: readonly SnapshotCandidate[])
     if (record === null) continue;
     if (candidate.documentSavedAt !== null && record.savedAt <= candidate.documentSavedAt) continue;
     const valid: ValidSnapshotCandidate = { ...candidate, record };
-    if (best === null || record.savedAt > best.record.savedAt || (record.savedAt === best.record.savedAt && candidate.name > best.name)) {
+    if (
+      best === null ||
+      record.savedAt > best.record.savedAt ||
+      (record.savedAt === best.record.savedAt && candidate.name > best.name)
+    ) {
       best = valid;
     }
   }

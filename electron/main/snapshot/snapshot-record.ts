@@ -68,7 +68,14 @@ export function sealOf(key: SnapshotKey, text: string): string {
 
 /** The text a snapshot's seal covers: every field but the seal, in a fixed order. */
 function sealedText(record: Omit<SnapshotRecord, 'seal'>): string {
-  return JSON.stringify([record.format, record.version, record.savedAt, record.documentPath, record.keepsPatient, record.content ?? null]);
+  return JSON.stringify([
+    record.format,
+    record.version,
+    record.savedAt,
+    record.documentPath,
+    record.keepsPatient,
+    record.content ?? null,
+  ]);
 }
 
 function sealMatches(expected: string, given: string): boolean {

@@ -77,8 +77,7 @@ export function resolveAppAsset(address: string, appFolder: string, pathApi: Pat
 
   const filePath = pathApi.join(appFolder, ...segments);
   const relative = pathApi.relative(appFolder, filePath);
-  const escapes =
-    relative === '' || relative === '..' || relative.startsWith(`..${pathApi.sep}`) || pathApi.isAbsolute(relative);
+  const escapes = relative === '' || relative === '..' || relative.startsWith(`..${pathApi.sep}`) || pathApi.isAbsolute(relative);
   if (escapes) return refuse(400, 'outside-app-folder');
   return { ok: true, segments, filePath };
 }

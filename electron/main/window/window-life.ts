@@ -71,7 +71,9 @@ export async function openMainWindow(settings: MainWindowSettings): Promise<Wind
   const state = await loadWindowState(settings.windowStatePath);
   const workAreas = [screen.getPrimaryDisplay(), ...screen.getAllDisplays()].map((display) => display.workArea);
   const bounds = fitWindowToDisplays(state, workAreas);
-  const window = new BrowserWindow(createMainWindowOptions({ preloadPath: settings.preloadPath, bounds, devTools: !app.isPackaged }));
+  const window = new BrowserWindow(
+    createMainWindowOptions({ preloadPath: settings.preloadPath, bounds, devTools: !app.isPackaged }),
+  );
   if (state?.isMaximized === true) window.maximize();
   const dialogs = createShellDialogs(window);
   rememberWindowState(window, settings.windowStatePath, settings.pending);

@@ -20,7 +20,8 @@ export interface MainWindowSettings {
  * scanner reading the source sees every value.
  */
 export function createMainWindowOptions(settings: MainWindowSettings): BrowserWindowConstructorOptions {
-  const position = settings.bounds.x === undefined || settings.bounds.y === undefined ? {} : { x: settings.bounds.x, y: settings.bounds.y };
+  const position =
+    settings.bounds.x === undefined || settings.bounds.y === undefined ? {} : { x: settings.bounds.x, y: settings.bounds.y };
   return {
     ...position,
     width: settings.bounds.width,

@@ -19,11 +19,7 @@ import { zForLevel } from './z-for-level.ts';
  * chi-square, Fisher's exact p, phi and Cramér's V, with notices for corrected or
  * undefined ratios. Throws an InputError for an invalid arm or level.
  */
-export function analyseCounts(
-  intervention: ArmCounts,
-  comparison: ArmCounts,
-  options: CountsOptions = {},
-): CountsAnalysis {
+export function analyseCounts(intervention: ArmCounts, comparison: ArmCounts, options: CountsOptions = {}): CountsAnalysis {
   const level = options.level ?? DEFAULT_LEVEL;
   checkArm(intervention, 'intervention');
   checkArm(comparison, 'comparison');

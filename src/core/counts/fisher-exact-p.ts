@@ -43,13 +43,9 @@ export function fisherExactP(intervention: ArmCounts, comparison: ArmCounts): nu
   // ln P(x + 1) − ln P(x) for x option-arm events; the rounding of the products (about 1e−16
   // relative) is far inside the tie tolerance.
   const logStepUp = (events: number): number =>
-    Math.log(
-      ((optionTotal - events) * (eventTotal - events)) /
-        ((events + 1) * (comparisonTotal - eventTotal + events + 1)),
-    );
+    Math.log(((optionTotal - events) * (eventTotal - events)) / ((events + 1) * (comparisonTotal - eventTotal + events + 1)));
   // ln P(x + direction) − ln P(x).
-  const logStep = (events: number, direction: 1 | -1): number =>
-    direction === 1 ? logStepUp(events) : -logStepUp(events - 1);
+  const logStep = (events: number, direction: 1 | -1): number => (direction === 1 ? logStepUp(events) : -logStepUp(events - 1));
 
   const modeGuess = Math.floor(((eventTotal + 1) * (optionTotal + 1)) / (grandTotal + 2));
   const mode = Math.min(highest, Math.max(lowest, modeGuess));

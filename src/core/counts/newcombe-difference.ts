@@ -9,11 +9,7 @@ import { wilsonInterval } from './wilson-interval.ts';
  * the square-and-add of the two Wilson intervals. With d = p₁ − p₂ (arm 1 the comparison),
  * lower = d − √((p₁ − l₁)² + (u₂ − p₂)²) and upper = d + √((u₁ − p₁)² + (p₂ − l₂)²).
  */
-export function newcombeDifference(
-  intervention: ArmCounts,
-  comparison: ArmCounts,
-  level = DEFAULT_LEVEL,
-): IntervalEstimate {
+export function newcombeDifference(intervention: ArmCounts, comparison: ArmCounts, level = DEFAULT_LEVEL): IntervalEstimate {
   const first = wilsonInterval(comparison.events, comparison.total, level);
   const second = wilsonInterval(intervention.events, intervention.total, level);
   const difference = first.estimate - second.estimate;

@@ -11,11 +11,7 @@ import { zForLevel } from './z-for-level.ts';
  * SE(ln OR) = √(1/a + 1/b + 1/c + 1/d). Cells are corrected by 0.5 when one is 0;
  * null when neither arm has an event or both arms are all events.
  */
-export function oddsRatio(
-  intervention: ArmCounts,
-  comparison: ArmCounts,
-  level = DEFAULT_LEVEL,
-): RatioEstimate | null {
+export function oddsRatio(intervention: ArmCounts, comparison: ArmCounts, level = DEFAULT_LEVEL): RatioEstimate | null {
   const cells = ratioCells(twoByTwoTable(intervention, comparison));
   const z = zForLevel(level);
   if (cells === null) return null;

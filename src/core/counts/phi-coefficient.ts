@@ -11,12 +11,7 @@ export function phiCoefficient(intervention: ArmCounts, comparison: ArmCounts): 
   const eventTotal = table.optionEvents + table.comparisonEvents;
   const nonEventTotal = table.optionNonEvents + table.comparisonNonEvents;
   if (eventTotal === 0 || nonEventTotal === 0) return null;
-  const crossDifference =
-    table.optionEvents * table.comparisonNonEvents - table.optionNonEvents * table.comparisonEvents;
-  const scale =
-    Math.sqrt(intervention.total) *
-    Math.sqrt(comparison.total) *
-    Math.sqrt(eventTotal) *
-    Math.sqrt(nonEventTotal);
+  const crossDifference = table.optionEvents * table.comparisonNonEvents - table.optionNonEvents * table.comparisonEvents;
+  const scale = Math.sqrt(intervention.total) * Math.sqrt(comparison.total) * Math.sqrt(eventTotal) * Math.sqrt(nonEventTotal);
   return Math.min(1, Math.max(-1, crossDifference / scale));
 }

@@ -16,10 +16,7 @@ export function ratioCells(table: TwoByTwoTable): RatioCells | null {
   const allEvents = table.optionNonEvents === 0 && table.comparisonNonEvents === 0;
   if (noEvents || allEvents) return null;
   const anyZero =
-    table.optionEvents === 0 ||
-    table.optionNonEvents === 0 ||
-    table.comparisonEvents === 0 ||
-    table.comparisonNonEvents === 0;
+    table.optionEvents === 0 || table.optionNonEvents === 0 || table.comparisonEvents === 0 || table.comparisonNonEvents === 0;
   if (!anyZero) return { table, corrected: false };
   return {
     table: {

@@ -9,11 +9,7 @@ import { zForLevel } from './z-for-level.ts';
  * Comparison risk − option risk with the Wald interval (Newcombe 1998, method 1):
  * d ± z·√(p₁(1 − p₁)/n₁ + p₂(1 − p₂)/n₂), truncated to [−1, 1].
  */
-export function waldDifference(
-  intervention: ArmCounts,
-  comparison: ArmCounts,
-  level = DEFAULT_LEVEL,
-): IntervalEstimate {
+export function waldDifference(intervention: ArmCounts, comparison: ArmCounts, level = DEFAULT_LEVEL): IntervalEstimate {
   checkArm(intervention, 'intervention');
   checkArm(comparison, 'comparison');
   const z = zForLevel(level);
@@ -21,12 +17,7 @@ export function waldDifference(
   const optionRisk = intervention.events / intervention.total;
   const difference = comparisonRisk - optionRisk;
   const standardError = Math.sqrt(
-    (comparisonRisk * (1 - comparisonRisk)) / comparison.total +
-      (optionRisk * (1 - optionRisk)) / intervention.total,
+    (comparisonRisk * (1 - comparisonRisk)) / comparison.total + (optionRisk * (1 - optionRisk)) / intervention.total,
   );
-  return intervalEstimate(
-    difference,
-    Math.max(-1, difference - z * standardError),
-    Math.min(1, difference + z * standardError),
-  );
+  return intervalEstimate(difference, Math.max(-1, difference - z * standardError), Math.min(1, difference + z * standardError));
 }

@@ -19,11 +19,7 @@ export function yatesChiSquare(intervention: ArmCounts, comparison: ArmCounts): 
     table.optionEvents * table.comparisonNonEvents - table.optionNonEvents * table.comparisonEvents,
   );
   const reduced = Math.max(0, crossDifference - grandTotal / 2);
-  const scale =
-    Math.sqrt(intervention.total) *
-    Math.sqrt(comparison.total) *
-    Math.sqrt(eventTotal) *
-    Math.sqrt(nonEventTotal);
+  const scale = Math.sqrt(intervention.total) * Math.sqrt(comparison.total) * Math.sqrt(eventTotal) * Math.sqrt(nonEventTotal);
   const ratio = reduced / scale;
   const statistic = grandTotal * ratio * ratio;
   return { statistic, p: chiSquareUpperTail(statistic) };

@@ -49,7 +49,12 @@ function baselineOf(outcome: TopicOutcome): { risk: number; fromTrial: boolean }
   return { risk: risk ?? 0.5, fromTrial: true };
 }
 
-function comparisonEntry(option: TopicOption, risk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
+function comparisonEntry(
+  option: TopicOption,
+  risk: number,
+  denominator: Denominator,
+  words: WordsDenominator,
+): OptionOutcomeResult {
   // The comparison against itself: no difference, whichever way the event points.
   const people = peopleCounts(risk, point(risk), denominator);
   return {
@@ -72,7 +77,12 @@ function comparisonEntry(option: TopicOption, risk: number, denominator: Denomin
   };
 }
 
-function optionEntry(item: Computed, baselineRisk: number, denominator: Denominator, words: WordsDenominator): OptionOutcomeResult {
+function optionEntry(
+  item: Computed,
+  baselineRisk: number,
+  denominator: Denominator,
+  words: WordsDenominator,
+): OptionOutcomeResult {
   const { computation, option, entry } = item;
   const intervention = computation.interventionRisk ?? point(baselineRisk);
   const people = peopleCounts(baselineRisk, intervention, denominator);

@@ -105,7 +105,11 @@ function collect(node: SchemaNode, into: Expectation): void {
     case 'string':
       return add(fileWords.text);
     case 'number':
-      return add((plain.pipe ?? []).some((action) => action.type === 'integer' || action.type === 'safe_integer') ? fileWords.wholeNumber : fileWords.number);
+      return add(
+        (plain.pipe ?? []).some((action) => action.type === 'integer' || action.type === 'safe_integer')
+          ? fileWords.wholeNumber
+          : fileWords.number,
+      );
     case 'boolean':
       return add(fileWords.trueOrFalse);
     case 'array':
@@ -123,7 +127,8 @@ function collect(node: SchemaNode, into: Expectation): void {
       return;
     case 'picklist':
       for (const option of plain.options ?? []) {
-        if ((typeof option === 'string' || typeof option === 'number') && !into.choices.includes(option)) into.choices.push(option);
+        if ((typeof option === 'string' || typeof option === 'number') && !into.choices.includes(option))
+          into.choices.push(option);
       }
       return;
     case 'literal':

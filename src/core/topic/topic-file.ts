@@ -71,7 +71,10 @@ export function readTopicFile(contents: string): TopicFileReading {
   }
   const record = data as Record<string, unknown>;
   if (record.format !== TOPIC_FORMAT) {
-    return { ok: false, problem: problem('file-format-unknown', 'format', { format: String(record.format ?? fileWords.noFormat) }) };
+    return {
+      ok: false,
+      problem: problem('file-format-unknown', 'format', { format: String(record.format ?? fileWords.noFormat) }),
+    };
   }
   if (typeof record.version === 'number' && record.version > TOPIC_VERSION) {
     return {

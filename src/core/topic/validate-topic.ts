@@ -19,7 +19,12 @@ function checkPeriod(problems: Problem[], years: number, field: string): void {
   }
 }
 
-function checkUnique(problems: Problem[], values: readonly string[], field: string, code: 'topic-duplicate-id' | 'topic-duplicate-name'): void {
+function checkUnique(
+  problems: Problem[],
+  values: readonly string[],
+  field: string,
+  code: 'topic-duplicate-id' | 'topic-duplicate-name',
+): void {
   const seen = new Set<string>();
   values.forEach((value, index) => {
     const key = code === 'topic-duplicate-name' ? value.trim().toLowerCase() : value;
@@ -126,7 +131,8 @@ function checkOutcome(check: TopicCheck, topic: Topic, outcome: TopicOutcome, in
   for (const option of topic.options) {
     if (option.isComparison) continue;
     const count = outcome.effects.filter((entry) => entry.optionId === option.id).length;
-    if (count === 0) problems.push(problem('topic-effect-missing', `${field}.effects`, { option: option.name, outcome: outcome.name }));
+    if (count === 0)
+      problems.push(problem('topic-effect-missing', `${field}.effects`, { option: option.name, outcome: outcome.name }));
     if (count > 1) problems.push(problem('topic-duplicate-id', `${field}.effects`, { id: option.id }));
   }
 }
@@ -159,7 +165,13 @@ export function checkTopic(topic: Topic): TopicCheck {
   checkText(problems, topic.evidence.summary, 'evidence.summary', 'evidence summary', TOPIC_LIMITS.evidenceSummaryLength, false);
   checkText(problems, topic.clinician, 'clinician', 'clinician or practice name', TOPIC_LIMITS.clinicianLength, false);
   if (topic.questions.length > TOPIC_LIMITS.maxQuestions) {
-    problems.push(problem('topic-text-too-long', 'questions', { what: 'list of questions', length: topic.questions.length, limit: TOPIC_LIMITS.maxQuestions }));
+    problems.push(
+      problem('topic-text-too-long', 'questions', {
+        what: 'list of questions',
+        length: topic.questions.length,
+        limit: TOPIC_LIMITS.maxQuestions,
+      }),
+    );
   }
   topic.questions.forEach((question, index) =>
     checkText(problems, question, `questions.${index}`, 'question', TOPIC_LIMITS.questionLength),
@@ -176,16 +188,36 @@ export function checkTopic(topic: Topic): TopicCheck {
   options.forEach((option, index) =>
     checkText(problems, option.name, `options.${index}.name`, 'option name', TOPIC_LIMITS.optionNameLength),
   );
-  checkUnique(problems, options.map((option) => option.id), 'options', 'topic-duplicate-id');
-  checkUnique(problems, options.map((option) => option.name), 'options', 'topic-duplicate-name');
+  checkUnique(
+    problems,
+    options.map((option) => option.id),
+    'options',
+    'topic-duplicate-id',
+  );
+  checkUnique(
+    problems,
+    options.map((option) => option.name),
+    'options',
+    'topic-duplicate-name',
+  );
   if (outcomes.length < TOPIC_LIMITS.minOutcomes) problems.push(problem('topic-too-few-outcomes', 'outcomes'));
   if (outcomes.length > TOPIC_LIMITS.maxOutcomes) {
     problems.push(problem('topic-too-many-outcomes', 'outcomes', { limit: TOPIC_LIMITS.maxOutcomes, count: outcomes.length }));
   }
   const headlines = outcomes.filter((outcome) => outcome.isHeadline).length;
   if (outcomes.length > 0 && headlines !== 1) problems.push(problem('topic-headline-count', 'outcomes', { count: headlines }));
-  checkUnique(problems, outcomes.map((outcome) => outcome.id), 'outcomes', 'topic-duplicate-id');
-  checkUnique(problems, outcomes.map((outcome) => outcome.name), 'outcomes', 'topic-duplicate-name');
+  checkUnique(
+    problems,
+    outcomes.map((outcome) => outcome.id),
+    'outcomes',
+    'topic-duplicate-id',
+  );
+  checkUnique(
+    problems,
+    outcomes.map((outcome) => outcome.name),
+    'outcomes',
+    'topic-duplicate-name',
+  );
   outcomes.forEach((outcome, index) => checkOutcome(check, topic, outcome, index));
   return check;
 }

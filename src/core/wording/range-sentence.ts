@@ -16,7 +16,10 @@ export function rangeCase(comparison: number, range: { readonly lower: number; r
   const fewest = comparison - Math.max(range.lower, range.upper);
   const most = comparison - Math.min(range.lower, range.upper);
   if (fewest === 0 && most === 0) return { variant: 'no-change' };
-  if (fewest >= 0) return fewest === most ? { variant: 'narrow', direction: 'fewer', count: most } : { variant: 'avoid', low: fewest, high: most };
+  if (fewest >= 0)
+    return fewest === most
+      ? { variant: 'narrow', direction: 'fewer', count: most }
+      : { variant: 'avoid', low: fewest, high: most };
   if (most <= 0) {
     return fewest === most
       ? { variant: 'narrow', direction: 'more', count: Math.abs(fewest) }
@@ -61,7 +64,8 @@ export function rangeSentence(context: OptionContext): WordingSentence {
   const limits = option.interventionRisk;
   const base = option.comparisonRisk.estimate;
   // Counts that show no change over a range that is not exactly no change: say it is below one person.
-  const hidden = limits !== null && limits.lower !== null && limits.upper !== null && (limits.lower !== base || limits.upper !== base);
+  const hidden =
+    limits !== null && limits.lower !== null && limits.upper !== null && (limits.lower !== base || limits.upper !== base);
   const found: RangeCase = counted.variant === 'no-change' && hidden ? { variant: 'below-one' } : counted;
   const text = catalogue.range({ ...values, range: found, denominator });
   return optionSentence(context, 'range', text, { ...rangeNumbers(found), denominator });

@@ -3,6 +3,7 @@
  * caution, the footer and the refusal sentence. Layout code never holds prose; a
  * second language is a sibling module with the same shape ({@link HandoutMessages}).
  */
+import { formatCount, formatPercent } from '../../core/messages/format-number.ts';
 import { duration } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
@@ -14,7 +15,12 @@ export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'ques
 
 /** Values shared by sentences about the whole sheet. */
 export interface SheetValues {
+  /** The pictures' denominator (100 or 1000). */
   readonly denominator: number;
+  /** The words' and table's denominator: the pictures', or 10,000 up to a million for a rare outcome. */
+  readonly wordsDenominator: number;
+  /** Some side effects are written out of more people than the words' denominator, so band and number agree. */
+  readonly rareRows: boolean;
   readonly years: number;
   /** The unit the topic's period was given in. */
   readonly unit: TimeUnit;
@@ -44,6 +50,10 @@ export interface HandoutMessages {
   /** A side effect's cell: its frequency band with the number beside the word. */
   readonly bandCell: (band: FrequencyBand, amount: Amount, denominator: number) => string;
   readonly certaintyShort: Readonly<Record<Certainty, string>>;
+  /** After the sentences with ranges: the level of the interval they are, for one range or `count` of them. */
+  readonly rangeLevel: (level: number, count: number) => string;
+  /** Under the enlarged block of 100 of a picture of 1000. */
+  readonly closeUpLabel: string;
   readonly noSideEffects: string;
   readonly evidenceHeading: string;
   readonly evidenceSummary: (summary: string) => string;
@@ -71,8 +81,18 @@ export interface HandoutMessages {
 }
 
 const MONTHS = [
-  'January', 'February', 'March', 'April', 'May', 'June',
-  'July', 'August', 'September', 'October', 'November', 'December',
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
 ];
 
 const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
@@ -96,15 +116,15 @@ const bandWords: Readonly<Record<FrequencyBand, string>> = {
 const amountCell = (amount: Amount, denominator: number): string => {
   switch (amount.kind) {
     case 'none':
-      return `0 in ${denominator}`;
+      return `0 in ${formatCount(denominator)}`;
     case 'fewer-than-one':
-      return `fewer than 1 in ${denominator}`;
+      return denominator === 1000000 ? 'fewer than 1 in a million' : `fewer than 1 in ${formatCount(denominator)}`;
     case 'about':
-      return `${amount.count} in ${denominator}`;
+      return `${formatCount(amount.count)} in ${formatCount(denominator)}`;
     case 'nearly-all':
-      return `nearly all ${denominator}`;
+      return `nearly all ${formatCount(denominator)}`;
     case 'all':
-      return `all ${denominator}`;
+      return `all ${formatCount(denominator)}`;
   }
 };
 
@@ -122,7 +142,12 @@ export const handoutMessagesEn: HandoutMessages = {
   documentSubject: 'Benefits and harms of the options, for talking with your clinician',
   paperName: { a4: 'A4', letter: 'US Letter' },
   illustrativeBadge: 'Illustrative example: invented numbers',
-  numbersFor: (values) => `Every number on this sheet is out of ${values.denominator} people, over ${period(values)}.`,
+  numbersFor: (values) => {
+    const otherwise = values.rareRows ? ' unless it says otherwise' : '';
+    return values.wordsDenominator === values.denominator
+      ? `Every number on this sheet is out of ${formatCount(values.denominator)} people${otherwise}, over ${period(values)}.`
+      : `The pictures show ${formatCount(values.denominator)} people; every other number is out of ${formatCount(values.wordsDenominator)}${otherwise}, over ${period(values)}.`;
+  },
   keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
   keyGroups: {
     event: 'People it happens to',
@@ -153,6 +178,8 @@ export const handoutMessagesEn: HandoutMessages = {
     low: 'low certainty',
     'very-low': 'very low certainty',
   },
+  rangeLevel: (level, count) => `${count === 1 ? 'That range is' : 'Each range is'} a ${formatPercent(level)} interval.`,
+  closeUpLabel: 'The outlined 100 people, enlarged',
   noSideEffects: 'No side effects were entered for this sheet. Ask your clinician about them.',
   evidenceHeading: 'Where these numbers come from:',
   evidenceSummary: (summary) => {
@@ -161,7 +188,9 @@ export const handoutMessagesEn: HandoutMessages = {
     return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
   },
   evidenceReviewed: (reviewed) =>
-    reviewed.trim() === '' ? 'The date the research was checked was not given.' : `The research was last checked on ${reviewed.trim()}.`,
+    reviewed.trim() === ''
+      ? 'The date the research was checked was not given.'
+      : `The research was last checked on ${reviewed.trim()}.`,
   baselineSource: (outcome, source) => {
     const trimmed = source.trim().replace(/[.!?]+$/, '');
     return `Your starting chance of ${outcome} comes from: ${trimmed}.`;
@@ -172,7 +201,7 @@ export const handoutMessagesEn: HandoutMessages = {
   defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
   cautionHeading: 'Please keep in mind:',
   caution: (values) =>
-    `these numbers are estimates for groups of ${values.denominator} people like you over ${period(values)}, ` +
+    `these numbers are estimates for groups of ${formatCount(values.wordsDenominator)} people like you over ${period(values)}, ` +
     'not a prediction for you. ' +
     'This sheet helps you talk with your own doctor, nurse or pharmacist, and does not replace their advice. ' +
     'Follow local guidance.',

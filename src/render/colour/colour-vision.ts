@@ -35,7 +35,11 @@ export const MACHADO_2009: Readonly<Record<VisionDeficiency, Matrix>> = {
 /** A colour as `#rrggbb` from three channels in 0–1, clamped and rounded. */
 export function hexFromChannels(channels: readonly [number, number, number]): string {
   return `#${channels
-    .map((channel) => Math.round(Math.min(1, Math.max(0, channel)) * 255).toString(16).padStart(2, '0'))
+    .map((channel) =>
+      Math.round(Math.min(1, Math.max(0, channel)) * 255)
+        .toString(16)
+        .padStart(2, '0'),
+    )
     .join('')}`;
 }
 
@@ -70,7 +74,7 @@ export function cielab(hex: string): [number, number, number] {
   const x = (0.4124564 * red + 0.3575761 * green + 0.1804375 * blue) / 0.95047;
   const y = 0.2126729 * red + 0.7151522 * green + 0.072175 * blue;
   const z = (0.0193339 * red + 0.119192 * green + 0.9503041 * blue) / 1.08883;
-  const bend = (value: number) => (value > 216 / 24389 ? Math.cbrt(value) : (24389 / 27 * value + 16) / 116);
+  const bend = (value: number) => (value > 216 / 24389 ? Math.cbrt(value) : ((24389 / 27) * value + 16) / 116);
   const [fx, fy, fz] = [bend(x), bend(y), bend(z)];
   return [116 * fy - 16, 500 * (fx - fy), 200 * (fy - fz)];
 }

@@ -18,7 +18,10 @@ export function svgForExport(svgText: string, options: SvgExportOptions = {}): s
   const widthMm = options.widthMm ?? 180;
   const root = /<svg\b[^>]*>/.exec(svgText);
   const viewBox = root === null ? null : /\bviewBox="([^"]*)"/.exec(root[0]);
-  const numbers = (viewBox?.[1] ?? '').trim().split(/[\s,]+/).map(Number);
+  const numbers = (viewBox?.[1] ?? '')
+    .trim()
+    .split(/[\s,]+/)
+    .map(Number);
   const [, , boxWidth, boxHeight] = numbers;
   if (root === null || boxWidth === undefined || boxHeight === undefined || !(boxWidth > 0) || !(boxHeight > 0)) {
     throw new RangeError('svgForExport requires an <svg> root with a viewBox');

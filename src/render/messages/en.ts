@@ -3,6 +3,7 @@
  * sentence. Drawing code never holds prose; a second language is a sibling
  * module with the same shape ({@link ChartMessages}).
  */
+import { formatCount, formatPercent } from '../../core/messages/format-number.ts';
 import { duration, startsWithVerb } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { PersonGroup } from '../../core/types.ts';
@@ -41,6 +42,27 @@ export interface RangeValues {
   readonly denominator: number;
   readonly outcome: string;
   readonly option: string;
+  /** The interval's level (0.95 for a 95% interval), or null when it is not known. */
+  readonly level: number | null;
+}
+
+/** A range whose ends show as the same number of people: less than one person wide. */
+export interface NarrowRangeValues extends RangeValues {
+  /** The same range counted per more people, when that shows its ends apart; else null. */
+  readonly words: { readonly lower: number; readonly upper: number; readonly denominator: number } | null;
+}
+
+/** A difference too small to show as a whole person in the pictures (see `hidden-difference.ts`). */
+export interface BelowOneValues {
+  readonly outcome: string;
+  readonly option: string;
+  /** The pictures' denominator. */
+  readonly denominator: number;
+  readonly direction: 'fewer' | 'more';
+  /** The difference per `wordsDenominator`; 0 below one in a million. */
+  readonly count: number;
+  /** Null below one in a million. */
+  readonly wordsDenominator: number | null;
 }
 
 const plural = (count: number, one: string, many: string) => (count === 1 ? one : many);
@@ -77,7 +99,8 @@ type LabelWords = Readonly<Record<PersonGroup, (values: LabelValues) => string>>
 
 const event = ({ count, outcome, role }: LabelValues): string =>
   `${count} ${have(outcome, count)} ${outcome}${role === 'option' ? ' anyway' : ''}`;
-const free = ({ count, outcome }: LabelValues): string => `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`;
+const free = ({ count, outcome }: LabelValues): string =>
+  `${count} ${plural(count, 'does', 'do')} not ${have(outcome)} ${outcome}`;
 
 /** The shape every language's chart wording provides. */
 export interface ChartMessages {
@@ -97,8 +120,12 @@ export interface ChartMessages {
    * because of the option, `prevented` people miss out on it. Never "avoid" or "risk".
    */
   readonly wantedLabels: LabelWords;
+  /** Only when the exact difference is 0. */
   readonly noDifference: (outcome: string, option: string) => string;
+  /** A difference that is not 0 but shows as no whole person in the pictures. */
+  readonly belowOnePerson: (values: BelowOneValues) => string;
   readonly range: (values: RangeValues) => string;
+  readonly narrowRange: (values: NarrowRangeValues) => string;
   readonly rangeOutline: (outcome: string, option: string) => string;
   readonly summary: (title: string, labels: readonly string[]) => string;
 }
@@ -128,8 +155,7 @@ export const chartMessagesEn: ChartMessages = {
     event,
     prevented: ({ count, outcome, option }: LabelValues) =>
       `${count} ${plural(count, 'avoids', 'avoid')} ${outcome} because of ${option}`,
-    caused: ({ count, outcome, option }: LabelValues) =>
-      `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
+    caused: ({ count, outcome, option }: LabelValues) => `${count} ${get(outcome, count)} ${outcome} because of ${option}`,
     free,
   },
   wantedLabels: {
@@ -143,12 +169,23 @@ export const chartMessagesEn: ChartMessages = {
     caused: ({ count, outcome, option }: LabelValues) => `${count} ${have(outcome, count)} ${outcome} because of ${option}`,
     free,
   },
-  /** When an option changes nothing at these numbers. */
-  noDifference: (outcome: string, option: string) =>
-    `The same number ${have(outcome)} ${outcome} with and without ${option}.`,
-  /** The option's interval as people: "With option A, anywhere between 13 and 18 of these 100 could have a stroke." */
-  range: ({ lower, upper, denominator, outcome, option }: RangeValues) =>
-    `With ${option}, anywhere between ${lower} and ${upper} of these ${denominator} could ${have(outcome)} ${outcome}.`,
+  /** When an option changes nothing: the exact difference is 0. */
+  noDifference: (outcome: string, option: string) => `The same number ${have(outcome)} ${outcome} with and without ${option}.`,
+  /** "Fewer than 1 in 1000: about 2 in 10,000 fewer have a stroke with option A, too few to show as a whole person here." */
+  belowOnePerson: ({ outcome, option, denominator, direction, count, wordsDenominator }: BelowOneValues) =>
+    wordsDenominator === null || count === 0
+      ? `Fewer than 1 in ${formatCount(denominator)}, and fewer than 1 in a million: slightly ${direction} people ${have(outcome)} ${outcome} with ${option}, too few to show as a whole person here.`
+      : `Fewer than 1 in ${formatCount(denominator)}: about ${formatCount(count)} in ${formatCount(wordsDenominator)} ${direction} ${have(outcome)} ${outcome} with ${option}, too few to show as a whole person here.`,
+  /** The option's interval as people: "With option A, anywhere between 13 and 18 of these 100 could have a stroke (range: 95% interval)." */
+  range: ({ lower, upper, denominator, outcome, option, level }: RangeValues) =>
+    `With ${option}, anywhere between ${lower} and ${upper} of these ${formatCount(denominator)} could ${have(outcome)} ${outcome}${level === null ? '' : ` (range: ${formatPercent(level)} interval)`}.`,
+  /** Ends that show as the same count: "the range (95% interval) is less than one person of these 1000: …". */
+  narrowRange: ({ lower, denominator, outcome, option, level, words }: NarrowRangeValues) => {
+    const range = level === null ? 'the range' : `the range (${formatPercent(level)} interval)`;
+    return words === null
+      ? `With ${option}, ${range} is less than one person wide: at either end, about ${lower} of these ${formatCount(denominator)} could ${have(outcome)} ${outcome}.`
+      : `With ${option}, ${range} is less than one person of these ${formatCount(denominator)}: anywhere between ${formatCount(words.lower)} and ${formatCount(words.upper)} in ${formatCount(words.denominator)} could ${have(outcome)} ${outcome}.`;
+  },
   /** Legend line for the outlined people drawn when the range is shown. */
   rangeOutline: (outcome: string, option: string) =>
     `Dashed ring: people who may or may not ${have(outcome)} ${outcome} with ${option}, depending on where in that range the truth lies.`,

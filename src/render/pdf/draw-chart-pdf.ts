@@ -62,7 +62,12 @@ export function drawChartPdf(
   const arrays = model.arrays.map((array, index) => {
     const placed = frame.arrays[index];
     if (placed === undefined) {
-      return { height: 0, drawn: { event: 0, prevented: 0, caused: 0, free: 0 }, looks: { event: 0, helped: 0, harmed: 0, free: 0 }, outlined: 0 };
+      return {
+        height: 0,
+        drawn: { event: 0, prevented: 0, caused: 0, free: 0 },
+        looks: { event: 0, helped: 0, harmed: 0, free: 0 },
+        outlined: 0,
+      };
     }
     write(placed.title);
     const glyph = glyphFor(array.layout.geometry.glyph);
@@ -71,14 +76,20 @@ export function drawChartPdf(
         const { x, y, size, look } = row.swatch;
         const ringed = look === 'uncertain' ? ringedSwatch(box.x + x, box.y + y, size, palette) : null;
         const figure = ringed?.figure ?? { x: box.x + x, y: box.y + y, size };
-        drawFigurePdf(doc, glyph, look === 'uncertain' ? 'free' : look, {
-          ...figure,
-          tileOriginX: figure.x,
-          tileOriginY: figure.y,
-          tile: figure.size / 4,
-          lineWidth: size * palette.outlineWidth,
-          cellSize: size,
-        }, palette);
+        drawFigurePdf(
+          doc,
+          glyph,
+          look === 'uncertain' ? 'free' : look,
+          {
+            ...figure,
+            tileOriginX: figure.x,
+            tileOriginY: figure.y,
+            tile: figure.size / 4,
+            lineWidth: size * palette.outlineWidth,
+            cellSize: size,
+          },
+          palette,
+        );
         if (ringed !== null) drawRingPdf(doc, ringed.ring, palette);
       }
       write(row.text);

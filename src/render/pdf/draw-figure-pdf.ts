@@ -26,7 +26,13 @@ export interface FigurePlacement {
 }
 
 /** Draw one figure in `look` (from `lookOf`). */
-export function drawFigurePdf(doc: jsPDF, glyph: Glyph, look: PersonLook, placement: FigurePlacement, palette: ChartPalette): void {
+export function drawFigurePdf(
+  doc: jsPDF,
+  glyph: Glyph,
+  look: PersonLook,
+  placement: FigurePlacement,
+  palette: ChartPalette,
+): void {
   const trace = () => glyph.draw(new PdfPathContext(doc, placement.x, placement.y), placement.size);
   const style = palette.groups[look];
   doc.setFillColor(style.fill);

@@ -57,21 +57,28 @@ export function drawIconArrayPdf(
   const ringed: (typeof scaled.people)[number][] = [];
   for (const person of scaled.people) {
     const look = lookOf(person.group, wanted);
-    drawFigurePdf(doc, glyph, look, {
-      x: box.x + person.x,
-      y: box.y + person.y,
-      size: iconSize,
-      tileOriginX: box.x,
-      tileOriginY: box.y,
-      tile: patternTile,
-      lineWidth: cellSize * palette.outlineWidth,
-      cellSize,
-    }, palette);
+    drawFigurePdf(
+      doc,
+      glyph,
+      look,
+      {
+        x: box.x + person.x,
+        y: box.y + person.y,
+        size: iconSize,
+        tileOriginX: box.x,
+        tileOriginY: box.y,
+        tile: patternTile,
+        lineWidth: cellSize * palette.outlineWidth,
+        cellSize,
+      },
+      palette,
+    );
     drawn[person.group] += 1;
     looks[look] += 1;
     if (isUncertain(person.rank, options.uncertain ?? null)) ringed.push(person);
   }
   // Rings after every figure, so no neighbour is drawn over one.
-  for (const person of ringed) drawRingPdf(doc, rangeRing(box.x + person.x, box.y + person.y, iconSize, cellSize, palette), palette);
+  for (const person of ringed)
+    drawRingPdf(doc, rangeRing(box.x + person.x, box.y + person.y, iconSize, cellSize, palette), palette);
   return { height: scaled.geometry.height, drawn, looks, outlined: ringed.length };
 }

@@ -31,7 +31,14 @@ export class PdfPathContext implements PathContext {
   bezierCurveTo(control1X: number, control1Y: number, control2X: number, control2Y: number, x: number, y: number): void {
     if (this.#current === null) this.moveTo(control1X, control1Y);
     const { offsetX, offsetY } = this;
-    this.doc.curveTo(control1X + offsetX, control1Y + offsetY, control2X + offsetX, control2Y + offsetY, x + offsetX, y + offsetY);
+    this.doc.curveTo(
+      control1X + offsetX,
+      control1Y + offsetY,
+      control2X + offsetX,
+      control2Y + offsetY,
+      x + offsetX,
+      y + offsetY,
+    );
     this.#current = [x, y];
   }
 

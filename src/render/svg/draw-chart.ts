@@ -28,8 +28,18 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
   setRootAttributes(svgElement, model, frame, resolved);
   svg.append('title').text(model.description);
   const ids = patternIdsFor(resolved.idPrefix);
-  appendPatterns(svg, resolved.palette, ids, model.arrays[0] === undefined ? 1 : (frame.arrays[0]?.grid.layout.geometry.patternTile ?? 1));
-  svg.append('rect').attr('class', 'background').attr('width', svgNumber(frame.width)).attr('height', svgNumber(frame.height)).attr('fill', resolved.palette.background);
+  appendPatterns(
+    svg,
+    resolved.palette,
+    ids,
+    model.arrays[0] === undefined ? 1 : (frame.arrays[0]?.grid.layout.geometry.patternTile ?? 1),
+  );
+  svg
+    .append('rect')
+    .attr('class', 'background')
+    .attr('width', svgNumber(frame.width))
+    .attr('height', svgNumber(frame.height))
+    .attr('fill', resolved.palette.background);
   drawHeading(svg.append('g').attr('class', 'chart-heading').attr('aria-hidden', 'true'), frame, resolved);
   model.arrays.forEach((array, index) => {
     const placed = frame.arrays[index];
@@ -58,7 +68,12 @@ export function hasRangeOutline(array: ChartArray, options: ResolvedSvgChartOpti
 }
 
 /** Root attributes: size, the text alternative, and the options an update reuses. */
-export function setRootAttributes(svgElement: SVGSVGElement, model: ChartModel, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+export function setRootAttributes(
+  svgElement: SVGSVGElement,
+  model: ChartModel,
+  frame: ChartFrame,
+  options: ResolvedSvgChartOptions,
+): void {
   const attributes: readonly (readonly [string, string])[] = [
     ['viewBox', `0 0 ${svgNumber(frame.width)} ${svgNumber(frame.height)}`],
     ['width', svgNumber(frame.width)],
@@ -85,7 +100,11 @@ export function peopleTransform(placed: FrameArray): string {
 }
 
 /** The heading and the illustrative line. */
-export function drawHeading(group: Selection<SVGGElement, unknown, null, undefined>, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+export function drawHeading(
+  group: Selection<SVGGElement, unknown, null, undefined>,
+  frame: ChartFrame,
+  options: ResolvedSvgChartOptions,
+): void {
   appendText(group, frame.heading, options.palette, 'heading');
   if (frame.illustrative !== null) appendText(group, frame.illustrative, options.palette, 'illustrative');
 }

@@ -125,7 +125,8 @@ export function updatePeople(
     const element = elements[index];
     if (element === undefined) continue;
     const ownFill = look === INHERITED_LOOK ? null : paints[look].fill;
-    if (drawn === null && element.getAttribute('data-outcome') === personGroup && element.getAttribute('fill') === ownFill) continue;
+    if (drawn === null && element.getAttribute('data-outcome') === personGroup && element.getAttribute('fill') === ownFill)
+      continue;
     setChangedAttribute(element, 'data-outcome', personGroup);
     if (look === INHERITED_LOOK) clearPaint(element);
     else repaintPerson(element, paints[look]);

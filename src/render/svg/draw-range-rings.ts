@@ -42,6 +42,7 @@ export function drawRangeRings(group: SVGGElement, layout: IconArrayLayout, span
       element.setAttribute('data-index', String(person.index));
       return element;
     });
-  const same = rings.length === group.children.length && rings.every((ring, index) => group.children[index]?.isEqualNode(ring) === true);
+  const same =
+    rings.length === group.children.length && rings.every((ring, index) => group.children[index]?.isEqualNode(ring) === true);
   if (!same) group.replaceChildren(...rings);
 }

@@ -68,7 +68,13 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
     const people = group.querySelector<SVGGElement>(':scope > g.people');
     if (people === null) return;
     setChangedAttribute(people, 'transform', peopleTransform(placed));
-    peopleChanged += updatePeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
+    peopleChanged += updatePeople(
+      people,
+      placed.grid.layout,
+      personLooks(placed.grid.layout, model.wanted),
+      resolved.palette,
+      ids,
+    );
     const rings = group.querySelector<SVGGElement>(':scope > g.range-outline');
     if (rings !== null) {
       setChangedAttribute(rings, 'transform', peopleTransform(placed));
@@ -82,7 +88,10 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
  * Draw a group's content afresh off the page, then swap in only the children that differ,
  * so unchanged titles and swatches are not laid out again.
  */
-function replaceChangedChildren(group: SVGGElement, draw: (fresh: Selection<SVGGElement, unknown, null, undefined>) => void): void {
+function replaceChangedChildren(
+  group: SVGGElement,
+  draw: (fresh: Selection<SVGGElement, unknown, null, undefined>) => void,
+): void {
   const fresh = group.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
   draw(select(fresh));
   const before = [...group.children];

@@ -50,14 +50,18 @@ export function shortDecimal(value: number): string {
   const hundredths = Math.round(Number((value * 100).toPrecision(12)));
   const sign = hundredths < 0 ? '-' : '';
   const whole = Math.floor(Math.abs(hundredths) / 100);
-  const rest = String(Math.abs(hundredths) % 100).padStart(2, '0').replace(/0+$/, '');
+  const rest = String(Math.abs(hundredths) % 100)
+    .padStart(2, '0')
+    .replace(/0+$/, '');
   return `${sign}${whole}${rest === '' ? '' : `.${rest}`}`;
 }
 
 /** Outcome names starting with a verb in -ing ("dying of …") read "end up dying"; others "have a stroke". */
 const startsWithVerb = (outcome: string): boolean => /^[a-z]{2,}ing$/i.test(outcome.trim().split(/\s+/)[0] ?? '');
-const have = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'has', 'have'));
-const get = (outcome: string, count: number): string => (startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get'));
+const have = (outcome: string, count: number): string =>
+  startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'has', 'have');
+const get = (outcome: string, count: number): string =>
+  startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get');
 const missOut = (count: number): string => plural(count, 'misses out on', 'miss out on');
 
 /**
@@ -135,7 +139,8 @@ export const teachingMessagesEn = {
     changedBecause: (group: 'prevented' | 'caused', wanted: boolean, count: number, outcome: string, option: string) =>
       `${changedVerb(group, wanted, outcome, count)} ${outcome} because of ${option}`,
     anyway: (count: number) => `${plural(count, 'has', 'have')} it anyway`,
-    peopleLikeYou: (denominator: number, population: string) => `Each figure is one of ${denominator} people like you: ${population}.`,
+    peopleLikeYou: (denominator: number, population: string) =>
+      `Each figure is one of ${denominator} people like you: ${population}.`,
     outlined: 'Outlined: people who may or may not have it, depending on where in the range the truth lies.',
   },
 
@@ -187,8 +192,7 @@ export const teachingMessagesEn = {
     relativeDetail: (from: string, to: string, denominator: number) => `From ${from} to ${to} in ${denominator}`,
     relativeNone: 'No relative change at these numbers',
     absoluteLabel: 'Absolute',
-    absoluteValue: (count: number, denominator: number, direction: 'fewer' | 'more') =>
-      `${count} in ${denominator} ${direction}`,
+    absoluteValue: (count: number, denominator: number, direction: 'fewer' | 'more') => `${count} in ${denominator} ${direction}`,
     /** The subtraction the larger count first: "15 − 11 = 4 fewer in 100", "45 − 25 = 20 more in 100". */
     absoluteDetail: (larger: string, smaller: string, difference: string, denominator: number, direction: 'fewer' | 'more') =>
       `${larger} − ${smaller} = ${difference} ${direction} in ${denominator}`,
@@ -199,7 +203,9 @@ export const teachingMessagesEn = {
      * enough for one line of the card beside 100 people.
      */
     nntValue: (count: number, change: 'helps' | 'harms', wanted: boolean) =>
-      wanted ? `Treat ${count} for 1 ${change === 'helps' ? 'more' : 'fewer'}` : `Treat ${count} to ${change === 'helps' ? 'prevent' : 'cause'} 1`,
+      wanted
+        ? `Treat ${count} for 1 ${change === 'helps' ? 'more' : 'fewer'}`
+        : `Treat ${count} to ${change === 'helps' ? 'prevent' : 'cause'} 1`,
     /** A number needed to benefit is rounded up, one needed to harm down. */
     nntDetail: (denominator: number, difference: string, quotient: string, count: number, rounding: 'up' | 'down') =>
       `${denominator} ÷ ${difference} = ${quotient}, rounded ${rounding}: ${count}`,
@@ -221,7 +227,8 @@ export const teachingMessagesEn = {
    */
   evidence: {
     framing: {
-      finding: 'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
+      finding:
+        'Relative reductions looked bigger and swayed patients and clinicians more; absolute numbers were as clear or clearer, the NNT less.',
       source: 'Akl 2011, Cochrane · Zipkin 2014, Annals',
     },
     denominator: {
@@ -249,8 +256,7 @@ export const teachingMessagesEn = {
       `“${name}” is damaged at "${path}": expected ${expected}, found ${received}.`,
     emptyList: (name: string, path: string, what: 'topic' | 'step') =>
       `“${name}” is damaged at "${path}": expected at least one ${what}, found an empty list.`,
-    topicProblem: (name: string, item: number, path: string, detail: string) =>
-      `“${name}”, topic ${item} ("${path}"): ${detail}`,
+    topicProblem: (name: string, item: number, path: string, detail: string) => `“${name}”, topic ${item} ("${path}"): ${detail}`,
     topicNotComputed: (name: string, item: number, path: string, detail: string) =>
       `“${name}”, topic ${item} cannot be shown ("${path}"): ${detail}`,
     unknownOption: (name: string, path: string, value: string, known: string) =>

@@ -81,7 +81,13 @@ function effectFieldKey(draft: TopicDraft, outcomeId: string, effectIndex: numbe
   return effectKey(outcomeId, optionId);
 }
 
-const OUTCOME_PARTS: ReadonlySet<string> = new Set(['name', 'baseline.risk', 'baseline.periodYears', 'baseline.source', 'effects']);
+const OUTCOME_PARTS: ReadonlySet<string> = new Set([
+  'name',
+  'baseline.risk',
+  'baseline.periodYears',
+  'baseline.source',
+  'effects',
+]);
 
 function outcomeFieldKey(draft: TopicDraft, index: number, rest: string): string | null {
   const outcome = draft.outcomes[index];
@@ -92,19 +98,35 @@ function outcomeFieldKey(draft: TopicDraft, index: number, rest: string): string
   return outcomeKey(outcome.id, 'name');
 }
 
-
 /** Every field key in the order the editor shows the fields, top to bottom. */
 export function fieldOrder(draft: TopicDraft): string[] {
-  const order = ['title', 'population', 'periodYears', 'options', ...draft.options.map((option) => optionKey(option.id)), 'outcomes'];
+  const order = [
+    'title',
+    'population',
+    'periodYears',
+    'options',
+    ...draft.options.map((option) => optionKey(option.id)),
+    'outcomes',
+  ];
   const others = effectOptionIds(draft);
   for (const outcome of draft.outcomes) {
     order.push(outcomeKey(outcome.id, 'effects'), outcomeKey(outcome.id, 'name'));
-    order.push(outcomeKey(outcome.id, 'baseline.risk'), outcomeKey(outcome.id, 'baseline.periodYears'), outcomeKey(outcome.id, 'baseline.source'));
+    order.push(
+      outcomeKey(outcome.id, 'baseline.risk'),
+      outcomeKey(outcome.id, 'baseline.periodYears'),
+      outcomeKey(outcome.id, 'baseline.source'),
+    );
     for (const optionId of others) {
       order.push(effectKey(outcome.id, optionId), ...EFFECT_ORDER.map((part) => effectKey(outcome.id, optionId, part)));
     }
   }
-  order.push('evidence.summary', 'evidence.reviewed', 'clinician', 'questions', ...draft.questions.map((_, place) => `questions.${place}`));
+  order.push(
+    'evidence.summary',
+    'evidence.reviewed',
+    'clinician',
+    'questions',
+    ...draft.questions.map((_, place) => `questions.${place}`),
+  );
   return order;
 }
 

@@ -33,7 +33,10 @@ interface Reader {
 }
 
 const sameChoices = (first: TopicHandoutChoices, second: TopicHandoutChoices): boolean =>
-  first.showNnt === second.showNnt && first.per === second.per && first.outline === second.outline && first.paper === second.paper;
+  first.showNnt === second.showNnt &&
+  first.per === second.per &&
+  first.outline === second.outline &&
+  first.paper === second.paper;
 
 function readNumber(reader: Reader, text: string, field: string, what: string, example: string): number {
   if (text.trim() === '') {
@@ -66,8 +69,6 @@ function unitField<Name extends string>(name: Name, unit: TimeUnit): Partial<Rec
 
 /** `opposite: true` when the effect was given for the opposite event; nothing otherwise. */
 const oppositeField = (draft: EffectDraft): { opposite?: true } => (draft.opposite ? { opposite: true } : {});
-
-
 
 function readEntered(reader: Reader, draft: EffectDraft, field: string): Effect {
   const measure = draft.measure === 'counts' ? 'rr' : draft.measure;
@@ -141,7 +142,13 @@ function readOutcome(reader: Reader, draft: OutcomeDraft, index: number, effectO
     isHeadline: draft.isHeadline,
     baseline: {
       risk: draft.baselineRisk.trim() === '' ? null : draft.baselineRisk,
-      periodYears: readPeriod(reader, draft.baselinePeriodYears, draft.baselinePeriodUnit, `${field}.baseline.periodYears`, 'period of the baseline risk'),
+      periodYears: readPeriod(
+        reader,
+        draft.baselinePeriodYears,
+        draft.baselinePeriodUnit,
+        `${field}.baseline.periodYears`,
+        'period of the baseline risk',
+      ),
       ...unitField('periodUnit', draft.baselinePeriodUnit),
       source: draft.baselineSource,
     },

@@ -3,46 +3,29 @@
  * prints at the same width at 300 dpi, drawn from that SVG on a canvas in the browser.
  */
 import type { ChartModel } from '../../render/chart-model.ts';
+import { type ChartExportOptions, EXPORT_WIDTH_MM, exportDrawing } from '../../render/export/chart-svg-file.ts';
 import { pngDimensionsForPrint } from '../../render/export/print-size.ts';
-import { svgForExport } from '../../render/export/svg-for-export.ts';
 import { chartSvgString } from '../../render/svg/chart-svg-string.ts';
 import { withPrintResolution } from './png-density.ts';
 import { svgTextToPng } from './svg-to-png.ts';
 
-export const EXPORT_WIDTH_MM = 180;
+export { type ChartExportOptions, chartSvgFile } from '../../render/export/chart-svg-file.ts';
 export const EXPORT_DPI = 300;
-/** The width, in CSS pixels, the exported chart is laid out at (its text wraps for this width). */
-const LAYOUT_WIDTH = 720;
-
-/** What an exported chart shows besides its people: the range outline, when it is on screen. */
-export interface ChartExportOptions {
-  readonly showRange?: boolean;
-}
-
-const drawing = (model: ChartModel, options: ChartExportOptions) => ({
-  width: LAYOUT_WIDTH,
-  idPrefix: `export-${model.id}`,
-  showRange: options.showRange === true,
-});
-
-/** The chart as a standalone SVG file's text. */
-export function chartSvgFile(model: ChartModel, document: Document, options: ChartExportOptions = {}): string {
-  return svgForExport(chartSvgString(model, document, drawing(model, options)), {
-    widthMm: EXPORT_WIDTH_MM,
-  });
-}
 
 /** Width and height of the SVG's view box. */
 function viewBoxSize(svgText: string): { width: number; height: number } {
   const found = /viewBox="([^"]*)"/.exec(svgText);
-  const [, , width, height] = (found?.[1] ?? '').trim().split(/[\s,]+/).map(Number);
+  const [, , width, height] = (found?.[1] ?? '')
+    .trim()
+    .split(/[\s,]+/)
+    .map(Number);
   if (width === undefined || height === undefined || !(width > 0) || !(height > 0)) throw new RangeError('chart has no view box');
   return { width, height };
 }
 
 /** The chart as PNG bytes that print 180 mm wide at 300 dpi (2126 pixels wide). */
 export async function chartPngFile(model: ChartModel, document: Document, options: ChartExportOptions = {}): Promise<Uint8Array> {
-  const svgText = chartSvgString(model, document, drawing(model, options));
+  const svgText = chartSvgString(model, document, exportDrawing(model, options));
   const size = viewBoxSize(svgText);
   const pixels = pngDimensionsForPrint(size, EXPORT_WIDTH_MM, EXPORT_DPI);
   // Size the image itself at the target pixels, so the vector drawing is rasterised sharp.

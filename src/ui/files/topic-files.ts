@@ -42,6 +42,7 @@ export function topicFileText(draft: TopicDraft, includePatient: boolean): Saved
 /** A file name for a draft: the file it came from, or its decision in plain letters, ending in .cwtopic. */
 export function suggestedFileName(draft: TopicDraft, currentName: string | null): string {
   if (currentName !== null && currentName.endsWith(TOPIC_FILE_SUFFIX)) return currentName;
-  if (currentName !== null && currentName.endsWith('.json')) return currentName.replace(/(\.chancewise)?\.json$/, TOPIC_FILE_SUFFIX);
+  if (currentName !== null && currentName.endsWith('.json'))
+    return currentName.replace(/(\.chancewise)?\.json$/, TOPIC_FILE_SUFFIX);
   return `${plainFileStem(draft.title, 8, 'topic')}${TOPIC_FILE_SUFFIX}`;
 }

@@ -20,7 +20,9 @@ async function fontBytes(url: string): Promise<Uint8Array> {
 }
 
 function loadFonts(): Promise<HandoutFonts> {
-  fonts ??= Promise.all([fontBytes(regularFontUrl), fontBytes(boldFontUrl)]).then(([regular, bold]) => handoutFonts({ regular, bold }));
+  fonts ??= Promise.all([fontBytes(regularFontUrl), fontBytes(boldFontUrl)]).then(([regular, bold]) =>
+    handoutFonts({ regular, bold }),
+  );
   // A failed read may succeed later (a file briefly unavailable); do not keep the failure.
   fonts.catch(() => {
     fonts = null;

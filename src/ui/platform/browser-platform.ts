@@ -67,7 +67,8 @@ export function browserPlatform(): Platform {
     pickTextFile,
     saveFile: async (suggestedName, contents, type) => download(suggestedName, contents, type),
     saveHandout: async (suggestedName, pdf) => download(suggestedName, pdf, 'application/pdf'),
-    printHandout: async (suggestedName, make) => ((await printInNewTab(make, window as unknown as TabOpener)) ? suggestedName : null),
+    printHandout: async (suggestedName, make) =>
+      (await printInNewTab(make, window as unknown as TabOpener)) ? suggestedName : null,
     topicReplaced: () => undefined,
     snapshot: () => undefined,
     connect: () => undefined,

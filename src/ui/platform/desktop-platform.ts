@@ -30,7 +30,8 @@ export function desktopPlatform(shell: ChancewiseShellApi): Platform {
     // The page's own file input, and downloads of its own blob addresses, which the shell allows.
     pickTextFile,
     saveFile: async (suggestedName, contents, type) => download(suggestedName, contents, type),
-    saveHandout: async (suggestedName, pdf) => (await value(shell.exportHandoutPdf({ bytes: pdf, suggestedName })))?.fileName ?? null,
+    saveHandout: async (suggestedName, pdf) =>
+      (await value(shell.exportHandoutPdf({ bytes: pdf, suggestedName })))?.fileName ?? null,
     printHandout: async (suggestedName, make) => {
       const pdf = await make();
       return pdf === null ? null : (await value(shell.printHandout({ bytes: pdf, suggestedName }))).fileName;

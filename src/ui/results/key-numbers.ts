@@ -148,7 +148,10 @@ function row(option: OptionOutcomeResult, denominator: number): KeyNumberRow {
     optionId: option.optionId,
     name: option.name,
     isComparison: option.isComparison,
-    people: { value: formatCount(count), range: range === null ? null : `${formatCount(range.lower)} to ${formatCount(range.upper)}` },
+    people: {
+      value: formatCount(count),
+      range: range === null ? null : `${formatCount(range.lower)} to ${formatCount(range.upper)}`,
+    },
     change: option.isComparison ? null : changeText(option, denominator),
     risk: riskText(option),
     nnt: option.isComparison ? null : splitNntText(option.nnt.text),

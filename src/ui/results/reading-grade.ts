@@ -35,11 +35,14 @@ function countsOf(sentence: string): TextCounts {
 export function patientReadingGrade(result: TopicResult): ReadingGrade {
   const total = handoutSentences(result, { showNnt: false })
     .map((sentence) => countsOf(sentence.text))
-    .reduce((sum, counts) => ({
-      sentences: sum.sentences + counts.sentences,
-      words: sum.words + counts.words,
-      syllables: sum.syllables + counts.syllables,
-    }), { sentences: 0, words: 0, syllables: 0 });
+    .reduce(
+      (sum, counts) => ({
+        sentences: sum.sentences + counts.sentences,
+        words: sum.words + counts.words,
+        syllables: sum.syllables + counts.syllables,
+      }),
+      { sentences: 0, words: 0, syllables: 0 },
+    );
   const grade = fleschKincaidGrade(total);
   const rounded = grade === null ? null : Math.round(grade * 10) / 10;
   return { grade: rounded, limit: READING_GRADE_LIMIT, withinLimit: rounded !== null && rounded <= READING_GRADE_LIMIT };

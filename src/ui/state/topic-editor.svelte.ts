@@ -186,7 +186,8 @@ export class TopicEditor {
     const { per } = draft.handout;
     const check = checkDraft(draft, { per });
     if (check.result !== null) this.#lastValidDraft = draft;
-    const fallback = check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per }).result : null;
+    const fallback =
+      check.result === null && this.#lastValidDraft !== null ? checkDraft(this.#lastValidDraft, { per }).result : null;
     this.draft = draft;
     this.check = check;
     this.shown = check.result ?? fallback;

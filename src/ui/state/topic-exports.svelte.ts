@@ -17,7 +17,6 @@ export interface HandoutChoices {
   readonly showNnt: boolean;
 }
 
-
 export interface TopicExportsOptions {
   readonly editor: TopicEditor;
   readonly platform: Platform;
@@ -96,7 +95,8 @@ export class TopicExports {
       const name = exportFileName(this.#topicPart(), 'handout', 'pdf');
       const shown = await platform.printHandout(name, () => this.#make(this.#choices()));
       if (shown !== null) {
-        const where = platform.kind === 'browser' ? 'in a new tab: print it from there (Ctrl+P)' : 'in your PDF viewer: print it from there';
+        const where =
+          platform.kind === 'browser' ? 'in a new tab: print it from there (Ctrl+P)' : 'in your PDF viewer: print it from there';
         messages.show({ tone: 'info', text: `The handout “${shown}” is open ${where}.` });
       }
     } catch (error) {

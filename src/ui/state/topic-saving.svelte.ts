@@ -67,7 +67,10 @@ export class TopicSaving {
       editor.markSaved(saved);
       this.#document.remember(saved);
       const where = this.#platform.kind === 'browser' ? ' Your browser puts it in its downloads folder.' : '';
-      this.#messages.show({ tone: 'info', text: `Saved “${saved}”${includePatient ? ', with the patient’s details' : ''}.${where}` });
+      this.#messages.show({
+        tone: 'info',
+        text: `Saved “${saved}”${includePatient ? ', with the patient’s details' : ''}.${where}`,
+      });
     } catch (error) {
       this.#messages.fail('The topic was not saved: ', error, ' Your work is still here.');
     }

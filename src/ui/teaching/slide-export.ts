@@ -21,5 +21,10 @@ export function slideSvgFile(slide: Slide, document: Document, footer: string, i
 
 /** The slide as PNG bytes, 1920 × 1080 pixels. */
 export function slidePngFile(slide: Slide, document: Document, footer: string, illustrative: string): Promise<Uint8Array> {
-  return svgTextToPng(slideSvgText(slide, document, footer, illustrative), document, { width: SLIDE_WIDTH, height: SLIDE_HEIGHT }, 'slide');
+  return svgTextToPng(
+    slideSvgText(slide, document, footer, illustrative),
+    document,
+    { width: SLIDE_WIDTH, height: SLIDE_HEIGHT },
+    'slide',
+  );
 }

@@ -58,7 +58,9 @@ export class TeachingPresenter {
     this.words = options.messages ?? teachingMessagesEn;
     const first = presentationItem(options.topic, { option: null, harm: null, per: options.per, steps: DEFAULT_STEPS });
     this.session = new TeachingSession(options.topic.title, first.ok ? [first.item] : [], this.words);
-    this.problem = first.ok ? null : this.words.view.cannotPresent(first.problem.kind === 'not-computed' ? first.problem.detail : first.problem.kind);
+    this.problem = first.ok
+      ? null
+      : this.words.view.cannotPresent(first.problem.kind === 'not-computed' ? first.problem.detail : first.problem.kind);
   }
 
   /** How many topics the presentation has. */
@@ -69,7 +71,9 @@ export class TeachingPresenter {
   /** Where the presenter is, in words, for the live region and the saved slide's footer. */
   get progressLabel(): string {
     const { session } = this;
-    return session.place === null ? '' : this.words.view.progressLabel(session.index + 1, session.total, session.place.item + 1, this.topics);
+    return session.place === null
+      ? ''
+      : this.words.view.progressLabel(session.index + 1, session.total, session.place.item + 1, this.topics);
   }
 
   get announcement(): string {
@@ -129,8 +133,16 @@ export class TeachingPresenter {
       const footer = this.progressLabel;
       const saved =
         format === 'svg'
-          ? await this.#options.platform.saveFile(name, slideSvgFile(slide, document, footer, words.view.illustrativeLong), 'image/svg+xml')
-          : await this.#options.platform.saveFile(name, await slidePngFile(slide, document, footer, words.view.illustrativeLong), 'image/png');
+          ? await this.#options.platform.saveFile(
+              name,
+              slideSvgFile(slide, document, footer, words.view.illustrativeLong),
+              'image/svg+xml',
+            )
+          : await this.#options.platform.saveFile(
+              name,
+              await slidePngFile(slide, document, footer, words.view.illustrativeLong),
+              'image/png',
+            );
       if (saved !== null) this.message = { tone: 'info', text: words.view.exported(saved) };
     } catch (error) {
       this.message = { tone: 'error', text: words.view.exportFailed(error instanceof Error ? error.message : String(error)) };

@@ -27,7 +27,9 @@ export class TeachingSession {
   readonly places = $derived(slidePlaces(this.items));
   readonly place = $derived<SlidePlace | null>(this.places[this.index] ?? null);
   readonly item = $derived<PresentationItem | null>(this.place === null ? null : (this.items[this.place.item] ?? null));
-  readonly slide = $derived<Slide | null>(this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages, this.place.part));
+  readonly slide = $derived<Slide | null>(
+    this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages, this.place.part),
+  );
 
   constructor(title: string, items: readonly PresentationItem[], messages: TeachingMessages = teachingMessagesEn) {
     this.messages = messages;

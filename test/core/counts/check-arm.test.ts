@@ -18,9 +18,7 @@ describe('checkArm', () => {
       values: { input: '2.5/10' },
     });
     expect(problemOf(() => checkArm({ events: 2, total: 10.1 }, 'comparison')).code).toBe('counts-not-whole');
-    expect(problemOf(() => checkArm({ events: Number.NaN, total: 10 }, 'comparison')).code).toBe(
-      'counts-not-whole',
-    );
+    expect(problemOf(() => checkArm({ events: Number.NaN, total: 10 }, 'comparison')).code).toBe('counts-not-whole');
     expect(problemOf(() => checkArm({ events: 1, total: Infinity }, 'comparison')).code).toBe('counts-not-whole');
   });
 

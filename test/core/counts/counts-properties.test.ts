@@ -9,9 +9,7 @@ import type { Estimate } from '../../../src/core/types.ts';
 
 /** A valid arm of up to `maximumTotal` people, with events spread evenly over 0…total. */
 const arm = (maximumTotal: number) =>
-  fc
-    .tuple(fc.integer({ min: 1, max: maximumTotal }), fc.nat())
-    .map(([total, draw]) => ({ events: draw % (total + 1), total }));
+  fc.tuple(fc.integer({ min: 1, max: maximumTotal }), fc.nat()).map(([total, draw]) => ({ events: draw % (total + 1), total }));
 
 const level = fc.double({ min: 0.5, max: 0.999, noNaN: true }).filter((value) => value > 0.5);
 const method = fc.constantFrom('newcombe' as const, 'wald' as const);
@@ -34,20 +32,15 @@ const probability = (value: number | null | undefined): boolean =>
 
 const holds = (found: CountsAnalysis): boolean =>
   numbersIn(found).every(Number.isFinite) &&
-  [found.interventionRisk, found.comparisonRisk, found.relativeRisk, found.oddsRatio, found.riskDifference].every(
-    ordered,
-  ) &&
-  [found.interventionRisk, found.comparisonRisk].every(
-    (risk) => risk.lower >= 0 && risk.upper <= 1,
-  ) &&
+  [found.interventionRisk, found.comparisonRisk, found.relativeRisk, found.oddsRatio, found.riskDifference].every(ordered) &&
+  [found.interventionRisk, found.comparisonRisk].every((risk) => risk.lower >= 0 && risk.upper <= 1) &&
   found.riskDifference.lower >= -1 &&
   found.riskDifference.upper <= 1 &&
   [found.chiSquare?.p, found.chiSquareYates?.p, found.fisherExactP].every(probability) &&
   (found.relativeRisk === null || found.relativeRisk.lower > 0) &&
   (found.cramersV === null || (found.cramersV >= 0 && found.cramersV <= 1));
 
-const close = (first: number, second: number, tolerance: number): boolean =>
-  Math.abs(first - second) <= tolerance;
+const close = (first: number, second: number, tolerance: number): boolean => Math.abs(first - second) <= tolerance;
 
 describe('analyseCounts on random valid arms', () => {
   it('keeps every estimate inside its interval, proportions and p-values in [0, 1], and no NaN', () => {

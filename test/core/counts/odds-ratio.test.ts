@@ -83,11 +83,7 @@ describe('oddsRatio', () => {
   });
 
   it('rejects invalid arms and levels', () => {
-    expect(problemOf(() => oddsRatio({ events: 1, total: 0 }, { events: 1, total: 4 })).code).toBe(
-      'counts-total-zero',
-    );
-    expect(problemOf(() => oddsRatio({ events: 1, total: 4 }, { events: 1, total: 4 }, 1.5)).code).toBe(
-      'level-out-of-range',
-    );
+    expect(problemOf(() => oddsRatio({ events: 1, total: 0 }, { events: 1, total: 4 })).code).toBe('counts-total-zero');
+    expect(problemOf(() => oddsRatio({ events: 1, total: 4 }, { events: 1, total: 4 }, 1.5)).code).toBe('level-out-of-range');
   });
 });

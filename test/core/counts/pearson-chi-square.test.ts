@@ -50,8 +50,6 @@ describe('pearsonChiSquare', () => {
   });
 
   it('rejects invalid arms', () => {
-    expect(problemOf(() => pearsonChiSquare({ events: 0, total: 0 }, { events: 0, total: 9 })).code).toBe(
-      'counts-total-zero',
-    );
+    expect(problemOf(() => pearsonChiSquare({ events: 0, total: 0 }, { events: 0, total: 9 })).code).toBe('counts-total-zero');
   });
 });

@@ -30,10 +30,7 @@ describe('phiCoefficient', () => {
     // → 0.142731760206081.
     const optionFirst = phiCoefficient({ events: 557, total: 1835 }, { events: 1198, total: 2691 });
     expect(optionFirst).toBeCloseTo(-0.142731760206081, 12);
-    expect(phiCoefficient({ events: 1198, total: 2691 }, { events: 557, total: 1835 })).toBeCloseTo(
-      -(optionFirst ?? 0),
-      14,
-    );
+    expect(phiCoefficient({ events: 1198, total: 2691 }, { events: 557, total: 1835 })).toBeCloseTo(-(optionFirst ?? 0), 14);
   });
 
   it('reaches ±1 for a perfectly separated table', () => {
@@ -47,9 +44,7 @@ describe('phiCoefficient', () => {
   });
 
   it('rejects invalid arms', () => {
-    expect(problemOf(() => phiCoefficient({ events: -2, total: 5 }, { events: 0, total: 7 })).code).toBe(
-      'counts-negative',
-    );
+    expect(problemOf(() => phiCoefficient({ events: -2, total: 5 }, { events: 0, total: 7 })).code).toBe('counts-negative');
   });
 });
 

@@ -29,7 +29,10 @@ describe('a rare event with a zero cell: 0/1515 against 100/108,000', () => {
   });
 
   it('writes an NNT whose interval crosses no effect, benefit end first, and never "no difference"', () => {
-    const result = computeEffect({ baseline: null, effect: { measure: 'counts', intervention: { events: 0, total: 1515 }, comparison: { events: 100, total: 108000 } } });
+    const result = computeEffect({
+      baseline: null,
+      effect: { measure: 'counts', intervention: { events: 0, total: 1515 }, comparison: { events: 100, total: 108000 } },
+    });
     // 1/0.000925926 = 1080 exactly; 1/0.0011259 = 888.2 → NNTB 889 (up); 1/0.0016086 = 621.7 → NNTH 621 (down).
     expect(result.nnt.text).toBe('NNTB 1080 (NNTB 889 to ∞ to NNTH 621)');
     expect(result.wordsPeople).toMatchObject({ denominator: 1000, comparison: 1, intervention: 0, difference: 1 });

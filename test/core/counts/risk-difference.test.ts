@@ -28,11 +28,35 @@ const tableTwo: ReadonlyArray<{
   readonly wald?: readonly [number, number];
 }> = [
   // Rows (a) and (b): as published, read in secondary text quoting Table II.
-  { label: '(a) 56/70 − 48/80', first: { events: 56, total: 70 }, second: { events: 48, total: 80 }, newcombe: [0.0524, 0.3339], wald: [0.0575, 0.3425] },
-  { label: '(b) 9/10 − 3/10', first: { events: 9, total: 10 }, second: { events: 3, total: 10 }, newcombe: [0.1705, 0.809], wald: [0.2605, 0.9395] },
+  {
+    label: '(a) 56/70 − 48/80',
+    first: { events: 56, total: 70 },
+    second: { events: 48, total: 80 },
+    newcombe: [0.0524, 0.3339],
+    wald: [0.0575, 0.3425],
+  },
+  {
+    label: '(b) 9/10 − 3/10',
+    first: { events: 9, total: 10 },
+    second: { events: 3, total: 10 },
+    newcombe: [0.1705, 0.809],
+    wald: [0.2605, 0.9395],
+  },
   // Rows (c) to (h): from memory, and recomputed with SciPy as above.
-  { label: '(c) 6/7 − 2/7', first: { events: 6, total: 7 }, second: { events: 2, total: 7 }, newcombe: [0.0582, 0.8062], wald: [0.1481, 0.9947] },
-  { label: '(d) 5/56 − 0/29', first: { events: 5, total: 56 }, second: { events: 0, total: 29 }, newcombe: [-0.0381, 0.1926], wald: [0.0146, 0.164] },
+  {
+    label: '(c) 6/7 − 2/7',
+    first: { events: 6, total: 7 },
+    second: { events: 2, total: 7 },
+    newcombe: [0.0582, 0.8062],
+    wald: [0.1481, 0.9947],
+  },
+  {
+    label: '(d) 5/56 − 0/29',
+    first: { events: 5, total: 56 },
+    second: { events: 0, total: 29 },
+    newcombe: [-0.0381, 0.1926],
+    wald: [0.0146, 0.164],
+  },
   { label: '(e) 0/10 − 0/20', first: { events: 0, total: 10 }, second: { events: 0, total: 20 }, newcombe: [-0.1611, 0.2775] },
   { label: '(f) 0/10 − 0/10', first: { events: 0, total: 10 }, second: { events: 0, total: 10 }, newcombe: [-0.2775, 0.2775] },
   { label: '(g) 10/10 − 0/20', first: { events: 10, total: 10 }, second: { events: 0, total: 20 }, newcombe: [0.6791, 1] },

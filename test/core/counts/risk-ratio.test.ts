@@ -59,7 +59,10 @@ describe('riskRatio', () => {
   });
 
   it('widens from the 90% to the 95% to the 99% level around the same estimate', () => {
-    const arms = [{ events: 2, total: 16 }, { events: 33, total: 91 }] as const;
+    const arms = [
+      { events: 2, total: 16 },
+      { events: 33, total: 91 },
+    ] as const;
     const at90 = riskRatio(...arms, 0.9);
     const at95 = riskRatio(...arms);
     const at99 = riskRatio(...arms, 0.99);
@@ -87,14 +90,8 @@ describe('riskRatio', () => {
   });
 
   it('rejects invalid arms with the arm named, and an invalid level', () => {
-    expect(problemOf(() => riskRatio({ events: 5, total: 4 }, { events: 1, total: 4 })).field).toBe(
-      'intervention',
-    );
-    expect(problemOf(() => riskRatio({ events: 1, total: 4 }, { events: -1, total: 4 })).field).toBe(
-      'comparison',
-    );
-    expect(problemOf(() => riskRatio({ events: 0, total: 4 }, { events: 0, total: 4 }, 0.2)).code).toBe(
-      'level-out-of-range',
-    );
+    expect(problemOf(() => riskRatio({ events: 5, total: 4 }, { events: 1, total: 4 })).field).toBe('intervention');
+    expect(problemOf(() => riskRatio({ events: 1, total: 4 }, { events: -1, total: 4 })).field).toBe('comparison');
+    expect(problemOf(() => riskRatio({ events: 0, total: 4 }, { events: 0, total: 4 }, 0.2)).code).toBe('level-out-of-range');
   });
 });

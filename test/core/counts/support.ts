@@ -12,5 +12,4 @@ export function problemOf(action: () => unknown): Problem {
 }
 
 /** Round to 4 decimals, the precision of the published tables compared against. */
-export const round4 = (value: number | null): number | null =>
-  value === null ? null : Math.round(value * 1e4) / 1e4;
+export const round4 = (value: number | null): number | null => (value === null ? null : Math.round(value * 1e4) / 1e4);

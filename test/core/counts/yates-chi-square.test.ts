@@ -66,8 +66,6 @@ describe('yatesChiSquare', () => {
   });
 
   it('rejects invalid arms', () => {
-    expect(problemOf(() => yatesChiSquare({ events: 1.5, total: 4 }, { events: 0, total: 9 })).code).toBe(
-      'counts-not-whole',
-    );
+    expect(problemOf(() => yatesChiSquare({ events: 1.5, total: 4 }, { events: 0, total: 9 })).code).toBe('counts-not-whole');
   });
 });

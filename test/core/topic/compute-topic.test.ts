@@ -47,24 +47,27 @@ describe('computeTopic on the demo topics', () => {
     }
   });
 
-  it.each([STONE, SCREENING, FRACTURE])('lists the options of %s in the topic’s order, the comparison as a plain baseline', (name) => {
-    const topic = demo(name);
-    const result = computeTopic(topic);
-    for (const outcome of result.outcomes) {
-      expect(outcome.options.map((option) => option.optionId)).toEqual(topic.options.map((option) => option.id));
-      const comparison = outcome.options.find((option) => option.isComparison);
-      expect(comparison).toBeDefined();
-      if (comparison === undefined) continue;
-      expect(comparison.comparisonRisk.estimate).toBe(outcome.baselineRisk);
-      expect(comparison.interventionRisk.estimate).toBe(outcome.baselineRisk);
-      expect(comparison.relativeRisk).toEqual({ estimate: 1, lower: null, upper: null });
-      expect(comparison.absoluteReduction).toEqual({ estimate: 0, lower: null, upper: null });
-      expect(comparison.nnt).toMatchObject({ estimate: null, rounded: null, label: null });
-      expect(comparison.groups.prevented + comparison.groups.caused).toBe(0);
-      expect(comparison.certainty).toBeNull();
-      for (const option of outcome.options) expect(option.comparisonRisk.estimate).toBeCloseTo(outcome.baselineRisk, 12);
-    }
-  });
+  it.each([STONE, SCREENING, FRACTURE])(
+    'lists the options of %s in the topic’s order, the comparison as a plain baseline',
+    (name) => {
+      const topic = demo(name);
+      const result = computeTopic(topic);
+      for (const outcome of result.outcomes) {
+        expect(outcome.options.map((option) => option.optionId)).toEqual(topic.options.map((option) => option.id));
+        const comparison = outcome.options.find((option) => option.isComparison);
+        expect(comparison).toBeDefined();
+        if (comparison === undefined) continue;
+        expect(comparison.comparisonRisk.estimate).toBe(outcome.baselineRisk);
+        expect(comparison.interventionRisk.estimate).toBe(outcome.baselineRisk);
+        expect(comparison.relativeRisk).toEqual({ estimate: 1, lower: null, upper: null });
+        expect(comparison.absoluteReduction).toEqual({ estimate: 0, lower: null, upper: null });
+        expect(comparison.nnt).toMatchObject({ estimate: null, rounded: null, label: null });
+        expect(comparison.groups.prevented + comparison.groups.caused).toBe(0);
+        expect(comparison.certainty).toBeNull();
+        for (const option of outcome.options) expect(option.comparisonRisk.estimate).toBeCloseTo(outcome.baselineRisk, 12);
+      }
+    },
+  );
 
   it('computes the kidney stone demo’s numbers for each option', () => {
     const result = computeTopic(demo(STONE));
@@ -116,7 +119,9 @@ describe('computeTopic on the demo topics', () => {
     const result = computeTopic(demo(SCREENING));
     const beyond = result.notices.filter((found) => found.code === 'period-beyond-followup');
     expect(beyond).toEqual([
-      { code: 'period-beyond-followup', values: {
+      {
+        code: 'period-beyond-followup',
+        values: {
           period: 15,
           periodUnit: 'years',
           followup: 12,
@@ -168,7 +173,9 @@ describe('computeTopic on the demo topics', () => {
     const result = computeTopic(changed);
     // 9.1% over 3 years → 1 − 0.909² = 17.37% over 6 years (constant hazard).
     expect(result.outcomes[0]?.baselineRisk).toBeCloseTo(1 - 0.909 ** 2, 12);
-    expect(codes(result)).toEqual(expect.arrayContaining(['baseline-period-converted', 'counts-baseline-from-trial', 'period-beyond-followup']));
+    expect(codes(result)).toEqual(
+      expect.arrayContaining(['baseline-period-converted', 'counts-baseline-from-trial', 'period-beyond-followup']),
+    );
   });
 });
 

@@ -35,7 +35,10 @@ describe('expectedAt', () => {
   });
 
   it('follows the measure to the right kind of effect', () => {
-    const counts = [...steps('topic', 'outcomes', 0, 'effects', 0, 'effect'), { key: 'intervention', input: { measure: 'counts' } }];
+    const counts = [
+      ...steps('topic', 'outcomes', 0, 'effects', 0, 'effect'),
+      { key: 'intervention', input: { measure: 'counts' } },
+    ];
     expect(expectedAt(root, counts)).toBe('a group of fields (events, total)');
     const events = [...counts, { key: 'events', input: {} }];
     expect(expectedAt(root, events)).toBe('a whole number');
@@ -49,7 +52,9 @@ describe('expectedAt', () => {
   });
 
   it('reads records and unions of its own schemas', () => {
-    const schema = v.object({ byId: v.record(v.string(), v.union([v.literal(1), v.literal(2), v.literal(3)])) }) as unknown as SchemaNode;
+    const schema = v.object({
+      byId: v.record(v.string(), v.union([v.literal(1), v.literal(2), v.literal(3)])),
+    }) as unknown as SchemaNode;
     expect(expectedAt(schema, steps('byId'))).toBe('a group of fields');
     expect(expectedAt(schema, steps('byId', 'any'))).toBe('one of 1, 2 or 3');
   });

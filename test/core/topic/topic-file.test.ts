@@ -12,7 +12,11 @@ import * as v from 'valibot';
 // follow from that schema and from the rule that patient details stay out of files unless asked.
 
 const fixture = (path: string): string => readFileSync(new URL(`../../../${path}`, import.meta.url), 'utf8');
-const DEMOS = ['assets/demo/01-kidney-stone.json', 'assets/demo/02-bowel-screening.json', 'assets/demo/03-fracture-medicine.json'];
+const DEMOS = [
+  'assets/demo/01-kidney-stone.json',
+  'assets/demo/02-bowel-screening.json',
+  'assets/demo/03-fracture-medicine.json',
+];
 const VERSION_1 = 'test/fixtures/topics/version-1-blood-pressure.json';
 
 function topicOf(text: string): Topic {
@@ -60,14 +64,18 @@ describe('writing and reading a topic file', () => {
   });
 
   it('fills in what a file may leave out: importance, clinician and patient', () => {
-    const data = JSON.parse(fixture(DEMOS[0] ?? '')) as { topic: Record<string, unknown> & { outcomes: { effects: Record<string, unknown>[] }[] } };
+    const data = JSON.parse(fixture(DEMOS[0] ?? '')) as {
+      topic: Record<string, unknown> & { outcomes: { effects: Record<string, unknown>[] }[] };
+    };
     delete data.topic.clinician;
     delete data.topic.patient;
     for (const outcome of data.topic.outcomes) for (const entry of outcome.effects) delete entry.importance;
     const topic = topicOf(JSON.stringify(data));
     expect(topic.clinician).toBe('');
     expect(topic.patient).toBeNull();
-    expect(topic.outcomes.flatMap((outcome) => outcome.effects.map((entry) => entry.importance))).toEqual(Array(6).fill('important'));
+    expect(topic.outcomes.flatMap((outcome) => outcome.effects.map((entry) => entry.importance))).toEqual(
+      Array(6).fill('important'),
+    );
   });
 
   it('reads a file that starts with a byte-order mark, as some editors save them', () => {
@@ -162,7 +170,9 @@ describe('reading a version 1 file', () => {
   it('names the first wrong field of a damaged version 1 file in its own layout', () => {
     const data = JSON.parse(fixture(VERSION_1)) as Record<string, unknown>;
     data.years = '5';
-    expect(refusal(JSON.stringify(data)).message).toBe('This topic file is damaged at "years": expected a number, found the text "5".');
+    expect(refusal(JSON.stringify(data)).message).toBe(
+      'This topic file is damaged at "years": expected a number, found the text "5".',
+    );
     const effect = JSON.parse(fixture(VERSION_1)) as { outcomes: { effects: Record<string, { certainty: unknown }> }[] };
     const entry = effect.outcomes[0]?.effects.tablet;
     if (entry !== undefined) entry.certainty = 'sure';
@@ -201,50 +211,356 @@ const NOT_A_TOPIC = 'This file is not a Chancewise topic (its format is "none").
 
 /** [what is damaged, the file text, the field, the whole message]. */
 const damagedFiles: readonly [string, string, string, string][] = [
-  ['a title that is a number', damaged((d) => { d.topic.title = 5; }), 'topic.title', at('topic.title', 'text', 'the number 5')],
-  ['a missing title', damaged((d) => { delete d.topic.title; }), 'topic.title', at('topic.title', 'text', 'nothing')],
-  ['a period written as text', damaged((d) => { d.topic.periodYears = '10'; }), 'topic.periodYears', at('topic.periodYears', 'a number', 'the text "10"')],
-  ['a period of null', damaged((d) => { d.topic.periodYears = null; }), 'topic.periodYears', at('topic.periodYears', 'a number', 'null')],
-  ['an illustrative flag written as text', damaged((d) => { d.topic.illustrative = 'yes'; }), 'topic.illustrative', at('topic.illustrative', 'true or false', 'the text "yes"')],
-  ['options given as a group instead of a list', damaged((d) => { d.topic.options = {}; }), 'topic.options', at('topic.options', 'a list', 'a group of fields')],
-  ['an option without its id', damaged((d) => { delete d.topic.options[1].id; }), 'topic.options.1.id', at('topic.options.1.id', 'text', 'nothing')],
-  ['a comparison flag written as text', damaged((d) => { d.topic.options[0].isComparison = 'true'; }), 'topic.options.0.isComparison', at('topic.options.0.isComparison', 'true or false', 'the text "true"')],
-  ['an option given as a list', damaged((d) => { d.topic.options[2] = ['higher']; }), 'topic.options.2', at('topic.options.2', 'a group of fields (id, name, isComparison)', 'a list')],
-  ['an unknown kind of outcome', damaged((d) => { d.topic.outcomes[0].kind = 'good'; }), 'topic.outcomes.0.kind', at('topic.outcomes.0.kind', '"benefit" or "harm"', 'the text "good"')],
-  ['a headline flag that is a number', damaged((d) => { d.topic.outcomes[0].isHeadline = 1; }), 'topic.outcomes.0.isHeadline', at('topic.outcomes.0.isHeadline', 'true or false', 'the number 1')],
-  ['an outcome given as a list', damaged((d) => { d.topic.outcomes[1] = []; }), 'topic.outcomes.1', at('topic.outcomes.1', 'a group of fields', 'a list')],
-  ['a missing baseline', damaged((d) => { delete d.topic.outcomes[0].baseline; }), 'topic.outcomes.0.baseline', at('topic.outcomes.0.baseline', 'a group of fields (risk, periodYears, periodUnit, source)', 'nothing')],
-  ['a baseline risk of true', damaged((d) => { d.topic.outcomes[0].baseline.risk = true; }), 'topic.outcomes.0.baseline.risk', at('topic.outcomes.0.baseline.risk', 'a number, text or null', 'the value true')],
-  ['a baseline period written as text', damaged((d) => { d.topic.outcomes[2].baseline.periodYears = 'ten'; }), 'topic.outcomes.2.baseline.periodYears', at('topic.outcomes.2.baseline.periodYears', 'a number', 'the text "ten"')],
-  ['effects given as a group', damaged((d) => { d.topic.outcomes[0].effects = {}; }), 'topic.outcomes.0.effects', at('topic.outcomes.0.effects', 'a list', 'a group of fields')],
-  ['an unknown measure name', damaged((d) => { d.topic.outcomes[0].effects[0].effect.measure = 'rd'; }), 'topic.outcomes.0.effects.0.effect.measure', at('topic.outcomes.0.effects.0.effect.measure', MEASURES, 'the text "rd"')],
-  ['a measure name in capitals', damaged((d) => { d.topic.outcomes[1].effects[1].effect.measure = 'RR'; }), 'topic.outcomes.1.effects.1.effect.measure', at('topic.outcomes.1.effects.1.effect.measure', MEASURES, 'the text "RR"')],
-  ['a missing measure', damaged((d) => { delete d.topic.outcomes[0].effects[0].effect.measure; }), 'topic.outcomes.0.effects.0.effect.measure', at('topic.outcomes.0.effects.0.effect.measure', MEASURES, 'nothing')],
-  ['an effect written as text', damaged((d) => { d.topic.outcomes[0].effects[0].effect = 'rr 0.75'; }), 'topic.outcomes.0.effects.0.effect', at('topic.outcomes.0.effects.0.effect', 'a group of fields', 'the text "rr 0.75"')],
-  ['an estimate written as text', damaged((d) => { d.topic.outcomes[0].effects[0].effect.estimate = '0.75'; }), 'topic.outcomes.0.effects.0.effect.estimate', at('topic.outcomes.0.effects.0.effect.estimate', 'a number', 'the text "0.75"')],
-  ['a missing estimate', damaged((d) => { delete d.topic.outcomes[0].effects[1].effect.estimate; }), 'topic.outcomes.0.effects.1.effect.estimate', at('topic.outcomes.0.effects.1.effect.estimate', 'a number', 'nothing')],
-  ['an estimate too large to use', damaged((d) => JSON.stringify(d).replace('"estimate":0.6', '"estimate":1e400')), 'topic.outcomes.0.effects.0.effect.estimate', at('topic.outcomes.0.effects.0.effect.estimate', 'a number', 'a number too large to use')],
-  ['a lower limit written as a word', damaged((d) => { d.topic.outcomes[0].effects[0].effect.lower = 'low'; }), 'topic.outcomes.0.effects.0.effect.lower', at('topic.outcomes.0.effects.0.effect.lower', 'a number or null', 'the text "low"')],
-  ['a level written as a percentage', damaged((d) => { d.topic.outcomes[0].effects[0].effect.level = '95%'; }), 'topic.outcomes.0.effects.0.effect.level', at('topic.outcomes.0.effects.0.effect.level', 'a number', 'the text "95%"')],
-  ['a follow-up written as text', damaged((d) => { d.topic.outcomes[0].effects[0].followUpYears = '10'; }), 'topic.outcomes.0.effects.0.followUpYears', at('topic.outcomes.0.effects.0.followUpYears', 'a number or null', 'the text "10"')],
-  ['an unknown certainty', damaged((d) => { d.topic.outcomes[0].effects[0].certainty = 'medium'; }), 'topic.outcomes.0.effects.0.certainty', at('topic.outcomes.0.effects.0.certainty', 'one of "high", "moderate", "low" or "very-low"', 'the text "medium"')],
-  ['an unknown importance', damaged((d) => { d.topic.outcomes[0].effects[0].importance = 'big'; }), 'topic.outcomes.0.effects.0.importance', at('topic.outcomes.0.effects.0.importance', '"important" or "trivial"', 'the text "big"')],
-  ['counts that are not whole', damaged((d) => { d.topic.outcomes[0].effects[0].effect.intervention.events = 52.5; }, countsBase), 'topic.outcomes.0.effects.0.effect.intervention.events', at('topic.outcomes.0.effects.0.effect.intervention.events', 'a whole number', 'the number 52.5')],
-  ['counts without the comparison arm', damaged((d) => { delete d.topic.outcomes[0].effects[0].effect.comparison; }, countsBase), 'topic.outcomes.0.effects.0.effect.comparison', at('topic.outcomes.0.effects.0.effect.comparison', 'a group of fields (events, total)', 'nothing')],
-  ['a total written as text', damaged((d) => { d.topic.outcomes[1].effects[0].effect.comparison.total = '1000'; }, countsBase), 'topic.outcomes.1.effects.0.effect.comparison.total', at('topic.outcomes.1.effects.0.effect.comparison.total', 'a whole number', 'the text "1000"')],
-  ['questions given as text', damaged((d) => { d.topic.questions = 'why?'; }), 'topic.questions', at('topic.questions', 'a list', 'the text "why?"')],
-  ['a question that is a number', damaged((d) => { d.topic.questions[1] = 3; }), 'topic.questions.1', at('topic.questions.1', 'text', 'the number 3')],
-  ['a missing evidence summary', damaged((d) => { delete d.topic.evidence; }), 'topic.evidence', at('topic.evidence', 'a group of fields (summary, reviewed)', 'nothing')],
-  ['a clinician that is a number', damaged((d) => { d.topic.clinician = 1; }), 'topic.clinician', at('topic.clinician', 'text', 'the number 1')],
-  ['a patient written as text', damaged((d) => { d.topic.patient = 'Jane'; }), 'topic.patient', at('topic.patient', 'a group of fields (name, reference) or null', 'the text "Jane"')],
-  ['a long text shortened in the message', damaged((d) => { d.topic.options[0].isComparison = 'this is a very long piece of text indeed'; }), 'topic.options.0.isComparison', at('topic.options.0.isComparison', 'true or false', 'the text "this is a very long piece of t…"')],
-  ['the topic given as a list', damaged((d) => { d.topic = []; }), 'topic', at('topic', 'a group of fields', 'a list')],
-  ['no topic at all', damaged((d) => { delete d.topic; }), 'topic', at('topic', 'a group of fields', 'nothing')],
-  ['a version written as text', damaged((d) => { d.version = '2'; }), 'version', at('version', 'one of 2, 3 or 4', 'the text "2"')],
-  ['a version of 0', damaged((d) => { d.version = 0; }), 'version', at('version', 'one of 2, 3 or 4', 'the number 0')],
-  ['a missing version', damaged((d) => { delete d.version; }), 'version', at('version', 'one of 2, 3 or 4', 'nothing')],
-  ['the wrong format', damaged((d) => { d.format = 'spreadsheet'; }), 'format', 'This file is not a Chancewise topic (its format is "spreadsheet").'],
-  ['no format', damaged((d) => { delete d.format; }), 'format', NOT_A_TOPIC],
+  [
+    'a title that is a number',
+    damaged((d) => {
+      d.topic.title = 5;
+    }),
+    'topic.title',
+    at('topic.title', 'text', 'the number 5'),
+  ],
+  [
+    'a missing title',
+    damaged((d) => {
+      delete d.topic.title;
+    }),
+    'topic.title',
+    at('topic.title', 'text', 'nothing'),
+  ],
+  [
+    'a period written as text',
+    damaged((d) => {
+      d.topic.periodYears = '10';
+    }),
+    'topic.periodYears',
+    at('topic.periodYears', 'a number', 'the text "10"'),
+  ],
+  [
+    'a period of null',
+    damaged((d) => {
+      d.topic.periodYears = null;
+    }),
+    'topic.periodYears',
+    at('topic.periodYears', 'a number', 'null'),
+  ],
+  [
+    'an illustrative flag written as text',
+    damaged((d) => {
+      d.topic.illustrative = 'yes';
+    }),
+    'topic.illustrative',
+    at('topic.illustrative', 'true or false', 'the text "yes"'),
+  ],
+  [
+    'options given as a group instead of a list',
+    damaged((d) => {
+      d.topic.options = {};
+    }),
+    'topic.options',
+    at('topic.options', 'a list', 'a group of fields'),
+  ],
+  [
+    'an option without its id',
+    damaged((d) => {
+      delete d.topic.options[1].id;
+    }),
+    'topic.options.1.id',
+    at('topic.options.1.id', 'text', 'nothing'),
+  ],
+  [
+    'a comparison flag written as text',
+    damaged((d) => {
+      d.topic.options[0].isComparison = 'true';
+    }),
+    'topic.options.0.isComparison',
+    at('topic.options.0.isComparison', 'true or false', 'the text "true"'),
+  ],
+  [
+    'an option given as a list',
+    damaged((d) => {
+      d.topic.options[2] = ['higher'];
+    }),
+    'topic.options.2',
+    at('topic.options.2', 'a group of fields (id, name, isComparison)', 'a list'),
+  ],
+  [
+    'an unknown kind of outcome',
+    damaged((d) => {
+      d.topic.outcomes[0].kind = 'good';
+    }),
+    'topic.outcomes.0.kind',
+    at('topic.outcomes.0.kind', '"benefit" or "harm"', 'the text "good"'),
+  ],
+  [
+    'a headline flag that is a number',
+    damaged((d) => {
+      d.topic.outcomes[0].isHeadline = 1;
+    }),
+    'topic.outcomes.0.isHeadline',
+    at('topic.outcomes.0.isHeadline', 'true or false', 'the number 1'),
+  ],
+  [
+    'an outcome given as a list',
+    damaged((d) => {
+      d.topic.outcomes[1] = [];
+    }),
+    'topic.outcomes.1',
+    at('topic.outcomes.1', 'a group of fields', 'a list'),
+  ],
+  [
+    'a missing baseline',
+    damaged((d) => {
+      delete d.topic.outcomes[0].baseline;
+    }),
+    'topic.outcomes.0.baseline',
+    at('topic.outcomes.0.baseline', 'a group of fields (risk, periodYears, periodUnit, source)', 'nothing'),
+  ],
+  [
+    'a baseline risk of true',
+    damaged((d) => {
+      d.topic.outcomes[0].baseline.risk = true;
+    }),
+    'topic.outcomes.0.baseline.risk',
+    at('topic.outcomes.0.baseline.risk', 'a number, text or null', 'the value true'),
+  ],
+  [
+    'a baseline period written as text',
+    damaged((d) => {
+      d.topic.outcomes[2].baseline.periodYears = 'ten';
+    }),
+    'topic.outcomes.2.baseline.periodYears',
+    at('topic.outcomes.2.baseline.periodYears', 'a number', 'the text "ten"'),
+  ],
+  [
+    'effects given as a group',
+    damaged((d) => {
+      d.topic.outcomes[0].effects = {};
+    }),
+    'topic.outcomes.0.effects',
+    at('topic.outcomes.0.effects', 'a list', 'a group of fields'),
+  ],
+  [
+    'an unknown measure name',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect.measure = 'rd';
+    }),
+    'topic.outcomes.0.effects.0.effect.measure',
+    at('topic.outcomes.0.effects.0.effect.measure', MEASURES, 'the text "rd"'),
+  ],
+  [
+    'a measure name in capitals',
+    damaged((d) => {
+      d.topic.outcomes[1].effects[1].effect.measure = 'RR';
+    }),
+    'topic.outcomes.1.effects.1.effect.measure',
+    at('topic.outcomes.1.effects.1.effect.measure', MEASURES, 'the text "RR"'),
+  ],
+  [
+    'a missing measure',
+    damaged((d) => {
+      delete d.topic.outcomes[0].effects[0].effect.measure;
+    }),
+    'topic.outcomes.0.effects.0.effect.measure',
+    at('topic.outcomes.0.effects.0.effect.measure', MEASURES, 'nothing'),
+  ],
+  [
+    'an effect written as text',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect = 'rr 0.75';
+    }),
+    'topic.outcomes.0.effects.0.effect',
+    at('topic.outcomes.0.effects.0.effect', 'a group of fields', 'the text "rr 0.75"'),
+  ],
+  [
+    'an estimate written as text',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect.estimate = '0.75';
+    }),
+    'topic.outcomes.0.effects.0.effect.estimate',
+    at('topic.outcomes.0.effects.0.effect.estimate', 'a number', 'the text "0.75"'),
+  ],
+  [
+    'a missing estimate',
+    damaged((d) => {
+      delete d.topic.outcomes[0].effects[1].effect.estimate;
+    }),
+    'topic.outcomes.0.effects.1.effect.estimate',
+    at('topic.outcomes.0.effects.1.effect.estimate', 'a number', 'nothing'),
+  ],
+  [
+    'an estimate too large to use',
+    damaged((d) => JSON.stringify(d).replace('"estimate":0.6', '"estimate":1e400')),
+    'topic.outcomes.0.effects.0.effect.estimate',
+    at('topic.outcomes.0.effects.0.effect.estimate', 'a number', 'a number too large to use'),
+  ],
+  [
+    'a lower limit written as a word',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect.lower = 'low';
+    }),
+    'topic.outcomes.0.effects.0.effect.lower',
+    at('topic.outcomes.0.effects.0.effect.lower', 'a number or null', 'the text "low"'),
+  ],
+  [
+    'a level written as a percentage',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect.level = '95%';
+    }),
+    'topic.outcomes.0.effects.0.effect.level',
+    at('topic.outcomes.0.effects.0.effect.level', 'a number', 'the text "95%"'),
+  ],
+  [
+    'a follow-up written as text',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].followUpYears = '10';
+    }),
+    'topic.outcomes.0.effects.0.followUpYears',
+    at('topic.outcomes.0.effects.0.followUpYears', 'a number or null', 'the text "10"'),
+  ],
+  [
+    'an unknown certainty',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].certainty = 'medium';
+    }),
+    'topic.outcomes.0.effects.0.certainty',
+    at('topic.outcomes.0.effects.0.certainty', 'one of "high", "moderate", "low" or "very-low"', 'the text "medium"'),
+  ],
+  [
+    'an unknown importance',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].importance = 'big';
+    }),
+    'topic.outcomes.0.effects.0.importance',
+    at('topic.outcomes.0.effects.0.importance', '"important" or "trivial"', 'the text "big"'),
+  ],
+  [
+    'counts that are not whole',
+    damaged((d) => {
+      d.topic.outcomes[0].effects[0].effect.intervention.events = 52.5;
+    }, countsBase),
+    'topic.outcomes.0.effects.0.effect.intervention.events',
+    at('topic.outcomes.0.effects.0.effect.intervention.events', 'a whole number', 'the number 52.5'),
+  ],
+  [
+    'counts without the comparison arm',
+    damaged((d) => {
+      delete d.topic.outcomes[0].effects[0].effect.comparison;
+    }, countsBase),
+    'topic.outcomes.0.effects.0.effect.comparison',
+    at('topic.outcomes.0.effects.0.effect.comparison', 'a group of fields (events, total)', 'nothing'),
+  ],
+  [
+    'a total written as text',
+    damaged((d) => {
+      d.topic.outcomes[1].effects[0].effect.comparison.total = '1000';
+    }, countsBase),
+    'topic.outcomes.1.effects.0.effect.comparison.total',
+    at('topic.outcomes.1.effects.0.effect.comparison.total', 'a whole number', 'the text "1000"'),
+  ],
+  [
+    'questions given as text',
+    damaged((d) => {
+      d.topic.questions = 'why?';
+    }),
+    'topic.questions',
+    at('topic.questions', 'a list', 'the text "why?"'),
+  ],
+  [
+    'a question that is a number',
+    damaged((d) => {
+      d.topic.questions[1] = 3;
+    }),
+    'topic.questions.1',
+    at('topic.questions.1', 'text', 'the number 3'),
+  ],
+  [
+    'a missing evidence summary',
+    damaged((d) => {
+      delete d.topic.evidence;
+    }),
+    'topic.evidence',
+    at('topic.evidence', 'a group of fields (summary, reviewed)', 'nothing'),
+  ],
+  [
+    'a clinician that is a number',
+    damaged((d) => {
+      d.topic.clinician = 1;
+    }),
+    'topic.clinician',
+    at('topic.clinician', 'text', 'the number 1'),
+  ],
+  [
+    'a patient written as text',
+    damaged((d) => {
+      d.topic.patient = 'Jane';
+    }),
+    'topic.patient',
+    at('topic.patient', 'a group of fields (name, reference) or null', 'the text "Jane"'),
+  ],
+  [
+    'a long text shortened in the message',
+    damaged((d) => {
+      d.topic.options[0].isComparison = 'this is a very long piece of text indeed';
+    }),
+    'topic.options.0.isComparison',
+    at('topic.options.0.isComparison', 'true or false', 'the text "this is a very long piece of t…"'),
+  ],
+  [
+    'the topic given as a list',
+    damaged((d) => {
+      d.topic = [];
+    }),
+    'topic',
+    at('topic', 'a group of fields', 'a list'),
+  ],
+  [
+    'no topic at all',
+    damaged((d) => {
+      delete d.topic;
+    }),
+    'topic',
+    at('topic', 'a group of fields', 'nothing'),
+  ],
+  [
+    'a version written as text',
+    damaged((d) => {
+      d.version = '2';
+    }),
+    'version',
+    at('version', 'one of 2, 3 or 4', 'the text "2"'),
+  ],
+  [
+    'a version of 0',
+    damaged((d) => {
+      d.version = 0;
+    }),
+    'version',
+    at('version', 'one of 2, 3 or 4', 'the number 0'),
+  ],
+  [
+    'a missing version',
+    damaged((d) => {
+      delete d.version;
+    }),
+    'version',
+    at('version', 'one of 2, 3 or 4', 'nothing'),
+  ],
+  [
+    'the wrong format',
+    damaged((d) => {
+      d.format = 'spreadsheet';
+    }),
+    'format',
+    'This file is not a Chancewise topic (its format is "spreadsheet").',
+  ],
+  [
+    'no format',
+    damaged((d) => {
+      delete d.format;
+    }),
+    'format',
+    NOT_A_TOPIC,
+  ],
   ['a list instead of a topic file', '[1, 2]', 'format', NOT_A_TOPIC],
   ['a number instead of a topic file', '42', 'format', NOT_A_TOPIC],
   ['null instead of a topic file', 'null', 'format', NOT_A_TOPIC],
@@ -264,7 +580,12 @@ describe('reading a damaged topic file', () => {
   });
 
   it('names only the first wrong field when several are wrong', () => {
-    const found = refusal(damaged((d) => { d.topic.title = 5; d.topic.periodYears = 'ten'; }));
+    const found = refusal(
+      damaged((d) => {
+        d.topic.title = 5;
+        d.topic.periodYears = 'ten';
+      }),
+    );
     expect(found.field).toBe('topic.title');
   });
 
@@ -276,6 +597,8 @@ describe('reading a damaged topic file', () => {
   ])('refuses %s as incomplete JSON and suggests a backup', (_what, text) => {
     const found = refusal(text);
     expect(found.code).toBe('file-not-json');
-    expect(found.message).toMatch(/^This file is not a readable topic: it is not complete JSON \(.+\)\. Open another file or restore a backup\.$/);
+    expect(found.message).toMatch(
+      /^This file is not a readable topic: it is not complete JSON \(.+\)\. Open another file or restore a backup\.$/,
+    );
   });
 });

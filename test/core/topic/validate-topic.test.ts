@@ -36,51 +36,291 @@ const only = (problems: readonly Problem[]): Pick<Problem, 'code' | 'field'>[] =
   problems.map(({ code, field }) => ({ code, field }));
 
 describe('validateTopic', () => {
-  it.each(['01-kidney-stone.json', '02-bowel-screening.json', '03-fracture-medicine.json'])('finds nothing wrong with the demo %s', (name) => {
-    expect(validateTopic(demo(name))).toEqual([]);
-  });
+  it.each(['01-kidney-stone.json', '02-bowel-screening.json', '03-fracture-medicine.json'])(
+    'finds nothing wrong with the demo %s',
+    (name) => {
+      expect(validateTopic(demo(name))).toEqual([]);
+    },
+  );
 
   /** [what is wrong, how to damage the kidney stone demo, the one problem expected]. */
   const cases: readonly [string, (topic: Writable<Topic>) => void, Pick<Problem, 'code' | 'field'>][] = [
-    ['an empty title', (t) => { t.title = '  '; }, { code: 'topic-text-missing', field: 'title' }],
-    ['a title too long', (t) => { t.title = 'x'.repeat(TOPIC_LIMITS.titleLength + 1); }, { code: 'topic-text-too-long', field: 'title' }],
-    ['an empty population', (t) => { t.population = ''; }, { code: 'topic-text-missing', field: 'population' }],
-    ['a population too long', (t) => { t.population = 'x'.repeat(TOPIC_LIMITS.populationLength + 1); }, { code: 'topic-text-too-long', field: 'population' }],
-    ['a period of zero years', (t) => { t.periodYears = 0; }, { code: 'period-not-positive', field: 'periodYears' }],
-    ['a negative period', (t) => { t.periodYears = -5; }, { code: 'period-not-positive', field: 'periodYears' }],
-    ['a follow-up beyond the limit', (t) => { effectOf(t, 0, 0).followUpYears = 250; }, { code: 'period-too-long', field: 'outcomes.0.effects.0.followUpYears' }],
-    ['an evidence summary too long', (t) => { t.evidence.summary = 'x'.repeat(TOPIC_LIMITS.evidenceSummaryLength + 1); }, { code: 'topic-text-too-long', field: 'evidence.summary' }],
-    ['a clinician name too long', (t) => { t.clinician = 'x'.repeat(TOPIC_LIMITS.clinicianLength + 1); }, { code: 'topic-text-too-long', field: 'clinician' }],
-    ['too many questions', (t) => { t.questions = Array.from({ length: TOPIC_LIMITS.maxQuestions + 1 }, (_, index) => `Question ${index}?`); }, { code: 'topic-text-too-long', field: 'questions' }],
-    ['an empty question', (t) => { t.questions[1] = ''; }, { code: 'topic-text-missing', field: 'questions.1' }],
-    ['a question too long', (t) => { t.questions[2] = 'x'.repeat(TOPIC_LIMITS.questionLength + 1); }, { code: 'topic-text-too-long', field: 'questions.2' }],
-    ['an empty option name', (t) => { const option = t.options[1]; if (option) option.name = ''; }, { code: 'topic-text-missing', field: 'options.1.name' }],
-    ['an option name too long', (t) => { const option = t.options[2]; if (option) option.name = 'x'.repeat(TOPIC_LIMITS.optionNameLength + 1); }, { code: 'topic-text-too-long', field: 'options.2.name' }],
-    ['two options with the same name, whatever the case', (t) => { const option = t.options[2]; if (option) option.name = 'Extra Water Each Day'; }, { code: 'topic-duplicate-name', field: 'options.2.name' }],
-    ['an empty outcome name', (t) => { outcomeOf(t, 2).name = ''; }, { code: 'topic-text-missing', field: 'outcomes.2.name' }],
-    ['an outcome name too long', (t) => { outcomeOf(t, 1).name = 'x'.repeat(TOPIC_LIMITS.outcomeNameLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.1.name' }],
-    ['no headline outcome', (t) => { outcomeOf(t, 0).isHeadline = false; }, { code: 'topic-headline-count', field: 'outcomes' }],
-    ['two headline outcomes', (t) => { outcomeOf(t, 1).isHeadline = true; }, { code: 'topic-headline-count', field: 'outcomes' }],
-    ['two outcomes with the same id', (t) => { outcomeOf(t, 2).id = 'night'; }, { code: 'topic-duplicate-id', field: 'outcomes.2.id' }],
-    ['two outcomes with the same name', (t) => { outcomeOf(t, 2).name = 'Another kidney stone'; }, { code: 'topic-duplicate-name', field: 'outcomes.2.name' }],
-    ['a baseline source too long', (t) => { outcomeOf(t, 0).baseline.source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.0.baseline.source' }],
-    ['a baseline period of zero', (t) => { outcomeOf(t, 1).baseline.periodYears = 0; }, { code: 'period-not-positive', field: 'outcomes.1.baseline.periodYears' }],
-    ['no baseline risk for entered effects', (t) => { outcomeOf(t, 0).baseline.risk = null; }, { code: 'baseline-missing', field: 'outcomes.0.baseline.risk' }],
-    ['a baseline risk that is not a risk', (t) => { outcomeOf(t, 0).baseline.risk = 'about a fifth'; }, { code: 'risk-unparsable', field: 'outcomes.0.baseline.risk' }],
-    ['an ambiguous bare baseline', (t) => { outcomeOf(t, 0).baseline.risk = 15; }, { code: 'risk-ambiguous', field: 'outcomes.0.baseline.risk' }],
-    ['a baseline of 0%', (t) => { outcomeOf(t, 0).baseline.risk = '0%'; }, { code: 'baseline-out-of-range', field: 'outcomes.0.baseline.risk' }],
-    ['a baseline above 100%', (t) => { outcomeOf(t, 0).baseline.risk = '150%'; }, { code: 'risk-out-of-range', field: 'outcomes.0.baseline.risk' }],
-    ['an effect source too long', (t) => { effectOf(t, 2, 0).source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1); }, { code: 'topic-text-too-long', field: 'outcomes.2.effects.0.source' }],
-    ['a follow-up of zero years', (t) => { effectOf(t, 1, 0).followUpYears = 0; }, { code: 'period-not-positive', field: 'outcomes.1.effects.0.followUpYears' }],
-    ['a risk ratio of zero', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0 }; }, { code: 'ratio-not-positive', field: 'outcomes.0.effects.0.effect.estimate' }],
-    ['a relative reduction of 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'rrr', estimate: 100 }; }, { code: 'rrr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' }],
-    ['an absolute reduction beyond 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'arr', estimate: 1.5 }; }, { code: 'arr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' }],
-    ['a risk ratio pushing the risk above 100%', (t) => { effectOf(t, 0, 1).effect = { measure: 'rr', estimate: 8 }; }, { code: 'rr-risk-above-one', field: 'outcomes.0.effects.1.effect.estimate' }],
-    ['an absolute reduction larger than the baseline', (t) => { effectOf(t, 1, 0).effect = { measure: 'arr', estimate: 0.2 }; }, { code: 'risk-outside', field: 'outcomes.1.effects.0.effect.estimate' }],
-    ['an interval that misses its estimate', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.8, upper: 0.9 }; }, { code: 'interval-excludes-estimate', field: 'outcomes.0.effects.0.effect.interval' }],
-    ['an interval with one limit', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.6, upper: null }; }, { code: 'interval-incomplete', field: 'outcomes.0.effects.0.effect.interval' }],
-    ['an interval limit pushing the risk above 100%', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 2, lower: 1.5, upper: 7 }; }, { code: 'limit-risk-outside', field: 'outcomes.0.effects.0.effect.upper' }],
-    ['an interval level below 50%', (t) => { effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.68, upper: 0.83, level: 0.3 }; }, { code: 'level-out-of-range', field: 'outcomes.0.effects.0.effect.level' }],
+    [
+      'an empty title',
+      (t) => {
+        t.title = '  ';
+      },
+      { code: 'topic-text-missing', field: 'title' },
+    ],
+    [
+      'a title too long',
+      (t) => {
+        t.title = 'x'.repeat(TOPIC_LIMITS.titleLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'title' },
+    ],
+    [
+      'an empty population',
+      (t) => {
+        t.population = '';
+      },
+      { code: 'topic-text-missing', field: 'population' },
+    ],
+    [
+      'a population too long',
+      (t) => {
+        t.population = 'x'.repeat(TOPIC_LIMITS.populationLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'population' },
+    ],
+    [
+      'a period of zero years',
+      (t) => {
+        t.periodYears = 0;
+      },
+      { code: 'period-not-positive', field: 'periodYears' },
+    ],
+    [
+      'a negative period',
+      (t) => {
+        t.periodYears = -5;
+      },
+      { code: 'period-not-positive', field: 'periodYears' },
+    ],
+    [
+      'a follow-up beyond the limit',
+      (t) => {
+        effectOf(t, 0, 0).followUpYears = 250;
+      },
+      { code: 'period-too-long', field: 'outcomes.0.effects.0.followUpYears' },
+    ],
+    [
+      'an evidence summary too long',
+      (t) => {
+        t.evidence.summary = 'x'.repeat(TOPIC_LIMITS.evidenceSummaryLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'evidence.summary' },
+    ],
+    [
+      'a clinician name too long',
+      (t) => {
+        t.clinician = 'x'.repeat(TOPIC_LIMITS.clinicianLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'clinician' },
+    ],
+    [
+      'too many questions',
+      (t) => {
+        t.questions = Array.from({ length: TOPIC_LIMITS.maxQuestions + 1 }, (_, index) => `Question ${index}?`);
+      },
+      { code: 'topic-text-too-long', field: 'questions' },
+    ],
+    [
+      'an empty question',
+      (t) => {
+        t.questions[1] = '';
+      },
+      { code: 'topic-text-missing', field: 'questions.1' },
+    ],
+    [
+      'a question too long',
+      (t) => {
+        t.questions[2] = 'x'.repeat(TOPIC_LIMITS.questionLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'questions.2' },
+    ],
+    [
+      'an empty option name',
+      (t) => {
+        const option = t.options[1];
+        if (option) option.name = '';
+      },
+      { code: 'topic-text-missing', field: 'options.1.name' },
+    ],
+    [
+      'an option name too long',
+      (t) => {
+        const option = t.options[2];
+        if (option) option.name = 'x'.repeat(TOPIC_LIMITS.optionNameLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'options.2.name' },
+    ],
+    [
+      'two options with the same name, whatever the case',
+      (t) => {
+        const option = t.options[2];
+        if (option) option.name = 'Extra Water Each Day';
+      },
+      { code: 'topic-duplicate-name', field: 'options.2.name' },
+    ],
+    [
+      'an empty outcome name',
+      (t) => {
+        outcomeOf(t, 2).name = '';
+      },
+      { code: 'topic-text-missing', field: 'outcomes.2.name' },
+    ],
+    [
+      'an outcome name too long',
+      (t) => {
+        outcomeOf(t, 1).name = 'x'.repeat(TOPIC_LIMITS.outcomeNameLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'outcomes.1.name' },
+    ],
+    [
+      'no headline outcome',
+      (t) => {
+        outcomeOf(t, 0).isHeadline = false;
+      },
+      { code: 'topic-headline-count', field: 'outcomes' },
+    ],
+    [
+      'two headline outcomes',
+      (t) => {
+        outcomeOf(t, 1).isHeadline = true;
+      },
+      { code: 'topic-headline-count', field: 'outcomes' },
+    ],
+    [
+      'two outcomes with the same id',
+      (t) => {
+        outcomeOf(t, 2).id = 'night';
+      },
+      { code: 'topic-duplicate-id', field: 'outcomes.2.id' },
+    ],
+    [
+      'two outcomes with the same name',
+      (t) => {
+        outcomeOf(t, 2).name = 'Another kidney stone';
+      },
+      { code: 'topic-duplicate-name', field: 'outcomes.2.name' },
+    ],
+    [
+      'a baseline source too long',
+      (t) => {
+        outcomeOf(t, 0).baseline.source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'outcomes.0.baseline.source' },
+    ],
+    [
+      'a baseline period of zero',
+      (t) => {
+        outcomeOf(t, 1).baseline.periodYears = 0;
+      },
+      { code: 'period-not-positive', field: 'outcomes.1.baseline.periodYears' },
+    ],
+    [
+      'no baseline risk for entered effects',
+      (t) => {
+        outcomeOf(t, 0).baseline.risk = null;
+      },
+      { code: 'baseline-missing', field: 'outcomes.0.baseline.risk' },
+    ],
+    [
+      'a baseline risk that is not a risk',
+      (t) => {
+        outcomeOf(t, 0).baseline.risk = 'about a fifth';
+      },
+      { code: 'risk-unparsable', field: 'outcomes.0.baseline.risk' },
+    ],
+    [
+      'an ambiguous bare baseline',
+      (t) => {
+        outcomeOf(t, 0).baseline.risk = 15;
+      },
+      { code: 'risk-ambiguous', field: 'outcomes.0.baseline.risk' },
+    ],
+    [
+      'a baseline of 0%',
+      (t) => {
+        outcomeOf(t, 0).baseline.risk = '0%';
+      },
+      { code: 'baseline-out-of-range', field: 'outcomes.0.baseline.risk' },
+    ],
+    [
+      'a baseline above 100%',
+      (t) => {
+        outcomeOf(t, 0).baseline.risk = '150%';
+      },
+      { code: 'risk-out-of-range', field: 'outcomes.0.baseline.risk' },
+    ],
+    [
+      'an effect source too long',
+      (t) => {
+        effectOf(t, 2, 0).source = 'x'.repeat(TOPIC_LIMITS.sourceLength + 1);
+      },
+      { code: 'topic-text-too-long', field: 'outcomes.2.effects.0.source' },
+    ],
+    [
+      'a follow-up of zero years',
+      (t) => {
+        effectOf(t, 1, 0).followUpYears = 0;
+      },
+      { code: 'period-not-positive', field: 'outcomes.1.effects.0.followUpYears' },
+    ],
+    [
+      'a risk ratio of zero',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0 };
+      },
+      { code: 'ratio-not-positive', field: 'outcomes.0.effects.0.effect.estimate' },
+    ],
+    [
+      'a relative reduction of 100%',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rrr', estimate: 100 };
+      },
+      { code: 'rrr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' },
+    ],
+    [
+      'an absolute reduction beyond 100%',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'arr', estimate: 1.5 };
+      },
+      { code: 'arr-out-of-range', field: 'outcomes.0.effects.0.effect.estimate' },
+    ],
+    [
+      'a risk ratio pushing the risk above 100%',
+      (t) => {
+        effectOf(t, 0, 1).effect = { measure: 'rr', estimate: 8 };
+      },
+      { code: 'rr-risk-above-one', field: 'outcomes.0.effects.1.effect.estimate' },
+    ],
+    [
+      'an absolute reduction larger than the baseline',
+      (t) => {
+        effectOf(t, 1, 0).effect = { measure: 'arr', estimate: 0.2 };
+      },
+      { code: 'risk-outside', field: 'outcomes.1.effects.0.effect.estimate' },
+    ],
+    [
+      'an interval that misses its estimate',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.8, upper: 0.9 };
+      },
+      { code: 'interval-excludes-estimate', field: 'outcomes.0.effects.0.effect.interval' },
+    ],
+    [
+      'an interval with one limit',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.6, upper: null };
+      },
+      { code: 'interval-incomplete', field: 'outcomes.0.effects.0.effect.interval' },
+    ],
+    [
+      'an interval limit pushing the risk above 100%',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 2, lower: 1.5, upper: 7 };
+      },
+      { code: 'limit-risk-outside', field: 'outcomes.0.effects.0.effect.upper' },
+    ],
+    [
+      'an interval level below 50%',
+      (t) => {
+        effectOf(t, 0, 0).effect = { measure: 'rr', estimate: 0.75, lower: 0.68, upper: 0.83, level: 0.3 };
+      },
+      { code: 'level-out-of-range', field: 'outcomes.0.effects.0.effect.level' },
+    ],
   ];
 
   it.each(cases)('reports %s at its field', (_what, damage, expected) => {
@@ -122,7 +362,9 @@ describe('validateTopic', () => {
       { code: 'topic-effect-unknown-option', field: 'outcomes.0.effects.1.optionId' },
       { code: 'topic-effect-missing', field: 'outcomes.0.effects' },
     ]);
-    expect(describeProblem(validateTopic(topic as Topic)[0] ?? { code: 'cli-usage', field: '', values: {} })).toContain('"lowest"');
+    expect(describeProblem(validateTopic(topic as Topic)[0] ?? { code: 'cli-usage', field: '', values: {} })).toContain(
+      '"lowest"',
+    );
   });
 
   it('reports no comparison, and then every outcome lacks an effect for the unmarked option', () => {
@@ -149,7 +391,11 @@ describe('validateTopic', () => {
     few.options = few.options.slice(0, 1);
     expect(only(validateTopic(few as Topic))).toContainEqual({ code: 'topic-too-few-options', field: 'options' });
     const many = stone();
-    many.options = [...many.options, { id: 'a', name: 'option a', isComparison: false }, { id: 'b', name: 'option b', isComparison: false }];
+    many.options = [
+      ...many.options,
+      { id: 'a', name: 'option a', isComparison: false },
+      { id: 'b', name: 'option b', isComparison: false },
+    ];
     expect(only(validateTopic(many as Topic))).toContainEqual({ code: 'topic-too-many-options', field: 'options' });
   });
 
@@ -168,7 +414,11 @@ describe('validateTopic', () => {
     const template = outcomeOf(many, 2);
     many.outcomes = [
       ...many.outcomes,
-      ...Array.from({ length: TOPIC_LIMITS.maxOutcomes - 2 }, (_, index) => ({ ...structuredClone(template), id: `extra-${index}`, name: `extra outcome ${index}` })),
+      ...Array.from({ length: TOPIC_LIMITS.maxOutcomes - 2 }, (_, index) => ({
+        ...structuredClone(template),
+        id: `extra-${index}`,
+        name: `extra outcome ${index}`,
+      })),
     ];
     expect(many.outcomes.length).toBe(TOPIC_LIMITS.maxOutcomes + 1);
     expect(only(validateTopic(many as Topic))).toEqual([{ code: 'topic-too-many-outcomes', field: 'outcomes' }]);
@@ -217,8 +467,14 @@ describe('validateTopic with trial counts', () => {
 
   it('reports an arm with more events than people at the arm itself', () => {
     const topic = fracture();
-    effectOf(topic, 0, 0).effect = { measure: 'counts', intervention: { events: 52, total: 1000 }, comparison: { events: 1200, total: 1000 } };
-    expect(only(validateTopic(topic as Topic))).toEqual([{ code: 'counts-events-above-total', field: 'outcomes.0.effects.0.effect.comparison' }]);
+    effectOf(topic, 0, 0).effect = {
+      measure: 'counts',
+      intervention: { events: 52, total: 1000 },
+      comparison: { events: 1200, total: 1000 },
+    };
+    expect(only(validateTopic(topic as Topic))).toEqual([
+      { code: 'counts-events-above-total', field: 'outcomes.0.effects.0.effect.comparison' },
+    ]);
   });
 
   it.each([
@@ -233,7 +489,11 @@ describe('validateTopic with trial counts', () => {
 
   it('reports an unusable trial baseline when the trial’s comparison arm has no events to use', () => {
     const topic = fracture();
-    effectOf(topic, 0, 0).effect = { measure: 'counts', intervention: { events: 5, total: 1000 }, comparison: { events: 0, total: 1000 } };
+    effectOf(topic, 0, 0).effect = {
+      measure: 'counts',
+      intervention: { events: 5, total: 1000 },
+      comparison: { events: 0, total: 1000 },
+    };
     expect(only(validateTopic(topic as Topic))).toEqual([{ code: 'trial-baseline-unusable', field: 'outcomes.0.baseline.risk' }]);
     expect(describeProblem(validateTopic(topic as Topic)[0]!)).toContain('0/1000');
   });

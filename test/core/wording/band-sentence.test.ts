@@ -4,7 +4,15 @@ import { sentenceOf, topicFixture } from './result-fixture.ts';
 
 const harm = (intervention: number, interventionRisk: number | null, denominator: 100 | 1000 = 100, comparison = 1) =>
   topicFixture(
-    [{ id: 'muscle', name: 'muscle pain', kind: 'harm', comparison, options: [{ id: 'tablet', name: 'the tablet', intervention, interventionRisk }] }],
+    [
+      {
+        id: 'muscle',
+        name: 'muscle pain',
+        kind: 'harm',
+        comparison,
+        options: [{ id: 'tablet', name: 'the tablet', intervention, interventionRisk }],
+      },
+    ],
     { denominator },
   );
 
@@ -30,13 +38,19 @@ describe('bandSentence', () => {
   });
 
   it('says "rare" and "uncommon" on a denominator of 1000', () => {
-    expect(sentenceOf(harm(0, 0.0004, 1000, 0), 'band')?.text).toBe('With the tablet, muscle pain is rare: fewer than 1 in 1000 people.');
-    expect(sentenceOf(harm(5, 0.005, 1000), 'band')?.text).toBe('With the tablet, muscle pain is uncommon: about 5 in 1000 people.');
+    expect(sentenceOf(harm(0, 0.0004, 1000, 0), 'band')?.text).toBe(
+      'With the tablet, muscle pain is rare: fewer than 1 in 1000 people.',
+    );
+    expect(sentenceOf(harm(5, 0.005, 1000), 'band')?.text).toBe(
+      'With the tablet, muscle pain is uncommon: about 5 in 1000 people.',
+    );
   });
 
   it('takes the band from the unrounded risk and the number from the drawn count', () => {
     // 0.0096 is below 1/100, so uncommon, though it is drawn as 1 person in 100.
-    expect(sentenceOf(harm(1, 0.0096, 100, 0), 'band')?.text).toBe('With the tablet, muscle pain is uncommon: about 1 in 100 people.');
+    expect(sentenceOf(harm(1, 0.0096, 100, 0), 'band')?.text).toBe(
+      'With the tablet, muscle pain is uncommon: about 1 in 100 people.',
+    );
   });
 
   it('says "not known" when the risk cannot be estimated', () => {

@@ -28,7 +28,12 @@ describe('certaintySentence', () => {
     ['very-low', 'The evidence is very uncertain about the effect of the tablet on the chance of muscle pain.'],
   ])('words %s certainty of an important increase as "%s"', (certainty, text) => {
     const result = topicFixture([
-      { name: 'muscle pain', kind: 'harm', comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 8, certainty }] },
+      {
+        name: 'muscle pain',
+        kind: 'harm',
+        comparison: 5,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 8, certainty }],
+      },
     ]);
     expect(sentenceOf(result, 'certainty')?.text).toBe(text);
   });

@@ -11,7 +11,7 @@ describe('changeSentence', () => {
     expect(found?.numbers).toEqual({ avoided: 4, denominator: 100 });
   });
 
-  it('takes the number from the icon array\'s prevented group, which equals the rounded difference', () => {
+  it("takes the number from the icon array's prevented group, which equals the rounded difference", () => {
     const result = strokeTopic();
     const option = result.outcomes[0]?.options[1];
     expect(sentenceOf(result, 'change')?.numbers.avoided).toBe(option?.groups.prevented);
@@ -25,7 +25,14 @@ describe('changeSentence', () => {
 
   it('says how many get a harm because of the option', () => {
     const result = topicFixture([
-      { id: 'muscle', name: 'muscle pain', kind: 'harm', isHeadline: false, comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 7 }] },
+      {
+        id: 'muscle',
+        name: 'muscle pain',
+        kind: 'harm',
+        isHeadline: false,
+        comparison: 5,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 7 }],
+      },
     ]);
     const found = sentenceOf(result, 'change');
     expect(found?.text).toBe('About 2 in 100 get muscle pain because of the tablet.');
@@ -41,14 +48,20 @@ describe('changeSentence', () => {
   // "No difference" is said only when the difference is exactly 0 (common practice: rounding
   // must not turn a small difference into none); otherwise the sentence says it is below one person.
   it('says the option makes little or no difference only when the difference is exactly 0', () => {
-    const result = topicFixture([{ comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.15 }] }]);
+    const result = topicFixture([
+      { comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.15 }] },
+    ]);
     const found = sentenceOf(result, 'change');
-    expect(found?.text).toBe('The tablet makes little or no difference to how many people have a stroke: about 15 in 100 either way.');
+    expect(found?.text).toBe(
+      'The tablet makes little or no difference to how many people have a stroke: about 15 in 100 either way.',
+    );
     expect(found?.numbers).toEqual({ count: 15, denominator: 100 });
   });
 
   it('says a difference that rounding hides is smaller than one person, in its direction', () => {
-    const result = topicFixture([{ comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.148 }] }]);
+    const result = topicFixture([
+      { comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 15, interventionRisk: 0.148 }] },
+    ]);
     const found = sentenceOf(result, 'change');
     expect(found?.text).toBe(
       'With the tablet, slightly fewer people have a stroke, but the difference is smaller than 1 in 100 people: about 15 in 100 either way.',
@@ -58,7 +71,13 @@ describe('changeSentence', () => {
 
   it('says "fewer than 1 in 1000 either way" when both counts are 0 but the risks are not', () => {
     const result = topicFixture(
-      [{ comparison: 0, comparisonRisk: 0.0003, options: [{ id: 'tablet', name: 'the tablet', intervention: 0, interventionRisk: 0.0002 }] }],
+      [
+        {
+          comparison: 0,
+          comparisonRisk: 0.0003,
+          options: [{ id: 'tablet', name: 'the tablet', intervention: 0, interventionRisk: 0.0002 }],
+        },
+      ],
       { denominator: 1000 },
     );
     expect(sentenceOf(result, 'change')?.text).toBe(
@@ -68,7 +87,12 @@ describe('changeSentence', () => {
 
   it('words the change of an outcome named with a verb in -ing with "end up"', () => {
     const result = topicFixture([
-      { name: 'needing a hip operation', kind: 'harm', comparison: 2, options: [{ id: 'tablet', name: 'the tablet', intervention: 3 }] },
+      {
+        name: 'needing a hip operation',
+        kind: 'harm',
+        comparison: 2,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 3 }],
+      },
     ]);
     expect(sentenceOf(result, 'change')?.text).toBe('About 1 in 100 ends up needing a hip operation because of the tablet.');
   });

@@ -57,7 +57,9 @@ describe('frequencySentences', () => {
   });
 
   it('says "none" only when the risk is exactly zero', () => {
-    const result = topicFixture([{ comparison: 3, options: [{ id: 'tablet', name: 'the tablet', intervention: 0, interventionRisk: 0 }] }]);
+    const result = topicFixture([
+      { comparison: 3, options: [{ id: 'tablet', name: 'the tablet', intervention: 0, interventionRisk: 0 }] },
+    ]);
     expect(textOf(sentenceOf(result, 'event-frame'))).toBe(
       'The tablet: none of 100 people like you will have a stroke in the next 10 years.',
     );
@@ -65,7 +67,9 @@ describe('frequencySentences', () => {
   });
 
   it('says "nearly all" when everyone is drawn with the outcome but the risk is below one', () => {
-    const result = topicFixture([{ comparison: 100, comparisonRisk: 0.997, options: [{ id: 'tablet', name: 'the tablet', intervention: 99 }] }]);
+    const result = topicFixture([
+      { comparison: 100, comparisonRisk: 0.997, options: [{ id: 'tablet', name: 'the tablet', intervention: 99 }] },
+    ]);
     expect(textOf(sentenceOf(result, 'event-frame', 'none'))).toBe(
       'No tablet: nearly all 100 people like you will have a stroke in the next 10 years.',
     );
@@ -73,7 +77,9 @@ describe('frequencySentences', () => {
   });
 
   it('says "all" and "none of them" when the risk is exactly one', () => {
-    const result = topicFixture([{ comparison: 100, comparisonRisk: 1, options: [{ id: 'tablet', name: 'the tablet', intervention: 90 }] }]);
+    const result = topicFixture([
+      { comparison: 100, comparisonRisk: 1, options: [{ id: 'tablet', name: 'the tablet', intervention: 90 }] },
+    ]);
     expect(textOf(sentenceOf(result, 'event-frame', 'none'))).toBe(
       'No tablet: all 100 people like you will have a stroke in the next 10 years.',
     );
@@ -81,16 +87,23 @@ describe('frequencySentences', () => {
   });
 
   it('says "in the next year" for a period of 1 year and keeps decimals of a period', () => {
-    const oneYear = topicFixture([{ comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 4 }] }], { periodYears: 1 });
-    expect(textOf(sentenceOf(oneYear, 'event-frame'))).toBe('The tablet: about 4 in 100 people like you will have a stroke in the next year.');
-    const halfYears = topicFixture([{ comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 4 }] }], { periodYears: 2.5 });
+    const oneYear = topicFixture([{ comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 4 }] }], {
+      periodYears: 1,
+    });
+    expect(textOf(sentenceOf(oneYear, 'event-frame'))).toBe(
+      'The tablet: about 4 in 100 people like you will have a stroke in the next year.',
+    );
+    const halfYears = topicFixture([{ comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 4 }] }], {
+      periodYears: 2.5,
+    });
     expect(textOf(sentenceOf(halfYears, 'event-frame'))).toContain('in the next 2.5 years.');
   });
 
   it('reads "will end up" before an outcome named with a verb in -ing', () => {
-    const result = topicFixture([
-      { name: 'dying of bowel cancer', comparison: 30, options: [{ id: 'tablet', name: 'screening', intervention: 24 }] },
-    ], { denominator: 1000 });
+    const result = topicFixture(
+      [{ name: 'dying of bowel cancer', comparison: 30, options: [{ id: 'tablet', name: 'screening', intervention: 24 }] }],
+      { denominator: 1000 },
+    );
     expect(textOf(sentenceOf(result, 'event-frame', 'none'))).toBe(
       'No tablet: about 30 in 1000 people like you will end up dying of bowel cancer in the next 10 years.',
     );

@@ -8,18 +8,27 @@ import { sentenceOf, strokeTopic, topicFixture } from './result-fixture.ts';
 describe('nntSentence', () => {
   it('says "NNTB 17: treating 17 people like you ... for 10 years prevents a stroke in one of them"', () => {
     const found = sentenceOf(strokeTopic({ nnt: { rounded: 17, label: 'NNTB' } }), 'nnt');
-    expect(found?.text).toBe('NNTB 17: treating 17 people like you with the tablet for 10 years prevents a stroke in one of them.');
+    expect(found?.text).toBe(
+      'NNTB 17: treating 17 people like you with the tablet for 10 years prevents a stroke in one of them.',
+    );
     expect(found?.numbers).toEqual({ nnt: 17, years: 10 });
     expect(found?.audience).toBe('clinician');
   });
 
-  it('takes the number from the result\'s NNT: 1 / (0.15 − 0.11) = 25', () => {
+  it("takes the number from the result's NNT: 1 / (0.15 − 0.11) = 25", () => {
     expect(sentenceOf(strokeTopic(), 'nnt')?.numbers.nnt).toBe(25);
   });
 
   it('says "causes" for a number needed to harm', () => {
     const result = topicFixture(
-      [{ name: 'muscle pain', kind: 'harm', comparison: 2, options: [{ id: 'tablet', name: 'the tablet', intervention: 3, nnt: { rounded: 100, label: 'NNTH' } }] }],
+      [
+        {
+          name: 'muscle pain',
+          kind: 'harm',
+          comparison: 2,
+          options: [{ id: 'tablet', name: 'the tablet', intervention: 3, nnt: { rounded: 100, label: 'NNTH' } }],
+        },
+      ],
       { periodYears: 1 },
     );
     expect(sentenceOf(result, 'nnt')?.text).toBe(

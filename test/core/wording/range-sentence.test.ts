@@ -7,7 +7,7 @@ import { sentenceOf, strokeTopic, topicFixture } from './result-fixture.ts';
 // uncertainty as a range). Where no interval exists, say so (IPDAS certification criterion on
 // levels of uncertainty: Joseph-Williams et al. 2014, Med Decis Making 34(6):699–710).
 describe('rangeCase', () => {
-  it('turns the option\'s range of 9 to 13 people against 15 into 2 to 6 people avoiding the outcome', () => {
+  it("turns the option's range of 9 to 13 people against 15 into 2 to 6 people avoiding the outcome", () => {
     expect(rangeCase(15, { lower: 9, upper: 13 })).toEqual({ variant: 'avoid', low: 2, high: 6 });
   });
 
@@ -44,7 +44,12 @@ describe('rangeSentence', () => {
 
   it('says how many could get a harm because of the option', () => {
     const result = topicFixture([
-      { name: 'muscle pain', kind: 'harm', comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 7, range: { lower: 6, upper: 9 } }] },
+      {
+        name: 'muscle pain',
+        kind: 'harm',
+        comparison: 5,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 7, range: { lower: 6, upper: 9 } }],
+      },
     ]);
     expect(sentenceOf(result, 'range')?.text).toBe(
       'With the tablet, the number who get muscle pain because of it could be anywhere between 1 and 4 in 100.',

@@ -13,7 +13,15 @@ const sentencesOf = (topic: Parameters<typeof computeTopic>[0], per: 100 | null 
   );
 
 describe('a rare outcome: 0.1% over a year, risk ratio 0.8 (0.7 to 0.9)', () => {
-  const topic = topicOf({ wanted: false, kind: 'benefit', measure: 'rr', estimate: 0.8, lower: 0.7, upper: 0.9, baseline: 0.001 });
+  const topic = topicOf({
+    wanted: false,
+    kind: 'benefit',
+    measure: 'rr',
+    estimate: 0.8,
+    lower: 0.7,
+    upper: 0.9,
+    baseline: 0.001,
+  });
 
   it('counts the words per 10,000 and the pictures per 1000', () => {
     const result = computeTopic(topic);
@@ -40,7 +48,15 @@ describe('a rare outcome: 0.1% over a year, risk ratio 0.8 (0.7 to 0.9)', () => 
 
 describe('a difference below one in a million', () => {
   it('says "fewer than 1 in a million" rather than a number', () => {
-    const topic = topicOf({ wanted: false, kind: 'harm', measure: 'rr', estimate: 1.5, lower: 1.5, upper: 1.5, baseline: 0.0000005 });
+    const topic = topicOf({
+      wanted: false,
+      kind: 'harm',
+      measure: 'rr',
+      estimate: 1.5,
+      lower: 1.5,
+      upper: 1.5,
+      baseline: 0.0000005,
+    });
     const result = computeTopic(topic);
     expect(result.wordsDenominator).toBe(1000000);
     const sentences = sentencesOf(topic);

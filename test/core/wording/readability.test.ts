@@ -102,7 +102,12 @@ describe('readingWarnings', () => {
   });
 
   it('does not warn at or below the limit, nor about empty text', () => {
-    expect(readingWarnings([{ field: 'title', text: 'The cat sat on the mat.' }, { field: 'clinician', text: '' }])).toEqual([]);
+    expect(
+      readingWarnings([
+        { field: 'title', text: 'The cat sat on the mat.' },
+        { field: 'clinician', text: '' },
+      ]),
+    ).toEqual([]);
   });
 
   it('warns only strictly above the limit given', () => {

@@ -7,7 +7,9 @@ import { sentenceOf, strokeTopic, topicFixture } from './result-fixture.ts';
 describe('relativeSentence', () => {
   it('gives a 25% relative reduction with the 15 in 100 and 11 in 100 it applies to', () => {
     const found = sentenceOf(strokeTopic({ relativeRisk: 0.75 }), 'relative');
-    expect(found?.text).toBe('With the tablet, the chance of a stroke goes from 15 in 100 to 11 in 100: a relative reduction of 25%.');
+    expect(found?.text).toBe(
+      'With the tablet, the chance of a stroke goes from 15 in 100 to 11 in 100: a relative reduction of 25%.',
+    );
     expect(found?.numbers).toEqual({ from: 15, to: 11, denominator: 100, percent: 25 });
     expect(found?.audience).toBe('clinician');
   });
@@ -19,7 +21,12 @@ describe('relativeSentence', () => {
 
   it('gives an increase as a relative increase', () => {
     const result = topicFixture([
-      { name: 'muscle pain', kind: 'harm', comparison: 5, options: [{ id: 'tablet', name: 'the tablet', intervention: 6, relativeRisk: 1.2 }] },
+      {
+        name: 'muscle pain',
+        kind: 'harm',
+        comparison: 5,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 6, relativeRisk: 1.2 }],
+      },
     ]);
     expect(sentenceOf(result, 'relative')?.text).toBe(
       'With the tablet, the chance of muscle pain goes from 5 in 100 to 6 in 100: a relative increase of 20%.',

@@ -109,7 +109,14 @@ export function outcomeFixture(spec: OutcomeSpec, denominator: Denominator): Out
     baselineSource: 'Illustrative, invented for tests',
     options: [
       optionFixture(
-        { id: 'none', name: 'no tablet', ...shared, intervention: spec.comparison, interventionRisk: comparisonRisk, isComparison: true },
+        {
+          id: 'none',
+          name: 'no tablet',
+          ...shared,
+          intervention: spec.comparison,
+          interventionRisk: comparisonRisk,
+          isComparison: true,
+        },
         denominator,
       ),
       ...spec.options.map((option) => optionFixture({ ...shared, ...option }, denominator)),
@@ -158,11 +165,7 @@ export function oneInDenominators(text: string): number[] {
 }
 
 /** The sentences about one option (by id) of one outcome (the first unless named). */
-export function sentencesOf(
-  wording: TopicWording,
-  optionId: string,
-  outcomeId?: string,
-): readonly WordingSentence[] {
+export function sentencesOf(wording: TopicWording, optionId: string, outcomeId?: string): readonly WordingSentence[] {
   const outcome = outcomeId === undefined ? wording.outcomes[0] : wording.outcomes.find((found) => found.outcomeId === outcomeId);
   const option = outcome?.options.find((found) => found.optionId === optionId);
   if (option === undefined) throw new Error(`no option ${optionId} in outcome ${outcomeId ?? '(first)'}`);

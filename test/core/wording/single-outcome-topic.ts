@@ -55,4 +55,3 @@ export function topicOf(spec: Spec): Topic {
     patient: null,
   };
 }
-

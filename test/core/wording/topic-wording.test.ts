@@ -42,7 +42,13 @@ function edgeTopic(denominator: Denominator = 100): TopicResult {
         comparison: 0,
         comparisonRisk: 0.001 / scale,
         options: [
-          { id: 'tablet', name: 'the tablet', intervention: 3 * scale, range: { lower: 0, upper: 6 * scale }, certainty: 'very-low' },
+          {
+            id: 'tablet',
+            name: 'the tablet',
+            intervention: 3 * scale,
+            range: { lower: 0, upper: 6 * scale },
+            certainty: 'very-low',
+          },
           { id: 'injection', name: 'the injection', intervention: 0, interventionRisk: 0, importance: 'trivial' },
         ],
       },
@@ -55,7 +61,12 @@ function edgeTopic(denominator: Denominator = 100): TopicResult {
         comparisonRisk: 0.999,
         options: [
           { id: 'tablet', name: 'the tablet', intervention: denominator, interventionRisk: 1, certainty: 'moderate' },
-          { id: 'injection', name: 'the injection', intervention: denominator - 2 * scale, range: { lower: 90 * scale, upper: denominator } },
+          {
+            id: 'injection',
+            name: 'the injection',
+            intervention: denominator - 2 * scale,
+            range: { lower: 90 * scale, upper: denominator },
+          },
         ],
       },
     ],
@@ -106,7 +117,8 @@ function expectSentenceNumbers(found: WordingSentence, option: OptionOutcomeResu
     else if (role === 'nnt') expect(value, where).toBe(option.nnt.rounded);
     else if (role === 'from') expect(value, where).toBe(comparison);
     else if (role === 'to') expect(value, where).toBe(withOutcome);
-    else if (role === 'percent') expect(value, where).toBe(Math.abs(halfAway((1 - (option.relativeRisk?.estimate ?? NaN)) * 100)));
+    else if (role === 'percent')
+      expect(value, where).toBe(Math.abs(halfAway((1 - (option.relativeRisk?.estimate ?? NaN)) * 100)));
     else if (role === 'count' && found.kind === 'free-frame') expect(value, where).toBe(result.denominator - withOutcome);
     else if (role === 'count' && found.kind === 'range') {
       const range = people?.interventionRange;
@@ -142,7 +154,11 @@ describe('topicWording', () => {
     // and negative features with equal detail.
     const wording = topicWording(
       topicFixture([
-        { id: 'stroke', comparison: 15, options: [{ id: 'tablet', name: 'the tablet', intervention: 11, range: { lower: 9, upper: 13 } }] },
+        {
+          id: 'stroke',
+          comparison: 15,
+          options: [{ id: 'tablet', name: 'the tablet', intervention: 11, range: { lower: 9, upper: 13 } }],
+        },
         {
           id: 'muscle',
           name: 'muscle pain',
@@ -158,14 +174,14 @@ describe('topicWording', () => {
     expect(kinds('tablet', 'muscle')).toContain('band');
   });
 
-  it('states who the numbers are for, from the topic\'s population', () => {
+  it("states who the numbers are for, from the topic's population", () => {
     expect(topicWording(strokeTopic()).population?.text).toBe(
       'In these numbers, "people like you" means adults aged 60 to 69 with high blood pressure.',
     );
     expect(topicWording(topicFixture([], { population: '  ' })).population).toBeNull();
   });
 
-  it('writes every number from the result\'s own counts, on demo topics and on edge cases', () => {
+  it("writes every number from the result's own counts, on demo topics and on edge cases", () => {
     for (const result of [...demoResults(), edgeTopic(100), edgeTopic(1000), strokeTopic()]) expectNumbersFromResult(result);
   });
 
@@ -221,7 +237,14 @@ describe('topicWording', () => {
     fc.assert(
       fc.property(arbitrary, ({ denominator, comparison, kind, years, option: spec }) => {
         const result = topicFixture(
-          [{ comparison, kind: kind as 'benefit' | 'harm', comparisonRisk: comparison === 0 ? 0.0001 : comparison / denominator, options: [spec] }],
+          [
+            {
+              comparison,
+              kind: kind as 'benefit' | 'harm',
+              comparisonRisk: comparison === 0 ? 0.0001 : comparison / denominator,
+              options: [spec],
+            },
+          ],
           { denominator, periodYears: years },
         );
         expectNumbersFromResult(result);
@@ -270,7 +293,7 @@ describe('handoutSentences', () => {
     expect(full.some((found) => found.kind === 'relative')).toBe(true);
   });
 
-  it('orders the population first, the headline outcome next, and each outcome\'s frames before its changes', () => {
+  it("orders the population first, the headline outcome next, and each outcome's frames before its changes", () => {
     const base = edgeTopic();
     const reordered = { ...base, outcomes: [...base.outcomes].reverse() };
     const sentences = handoutSentences(reordered, { showNnt: false });

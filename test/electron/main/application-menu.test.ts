@@ -46,8 +46,22 @@ describe('buildMenuTemplate()', () => {
   });
 
   it('uses the system roles for undo, redo, clipboard, zoom and full screen', () => {
-    const roles = flatten(buildMenuTemplate(settings())).map((item) => item.role).filter((role) => role !== undefined);
-    for (const role of ['undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'resetZoom', 'zoomIn', 'zoomOut', 'togglefullscreen', 'quit']) {
+    const roles = flatten(buildMenuTemplate(settings()))
+      .map((item) => item.role)
+      .filter((role) => role !== undefined);
+    for (const role of [
+      'undo',
+      'redo',
+      'cut',
+      'copy',
+      'paste',
+      'selectAll',
+      'resetZoom',
+      'zoomIn',
+      'zoomOut',
+      'togglefullscreen',
+      'quit',
+    ]) {
       expect(roles, role).toContain(role);
     }
   });

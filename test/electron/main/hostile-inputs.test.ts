@@ -42,7 +42,8 @@ describe('isPlainFileName() against reserved and misleading names', () => {
     for (const name of ['CON', 'con.pdf', 'Nul.pdf', 'aux', 'PRN.tar.gz', 'COM1.pdf', 'lpt9', 'COM¹.pdf']) {
       expect(isPlainFileName(name), name).toBe(false);
     }
-    for (const name of ['console.pdf', 'null-handout.pdf', 'com10.pdf', 'auxiliary.pdf']) expect(isPlainFileName(name), name).toBe(true);
+    for (const name of ['console.pdf', 'null-handout.pdf', 'com10.pdf', 'auxiliary.pdf'])
+      expect(isPlainFileName(name), name).toBe(true);
   });
 
   it('refuses direction controls that make a name read as another', () => {
@@ -62,14 +63,14 @@ describe('isPlainFileName() against reserved and misleading names', () => {
 describe('isOwnDownload()', () => {
   const page = (url: string) => ({ getURL: () => url });
 
-  it('allows a data: download only from a page on the app\'s own origin', () => {
+  it("allows a data: download only from a page on the app's own origin", () => {
     expect(isOwnDownload('data:application/pdf;base64,JVBERi0=', page('app://chancewise/index.html'))).toBe(true);
     expect(isOwnDownload('data:application/pdf;base64,JVBERi0=', page('https://example.org/'))).toBe(false);
     expect(isOwnDownload('data:text/plain,x', page('app://chancewise.evil/'))).toBe(false);
     expect(isOwnDownload('data:text/plain,x', undefined)).toBe(false);
   });
 
-  it('allows a blob download only of the app\'s own origin, and nothing else', () => {
+  it("allows a blob download only of the app's own origin, and nothing else", () => {
     expect(isOwnDownload('blob:app://chancewise/5f1c', undefined)).toBe(true);
     expect(isOwnDownload('blob:https://example.org/5f1c', page('app://chancewise/index.html'))).toBe(false);
     expect(isOwnDownload('https://example.org/setup.exe', page('app://chancewise/index.html'))).toBe(false);

@@ -36,7 +36,12 @@ describe('prepareBeforeReady()', () => {
   it('moves the user-data folder for an unpackaged test run before taking the lock', () => {
     const { app, protocol, calls } = fakes(false);
     prepareBeforeReady(app, protocol, { CHANCEWISE_USER_DATA_DIR: '/tmp/run-1' });
-    expect(calls).toEqual(['registerSchemesAsPrivileged', 'enableSandbox', 'setPath userData /tmp/run-1', 'requestSingleInstanceLock']);
+    expect(calls).toEqual([
+      'registerSchemesAsPrivileged',
+      'enableSandbox',
+      'setPath userData /tmp/run-1',
+      'requestSingleInstanceLock',
+    ]);
   });
 
   it('ignores that variable in a packaged app', () => {

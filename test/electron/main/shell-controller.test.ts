@@ -45,7 +45,12 @@ describe('startShellController()', () => {
     expect(window.options).toMatchObject({
       width: 1200,
       height: 820,
-      webPreferences: { preload: '/app/dist-electron/preload.cjs', sandbox: true, contextIsolation: true, nodeIntegration: false },
+      webPreferences: {
+        preload: '/app/dist-electron/preload.cjs',
+        sandbox: true,
+        contextIsolation: true,
+        nodeIntegration: false,
+      },
     });
     expect(window.loaded).toEqual(['app://chancewise/index.html']);
   });
@@ -81,14 +86,17 @@ describe('startShellController()', () => {
     expect(window.webContents.sent).toEqual([]);
     await controller.actions.rendererReady(contents);
     // ... but the restored topic loses nothing, patient details included (they never left memory).
-    expect(window.webContents.sent).toEqual([[DOCUMENT_CHANNEL, { kind: 'snapshot', content: draft, reason: 'renderer-crashed', fileName: null }]]);
+    expect(window.webContents.sent).toEqual([
+      [DOCUMENT_CHANNEL, { kind: 'snapshot', content: draft, reason: 'renderer-crashed', fileName: null }],
+    ]);
   });
 
   it('stops reloading at the third crash within a minute and keeps the snapshot for the next start', async () => {
     const { controller, window, contents } = await start();
     await controller.actions.rendererReady(contents);
     await controller.actions.saveSnapshot(contents, { content: draft, keepPatient: false, hasUnsavedChanges: true });
-    for (let crash = 0; crash < 3; crash += 1) window.webContents.emit('render-process-gone', { reason: 'crashed', exitCode: 139 });
+    for (let crash = 0; crash < 3; crash += 1)
+      window.webContents.emit('render-process-gone', { reason: 'crashed', exitCode: 139 });
     expect(window.loaded).toHaveLength(3);
     expect(dialog.showErrorBox).toHaveBeenCalledOnce();
     expect(await fs.readdir(path.join(userData, 'snapshots'))).toHaveLength(1);
@@ -96,7 +104,10 @@ describe('startShellController()', () => {
 
   it('offers the newest snapshot left by an unexpected exit, and restores it when accepted', async () => {
     await fs.mkdir(path.join(userData, 'snapshots'));
-    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 1_700_000_000_000 }, await loadSnapshotKey(userData));
+    const text = createSnapshotText(
+      { content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 1_700_000_000_000 },
+      await loadSnapshotKey(userData),
+    );
     await fs.writeFile(path.join(userData, 'snapshots', 'snapshot-1700000000000-1.json'), text);
     dialog.showMessageBox.mockImplementationOnce(async () => ({ response: 0, checkboxChecked: false }));
     const { controller, window, contents } = await start();
@@ -109,7 +120,10 @@ describe('startShellController()', () => {
 
   it('discards the left-behind snapshot when the person declines', async () => {
     await fs.mkdir(path.join(userData, 'snapshots'));
-    const text = createSnapshotText({ content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 5 }, await loadSnapshotKey(userData));
+    const text = createSnapshotText(
+      { content: { title: 'Left behind' }, keepPatient: false, documentPath: null, savedAt: 5 },
+      await loadSnapshotKey(userData),
+    );
     await fs.writeFile(path.join(userData, 'snapshots', 'snapshot-5-1.json'), text);
     const { controller, window, contents } = await start();
     await controller.actions.rendererReady(contents);
@@ -144,7 +158,9 @@ describe('startShellController()', () => {
 
   it('opens only files from its own recent list', async () => {
     const { controller, contents } = await start();
-    await expect(controller.actions.openRecentDocument(contents, '/etc/passwd')).rejects.toMatchObject({ code: 'not-in-recent-list' });
+    await expect(controller.actions.openRecentDocument(contents, '/etc/passwd')).rejects.toMatchObject({
+      code: 'not-in-recent-list',
+    });
     dialog.showOpenDialog.mockImplementationOnce(async () => ({ canceled: false, filePaths: [demo] }));
     expect((await controller.actions.openDocument(contents))?.fileName).toBe('01-kidney-stone.json');
     expect((await controller.actions.openRecentDocument(contents, demo))?.fileName).toBe('01-kidney-stone.json');
@@ -191,12 +207,17 @@ describe('startShellController()', () => {
     const { controller, window, contents } = await start();
     app.getPath.mockImplementation((name: string) => (name === 'temp' ? base : `/fake/${name}`));
     const bytes = new TextEncoder().encode('%PDF-1.7\n');
-    expect(await controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).toEqual({ fileName: 'heart-handout.pdf' });
+    expect(await controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).toEqual({
+      fileName: 'heart-handout.pdf',
+    });
     const target = path.join(base, 'chancewise-print', 'heart-handout.pdf');
     expect(shell.openPath).toHaveBeenCalledWith(target);
     expect(new Uint8Array(await fs.readFile(target))).toEqual(bytes);
     expect(window.webContents.print).not.toHaveBeenCalled();
     shell.openPath.mockResolvedValueOnce('no viewer');
-    await expect(controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).rejects.toMatchObject({ code: 'print-failed' });    app.getPath.mockImplementation((name: string) => `/fake/${name}`);
+    await expect(controller.actions.printHandout(contents, { bytes, suggestedName: 'heart-handout.pdf' })).rejects.toMatchObject({
+      code: 'print-failed',
+    });
+    app.getPath.mockImplementation((name: string) => `/fake/${name}`);
   });
 });

@@ -36,7 +36,12 @@ afterEach(async () => {
 });
 
 async function start() {
-  const controller = await startShellController({ appPath: '/app', userDataPath: userData, launchFiles: [], log: () => undefined });
+  const controller = await startShellController({
+    appPath: '/app',
+    userDataPath: userData,
+    launchFiles: [],
+    log: () => undefined,
+  });
   const window = FakeBrowserWindow.created.at(-1);
   if (window === undefined) throw new Error('no window');
   await controller.load();
@@ -49,7 +54,15 @@ const plant = (name: string, text: string) => fs.writeFile(path.join(userData, '
 function unkeyedSnapshot(documentPath: string): string {
   const content = { title: 'Forged' };
   const checksum = createHash('sha256').update(JSON.stringify(content)).digest('hex');
-  return JSON.stringify({ format: 'chancewise-snapshot', version: 1, savedAt: Date.now(), documentPath, keepsPatient: false, content, checksum });
+  return JSON.stringify({
+    format: 'chancewise-snapshot',
+    version: 1,
+    savedAt: Date.now(),
+    documentPath,
+    keepsPatient: false,
+    content,
+    checksum,
+  });
 }
 
 const acceptRestore = () => dialog.showMessageBox.mockImplementationOnce(async () => ({ response: 0, checkboxChecked: false }));
@@ -65,7 +78,10 @@ describe('snapshots found at start-up', () => {
   });
 
   it('does not offer a snapshot sealed with another key', async () => {
-    const forged = createSnapshotText({ content: { title: 'Forged' }, keepPatient: false, documentPath: autostart, savedAt: Date.now() }, Buffer.alloc(32, 1));
+    const forged = createSnapshotText(
+      { content: { title: 'Forged' }, keepPatient: false, documentPath: autostart, savedAt: Date.now() },
+      Buffer.alloc(32, 1),
+    );
     await plant('snapshot-9999999999999-1.json', forged);
     const { controller, contents } = await start();
     await controller.actions.rendererReady(contents);
@@ -104,8 +120,10 @@ describe('snapshots found at start-up', () => {
     );
     await plant('snapshot-9999999999999-1.json', genuine);
     acceptRestore();
-    const { controller, contents } = await start();
+    const { controller, contents, window } = await start();
     await controller.actions.rendererReady(contents);
+    // Save only once the restored snapshot has reached the page (under load it can take a moment).
+    await vi.waitFor(() => expect(window.webContents.sent.length).toBeGreaterThan(0));
     expect((await controller.actions.saveDocument(contents, text))?.fileName).toBe('kidney.cwtopic');
     expect(dialog.showSaveDialog).not.toHaveBeenCalled();
   });
@@ -113,7 +131,12 @@ describe('snapshots found at start-up', () => {
 
 describe('recoveryDetail()', () => {
   it('names the topic by its full path', () => {
-    const detail = recoveryDetail({ savedAt: 0, topicPath: '/home/a/Clinic/kidney.cwtopic', asksWhereToSave: false, skippedFile: null });
+    const detail = recoveryDetail({
+      savedAt: 0,
+      topicPath: '/home/a/Clinic/kidney.cwtopic',
+      asksWhereToSave: false,
+      skippedFile: null,
+    });
     expect(detail).toContain('/home/a/Clinic/kidney.cwtopic');
     expect(recoveryDetail({ savedAt: 0, topicPath: null, asksWhereToSave: false, skippedFile: 'x.cwtopic' })).toContain(
       'an unsaved topic',

@@ -80,7 +80,10 @@ describe('the snapshot store', () => {
     const folder = path.join(base, 'snapshots');
     await fs.mkdir(folder);
     const planted = path.join(base, 'planted.json');
-    await fs.writeFile(planted, createSnapshotText({ content: { a: 1 }, keepPatient: false, documentPath: null, savedAt: 10 }, key));
+    await fs.writeFile(
+      planted,
+      createSnapshotText({ content: { a: 1 }, keepPatient: false, documentPath: null, savedAt: 10 }, key),
+    );
     await fs.symlink(planted, path.join(folder, 'snapshot-10-1.json'));
     expect(await createSnapshotStore({ folder, key }).list()).toEqual([{ name: 'snapshot-10-1.json', record: null }]);
   });

@@ -98,7 +98,7 @@ describe('createShellApi()', () => {
 });
 
 describe('isShellCommand() and isIncomingDocument()', () => {
-  it('know the contract\'s shapes', () => {
+  it("know the contract's shapes", () => {
     expect(isShellCommand({ name: 'open-recent', recentPath: '/a' })).toBe(true);
     expect(isShellCommand({ name: 'open-recent' })).toBe(false);
     expect(isShellCommand('save')).toBe(false);

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { WCAG_THRESHOLDS, contrastRatio, hexChannels, linearChannel, relativeLuminance } from '../../../src/render/colour/contrast.ts';
+import {
+  WCAG_THRESHOLDS,
+  contrastRatio,
+  hexChannels,
+  linearChannel,
+  relativeLuminance,
+} from '../../../src/render/colour/contrast.ts';
 
 // W3C, Web Content Accessibility Guidelines (WCAG) 2.2, definitions of "relative luminance" and
 // "contrast ratio"; SC 1.4.3 Contrast (Minimum) and SC 1.4.11 Non-text Contrast. The ratios in

@@ -8,9 +8,11 @@ export interface RecordedCall {
 
 export function recordingContext(): PathContext & { readonly calls: RecordedCall[] } {
   const calls: RecordedCall[] = [];
-  const record = (name: keyof PathContext) => (...values: (number | boolean | undefined)[]) => {
-    calls.push({ name, values: values.filter((value): value is number => typeof value === 'number') });
-  };
+  const record =
+    (name: keyof PathContext) =>
+    (...values: (number | boolean | undefined)[]) => {
+      calls.push({ name, values: values.filter((value): value is number => typeof value === 'number') });
+    };
   return {
     calls,
     moveTo: record('moveTo'),

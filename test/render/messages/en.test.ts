@@ -20,7 +20,9 @@ describe('chartMessagesEn', () => {
     expect(messages.optionTitle({ denominator: 1000, option: 'ACE inhibitor', periodYears: 0.5 })).toBe(
       'With ACE inhibitor: 1000 people over 6 months',
     );
-    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe('With option A: 100 people over 1 year');
+    expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: 1 })).toBe(
+      'With option A: 100 people over 1 year',
+    );
     expect(messages.optionTitle({ denominator: 100, option: 'Option A', periodYears: null })).toBe('With option A: 100 people');
   });
 
@@ -37,12 +39,38 @@ describe('chartMessagesEn', () => {
   });
 
   it('drops “anyway” for the comparison, where nothing is compared', () => {
-    expect(messages.labels.event({ count: 19, outcome: 'a stroke', option: 'no treatment', role: 'comparison' })).toBe('19 have a stroke');
+    expect(messages.labels.event({ count: 19, outcome: 'a stroke', option: 'no treatment', role: 'comparison' })).toBe(
+      '19 have a stroke',
+    );
   });
 
-  it('states the range as people out of the denominator', () => {
-    expect(messages.range({ lower: 3, upper: 7, denominator: 100, outcome: 'a stroke', option: 'option A' })).toBe(
+  it('states the range as people out of the denominator, with its level when known', () => {
+    const values = { lower: 3, upper: 7, denominator: 100, outcome: 'a stroke', option: 'option A' };
+    expect(messages.range({ ...values, level: null })).toBe(
       'With option A, anywhere between 3 and 7 of these 100 could have a stroke.',
+    );
+    expect(messages.range({ ...values, level: 0.9 })).toBe(
+      'With option A, anywhere between 3 and 7 of these 100 could have a stroke (range: 90% interval).',
+    );
+  });
+
+  it('says a range whose ends show as one count is less than one person, per more people when that shows it', () => {
+    const values = { lower: 1, upper: 1, denominator: 1000, outcome: 'a serious bleed', option: 'the tablet', level: 0.95 };
+    expect(messages.narrowRange({ ...values, words: { lower: 7, upper: 9, denominator: 10000 } })).toBe(
+      'With the tablet, the range (95% interval) is less than one person of these 1000: anywhere between 7 and 9 in 10,000 could have a serious bleed.',
+    );
+    expect(messages.narrowRange({ ...values, words: null })).toBe(
+      'With the tablet, the range (95% interval) is less than one person wide: at either end, about 1 of these 1000 could have a serious bleed.',
+    );
+  });
+
+  it('says a difference too small for a whole person in words, never as the same number', () => {
+    const values = { outcome: 'a serious bleed', option: 'the tablet', denominator: 1000, direction: 'fewer' as const };
+    expect(messages.belowOnePerson({ ...values, count: 2, wordsDenominator: 10000 })).toBe(
+      'Fewer than 1 in 1000: about 2 in 10,000 fewer have a serious bleed with the tablet, too few to show as a whole person here.',
+    );
+    expect(messages.belowOnePerson({ ...values, direction: 'more', count: 0, wordsDenominator: null })).toBe(
+      'Fewer than 1 in 1000, and fewer than 1 in a million: slightly more people have a serious bleed with the tablet, too few to show as a whole person here.',
     );
   });
 

@@ -59,9 +59,15 @@ describe('drawIconArrayPdf', () => {
 
   it('returns the height of the grid at the width asked for', () => {
     const doc = newDocument();
-    expect(drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 0, y: 0, width: 60 }, colourPalette).height).toBeCloseTo(60, 9);
+    expect(drawIconArrayPdf(doc, iconArrayLayout(100, hundred), { x: 0, y: 0, width: 60 }, colourPalette).height).toBeCloseTo(
+      60,
+      9,
+    );
     // 1000: 50 cells + 4 gutters across, 20 cells + 1 gutter down.
-    expect(drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 0, y: 0, width: 162 }, colourPalette).height).toBeCloseTo(63, 9);
+    expect(drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 0, y: 0, width: 162 }, colourPalette).height).toBeCloseTo(
+      63,
+      9,
+    );
   });
 
   it('lays the dots and hatching through clipping paths, one per patterned figure', () => {
@@ -130,7 +136,10 @@ describe('drawChartPdf', () => {
 describe('drawChartPdf of a wanted event and with the range outline', () => {
   // Invented counts per 100: 25 without and 45 with option A, range 35 to 58.
   const model = () =>
-    outcomeChart(topicFixture(100, { comparison: 25, intervention: 45, range: { lower: 35, upper: 58 }, wanted: true, name: 'a response' }), 'stroke');
+    outcomeChart(
+      topicFixture(100, { comparison: 25, intervention: 45, range: { lower: 35, upper: 58 }, wanted: true, name: 'a response' }),
+      'stroke',
+    );
 
   it('draws the people who gain a wanted event in the helped look, and none harmed', () => {
     const drawing = drawChartPdf(newDocument(), model(), { x: 15, y: 15, width: 180 }, colourPalette);

@@ -8,7 +8,10 @@ import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
 
 const stroke = (comparison: number, intervention: number, denominator: 100 | 1000 = 100) =>
-  outcomeChart(topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }), 'stroke');
+  outcomeChart(
+    topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }),
+    'stroke',
+  );
 
 /**
  * The fill and outline a person is painted with: their own attribute, or else the one
@@ -24,7 +27,12 @@ function effectivePaint(person: Element): { fill: string | null; stroke: string 
 }
 
 /** The palette's paint of a group's look, with pattern fills named by the chart's ids. */
-function expectedPaint(palette: ChartPalette, group: PersonGroup, wanted: boolean, idPrefix: string): { fill: string; stroke: string } {
+function expectedPaint(
+  palette: ChartPalette,
+  group: PersonGroup,
+  wanted: boolean,
+  idPrefix: string,
+): { fill: string; stroke: string } {
   const style = palette.groups[lookOf(group, wanted)];
   const fill = style.pattern === 'solid' ? style.fill : `url(#${idPrefix}-${style.pattern})`;
   return { fill, stroke: style.outline };
@@ -53,7 +61,9 @@ describe('drawn people', () => {
     for (const person of free) expect(person.getAttributeNames()).toEqual(['d', 'data-outcome']);
     expect(svg.querySelectorAll('g.people [style], g.people [transform], g.people [class]')).toHaveLength(0);
     // Every person's path starts at an absolute point of their own.
-    const starts = new Set([...svg.querySelectorAll('g.people > path')].map((person) => /^M[^a-z]+/.exec(person.getAttribute('d') ?? '')?.[0]));
+    const starts = new Set(
+      [...svg.querySelectorAll('g.people > path')].map((person) => /^M[^a-z]+/.exec(person.getAttribute('d') ?? '')?.[0]),
+    );
     expect(starts.size).toBe(1000);
   });
 });
@@ -113,6 +123,8 @@ describe('updated people', () => {
     const after = [...svg.querySelectorAll('path.swatch')];
     expect(after).toHaveLength(swatches.length);
     after.forEach((swatch, index) => expect(swatch).toBe(swatches[index]));
-    expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain('8 avoid a stroke because of option A');
+    expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain(
+      '8 avoid a stroke because of option A',
+    );
   });
 });

@@ -39,16 +39,22 @@ describe('renderChartSvg people', () => {
     [1000, 1000, 1000],
     [1000, 20, 30],
     [1000, 40, 40],
-  ] as const)('draws one element per person of each group, per %i with %i without and %i with the option', (denominator, comparison, intervention) => {
-    const model = outcomeChart(topicFixture(denominator, { comparison, intervention }), 'stroke');
-    const svg = drawIntoPage(model);
-    for (const index of [0, 1]) expect(drawnCounts(svg, index)).toEqual(expectedCounts(model, index));
-    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(denominator * 2);
-  });
+  ] as const)(
+    'draws one element per person of each group, per %i with %i without and %i with the option',
+    (denominator, comparison, intervention) => {
+      const model = outcomeChart(topicFixture(denominator, { comparison, intervention }), 'stroke');
+      const svg = drawIntoPage(model);
+      for (const index of [0, 1]) expect(drawnCounts(svg, index)).toEqual(expectedCounts(model, index));
+      expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(denominator * 2);
+    },
+  );
 
   // A bare pair: baseline 20%, RR 0.75 → 15% (p1 = p0 × RR; Cochrane Handbook 5.1, §12.5.4), per 100.
   it('draws 200 people for a bare pair of 20% and RR 0.75 per 100', () => {
-    const model = pairChart({ perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null } });
+    const model = pairChart({
+      perPeople: { denominator: 100, comparison: 20, intervention: 15, difference: 5, interventionRange: null },
+      risks: { comparison: 0.2, intervention: 0.15 },
+    });
     const svg = parseSvg(render(model));
     expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
     expect(drawnCounts(svg, 0)).toEqual({ event: 20, free: 80 });
@@ -94,7 +100,13 @@ describe('renderChartSvg accessibility', () => {
     const label = svg.getAttribute('aria-label') ?? '';
     const title = svg.querySelector('title')?.textContent ?? '';
     expect(title).toBe(label);
-    for (const text of ['19 have a stroke', '81 do not have a stroke', '15 have a stroke anyway', '4 avoid a stroke because of option A', 'between 12 and 18 of these 100']) {
+    for (const text of [
+      '19 have a stroke',
+      '81 do not have a stroke',
+      '15 have a stroke anyway',
+      '4 avoid a stroke because of option A',
+      'between 12 and 18 of these 100',
+    ]) {
       expect(label).toContain(text);
     }
   });
@@ -110,7 +122,7 @@ describe('renderChartSvg accessibility', () => {
       '95 do not have muscle pain',
     ]);
     expect([...svg.querySelectorAll('text.legend-note')].map(lineText)).toEqual([
-      'With option A, anywhere between 4 and 7 of these 100 could have muscle pain.',
+      'With option A, anywhere between 4 and 7 of these 100 could have muscle pain (range: 95% interval).',
     ]);
   });
 });
@@ -132,9 +144,14 @@ describe('renderChartSvg range', () => {
   // The outline marks people; it never moves them between groups, so the picture shows the
   // totals its legend gives (Ancker et al. 2006, JAMIA 13:608: part-to-whole graphics).
   it.each([false, true])('keeps every person’s group and paint when the outline is on (wanted event: %s)', (wanted) => {
-    const model = outcomeChart(topicFixture(100, { comparison: 20, intervention: 31, range: { lower: 24, upper: 40 }, wanted }), 'stroke');
+    const model = outcomeChart(
+      topicFixture(100, { comparison: 20, intervention: 31, range: { lower: 24, upper: 40 }, wanted }),
+      'stroke',
+    );
     const paint = (svg: SVGSVGElement) =>
-      [...svg.querySelectorAll('g.people > path')].map((person) => `${person.getAttribute('data-outcome')} ${person.getAttribute('fill')} ${person.getAttribute('stroke')}`);
+      [...svg.querySelectorAll('g.people > path')].map(
+        (person) => `${person.getAttribute('data-outcome')} ${person.getAttribute('fill')} ${person.getAttribute('stroke')}`,
+      );
     const plain = paint(drawIntoPage(model));
     const outlined = drawIntoPage(model, { showRange: true });
     expect(paint(outlined)).toEqual(plain);
@@ -148,12 +165,17 @@ describe('renderChartSvg range', () => {
 function ringedOutcomes(svg: SVGSVGElement, index: number): (string | null)[] {
   const array = svg.querySelectorAll('g.chart-array')[index]!;
   const people = [...array.querySelectorAll('g.people > path')];
-  return [...array.querySelectorAll('g.range-outline > rect')].map((ring) => people[Number(ring.getAttribute('data-index'))]?.getAttribute('data-outcome') ?? null);
+  return [...array.querySelectorAll('g.range-outline > rect')].map(
+    (ring) => people[Number(ring.getAttribute('data-index'))]?.getAttribute('data-outcome') ?? null,
+  );
 }
 
 describe('renderChartSvg output', () => {
   it('is byte-identical for the same input, with one data-outcome per person in the text', () => {
-    const model = outcomeChart(topicFixture(1000, { comparison: 125, intervention: 94, range: { lower: 80, upper: 110 } }), 'stroke');
+    const model = outcomeChart(
+      topicFixture(1000, { comparison: 125, intervention: 94, range: { lower: 80, upper: 110 } }),
+      'stroke',
+    );
     const text = render(model, { showRange: true });
     expect(render(model, { showRange: true })).toBe(text);
     const count = (group: string) => text.split(`data-outcome="${group}"`).length - 1;

@@ -6,7 +6,10 @@ import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
 
 const stroke = (comparison: number, intervention: number, denominator: 100 | 1000 = 100) =>
-  outcomeChart(topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }), 'stroke');
+  outcomeChart(
+    topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }),
+    'stroke',
+  );
 
 /** Paths of people whose attributes an action changed, seen by a MutationObserver. */
 async function touchedPeople(svg: SVGSVGElement, action: () => void): Promise<Set<Element>> {
@@ -47,7 +50,9 @@ describe('updateChart', () => {
     updateChart(svg, stroke(20, 12));
     expect(svg.getAttribute('aria-label')).toContain('8 avoid a stroke because of option A');
     expect(svg.querySelector('title')?.textContent).toContain('12 have a stroke anyway');
-    expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain('8 avoid a stroke because of option A');
+    expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain(
+      '8 avoid a stroke because of option A',
+    );
   });
 
   it('touches no one when nothing changed', () => {
@@ -98,7 +103,8 @@ describe('updateChart and the event’s direction', () => {
 describe('updateChart and the range outline', () => {
   it('gives only arrays with an interval an outline, and redraws when an interval goes away', () => {
     const svg = drawIntoPage(stroke(20, 15), { showRange: true });
-    const outlines = () => [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > g.range-outline') !== null);
+    const outlines = () =>
+      [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > g.range-outline') !== null);
     expect(outlines()).toEqual([false, true]);
     const noInterval = outcomeChart(topicFixture(100, { comparison: 20, intervention: 15, range: null }), 'stroke');
     expect(updateChart(svg, noInterval).redrawn).toBe(true);

@@ -11,8 +11,16 @@ import { renderChartSvg } from '../../../src/render/svg/render-chart-svg.ts';
 import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, lineText, outcomeCounts, parseSvg, testDocument } from './parse-svg.ts';
 
-const gained = () => outcomeChart(topicFixture(100, { comparison: 25, intervention: 45, range: { lower: 35, upper: 58 }, wanted: true, name: 'a response' }), 'stroke');
-const lost = () => outcomeChart(topicFixture(100, { comparison: 25, intervention: 18, range: { lower: 14, upper: 23 }, wanted: true, name: 'a response' }), 'stroke');
+const gained = () =>
+  outcomeChart(
+    topicFixture(100, { comparison: 25, intervention: 45, range: { lower: 35, upper: 58 }, wanted: true, name: 'a response' }),
+    'stroke',
+  );
+const lost = () =>
+  outcomeChart(
+    topicFixture(100, { comparison: 25, intervention: 18, range: { lower: 14, upper: 23 }, wanted: true, name: 'a response' }),
+    'stroke',
+  );
 
 /** The fill each group's people are drawn with in an array (own, or inherited from the people's group). */
 function fillsByGroup(svg: SVGSVGElement, index: number): Record<string, string[]> {
@@ -28,7 +36,9 @@ function fillsByGroup(svg: SVGSVGElement, index: number): Record<string, string[
 describe('a chart of a wanted event', () => {
   it('carries data-wanted on the root svg, true for a wanted event and false otherwise', () => {
     expect(parseSvg(renderChartSvg(gained(), { document: testDocument })).getAttribute('data-wanted')).toBe('true');
-    expect(parseSvg(renderChartSvg(outcomeChart(topicFixture(), 'stroke'), { document: testDocument })).getAttribute('data-wanted')).toBe('false');
+    expect(
+      parseSvg(renderChartSvg(outcomeChart(topicFixture(), 'stroke'), { document: testDocument })).getAttribute('data-wanted'),
+    ).toBe('false');
   });
 
   it('keeps the event meaning of data-outcome: the 20 who gain it are "caused"', () => {
@@ -38,7 +48,11 @@ describe('a chart of a wanted event', () => {
 
   it('draws people who gain a wanted event in the helped look: the dotted bluish green of prevented people in a chart of an event to avoid', () => {
     const svg = drawIntoPage(gained());
-    expect(fillsByGroup(svg, 1)).toEqual({ event: [OKABE_ITO.blue], caused: ['url(#chart-stroke-dots)'], free: [colourPalette.groups.free.fill] });
+    expect(fillsByGroup(svg, 1)).toEqual({
+      event: [OKABE_ITO.blue],
+      caused: ['url(#chart-stroke-dots)'],
+      free: [colourPalette.groups.free.fill],
+    });
     const unwanted = drawIntoPage(outcomeChart(topicFixture(), 'stroke'));
     expect(fillsByGroup(unwanted, 1).prevented).toEqual(['url(#chart-stroke-dots)']);
     // The dot pattern is filled with the helped colour.
@@ -54,23 +68,21 @@ describe('a chart of a wanted event', () => {
 
   it('gives the legend swatches the looks of their groups', () => {
     const svg = drawIntoPage(gained());
-    const swatches = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('path.swatch')].map((swatch) => swatch.getAttribute('data-look'));
+    const swatches = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('path.swatch')].map((swatch) =>
+      swatch.getAttribute('data-look'),
+    );
     expect(swatches).toEqual(['event', 'helped', 'free']);
     const lostSwatches = [...drawIntoPage(lost()).querySelectorAll('g.chart-array')[1]!.querySelectorAll('path.swatch')];
     expect(lostSwatches.map((swatch) => swatch.getAttribute('data-look'))).toEqual(['event', 'harmed', 'free']);
   });
 
   it('labels the groups with words for a good event: has it anyway, has it because of the option, misses out, does not have it', () => {
-    expect([...drawIntoPage(gained()).querySelectorAll('g.chart-array')[1]!.querySelectorAll('text.legend-label')].map(lineText)).toEqual([
-      '25 have a response anyway',
-      '20 have a response because of option A',
-      '55 do not have a response',
-    ]);
-    expect([...drawIntoPage(lost()).querySelectorAll('g.chart-array')[1]!.querySelectorAll('text.legend-label')].map(lineText)).toEqual([
-      '18 have a response anyway',
-      '7 miss out on a response because of option A',
-      '75 do not have a response',
-    ]);
+    expect(
+      [...drawIntoPage(gained()).querySelectorAll('g.chart-array')[1]!.querySelectorAll('text.legend-label')].map(lineText),
+    ).toEqual(['25 have a response anyway', '20 have a response because of option A', '55 do not have a response']);
+    expect(
+      [...drawIntoPage(lost()).querySelectorAll('g.chart-array')[1]!.querySelectorAll('text.legend-label')].map(lineText),
+    ).toEqual(['18 have a response anyway', '7 miss out on a response because of option A', '75 do not have a response']);
   });
 
   it('writes a text alternative with every count and no word of avoiding, causing or risk', () => {

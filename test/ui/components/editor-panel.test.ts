@@ -33,7 +33,9 @@ describe('EditorPanel', () => {
     fireEvent.input(baseline, { target: { value: '150%' } });
     flushSync();
     expect(baseline.getAttribute('aria-invalid')).toBe('true');
-    const described = (baseline.getAttribute('aria-describedby') ?? '').split(' ').map((id) => document.getElementById(id)?.textContent ?? '');
+    const described = (baseline.getAttribute('aria-describedby') ?? '')
+      .split(' ')
+      .map((id) => document.getElementById(id)?.textContent ?? '');
     expect(described.join(' ')).toContain('A risk of "150%" is outside 0% to 100%');
     expect(screen.getByText(/1 thing to fix before the results can update/)).toBeTruthy();
     expect(editor.draft.outcomes[0]?.baselineRisk).toBe('150%');

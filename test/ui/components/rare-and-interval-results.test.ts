@@ -42,7 +42,9 @@ function results(topic: Topic, per: WordsDenominator | null = null) {
 }
 
 const limits = (level: string) =>
-  [`Lower limit of the ${level} interval`, `Upper limit of the ${level} interval`].map((name) => screen.getByLabelText(name) as HTMLInputElement);
+  [`Lower limit of the ${level} interval`, `Upper limit of the ${level} interval`].map(
+    (name) => screen.getByLabelText(name) as HTMLInputElement,
+  );
 
 const describedBy = (element: Element) =>
   (element.getAttribute('aria-describedby') ?? '')
@@ -75,7 +77,15 @@ describe('the results of a rare outcome', () => {
   });
 
   test('say that the words count per more people than the pictures show', () => {
-    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(RARE)), onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
+    render(ResultsPanel, {
+      props: {
+        editor: new TopicEditor(draftFromTopic(RARE)),
+        onexport: noop,
+        onhandout: noop,
+        onprint: noop,
+        handoutBusy: false,
+      },
+    });
     const basis = document.querySelector('.basis')?.textContent?.replace(/\s+/g, ' ').trim();
     expect(basis).toBe(
       'The pictures show 1000 people like this, over 1 year; the tables and words count per 10,000, because out of 1000 a difference would show as no one. Headline first.',
@@ -95,7 +105,15 @@ describe('a topic with 90% intervals', () => {
     results(NINETY);
     expect(screen.getByRole('row', { name: /the tablet/ }).textContent).toContain('ranges: 90% interval');
     cleanup();
-    render(ResultsPanel, { props: { editor: new TopicEditor(draftFromTopic(NINETY)), onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
+    render(ResultsPanel, {
+      props: {
+        editor: new TopicEditor(draftFromTopic(NINETY)),
+        onexport: noop,
+        onhandout: noop,
+        onprint: noop,
+        handoutBusy: false,
+      },
+    });
     expect(document.querySelector('.footnote')?.textContent).toContain('Ranges are 90% intervals for the effect');
   });
 });
@@ -110,7 +128,9 @@ describe('an interval whose limits are the wrong way round', () => {
     flushSync();
     for (const box of [lower!, upper!]) {
       expect(box.getAttribute('aria-invalid')).toBe('true');
-      expect(describedBy(box)).toContain('The limits are the wrong way round: the lower limit, 0.9, is above the upper limit, 0.7.');
+      expect(describedBy(box)).toContain(
+        'The limits are the wrong way round: the lower limit, 0.9, is above the upper limit, 0.7.',
+      );
     }
     expect(editor.check.result).toBeNull();
     fireEvent.input(lower!, { target: { value: '0.7' } });
@@ -151,7 +171,12 @@ describe('an interval whose limits are the wrong way round', () => {
 describe('the list of problems', () => {
   test('puts a space between where a problem is and what it is', () => {
     const draft = draftFromTopic(RARE);
-    const found = { key: optionKey('tablet'), problem: { code: 'topic-text-missing' as const, field: 'options.1.name', values: {} }, message: 'The option name is empty.', needed: false };
+    const found = {
+      key: optionKey('tablet'),
+      problem: { code: 'topic-text-missing' as const, field: 'options.1.name', values: {} },
+      message: 'The option name is empty.',
+      needed: false,
+    };
     render(ProblemSummary, { props: { problems: [found], draft } });
     expect(screen.getByRole('link').textContent).toBe('Option 2: The option name is empty.');
   });

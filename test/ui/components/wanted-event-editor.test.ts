@@ -53,7 +53,12 @@ describe('the editor of a wanted event', () => {
     expect(screen.getByLabelText('Over what period')).toHaveProperty('value', '3');
     const unit = screen.getByLabelText('Over what period: unit') as HTMLSelectElement;
     expect(unit.value).toBe('days');
-    expect(screen.getAllByLabelText('Follow-up: unit').map((found) => (found as HTMLSelectElement).value)).toEqual(['days', 'days', 'weeks', 'weeks']);
+    expect(screen.getAllByLabelText('Follow-up: unit').map((found) => (found as HTMLSelectElement).value)).toEqual([
+      'days',
+      'days',
+      'weeks',
+      'weeks',
+    ]);
     fireEvent.change(unit, { target: { value: 'weeks' } });
     flushSync();
     expect([editor.draft.periodYears, editor.draft.periodUnit]).toEqual(['3', 'weeks']);
@@ -62,7 +67,9 @@ describe('the editor of a wanted event', () => {
 
   test('lets an effect be given for the opposite event, in plain words', () => {
     const editor = setUp();
-    const boxes = screen.getAllByRole('checkbox', { name: 'This number is for the opposite: not having “a pain-free throat”' }) as HTMLInputElement[];
+    const boxes = screen.getAllByRole('checkbox', {
+      name: 'This number is for the opposite: not having “a pain-free throat”',
+    }) as HTMLInputElement[];
     // One steroid tablet's ratio is for a pain-free throat; the lozenges' for still having pain.
     expect(boxes.map((box) => box.checked)).toEqual([false, true]);
     expect(screen.getByText(/applied to the chance of not having the outcome/)).toBeTruthy();

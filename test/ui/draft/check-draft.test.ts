@@ -1,13 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { checkDraft } from '../../../src/ui/draft/check-draft.ts';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import {
-  blankDraft,
-  setEffectField,
-  setOptionName,
-  setOutcomeText,
-  setTopicText,
-} from '../../../src/ui/draft/draft-edits.ts';
+import { blankDraft, setEffectField, setOptionName, setOutcomeText, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { effectKey, outcomeKey } from '../../../src/ui/draft/field-keys.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
@@ -67,7 +61,12 @@ describe('checkDraft', () => {
   test('reports a trial arm with more events than people once, at that arm', () => {
     let draft = simpleDraft('', '');
     draft = setEffectField(draft, 'outcome-1', 'option-1', 'measure', 'counts');
-    for (const [field, value] of [['interventionEvents', '30'], ['interventionTotal', '20'], ['comparisonEvents', '5'], ['comparisonTotal', '20']] as const) {
+    for (const [field, value] of [
+      ['interventionEvents', '30'],
+      ['interventionTotal', '20'],
+      ['comparisonEvents', '5'],
+      ['comparisonTotal', '20'],
+    ] as const) {
       draft = setEffectField(draft, 'outcome-1', 'option-1', field, value);
     }
     const check = checkDraft(draft);

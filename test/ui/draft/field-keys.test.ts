@@ -73,12 +73,17 @@ describe('fieldPlace', () => {
   test('names where a field is, for a list of problems', () => {
     expect(fieldPlace('options.citrate.name', draft)).toBe('Option 3');
     expect(fieldPlace(outcomeKey('night', 'baseline.risk'), draft)).toBe('broken sleep from passing urine at night');
-    expect(fieldPlace(effectKey('stomach', 'water', 'estimate'), draft)).toBe('an upset stomach bad enough to stop, effect of extra water each day');
+    expect(fieldPlace(effectKey('stomach', 'water', 'estimate'), draft)).toBe(
+      'an upset stomach bad enough to stop, effect of extra water each day',
+    );
     expect(fieldPlace('title', draft)).toBeNull();
   });
 
   test('falls back to a number for what has no name yet', () => {
-    const unnamed = { ...draft, outcomes: draft.outcomes.map((outcome, index) => (index === 1 ? { ...outcome, name: ' ' } : outcome)) };
+    const unnamed = {
+      ...draft,
+      outcomes: draft.outcomes.map((outcome, index) => (index === 1 ? { ...outcome, name: ' ' } : outcome)),
+    };
     expect(fieldPlace(outcomeKey('night', 'name'), unnamed)).toBe('Outcome 2');
   });
 });

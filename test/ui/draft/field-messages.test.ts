@@ -17,7 +17,9 @@ const edit = (field: Parameters<typeof setEffectField>[3], value: string, draft:
   setEffectField(draft, 'bleed', 'tablet', field, value as never);
 const intervalKey = effectKey('bleed', 'tablet', 'interval');
 const messagesAt = (draft: TopicDraft, key: string) =>
-  checkDraft(draft).problems.filter((found) => found.key === key).map((found) => found.message);
+  checkDraft(draft)
+    .problems.filter((found) => found.key === key)
+    .map((found) => found.message);
 
 describe('the editor’s messages for an interval', () => {
   test('say which limit is which when they are the wrong way round, with the numbers as typed', () => {
@@ -66,7 +68,9 @@ describe('the editor’s messages for trial counts and periods', () => {
   test('quote a period too long in the unit it was typed in', () => {
     const draft = setOutcomeText(base, 'bleed', 'baselinePeriodYears', '6000');
     const weeks = { ...draft, outcomes: draft.outcomes.map((outcome) => ({ ...outcome, baselinePeriodUnit: 'weeks' as const })) };
-    expect(messagesAt(weeks, 'outcomes.bleed.baseline.periodYears')).toEqual(['A period of “6000” weeks is too long: write at most 100 years.']);
+    expect(messagesAt(weeks, 'outcomes.bleed.baseline.periodYears')).toEqual([
+      'A period of “6000” weeks is too long: write at most 100 years.',
+    ]);
   });
 });
 

@@ -111,7 +111,13 @@ describe('an effect reported for the opposite event', () => {
   test('an odds ratio of 0.5 for not having it is an odds ratio of 2 for having it', () => {
     // The odds of the opposite event are the reciprocal odds (common practice): at 40%, odds 2/3 × 2 = 4/3, a risk of 4/7.
     let draft = setEffectField(filled(), 'outcome-1', 'option-1', 'measure', 'or');
-    draft = setEffectField(setEffectField(draft, 'outcome-1', 'option-1', 'estimate', '0.5'), 'outcome-1', 'option-1', 'opposite', true);
+    draft = setEffectField(
+      setEffectField(draft, 'outcome-1', 'option-1', 'estimate', '0.5'),
+      'outcome-1',
+      'option-1',
+      'opposite',
+      true,
+    );
     const check = checkDraft(draft, { per: 100 });
     expect(outcomeOf(check.topic).effects[0]?.effect).toMatchObject({ measure: 'or', estimate: 0.5, opposite: true });
     const option = check.result?.outcomes[0]?.options.find((found) => !found.isComparison);
@@ -122,8 +128,14 @@ describe('an effect reported for the opposite event', () => {
   test('trial counts of the opposite event are turned into counts of the event', () => {
     // 30 of 100 still in pain with the option and 60 of 100 without: 70% and 40% have the wanted event.
     let draft = setEffectField(filled(), 'outcome-1', 'option-1', 'measure', 'counts');
-    const counts = { interventionEvents: '30', interventionTotal: '100', comparisonEvents: '60', comparisonTotal: '100' } as const;
-    for (const [field, value] of Object.entries(counts)) draft = setEffectField(draft, 'outcome-1', 'option-1', field as keyof typeof counts, value);
+    const counts = {
+      interventionEvents: '30',
+      interventionTotal: '100',
+      comparisonEvents: '60',
+      comparisonTotal: '100',
+    } as const;
+    for (const [field, value] of Object.entries(counts))
+      draft = setEffectField(draft, 'outcome-1', 'option-1', field as keyof typeof counts, value);
     draft = setOutcomeText(setEffectField(draft, 'outcome-1', 'option-1', 'opposite', true), 'outcome-1', 'baselineRisk', '');
     const check = checkDraft(setOutcomeWanted(draft, 'outcome-1', true), { per: 100 });
     const option = check.result?.outcomes[0]?.options.find((found) => !found.isComparison);
@@ -139,7 +151,10 @@ describe('saving and opening', () => {
     draft = setEffectField(draft, 'outcome-1', 'option-1', 'opposite', true);
     const saved = topicFileText(draft, false);
     if (!saved.ok) throw new Error(saved.message);
-    const file = JSON.parse(saved.text) as { version: number; topic: { periodUnit: string; outcomes: { wanted: boolean; effects: { effect: { opposite: boolean } }[] }[] } };
+    const file = JSON.parse(saved.text) as {
+      version: number;
+      topic: { periodUnit: string; outcomes: { wanted: boolean; effects: { effect: { opposite: boolean } }[] }[] };
+    };
     expect(file.version).toBe(4);
     expect(file.topic.periodUnit).toBe('days');
     expect(file.topic.outcomes[0]?.wanted).toBe(true);
@@ -147,7 +162,13 @@ describe('saving and opening', () => {
     const opened = openTopicText('throat.cwtopic', saved.text);
     if (!opened.ok) throw new Error(opened.message);
     // The blank draft's effect of the comparison is not a part of the topic, so it is not saved.
-    const saveable = { ...draft, outcomes: draft.outcomes.map((outcome) => ({ ...outcome, effects: outcome.effects.filter((entry) => entry.optionId !== 'comparison') })) };
+    const saveable = {
+      ...draft,
+      outcomes: draft.outcomes.map((outcome) => ({
+        ...outcome,
+        effects: outcome.effects.filter((entry) => entry.optionId !== 'comparison'),
+      })),
+    };
     expect(opened.draft).toEqual(saveable);
     const reading = readTopicFile(saved.text);
     expect(reading.ok && reading.topic).toEqual(topicFromDraft(draft).topic);

@@ -9,11 +9,14 @@ if (first === undefined) throw new Error('no demonstration topic');
 const draft = draftFromTopic(first.topic);
 
 describe('topicFromDraft', () => {
-  test.each(DEMO_TOPICS.map((demo) => [demo.fileName, demo]))('gives back the very topic a draft was made from (%s)', (_, demo) => {
-    const reading = topicFromDraft(draftFromTopic(demo.topic));
-    expect(reading.problems).toEqual([]);
-    expect(reading.topic).toEqual({ ...demo.topic, patient: demo.topic.patient ?? null });
-  });
+  test.each(DEMO_TOPICS.map((demo) => [demo.fileName, demo]))(
+    'gives back the very topic a draft was made from (%s)',
+    (_, demo) => {
+      const reading = topicFromDraft(draftFromTopic(demo.topic));
+      expect(reading.problems).toEqual([]);
+      expect(reading.topic).toEqual({ ...demo.topic, patient: demo.topic.patient ?? null });
+    },
+  );
 
   test('reads an absolute reduction typed in percentage points as a proportion', () => {
     const edited = setEffectField(setEffectField(draft, 'stone', 'water', 'measure', 'arr'), 'stone', 'water', 'estimate', '3');

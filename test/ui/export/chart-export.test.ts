@@ -30,7 +30,10 @@ describe('chartSvgFile', () => {
 
   it('says whether the event is wanted on the root', () => {
     expect(chartSvgFile(model, document)).toMatch(/<svg [^>]*data-wanted="false"/);
-    const wanted = outcomeChart(topicFixture(100, { comparison: 25, intervention: 45, wanted: true, name: 'a response' }), 'stroke');
+    const wanted = outcomeChart(
+      topicFixture(100, { comparison: 25, intervention: 45, wanted: true, name: 'a response' }),
+      'stroke',
+    );
     expect(chartSvgFile(wanted, document)).toMatch(/<svg [^>]*data-wanted="true"/);
   });
 });

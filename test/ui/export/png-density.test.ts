@@ -12,7 +12,14 @@ function minimalPng(): Uint8Array {
     return [...length, ...body, (crc >>> 24) & 255, (crc >>> 16) & 255, (crc >>> 8) & 255, crc & 255];
   };
   return new Uint8Array([
-    0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a,
+    0x89,
+    0x50,
+    0x4e,
+    0x47,
+    0x0d,
+    0x0a,
+    0x1a,
+    0x0a,
     ...chunk('IHDR', [0, 0, 0, 1, 0, 0, 0, 1, 8, 0, 0, 0, 0]),
     ...chunk('IDAT', [0x78, 0x9c, 0x63, 0x00, 0x00, 0x00, 0x01, 0x00, 0x01]),
     ...chunk('IEND', []),
@@ -22,9 +29,12 @@ function minimalPng(): Uint8Array {
 function chunks(png: Uint8Array): { type: string; data: Uint8Array }[] {
   const view = new DataView(png.buffer, png.byteOffset, png.byteLength);
   const found: { type: string; data: Uint8Array }[] = [];
-  for (let offset = 8; offset < png.length; ) {
+  for (let offset = 8; offset < png.length;) {
     const length = view.getUint32(offset);
-    found.push({ type: String.fromCharCode(...png.subarray(offset + 4, offset + 8)), data: png.subarray(offset + 8, offset + 8 + length) });
+    found.push({
+      type: String.fromCharCode(...png.subarray(offset + 4, offset + 8)),
+      data: png.subarray(offset + 8, offset + 8 + length),
+    });
     offset += 12 + length;
   }
   return found;

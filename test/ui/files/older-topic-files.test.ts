@@ -11,7 +11,10 @@ const fixture = (name: string): string => readFileSync(new URL(`../../fixtures/t
 
 /** The key numbers as rows of [option, people, change, NNT]. */
 const rows = (result: TopicResult) =>
-  keyNumberTables(result).map((table) => [table.outcomeId, table.rows.map((row) => [row.name, row.people.value, row.change?.value ?? null, row.nnt?.value ?? null])]);
+  keyNumberTables(result).map((table) => [
+    table.outcomeId,
+    table.rows.map((row) => [row.name, row.people.value, row.change?.value ?? null, row.nnt?.value ?? null]),
+  ]);
 
 /**
  * Expected numbers by hand. Baselines over another period follow a constant hazard,
@@ -26,8 +29,20 @@ const CASES = [
     // 1 − 0.95^(5/10) = 2.532%, × 0.7 = 1.772%: 3 and 2 in 100, NNTB ⌈1/0.007596⌉ = 132.
     // 3% + 2 points = 5%: 3 and 5 in 100, NNTH ⌊1/0.02⌋ = 50.
     rows: [
-      ['stroke', [['no tablet', '3', null, null], ['the tablet', '2', '1 fewer', 'NNTB 132']]],
-      ['dizzy', [['no tablet', '3', null, null], ['the tablet', '5', '2 more', 'NNTH 50']]],
+      [
+        'stroke',
+        [
+          ['no tablet', '3', null, null],
+          ['the tablet', '2', '1 fewer', 'NNTB 132'],
+        ],
+      ],
+      [
+        'dizzy',
+        [
+          ['no tablet', '3', null, null],
+          ['the tablet', '5', '2 more', 'NNTH 50'],
+        ],
+      ],
     ],
   },
   {
@@ -36,8 +51,20 @@ const CASES = [
     // 1 − 0.8^(1/2) = 10.557%, × 0.75 = 7.918%: 11 and 8 in 100, NNTB ⌈1/0.026393⌉ = 38.
     // Odds 1/9 × 2 = 2/9, a risk of 2/11 = 18.18%: 10 and 18 in 100, NNTH ⌊1/0.081818⌋ = 12.
     rows: [
-      ['fall', [['no programme', '11', null, null], ['the exercise programme', '8', '3 fewer', 'NNTB 38']]],
-      ['sore', [['no programme', '10', null, null], ['the exercise programme', '18', '8 more', 'NNTH 12']]],
+      [
+        'fall',
+        [
+          ['no programme', '11', null, null],
+          ['the exercise programme', '8', '3 fewer', 'NNTB 38'],
+        ],
+      ],
+      [
+        'sore',
+        [
+          ['no programme', '10', null, null],
+          ['the exercise programme', '18', '8 more', 'NNTH 12'],
+        ],
+      ],
     ],
   },
 ] as const;
@@ -51,7 +78,9 @@ describe('older topic files', () => {
       [false, 'years'],
       [false, 'years'],
     ]);
-    expect(opened.draft.outcomes.flatMap((outcome) => outcome.effects.map((entry) => [entry.opposite, entry.followUpUnit]))).toEqual([
+    expect(
+      opened.draft.outcomes.flatMap((outcome) => outcome.effects.map((entry) => [entry.opposite, entry.followUpUnit])),
+    ).toEqual([
       [false, 'years'],
       [false, 'years'],
     ]);

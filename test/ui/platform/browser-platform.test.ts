@@ -33,7 +33,9 @@ describe('pickTextFile()', () => {
     const file = new File(['x'], 'holiday-video.json');
     Object.defineProperty(file, 'size', { value: 500 * 1024 * 1024 });
     const text = vi.spyOn(file, 'text');
-    await expect(pick(file)).rejects.toThrow('“holiday-video.json” is 524.3 MB, larger than a Chancewise file can be (4 MB), so it was not opened.');
+    await expect(pick(file)).rejects.toThrow(
+      '“holiday-video.json” is 524.3 MB, larger than a Chancewise file can be (4 MB), so it was not opened.',
+    );
     expect(text).not.toHaveBeenCalled();
   });
 });

@@ -23,14 +23,20 @@ function fakeShell(overrides: Partial<ChancewiseShellApi> = {}) {
     onDocument: (listener) => ((documentListener = listener), () => undefined),
     ...overrides,
   };
-  return { shell, calls, send: { command: (c: ShellCommand) => commandListener?.(c), document: (d: IncomingDocument) => documentListener?.(d) } };
+  return {
+    shell,
+    calls,
+    send: { command: (c: ShellCommand) => commandListener?.(c), document: (d: IncomingDocument) => documentListener?.(d) },
+  };
 }
 
 describe('desktopPlatform', () => {
   test('prints the handout by sending its PDF to the shell, which opens it in the system’s viewer', async () => {
     const { shell, calls } = fakeShell();
     const platform = desktopPlatform(shell);
-    expect(await platform.printHandout('topic-handout.pdf', async () => new Uint8Array([37, 80, 68, 70, 45]))).toBe('topic-handout.pdf');
+    expect(await platform.printHandout('topic-handout.pdf', async () => new Uint8Array([37, 80, 68, 70, 45]))).toBe(
+      'topic-handout.pdf',
+    );
     expect(await platform.printHandout('nothing.pdf', async () => null)).toBeNull();
     expect(calls).toEqual([['printHandout', 'topic-handout.pdf']]);
   });
@@ -48,7 +54,8 @@ describe('desktopPlatform', () => {
 
   test('turns a refused request into an error carrying the shell’s sentence', async () => {
     const { shell } = fakeShell({
-      openDocument: () => Promise.resolve({ ok: false, error: { code: 'not-a-topic-file', message: 'That file is not a topic.' } }),
+      openDocument: () =>
+        Promise.resolve({ ok: false, error: { code: 'not-a-topic-file', message: 'That file is not a topic.' } }),
     });
     await expect(desktopPlatform(shell).openTopicFile()).rejects.toThrow('That file is not a topic.');
   });

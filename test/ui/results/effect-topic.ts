@@ -63,4 +63,7 @@ export function effectTopic(spec: EffectTopicSpec): Topic {
 export const RARE = effectTopic({ baseline: 0.001, effect: { measure: 'hr', estimate: 0.8, lower: 0.7, upper: 0.9 } });
 
 /** Baseline 30%, risk ratio 0.92 with a 90% interval 0.85 to 0.99. */
-export const NINETY = effectTopic({ baseline: '30%', effect: { measure: 'rr', estimate: 0.92, lower: 0.85, upper: 0.99, level: 0.9 } });
+export const NINETY = effectTopic({
+  baseline: '30%',
+  effect: { measure: 'rr', estimate: 0.92, lower: 0.85, upper: 0.99, level: 0.9 },
+});

@@ -97,7 +97,12 @@ describe('words for changes and levels', () => {
 
   test('write a risk that is not 0 so it never reads 0%', () => {
     // Two significant figures below 1% (common practice, as the command line writes them).
-    expect([riskPercent(0.0004), riskPercent(0.000012), riskPercent(0), riskPercent(0.1125)]).toEqual(['0.04%', '0.0012%', '0%', '11.3%']);
+    expect([riskPercent(0.0004), riskPercent(0.000012), riskPercent(0), riskPercent(0.1125)]).toEqual([
+      '0.04%',
+      '0.0012%',
+      '0%',
+      '11.3%',
+    ]);
   });
 
   test('write a level as a percentage, the default 95%', () => {

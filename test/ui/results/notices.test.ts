@@ -32,7 +32,10 @@ describe('warnings on the typed texts', () => {
 
   test('repeated warnings are shown once', () => {
     const result = computeTopic(demo.topic);
-    const hardKey = patientTextsKey({ ...draft, title: 'Pharmacological cardiovascular prophylaxis necessitates individualised evaluation considerations.' });
+    const hardKey = patientTextsKey({
+      ...draft,
+      title: 'Pharmacological cardiovascular prophylaxis necessitates individualised evaluation considerations.',
+    });
     const notices = readingNoticesFor(hardKey);
     expect(resultWarnings(result, [...notices, ...notices])).toEqual(resultWarnings(result, notices));
   });

@@ -6,13 +6,18 @@ import { patientReadingGrade } from '../../../src/ui/results/reading-grade.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 
 describe('patientReadingGrade', () => {
-  test.each(DEMO_TOPICS.map((demo) => [demo.fileName, demo]))('equals the Flesch–Kincaid grade of the whole patient wording (%s)', (_, demo) => {
-    // Flesch–Kincaid grade = 0.39 × words/sentences + 11.8 × syllables/words − 15.59 (Kincaid et al. 1975),
-    // computed here once over the joined text, and by the app from per-sentence counts.
-    const result = computeTopic(demo.topic);
-    const joined = handoutSentences(result, { showNnt: false }).map((sentence) => sentence.text).join(' ');
-    const whole = readability(joined).grade;
-    expect(whole).not.toBeNull();
-    expect(patientReadingGrade(result).grade).toBeCloseTo(Math.round((whole ?? 0) * 10) / 10, 10);
-  });
+  test.each(DEMO_TOPICS.map((demo) => [demo.fileName, demo]))(
+    'equals the Flesch–Kincaid grade of the whole patient wording (%s)',
+    (_, demo) => {
+      // Flesch–Kincaid grade = 0.39 × words/sentences + 11.8 × syllables/words − 15.59 (Kincaid et al. 1975),
+      // computed here once over the joined text, and by the app from per-sentence counts.
+      const result = computeTopic(demo.topic);
+      const joined = handoutSentences(result, { showNnt: false })
+        .map((sentence) => sentence.text)
+        .join(' ');
+      const whole = readability(joined).grade;
+      expect(whole).not.toBeNull();
+      expect(patientReadingGrade(result).grade).toBeCloseTo(Math.round((whole ?? 0) * 10) / 10, 10);
+    },
+  );
 });

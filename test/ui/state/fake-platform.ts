@@ -1,5 +1,11 @@
 /** A platform for the state tests: memory storage, and files the test hands over or receives. */
-import type { OpenedFile, Platform, PlatformCommand, PlatformDocument, PlatformEvents } from '../../../src/ui/platform/platform.ts';
+import type {
+  OpenedFile,
+  Platform,
+  PlatformCommand,
+  PlatformDocument,
+  PlatformEvents,
+} from '../../../src/ui/platform/platform.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 
 export interface FakePlatform extends Platform {

@@ -1,7 +1,10 @@
 import { describe, expect, test } from 'vitest';
 import { shortcutFor } from '../../../src/ui/state/shortcuts.ts';
 
-const press = (key: string, modifiers: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }> = {}) => ({
+const press = (
+  key: string,
+  modifiers: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }> = {},
+) => ({
   key,
   ctrlKey: false,
   metaKey: false,

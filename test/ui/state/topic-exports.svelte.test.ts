@@ -83,7 +83,10 @@ describe('TopicExports', () => {
     await exports.printHandout();
     expect(loads()).toBe(0);
     expect(platform.printedHandouts).toHaveLength(0);
-    expect(messages.message).toEqual({ tone: 'error', text: 'Fix the marked fields first: the handout is only made from up-to-date results.' });
+    expect(messages.message).toEqual({
+      tone: 'error',
+      text: 'Fix the marked fields first: the handout is only made from up-to-date results.',
+    });
   });
 
   it('says when the handout could not be printed, in the shell’s own words', async () => {

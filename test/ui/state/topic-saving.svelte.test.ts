@@ -74,7 +74,10 @@ describe('TopicSaving', () => {
     expect(topic.editor.fileName).toBeNull();
     platform.saveAnswer = () => new Error('The folder is read-only.');
     await saving.save('stone', false);
-    expect(messages.message).toEqual({ tone: 'error', text: 'The topic was not saved: The folder is read-only. Your work is still here.' });
+    expect(messages.message).toEqual({
+      tone: 'error',
+      text: 'The topic was not saved: The folder is read-only. Your work is still here.',
+    });
     expect(topic.editor.draft.title).toBe(stoneTitle);
   });
 

@@ -5,9 +5,14 @@ import { slideFileName } from '../../../src/ui/teaching/slide-export.ts';
 
 describe('a slide file', () => {
   it('names the file after the presentation, the slide number and the step', () => {
-    expect(slideFileName('Taking a daily tablet to lower the chance of a heart attack (illustrative example)', 3, 'with-option', 'png')).toBe(
-      'taking-a-daily-tablet-to-lower-03-with-option.png',
-    );
+    expect(
+      slideFileName(
+        'Taking a daily tablet to lower the chance of a heart attack (illustrative example)',
+        3,
+        'with-option',
+        'png',
+      ),
+    ).toBe('taking-a-daily-tablet-to-lower-03-with-option.png');
     expect(slideFileName('¿?', 12, 'framing', 'svg')).toBe('teaching-12-framing.svg');
   });
 });

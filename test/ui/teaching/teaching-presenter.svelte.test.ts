@@ -17,7 +17,10 @@ interface Saved {
 }
 
 /** A presenter of the kidney stone demonstration topic on a platform the test answers for. */
-function setUp(answers: { save?: (name: string) => Promise<string | null>; pick?: () => Promise<OpenedFile | null> } = {}, topic: Topic = demoTopic(STONE)) {
+function setUp(
+  answers: { save?: (name: string) => Promise<string | null>; pick?: () => Promise<OpenedFile | null> } = {},
+  topic: Topic = demoTopic(STONE),
+) {
   const saved: Saved[] = [];
   let left = 0;
   let focused = 0;
@@ -56,10 +59,14 @@ describe('TeachingPresenter', () => {
     const topic = demoTopic(STONE);
     const broken: Topic = {
       ...topic,
-      outcomes: topic.outcomes.map((outcome, index) => (index === 0 ? { ...outcome, baseline: { ...outcome.baseline, risk: '5/0' } } : outcome)),
+      outcomes: topic.outcomes.map((outcome, index) =>
+        index === 0 ? { ...outcome, baseline: { ...outcome.baseline, risk: '5/0' } } : outcome,
+      ),
     };
     const { presenter } = setUp({}, broken);
-    expect(presenter.problem).toBe('This topic cannot be presented yet: "5/0" divides by zero. The number of people must be at least 1.');
+    expect(presenter.problem).toBe(
+      'This topic cannot be presented yet: "5/0" divides by zero. The number of people must be at least 1.',
+    );
     expect(presenter.session.total).toBe(0);
     expect(presenter.announcement).toBe('');
   });
@@ -100,7 +107,10 @@ describe('TeachingPresenter', () => {
     await presenter.openExample();
     expect(presenter.session.index).toBe(0);
     expect(presenter.session.title).toBe('Framing and format: two illustrative topics');
-    expect(presenter.message).toEqual({ tone: 'info', text: 'Opened the teaching set “Framing and format: two illustrative topics”: 2 topics.' });
+    expect(presenter.message).toEqual({
+      tone: 'info',
+      text: 'Opened the teaching set “Framing and format: two illustrative topics”: 2 topics.',
+    });
     expect(presenter.progressLabel).toMatch(/^Slide 1 of \d+, topic 1 of 2$/);
     expect(focused()).toBe(1);
     presenter.step('previous');

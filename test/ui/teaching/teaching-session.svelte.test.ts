@@ -89,8 +89,14 @@ describe('TeachingSession', () => {
         version: 1,
         title: 'Two topics',
         items: [
-          { topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(STONE) })), steps: ['title', 'helped'] },
-          { topic: { format: 'chancewise-topic', version: 2, topic: demoTopic(SCREENING) }, steps: ['title', 'harmed', 'framing'] },
+          {
+            topic: JSON.parse(JSON.stringify({ format: 'chancewise-topic', version: 2, topic: demoTopic(STONE) })),
+            steps: ['title', 'helped'],
+          },
+          {
+            topic: { format: 'chancewise-topic', version: 2, topic: demoTopic(SCREENING) },
+            steps: ['title', 'harmed', 'framing'],
+          },
         ],
       }),
     );
@@ -121,7 +127,11 @@ describe('TeachingSession', () => {
     const reading = readTeachingSet('saved.json', session.setFileText());
     if (!reading.ok) throw new Error(reading.message);
     expect(reading.set.title).toBe('Saved');
-    expect(reading.set.items[0]).toMatchObject({ option: 'citrate', steps: ['helped', 'framing'], source: { kind: 'embedded', topic: demoTopic(STONE) } });
+    expect(reading.set.items[0]).toMatchObject({
+      option: 'citrate',
+      steps: ['helped', 'framing'],
+      source: { kind: 'embedded', topic: demoTopic(STONE) },
+    });
   });
 
   it('presents a copy: stepping through never changes the topic it was given', () => {

@@ -17,7 +17,8 @@ export const cliMessages = {
   notWithTopic: (flag: string) => `${flag} cannot be used with a topic file or --demo: the topic holds its own numbers.`,
   topicAndDemo: () => 'Give a topic file or --demo, not both.',
   overAndTo: () => 'Give both --over YEARS (the period the baseline covers) and --to YEARS (the period wanted), or neither.',
-  periodsWithArr: () => '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
+  periodsWithArr: () =>
+    '--over and --to cannot be used with --arr: an absolute reduction belongs to one period. Convert it first.',
   levelWithoutInterval: () => '--level is the level of --ci; give --ci LOW,HIGH too, or leave --level out.',
   ciFormat: (value: string) => `--ci "${value}" is not an interval. Write LOW,HIGH, for example --ci 0.6,0.9.`,
   perValue: (value: string) =>
@@ -41,4 +42,10 @@ export const cliMessages = {
     `--clinician is ${length} characters long; the handout allows up to ${limit}. Shorten it.`,
   handoutWritten: (path: string, paper: string, grade: string) =>
     `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
+  outWithSeveral: (count: number) =>
+    `--out names one file, but ${count} topic files were given: use --out-dir FOLDER to write one handout per file.`,
+  outAndOutDir: () => 'Give --out FILE.pdf for one handout or --out-dir FOLDER for one per topic file, not both.',
+  folderUnusable: (path: string, reason: string) => `Cannot make the folder "${path}": ${reason}.`,
+  batchWritten: (written: number, total: number, folder: string) =>
+    `Wrote ${written} of ${total} handout${total === 1 ? '' : 's'} to ${folder}.`,
 } as const;

@@ -5,4 +5,10 @@ import { problemMessages } from './problems.ts';
 import { wordingMessages } from './wording.ts';
 
 /** The English message catalogue. A second language is a sibling folder with the same shape. */
-export const english = { problems: problemMessages, notices: noticeMessages, numbers: numberMessages, cli: cliMessages, wording: wordingMessages } as const;
+export const english = {
+  problems: problemMessages,
+  notices: noticeMessages,
+  numbers: numberMessages,
+  cli: cliMessages,
+  wording: wordingMessages,
+} as const;

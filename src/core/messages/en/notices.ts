@@ -57,8 +57,7 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     'The risk ratio and odds ratio cannot be computed: neither arm has an event, or both arms are all events.',
   'counts-baseline-from-trial': (v) =>
     `No baseline risk was given${v.outcome === undefined ? '' : ` for ${text(v, 'outcome')}`}, so the trial’s comparison arm was used as the baseline. The patient’s own risk may differ.`,
-  'hr-proportional-hazards': () =>
-    'The hazard ratio was applied assuming proportional hazards over the whole period.',
+  'hr-proportional-hazards': () => 'The hazard ratio was applied assuming proportional hazards over the whole period.',
   'opposite-ratio-applied': (v) =>
     `The ${isEffectMeasure(v.measure) ? measureNamesEn[v.measure] : 'effect'} was reported for the opposite event, so it was applied to the chance of not having the outcome. A ratio for one event is not the same as the inverse ratio for its opposite: check that the trial reported it this way.`,
   'opposite-odds-ratio-inverted': () =>

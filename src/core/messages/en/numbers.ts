@@ -3,6 +3,5 @@ export const numberMessages = {
   infinity: '∞',
   to: 'to',
   noDifference: 'No difference between the options, so no number needed to treat',
-  noDifferenceWithin: (interval: string) =>
-    `No difference between the options, so no number needed to treat (${interval})`,
+  noDifferenceWithin: (interval: string) => `No difference between the options, so no number needed to treat (${interval})`,
 } as const;

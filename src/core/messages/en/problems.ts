@@ -42,13 +42,11 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `"${text(v, 'input')}" is too ${text(v, 'size') === 'large' ? 'large' : 'small'} to compute with. Check the number: it is almost certainly a typing mistake.`,
   'number-missing': (v) => `The ${text(v, 'what')} is empty. Write a number, for example ${text(v, 'example')}.`,
   'risk-empty': () => 'The risk is empty. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.',
-  'risk-unparsable': (v) =>
-    `"${text(v, 'input')}" is not a risk. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.`,
+  'risk-unparsable': (v) => `"${text(v, 'input')}" is not a risk. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.`,
   'risk-ambiguous': (v) =>
     `A risk of "${text(v, 'input')}" is ambiguous: write ${text(v, 'input')}% or ${text(v, 'asProportion')}.`,
   'risk-denominator-zero': (v) => `"${text(v, 'input')}" divides by zero. The number of people must be at least 1.`,
-  'risk-out-of-range': (v) =>
-    `A risk of "${text(v, 'input')}" is outside 0% to 100%. A risk must lie between 0% and 100%.`,
+  'risk-out-of-range': (v) => `A risk of "${text(v, 'input')}" is outside 0% to 100%. A risk must lie between 0% and 100%.`,
   'baseline-out-of-range': (v) =>
     `A baseline risk of ${percent(v, 'risk')} is not possible here: it must be more than 0% and less than 100%.`,
   'trial-baseline-unusable': (v) =>
@@ -58,10 +56,8 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'percent-unparsable': (v) => `"${text(v, 'input')}" is not a percentage. Write it as 25 or 25%.`,
   'level-out-of-range': (v) =>
     `An interval level of "${text(v, 'input')}" is not possible. Write a level between 50% and 99.9%, for example 0.95 or 95%.`,
-  'ratio-not-positive': (v) =>
-    `${capitalise(aMeasure(v))} of ${text(v, 'value')} is not possible: it must be greater than 0.`,
-  'rrr-out-of-range': (v) =>
-    `A relative risk reduction of ${text(v, 'value')}% is not possible: it must be less than 100%.`,
+  'ratio-not-positive': (v) => `${capitalise(aMeasure(v))} of ${text(v, 'value')} is not possible: it must be greater than 0.`,
+  'rrr-out-of-range': (v) => `A relative risk reduction of ${text(v, 'value')}% is not possible: it must be less than 100%.`,
   'arr-out-of-range': (v) =>
     `An absolute risk reduction of ${percent(v, 'value')} is not possible: it must lie between −100% and 100%.`,
   'interval-incomplete': () => 'The interval needs both a lower and an upper limit, for example 0.6,0.9.',
@@ -98,25 +94,20 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'topic-too-few-options': (v) => `A topic needs at least ${text(v, 'limit')} options; it has ${text(v, 'count')}.`,
   'topic-too-many-options': (v) =>
     `A topic can have at most ${text(v, 'limit')} options; it has ${text(v, 'count')}. Remove one.`,
-  'topic-comparison-count': (v) =>
-    `Exactly one option must be the comparison; ${text(v, 'count')} are marked. Mark one.`,
+  'topic-comparison-count': (v) => `Exactly one option must be the comparison; ${text(v, 'count')} are marked. Mark one.`,
   'topic-too-few-outcomes': () => 'A topic needs at least 1 outcome. Add one.',
   'topic-too-many-outcomes': (v) =>
     `A topic can have at most ${text(v, 'limit')} outcomes; it has ${text(v, 'count')}. Remove one.`,
-  'topic-headline-count': (v) =>
-    `Exactly one outcome must be the headline; ${text(v, 'count')} are marked. Mark one.`,
+  'topic-headline-count': (v) => `Exactly one outcome must be the headline; ${text(v, 'count')} are marked. Mark one.`,
   'topic-duplicate-id': (v) => `The identifier "${text(v, 'id')}" is used twice. Each must be different.`,
   'topic-duplicate-name': (v) => `The name "${text(v, 'name')}" is used twice. Give each a different name.`,
-  'topic-effect-missing': (v) =>
-    `The effect of "${text(v, 'option')}" on "${text(v, 'outcome')}" is missing. Enter it.`,
-  'topic-effect-unknown-option': (v) =>
-    `An effect names the option "${text(v, 'option')}", which the topic does not have.`,
+  'topic-effect-missing': (v) => `The effect of "${text(v, 'option')}" on "${text(v, 'outcome')}" is missing. Enter it.`,
+  'topic-effect-unknown-option': (v) => `An effect names the option "${text(v, 'option')}", which the topic does not have.`,
   'topic-effect-on-comparison': (v) =>
     `The comparison "${text(v, 'option')}" cannot have an effect of its own; its risk is the baseline.`,
   'file-not-json': (v) =>
     `This file is not a readable topic: it is not complete JSON (${text(v, 'detail')}). Open another file or restore a backup.`,
-  'file-format-unknown': (v) =>
-    `This file is not a Chancewise topic (its format is "${text(v, 'format')}").`,
+  'file-format-unknown': (v) => `This file is not a Chancewise topic (its format is "${text(v, 'format')}").`,
   'file-version-unsupported': (v) =>
     `This topic file was made by a newer Chancewise (file version ${text(v, 'version')}; this one reads up to version ${text(v, 'supported')}). Update Chancewise to open it; the file has not been changed.`,
   'file-field-invalid': (v) =>

@@ -21,9 +21,28 @@ const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text
  * start with a verb in -ing ("dying of bowel cancer"); those read "will end up dying".
  */
 const VERBS_IN_ING = new Set([
-  'becoming', 'being', 'breaking', 'catching', 'developing', 'dying', 'falling', 'feeling', 'getting',
-  'going', 'having', 'leaving', 'living', 'losing', 'needing', 'returning', 'spending', 'staying',
-  'starting', 'stopping', 'taking', 'using',
+  'becoming',
+  'being',
+  'breaking',
+  'catching',
+  'developing',
+  'dying',
+  'falling',
+  'feeling',
+  'getting',
+  'going',
+  'having',
+  'leaving',
+  'living',
+  'losing',
+  'needing',
+  'returning',
+  'spending',
+  'staying',
+  'starting',
+  'stopping',
+  'taking',
+  'using',
 ]);
 /** True when an outcome name starts with a verb in -ing ("dying of bowel cancer"). */
 export const startsWithVerb = (outcome: string): boolean =>

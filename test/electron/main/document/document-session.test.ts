@@ -108,7 +108,15 @@ function leftBehind(documentPath: string | null): ValidSnapshotCandidate {
   return {
     name: 'snapshot-1700000000000-1.json',
     documentSavedAt: 1_600_000_000_000,
-    record: { format: 'chancewise-snapshot', version: 2, savedAt: 1_700_000_000_000, documentPath, keepsPatient: false, content: draft, seal: '' },
+    record: {
+      format: 'chancewise-snapshot',
+      version: 2,
+      savedAt: 1_700_000_000_000,
+      documentPath,
+      keepsPatient: false,
+      content: draft,
+      seal: '',
+    },
   };
 }
 
@@ -148,7 +156,9 @@ describe('opening', () => {
     expect(window.delivered).toEqual([]);
     dialogs.confirmReplace.mockResolvedValueOnce(true);
     open.openFromSystem(demo);
-    await vi.waitFor(() => expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]));
+    await vi.waitFor(() =>
+      expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]),
+    );
   });
 
   it('tells the person when a file from the system cannot be opened', async () => {
@@ -202,7 +212,9 @@ describe('saving', () => {
 
   it('refuses text that is not a topic file before any dialog', async () => {
     const { session: save, dialogs } = await session();
-    await expect(save.saveDocument('{"format":"chancewise-topic","version":2}')).rejects.toMatchObject({ code: 'not-a-topic-file' });
+    await expect(save.saveDocument('{"format":"chancewise-topic","version":2}')).rejects.toMatchObject({
+      code: 'not-a-topic-file',
+    });
     await expect(save.saveDocumentAs('not json')).rejects.toMatchObject({ code: 'not-a-topic-file' });
     expect(dialogs.chooseTopicSavePath).not.toHaveBeenCalled();
   });
@@ -260,7 +272,9 @@ describe('handing the topic back after a crash', () => {
     dialogs.chooseTopicToOpen.mockResolvedValueOnce(demo);
     await crashed.openDocument();
     crashed.handBack();
-    await vi.waitFor(() => expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]));
+    await vi.waitFor(() =>
+      expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]),
+    );
   });
 
   it('hands back nothing for an empty new topic', async () => {
@@ -275,17 +289,30 @@ describe('start-up', () => {
   it('opens the launch file when nothing was left behind', async () => {
     const { session: start, window } = await session({ launchFiles: [demo] });
     await start.start();
-    await vi.waitFor(() => expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]));
+    await vi.waitFor(() =>
+      expect(window.delivered).toEqual([{ kind: 'file', text: demoText, fileName: '01-kidney-stone.json' }]),
+    );
   });
 
   it('restores an accepted snapshot, saving back only to a file on the recent list', async () => {
     const topicPath = path.join(base, 'heart.cwtopic');
-    const { session: start, window, dialogs } = await session({ recovery: leftBehind(topicPath), recent: [topicPath], launchFiles: [demo] });
+    const {
+      session: start,
+      window,
+      dialogs,
+    } = await session({ recovery: leftBehind(topicPath), recent: [topicPath], launchFiles: [demo] });
     dialogs.confirmRecovery.mockResolvedValueOnce(true);
     await start.start();
-    expect(dialogs.confirmRecovery).toHaveBeenCalledWith({ savedAt: 1_700_000_000_000, topicPath, asksWhereToSave: false, skippedFile: '01-kidney-stone.json' });
+    expect(dialogs.confirmRecovery).toHaveBeenCalledWith({
+      savedAt: 1_700_000_000_000,
+      topicPath,
+      asksWhereToSave: false,
+      skippedFile: '01-kidney-stone.json',
+    });
     expect(window.titles).toEqual([topicPath]);
-    expect(window.delivered).toEqual([{ kind: 'snapshot', content: draft, reason: 'unexpected-exit', fileName: 'heart.cwtopic' }]);
+    expect(window.delivered).toEqual([
+      { kind: 'snapshot', content: draft, reason: 'unexpected-exit', fileName: 'heart.cwtopic' },
+    ]);
     expect(start.hasUnsavedChanges()).toBe(true);
   });
 
@@ -301,7 +328,12 @@ describe('start-up', () => {
   });
 
   it('clears a declined snapshot and opens the launch file instead', async () => {
-    const { session: start, window, snapshots, snapshotFiles } = await session({ recovery: leftBehind(null), launchFiles: [demo] });
+    const {
+      session: start,
+      window,
+      snapshots,
+      snapshotFiles,
+    } = await session({ recovery: leftBehind(null), launchFiles: [demo] });
     await snapshots.write({ content: draft, keepPatient: false, documentPath: null, savedAt: 1_700_000_000_000 });
     expect(await snapshotFiles()).toBe(1);
     await start.start();

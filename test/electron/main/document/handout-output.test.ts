@@ -31,21 +31,31 @@ describe('exportHandoutPdf()', () => {
   it('starts the dialog in the documents folder with the suggested name, and writes the bytes where chosen', async () => {
     const target = path.join(base, 'chosen.pdf');
     const chooseHandoutSavePath = vi.fn(async () => target);
-    const exported = await exportHandoutPdf({ suggestedName: 'heart-handout', bytes: pdfBytes }, { chooseHandoutSavePath }, '/home/nurse/Documents');
+    const exported = await exportHandoutPdf(
+      { suggestedName: 'heart-handout', bytes: pdfBytes },
+      { chooseHandoutSavePath },
+      '/home/nurse/Documents',
+    );
     expect(chooseHandoutSavePath).toHaveBeenCalledWith(path.join('/home/nurse/Documents', 'heart-handout.pdf'));
     expect(exported).toEqual({ fileName: 'chosen.pdf' });
     expect(new Uint8Array(await fs.readFile(target))).toEqual(pdfBytes);
   });
 
   it('writes nothing when the dialog is cancelled', async () => {
-    const exported = await exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => null }, base);
+    const exported = await exportHandoutPdf(
+      { suggestedName: 'heart', bytes: pdfBytes },
+      { chooseHandoutSavePath: async () => null },
+      base,
+    );
     expect(exported).toBeNull();
     expect(await fs.readdir(base)).toEqual([]);
   });
 
   it('reports a write that fails as write-failed', async () => {
     const target = path.join(base, 'no-such-folder', 'heart.pdf');
-    await expect(exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => target }, base)).rejects.toMatchObject({
+    await expect(
+      exportHandoutPdf({ suggestedName: 'heart', bytes: pdfBytes }, { chooseHandoutSavePath: async () => target }, base),
+    ).rejects.toMatchObject({
       code: 'write-failed',
     });
   });
@@ -71,7 +81,11 @@ describe('openHandoutForPrinting(), with electron mocked', () => {
   it('replaces an earlier copy, so printing twice opens the newest handout', async () => {
     shell.openPath.mockResolvedValue('');
     const folder = path.join(base, 'chancewise-print');
-    await openHandoutForPrinting({ suggestedName: 'heart-handout.pdf', bytes: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d, 0x31]) }, shell, folder);
+    await openHandoutForPrinting(
+      { suggestedName: 'heart-handout.pdf', bytes: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d, 0x31]) },
+      shell,
+      folder,
+    );
     await openHandoutForPrinting({ suggestedName: 'heart-handout.pdf', bytes: pdfBytes }, shell, folder);
     expect(new Uint8Array(await fs.readFile(path.join(folder, 'heart-handout.pdf')))).toEqual(pdfBytes);
     expect(shell.openPath).toHaveBeenCalledTimes(2);
@@ -88,7 +102,9 @@ describe('openHandoutForPrinting(), with electron mocked', () => {
   it('reports a system that cannot open the file as print-failed, with its reason', async () => {
     // Electron's shell.openPath resolves to an error message, or "" on success (Electron documentation, shell).
     shell.openPath.mockResolvedValue('No application knows how to open this file');
-    await expect(openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(base, 'p'))).rejects.toMatchObject({
+    await expect(
+      openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(base, 'p')),
+    ).rejects.toMatchObject({
       code: 'print-failed',
       message: expect.stringContaining('(No application knows how to open this file)'),
     });
@@ -97,7 +113,9 @@ describe('openHandoutForPrinting(), with electron mocked', () => {
   it('reports a folder that cannot be made as write-failed, and opens nothing', async () => {
     const blocker = path.join(base, 'a-file');
     await fs.writeFile(blocker, 'x');
-    await expect(openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(blocker, 'print'))).rejects.toMatchObject({
+    await expect(
+      openHandoutForPrinting({ suggestedName: 'heart.pdf', bytes: pdfBytes }, shell, path.join(blocker, 'print')),
+    ).rejects.toMatchObject({
       code: 'write-failed',
     });
     expect(shell.openPath).not.toHaveBeenCalled();

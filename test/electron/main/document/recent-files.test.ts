@@ -17,7 +17,10 @@ describe('addRecentFile()', () => {
 
 describe('parseRecentFiles()', () => {
   it('keeps absolute paths only, drops repeats and junk', () => {
-    expect(parseRecentFiles(['/a.cwtopic', 'relative.cwtopic', 42, '/a.cwtopic', '/b\u0000.cwtopic', '', '/c.json'])).toEqual(['/a.cwtopic', '/c.json']);
+    expect(parseRecentFiles(['/a.cwtopic', 'relative.cwtopic', 42, '/a.cwtopic', '/b\u0000.cwtopic', '', '/c.json'])).toEqual([
+      '/a.cwtopic',
+      '/c.json',
+    ]);
     expect(parseRecentFiles({ files: ['/a'] })).toEqual([]);
     expect(parseRecentFiles(null)).toEqual([]);
   });

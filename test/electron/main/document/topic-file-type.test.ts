@@ -1,6 +1,11 @@
 // @vitest-environment node
 import { describe, expect, it } from 'vitest';
-import { hasOpenableExtension, topicPathFromCommandLine, TOPIC_EXTENSION, withTopicExtension } from '../../../../electron/main/document/topic-file-type.ts';
+import {
+  hasOpenableExtension,
+  topicPathFromCommandLine,
+  TOPIC_EXTENSION,
+  withTopicExtension,
+} from '../../../../electron/main/document/topic-file-type.ts';
 
 describe('the topic file type', () => {
   it('is .cwtopic, a single extension the desktops can associate', () => {
@@ -24,7 +29,9 @@ describe('topicPathFromCommandLine()', () => {
   // on; unpackaged runs have the app folder as argv[1] (docs/tutorial/launch-app-from-url-in-another-app.md, from memory).
 
   it('finds the file after the executable of a packaged app', () => {
-    expect(topicPathFromCommandLine(['/opt/Chancewise/chancewise', 'heart.cwtopic'], '/home/a', true)).toBe('/home/a/heart.cwtopic');
+    expect(topicPathFromCommandLine(['/opt/Chancewise/chancewise', 'heart.cwtopic'], '/home/a', true)).toBe(
+      '/home/a/heart.cwtopic',
+    );
   });
 
   it('skips the app folder of an unpackaged run, and every switch', () => {
@@ -38,7 +45,9 @@ describe('topicPathFromCommandLine()', () => {
 
   it('gives null when no argument is a topic file', () => {
     expect(topicPathFromCommandLine(['/opt/c'], '/', true)).toBeNull();
-    expect(topicPathFromCommandLine(['/opt/c', '--allow-file-access-from-files', 'notes.txt', 'a\u0000.cwtopic'], '/', true)).toBeNull();
+    expect(
+      topicPathFromCommandLine(['/opt/c', '--allow-file-access-from-files', 'notes.txt', 'a\u0000.cwtopic'], '/', true),
+    ).toBeNull();
     expect(topicPathFromCommandLine(['/opt/c', '--file=evil.cwtopic'], '/', true)).toBeNull();
   });
 });

@@ -134,12 +134,21 @@ describe('writeFileAtomic()', () => {
 
   it('does not retry EPERM on Linux, nor errors that never pass (ENOENT, EXDEV) on Windows', async () => {
     const target = path.join(folder, 'topic.cwtopic');
-    for (const [platform, code] of [['linux', 'EPERM'], ['win32', 'ENOENT'], ['win32', 'EXDEV']] as const) {
+    for (const [platform, code] of [
+      ['linux', 'EPERM'],
+      ['win32', 'ENOENT'],
+      ['win32', 'EXDEV'],
+    ] as const) {
       const { calls, fileSystem } = recordingFileSystem([code, code, code]);
-      await expect(writeFileAtomic(target, 'new', { fileSystem, platform, renameRetryDelaysMs: [1, 1], wait: noWait })).rejects.toMatchObject({
+      await expect(
+        writeFileAtomic(target, 'new', { fileSystem, platform, renameRetryDelaysMs: [1, 1], wait: noWait }),
+      ).rejects.toMatchObject({
         code,
       });
-      expect(calls.filter((call) => call.startsWith('rename')), `${platform} ${code}`).toHaveLength(1);
+      expect(
+        calls.filter((call) => call.startsWith('rename')),
+        `${platform} ${code}`,
+      ).toHaveLength(1);
     }
     expect(await fs.readdir(folder)).toEqual([]);
   });
@@ -154,7 +163,9 @@ describe('writeFileAtomic()', () => {
         return { ...handle, writeFile: async () => Promise.reject(failure('ENOSPC')), close: handle.close, sync: handle.sync };
       },
     };
-    await expect(writeFileAtomic(target, 'x', { fileSystem: failing, platform: 'linux' })).rejects.toMatchObject({ code: 'ENOSPC' });
+    await expect(writeFileAtomic(target, 'x', { fileSystem: failing, platform: 'linux' })).rejects.toMatchObject({
+      code: 'ENOSPC',
+    });
     expect(await fs.readdir(folder)).toEqual([]);
   });
 });

@@ -31,7 +31,10 @@ describe('saving onto a name that is not a plain file', () => {
   it.runIf(posix)('refuses a named pipe at once, and the next save still works', async () => {
     const pipe = path.join(folder, 'topic.cwtopic');
     execFileSync('mkfifo', [pipe]);
-    const outcome = await race(saveWithBackup(pipe, 'new').catch((error: unknown) => error), 2000);
+    const outcome = await race(
+      saveWithBackup(pipe, 'new').catch((error: unknown) => error),
+      2000,
+    );
     expect(outcome).toMatchObject({ name: 'FileWriteRefusal', reason: 'not-a-file' });
     expect((await fs.lstat(pipe)).isFIFO()).toBe(true);
     const other = path.join(folder, 'other.cwtopic');
@@ -46,17 +49,20 @@ describe('saving onto a name that is not a plain file', () => {
     await expect(writeFileAtomic(inside, 'x')).rejects.toMatchObject({ reason: 'not-a-file' });
   });
 
-  it.runIf(posix)('saves through a symbolic link: the file it points to gets the content and its backup, the link stays', async () => {
-    const real = path.join(folder, 'real.cwtopic');
-    const link = path.join(folder, 'link.cwtopic');
-    await fs.writeFile(real, 'old');
-    await fs.symlink(real, link);
-    expect(await saveWithBackup(link, 'new')).toEqual({ backedUp: true });
-    expect((await fs.lstat(link)).isSymbolicLink()).toBe(true);
-    expect(await fs.readFile(real, 'utf8')).toBe('new');
-    expect(await fs.readFile(`${real}.bak`, 'utf8')).toBe('old');
-    expect((await fs.readdir(folder)).sort()).toEqual(['link.cwtopic', 'real.cwtopic', 'real.cwtopic.bak']);
-  });
+  it.runIf(posix)(
+    'saves through a symbolic link: the file it points to gets the content and its backup, the link stays',
+    async () => {
+      const real = path.join(folder, 'real.cwtopic');
+      const link = path.join(folder, 'link.cwtopic');
+      await fs.writeFile(real, 'old');
+      await fs.symlink(real, link);
+      expect(await saveWithBackup(link, 'new')).toEqual({ backedUp: true });
+      expect((await fs.lstat(link)).isSymbolicLink()).toBe(true);
+      expect(await fs.readFile(real, 'utf8')).toBe('new');
+      expect(await fs.readFile(`${real}.bak`, 'utf8')).toBe('old');
+      expect((await fs.readdir(folder)).sort()).toEqual(['link.cwtopic', 'real.cwtopic', 'real.cwtopic.bak']);
+    },
+  );
 
   it.runIf(posix)('refuses a link to nothing instead of replacing the link', async () => {
     const link = path.join(folder, 'dangling.cwtopic');
@@ -88,7 +94,7 @@ describe('long legal names', () => {
   });
 });
 
-describe('permission bits (one rule: the original\'s, else owner-only)', () => {
+describe("permission bits (one rule: the original's, else owner-only)", () => {
   it('gives the backup of a 0600 file mode 0600, not the default 0644', async () => {
     const target = path.join(folder, 'private.cwtopic');
     await fs.writeFile(target, 'patient details');
@@ -98,7 +104,7 @@ describe('permission bits (one rule: the original\'s, else owner-only)', () => {
     expect(await bits(target)).toBe(0o600);
   });
 
-  it('gives the backup the original\'s bits even when an older backup was more open', async () => {
+  it("gives the backup the original's bits even when an older backup was more open", async () => {
     const target = path.join(folder, 'private.cwtopic');
     await fs.writeFile(target, 'v1');
     await fs.chmod(target, 0o600);

@@ -53,7 +53,14 @@ describe('backupPathFor()', () => {
 
 describe('leftoverTemporaryNames()', () => {
   it('picks temporary names of the target from other processes only', () => {
-    const names = ['.t.cwtopic.12-ab.tmp', '.t.cwtopic.7-cd.tmp', '.t.cwtopic.7-cd.tmp.x', 't.cwtopic', '.t.cwtopic.x-ab.tmp', '.u.cwtopic.12-ab.tmp'];
+    const names = [
+      '.t.cwtopic.12-ab.tmp',
+      '.t.cwtopic.7-cd.tmp',
+      '.t.cwtopic.7-cd.tmp.x',
+      't.cwtopic',
+      '.t.cwtopic.x-ab.tmp',
+      '.u.cwtopic.12-ab.tmp',
+    ];
     expect(leftoverTemporaryNames(names, '/f/t.cwtopic', 7)).toEqual(['.t.cwtopic.12-ab.tmp']);
   });
 });

@@ -57,7 +57,10 @@ describe('registerIpcHandlers()', () => {
   it('runs the action for a trusted sender with a valid payload and wraps its value', async () => {
     const { actions, call } = setUp();
     const text = '{"format":"chancewise-topic"}';
-    expect(await call(INVOKE_CHANNELS.saveDocument, trusted, text)).toEqual({ ok: true, value: { fileName: 'a.cwtopic', savedAt: 5 } });
+    expect(await call(INVOKE_CHANNELS.saveDocument, trusted, text)).toEqual({
+      ok: true,
+      value: { fileName: 'a.cwtopic', savedAt: 5 },
+    });
     expect(actions.saveDocument).toHaveBeenCalledExactlyOnceWith(own, text);
   });
 
@@ -76,7 +79,10 @@ describe('registerIpcHandlers()', () => {
   it('refuses a frame on another origin and a sub-frame of the app', async () => {
     const { actions, call } = setUp();
     const foreign: IpcEventLike = { sender: own, senderFrame: { url: 'https://evil.test/', parent: null } };
-    const subFrame: IpcEventLike = { sender: own, senderFrame: { url: 'app://chancewise/index.html', parent: { url: 'app://chancewise/' } } };
+    const subFrame: IpcEventLike = {
+      sender: own,
+      senderFrame: { url: 'app://chancewise/index.html', parent: { url: 'app://chancewise/' } },
+    };
     expect(await call(INVOKE_CHANNELS.openDocument, foreign)).toMatchObject({ ok: false, error: { code: 'untrusted-sender' } });
     expect(await call(INVOKE_CHANNELS.openDocument, subFrame)).toMatchObject({ ok: false, error: { code: 'untrusted-sender' } });
     expect(actions.openDocument).not.toHaveBeenCalled();
@@ -84,19 +90,35 @@ describe('registerIpcHandlers()', () => {
 
   it('refuses payloads of the wrong type without running the action', async () => {
     const { actions, call } = setUp();
-    expect(await call(INVOKE_CHANNELS.saveDocument, trusted, 42)).toMatchObject({ ok: false, error: { code: 'invalid-request' } });
-    expect(await call(INVOKE_CHANNELS.saveSnapshot, trusted, { content: 1 })).toMatchObject({ ok: false, error: { code: 'invalid-request' } });
+    expect(await call(INVOKE_CHANNELS.saveDocument, trusted, 42)).toMatchObject({
+      ok: false,
+      error: { code: 'invalid-request' },
+    });
+    expect(await call(INVOKE_CHANNELS.saveSnapshot, trusted, { content: 1 })).toMatchObject({
+      ok: false,
+      error: { code: 'invalid-request' },
+    });
     expect(await call(INVOKE_CHANNELS.openRecentDocument, trusted, { path: '/etc/passwd' })).toMatchObject({
       ok: false,
       error: { code: 'invalid-request' },
     });
-    expect(await call(INVOKE_CHANNELS.printHandout, trusted, 'extra')).toMatchObject({ ok: false, error: { code: 'invalid-request' } });
-    // The handout to print must be a PDF under a plain file name, as for saving it.
-    expect(await call(INVOKE_CHANNELS.printHandout, trusted, { bytes: new TextEncoder().encode('not a pdf'), suggestedName: 'h.pdf' })).toMatchObject({
+    expect(await call(INVOKE_CHANNELS.printHandout, trusted, 'extra')).toMatchObject({
       ok: false,
       error: { code: 'invalid-request' },
     });
-    expect(await call(INVOKE_CHANNELS.printHandout, trusted, { bytes: new TextEncoder().encode('%PDF-1.7'), suggestedName: '../h.pdf' })).toMatchObject({
+    // The handout to print must be a PDF under a plain file name, as for saving it.
+    expect(
+      await call(INVOKE_CHANNELS.printHandout, trusted, { bytes: new TextEncoder().encode('not a pdf'), suggestedName: 'h.pdf' }),
+    ).toMatchObject({
+      ok: false,
+      error: { code: 'invalid-request' },
+    });
+    expect(
+      await call(INVOKE_CHANNELS.printHandout, trusted, {
+        bytes: new TextEncoder().encode('%PDF-1.7'),
+        suggestedName: '../h.pdf',
+      }),
+    ).toMatchObject({
       ok: false,
       error: { code: 'invalid-request' },
     });
@@ -135,7 +157,11 @@ describe('registerIpcHandlers()', () => {
 
   it('replies with values that survive structured cloning (what IPC does to them)', async () => {
     const { call } = setUp();
-    const result = await call(INVOKE_CHANNELS.saveSnapshot, trusted, { content: { a: 1 }, keepPatient: false, hasUnsavedChanges: true });
+    const result = await call(INVOKE_CHANNELS.saveSnapshot, trusted, {
+      content: { a: 1 },
+      keepPatient: false,
+      hasUnsavedChanges: true,
+    });
     expect(structuredClone(result)).toEqual({ ok: true, value: { savedAt: 7 } });
   });
 });

@@ -7,7 +7,12 @@ import type { ShellResult } from '../../../../electron/contract/ipc-contract.ts'
 import { registerIpcHandlers } from '../../../../electron/main/ipc/ipc-handlers.ts';
 import type { IpcMainLike, ShellActions } from '../../../../electron/main/ipc/ipc-handlers.ts';
 import type { IpcEventLike } from '../../../../electron/main/ipc/ipc-guard.ts';
-import { checkDocumentText, checkPlainJson, checkSnapshotRequest, PAYLOAD_LIMITS } from '../../../../electron/main/ipc/ipc-payloads.ts';
+import {
+  checkDocumentText,
+  checkPlainJson,
+  checkSnapshotRequest,
+  PAYLOAD_LIMITS,
+} from '../../../../electron/main/ipc/ipc-payloads.ts';
 
 const own = { id: 1 };
 const trusted: IpcEventLike = { sender: own, senderFrame: { url: 'app://chancewise/index.html', parent: null } };

@@ -59,7 +59,18 @@ describe('checkPlainJson()', () => {
   });
 
   it('refuses values that are not plain data', () => {
-    for (const value of [new Date(0), new Map(), new Set(), new Uint8Array(2), Number.NaN, Number.POSITIVE_INFINITY, undefined, () => 1, 10n, Symbol('s')]) {
+    for (const value of [
+      new Date(0),
+      new Map(),
+      new Set(),
+      new Uint8Array(2),
+      Number.NaN,
+      Number.POSITIVE_INFINITY,
+      undefined,
+      () => 1,
+      10n,
+      Symbol('s'),
+    ]) {
       expect(checkPlainJson({ value }), String(typeof value)).toBe('invalid-request');
     }
     class Draft {
@@ -103,7 +114,10 @@ describe('checkSnapshotRequest()', () => {
 
   it('refuses content over the size limit as too large', () => {
     const big = { text: 'x'.repeat(PAYLOAD_LIMITS.snapshotCharacters) };
-    expect(checkSnapshotRequest([{ content: big, keepPatient: false, hasUnsavedChanges: true }])).toEqual({ ok: false, code: 'too-large' });
+    expect(checkSnapshotRequest([{ content: big, keepPatient: false, hasUnsavedChanges: true }])).toEqual({
+      ok: false,
+      code: 'too-large',
+    });
   });
 });
 
@@ -111,7 +125,20 @@ describe('isPlainFileName()', () => {
   it('accepts plain names and refuses paths and reserved characters', () => {
     expect(isPlainFileName('statin-handout.pdf')).toBe(true);
     expect(isPlainFileName('Handout 12 May.pdf')).toBe(true);
-    for (const value of ['', '.', '..', '../x.pdf', 'a/b.pdf', 'a\\b.pdf', 'C:x.pdf', 'a\u0000.pdf', 'a\nb.pdf', 'a?.pdf', 'x'.repeat(121), 7]) {
+    for (const value of [
+      '',
+      '.',
+      '..',
+      '../x.pdf',
+      'a/b.pdf',
+      'a\\b.pdf',
+      'C:x.pdf',
+      'a\u0000.pdf',
+      'a\nb.pdf',
+      'a?.pdf',
+      'x'.repeat(121),
+      7,
+    ]) {
       expect(isPlainFileName(value), String(value)).toBe(false);
     }
   });
@@ -120,7 +147,10 @@ describe('isPlainFileName()', () => {
 describe('checkHandoutPdfRequest()', () => {
   it('accepts PDF bytes with a plain suggested name', () => {
     const bytes = pdfBytes(64);
-    expect(checkHandoutPdfRequest([{ bytes, suggestedName: 'handout.pdf' }])).toEqual({ ok: true, value: { bytes, suggestedName: 'handout.pdf' } });
+    expect(checkHandoutPdfRequest([{ bytes, suggestedName: 'handout.pdf' }])).toEqual({
+      ok: true,
+      value: { bytes, suggestedName: 'handout.pdf' },
+    });
   });
 
   it('refuses bytes that are not a PDF, names that are paths, and other shapes', () => {

@@ -21,7 +21,7 @@ afterEach(async () => {
 });
 
 describe('redactPaths()', () => {
-  it('replaces the paths of a person\'s files, quoted, bare or as file:// addresses, by labels', () => {
+  it("replaces the paths of a person's files, quoted, bare or as file:// addresses, by labels", () => {
     const line = [
       "could not open: ENOENT: no such file or directory, open '/home/gp/Ann Example heart.cwtopic'",
       'saving C:\\Users\\gp\\Ann-Example.cwtopic failed',
@@ -33,9 +33,12 @@ describe('redactPaths()', () => {
     expect(fileLabel('/home/gp/Ann Example heart.cwtopic')).toMatch(/^\[file [0-9a-f]{8}\.cwtopic\]$/u);
   });
 
-  it('keeps only the file name of the app\'s own files in stack frames, and leaves app addresses alone', () => {
-    const frame = '    at open (/opt/Chancewise/resources/app.asar/dist-electron/main.cjs:120:7) loading app://chancewise/index.html';
-    expect(redactPaths(frame, '/opt/Chancewise/resources/app.asar')).toBe('    at open (main.cjs:120:7) loading app://chancewise/index.html');
+  it("keeps only the file name of the app's own files in stack frames, and leaves app addresses alone", () => {
+    const frame =
+      '    at open (/opt/Chancewise/resources/app.asar/dist-electron/main.cjs:120:7) loading app://chancewise/index.html';
+    expect(redactPaths(frame, '/opt/Chancewise/resources/app.asar')).toBe(
+      '    at open (main.cjs:120:7) loading app://chancewise/index.html',
+    );
   });
 });
 

@@ -5,7 +5,15 @@ import type { SnapshotCandidate } from '../../../../electron/main/snapshot/choos
 import type { SnapshotRecord } from '../../../../electron/main/snapshot/snapshot-record.ts';
 
 function record(savedAt: number, documentPath: string | null = '/h/t.cwtopic'): SnapshotRecord {
-  return { format: 'chancewise-snapshot', version: 2, savedAt, documentPath, keepsPatient: false, content: { at: savedAt }, seal: 'x' };
+  return {
+    format: 'chancewise-snapshot',
+    version: 2,
+    savedAt,
+    documentPath,
+    keepsPatient: false,
+    content: { at: savedAt },
+    seal: 'x',
+  };
 }
 
 function candidate(name: string, snapshot: SnapshotRecord | null, documentSavedAt: number | null): SnapshotCandidate {
@@ -30,12 +38,20 @@ describe('chooseRecoverySnapshot()', () => {
   });
 
   it('skips a damaged newest snapshot and falls back to the newest good one', () => {
-    const chosen = chooseRecoverySnapshot([candidate('snapshot-300-3.json', null, 50), candidate('snapshot-200-2.json', record(200), 50)]);
+    const chosen = chooseRecoverySnapshot([
+      candidate('snapshot-300-3.json', null, 50),
+      candidate('snapshot-200-2.json', record(200), 50),
+    ]);
     expect(chosen?.name).toBe('snapshot-200-2.json');
   });
 
   it('offers nothing when the file was saved after every snapshot (the file already has it all)', () => {
-    expect(chooseRecoverySnapshot([candidate('snapshot-100-1.json', record(100), 100), candidate('snapshot-90-2.json', record(90), 100)])).toBeNull();
+    expect(
+      chooseRecoverySnapshot([
+        candidate('snapshot-100-1.json', record(100), 100),
+        candidate('snapshot-90-2.json', record(90), 100),
+      ]),
+    ).toBeNull();
   });
 
   it('offers a snapshot of a topic never saved, or whose file is gone', () => {
@@ -44,11 +60,14 @@ describe('chooseRecoverySnapshot()', () => {
   });
 
   it('orders snapshots of the same millisecond by name', () => {
-    const chosen = chooseRecoverySnapshot([candidate('snapshot-5-1.json', record(5), null), candidate('snapshot-5-2.json', record(5), null)]);
+    const chosen = chooseRecoverySnapshot([
+      candidate('snapshot-5-1.json', record(5), null),
+      candidate('snapshot-5-2.json', record(5), null),
+    ]);
     expect(chosen?.name).toBe('snapshot-5-2.json');
   });
 
-  it('compares each snapshot with its own file\'s save time', () => {
+  it("compares each snapshot with its own file's save time", () => {
     const chosen = chooseRecoverySnapshot([
       candidate('snapshot-500-2.json', record(500, '/h/saved-later.cwtopic'), 600),
       candidate('snapshot-400-1.json', record(400, '/h/other.cwtopic'), 100),

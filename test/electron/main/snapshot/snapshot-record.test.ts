@@ -1,6 +1,11 @@
 // @vitest-environment node
 import { describe, expect, it } from 'vitest';
-import { createSnapshotText, parseSnapshotText, sealOf, stripPatientFields } from '../../../../electron/main/snapshot/snapshot-record.ts';
+import {
+  createSnapshotText,
+  parseSnapshotText,
+  sealOf,
+  stripPatientFields,
+} from '../../../../electron/main/snapshot/snapshot-record.ts';
 
 // A fixed key for the tests (the app makes a random one, see snapshot-key.ts).
 const key = Buffer.alloc(32, 7);
@@ -40,7 +45,10 @@ describe('stripPatientFields()', () => {
 
 describe('createSnapshotText()', () => {
   it('stores no patient details unless the person chose to keep them', () => {
-    const text = createSnapshotText({ content: draft, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1_700_000_000_000 }, key);
+    const text = createSnapshotText(
+      { content: draft, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1_700_000_000_000 },
+      key,
+    );
     expect(text).not.toContain('Ann Example');
     expect(text).not.toContain('NHS 000');
     expect(parseSnapshotText(text, key)?.keepsPatient).toBe(false);
@@ -53,7 +61,10 @@ describe('createSnapshotText()', () => {
 });
 
 describe('parseSnapshotText()', () => {
-  const text = createSnapshotText({ content: { title: 'T' }, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1234 }, key);
+  const text = createSnapshotText(
+    { content: { title: 'T' }, keepPatient: false, documentPath: '/h/t.cwtopic', savedAt: 1234 },
+    key,
+  );
 
   it('reads back a snapshot it wrote', () => {
     expect(parseSnapshotText(text, key)).toEqual({
@@ -72,7 +83,9 @@ describe('parseSnapshotText()', () => {
 
   it('seals with HMAC-SHA-256', () => {
     // RFC 4231, §4.3, test case 2: key "Jefe", data "what do ya want for nothing?".
-    expect(sealOf(Buffer.from('Jefe'), 'what do ya want for nothing?')).toBe('5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843');
+    expect(sealOf(Buffer.from('Jefe'), 'what do ya want for nothing?')).toBe(
+      '5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843',
+    );
   });
 
   it('rejects a truncated, altered or foreign file', () => {

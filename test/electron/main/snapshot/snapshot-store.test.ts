@@ -30,7 +30,8 @@ describe('createSnapshotStore()', () => {
     const stored = await store.list();
     expect(stored.map((item) => item.record?.savedAt)).toEqual([40, 30, 20]);
     expect(stored[0]?.record?.content).toEqual({ savedAt: 40, patientName: '' });
-    for (const name of await fs.readdir(folder)) expect(await fs.readFile(path.join(folder, name), 'utf8')).not.toContain('Ann Example');
+    for (const name of await fs.readdir(folder))
+      expect(await fs.readFile(path.join(folder, name), 'utf8')).not.toContain('Ann Example');
     if (process.platform !== 'win32') expect((await fs.stat(folder)).mode & 0o777).toBe(0o700);
   });
 
@@ -54,7 +55,9 @@ describe('createSnapshotStore()', () => {
 
   it('runs writes one after another, so concurrent writes all land and pruning keeps the newest', async () => {
     const store = createSnapshotStore({ folder: path.join(base, 's'), key, keep: 2 });
-    await Promise.all([1, 2, 3, 4, 5].map((savedAt) => store.write({ content: { savedAt }, keepPatient: false, documentPath: null, savedAt })));
+    await Promise.all(
+      [1, 2, 3, 4, 5].map((savedAt) => store.write({ content: { savedAt }, keepPatient: false, documentPath: null, savedAt })),
+    );
     expect((await store.list()).map((item) => item.record?.savedAt)).toEqual([5, 4]);
   });
 });

@@ -22,7 +22,12 @@ function fakeContents() {
     listeners.get(name)?.({ preventDefault: () => (prevented = true), ...(url === undefined ? {} : { url }) });
     return prevented;
   };
-  return { contents: contents as unknown as HardenableContents, listeners, fire, openWindow: (url: string) => openHandler?.({ url }) };
+  return {
+    contents: contents as unknown as HardenableContents,
+    listeners,
+    fire,
+    openWindow: (url: string) => openHandler?.({ url }),
+  };
 }
 
 describe('hardenWebContents()', () => {

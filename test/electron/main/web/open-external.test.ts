@@ -44,7 +44,7 @@ describe('isAllowedExternalUrl()', () => {
     expect(isAllowedExternalUrl({ href: 'https://www.example.org/' }, hosts)).toBe(false);
   });
 
-  it('allows nothing with the app\'s own list, which is empty', () => {
+  it("allows nothing with the app's own list, which is empty", () => {
     expect(EXTERNAL_LINK_HOSTS).toEqual([]);
     expect(isAllowedExternalUrl('https://www.example.org/', EXTERNAL_LINK_HOSTS)).toBe(false);
   });

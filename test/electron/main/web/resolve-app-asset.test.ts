@@ -62,7 +62,11 @@ describe('resolveAppAsset()', () => {
   });
 
   it('refuses absolute paths: an empty segment, a drive letter, an encoded leading slash', () => {
-    expect(resolveAppAsset('app://chancewise//etc/passwd', root, path.posix)).toEqual({ ok: false, status: 400, reason: 'empty-segment' });
+    expect(resolveAppAsset('app://chancewise//etc/passwd', root, path.posix)).toEqual({
+      ok: false,
+      status: 400,
+      reason: 'empty-segment',
+    });
     expect(resolveAppAsset('app://chancewise/C:/Windows/win.ini', root, path.posix)).toEqual({
       ok: false,
       status: 400,
@@ -73,7 +77,11 @@ describe('resolveAppAsset()', () => {
       status: 400,
       reason: 'separator-in-segment',
     });
-    expect(resolveAppAsset('app://chancewise/assets/', root, path.posix)).toEqual({ ok: false, status: 400, reason: 'empty-segment' });
+    expect(resolveAppAsset('app://chancewise/assets/', root, path.posix)).toEqual({
+      ok: false,
+      status: 400,
+      reason: 'empty-segment',
+    });
   });
 
   it('refuses NUL and other control characters, and broken percent-encoding', () => {
@@ -83,12 +91,24 @@ describe('resolveAppAsset()', () => {
       reason: 'forbidden-character',
     });
     expect(resolveAppAsset('app://chancewise/a%0Ab', root, path.posix).ok).toBe(false);
-    expect(resolveAppAsset('app://chancewise/%E0%A4%A', root, path.posix)).toEqual({ ok: false, status: 400, reason: 'bad-encoding' });
+    expect(resolveAppAsset('app://chancewise/%E0%A4%A', root, path.posix)).toEqual({
+      ok: false,
+      status: 400,
+      reason: 'bad-encoding',
+    });
   });
 
   it('refuses other hosts, schemes and credentials with 404, and non-addresses with 400', () => {
-    expect(resolveAppAsset('app://elsewhere/index.html', root, path.posix)).toEqual({ ok: false, status: 404, reason: 'foreign-origin' });
-    expect(resolveAppAsset('https://chancewise/index.html', root, path.posix)).toEqual({ ok: false, status: 404, reason: 'foreign-origin' });
+    expect(resolveAppAsset('app://elsewhere/index.html', root, path.posix)).toEqual({
+      ok: false,
+      status: 404,
+      reason: 'foreign-origin',
+    });
+    expect(resolveAppAsset('https://chancewise/index.html', root, path.posix)).toEqual({
+      ok: false,
+      status: 404,
+      reason: 'foreign-origin',
+    });
     expect(resolveAppAsset('app://user:pw@chancewise/index.html', root, path.posix)).toEqual({
       ok: false,
       status: 404,

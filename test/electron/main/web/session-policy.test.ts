@@ -46,7 +46,18 @@ describe('applySessionPolicy()', () => {
     // unless the developer has manually configured a custom handler".
     const { session, captured } = fakeSession();
     applySessionPolicy(session);
-    for (const permission of ['media', 'geolocation', 'notifications', 'clipboard-read', 'openExternal', 'fullscreen', 'hid', 'serial', 'usb', 'unknown']) {
+    for (const permission of [
+      'media',
+      'geolocation',
+      'notifications',
+      'clipboard-read',
+      'openExternal',
+      'fullscreen',
+      'hid',
+      'serial',
+      'usb',
+      'unknown',
+    ]) {
       const callback = vi.fn();
       captured.request?.({}, permission, callback);
       expect(callback, permission).toHaveBeenCalledExactlyOnceWith(false);
@@ -55,7 +66,7 @@ describe('applySessionPolicy()', () => {
     expect(captured.device?.()).toBe(false);
   });
 
-  it('grants full screen to the app\'s own page only, for the teaching view', () => {
+  it("grants full screen to the app's own page only, for the teaching view", () => {
     const { session, captured } = fakeSession();
     applySessionPolicy(session);
     const granted = (permission: string, requestingUrl: string): boolean | undefined => {
@@ -74,7 +85,7 @@ describe('applySessionPolicy()', () => {
     expect(session.setSpellCheckerEnabled).toHaveBeenCalledExactlyOnceWith(false);
   });
 
-  it('cancels every request outside the app, and lets the app\'s own through', () => {
+  it("cancels every request outside the app, and lets the app's own through", () => {
     const { session, captured } = fakeSession();
     applySessionPolicy(session);
     const decide = (url: string): boolean | undefined => {
@@ -88,7 +99,7 @@ describe('applySessionPolicy()', () => {
     expect(decide('file:///etc/hosts')).toBe(true);
   });
 
-  it('allows downloads only of the page\'s own blobs', () => {
+  it("allows downloads only of the page's own blobs", () => {
     const { session, captured } = fakeSession();
     applySessionPolicy(session);
     const prevented = (url: string): boolean => {

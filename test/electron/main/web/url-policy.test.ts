@@ -19,7 +19,16 @@ describe('isAppUrl()', () => {
   });
 
   it('refuses other schemes, relative text and non-strings', () => {
-    for (const value of ['https://chancewise/', 'file:///etc/passwd', 'javascript:alert(1)', 'chancewise/index.html', '/index.html', '', 'app:chancewise/x', 'app:///chancewise/x']) {
+    for (const value of [
+      'https://chancewise/',
+      'file:///etc/passwd',
+      'javascript:alert(1)',
+      'chancewise/index.html',
+      '/index.html',
+      '',
+      'app:chancewise/x',
+      'app:///chancewise/x',
+    ]) {
       expect(isAppUrl(value), value).toBe(false);
     }
     for (const value of [null, undefined, 42, {}, ['app://chancewise/']]) expect(isAppUrl(value)).toBe(false);
@@ -37,7 +46,7 @@ describe('isAllowedNavigation()', () => {
 });
 
 describe('isAllowedRequestUrl()', () => {
-  it('lets through the app files, data images, the page\'s own blobs and the developer tools', () => {
+  it("lets through the app files, data images, the page's own blobs and the developer tools", () => {
     expect(isAllowedRequestUrl('app://chancewise/assets/a.css')).toBe(true);
     expect(isAllowedRequestUrl('data:image/png;base64,iVBORw0KGgo=')).toBe(true);
     expect(isAllowedRequestUrl('blob:app://chancewise/0b7a51d8-1c0e-4f1c-9a55-2f3f4f1c2d11')).toBe(true);

@@ -44,15 +44,25 @@ function documentWith(hasUnsavedChanges: boolean) {
 }
 
 const file: IncomingDocument = { kind: 'file', text: '{}', fileName: 'heart.cwtopic' };
-const answer = (response: number) => dialog.showMessageBox.mockImplementationOnce(async () => ({ response, checkboxChecked: false }));
+const answer = (response: number) =>
+  dialog.showMessageBox.mockImplementationOnce(async () => ({ response, checkboxChecked: false }));
 
 describe('openMainWindow()', () => {
   it('opens one window where it was last, maximised again if it was', async () => {
-    await fs.writeFile(path.join(base, 'window-state.json'), JSON.stringify({ x: 100, y: 80, width: 1000, height: 700, isMaximized: true }));
+    await fs.writeFile(
+      path.join(base, 'window-state.json'),
+      JSON.stringify({ x: 100, y: 80, width: 1000, height: 700, isMaximized: true }),
+    );
     const maximize = vi.spyOn(FakeBrowserWindow.prototype, 'maximize');
     const { window } = await open();
     expect(FakeBrowserWindow.created).toHaveLength(1);
-    expect(window.options).toMatchObject({ x: 100, y: 80, width: 1000, height: 700, webPreferences: { preload: '/app/dist-electron/preload.cjs' } });
+    expect(window.options).toMatchObject({
+      x: 100,
+      y: 80,
+      width: 1000,
+      height: 700,
+      webPreferences: { preload: '/app/dist-electron/preload.cjs' },
+    });
     expect(maximize).toHaveBeenCalledOnce();
   });
 
@@ -196,7 +206,8 @@ describe('the page crashing', () => {
     const { life, window } = await open();
     const document = documentWith(true);
     life.watch(document);
-    for (let crash = 0; crash < 3; crash += 1) window.webContents.emit('render-process-gone', { reason: 'crashed', exitCode: 139 });
+    for (let crash = 0; crash < 3; crash += 1)
+      window.webContents.emit('render-process-gone', { reason: 'crashed', exitCode: 139 });
     expect(document.handBack).toHaveBeenCalledTimes(2);
     expect(dialog.showErrorBox).toHaveBeenCalledOnce();
     expect(app.quit).toHaveBeenCalledOnce();

@@ -40,11 +40,18 @@ describe('fitWindowToDisplays()', () => {
   // standard); the expected rectangles are worked out by hand from the work areas below.
 
   it('opens a first window at the default size, centred on the primary display', () => {
-    expect(fitWindowToDisplays(null, [laptop])).toEqual({ x: 360, y: 110, width: DEFAULT_WINDOW_SIZE.width, height: DEFAULT_WINDOW_SIZE.height });
+    expect(fitWindowToDisplays(null, [laptop])).toEqual({
+      x: 360,
+      y: 110,
+      width: DEFAULT_WINDOW_SIZE.width,
+      height: DEFAULT_WINDOW_SIZE.height,
+    });
   });
 
   it('keeps a remembered window that is fully visible where it was', () => {
-    expect(fitWindowToDisplays({ x: 2000, y: 100, width: 1400, height: 900, isMaximized: false }, [laptop, rightMonitor])).toEqual({
+    expect(
+      fitWindowToDisplays({ x: 2000, y: 100, width: 1400, height: 900, isMaximized: false }, [laptop, rightMonitor]),
+    ).toEqual({
       x: 2000,
       y: 100,
       width: 1400,
@@ -85,8 +92,18 @@ describe('fitWindowToDisplays()', () => {
   });
 
   it('never goes below the minimum size unless the display itself is smaller', () => {
-    expect(fitWindowToDisplays({ x: 0, y: 0, width: 200, height: 100, isMaximized: false }, [laptop])).toEqual({ x: 0, y: 0, width: 800, height: 600 });
+    expect(fitWindowToDisplays({ x: 0, y: 0, width: 200, height: 100, isMaximized: false }, [laptop])).toEqual({
+      x: 0,
+      y: 0,
+      width: 800,
+      height: 600,
+    });
     const tiny = { x: 0, y: 0, width: 640, height: 480 };
-    expect(fitWindowToDisplays({ x: 0, y: 0, width: 1000, height: 700, isMaximized: false }, [tiny])).toEqual({ x: 0, y: 0, width: 640, height: 480 });
+    expect(fitWindowToDisplays({ x: 0, y: 0, width: 1000, height: 700, isMaximized: false }, [tiny])).toEqual({
+      x: 0,
+      y: 0,
+      width: 640,
+      height: 480,
+    });
   });
 });
