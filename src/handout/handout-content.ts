@@ -7,7 +7,9 @@
 import type { Certainty, Topic } from '../core/topic/topic.ts';
 import { type PersonLook, lookOf } from '../core/direction.ts';
 import { peopleFor } from '../core/people-counts.ts';
-import type { PersonGroup, WordsDenominator } from '../core/types.ts';
+import type { Notice, PersonGroup, WordsDenominator } from '../core/types.ts';
+import { duration } from '../core/messages/en/wording.ts';
+import { isTimeUnit, yearsFrom } from '../core/time-unit.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { amountOf } from '../core/wording/amount-of.ts';
 import { frequencyBand } from '../core/wording/frequency-band.ts';
@@ -20,6 +22,16 @@ import { FILL_ORDER } from '../render/fill-sequence.ts';
 import type { IconArrayLayout } from '../render/icon-array-layout.ts';
 import { bandOfCount, rowDenominator } from './band-denominator.ts';
 import type { BenefitAim, HandoutMessages } from './messages/en.ts';
+
+/** The two periods of a baseline conversion as words ("10 years", "15 years"), or null when there was none. */
+function convertedSpans(conversion: Notice | null): { readonly from: string; readonly to: string } | null {
+  if (conversion === null) return null;
+  const span = (amount: unknown, unit: unknown): string | null =>
+    typeof amount === 'number' && isTimeUnit(unit) ? duration({ years: yearsFrom(amount, unit), unit }) : null;
+  const from = span(conversion.values.from, conversion.values.fromUnit ?? 'years');
+  const to = span(conversion.values.to, conversion.values.toUnit ?? 'years');
+  return from === null || to === null ? null : { from, to };
+}
 
 /** One cell of the outcomes table: the people count, and how sure the research is. */
 export interface TableCell {
@@ -297,6 +309,8 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed)),
   ];
   if (headline.baselineSource.trim() !== '') evidence.push(messages.baselineSource(headline.name, headline.baselineSource));
+  const converted = convertedSpans(headline.baselineConversion ?? null);
+  if (converted !== null) evidence.push(messages.baselineConverted(headline.name, converted.from, converted.to));
   const clinician = options.clinician.trim() !== '' ? options.clinician.trim() : topic.clinician.trim();
   const questions = topic.questions.map((question) => question.trim()).filter((question) => question !== '');
   const printed = messages.printed(messages.formatDate(options.date));

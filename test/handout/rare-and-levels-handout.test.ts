@@ -85,6 +85,13 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
   const result = computeTopic(topic);
   const content = handoutContent(result, topic, options);
 
+  // A conversion happens in sight: the evidence line says the starting chance was given for another period.
+  it('says on the evidence line that the starting chance was worked out for 15 years from 10', () => {
+    expect(content.evidence.items).toContain(
+      'Your starting chance of dying of bowel cancer was given for 10 years; it was worked out for 15 years, assuming the chance stays steady over time.',
+    );
+  });
+
   // Derived from the demo file: 2% over 10 years is 1 − 0.98^1.5 = 2.98% over 15, 30 in 1000;
   // with HR 0.8, 1 − (1 − 0.0298)^0.8 = 2.39%, 24 in 1000 (Altman & Andersen 1999, BMJ 319:1492).
   it('enlarges block 0, which holds the 6 people screening helps, in both pictures', () => {

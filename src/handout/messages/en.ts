@@ -59,6 +59,8 @@ export interface HandoutMessages {
   readonly evidenceSummary: (summary: string) => string;
   readonly evidenceReviewed: (reviewed: string) => string;
   readonly baselineSource: (outcome: string, source: string) => string;
+  /** The starting chance was given over another period and worked out for the sheet's: "…over 10 years, worked out for 15 years…". */
+  readonly baselineConverted: (outcome: string, from: string, to: string) => string;
   readonly mattersHeading: string;
   readonly mattersPrompt: string;
   readonly questionsHeading: string;
@@ -195,6 +197,8 @@ export const handoutMessagesEn: HandoutMessages = {
     const trimmed = source.trim().replace(/[.!?]+$/, '');
     return `Your starting chance of ${outcome} comes from: ${trimmed}.`;
   },
+  baselineConverted: (outcome, from, to) =>
+    `Your starting chance of ${outcome} was given for ${from}; it was worked out for ${to}, assuming the chance stays steady over time.`,
   mattersHeading: 'What matters most to you',
   mattersPrompt: 'Think about what is most important to you in this choice. Write it here to talk about.',
   questionsHeading: 'Questions you may want to ask',
