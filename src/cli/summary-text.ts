@@ -1,9 +1,8 @@
 import type { EffectComputation } from '../core/compute-effect.ts';
 import { benefitOf, changeOf } from '../core/direction.ts';
+import { duration } from '../core/messages/en/wording.ts';
 import { formatCount, formatDecimal, formatPercentSignificant, formatSignificant } from '../core/messages/format-number.ts';
 import type { EffectResult, TopicResult } from '../core/topic/topic-result.ts';
-import { amountIn } from '../core/time-unit.ts';
-import type { TimeUnit } from '../core/time-unit.ts';
 import type { Estimate, Notice, PeopleCounts } from '../core/types.ts';
 import { warningSentences } from './warning-sentences.ts';
 
@@ -111,25 +110,11 @@ export function effectSummary(result: EffectComputation, wanted = false): string
   return `${[...lines, ...warningLines(result.notices)].join('\n')}\n`;
 }
 
-const UNIT_WORDS: Readonly<Record<TimeUnit, readonly [string, string]>> = {
-  days: ['day', 'days'],
-  weeks: ['week', 'weeks'],
-  months: ['month', 'months'],
-  years: ['year', 'years'],
-};
-
-/** A topic's period in the unit it was given in: "10 years", "3 days". */
-function periodText(years: number, unit: TimeUnit): string {
-  const amount = amountIn(years, unit);
-  const [one, other] = UNIT_WORDS[unit];
-  return `${formatDecimal(amount, 2)} ${amount === 1 ? one : other}`;
-}
-
 /** The readable summary of a whole topic, for a terminal. */
 export function topicSummary(result: TopicResult): string {
   const lines = [
     result.title,
-    `For ${result.population}, over ${periodText(result.periodYears, result.periodUnit)}, per ${formatCount(result.wordsDenominator)} people.`,
+    `For ${result.population}, over ${duration({ years: result.periodYears, unit: result.periodUnit })}, per ${formatCount(result.wordsDenominator)} people.`,
   ];
   if (result.illustrative) lines.push('Illustrative example: invented numbers, not for real decisions.');
   for (const outcome of result.outcomes) {

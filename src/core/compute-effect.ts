@@ -9,7 +9,7 @@ import {
   chooseDenominator,
   chooseWordsDenominator,
   peopleCounts,
-  peopleFor,
+  showsSameCount,
   pictureDenominatorFor,
   roundingShift,
 } from './people-counts.ts';
@@ -59,11 +59,6 @@ export interface EffectComputation extends EffectResult {
   readonly wordsPeople: PeopleCounts<WordsDenominator> | null;
 }
 
-/** True when the two risks show as the same number of people at `denominator`. */
-function roundsAway(pair: RiskPair, denominator: number): boolean {
-  return peopleFor(pair.comparison, denominator) === peopleFor(pair.intervention, denominator);
-}
-
 /** The two denominators of a set of risk pairs, chosen or forced, with the notices that explain them. */
 export interface DenominatorChoice {
   readonly picture: Denominator;
@@ -88,7 +83,7 @@ export function chooseDenominators(pairs: readonly RiskPair[], per: WordsDenomin
     (pair) => pair.comparison !== pair.intervention && Math.abs(pair.comparison - pair.intervention) * 1000000 < 0.5,
   );
   if (tiny && words === 1000000) notices.push(notice('difference-below-one-in-a-million'));
-  const hidden = pairs.some((pair) => pair.comparison !== pair.intervention && roundsAway(pair, words));
+  const hidden = pairs.some((pair) => pair.comparison !== pair.intervention && showsSameCount(pair, words));
   if (hidden && words < 1000000) notices.push(notice('rounding-hides-difference', { denominator: words }));
   const moved = pairs.reduce((largest, pair) => Math.max(largest, roundingShift(pair, words)), 0);
   if (moved >= 0.5 - 1e-9)

@@ -61,8 +61,12 @@ export function chooseDenominator(pairs: readonly RiskPair[]): Denominator {
 function hidesAt(pair: RiskPair, denominator: number): boolean {
   if (pair.comparison > 0 && peopleFor(pair.comparison, denominator) === 0) return true;
   if (pair.intervention > 0 && peopleFor(pair.intervention, denominator) === 0) return true;
-  const exact = pair.comparison - pair.intervention;
-  return Math.abs(exact) > 1e-15 && peopleFor(pair.comparison, denominator) === peopleFor(pair.intervention, denominator);
+  return Math.abs(pair.comparison - pair.intervention) > 1e-15 && showsSameCount(pair, denominator);
+}
+
+/** True when the two risks of a pair show as the same number of people at `denominator`. */
+export function showsSameCount(pair: RiskPair, denominator: number): boolean {
+  return peopleFor(pair.comparison, denominator) === peopleFor(pair.intervention, denominator);
 }
 
 /**

@@ -3,6 +3,7 @@
  * each format demonstration with its source, the controls, and the teaching-set file
  * messages. Slide builders pass numbers and names; only this file holds English.
  */
+import { UNIT_NAMES_EN } from '../../core/messages/en/time-words.ts';
 import { amountIn } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { StepKind } from '../teaching-steps.ts';
@@ -24,13 +25,6 @@ export interface Period {
   readonly unit: TimeUnit;
 }
 
-const UNIT_NAMES: Readonly<Record<TimeUnit, readonly [string, string]>> = {
-  days: ['day', 'days'],
-  weeks: ['week', 'weeks'],
-  months: ['month', 'months'],
-  years: ['year', 'years'],
-};
-
 /**
  * A period with its preposition, in the unit given: "over 10 years", "over the next 6 months",
  * "by day 3".
@@ -40,7 +34,7 @@ const over = ({ years, unit }: Period): string => {
   const shown = shortDecimal(amount);
   if (unit === 'years') return `over ${shown} ${plural(amount, 'year', 'years')}`;
   if (unit === 'days') return amount === 1 ? 'within a day' : `by day ${shown}`;
-  const [one, other] = UNIT_NAMES[unit];
+  const [one, other] = UNIT_NAMES_EN[unit];
   return amount === 1 ? `over the next ${one}` : `over the next ${shown} ${other}`;
 };
 

@@ -1,23 +1,17 @@
 import type { ProblemValues } from '../../problems.ts';
 import { isEffectMeasure } from '../../effect-measures.ts';
 import { formatCount, formatDecimal, formatPercent } from '../format-number.ts';
+import { isTimeUnit } from '../../time-unit.ts';
 import { measureNamesEn } from './measure-names.ts';
+import { amountWithUnit } from './time-words.ts';
 
 type Render = (values: ProblemValues) => string;
-
-const UNIT_WORDS: Readonly<Record<string, readonly [string, string]>> = {
-  days: ['day', 'days'],
-  weeks: ['week', 'weeks'],
-  months: ['month', 'months'],
-  years: ['year', 'years'],
-};
 
 /** A span of time from an amount and its unit ("3 days", "1 year"); years when no unit is given. */
 const span = (values: ProblemValues, key: string): string => {
   const amount = values[key];
-  const [one, other] = UNIT_WORDS[String(values[`${key}Unit`] ?? 'years')] ?? UNIT_WORDS.years ?? ['year', 'years'];
-  const shown = typeof amount === 'number' ? formatDecimal(amount, 2) : String(amount ?? '');
-  return `${shown} ${amount === 1 ? one : other}`;
+  const unit = values[`${key}Unit`];
+  return typeof amount === 'number' ? amountWithUnit(amount, isTimeUnit(unit) ? unit : 'years') : String(amount ?? '');
 };
 
 const text = (values: ProblemValues, key: string): string => String(values[key] ?? '');

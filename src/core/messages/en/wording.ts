@@ -3,9 +3,9 @@
  * the numbers. The code that computes passes named values and cases; only this
  * file knows English words, plurals and capitals.
  */
-import type { TimeUnit } from '../../time-unit.ts';
 import { amountIn } from '../../time-unit.ts';
 import type { Amount, FrequencyBand, PeriodValues, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
+import { UNIT_NAMES_EN, amountWithUnit } from './time-words.ts';
 import { formatCount, formatDecimal } from '../format-number.ts';
 
 /** English plural rule: the `one` form for exactly 1, the `other` form otherwise. */
@@ -52,19 +52,12 @@ const haveVerb = (outcome: string): string => (startsWithVerb(outcome) ? 'end up
 const getVerb = (outcome: string, count: number): string =>
   startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'gets', 'get');
 
-const UNIT_NAMES: Readonly<Record<TimeUnit, readonly [string, string]>> = {
-  days: ['day', 'days'],
-  weeks: ['week', 'weeks'],
-  months: ['month', 'months'],
-  years: ['year', 'years'],
-};
-
 /** A period as the clinician gave it, with its preposition: "in the next 10 years", "by day 3". */
 const within = ({ years, unit }: PeriodValues): string => {
   const amount = amountIn(years, unit);
   const shown = formatDecimal(amount, 2);
   if (unit === 'days') return amount === 1 ? 'within a day' : `by day ${shown}`;
-  const [one, other] = UNIT_NAMES[unit];
+  const [one, other] = UNIT_NAMES_EN[unit];
   return amount === 1 ? `in the next ${one}` : `in the next ${shown} ${other}`;
 };
 
@@ -75,11 +68,7 @@ const periodAfter = (outcome: string, period: PeriodValues): string => {
 };
 
 /** A length of time: "10 years", "3 days". */
-export const duration = ({ years, unit }: PeriodValues): string => {
-  const amount = amountIn(years, unit);
-  const [one, other] = UNIT_NAMES[unit];
-  return `${formatDecimal(amount, 2)} ${plural(amount, one, other)}`;
-};
+export const duration = ({ years, unit }: PeriodValues): string => amountWithUnit(amountIn(years, unit), unit);
 
 /** An amount as it leads an "in 100" phrase: "about 15 in 100", "fewer than 1 in 1000". */
 const amountPhrase = (amount: Amount, denominator: number): string => {
