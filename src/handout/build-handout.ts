@@ -14,7 +14,7 @@ import { FIT_LADDER, type FitSettings } from './fit-settings.ts';
 import { type HandoutContent, handoutContent } from './handout-content.ts';
 import { type HandoutFonts, codePointsOf, registerFonts } from './handout-fonts.ts';
 import { type HandoutMessages, type HandoutPart, handoutMessagesEn } from './messages/en.ts';
-import { type PageLayout, layoutPage } from './page-layout.ts';
+import { type PageLayout, type PageMode, layoutPage } from './page-layout.ts';
 import { type Paper, contentBox } from './paper-size.ts';
 import { fileIdentifier, pdfDate } from './pdf-identity.ts';
 import { jsPdfMeasure } from './text-layout.ts';
@@ -45,6 +45,8 @@ export interface HandoutBuilt {
   readonly readability: Readability;
   /** The type sizes and spacing the content fitted with. */
   readonly settings: FitSettings;
+  /** Whether every outcome's pictures were printed (all or none). */
+  readonly pictures: boolean;
   /** Every sentence taken from the wording module, as printed. */
   readonly wordingSentences: readonly string[];
   /** The prose the readability was computed from, block by block. */
@@ -70,8 +72,13 @@ function proseOf(content: HandoutContent): string[] {
   return [
     content.title,
     ...content.audience,
-    content.chart.keyIntro,
-    ...content.paragraphs.map((paragraph) => paragraph.join(' ')),
+    content.keyIntro,
+    ...content.outcomes.flatMap((outcome) => [
+      outcome.label,
+      ...outcome.frames.map((frames) => frames.join(' ')),
+      ...outcome.paragraphs.filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
+      ...outcome.assumptions,
+    ]),
     [content.evidence.heading, ...content.evidence.items].join(' '),
     content.matters.prompt,
     ...content.questions.items,
@@ -113,18 +120,36 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     precision: 2,
     floatPrecision: 2,
   });
-  // Every character the page sets; the chart model and close-ups are left out, their pictures have no text (and many people).
-  const closeUpLabel = content.chart.closeUp?.label ?? null;
-  registerFonts(doc, fonts, codePointsOf({ ...content, chart: { ...content.chart, model: null, closeUp: closeUpLabel } }));
+  // Every character the page sets; the chart models and close-ups are left out, their pictures have no text (and many people).
+  const closeUpLabels = content.outcomes.map((outcome) => outcome.pictures.closeUp?.label ?? null);
+  const textOnly = content.outcomes.map((outcome, index) => ({
+    ...outcome,
+    pictures: { ...outcome.pictures, model: null, closeUp: closeUpLabels[index] },
+  }));
+  registerFonts(doc, fonts, codePointsOf({ ...content, outcomes: textOnly }));
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
-  // The enlarged blocks of pictures of 1000 give way last: a sheet that fits only without them is printed without them.
-  const withCloseUps = firstFit((settings) => layoutPage(content, settings, box, palette, measure));
-  const plain: HandoutContent = { ...content, chart: { ...content.chart, closeUp: null } };
-  const fitted =
-    withCloseUps.layout.fits || content.chart.closeUp === null
-      ? withCloseUps
-      : firstFit((settings) => layoutPage(plain, settings, box, palette, measure));
+  // What gives way, in order (see PageMode): the enlarged blocks of pictures of 1000; then every
+  // outcome's pictures together, so that no outcome's pictures stand alone; body text last, as the
+  // fit ladder does, first with the pictures kept and then without.
+  const hasCloseUps = content.outcomes.some((outcome) => outcome.pictures.closeUp !== null);
+  const modes: readonly PageMode[] = [
+    ...(hasCloseUps ? [{ pictures: true, closeUps: true }] : []),
+    { pictures: true, closeUps: false },
+    { pictures: false, closeUps: false },
+    { pictures: true, closeUps: false, small: true },
+    { pictures: false, closeUps: false, small: true },
+  ];
+  const fitWith = (mode: PageMode) => ({
+    ...firstFit((settings) => layoutPage(content, settings, box, palette, measure, mode)),
+    mode,
+  });
+  let fitted = fitWith(modes[0] ?? { pictures: false, closeUps: false });
+  for (const mode of modes.slice(1)) {
+    if (fitted.layout.fits) break;
+    // A refusal says how far over the most compact page (the last tried) still was.
+    fitted = fitWith(mode);
+  }
   if (!fitted.layout.fits) {
     const part = fitted.layout.tooLong ?? 'outcomes';
     const over = Math.max(0, fitted.layout.needed - box.height);
@@ -152,6 +177,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     pages: doc.getNumberOfPages(),
     readability: readability(prose.join('\n\n')),
     settings,
+    pictures: fitted.mode.pictures,
     wordingSentences: content.wordingSentences,
     prose,
   };

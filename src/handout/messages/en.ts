@@ -8,7 +8,7 @@ import { duration } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
 import type { PersonGroup } from '../../core/types.ts';
-import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
+import type { Amount, ChangeDirection, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
 
 /** The parts of a handout the clinician can shorten when it does not fit. */
 export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'questions';
@@ -24,6 +24,23 @@ export interface SheetValues {
   readonly years: number;
   /** The unit the topic's period was given in. */
   readonly unit: TimeUnit;
+}
+
+/** What the values prompt is built from: the headline benefit and the main side effects' names. */
+export interface PromptValues {
+  readonly benefit: string;
+  /** The benefit is an event people want ("a pain-free throat"). */
+  readonly wanted: boolean;
+  /** The main side effects, most added people first; empty when the topic has none. */
+  readonly harms: readonly string[];
+}
+
+/** The change an option makes in a table cell, as people of the row's denominator. */
+export interface CellChange {
+  readonly direction: ChangeDirection;
+  readonly count: number;
+  /** When the counts show no change: the direction of a difference smaller than one person, or null when it is exactly 0. */
+  readonly hidden: 'fewer' | 'more' | null;
 }
 
 /** Whether the other benefit rows are events the options aim to make less likely, more likely, or both. */
@@ -49,7 +66,13 @@ export interface HandoutMessages {
   readonly tableCell: (amount: Amount, denominator: number) => string;
   /** A side effect's cell: its frequency band with the number beside the word. */
   readonly bandCell: (band: FrequencyBand, amount: Amount, denominator: number) => string;
+  /** Under an option's number in the table: the change it makes ("40 more"). */
+  readonly tableChange: (change: CellChange) => string;
   readonly certaintyShort: Readonly<Record<Certainty, string>>;
+  /** Over a side effect's pictures: the chart's heading said to be about a side effect. */
+  readonly sideEffectHeading: (heading: string) => string;
+  /** Before an outcome's sentences: its name, and whether it is a side effect. */
+  readonly outcomeLabel: (outcome: string, kind: 'benefit' | 'harm') => string;
   /** After the sentences with ranges: the level of the interval they are, for one range or `count` of them. */
   readonly rangeLevel: (level: number, count: number) => string;
   /** Under the enlarged block of 100 of a picture of 1000. */
@@ -61,8 +84,11 @@ export interface HandoutMessages {
   readonly baselineSource: (outcome: string, source: string) => string;
   /** The starting chance was given over another period and worked out for the sheet's: "…over 10 years, worked out for 15 years…". */
   readonly baselineConverted: (outcome: string, from: string, to: string) => string;
+  /** An effect applied beyond its trials' follow-up: "The research on screening lasted 12 years; …". */
+  readonly beyondFollowUp: (option: string, followUp: string, period: string) => string;
   readonly mattersHeading: string;
-  readonly mattersPrompt: string;
+  /** The values prompt, built from the topic's benefit and main side effects. */
+  readonly mattersPrompt: (values: PromptValues) => string;
   readonly questionsHeading: string;
   readonly defaultQuestions: readonly string[];
   readonly cautionHeading: string;
@@ -166,14 +192,18 @@ export const handoutMessagesEn: HandoutMessages = {
   sentencesHeading: 'What the numbers mean',
   tableBenefitRows: (aim) =>
     aim === 'lower'
-      ? 'Other outcomes the options aim to lower'
+      ? 'What the options aim to lower'
       : aim === 'raise'
-        ? 'Other outcomes the options aim to make more likely'
-        : 'Other outcomes the options aim to change',
+        ? 'What the options aim to make more likely'
+        : 'What the options aim to change',
   tableHarmRows: 'Side effects: how common they are',
   tableCell: amountCell,
   bandCell: (band, amount, denominator) =>
     band === 'not-known' ? amountCell(amount, denominator) : `${bandWords[band]}: ${amountCell(amount, denominator)}`,
+  tableChange: ({ direction, count, hidden }) => {
+    if (direction !== 'same') return `${formatCount(count)} ${direction}`;
+    return hidden === null ? 'no change' : `under 1 ${hidden}`;
+  },
   certaintyShort: {
     high: 'high certainty',
     moderate: 'moderate certainty',
@@ -181,6 +211,8 @@ export const handoutMessagesEn: HandoutMessages = {
     'very-low': 'very low certainty',
   },
   rangeLevel: (level, count) => `${count === 1 ? 'That range is' : 'Each range is'} a ${formatPercent(level)} interval.`,
+  sideEffectHeading: (heading) => `Side effect: ${heading.charAt(0).toLowerCase()}${heading.slice(1)}`,
+  outcomeLabel: (outcome, kind) => `${capitalise(outcome)}${kind === 'harm' ? ' (side effect)' : ''}.`,
   closeUpLabel: 'The outlined 100 people, enlarged',
   noSideEffects: 'No side effects were entered for this sheet. Ask your clinician about them.',
   evidenceHeading: 'Where these numbers come from:',
@@ -199,8 +231,17 @@ export const handoutMessagesEn: HandoutMessages = {
   },
   baselineConverted: (outcome, from, to) =>
     `Your starting chance of ${outcome} was given for ${from}; it was worked out for ${to}, assuming the chance stays steady over time.`,
+  beyondFollowUp: (option, followUp, period) =>
+    `The research on ${option} lasted ${followUp}; the numbers for ${period} assume its effect carries on.`,
   mattersHeading: 'What matters most to you',
-  mattersPrompt: 'Think about what is most important to you in this choice. Write it here to talk about.',
+  mattersPrompt: ({ benefit, wanted, harms }) => {
+    const aim = wanted ? `a better chance of ${benefit}` : `avoiding ${benefit}`;
+    const against =
+      harms.length === 0
+        ? 'compared with what each option asks of you'
+        : `compared with the chance of ${harms.join(harms.length === 2 ? ' or ' : ', ')}`;
+    return `How much does ${aim} matter to you, ${against}? Write it here to talk about.`;
+  },
   questionsHeading: 'Questions you may want to ask',
   defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
   cautionHeading: 'Please keep in mind:',
