@@ -67,15 +67,16 @@ export interface HandoutRefused {
 
 export type HandoutBuild = HandoutBuilt | HandoutRefused;
 
-/** The sheet's prose, block by block, for the readability score. */
-function proseOf(content: HandoutContent): string[] {
+/** The sheet's prose, block by block, for the readability score (the captions under pictures left out, as the chart's labels). */
+function proseOf(content: HandoutContent, pictures: boolean): string[] {
   return [
     content.title,
     ...content.audience,
     content.keyIntro,
     ...content.outcomes.flatMap((outcome) => [
       outcome.label,
-      ...outcome.frames.map((frames) => frames.join(' ')),
+      // Under pictures the frames are captions, like the chart's labels; without them they lead the paragraphs.
+      ...(pictures ? [] : outcome.frames.map((frames) => frames.join(' '))),
       ...outcome.paragraphs.filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
       ...outcome.assumptions,
     ]),
@@ -169,7 +170,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   doc.setLanguage(messages.language as Parameters<jsPDF['setLanguage']>[0]);
   doc.setCreationDate(creationDate);
   doc.setFileId(fileIdentifier([content.title, options.date, paper, options.appVersion].join('\n')));
-  const prose = proseOf(content);
+  const prose = proseOf(content, fitted.mode.pictures);
   return {
     ok: true,
     pdf: new Uint8Array(doc.output('arraybuffer')),

@@ -123,8 +123,8 @@ describe('the screening demo’s assumptions', () => {
   // The demo file: baseline over 10 years, the sheet's period 15 years, the trials' follow-up 12 years.
   it('says the starting chance was worked out for 15 years, and that the effect is assumed to carry on past 12 years', () => {
     expect(content.outcomes[0]?.assumptions).toEqual([
-      'Your starting chance of dying of bowel cancer was given for 10 years; it was worked out for 15 years, assuming the chance stays steady over time.',
-      'The research on screening lasted 12 years; the numbers for 15 years assume its effect carries on.',
+      'Your starting chance of dying of bowel cancer was given for 10 years. It was worked out for 15 years, assuming it stays steady.',
+      'The research on screening lasted 12 years. The numbers for 15 years assume its effect carries on.',
     ]);
   });
 });

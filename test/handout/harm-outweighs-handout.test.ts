@@ -46,6 +46,6 @@ describe('a handout where the harm outweighs the benefit', () => {
   });
 
   it('asks what matters by naming the benefit and the harm', () => {
-    expect(text).toContain('How much does avoiding a stroke matter to you, compared with the chance of serious bleeding?');
+    expect(text).toContain('How much does avoiding a stroke matter to you? Weigh it against the chance of serious bleeding.');
   });
 });

@@ -230,17 +230,17 @@ export const handoutMessagesEn: HandoutMessages = {
     return `Your starting chance of ${outcome} comes from: ${trimmed}.`;
   },
   baselineConverted: (outcome, from, to) =>
-    `Your starting chance of ${outcome} was given for ${from}; it was worked out for ${to}, assuming the chance stays steady over time.`,
+    `Your starting chance of ${outcome} was given for ${from}. It was worked out for ${to}, assuming it stays steady.`,
   beyondFollowUp: (option, followUp, period) =>
-    `The research on ${option} lasted ${followUp}; the numbers for ${period} assume its effect carries on.`,
+    `The research on ${option} lasted ${followUp}. The numbers for ${period} assume its effect carries on.`,
   mattersHeading: 'What matters most to you',
   mattersPrompt: ({ benefit, wanted, harms }) => {
     const aim = wanted ? `a better chance of ${benefit}` : `avoiding ${benefit}`;
     const against =
       harms.length === 0
-        ? 'compared with what each option asks of you'
-        : `compared with the chance of ${harms.join(harms.length === 2 ? ' or ' : ', ')}`;
-    return `How much does ${aim} matter to you, ${against}? Write it here to talk about.`;
+        ? 'Weigh it against what each option asks of you.'
+        : `Weigh it against the chance of ${harms.join(harms.length === 2 ? ' or ' : ', ')}.`;
+    return `How much does ${aim} matter to you? ${against} Write it here to talk about.`;
   },
   questionsHeading: 'Questions you may want to ask',
   defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
