@@ -130,15 +130,17 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   registerFonts(doc, fonts, codePointsOf({ ...content, outcomes: textOnly }));
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
-  // What gives way, in order (see PageMode): the enlarged blocks of pictures of 1000; then every
-  // outcome's pictures together, so that no outcome's pictures stand alone; body text last, as the
-  // fit ladder does, first with the pictures kept and then without.
+  // What gives way, in order (see PageMode): the enlarged blocks of pictures of 1000; then the
+  // sentences' size, every outcome's alike, so that the pictures stay; then every outcome's pictures
+  // together, so that no outcome's pictures stand alone; then small sentences in two columns of a
+  // readable length; last, in one column, which wastes the least room at paragraph ends.
   const hasCloseUps = content.outcomes.some((outcome) => outcome.pictures.closeUp !== null);
   const modes: readonly PageMode[] = [
     ...(hasCloseUps ? [{ pictures: true, closeUps: true }] : []),
     { pictures: true, closeUps: false },
-    { pictures: false, closeUps: false },
     { pictures: true, closeUps: false, small: true },
+    { pictures: false, closeUps: false },
+    { pictures: false, closeUps: false, small: true, columns: true },
     { pictures: false, closeUps: false, small: true },
   ];
   const fitWith = (mode: PageMode) => ({

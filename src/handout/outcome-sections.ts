@@ -145,7 +145,10 @@ export function outcomeSections(
   options: { readonly showNnt: boolean; readonly messages: HandoutMessages },
 ): OutcomeSection[] {
   const { messages } = options;
-  const worded = handoutSentences(result, { showNnt: options.showNnt }).filter((sentence) => sentence.outcomeId !== null);
+  // "There is no number needed to treat" would repeat the change sentence's "little or no difference".
+  const worded = handoutSentences(result, { showNnt: options.showNnt }).filter(
+    (sentence) => sentence.outcomeId !== null && sentence.kind !== 'nnt-none',
+  );
   const sentences = withLevels(worded, result, messages);
   return printedOutcomes(result).map((outcome) => {
     const model = outcomeChart(result, outcome.outcomeId);

@@ -10,7 +10,7 @@ import { handoutStyles } from './handout-styles.ts';
 import type { HandoutStyles } from './handout-styles.ts';
 import { headerBlock } from './header-block.ts';
 import type { HandoutPart } from './messages/en.ts';
-import { type Block, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
+import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
 import {
   bulletsBlock,
   headingBlock,
@@ -20,9 +20,8 @@ import {
   shadedBox,
   writingLines,
 } from './section-blocks.ts';
-import type { TextStyle } from './text-layout.ts';
-import type { OutcomeSection } from './outcome-sections.ts';
 import { columnsOf, picturesBlock } from './pictures-block.ts';
+import { outcomeWords, twoColumnWords, wordsGaps } from './outcome-words.ts';
 import { tableBlock } from './table-block.ts';
 import { type MeasureWidth, inkDepth, lineHeight, textBlock } from './text-layout.ts';
 
@@ -79,39 +78,11 @@ export interface PageMode {
    * any outcome's detail out; without pictures, the table is left out too.
    */
   readonly small?: boolean;
-}
-
-/** One outcome's sentences: its name leading the first paragraph, a paragraph per option, then its assumptions. */
-function outcomeWords(
-  outcome: OutcomeSection,
-  pictures: boolean,
-  small: boolean,
-  width: number,
-  styles: HandoutStyles,
-  measure: MeasureWidth,
-): Block {
-  // Without pictures, each option's two frames lead its paragraph, as the captions would.
-  const paragraphs = outcome.paragraphs
-    .map((paragraph, index) => (pictures ? paragraph : [...(outcome.frames[index] ?? []), ...paragraph]))
-    .filter((paragraph) => paragraph.length > 0);
-  const [first = [], ...rest] = paragraphs;
-  const body: TextStyle = small ? styles.list : styles.body;
-  const gap = lineHeight(body) * 0.35;
-  const lead = runInParagraph(outcome.label, first.join(' '), width, body, measure);
-  const assumptions: TextStyle = small ? styles.listMuted : styles.bodyMuted;
-  return stack(
-    [
-      lead,
-      paragraphsBlock(rest, width, body, measure),
-      paragraphsBlock(
-        outcome.assumptions.map((line) => [line]),
-        width,
-        assumptions,
-        measure,
-      ),
-    ],
-    gap,
-  );
+  /**
+   * With `small` and no pictures, the sentences flow into two columns: a line of about 60
+   * characters rather than 120 at the list size (common practice for legible print).
+   */
+  readonly columns?: boolean;
 }
 
 /** Two blocks side by side, each half the width less the gutter. */
@@ -213,7 +184,7 @@ export function layoutPage(
   const styles = handoutStyles(settings, palette);
   const width = box.width;
   const heading = (text: string) => headingBlock(text, width, styles, measure);
-  const header = headerBlock(content, width, styles, measure);
+  const header = headerBlock(content, width, styles, measure, mode.small === true && !mode.pictures);
   const firstModel = content.outcomes[0]?.pictures.model;
   const columns = columnsOf(content.titles.length, firstModel?.denominator ?? 100, width);
   const pictureSections = mode.pictures
@@ -230,21 +201,24 @@ export function layoutPage(
       )
     : [];
   const refused = pictureSections.find((found) => !found.ok);
-  const small = mode.small === true;
-  const words = content.outcomes.map((outcome) => outcomeWords(outcome, mode.pictures, small, width, styles, measure));
-  const wordsGap = lineHeight(styles.body) * 0.6;
+  const setting = { pictures: mode.pictures, small: mode.small === true };
+  const words = content.outcomes.map((outcome) => outcomeWords(outcome, setting, width, styles, measure));
+  const allWords =
+    mode.columns === true
+      ? twoColumnWords(content.outcomes, setting, width, COLUMN_GUTTER, styles, measure)
+      : stack(words, wordsGaps(setting, styles).outcome);
   // With pictures, each outcome's sentences sit under its own pictures, and the captions carry the
   // numbers a table would repeat; without them, the table sets the outcomes side by side (band words
-  // with the numbers beside them) before every outcome's sentences.
+  // with the numbers beside them) before every outcome's sentences, unless the page is too tight.
   const outcomeBlocks = mode.pictures
     ? content.outcomes.map((outcome, index) => {
         const found = pictureSections[index];
-        const pictures = found === undefined || !found.ok ? EMPTY_PICTURES : found.block;
-        return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_PICTURES], lineHeight(styles.body) * 0.4);
+        const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
+        return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
       })
     : [
-        small ? EMPTY_PICTURES : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
-        section(heading(content.sentencesHeading), stack(words, small ? lineHeight(styles.list) * 0.5 : wordsGap)),
+        setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
+        section(heading(content.sentencesHeading), allWords),
       ];
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);
@@ -279,4 +253,3 @@ export function layoutPage(
   return { items, fits: true, needed, tooLong: null, parts: partHeights };
 }
 
-const EMPTY_PICTURES: Block = { items: [], height: 0 };
