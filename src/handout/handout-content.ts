@@ -108,6 +108,9 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
       ),
       right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
-    wordingSentences: [...population.map((sentence) => sentence.text), ...outcomes.flatMap((section) => section.wordingSentences)],
+    wordingSentences: [
+      ...population.map((sentence) => sentence.text),
+      ...outcomes.flatMap((section) => section.wordingSentences),
+    ],
   };
 }

@@ -40,7 +40,10 @@ export function outcomePieces(
 }
 
 /** The gap between two paragraphs of one outcome, and between outcomes, in millimetres. */
-export function wordsGaps(setting: WordsSetting, styles: HandoutStyles): { readonly paragraph: number; readonly outcome: number } {
+export function wordsGaps(
+  setting: WordsSetting,
+  styles: HandoutStyles,
+): { readonly paragraph: number; readonly outcome: number } {
   const line = lineHeight(setting.small ? styles.list : styles.body);
   return setting.small ? { paragraph: line * 0.2, outcome: line * 0.4 } : { paragraph: line * 0.35, outcome: line * 0.6 };
 }

@@ -11,15 +11,7 @@ import type { HandoutStyles } from './handout-styles.ts';
 import { headerBlock } from './header-block.ts';
 import type { HandoutPart } from './messages/en.ts';
 import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
-import {
-  bulletsBlock,
-  headingBlock,
-  paragraphsBlock,
-  runInParagraph,
-  section,
-  shadedBox,
-  writingLines,
-} from './section-blocks.ts';
+import { bulletsBlock, headingBlock, runInParagraph, section, shadedBox, writingLines } from './section-blocks.ts';
 import { columnsOf, picturesBlock } from './pictures-block.ts';
 import { outcomeWords, twoColumnWords, wordsGaps } from './outcome-words.ts';
 import { tableBlock } from './table-block.ts';
@@ -252,4 +244,3 @@ export function layoutPage(
   const items = [...placeBlock(main, box.x, box.y), ...placeBlock(foot, box.x, box.y + box.height - foot.height)];
   return { items, fits: true, needed, tooLong: null, parts: partHeights };
 }
-

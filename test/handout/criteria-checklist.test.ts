@@ -46,13 +46,17 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     const periods = new Set<string>();
     for (const outcome of content.outcomes) {
       for (const [event] of outcome.frames) {
-        expect(event, event).toMatch(new RegExp(`(about \\d+|fewer than 1|none of|nearly all|all) (in )?${result.wordsDenominator}\\b`));
-        periods.add(period.exec(event ?? '')?.[0] ?? (event ?? ''));
+        expect(event, event).toMatch(
+          new RegExp(`(about \\d+|fewer than 1|none of|nearly all|all) (in )?${result.wordsDenominator}\\b`),
+        );
+        periods.add(period.exec(event ?? '')?.[0] ?? event ?? '');
       }
     }
     expect(periods.size).toBe(1);
     // A side-effect row written per more people, so its band word and number agree, is said on the sheet.
-    const raised = content.table.sections.flatMap((section) => section.rows).some((row) => row.denominator !== result.wordsDenominator);
+    const raised = content.table.sections
+      .flatMap((section) => section.rows)
+      .some((row) => row.denominator !== result.wordsDenominator);
     if (raised) printed('unless it says otherwise');
   });
 
@@ -75,7 +79,11 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     for (const outcome of content.outcomes) {
       outcome.paragraphs.forEach((paragraph, index) => {
         if (index === 0) return;
-        const uncertainty = paragraph.find((sentence) => /could be anywhere|anything from|with little uncertainty|little or no change|whole range|does not tell us how precise/.test(sentence));
+        const uncertainty = paragraph.find((sentence) =>
+          /could be anywhere|anything from|with little uncertainty|little or no change|whole range|does not tell us how precise/.test(
+            sentence,
+          ),
+        );
         expect(uncertainty, `${outcome.outcomeId}, option ${index}`).toBeDefined();
         printed(uncertainty ?? '');
       });

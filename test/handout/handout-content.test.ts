@@ -68,7 +68,9 @@ describe('the content of a handout', () => {
     expect(section.paragraphs.map((paragraph) => paragraph.length)).toEqual([0, 3, 3]);
     const last = content.outcomes.at(-1)?.paragraphs.at(-1) ?? [];
     expect(last).toContain('Each range is a 95% interval.');
-    expect(content.outcomes.flatMap((outcome) => outcome.paragraphs.flat()).filter((text) => text.includes('interval.'))).toHaveLength(1);
+    expect(
+      content.outcomes.flatMap((outcome) => outcome.paragraphs.flat()).filter((text) => text.includes('interval.')),
+    ).toHaveLength(1);
   });
 
   it('adds the number needed to treat, with its interval, only when asked', () => {

@@ -5,6 +5,8 @@
 import { describe, expect, it } from 'vitest';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
+import { handoutContent } from '../../src/handout/handout-content.ts';
+import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
 import { harmOutweighsTopic } from './harm-outweighs-topic.ts';
 import { pdfText, testFonts, writePdf } from './support.ts';
 
@@ -30,16 +32,24 @@ describe('a handout where the harm outweighs the benefit', () => {
   });
 
   it('gives the harm its counts with and without, the "will not" frame, the extra people, the range and the certainty', () => {
-    expect(text).toContain('No tablet: about 20 in 1000 people like you will have serious bleeding in the next 5 years. About 980 will not.');
-    expect(text).toContain('The tablet: about 60 in 1000 people like you will have serious bleeding in the next 5 years. About 940 will not.');
+    expect(text).toContain(
+      'No tablet: about 20 in 1000 people like you will have serious bleeding in the next 5 years. About 980 will not.',
+    );
+    expect(text).toContain(
+      'The tablet: about 60 in 1000 people like you will have serious bleeding in the next 5 years. About 940 will not.',
+    );
     expect(text).toContain('About 40 in 1000 get serious bleeding because of the tablet.');
     expect(text).toContain('could be anywhere between 20 and 70 in 1000');
     expect(text).toContain('The tablet increases the chance of serious bleeding.');
   });
 
   it('gives the benefit the same elements', () => {
-    expect(text).toContain('No tablet: about 30 in 1000 people like you will have a stroke in the next 5 years. About 970 will not.');
-    expect(text).toContain('The tablet: about 27 in 1000 people like you will have a stroke in the next 5 years. About 973 will not.');
+    expect(text).toContain(
+      'No tablet: about 30 in 1000 people like you will have a stroke in the next 5 years. About 970 will not.',
+    );
+    expect(text).toContain(
+      'The tablet: about 27 in 1000 people like you will have a stroke in the next 5 years. About 973 will not.',
+    );
     expect(text).toContain('With the tablet, about 3 of those 1000 people avoid a stroke.');
     expect(text).toContain('could be anywhere between 0 and 6 in 1000');
     expect(text).toContain('The tablet probably reduces the chance of a stroke.');
@@ -47,5 +57,27 @@ describe('a handout where the harm outweighs the benefit', () => {
 
   it('asks what matters by naming the benefit and the harm', () => {
     expect(text).toContain('How much does avoiding a stroke matter to you? Weigh it against the chance of serious bleeding.');
+  });
+
+  // EU SmPC guideline (European Commission 2009, section 4.8): 2% and 6% are both "common" (1 in 100 to
+  // 1 in 10), so the band word stands with the numbers with and without and the change of 40.
+  it('never lets the band word "common" hide the difference between 20 and 60 in 1000', () => {
+    const content = handoutContent(computeTopic(topic), topic, {
+      date: '2026-12-01',
+      appVersion: '0.1.0',
+      showNnt: false,
+      clinician: '',
+      messages: handoutMessagesEn,
+    });
+    const bleed = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'bleed');
+    expect(bleed?.cells.map((cell) => [cell.value, cell.change])).toEqual([
+      ['common: 20 in 1000', null],
+      ['common: 60 in 1000', '40 more'],
+    ]);
+    const stroke = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'stroke');
+    expect(stroke?.cells.map((cell) => [cell.value, cell.change])).toEqual([
+      ['30 in 1000', null],
+      ['27 in 1000', '3 fewer'],
+    ]);
   });
 });

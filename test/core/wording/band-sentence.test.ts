@@ -23,12 +23,16 @@ const harm = (intervention: number, interventionRisk: number | null, denominator
 describe('bandSentence', () => {
   it('says "common: about 3 in 100 people" for a 3% side effect', () => {
     const found = sentenceOf(harm(3, 0.03), 'band');
-    expect(found?.text).toBe('With the tablet, muscle pain is common: about 3 in 100 people, against about 1 in 100 with no tablet (2 more in 100).');
+    expect(found?.text).toBe(
+      'With the tablet, muscle pain is common: about 3 in 100 people, against about 1 in 100 with no tablet (2 more in 100).',
+    );
     expect(found?.numbers).toEqual({ count: 3, denominator: 100, from: 1, caused: 2 });
   });
 
   it('says "very common" from 1 in 10 upwards, with the count beside it', () => {
-    expect(sentenceOf(harm(10, 0.1), 'band')?.text).toBe('With the tablet, muscle pain is very common: about 10 in 100 people, against about 1 in 100 with no tablet (9 more in 100).');
+    expect(sentenceOf(harm(10, 0.1), 'band')?.text).toBe(
+      'With the tablet, muscle pain is very common: about 10 in 100 people, against about 1 in 100 with no tablet (9 more in 100).',
+    );
   });
 
   it('says "very rare: fewer than 1 in 1000 people" for a risk that rounds to no one in 1000', () => {

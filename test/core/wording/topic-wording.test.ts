@@ -123,8 +123,7 @@ function expectSentenceNumbers(found: WordingSentence, option: OptionOutcomeResu
         limits.some((limit) => Math.abs(limit - value) < 1 + 1e-9),
         where,
       ).toBe(true);
-    }
-    else if (role === 'from') expect(value, where).toBe(comparison);
+    } else if (role === 'from') expect(value, where).toBe(comparison);
     else if (role === 'to') expect(value, where).toBe(withOutcome);
     else if (role === 'percent')
       expect(value, where).toBe(Math.abs(halfAway((1 - (option.relativeRisk?.estimate ?? NaN)) * 100)));

@@ -200,10 +200,7 @@ export const wordingMessages: WordingMessages = {
   },
   band: ({ option, outcome, band, amount, denominator, comparison, comparisonAmount, direction, count }) => {
     if (band === 'not-known') return `With ${option}, how often ${outcome} happens is not known.`;
-    const change =
-      direction === 'same'
-        ? 'the same number'
-        : `${formatCount(count)} ${direction} in ${formatCount(denominator)}`;
+    const change = direction === 'same' ? 'the same number' : `${formatCount(count)} ${direction} in ${formatCount(denominator)}`;
     return `With ${option}, ${outcome} is ${bandNames[band]}: ${amountPhrase(amount, denominator)} people, against ${amountPhrase(comparisonAmount, denominator)} with ${comparison} (${change}).`;
   },
   /*
