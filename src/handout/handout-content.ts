@@ -72,11 +72,9 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     arrays.map((array) => array.optionId),
     messages,
   );
-  const rareRows = table.sections.some((section) => section.rows.some((row) => row.denominator !== result.wordsDenominator));
   const sheet = {
     denominator: result.denominator,
     wordsDenominator: result.wordsDenominator,
-    rareRows,
     years: result.periodYears,
     unit: result.periodUnit,
   };

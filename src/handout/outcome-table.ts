@@ -46,6 +46,8 @@ export interface OutcomeTable {
   readonly sections: readonly TableSection[];
   /** Said under the table when no side effect was entered; null otherwise. */
   readonly noSideEffects: string | null;
+  /** Said under the table when a row counts out of more people than the sheet's words; null otherwise. */
+  readonly rareNote: string | null;
 }
 
 /** The change an option makes, as people of the row's denominator: positive is fewer with the outcome. */
@@ -129,8 +131,10 @@ export function outcomeTable(result: TopicResult, optionIds: readonly string[], 
     { heading: messages.tableBenefitRows(benefitAim(benefits)), rows: benefits.map(rowOf) },
     { heading: messages.tableHarmRows, rows: printed.filter((outcome) => outcome.kind === 'harm').map(rowOf) },
   ].filter((section) => section.rows.length > 0);
+  const raised = sections.some((section) => section.rows.some((row) => row.denominator !== result.wordsDenominator));
   return {
     sections,
     noSideEffects: result.outcomes.some((outcome) => outcome.kind === 'harm') ? null : messages.noSideEffects,
+    rareNote: raised ? messages.rareRowsNote : null,
   };
 }

@@ -97,8 +97,9 @@ export function tableBlock(
   }
   items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.strongRule, thickness: 0.4 });
   top += 0.4;
-  if (table.noSideEffects !== null) {
-    const note = textBlock(table.noSideEffects, width, styles.listMuted, measure);
+  for (const said of [table.rareNote, table.noSideEffects]) {
+    if (said === null) continue;
+    const note = textBlock(said, width, styles.listMuted, measure);
     top += PAD_Y;
     items.push(...textItem(note, 0, top).items);
     top += note.height + lineHeight(styles.listMuted) * 0.1;

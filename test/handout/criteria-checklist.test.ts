@@ -53,11 +53,14 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
       }
     }
     expect(periods.size).toBe(1);
-    // A side-effect row written per more people, so its band word and number agree, is said on the sheet.
+    // A side-effect row written per more people, so its band word and number agree, is said under the
+    // table wherever that table is printed.
     const raised = content.table.sections
       .flatMap((section) => section.rows)
-      .some((row) => row.denominator !== result.wordsDenominator);
-    if (raised) printed('unless it says otherwise');
+      .filter((row) => row.denominator !== result.wordsDenominator);
+    for (const row of raised) {
+      if (text.includes(`in ${row.denominator.toLocaleString('en-GB')}`)) printed(content.table.rareNote ?? 'a note');
+    }
   });
 
   // IPDAS 2005 checklist, "presenting probabilities": positive and negative frames; IPDASi item 8

@@ -123,8 +123,9 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
     expect(bleed?.cells.map((cell) => cell.value)).toEqual(['rare: 5 in 10,000', 'uncommon: 15 in 10,000']);
     const camera = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'camera');
     expect(camera?.cells.map((cell) => cell.value)).toEqual(['common: 10 in 1000', 'common: 90 in 1000']);
-    expect(content.audience.at(-1)).toBe(
-      'Every number on this sheet is out of 1000 people unless it says otherwise, over the next 15 years.',
+    expect(content.audience.at(-1)).toBe('Every number on this sheet is out of 1000 people, over the next 15 years.');
+    expect(content.table.rareNote).toBe(
+      'A rare side effect’s row counts out of more people, as it says, so that the word and the number agree.',
     );
   });
 });

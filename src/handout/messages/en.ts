@@ -19,8 +19,6 @@ export interface SheetValues {
   readonly denominator: number;
   /** The words' and table's denominator: the pictures', or 10,000 up to a million for a rare outcome. */
   readonly wordsDenominator: number;
-  /** Some side effects are written out of more people than the words' denominator, so band and number agree. */
-  readonly rareRows: boolean;
   readonly years: number;
   /** The unit the topic's period was given in. */
   readonly unit: TimeUnit;
@@ -78,6 +76,8 @@ export interface HandoutMessages {
   /** Under the enlarged block of 100 of a picture of 1000. */
   readonly closeUpLabel: string;
   readonly noSideEffects: string;
+  /** Under the table when a rare side effect's row counts out of more people, so its band word and number agree. */
+  readonly rareRowsNote: string;
   readonly evidenceHeading: string;
   readonly evidenceSummary: (summary: string) => string;
   readonly evidenceReviewed: (reviewed: string) => string;
@@ -171,10 +171,9 @@ export const handoutMessagesEn: HandoutMessages = {
   paperName: { a4: 'A4', letter: 'US Letter' },
   illustrativeBadge: 'Illustrative example: invented numbers',
   numbersFor: (values) => {
-    const otherwise = values.rareRows ? ' unless it says otherwise' : '';
     return values.wordsDenominator === values.denominator
-      ? `Every number on this sheet is out of ${formatCount(values.denominator)} people${otherwise}, over ${period(values)}.`
-      : `The pictures show ${formatCount(values.denominator)} people; every other number is out of ${formatCount(values.wordsDenominator)}${otherwise}, over ${period(values)}.`;
+      ? `Every number on this sheet is out of ${formatCount(values.denominator)} people, over ${period(values)}.`
+      : `The pictures show ${formatCount(values.denominator)} people; every other number is out of ${formatCount(values.wordsDenominator)}, over ${period(values)}.`;
   },
   keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
   keyGroups: {
@@ -214,6 +213,7 @@ export const handoutMessagesEn: HandoutMessages = {
   sideEffectHeading: (heading) => `Side effect: ${heading.charAt(0).toLowerCase()}${heading.slice(1)}`,
   outcomeLabel: (outcome, kind) => `${capitalise(outcome)}${kind === 'harm' ? ' (side effect)' : ''}.`,
   closeUpLabel: 'The outlined 100 people, enlarged',
+  rareRowsNote: 'A rare side effect’s row counts out of more people, as it says, so that the word and the number agree.',
   noSideEffects: 'No side effects were entered for this sheet. Ask your clinician about them.',
   evidenceHeading: 'Where these numbers come from:',
   evidenceSummary: (summary) => {
