@@ -47,6 +47,8 @@ export interface HandoutBuilt {
   readonly settings: FitSettings;
   /** Whether every outcome's pictures were printed (all or none). */
   readonly pictures: boolean;
+  /** The size of every outcome's sentences, in points: the body size, or the list size when the page is tight. */
+  readonly sentenceSize: number;
   /** Every sentence taken from the wording module, as printed. */
   readonly wordingSentences: readonly string[];
   /** The prose the readability was computed from, block by block. */
@@ -181,6 +183,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     readability: readability(prose.join('\n\n')),
     settings,
     pictures: fitted.mode.pictures,
+    sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
     wordingSentences: content.wordingSentences,
     prose,
   };
