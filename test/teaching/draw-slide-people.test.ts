@@ -106,30 +106,33 @@ describe('drawing a slide’s people', () => {
   it.each([
     [STONE, 'uncertainty', 0],
     [SCREENING, 'helped', 1],
-  ] as const)('draws every person of the model (%s, %s slide) in the shape of their group and look, at their place', (name, kind, index) => {
-    const { svg, panel } = drawn(name, kind, index);
-    // The drawing is in units of a tenth of a cell.
-    const scaled = scaleLayout(panel.layout, 10 / panel.layout.geometry.cellSize);
-    const { iconSize } = scaled.geometry;
-    const drawnAt: { box: ReturnType<typeof runBox>; group: string | null; look: string | null }[] = [];
-    for (const path of svg.querySelectorAll('path.person')) {
-      const runs = pathRuns(path.getAttribute('d') ?? '');
-      expect(runs).toHaveLength(Number(path.getAttribute('data-count')));
-      for (const run of runs)
-        drawnAt.push({ box: runBox(run), group: path.getAttribute('data-outcome'), look: path.getAttribute('data-look') });
-    }
-    expect(drawnAt).toHaveLength(scaled.people.length);
-    for (const person of scaled.people) {
-      const inside = drawnAt.filter(
-        ({ box }) =>
-          box.left >= person.x - 0.01 &&
-          box.right <= person.x + iconSize + 0.01 &&
-          box.top >= person.y - 0.01 &&
-          box.bottom <= person.y + iconSize + 0.01,
-      );
-      expect(inside.map(({ group, look }) => `${group} ${look}`)).toEqual([`${person.group} ${panel.looks[person.index]}`]);
-    }
-  });
+  ] as const)(
+    'draws every person of the model (%s, %s slide) in the shape of their group and look, at their place',
+    (name, kind, index) => {
+      const { svg, panel } = drawn(name, kind, index);
+      // The drawing is in units of a tenth of a cell.
+      const scaled = scaleLayout(panel.layout, 10 / panel.layout.geometry.cellSize);
+      const { iconSize } = scaled.geometry;
+      const drawnAt: { box: ReturnType<typeof runBox>; group: string | null; look: string | null }[] = [];
+      for (const path of svg.querySelectorAll('path.person')) {
+        const runs = pathRuns(path.getAttribute('d') ?? '');
+        expect(runs).toHaveLength(Number(path.getAttribute('data-count')));
+        for (const run of runs)
+          drawnAt.push({ box: runBox(run), group: path.getAttribute('data-outcome'), look: path.getAttribute('data-look') });
+      }
+      expect(drawnAt).toHaveLength(scaled.people.length);
+      for (const person of scaled.people) {
+        const inside = drawnAt.filter(
+          ({ box }) =>
+            box.left >= person.x - 0.01 &&
+            box.right <= person.x + iconSize + 0.01 &&
+            box.top >= person.y - 0.01 &&
+            box.bottom <= person.y + iconSize + 0.01,
+        );
+        expect(inside.map(({ group, look }) => `${group} ${look}`)).toEqual([`${person.group} ${panel.looks[person.index]}`]);
+      }
+    },
+  );
 
   it('draws a legend figure of one look in a unit box', () => {
     const svg = document.createElementNS(SVG, 'svg');

@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { jsPDF } from 'jspdf';
 import { describe, expect, it } from 'vitest';
-import type { PeopleGroups } from '../../../src/core/types.ts';
+import type { PeopleGroups, PersonGroup } from '../../../src/core/types.ts';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { iconArrayLayout } from '../../../src/render/icon-array-layout.ts';
 import { colourPalette } from '../../../src/render/palette.ts';
@@ -98,39 +98,43 @@ describe('drawIconArrayPdf', () => {
   it.each([
     [100, hundred, 70],
     [1000, thousand, 170],
-  ] as const)('places one form per look at every person of the layout (per %i), each cell where the layout puts it', (_, groups, width) => {
-    const doc = newDocument();
-    const layout = iconArrayLayout(groups.denominator, groups, { arrangement: 'scattered' });
-    const box = { x: 20, y: 30, width };
-    drawIconArrayPdf(doc, layout, box, colourPalette);
-    const pdf = doc.output();
-    const placements = formPlacements(pdf);
-    expect(placements).toHaveLength(groups.denominator);
-    // Points per millimetre (PostScript points, 72 per inch), and the A4 page height in points.
-    const k = 72 / 25.4;
-    const pageHeight = 297 * k;
-    const scale = width / layout.geometry.width;
-    const { cellSize, iconSize } = layout.geometry;
-    const inset = ((cellSize - iconSize) / 2) * scale;
-    const formOf = new Map<string, string>();
-    for (const person of layout.people) {
-      // The cell's top-left corner, in millimetres from the page's top-left corner.
-      const left = box.x + person.x * scale - inset;
-      const top = box.y + person.y * scale - inset;
-      const found = placements.filter(
-        (placement) => Math.abs(placement.x - left * k) < 0.011 && Math.abs(pageHeight - placement.y - (top + cellSize * scale) * k) < 0.011,
-      );
-      expect(found).toHaveLength(1);
-      // One form per group: everyone of a group is placed from the same one, and no two groups share one.
-      const form = found[0]!.form;
-      expect(formOf.get(person.group) ?? form).toBe(form);
-      formOf.set(person.group, form);
-    }
-    expect(new Set(formOf.values()).size).toBe(formOf.size);
-    expect(formStreams(pdf).size).toBe(formOf.size);
-    for (const [group, form] of formOf)
-      expect(placements.filter((placement) => placement.form === form)).toHaveLength(groups[group]);
-  });
+  ] as const)(
+    'places one form per look at every person of the layout (per %i), each cell where the layout puts it',
+    (_, groups, width) => {
+      const doc = newDocument();
+      const layout = iconArrayLayout(groups.denominator, groups, { arrangement: 'scattered' });
+      const box = { x: 20, y: 30, width };
+      drawIconArrayPdf(doc, layout, box, colourPalette);
+      const pdf = doc.output();
+      const placements = formPlacements(pdf);
+      expect(placements).toHaveLength(groups.denominator);
+      // Points per millimetre (PostScript points, 72 per inch), and the A4 page height in points.
+      const k = 72 / 25.4;
+      const pageHeight = 297 * k;
+      const scale = width / layout.geometry.width;
+      const { cellSize, iconSize } = layout.geometry;
+      const inset = ((cellSize - iconSize) / 2) * scale;
+      const formOf = new Map<PersonGroup, string>();
+      for (const person of layout.people) {
+        // The cell's top-left corner, in millimetres from the page's top-left corner.
+        const left = box.x + person.x * scale - inset;
+        const top = box.y + person.y * scale - inset;
+        const found = placements.filter(
+          (placement) =>
+            Math.abs(placement.x - left * k) < 0.011 && Math.abs(pageHeight - placement.y - (top + cellSize * scale) * k) < 0.011,
+        );
+        expect(found).toHaveLength(1);
+        // One form per group: everyone of a group is placed from the same one, and no two groups share one.
+        const form = found[0]!.form;
+        expect(formOf.get(person.group) ?? form).toBe(form);
+        formOf.set(person.group, form);
+      }
+      expect(new Set(formOf.values()).size).toBe(formOf.size);
+      expect(formStreams(pdf).size).toBe(formOf.size);
+      for (const [group, form] of formOf)
+        expect(placements.filter((placement) => placement.form === form)).toHaveLength(groups[group]);
+    },
+  );
 
   it('outlines the uncertain people with a dash when asked', () => {
     const doc = newDocument();

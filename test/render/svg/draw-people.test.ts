@@ -53,40 +53,46 @@ describe('drawn people', () => {
     [100, 'grouped'],
     [1000, 'grouped'],
     [1000, 'scattered'],
-  ] as const)('draw every person of the layout (per %i, %s) inside their group’s shape, at their place', (denominator, arrangement) => {
-    const model = outcomeChart(
-      topicFixture(denominator, denominator === 100 ? { comparison: 20, intervention: 13 } : { comparison: 200, intervention: 125 }),
-      'stroke',
-      { arrangement },
-    );
-    const svg = testDocument.createElementNS('http://www.w3.org/2000/svg', 'svg');
-    const frame = drawChart(svg, model);
-    model.arrays.forEach((_, index) => {
-      const layout = frame.arrays[index]!.grid.layout;
-      const { iconSize } = layout.geometry;
-      const drawn = new Map<string, string>();
-      for (const shape of svg.querySelectorAll('g.chart-array')[index]!.querySelectorAll('g.people > path')) {
-        const runs = pathRuns(shape.getAttribute('d') ?? '');
-        expect(runs).toHaveLength(Number(shape.getAttribute('data-count')));
-        for (const run of runs) {
-          const box = runBox(run);
-          drawn.set(`${hundredths(box.left)} ${hundredths(box.top)}`, shape.getAttribute('data-outcome') ?? '');
-          // The figure stays inside its glyph box (half a hundredth of rounding allowed).
-          expect(box.right - box.left).toBeLessThanOrEqual(iconSize + 0.01);
-          expect(box.bottom - box.top).toBeLessThanOrEqual(iconSize + 0.01);
+  ] as const)(
+    'draw every person of the layout (per %i, %s) inside their group’s shape, at their place',
+    (denominator, arrangement) => {
+      const model = outcomeChart(
+        topicFixture(
+          denominator,
+          denominator === 100 ? { comparison: 20, intervention: 13 } : { comparison: 200, intervention: 125 },
+        ),
+        'stroke',
+        { arrangement },
+      );
+      const svg = testDocument.createElementNS('http://www.w3.org/2000/svg', 'svg');
+      const frame = drawChart(svg, model);
+      model.arrays.forEach((_, index) => {
+        const layout = frame.arrays[index]!.grid.layout;
+        const { iconSize } = layout.geometry;
+        const drawn = new Map<string, string>();
+        for (const shape of svg.querySelectorAll('g.chart-array')[index]!.querySelectorAll('g.people > path')) {
+          const runs = pathRuns(shape.getAttribute('d') ?? '');
+          expect(runs).toHaveLength(Number(shape.getAttribute('data-count')));
+          for (const run of runs) {
+            const box = runBox(run);
+            drawn.set(`${hundredths(box.left)} ${hundredths(box.top)}`, shape.getAttribute('data-outcome') ?? '');
+            // The figure stays inside its glyph box (half a hundredth of rounding allowed).
+            expect(box.right - box.left).toBeLessThanOrEqual(iconSize + 0.01);
+            expect(box.bottom - box.top).toBeLessThanOrEqual(iconSize + 0.01);
+          }
         }
-      }
-      expect(drawn.size).toBe(denominator);
-      // Every person of the model is drawn in their own group's shape, inside their own box.
-      for (const person of layout.people) {
-        const match = [...drawn].find(([key]) => {
-          const [left, top] = key.split(' ').map(Number) as [number, number];
-          return left >= person.x - 0.01 && left <= person.x + iconSize && top >= person.y - 0.01 && top <= person.y + iconSize;
-        });
-        expect(match?.[1]).toBe(person.group);
-      }
-    });
-  });
+        expect(drawn.size).toBe(denominator);
+        // Every person of the model is drawn in their own group's shape, inside their own box.
+        for (const person of layout.people) {
+          const match = [...drawn].find(([key]) => {
+            const [left, top] = key.split(' ').map(Number) as [number, number];
+            return left >= person.x - 0.01 && left <= person.x + iconSize && top >= person.y - 0.01 && top <= person.y + iconSize;
+          });
+          expect(match?.[1]).toBe(person.group);
+        }
+      });
+    },
+  );
 });
 
 describe('updated people', () => {
