@@ -15,7 +15,7 @@ import { glyphFor } from '../glyphs/glyph-for.ts';
 import { glyphPath } from '../glyphs/svg-path-context.ts';
 import type { IconArrayLayout } from '../icon-array-layout.ts';
 import type { ChartPalette } from '../palette.ts';
-import { type PeopleShape, peopleShapes } from './people-shapes.ts';
+import { GROUP_ORDER, type PeopleShape, peopleShapes } from './people-shapes.ts';
 import { type PatternIds, personPaint } from './person-paint.ts';
 import { setChangedAttribute } from './set-changed-attribute.ts';
 import { svgNumber } from './svg-number.ts';
@@ -43,9 +43,13 @@ interface DrawnPeople {
  */
 const drawnPeople = new WeakMap<Element, DrawnPeople>();
 
-function shapesOf(layout: IconArrayLayout, looks: readonly PersonLook[]): PeopleShape<PersonLook>[] {
+function shapesOf(
+  layout: IconArrayLayout,
+  looks: readonly PersonLook[],
+  only: ReadonlySet<PersonGroup> | null = null,
+): PeopleShape<PersonLook>[] {
   const path = glyphPath(glyphFor(layout.geometry.glyph), layout.geometry.iconSize);
-  return peopleShapes(layout, path, looks, LOOK_ORDER);
+  return peopleShapes(layout, path, looks, LOOK_ORDER, only);
 }
 
 /** The attributes of a group's shape, in the order a fresh drawing writes them. */
@@ -100,8 +104,8 @@ export function drawPeople(
  * Bring the drawn people of `group` to new looks. A group's shape is rewritten only when
  * its people or paint changed (attributes with the same value are not written again), a
  * group that gains its first person gets a new shape in its place, and one left with no
- * one loses its shape; the others stay untouched. Returns how many people changed group
- * or look.
+ * one loses its shape; the others stay untouched, and when this module drew the group
+ * their paths are not even built again. Returns how many people changed group or look.
  */
 export function updatePeople(
   group: SVGGElement,
@@ -112,44 +116,69 @@ export function updatePeople(
 ): number {
   const cellSize = layout.geometry.cellSize;
   setGroupAttributes(group, layout, palette);
+  const groups = layout.people.map((person) => person.group);
+  const changes = changedGroups(drawnPeople.get(group), groups, looks);
+  drawnPeople.set(group, { groups, looks: [...looks] });
+  if (changes?.people === 0) return 0;
+  const dirty = changes?.groups ?? null;
   const known = new Map<string, Element>();
   for (const child of [...group.children]) {
     const name = child.getAttribute('data-outcome');
     if (name !== null && !known.has(name)) known.set(name, child);
     else child.remove();
   }
+  const built = new Map(shapesOf(layout, looks, dirty).map((shape) => [shape.group, shape]));
   let rewritten = 0;
   let previous: Element | null = null;
-  for (const shape of shapesOf(layout, looks)) {
-    const attributes = shapeAttributes(shape, palette, patternIds, cellSize);
-    let element = known.get(shape.group);
-    known.delete(shape.group);
-    if (element === undefined) {
-      element = newShape(group.ownerDocument, attributes);
-      group.insertBefore(element, previous === null ? group.firstChild : previous.nextSibling);
-      rewritten += shape.count;
-    } else if (attributes.some(([name, value]) => element?.getAttribute(name) !== value)) {
-      for (const [name, value] of attributes) setChangedAttribute(element, name, value);
-      rewritten += shape.count;
+  for (const name of GROUP_ORDER) {
+    const element = known.get(name);
+    const shape = built.get(name);
+    if (dirty !== null && !dirty.has(name)) {
+      // The same people in the same look: the shape stays as it is.
+    } else if (shape === undefined) {
+      if (element !== undefined) {
+        rewritten += Number(element.getAttribute('data-count') ?? 0);
+        element.remove();
+      }
+      continue;
+    } else {
+      const attributes = shapeAttributes(shape, palette, patternIds, cellSize);
+      if (element === undefined) {
+        const made = newShape(group.ownerDocument, attributes);
+        group.insertBefore(made, previous === null ? group.firstChild : previous.nextSibling);
+        previous = made;
+        rewritten += shape.count;
+        continue;
+      }
+      if (attributes.some(([attribute, value]) => element.getAttribute(attribute) !== value)) {
+        for (const [attribute, value] of attributes) setChangedAttribute(element, attribute, value);
+        rewritten += shape.count;
+      }
     }
-    previous = element;
+    if (element !== undefined) previous = element;
   }
-  for (const left of known.values()) {
-    rewritten += Number(left.getAttribute('data-count') ?? 0);
-    left.remove();
-  }
-  return countChanged(group, layout, looks, rewritten);
+  return changes?.people ?? rewritten;
 }
 
-/** How many people changed group or look since the last drawing, or else `fallback`. */
-function countChanged(group: Element, layout: IconArrayLayout, looks: readonly PersonLook[], fallback: number): number {
-  const drawn = drawnPeople.get(group);
-  const groups = layout.people.map((person) => person.group);
-  drawnPeople.set(group, { groups, looks: [...looks] });
-  if (drawn === undefined || drawn.groups.length !== groups.length) return fallback;
-  let changed = 0;
+/**
+ * Which groups gained or lost people or changed look since `drawn`, and how many people
+ * changed; null when there is no drawing to compare with.
+ */
+function changedGroups(
+  drawn: DrawnPeople | undefined,
+  groups: readonly PersonGroup[],
+  looks: readonly PersonLook[],
+): { readonly groups: ReadonlySet<PersonGroup>; readonly people: number } | null {
+  if (drawn === undefined || drawn.groups.length !== groups.length) return null;
+  const dirty = new Set<PersonGroup>();
+  let people = 0;
   for (let index = 0; index < groups.length; index += 1) {
-    if (drawn.groups[index] !== groups[index] || drawn.looks[index] !== looks[index]) changed += 1;
+    const before = drawn.groups[index] as PersonGroup;
+    const after = groups[index] as PersonGroup;
+    if (before === after && drawn.looks[index] === looks[index]) continue;
+    dirty.add(before);
+    dirty.add(after);
+    people += 1;
   }
-  return changed;
+  return { groups: dirty, people };
 }

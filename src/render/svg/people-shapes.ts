@@ -21,7 +21,8 @@ export interface PeopleShape<Look extends string> {
 
 /**
  * One shape per group and look that has people, in {@link GROUP_ORDER} and then in
- * `lookOrder`; each shape's subpaths follow the layout's order of people.
+ * `lookOrder`; each shape's subpaths follow the layout's order of people. With `only`,
+ * just the shapes of those groups (the others are not built).
  *
  * @throws RangeError when a person's look is missing or not in `lookOrder`
  * @example peopleShapes(iconArrayLayout(100, groups), glyphPath(personGlyph, 0.88), looks, ['event', 'helped', 'harmed', 'free'])[0]
@@ -32,9 +33,11 @@ export function peopleShapes<Look extends string>(
   path: GlyphPath,
   looks: readonly Look[],
   lookOrder: readonly Look[],
+  only: ReadonlySet<PersonGroup> | null = null,
 ): PeopleShape<Look>[] {
   const runs = new Map<string, { group: PersonGroup; look: Look; parts: string[] }>();
   for (const person of layout.people) {
+    if (only !== null && !only.has(person.group)) continue;
     const look = looks[person.index];
     if (look === undefined || !lookOrder.includes(look)) {
       throw new RangeError(`person ${person.index} has no look among ${lookOrder.join(', ')} (got ${String(look)})`);
