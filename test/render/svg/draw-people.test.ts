@@ -4,6 +4,7 @@ import type { PersonGroup } from '../../../src/core/types.ts';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { type ChartPalette, blackAndWhitePalette, colourPalette } from '../../../src/render/palette.ts';
 import { drawChart } from '../../../src/render/svg/draw-chart.ts';
+import { ringPath } from '../../../src/render/svg/draw-range-rings.ts';
 import { updateChart } from '../../../src/render/svg/update-chart.ts';
 import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
@@ -153,6 +154,15 @@ describe('updated people', () => {
     after.forEach((swatch, index) => expect(swatch).toBe(swatches[index]));
     expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain(
       '8 avoid a stroke because of option A',
+    );
+  });
+});
+
+describe('the range outline’s ring path', () => {
+  // The path a rounded <rect> stands for: SVG 2 (W3C 2018), §10.2 "The rect element".
+  it('starts at (x + r, y) and goes clockwise with a quarter arc at each corner', () => {
+    expect(ringPath({ x: 1, y: 2, side: 10, radius: 1, lineWidth: 0.1, dash: [1, 1] })).toBe(
+      'M2,2h8a1,1,0,0,1,1,1v8a1,1,0,0,1,-1,1h-8a1,1,0,0,1,-1,-1v-8a1,1,0,0,1,1,-1z',
     );
   });
 });
