@@ -532,7 +532,8 @@ test.describe('the teaching view', () => {
     const svgText = readFileSync((await svg.path()) ?? '', 'utf8');
     expect(svgText).toContain('viewBox="0 0 1920 1080"');
     expect(svgText).toContain('avoid another kidney stone because of extra water each day');
-    expect((svgText.match(/class="person"/g) ?? []).length).toBe(200);
+    const counts = [...svgText.matchAll(/class="person"[^>]* data-count="(\d+)"/g)].map((found) => Number(found[1]));
+    expect(counts.reduce((sum, count) => sum + count, 0)).toBe(200);
     await menu.click();
     const [set] = await Promise.all([
       page.waitForEvent('download'),
