@@ -35,27 +35,29 @@ export function peopleShapes<Look extends string>(
   lookOrder: readonly Look[],
   only: ReadonlySet<PersonGroup> | null = null,
 ): PeopleShape<Look>[] {
-  const runs = new Map<string, { group: PersonGroup; look: Look; parts: string[] }>();
+  // One run of path text per group and look, indexed by their places in the two orders (no key strings per person).
+  const groupPlace: Readonly<Record<PersonGroup, number>> = { event: 0, prevented: 1, caused: 2, free: 3 };
+  const width = lookOrder.length;
+  const runs: string[] = new Array<string>(GROUP_ORDER.length * width).fill('');
+  const counts: number[] = new Array<number>(GROUP_ORDER.length * width).fill(0);
   for (const person of layout.people) {
     if (only !== null && !only.has(person.group)) continue;
     const look = looks[person.index];
-    if (look === undefined || !lookOrder.includes(look)) {
+    const lookPlace = look === undefined ? -1 : lookOrder.indexOf(look);
+    if (lookPlace < 0) {
       throw new RangeError(`person ${person.index} has no look among ${lookOrder.join(', ')} (got ${String(look)})`);
     }
-    const key = `${person.group} ${look}`;
-    let run = runs.get(key);
-    if (run === undefined) {
-      run = { group: person.group, look, parts: [] };
-      runs.set(key, run);
-    }
-    run.parts.push(placeGlyphPath(path, person.x, person.y));
+    const slot = groupPlace[person.group] * width + lookPlace;
+    runs[slot] += placeGlyphPath(path, person.x, person.y);
+    counts[slot] = (counts[slot] as number) + 1;
   }
   const shapes: PeopleShape<Look>[] = [];
-  for (const group of GROUP_ORDER) {
-    for (const look of lookOrder) {
-      const run = runs.get(`${group} ${look}`);
-      if (run !== undefined) shapes.push({ group, look, count: run.parts.length, d: run.parts.join('') });
-    }
-  }
+  GROUP_ORDER.forEach((group, groupIndex) => {
+    lookOrder.forEach((look, lookIndex) => {
+      const slot = groupIndex * width + lookIndex;
+      const count = counts[slot] as number;
+      if (count > 0) shapes.push({ group, look, count, d: runs[slot] as string });
+    });
+  });
   return shapes;
 }
