@@ -5,7 +5,7 @@
  * drawing, so a browser lays out a handful of elements instead of one per person.
  */
 import type { PersonGroup } from '../../core/types.ts';
-import { type GlyphPath, placeGlyphPath } from '../glyphs/svg-path-context.ts';
+import { type GlyphPath, gridPlacer } from '../glyphs/svg-path-context.ts';
 import type { IconArrayLayout } from '../icon-array-layout.ts';
 
 /** The order the groups' shapes are drawn in, which is also the order of the layout's fill. */
@@ -40,6 +40,7 @@ export function peopleShapes<Look extends string>(
   const width = lookOrder.length;
   const runs: string[] = new Array<string>(GROUP_ORDER.length * width).fill('');
   const counts: number[] = new Array<number>(GROUP_ORDER.length * width).fill(0);
+  const place = gridPlacer(path);
   for (const person of layout.people) {
     if (only !== null && !only.has(person.group)) continue;
     const look = looks[person.index];
@@ -48,7 +49,7 @@ export function peopleShapes<Look extends string>(
       throw new RangeError(`person ${person.index} has no look among ${lookOrder.join(', ')} (got ${String(look)})`);
     }
     const slot = groupPlace[person.group] * width + lookPlace;
-    runs[slot] += placeGlyphPath(path, person.x, person.y);
+    runs[slot] += place(person.x, person.y);
     counts[slot] = (counts[slot] as number) + 1;
   }
   const shapes: PeopleShape<Look>[] = [];
