@@ -98,13 +98,15 @@ export function drawSlidePeople(
   svg.setAttribute('data-arrangement', layout.arrangement);
 }
 
-/** Draw one person of a look into a unit `<svg>`, for a legend swatch. */
+/** Draw one figure of a look into a unit `<svg>`, for a legend swatch. */
 export function drawSwatch(svg: SVGSVGElement, look: PersonLook, idPrefix: string, palette: ChartPalette = colourPalette): void {
   svg.replaceChildren();
   const ids = patternIdsFor(idPrefix);
   const size = UNITS_PER_CELL;
   appendPatterns(select(svg), palette, ids, size / 4);
   const element = svg.ownerDocument.createElementNS(SVG_NAMESPACE, 'path');
+  // A swatch shows a look and draws no one: `data-look`, never `data-outcome`.
+  element.setAttribute('data-look', look);
   element.setAttribute('d', placeGlyphPath(glyphPath(glyphFor('person'), size), 0, 0));
   element.setAttribute('stroke-width', svgNumber(size * palette.outlineWidth * 1.2, 3));
   element.setAttribute('stroke-linejoin', 'round');

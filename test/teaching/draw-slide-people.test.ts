@@ -141,6 +141,8 @@ describe('drawing a slide’s people', () => {
     const figures = svg.querySelectorAll(':scope > path');
     expect(figures).toHaveLength(1);
     expect(figures[0]?.getAttribute('fill')).toBe('url(#swatch-test-hatch)');
+    expect(figures[0]?.getAttribute('data-look')).toBe('harmed');
+    expect(figures[0]?.hasAttribute('data-outcome')).toBe(false);
     expect(svg.querySelector('pattern#swatch-test-hatch')).not.toBeNull();
   });
 });
