@@ -27,6 +27,8 @@ describe('a handout where the harm outweighs the benefit', () => {
   it('prints on one page, with pictures for both outcomes', () => {
     expect(handout.pages).toBe(1);
     expect(handout.pictures).toBe(true);
+    // Four arrays of 1000 people, each look drawn once and placed per person: the project's own size target.
+    expect(handout.pdf.byteLength).toBeLessThan(100_000);
     expect(text).toContain('Chance of a stroke over 5 years');
     expect(text).toContain('Side effect: chance of serious bleeding over 5 years');
   });
