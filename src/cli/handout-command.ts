@@ -14,6 +14,7 @@ import { type MadeHandout, runHandoutBatch } from './handout-batch.ts';
 import { type ParsedArgs, parseArgs, valueOf } from './parse-args.ts';
 import { demoFiles, topicFromArgs } from './topic-input.ts';
 import { UsageError } from './usage-error.ts';
+import { warningSentences } from './warning-sentences.ts';
 
 const words = english.cli;
 
@@ -83,7 +84,11 @@ function handoutOf(parsed: ParsedArgs): (topic: Topic) => MadeHandout {
     );
     if (!built.ok) throw new UsageError(built.message);
     const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
-    return { pdf: built.pdf, report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade) };
+    return {
+      pdf: built.pdf,
+      report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade),
+      warnings: warningSentences(built.readingWarnings).map(words.handoutWarning),
+    };
   };
 }
 
@@ -116,5 +121,5 @@ export function runHandout(args: readonly string[]): CommandOutput {
   if (topic === null) throw new UsageError(words.handoutNeedsTopic());
   const made = make(topic);
   writeOutput(out, made.pdf);
-  return { stdout: `${made.report(out)}\n` };
+  return { stdout: `${made.report(out)}\n`, stderr: made.warnings.map((line) => `${line}\n`).join('') };
 }

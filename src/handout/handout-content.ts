@@ -20,7 +20,9 @@ import { type ChartModel, outcomeChart } from '../render/chart-model.ts';
 import { blockLayout, closeUpBlock } from '../render/close-up.ts';
 import { FILL_ORDER } from '../render/fill-sequence.ts';
 import type { IconArrayLayout } from '../render/icon-array-layout.ts';
+import { aboutSheetLine, effectSourceGroups } from './about-sheet.ts';
 import { bandOfCount, rowDenominator } from './band-denominator.ts';
+import { type ScreeningSection, screeningSection } from './screening-section.ts';
 import type { BenefitAim, HandoutMessages } from './messages/en.ts';
 
 /** The two periods of a baseline conversion as words ("10 years", "15 years"), or null when there was none. */
@@ -106,6 +108,12 @@ export interface HandoutContent {
   readonly questions: { readonly heading: string; readonly items: readonly string[] };
   readonly caution: { readonly heading: string; readonly text: string };
   readonly footer: { readonly left: string; readonly right: string };
+  /** Where each effect comes from, printed after the evidence; citations, so not scored for readability. */
+  readonly effectSources: string | null;
+  /** The disclosures in one small line: who prepared the topic, funding, interests, review date. */
+  readonly about: string;
+  /** What having the screening test leads to; null when the topic has no screening entries. */
+  readonly screening: ScreeningSection | null;
   /** Every sentence taken from the wording module, in the order printed. */
   readonly wordingSentences: readonly string[];
 }
@@ -341,6 +349,9 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
       ),
       right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
+    effectSources: messages.about.effectSources(effectSourceGroups(topic)),
+    about: aboutSheetLine(topic, messages.about, messages.formatDate),
+    screening: screeningSection(topic, result.wordsDenominator, messages.screening),
     wordingSentences: [
       ...population.map((sentence) => sentence.text),
       ...model.arrays.flatMap((array) =>

@@ -21,6 +21,7 @@ import {
   writingLines,
 } from './section-blocks.ts';
 import { picturesBlock } from './pictures-block.ts';
+import { screeningBlock } from './screening-block.ts';
 import { type MeasureWidth, inkDepth, lineHeight, textBlock } from './text-layout.ts';
 
 /** The content box of the page, in millimetres. */
@@ -54,6 +55,7 @@ const PART_SHARE: Readonly<Record<HandoutPart, number>> = {
   header: 0.14,
   options: 0.5,
   outcomes: 0.16,
+  screening: 0.1,
   evidence: 0.08,
   questions: 0.12,
 };
@@ -109,7 +111,13 @@ function footBlock(
     stack(
       [
         runInParagraph(content.caution.heading, content.caution.text, inner, styles.list, measure),
-        runInParagraph(content.evidence.heading, content.evidence.items.join(' '), inner, styles.list, measure),
+        runInParagraph(
+          content.evidence.heading,
+          [...content.evidence.items, content.effectSources ?? ''].join(' ').trim(),
+          inner,
+          styles.list,
+          measure,
+        ),
       ],
       lineHeight(styles.list) * 0.3,
     ),
@@ -121,6 +129,7 @@ function footBlock(
   const rightWidth = measure(content.footer.right, styles.footer.size, false);
   const oneLine = left.width + rightWidth + 8 <= width && left.lines.length === 1;
   const right = textBlock(content.footer.right, width, styles.footer, measure);
+  const about = textItem(textBlock(content.about, width, styles.footer, measure));
   const rightBlock = {
     ...right,
     lines: right.lines.map((line) => ({ ...line, x: width - measure(line.text, styles.footer.size, false) })),
@@ -136,7 +145,8 @@ function footBlock(
     items: [{ kind: 'rule', x: 0, y: 0, width, colour: styles.colours.rule, thickness: 0.25 }],
     height: 0.25,
   };
-  return stack([caution, rule, footer], settings.space * 0.45);
+  // The disclosures are the footer's first line, so they take a line and no gap of their own.
+  return stack([caution, rule, stack([about, footer], 0)], settings.space * 0.45);
 }
 
 /** The most spare space added to each gap between sections, in millimetres. */
@@ -160,10 +170,11 @@ export function layoutPage(
   const header = headerBlock(content, width, styles, measure);
   const picturesSection = pictures.ok ? section(heading(content.chart.heading), pictures.block) : { items: [], height: 0 };
   const sentences = section(heading(content.sentencesHeading), paragraphsBlock(content.paragraphs, width, styles.body, measure));
+  const screening = screeningBlock(content.screening, width, styles, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);
 
-  const mainOf = (gap: number) => stack([header, picturesSection, sentences, prompts], gap);
+  const mainOf = (gap: number) => stack([header, picturesSection, sentences, screening, prompts], gap);
   const needed = mainOf(settings.space).height + settings.space + foot.height;
 
   const rows = content.table.sections.reduce((sum, found) => sum + found.rows.length, 0);
@@ -172,6 +183,7 @@ export function layoutPage(
     header: header.height,
     options: picturesSection.height - outcomesShare + sentences.height,
     outcomes: outcomesShare,
+    screening: screening.height,
     evidence: foot.height / 3,
     questions: prompts.height,
   };
@@ -184,7 +196,7 @@ export function layoutPage(
     return { items: [], fits: false, needed, tooLong: pictures.ok ? worst : pictures.part, parts: partHeights };
   }
   // Share the spare height between the gaps, a little each, and leave the rest above the caution.
-  const gaps = 3;
+  const gaps = screening.height > 0 ? 4 : 3;
   const extra = Math.min(MOST_EXTRA_GAP, (box.height - needed) / (gaps + 1));
   const main = mainOf(settings.space + extra);
   const items = [...placeBlock(main, box.x, box.y), ...placeBlock(foot, box.x, box.y + box.height - foot.height)];
