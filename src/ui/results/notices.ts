@@ -3,7 +3,7 @@
  * reading-grade warning for any typed text that the handout would print and that reads
  * above the target grade.
  */
-import { describeNotice } from '../../core/messages/describe.ts';
+import { noticeSentences } from '../../core/messages/describe.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Notice } from '../../core/types.ts';
 import { readingWarnings } from '../../core/wording/readability.ts';
@@ -35,6 +35,5 @@ export function readingNoticesFor(key: string): readonly Notice[] {
 
 /** Every warning as a sentence, the numbers' first, then those on the typed texts, without repeats. */
 export function resultWarnings(result: TopicResult, reading: readonly Notice[]): string[] {
-  const sentences = [...result.notices, ...reading].map((notice) => describeNotice(notice));
-  return [...new Set(sentences)];
+  return noticeSentences([...result.notices, ...reading]);
 }

@@ -30,6 +30,8 @@ export interface TopicExportsOptions {
 export class TopicExports {
   /** The handout is being made. */
   handoutBusy = $state(false);
+  /** Warnings on the last handout made: typed text that reads above the grade target. It was still made. */
+  handoutWarnings = $state.raw<readonly string[]>([]);
   readonly #options: TopicExportsOptions;
 
   constructor(options: TopicExportsOptions) {
@@ -71,6 +73,7 @@ export class TopicExports {
     const maker = await (this.#options.loadMaker ?? loadHandoutMaker)();
     const today = this.#options.today?.() ?? new Date();
     const made = await maker.makeHandout({ topic: editor.check.topic, result, date: localDate(today), ...choices });
+    this.handoutWarnings = made.ok ? (made.warnings ?? []) : [];
     if (made.ok) return made.pdf;
     messages.show({ tone: 'error', text: made.message });
     return null;
