@@ -59,9 +59,7 @@ test.describe('the disclosures of a topic', () => {
 });
 
 test.describe('reading warnings when the handout is made', () => {
-  test('a typed title above the grade target is named in the handout card, and the handout is still made', async ({
-    page,
-  }) => {
+  test('a typed title above the grade target is named in the handout card, and the handout is still made', async ({ page }) => {
     await openApp(page);
     // "Stones topic (illustrative)": Flesch–Kincaid grade 0.39 × 3 + 11.8 × 7 / 3 − 15.59 = 13.1 (Kincaid et al. 1975).
     await page.getByLabel('Decision', { exact: true }).fill('Stones topic (illustrative)');

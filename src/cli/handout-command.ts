@@ -1,4 +1,5 @@
 import packageJson from '../../package.json' with { type: 'json' };
+import { readCalendarDate } from '../core/calendar-date.ts';
 import { english } from '../core/messages/en/index.ts';
 import { TOPIC_LIMITS, type Topic } from '../core/topic/topic.ts';
 import { buildHandout } from '../handout/build-handout.ts';
@@ -40,13 +41,8 @@ export function parsePaper(value: string | undefined): Paper {
 
 /** Read --date: a real calendar date written YYYY-MM-DD, 1970 to 2037 (the dates a PDF file from jsPDF can carry). */
 export function parseDate(value: string): string {
-  const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value.trim());
-  if (found !== null) {
-    const [year, month, day] = [Number(found[1]), Number(found[2]), Number(found[3])];
-    const calendar = new Date(Date.UTC(year, month - 1, day));
-    const real = calendar.getUTCFullYear() === year && calendar.getUTCMonth() === month - 1 && calendar.getUTCDate() === day;
-    if (real && year >= 1970 && year <= 2037) return value.trim();
-  }
+  const reading = readCalendarDate(value);
+  if (reading.kind === 'date' && reading.year >= 1970 && reading.year <= 2037) return value.trim();
   throw new UsageError(words.dateValue(value));
 }
 

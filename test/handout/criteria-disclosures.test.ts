@@ -81,7 +81,9 @@ describe.each(demos())('the sheet of $name against IPDASi', ({ topic, result }) 
     });
   } else {
     it('Trevena 2013 / IPDASi (tests): says what a positive result leads to', () => {
-      expect(asGiven).toContain(`If you have the test: a positive result leads to ${sourceWords(topic.screening?.positiveLeadsTo ?? '')}.`);
+      expect(asGiven).toContain(
+        `If you have the test: a positive result leads to ${sourceWords(topic.screening?.positiveLeadsTo ?? '')}.`,
+      );
     });
 
     it('Trevena 2013 / IPDASi (tests): gives the chance of a missed case (false reassurance) per the sheet’s people', () => {

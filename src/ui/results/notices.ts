@@ -8,16 +8,20 @@ import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Notice } from '../../core/types.ts';
 import { readingWarnings } from '../../core/wording/readability.ts';
 import type { UserText } from '../../core/wording/readability.ts';
+import { typedTexts } from '../../core/wording/typed-texts.ts';
+import type { TypedTextNames } from '../../core/wording/typed-texts.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+
+/** The names the results' warnings give the typed texts: the editor's own labels. */
+const EDITOR_TEXT_NAMES: TypedTextNames = {
+  title: 'the decision',
+  population: 'who the numbers are for',
+  question: (number) => `question ${number}`,
+};
 
 /** The typed texts a patient would read, named as the warning sentence says them. */
 export function patientFacingTexts(draft: TopicDraft): UserText[] {
-  const texts: UserText[] = [
-    { field: 'the decision', text: draft.title },
-    { field: 'who the numbers are for', text: draft.population },
-    ...draft.questions.map((text, index) => ({ field: `question ${index + 1}`, text })),
-  ];
-  return texts.filter((item) => item.text.trim() !== '');
+  return typedTexts(draft, EDITOR_TEXT_NAMES);
 }
 
 /**

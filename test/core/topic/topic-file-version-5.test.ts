@@ -173,7 +173,8 @@ describe('checking the disclosures and the screening section', () => {
     expect(problemsOf({ ...base, about: { ...about, reviewBy: '2027-02-29' } })).toEqual([
       {
         field: 'about.reviewBy',
-        message: 'The review-by date "2027-02-29" is not a day of the calendar. Check the month and the day, for example 2028-06-30.',
+        message:
+          'The review-by date "2027-02-29" is not a day of the calendar. Check the month and the day, for example 2028-06-30.',
       },
     ]);
   });

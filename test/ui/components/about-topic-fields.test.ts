@@ -99,6 +99,8 @@ describe('the Screening test group', () => {
     fireEvent.input(field, { target: { value: 'some' } });
     flushSync();
     expect(field.getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getAllByText('"some" is not a risk. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.').length).toBeGreaterThan(0);
+    expect(
+      screen.getAllByText('"some" is not a risk. Write it as 20%, 0.2, 20/100, 1 in 5 or 200 per 1000.').length,
+    ).toBeGreaterThan(0);
   });
 });
