@@ -52,6 +52,15 @@ describe('TopicExports', () => {
     expect(exports.handoutWarnings).toEqual([]);
   });
 
+  it('drops the warnings once the topic changes, as they may no longer hold', async () => {
+    const warning = 'The text in the title reads at about grade 13.1, above grade 8.';
+    const { exports, topic } = setUp(() => Promise.resolve({ ok: true, pdf: PDF_BYTES, warnings: [warning] }));
+    await exports.makeHandout();
+    expect(exports.handoutWarnings).toEqual([warning]);
+    topic.editor.change((draft) => setTopicText(draft, 'title', 'A plain title'), 'title');
+    expect(exports.handoutWarnings).toEqual([]);
+  });
+
   it('makes the handout of the results on screen, dated today where the person is, and saves it', async () => {
     const { exports, platform, messages, requests, topic } = setUp();
     const done = exports.makeHandout({ paper: 'letter', showNnt: true });
