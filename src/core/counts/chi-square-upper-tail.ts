@@ -1,4 +1,4 @@
-import jStat from 'jstat';
+import { erfc } from './normal-tail.ts';
 
 const HALF_LOG_PI = 0.5 * Math.log(Math.PI);
 const TINY = 1e-300;
@@ -7,7 +7,7 @@ const MAX_TERMS = 500;
 
 /**
  * P(χ² > statistic) with 1 degree of freedom, the upper regularized gamma Q(½, statistic/2).
- * Small arguments use jStat's lower tail; larger ones the continued fraction for Q
+ * Small arguments use Q(½, x/2) = erfc(√(x/2)); larger ones the continued fraction for Q
  * (modified Lentz, as in Press et al., Numerical Recipes, §6.2), so tiny p-values keep
  * their precision instead of cancelling to 0.
  */
@@ -17,7 +17,7 @@ export function chiSquareUpperTail(statistic: number): number {
   const halfStatistic = statistic / 2;
   const shape = 0.5;
   if (halfStatistic < shape + 1) {
-    return Math.min(1, Math.max(0, 1 - jStat.chisquare.cdf(statistic, 1)));
+    return Math.min(1, Math.max(0, erfc(Math.sqrt(halfStatistic))));
   }
   let denominatorTerm = halfStatistic + 1 - shape;
   let ratioTerm = 1 / TINY;
