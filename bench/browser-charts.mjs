@@ -129,7 +129,9 @@ try {
         `${(of.bytes / 1024).toFixed(1)} KiB, ${(of.gzipBytes / 1024).toFixed(1)} KiB gzip`;
       notes.push(
         `app: initial JavaScript (KiB gzip per chunk) ${sizes(javascript)}`,
-        ...(results.app.javascriptCompared === undefined ? [] : [`  ${settings.compare}: ${sizes(results.app.javascriptCompared)}`]),
+        ...(results.app.javascriptCompared === undefined
+          ? []
+          : [`  ${settings.compare}: ${sizes(results.app.javascriptCompared)}`]),
         `app: PDF code (jsPDF) in the initial JavaScript: ${javascript.pdfCodeInitial ? 'YES' : 'no'}; ` +
           `lazy PDF chunks: ${javascript.pdfChunks.join(', ') || 'none'}; fetched during load: ${pdfFetched.join(', ') || 'none'}`,
       );

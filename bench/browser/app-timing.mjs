@@ -100,7 +100,14 @@ export async function timeAppLoads(browser, urls, runs) {
   /** @type {Record<string, { interactive: number[], rendered: number[], responseEnd: number[], scriptFetched: number[], contentLoaded: number[], requested: Set<string> }>} */
   const collected = {};
   for (const name of names) {
-    collected[name] = { interactive: [], rendered: [], responseEnd: [], scriptFetched: [], contentLoaded: [], requested: new Set() };
+    collected[name] = {
+      interactive: [],
+      rendered: [],
+      responseEnd: [],
+      scriptFetched: [],
+      contentLoaded: [],
+      requested: new Set(),
+    };
   }
   const errors = [];
   for (let run = 0; run < runs; run += 1) {
