@@ -2,7 +2,7 @@
 /**
  * `npm run bench:browser`: the people charts and the app in headless Chromium.
  *
- *   node bench/browser-charts.mjs [--only charts|app] [--loads N] [--repetitions N] [--app-runs N] [--compare DIR]
+ *   node bench/browser-charts.mjs [--only charts|app] [--loads N] [--repetitions N] [--app-runs N] [--compare DIR[,DIR...]]
  *
  * Prints a table (median, p25, p75, n; milliseconds) and writes bench/results/charts.json.
  * Timings are reported, never judged: the run fails only when something could not be measured.
@@ -35,8 +35,10 @@ const settings = {
   loads: Number(option('loads', 5)),
   repetitions: Number(option('repetitions', 40)),
   appRuns: Number(option('app-runs', 15)),
-  // Another built app folder (for example an older checkout's dist/) timed in the same run.
-  compare: option('compare', null),
+  // Other built app folders (for example an older checkout's dist/), comma-separated, timed in the same run.
+  compare: option('compare', '')
+    .split(',')
+    .filter((folder) => folder !== ''),
 };
 
 const browser = await launchChromium();
@@ -85,14 +87,16 @@ try {
     // The bench's build of the same app, which starts on the bench's own fixture instead.
     await build({ configFile: join(projectRoot, 'bench/app-page/vite.config.ts') });
     const benchServed = await serveFolder(join(projectRoot, 'bench/app-page/dist'));
-    const compared = settings.compare === null ? null : await serveFolder(settings.compare);
+    /** @type {{ folder: string, url: string, stop: () => Promise<void> }[]} */
+    const compared = [];
+    for (const folder of settings.compare) compared.push({ folder, ...(await serveFolder(folder)) });
     try {
       const loads = await timeAppLoads(
         browser,
         {
           bench: benchServed.url,
           example: served.url,
-          ...(compared === null ? {} : { compared: compared.url }),
+          ...Object.fromEntries(compared.map((other) => [other.folder, other.url])),
         },
         settings.appRuns,
       );
@@ -101,11 +105,10 @@ try {
       const javascript = initialJavaScript(join(projectRoot, 'dist/index.html'));
       const requested = Object.values(loads).flatMap((each) => each.requested);
       const pdfFetched = javascript.pdfChunks.filter((chunk) => requested.some((path) => path.endsWith(`/${chunk}`)));
-      results.app = { loads, input, javascript: { ...javascript, pdfFetchedOnLoad: pdfFetched } };
-      if (compared !== null) {
-        const javascriptCompared = initialJavaScript(join(settings.compare, 'index.html'));
-        results.app.javascriptCompared = javascriptCompared;
-      }
+      const javascriptCompared = Object.fromEntries(
+        compared.map((other) => [other.folder, initialJavaScript(join(other.folder, 'index.html'))]),
+      );
+      results.app = { loads, input, javascript: { ...javascript, pdfFetchedOnLoad: pdfFetched }, javascriptCompared };
       rows.push(
         { label: 'app: load: page received', target: null, ...load.responseEnd },
         { label: 'app: load: script received', target: null, ...load.scriptFetched },
@@ -114,12 +117,10 @@ try {
         { label: 'app: load to bench topic interactive (frame rendered)', target: TARGETS.appLoad, ...load.rendered },
         { label: '  the same, production build on its first example (DOM ready)', target: null, ...loads.example.interactive },
         { label: '  the same, production build on its first example (frame)', target: null, ...loads.example.rendered },
-        ...(loads.compared === undefined
-          ? []
-          : [
-              { label: `  the same, ${settings.compare} (DOM ready)`, target: null, ...loads.compared.interactive },
-              { label: `  the same, ${settings.compare} (frame)`, target: null, ...loads.compared.rendered },
-            ]),
+        ...compared.flatMap((other) => [
+          { label: `  the same, ${other.folder} (DOM ready)`, target: null, ...loads[other.folder].interactive },
+          { label: `  the same, ${other.folder} (frame)`, target: null, ...loads[other.folder].rendered },
+        ]),
         { label: 'app: input to charts updated, 2 × 1000 (+ layout)', target: TARGETS.inputToCharts, ...input.total },
         { label: '  of which until the chart DOM changed', target: null, ...input.dom },
         { label: '  main-thread CPU time of the same spans', target: null, ...input.cpu },
@@ -129,16 +130,14 @@ try {
         `${(of.bytes / 1024).toFixed(1)} KiB, ${(of.gzipBytes / 1024).toFixed(1)} KiB gzip`;
       notes.push(
         `app: initial JavaScript (KiB gzip per chunk) ${sizes(javascript)}`,
-        ...(results.app.javascriptCompared === undefined
-          ? []
-          : [`  ${settings.compare}: ${sizes(results.app.javascriptCompared)}`]),
+        ...Object.entries(javascriptCompared).map(([folder, of]) => `  ${folder}: ${sizes(of)}`),
         `app: PDF code (jsPDF) in the initial JavaScript: ${javascript.pdfCodeInitial ? 'YES' : 'no'}; ` +
           `lazy PDF chunks: ${javascript.pdfChunks.join(', ') || 'none'}; fetched during load: ${pdfFetched.join(', ') || 'none'}`,
       );
     } finally {
       await served.stop();
       await benchServed.stop();
-      await compared?.stop();
+      for (const other of compared) await other.stop();
     }
   }
 } finally {
