@@ -41,7 +41,7 @@ export function demoChartModels(topic: Topic, per: Denominator): ChartModel[] {
 /** The headline outcome's chart at a given baseline risk. */
 export function headlineChartAt(topic: Topic, per: Denominator, risk: string): ChartModel {
   const headline = topic.outcomes.find((outcome) => outcome.isHeadline) ?? topic.outcomes[0];
-  if (headline === undefined) throw new Error('the example topic has no outcome');
+  if (headline === undefined) throw new Error('the check page’s topic has no outcome');
   const [model] = demoChartModels(withBaseline(topic, headline.id, risk), per);
   if (model === undefined) throw new Error('no chart for the headline outcome');
   return model;
