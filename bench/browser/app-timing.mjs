@@ -90,7 +90,8 @@ async function loadOnce(browser, url, requested, errors) {
 
 /**
  * Time the loads of several built apps, `runs` fresh loads each. The apps take turns, one
- * load each, so a busy moment of the machine falls on all of them alike.
+ * load each and each round starting with the next, so a busy moment of the machine falls on
+ * all of them alike.
  * @param {import('@playwright/test').Browser} browser
  * @param {Record<string, string>} urls the app's address, by name
  * @param {number} runs
@@ -111,7 +112,8 @@ export async function timeAppLoads(browser, urls, runs) {
   }
   const errors = [];
   for (let run = 0; run < runs; run += 1) {
-    for (const name of names) {
+    // Each round starts with another app, so none always comes first after a context closes.
+    for (const name of names.map((_, at) => names[(at + run) % names.length])) {
       const into = collected[name];
       const load = await loadOnce(browser, urls[name], into.requested, errors);
       into.interactive.push(load.interactive);
