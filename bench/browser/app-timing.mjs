@@ -9,7 +9,9 @@
  * from the next `requestAnimationFrame`). Each run is a fresh browser context (empty
  * cache and storage), and every request is recorded, to show no PDF code is fetched.
  * Along the way: the page's response end, the first script's response end, and the end
- * of DOMContentLoaded (after the module script, which mounts the app, has run).
+ * of DOMContentLoaded (after the module script, which mounts the app, has run). The
+ * renderer main thread's CPU time from the document's start (a mark set before any page
+ * script) to "rendered" comes from a trace of marks, as for the input timing.
  *
  * Several builds can be timed in one run (the bench's own build, which starts on the
  * bench's fixture, beside the production build, which starts on the first example); they
@@ -35,6 +37,8 @@ export const BENCH_TOPIC = 'bench/fixtures/bench-topic.chancewise.json';
 function watchInteractive() {
   const state = { interactive: null, rendered: null };
   Object.defineProperty(window, 'chancewiseBench', { value: state });
+  // The main thread's CPU clock at these marks gives the load's CPU time (see trace-cpu.mjs).
+  performance.mark('app-load:start');
   const ready = () => {
     const chart = document.querySelector('.results svg.people-chart [data-outcome]');
     const input = document.querySelector('.editor-column input:enabled, .editor-column textarea:enabled');
@@ -44,7 +48,12 @@ function watchInteractive() {
     if (state.interactive !== null || !ready()) return;
     state.interactive = performance.now();
     observer.disconnect();
-    requestAnimationFrame(() => setTimeout(() => (state.rendered = performance.now()), 0));
+    requestAnimationFrame(() =>
+      setTimeout(() => {
+        state.rendered = performance.now();
+        performance.mark('app-load:end');
+      }, 0),
+    );
   });
   observer.observe(document, { childList: true, subtree: true, attributes: true });
 }
@@ -62,6 +71,7 @@ async function loadOnce(browser, url, requested, errors) {
   page.on('request', (request) => requested.add(new URL(request.url()).pathname));
   page.on('pageerror', (error) => errors.push(String(error)));
   await page.addInitScript(watchInteractive);
+  await browser.startTracing(page, { categories: MARK_CATEGORIES });
   await page.goto(url);
   const times = await page
     .waitForFunction(
@@ -75,6 +85,7 @@ async function loadOnce(browser, url, requested, errors) {
       { timeout: 30_000 },
     )
     .then((handle) => handle.jsonValue());
+  const [cpu = null] = markedCpuSpans(await browser.stopTracing(), 'app-load');
   const navigation = await page.evaluate(() => {
     const entry = /** @type {PerformanceNavigationTiming | undefined} */ (performance.getEntriesByType('navigation')[0]);
     const script = performance.getEntriesByType('resource').find((resource) => resource.name.endsWith('.js'));
@@ -85,7 +96,7 @@ async function loadOnce(browser, url, requested, errors) {
     };
   });
   await context.close();
-  return { ...times, ...navigation };
+  return { ...times, cpu, ...navigation };
 }
 
 /**
@@ -98,12 +109,13 @@ async function loadOnce(browser, url, requested, errors) {
  */
 export async function timeAppLoads(browser, urls, runs) {
   const names = Object.keys(urls);
-  /** @type {Record<string, { interactive: number[], rendered: number[], responseEnd: number[], scriptFetched: number[], contentLoaded: number[], requested: Set<string> }>} */
+  /** @type {Record<string, { interactive: number[], rendered: number[], cpu: number[], responseEnd: number[], scriptFetched: number[], contentLoaded: number[], requested: Set<string> }>} */
   const collected = {};
   for (const name of names) {
     collected[name] = {
       interactive: [],
       rendered: [],
+      cpu: [],
       responseEnd: [],
       scriptFetched: [],
       contentLoaded: [],
@@ -118,6 +130,7 @@ export async function timeAppLoads(browser, urls, runs) {
       const load = await loadOnce(browser, urls[name], into.requested, errors);
       into.interactive.push(load.interactive);
       into.rendered.push(load.rendered);
+      if (load.cpu !== null) into.cpu.push(load.cpu);
       if (load.responseEnd !== null) into.responseEnd.push(load.responseEnd);
       if (load.scriptEnd !== null) into.scriptFetched.push(load.scriptEnd);
       if (load.contentLoaded !== null) into.contentLoaded.push(load.contentLoaded);
@@ -135,6 +148,7 @@ export async function timeAppLoads(browser, urls, runs) {
           contentLoaded: summarise(into.contentLoaded),
           interactive: summarise(into.interactive),
           rendered: summarise(into.rendered),
+          cpu: summarise(into.cpu),
           requested: [...into.requested].sort(),
         },
       ];
