@@ -64,7 +64,7 @@ async function openChartPage(page: Page, query = ''): Promise<() => Promise<void
   };
 }
 
-/** Count of each `data-outcome` value in every array of the chart of `outcomeId`. */
+/** People of each `data-outcome` in every array of the chart of `outcomeId`: the shapes' `data-count`s added up. */
 function drawnCounts(page: Page, outcomeId: string) {
   return page.evaluate((id) => {
     const svg = [...document.querySelectorAll('#charts svg.people-chart')].find(
@@ -74,9 +74,9 @@ function drawnCounts(page: Page, outcomeId: string) {
     return Object.fromEntries(
       [...svg.querySelectorAll('g.chart-array')].map((array) => {
         const counts: Record<string, number> = {};
-        for (const person of array.querySelectorAll('[data-outcome]')) {
-          const group = person.getAttribute('data-outcome') ?? '';
-          counts[group] = (counts[group] ?? 0) + 1;
+        for (const shape of array.querySelectorAll('[data-outcome]')) {
+          const group = shape.getAttribute('data-outcome') ?? '';
+          counts[group] = (counts[group] ?? 0) + Number(shape.getAttribute('data-count') ?? 1);
         }
         return [array.getAttribute('data-option-id') ?? '', counts];
       }),
@@ -104,16 +104,21 @@ test.describe('people charts in the browser', () => {
       'as-now': { event: 50, free: 950 },
       water: { event: 50, free: 950 },
     });
-    // Exactly one element per person, and nothing else carries data-outcome.
+    // One shape per group that has people, their counts adding up to 1000, and nothing else carries data-outcome.
     const shape = await page.evaluate(() => ({
       groups: [...document.querySelectorAll('#charts g.people')].map((group) => ({
         children: group.children.length,
-        people: group.querySelectorAll(':scope > path[data-outcome]').length,
+        shapes: group.querySelectorAll(':scope > path[data-outcome][data-count]').length,
+        people: [...group.children].reduce((sum, child) => sum + Number(child.getAttribute('data-count')), 0),
       })),
       outside: document.querySelectorAll('#charts [data-outcome]:not(g.people > path)').length,
       uses: document.querySelectorAll('#charts use').length,
     }));
-    expect(shape.groups).toEqual(Array.from({ length: 6 }, () => ({ children: 1000, people: 1000 })));
+    expect(shape.groups.map((group) => group.people)).toEqual(Array.from({ length: 6 }, () => 1000));
+    // as-now and water of each chart: 2 and 3 groups (stone), 2 and 3 (night), 2 and 2 (stomach).
+    expect(shape.groups.map((group) => [group.children, group.shapes])).toEqual(
+      [2, 3, 2, 3, 2, 2].map((count) => [count, count]),
+    );
     expect(shape.outside).toBe(0);
     expect(shape.uses).toBe(0);
     await page.screenshot({ path: 'test-results/charts-colour.png', fullPage: true });
@@ -137,7 +142,7 @@ test.describe('people charts in the browser', () => {
         filter: getComputedStyle(document.getElementById('charts') as HTMLElement).filter,
       };
     });
-    // Okabe & Ito (2008) blue for events; the free look is inherited from the people's group.
+    // Okabe & Ito (2008) blue for events, light grey for people without the outcome.
     expect(paints.event).toBe('rgb(0, 114, 178)');
     expect(paints.free).toBe('rgb(232, 232, 232)');
     expect(paints.prevented).toMatch(/^url\(".*#chart-stone-dots"\)$/);
@@ -183,7 +188,11 @@ test.describe('people charts in the browser', () => {
     const svg = page.locator('#charts svg.people-chart').first();
     await expect(svg).toHaveAttribute('data-palette', 'black-and-white');
     // RR 0.45 to 0.8 at 40%: 180 to 320 around 240 with extra water, ranks 180–319 outlined (140 people).
-    await expect(svg.locator('g.chart-array[data-option-id="water"] g.range-outline > rect')).toHaveCount(140);
+    const outline = svg.locator('g.chart-array[data-option-id="water"] path.range-outline');
+    await expect(outline).toHaveAttribute('data-look', 'outline');
+    await expect(outline).toHaveAttribute('data-count', '140');
+    expect((await outline.getAttribute('d'))?.match(/M/g)).toHaveLength(140);
+    expect(await outline.getAttribute('data-outcome')).toBeNull();
     await expect(svg.locator('g.chart-array[data-option-id="as-now"] [stroke-dasharray]')).toHaveCount(0);
     await page.screenshot({ path: 'test-results/charts-black-and-white-range.png', fullPage: true });
     await svg.screenshot({ path: 'test-results/charts-black-and-white-headline.png' });

@@ -1,4 +1,4 @@
-import { SCREENS, expect, openApp, people, test } from './fixtures.ts';
+import { SCREENS, countedPeople, expect, openApp, people, test } from './fixtures.ts';
 
 test.describe('editing a topic', () => {
   test('opens on the first example, marked illustrative, with numbers, charts and words', async ({ page, watch }) => {
@@ -9,8 +9,8 @@ test.describe('editing a topic', () => {
     const headline = page.locator('table[data-outcome-id="stone"]');
     await expect(headline.locator('tr[data-option-id="as-now"] td.people .value')).toHaveText('40');
     await expect(headline.locator('tr[data-option-id="water"] td.people .value')).toHaveText('24');
-    await expect(people(page, 'stone', 'as-now', 'event')).toHaveCount(40);
-    await expect(people(page, 'stone', 'as-now', 'free')).toHaveCount(60);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'as-now', 'event'))).toBe(40);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'as-now', 'free'))).toBe(60);
     await expect(page.locator('article[data-outcome-id="stone"] ul[data-option-id="as-now"]')).toContainText(
       'about 40 in 100 people like you will have another kidney stone',
     );
@@ -27,9 +27,9 @@ test.describe('editing a topic', () => {
     await expect(headline.locator('tr[data-option-id="as-now"] td.people .value')).toHaveText('20');
     // 20% × 0.6 = 12%: 12 of 100, so 8 avoid it; 20% × 0.45 = 9%, so 11 avoid it with the citrate drink.
     await expect(headline.locator('tr[data-option-id="water"] td.people .value')).toHaveText('12');
-    await expect(people(page, 'stone', 'as-now', 'event')).toHaveCount(20);
-    await expect(people(page, 'stone', 'water', 'prevented')).toHaveCount(8);
-    await expect(people(page, 'stone', 'citrate', 'prevented')).toHaveCount(11);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'as-now', 'event'))).toBe(20);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'water', 'prevented'))).toBe(8);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'citrate', 'prevented'))).toBe(11);
     await expect(page.locator('article[data-outcome-id="stone"] ul[data-option-id="as-now"]')).toContainText('about 20 in 100');
     await expect(page.getByRole('status').filter({ hasText: 'Up to date' })).toBeVisible();
     await expect(page.getByText('Unsaved changes')).toBeVisible();
@@ -63,9 +63,9 @@ test.describe('editing a topic', () => {
     await expect(headache.locator('g.chart-array')).toHaveCount(4);
     // 10% × 1.5 = 15%: 5 more people in 100 (50 in 1000) have a headache with each option.
     const denominator = Number(await headache.locator('svg.people-chart').getAttribute('data-denominator'));
-    await expect(headache.locator('g.chart-array[data-option-id="water"] path[data-outcome="caused"]')).toHaveCount(
-      denominator * 0.05,
-    );
+    await expect
+      .poll(() => countedPeople(headache.locator('g.chart-array[data-option-id="water"] path[data-outcome="caused"]')))
+      .toBe(denominator * 0.05);
     await page.screenshot({ path: `${SCREENS}/03-added-option-and-outcome.png`, fullPage: false });
   });
 
@@ -122,16 +122,20 @@ test.describe('editing a topic', () => {
     await openApp(page);
     await page.getByRole('radio', { name: '1000 people' }).check();
     await expect(page.locator('table[data-outcome-id="stone"] tr[data-option-id="as-now"] td.people .value')).toHaveText('400');
-    await expect(
-      page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]'),
-    ).toHaveCount(1000);
+    await expect
+      .poll(() =>
+        countedPeople(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')),
+      )
+      .toBe(1000);
     // 40% × 0.6 = 24%: 240 of 1000, so 160 avoid it.
-    await expect(people(page, 'stone', 'water', 'prevented')).toHaveCount(160);
+    await expect.poll(() => countedPeople(people(page, 'stone', 'water', 'prevented'))).toBe(160);
     await page.screenshot({ path: `${SCREENS}/05-per-1000.png` });
     await page.getByRole('radio', { name: '100 people' }).check();
-    await expect(
-      page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]'),
-    ).toHaveCount(100);
+    await expect
+      .poll(() =>
+        countedPeople(page.locator('article[data-outcome-id="stone"] g.chart-array[data-option-id="as-now"] path[data-outcome]')),
+      )
+      .toBe(100);
   });
 
   test('the start panel offers a new topic and the other examples, each marked illustrative', async ({ page }) => {

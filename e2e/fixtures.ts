@@ -4,7 +4,7 @@
  * all three at its end.
  */
 import { test as base, expect } from '@playwright/test';
-import type { Page } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
 
 export interface Watch {
   readonly outsideRequests: string[];
@@ -66,7 +66,12 @@ export async function openApp(page: Page): Promise<void> {
   await expect(page.locator('.app')).toHaveAttribute('data-startup', 'drawn');
 }
 
-/** The people of one option's array in one outcome's chart, by group. */
+/** How many people the shapes `locator` finds draw: their `data-count`s added up (one for a shape without). */
+export function countedPeople(locator: Locator): Promise<number> {
+  return locator.evaluateAll((shapes) => shapes.reduce((sum, shape) => sum + Number(shape.getAttribute('data-count') ?? 1), 0));
+}
+
+/** The shape of the people of one option's array in one outcome's chart, by group (count them with {@link countedPeople}). */
 export function people(page: Page, outcomeId: string, optionId: string, group: string) {
   return page.locator(
     `article[data-outcome-id="${outcomeId}"] g.chart-array[data-option-id="${optionId}"] path[data-outcome="${group}"]`,

@@ -1,7 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import type { Page } from '@playwright/test';
-import { SCREENS, expect, openApp, people, test } from './fixtures.ts';
+import { SCREENS, countedPeople, expect, openApp, people, test } from './fixtures.ts';
 
 /**
  * A topic whose headline outcome is an event people want: the sore-throat example, where a
@@ -65,10 +65,10 @@ test.describe('an outcome people want', () => {
     expect((await tableRows(page, 'stomach'))[1]).toEqual(['one steroid tablet', '7', '2 more', 'NNTH 50']);
 
     // People keep their event meaning: those who gain a pain-free throat have it only with the option.
-    await expect(people(page, 'pain-free', 'tablet', 'caused')).toHaveCount(21);
-    await expect(people(page, 'pain-free', 'tablet', 'event')).toHaveCount(35);
-    await expect(people(page, 'pain-free', 'tablet', 'prevented')).toHaveCount(0);
-    await expect(people(page, 'pain-free', 'lozenges', 'caused')).toHaveCount(10);
+    await expect.poll(() => countedPeople(people(page, 'pain-free', 'tablet', 'caused'))).toBe(21);
+    await expect.poll(() => countedPeople(people(page, 'pain-free', 'tablet', 'event'))).toBe(35);
+    await expect.poll(() => countedPeople(people(page, 'pain-free', 'tablet', 'prevented'))).toBe(0);
+    await expect.poll(() => countedPeople(people(page, 'pain-free', 'lozenges', 'caused'))).toBe(10);
     const chart = page.locator('article[data-outcome-id="pain-free"] svg.people-chart').first();
     const wantedMark = await chart.getAttribute('data-wanted');
     if (wantedMark !== null) {

@@ -201,7 +201,10 @@ export async function timeInputToCharts(browser, url, settings) {
     return (
       charts.length === 1 &&
       charts[0]?.getAttribute('data-denominator') === '1000' &&
-      charts[0].querySelectorAll('[data-outcome]').length === 2000
+      [...charts[0].querySelectorAll('[data-outcome]')].reduce(
+        (sum, shape) => sum + Number(shape.getAttribute('data-count') ?? 1),
+        0,
+      ) === 2000
     );
   });
   const field = await page.getByLabel('Baseline risk', { exact: true }).first().elementHandle();
@@ -256,7 +259,14 @@ export async function timeInputToCharts(browser, url, settings) {
         performance.mark('app-input:end');
         performance.clearMarks('app-input:start');
         performance.clearMarks('app-input:end');
-        collected.push({ total: end - start, dom: seen - start, people: svg.querySelectorAll('[data-outcome]').length });
+        collected.push({
+          total: end - start,
+          dom: seen - start,
+          people: [...svg.querySelectorAll('[data-outcome]')].reduce(
+            (sum, shape) => sum + Number(shape.getAttribute('data-count') ?? 1),
+            0,
+          ),
+        });
       }
       return collected;
     },

@@ -30,7 +30,12 @@ describe('a slide as an SVG file', () => {
       expect(root.getAttribute('xmlns')).toBe('http://www.w3.org/2000/svg');
       expect(root.getAttribute('viewBox')).toBe(`0 0 ${SLIDE_WIDTH} ${SLIDE_HEIGHT}`);
       const people = slide.panels.reduce((sum, panel) => sum + panel.layout.denominator, 0);
-      expect(doc.querySelectorAll('path.person')).toHaveLength(people);
+      // One shape per group and look of each panel; their counts add up to every person (none without a count).
+      const shapes = [...doc.querySelectorAll('path.person')];
+      expect(shapes.every((shape) => shape.hasAttribute('data-count') && shape.hasAttribute('data-outcome'))).toBe(true);
+      expect(shapes.reduce((sum, shape) => sum + Number(shape.getAttribute('data-count')), 0)).toBe(people);
+      // Legend swatches keep no group.
+      expect(doc.querySelectorAll('svg svg [data-outcome]')).toHaveLength(0);
       const words = doc.documentElement.textContent ?? '';
       expect(words).toContain(slide.heading.split(' ')[0] ?? '');
       // Everything of the slide stays above the footer rule.

@@ -111,3 +111,22 @@ export function placeGlyphPath(path: GlyphPath, x: number, y: number): string {
   const top = y + path.startY;
   return `M${roundedDecimal(Number.isNaN(left) ? 0 : left, path.digits)},${roundedDecimal(Number.isNaN(top) ? 0 : top, path.digits)}${path.tail}`;
 }
+
+/**
+ * {@link placeGlyphPath} for many people on one grid: the same text, with each distinct
+ * column and row formatted once (a grid of 1000 people has 50 columns and 20 rows, so
+ * 2000 placements format 70 numbers instead of 4000).
+ */
+export function gridPlacer(path: GlyphPath): (x: number, y: number) => string {
+  const lefts = new Map<number, string>();
+  const tops = new Map<number, string>();
+  const format = (cache: Map<number, string>, value: number): string => {
+    let text = cache.get(value);
+    if (text === undefined) {
+      text = roundedDecimal(Number.isNaN(value) ? 0 : value, path.digits);
+      cache.set(value, text);
+    }
+    return text;
+  };
+  return (x, y) => `M${format(lefts, x + path.startX)},${format(tops, y + path.startY)}${path.tail}`;
+}

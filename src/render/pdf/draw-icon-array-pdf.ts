@@ -1,16 +1,15 @@
 /**
  * An icon array drawn with jsPDF's own drawing calls, from the same layout as the
- * SVG renderer (no SVG conversion), so the handout matches the screen.
+ * SVG renderer (no SVG conversion), so the handout matches the screen. Each look is
+ * drawn once as a form and placed per person (`figure-forms.ts`).
  */
 import type { jsPDF } from 'jspdf';
 import { type PersonLook, lookOf } from '../../core/direction.ts';
 import type { PersonGroup } from '../../core/types.ts';
-import { glyphFor } from '../glyphs/glyph-for.ts';
 import { type IconArrayLayout, scaleLayout } from '../icon-array-layout.ts';
 import type { ChartPalette } from '../palette.ts';
-import { rangeRing } from '../range-ring.ts';
 import { type RankSpan, isUncertain } from '../uncertain-people.ts';
-import { drawFigurePdf, drawRingPdf } from './draw-figure-pdf.ts';
+import { type FormCell, figureForm, placeForm, ringForm } from './figure-forms.ts';
 
 /** Where an array goes on the page, in the document's units; the height follows the layout. */
 export interface PdfBox {
@@ -50,35 +49,33 @@ export function drawIconArrayPdf(
 ): PdfArrayDrawing {
   const scaled = scaleLayout(layout, box.width / layout.geometry.width);
   const { cellSize, iconSize, patternTile } = scaled.geometry;
-  const glyph = glyphFor(scaled.geometry.glyph);
+  const cell: FormCell = { cellSize, iconSize, tile: patternTile, lineWidth: cellSize * palette.outlineWidth };
+  // A person's cell starts this far up and left of their glyph box.
+  const inset = (cellSize - iconSize) / 2;
+  const forms = new Map<PersonLook, string>();
+  const formOf = (look: PersonLook): string => {
+    let key = forms.get(look);
+    if (key === undefined) {
+      key = figureForm(doc, scaled.geometry.glyph, look, cell, palette);
+      forms.set(look, key);
+    }
+    return key;
+  };
   const drawn: Record<PersonGroup, number> = { event: 0, prevented: 0, caused: 0, free: 0 };
   const looks: Record<PersonLook, number> = { event: 0, helped: 0, harmed: 0, free: 0 };
   const wanted = options.wanted ?? false;
   const ringed: (typeof scaled.people)[number][] = [];
   for (const person of scaled.people) {
     const look = lookOf(person.group, wanted);
-    drawFigurePdf(
-      doc,
-      glyph,
-      look,
-      {
-        x: box.x + person.x,
-        y: box.y + person.y,
-        size: iconSize,
-        tileOriginX: box.x,
-        tileOriginY: box.y,
-        tile: patternTile,
-        lineWidth: cellSize * palette.outlineWidth,
-        cellSize,
-      },
-      palette,
-    );
+    placeForm(doc, formOf(look), cellSize, box.x + person.x - inset, box.y + person.y - inset);
     drawn[person.group] += 1;
     looks[look] += 1;
     if (isUncertain(person.rank, options.uncertain ?? null)) ringed.push(person);
   }
   // Rings after every figure, so no neighbour is drawn over one.
-  for (const person of ringed)
-    drawRingPdf(doc, rangeRing(box.x + person.x, box.y + person.y, iconSize, cellSize, palette), palette);
+  if (ringed.length > 0) {
+    const ring = ringForm(doc, cell, palette);
+    for (const person of ringed) placeForm(doc, ring, cellSize, box.x + person.x - inset, box.y + person.y - inset);
+  }
   return { height: scaled.geometry.height, drawn, looks, outlined: ringed.length };
 }

@@ -53,7 +53,7 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
     group.node()?.appendChild(people);
     if (hasRangeOutline(array, resolved)) {
-      const rings = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
+      const rings = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'path');
       rings.setAttribute('transform', peopleTransform(placed));
       drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
       group.node()?.appendChild(rings);

@@ -1,6 +1,6 @@
 /**
- * Live redraw of a drawn chart: people whose look changed are updated in place,
- * everyone else is left untouched; text is drawn again off the page and only the
+ * Live redraw of a drawn chart: only the shapes of the groups whose people changed
+ * are rewritten (one path per group, `draw-people.ts`), the others are left untouched; text is drawn again off the page and only the
  * blocks that changed are swapped in. Attributes are written only when their value
  * changes, since a rewritten `viewBox` or `transform` makes the browser lay out every
  * person again.
@@ -28,7 +28,7 @@ export interface ChartUpdate {
  * Update `svgElement` (drawn by `drawChart` or `renderChartSvg`) to show `model`.
  * When the arrays, denominator or arrangement differ, an interval appears or goes
  * away under a shown range, or options are given, the chart is drawn afresh;
- * otherwise only changed people are touched.
+ * otherwise only the shapes of groups whose people changed are touched.
  */
 export function updateChart(svgElement: SVGSVGElement, model: ChartModel, options?: SvgChartOptions): ChartUpdate {
   const resolved = options === undefined ? recordedSvgOptions(svgElement, model) : resolveSvgOptions(model, options);
@@ -43,7 +43,7 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
       const array = model.arrays[index];
       if (array === undefined || group.getAttribute('data-option-id') !== array.optionId) return false;
       // An interval that appears or goes away adds or removes the array's range outline.
-      return (group.querySelector(':scope > g.range-outline') !== null) === hasRangeOutline(array, resolved);
+      return (group.querySelector(':scope > path.range-outline') !== null) === hasRangeOutline(array, resolved);
     });
   if (!sameShape) {
     drawChart(svgElement, model, resolved);
@@ -75,7 +75,7 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
       resolved.palette,
       ids,
     );
-    const rings = group.querySelector<SVGGElement>(':scope > g.range-outline');
+    const rings = group.querySelector(':scope > path.range-outline');
     if (rings !== null) {
       setChangedAttribute(rings, 'transform', peopleTransform(placed));
       drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);

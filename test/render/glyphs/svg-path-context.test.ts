@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { arcSweep, arcToBezier } from '../../../src/render/glyphs/arc-to-bezier.ts';
-import { SvgPathContext, glyphPath, placeGlyphPath } from '../../../src/render/glyphs/svg-path-context.ts';
+import { SvgPathContext, glyphPath, gridPlacer, placeGlyphPath } from '../../../src/render/glyphs/svg-path-context.ts';
 import { personGlyph } from '../../../src/render/glyphs/person.ts';
 
 describe('SvgPathContext', () => {
@@ -85,5 +85,14 @@ describe('arcToBezier', () => {
     expect(arcSweep(0, 10)).toBeCloseTo(Math.PI * 2, 12);
     expect(arcSweep(0, -Math.PI / 2)).toBeCloseTo(Math.PI * 1.5, 12);
     expect(arcSweep(0, Math.PI / 2, true)).toBeCloseTo(-Math.PI * 1.5, 12);
+  });
+});
+
+describe('gridPlacer', () => {
+  it('writes exactly what placeGlyphPath writes, for every place of a grid, however often a column or row comes back', () => {
+    const path = glyphPath(personGlyph, 0.88);
+    const place = gridPlacer(path);
+    for (const x of [0.06, 1.06, 2.31, 0.06, -0.004, Number.NaN])
+      for (const y of [0.06, 9.31, 0.06, 107.024]) expect(place(x, y)).toBe(placeGlyphPath(path, x, y));
   });
 });

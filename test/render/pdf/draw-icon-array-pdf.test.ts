@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { jsPDF } from 'jspdf';
 import { describe, expect, it } from 'vitest';
-import type { PeopleGroups } from '../../../src/core/types.ts';
+import type { PeopleGroups, PersonGroup } from '../../../src/core/types.ts';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { iconArrayLayout } from '../../../src/render/icon-array-layout.ts';
 import { colourPalette } from '../../../src/render/palette.ts';
@@ -13,6 +13,7 @@ import { drawChartPdf } from '../../../src/render/pdf/draw-chart-pdf.ts';
 import { drawIconArrayPdf } from '../../../src/render/pdf/draw-icon-array-pdf.ts';
 import { topicFixture } from '../topic-fixture.ts';
 import { paintings, pdfColour } from './pdf-content.ts';
+import { formPlacements, formStreams, pageContent } from './pdf-forms.ts';
 
 const PDFINFO = '/usr/bin/pdfinfo';
 
@@ -23,11 +24,25 @@ function newDocument(): jsPDF {
   return doc;
 }
 
-/** How many figures the content stream filled in each look's colour. */
+/**
+ * How many figures the document draws in each look's colour: each form filled in a look's
+ * colour counts once per placement on the page, a figure drawn on the page itself (a legend
+ * sample) once.
+ */
 function figuresByGroup(pdf: string) {
-  const painted = paintings(pdf);
+  const forms = formStreams(pdf);
+  const placements = formPlacements(pdf);
+  const uses = (name: string) => placements.filter((placement) => placement.form === name).length;
+  const painted = [
+    ...paintings(pageContent(pdf)).map((painting) => ({ painting, times: 1 })),
+    ...[...forms].flatMap(([name, stream]) =>
+      paintings(`stream\n${stream}endstream`).map((painting) => ({ painting, times: uses(name) })),
+    ),
+  ];
   const count = (hex: string, operators: readonly string[]) =>
-    painted.filter((painting) => painting.fill === pdfColour(hex) && operators.includes(painting.operator)).length;
+    painted
+      .filter(({ painting }) => painting.fill === pdfColour(hex) && operators.includes(painting.operator))
+      .reduce((sum, { times }) => sum + times, 0);
   const { groups } = colourPalette;
   // Solid groups are filled and stroked in one operator (B); patterned ones are filled (f),
   // then overlaid through a clip and stroked (ISO 32000-1 §8.5.3).
@@ -70,14 +85,56 @@ describe('drawIconArrayPdf', () => {
     );
   });
 
-  it('lays the dots and hatching through clipping paths, one per patterned figure', () => {
+  it('lays the dots and hatching through a clipping path, once in the form of each patterned look', () => {
     const doc = newDocument();
     drawIconArrayPdf(doc, iconArrayLayout(1000, thousand), { x: 20, y: 20, width: 170 }, colourPalette);
     const pdf = doc.output();
-    // W n: set the clipping path, end the path without painting (ISO 32000-1 §8.5.4).
-    expect(pdf.match(/^W\r?\nn$/gm)).toHaveLength(10);
+    // W n: set the clipping path, end the path without painting (ISO 32000-1 §8.5.4): only the harmed look has a pattern here.
+    expect(pdf.match(/^W\r?\nn$/gm)).toHaveLength(1);
+    expect([...formStreams(pdf).values()].filter((stream) => /^W\r?\nn$/m.test(stream))).toHaveLength(1);
     expect(pdf.match(/^q$/gm)?.length).toBe(pdf.match(/^Q$/gm)?.length);
   });
+
+  it.each([
+    [100, hundred, 70],
+    [1000, thousand, 170],
+  ] as const)(
+    'places one form per look at every person of the layout (per %i), each cell where the layout puts it',
+    (_, groups, width) => {
+      const doc = newDocument();
+      const layout = iconArrayLayout(groups.denominator, groups, { arrangement: 'scattered' });
+      const box = { x: 20, y: 30, width };
+      drawIconArrayPdf(doc, layout, box, colourPalette);
+      const pdf = doc.output();
+      const placements = formPlacements(pdf);
+      expect(placements).toHaveLength(groups.denominator);
+      // Points per millimetre (PostScript points, 72 per inch), and the A4 page height in points.
+      const k = 72 / 25.4;
+      const pageHeight = 297 * k;
+      const scale = width / layout.geometry.width;
+      const { cellSize, iconSize } = layout.geometry;
+      const inset = ((cellSize - iconSize) / 2) * scale;
+      const formOf = new Map<PersonGroup, string>();
+      for (const person of layout.people) {
+        // The cell's top-left corner, in millimetres from the page's top-left corner.
+        const left = box.x + person.x * scale - inset;
+        const top = box.y + person.y * scale - inset;
+        const found = placements.filter(
+          (placement) =>
+            Math.abs(placement.x - left * k) < 0.011 && Math.abs(pageHeight - placement.y - (top + cellSize * scale) * k) < 0.011,
+        );
+        expect(found).toHaveLength(1);
+        // One form per group: everyone of a group is placed from the same one, and no two groups share one.
+        const form = found[0]!.form;
+        expect(formOf.get(person.group) ?? form).toBe(form);
+        formOf.set(person.group, form);
+      }
+      expect(new Set(formOf.values()).size).toBe(formOf.size);
+      expect(formStreams(pdf).size).toBe(formOf.size);
+      for (const [group, form] of formOf)
+        expect(placements.filter((placement) => placement.form === form)).toHaveLength(groups[group]);
+    },
+  );
 
   it('outlines the uncertain people with a dash when asked', () => {
     const doc = newDocument();
@@ -85,8 +142,14 @@ describe('drawIconArrayPdf', () => {
       uncertain: { from: 13, to: 18 },
     });
     expect(drawing.outlined).toBe(5);
-    // d: set the line dash pattern (ISO 32000-1 §8.4.3.6); jsPDF resets it with an empty array.
-    expect(doc.output().match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(5);
+    // d: set the line dash pattern (ISO 32000-1 §8.4.3.6), once in the ring's form, placed five times after the figures.
+    const pdf = doc.output();
+    expect(pdf.match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(1);
+    const ring = [...formStreams(pdf)].find(([, stream]) => /^\[[\d.]+ [\d.]+\] 0\.? d$/m.test(stream))?.[0];
+    expect(formPlacements(pdf).map((placement) => placement.form === ring)).toEqual([
+      ...Array<boolean>(100).fill(false),
+      ...Array<boolean>(5).fill(true),
+    ]);
   });
 
   it('gives the same bytes for the same drawing', () => {
@@ -158,7 +221,10 @@ describe('drawChartPdf of a wanted event and with the range outline', () => {
     expect(withRange.arrays[1]!.outlined).toBe(23);
     const before = figuresByGroup(plain.output());
     expect(figuresByGroup(ringed.output())).toEqual({ ...before, free: before.free + 1 });
-    // One dashed stroke per ring, and one for the legend's sample (ISO 32000-1 §8.4.3.6).
-    expect(ringed.output().match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(24);
+    // One dashed stroke in the ring's form, placed per ringed person, and one for the legend's sample (ISO 32000-1 §8.4.3.6).
+    const pdf = ringed.output();
+    expect(pdf.match(/^\[[\d.]+ [\d.]+\] 0\.? d$/gm)).toHaveLength(2);
+    const ring = [...formStreams(pdf)].find(([, stream]) => /^\[[\d.]+ [\d.]+\] 0\.? d$/m.test(stream))?.[0];
+    expect(formPlacements(pdf).filter((placement) => placement.form === ring)).toHaveLength(23);
   });
 });

@@ -3,28 +3,18 @@ import { lookOf } from '../../../src/core/direction.ts';
 import type { PersonGroup } from '../../../src/core/types.ts';
 import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { type ChartPalette, blackAndWhitePalette, colourPalette } from '../../../src/render/palette.ts';
+import { drawChart } from '../../../src/render/svg/draw-chart.ts';
+import { ringPath } from '../../../src/render/svg/draw-range-rings.ts';
 import { updateChart } from '../../../src/render/svg/update-chart.ts';
 import { topicFixture } from '../topic-fixture.ts';
 import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
+import { pathRuns, runBox } from './path-subpaths.ts';
 
 const stroke = (comparison: number, intervention: number, denominator: 100 | 1000 = 100) =>
   outcomeChart(
     topicFixture(denominator, { comparison, intervention, range: { lower: intervention - 2, upper: intervention + 3 } }),
     'stroke',
   );
-
-/**
- * The fill and outline a person is painted with: their own attribute, or else the one
- * their people group sets. SVG 1.1 (Second Edition, W3C 2011), §11.3: the `fill` and
- * `stroke` properties are inherited.
- */
-function effectivePaint(person: Element): { fill: string | null; stroke: string | null } {
-  const group = person.parentElement;
-  return {
-    fill: person.getAttribute('fill') ?? group?.getAttribute('fill') ?? null,
-    stroke: person.getAttribute('stroke') ?? group?.getAttribute('stroke') ?? null,
-  };
-}
 
 /** The palette's paint of a group's look, with pattern fills named by the chart's ids. */
 function expectedPaint(
@@ -38,38 +28,76 @@ function expectedPaint(
   return { fill, stroke: style.outline };
 }
 
+/** The text of a number as the renderer rounds it (two decimals). */
+const hundredths = (value: number) => Math.round(value * 100) / 100;
+
 describe('drawn people', () => {
   it.each([
     ['colour', colourPalette],
     ['black-and-white', blackAndWhitePalette],
-  ] as const)('paint every person in their group’s %s look, whether their own or inherited from the group', (_, palette) => {
+  ] as const)('paint each group’s one shape in the group’s %s look', (_, palette) => {
     // Invented counts per 1000: 125 without and 94 with the option, so all of event,
     // prevented and free are drawn.
     const svg = drawIntoPage(stroke(125, 94, 1000), { palette });
-    const people = [...svg.querySelectorAll('g.people > [data-outcome]')];
-    expect(people).toHaveLength(2000);
-    for (const person of people) {
-      const group = person.getAttribute('data-outcome') as PersonGroup;
-      expect(effectivePaint(person)).toEqual(expectedPaint(palette, group, false, 'chart-stroke'));
+    const shapes = [...svg.querySelectorAll('g.people > [data-outcome]')];
+    expect(shapes.map((shape) => shape.getAttribute('data-outcome'))).toEqual(['event', 'free', 'event', 'prevented', 'free']);
+    for (const shape of shapes) {
+      const group = shape.getAttribute('data-outcome') as PersonGroup;
+      expect({ fill: shape.getAttribute('fill'), stroke: shape.getAttribute('stroke') }).toEqual(
+        expectedPaint(palette, group, false, 'chart-stroke'),
+      );
     }
+    expect(svg.querySelectorAll('g.people [style], g.people [transform], g.people [class]')).toHaveLength(0);
   });
 
-  it('lets people without the outcome carry only their place and group, and no per-person style or transform', () => {
-    const svg = drawIntoPage(stroke(125, 94, 1000));
-    const free = [...svg.querySelectorAll('g.people > [data-outcome="free"]')];
-    expect(free).toHaveLength(875 + 875);
-    for (const person of free) expect(person.getAttributeNames()).toEqual(['d', 'data-outcome']);
-    expect(svg.querySelectorAll('g.people [style], g.people [transform], g.people [class]')).toHaveLength(0);
-    // Every person's path starts at an absolute point of their own.
-    const starts = new Set(
-      [...svg.querySelectorAll('g.people > path')].map((person) => /^M[^a-z]+/.exec(person.getAttribute('d') ?? '')?.[0]),
-    );
-    expect(starts.size).toBe(1000);
-  });
+  it.each([
+    [100, 'grouped'],
+    [1000, 'grouped'],
+    [1000, 'scattered'],
+  ] as const)(
+    'draw every person of the layout (per %i, %s) inside their group’s shape, at their place',
+    (denominator, arrangement) => {
+      const model = outcomeChart(
+        topicFixture(
+          denominator,
+          denominator === 100 ? { comparison: 20, intervention: 13 } : { comparison: 200, intervention: 125 },
+        ),
+        'stroke',
+        { arrangement },
+      );
+      const svg = testDocument.createElementNS('http://www.w3.org/2000/svg', 'svg');
+      const frame = drawChart(svg, model);
+      model.arrays.forEach((_, index) => {
+        const layout = frame.arrays[index]!.grid.layout;
+        const { iconSize } = layout.geometry;
+        const drawn = new Map<string, string>();
+        for (const shape of svg.querySelectorAll('g.chart-array')[index]!.querySelectorAll('g.people > path')) {
+          const runs = pathRuns(shape.getAttribute('d') ?? '');
+          expect(runs).toHaveLength(Number(shape.getAttribute('data-count')));
+          for (const run of runs) {
+            const box = runBox(run);
+            drawn.set(`${hundredths(box.left)} ${hundredths(box.top)}`, shape.getAttribute('data-outcome') ?? '');
+            // The figure stays inside its glyph box (half a hundredth of rounding allowed).
+            expect(box.right - box.left).toBeLessThanOrEqual(iconSize + 0.01);
+            expect(box.bottom - box.top).toBeLessThanOrEqual(iconSize + 0.01);
+          }
+        }
+        expect(drawn.size).toBe(denominator);
+        // Every person of the model is drawn in their own group's shape, inside their own box.
+        for (const person of layout.people) {
+          const match = [...drawn].find(([key]) => {
+            const [left, top] = key.split(' ').map(Number) as [number, number];
+            return left >= person.x - 0.01 && left <= person.x + iconSize && top >= person.y - 0.01 && top <= person.y + iconSize;
+          });
+          expect(match?.[1]).toBe(person.group);
+        }
+      });
+    },
+  );
 });
 
 describe('updated people', () => {
-  it('ends in the same state as a fresh drawing when people return to the inherited look and the range moves', () => {
+  it('ends in the same state as a fresh drawing when a group empties and the range moves', () => {
     // 20 → 10 without and 15 → 8 with the option: comparison ranks 10–19 lose the event,
     // and the outlined ranks move from 13–17 to 6–10.
     const updated = drawIntoPage(stroke(20, 15), { showRange: true });
@@ -81,23 +109,24 @@ describe('updated people', () => {
     expect(outcomeCounts(fresh.querySelectorAll('g.chart-array')[0]!)).toEqual({ event: 10, free: 90 });
   });
 
-  it('ends in the same state as a fresh drawing after several updates back and forth', () => {
+  it('ends in the same state as a fresh drawing after several updates back and forth, through groups that come and go', () => {
     const updated = drawIntoPage(stroke(125, 94, 1000), { palette: blackAndWhitePalette });
     for (const [comparison, intervention] of [
       [200, 150],
-      [90, 60],
+      [90, 90],
+      [90, 160],
+      [0, 0],
       [125, 94],
     ] as const) {
       updateChart(updated, stroke(comparison, intervention, 1000));
+      expect(updated.outerHTML).toBe(
+        drawIntoPage(stroke(comparison, intervention, 1000), { palette: blackAndWhitePalette }).outerHTML,
+      );
     }
-    const updatedText = updated.outerHTML;
-    const fresh = drawIntoPage(stroke(125, 94, 1000), { palette: blackAndWhitePalette });
-    expect(updatedText).toBe(fresh.outerHTML);
   });
 
   it('writes no attribute with the value it already has', () => {
-    // In the black-and-white theme events and benefits share a black outline, so a person
-    // moving between them keeps their stroke.
+    // In the black-and-white theme events and benefits share a black outline.
     const svg = drawIntoPage(stroke(20, 15), { palette: blackAndWhitePalette, showRange: true });
     const rewrites: string[] = [];
     const observer = new testDocument.defaultView!.MutationObserver(() => undefined);
@@ -125,6 +154,15 @@ describe('updated people', () => {
     after.forEach((swatch, index) => expect(swatch).toBe(swatches[index]));
     expect([...svg.querySelectorAll('text.legend-label')].map((element) => element.textContent)).toContain(
       '8 avoid a stroke because of option A',
+    );
+  });
+});
+
+describe('the range outline’s ring path', () => {
+  // The path a rounded <rect> stands for: SVG 2 (W3C 2018), §10.2 "The rect element".
+  it('starts at (x + r, y) and goes clockwise with a quarter arc at each corner', () => {
+    expect(ringPath({ x: 1, y: 2, side: 10, radius: 1, lineWidth: 0.1, dash: [1, 1] })).toBe(
+      'M2,2h8a1,1,0,0,1,1,1v8a1,1,0,0,1,-1,1h-8a1,1,0,0,1,-1,-1v-8a1,1,0,0,1,1,-1z',
     );
   });
 });

@@ -24,14 +24,22 @@ export function drawIntoPage(model: ChartModel, options: SvgChartOptions = {}): 
   return svg;
 }
 
-/** Count `data-outcome` values under `root`. */
+/**
+ * People per group under `root`: the `data-count`s of the elements of each `data-outcome`
+ * added up, an element without a count drawing one person.
+ */
 export function outcomeCounts(root: Element): Record<string, number> {
   const counts: Record<string, number> = {};
   for (const element of root.querySelectorAll('[data-outcome]')) {
     const group = element.getAttribute('data-outcome') ?? '';
-    counts[group] = (counts[group] ?? 0) + 1;
+    counts[group] = (counts[group] ?? 0) + Number(element.getAttribute('data-count') ?? 1);
   }
   return counts;
+}
+
+/** Every person `root` draws: the sum of {@link outcomeCounts}. */
+export function peopleCount(root: Element): number {
+  return Object.values(outcomeCounts(root)).reduce((sum, count) => sum + count, 0);
 }
 
 /** The text of a `<text>` element, its lines joined by spaces. */

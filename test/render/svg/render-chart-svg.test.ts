@@ -5,7 +5,8 @@ import { blackAndWhitePalette } from '../../../src/render/palette.ts';
 import { svgForExport } from '../../../src/render/export/svg-for-export.ts';
 import { renderChartSvg } from '../../../src/render/svg/render-chart-svg.ts';
 import { topicFixture } from '../topic-fixture.ts';
-import { drawIntoPage, lineText, outcomeCounts, parseSvg, testDocument } from './parse-svg.ts';
+import { drawIntoPage, lineText, outcomeCounts, parseSvg, peopleCount, testDocument } from './parse-svg.ts';
+import { pathRuns, runBox } from './path-subpaths.ts';
 
 const GROUPS: readonly PersonGroup[] = ['event', 'prevented', 'caused', 'free'];
 
@@ -40,12 +41,19 @@ describe('renderChartSvg people', () => {
     [1000, 20, 30],
     [1000, 40, 40],
   ] as const)(
-    'draws one element per person of each group, per %i with %i without and %i with the option',
+    'draws every person of each group in one shape per group, per %i with %i without and %i with the option',
     (denominator, comparison, intervention) => {
       const model = outcomeChart(topicFixture(denominator, { comparison, intervention }), 'stroke');
       const svg = drawIntoPage(model);
       for (const index of [0, 1]) expect(drawnCounts(svg, index)).toEqual(expectedCounts(model, index));
-      expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(denominator * 2);
+      expect(peopleCount(svg)).toBe(denominator * 2);
+      for (const array of svg.querySelectorAll('g.chart-array')) {
+        const shapes = [...array.querySelectorAll('[data-outcome]')];
+        expect(new Set(shapes.map((shape) => shape.getAttribute('data-outcome'))).size).toBe(shapes.length);
+        // Each shape has one run of subpaths per person it counts.
+        for (const shape of shapes)
+          expect(pathRuns(shape.getAttribute('d') ?? '')).toHaveLength(Number(shape.getAttribute('data-count')));
+      }
     },
   );
 
@@ -56,21 +64,26 @@ describe('renderChartSvg people', () => {
       risks: { comparison: 0.2, intervention: 0.15 },
     });
     const svg = parseSvg(render(model));
-    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
+    expect(peopleCount(svg)).toBe(200);
     expect(drawnCounts(svg, 0)).toEqual({ event: 20, free: 80 });
     expect(drawnCounts(svg, 1)).toEqual({ event: 15, prevented: 5, free: 80 });
   });
 
-  it('gives data-outcome to people only: each is one path in the people group, and swatches have none', () => {
+  it('gives data-outcome and data-count to the people’s shapes only; the outline and swatches have none', () => {
     const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'), { showRange: true });
     for (const element of svg.querySelectorAll('[data-outcome]')) {
       expect(element.tagName).toBe('path');
       expect(element.parentElement?.getAttribute('class')).toBe('people');
+      expect(Number(element.getAttribute('data-count'))).toBeGreaterThan(0);
     }
     for (const group of svg.querySelectorAll('g.people')) {
-      expect(group.children).toHaveLength(100);
+      expect(peopleCount(group)).toBe(100);
       for (const child of group.children) expect(child.hasAttribute('data-outcome')).toBe(true);
     }
+    const outlines = [...svg.querySelectorAll('[data-look="outline"]')];
+    expect(outlines.map((outline) => [outline.hasAttribute('data-outcome'), outline.getAttribute('data-count')])).toEqual([
+      [false, '6'],
+    ]);
     expect(svg.querySelectorAll('path.swatch').length).toBeGreaterThan(0);
     expect(svg.querySelectorAll('path.swatch[data-outcome]')).toHaveLength(0);
     expect(svg.querySelectorAll('use')).toHaveLength(0);
@@ -130,7 +143,7 @@ describe('renderChartSvg accessibility', () => {
 describe('renderChartSvg range', () => {
   it('draws no one ringed by default', () => {
     const svg = drawIntoPage(outcomeChart(topicFixture(), 'stroke'));
-    expect(svg.querySelectorAll('g.range-outline, [stroke-dasharray]')).toHaveLength(0);
+    expect(svg.querySelectorAll('.range-outline, [stroke-dasharray]')).toHaveLength(0);
   });
 
   it('rings the people between the lower and upper count when showRange is on', () => {
@@ -161,26 +174,40 @@ describe('renderChartSvg range', () => {
   });
 });
 
-/** The groups of the people an array's range outline rings. */
+/**
+ * The groups of the people an array's range outline rings: each ring (one run of the
+ * outline's path) is matched to the person whose figure holds the ring's centre.
+ */
 function ringedOutcomes(svg: SVGSVGElement, index: number): (string | null)[] {
   const array = svg.querySelectorAll('g.chart-array')[index]!;
-  const people = [...array.querySelectorAll('g.people > path')];
-  return [...array.querySelectorAll('g.range-outline > rect')].map(
-    (ring) => people[Number(ring.getAttribute('data-index'))]?.getAttribute('data-outcome') ?? null,
+  const figures = [...array.querySelectorAll('g.people > path')].flatMap((shape) =>
+    pathRuns(shape.getAttribute('d') ?? '').map((run) => ({ group: shape.getAttribute('data-outcome'), box: runBox(run) })),
   );
+  const outline = array.querySelector('path.range-outline');
+  if (outline === null) return [];
+  const rings = pathRuns(outline.getAttribute('d') ?? '');
+  expect(rings).toHaveLength(Number(outline.getAttribute('data-count')));
+  return rings.map((ring) => {
+    const box = runBox(ring);
+    const [x, y] = [(box.left + box.right) / 2, (box.top + box.bottom) / 2];
+    const found = figures.filter(({ box: f }) => f.left <= x && x <= f.right && f.top <= y && y <= f.bottom);
+    expect(found).toHaveLength(1);
+    return found[0]?.group ?? null;
+  });
 }
 
 describe('renderChartSvg output', () => {
-  it('is byte-identical for the same input, with one data-outcome per person in the text', () => {
+  it('is byte-identical for the same input, with one shape per group and array in the text', () => {
     const model = outcomeChart(
       topicFixture(1000, { comparison: 125, intervention: 94, range: { lower: 80, upper: 110 } }),
       'stroke',
     );
     const text = render(model, { showRange: true });
     expect(render(model, { showRange: true })).toBe(text);
-    const count = (group: string) => text.split(`data-outcome="${group}"`).length - 1;
-    expect([count('event'), count('prevented'), count('caused'), count('free')]).toEqual([125 + 94, 31, 0, 875 + 875]);
-    expect(text.split('data-outcome=').length - 1).toBe(2000);
+    const count = (group: string) =>
+      [...text.matchAll(new RegExp(`data-outcome="${group}" data-count="(\\d+)"`, 'g'))].map((found) => Number(found[1]));
+    expect([count('event'), count('prevented'), count('caused'), count('free')]).toEqual([[125, 94], [31], [], [875, 875]]);
+    expect(text.split('data-outcome=').length - 1).toBe(5);
     const scattered = outcomeChart(topicFixture(), 'stroke', { arrangement: 'scattered' });
     expect(render(scattered)).toBe(render(outcomeChart(topicFixture(), 'stroke', { arrangement: 'scattered' })));
   });
@@ -213,6 +240,6 @@ describe('renderChartSvg output', () => {
   it('becomes a standalone file 180 mm wide that still parses, with every person', () => {
     const svg = parseSvg(svgForExport(render(outcomeChart(topicFixture(), 'stroke'))));
     expect(svg.getAttribute('width')).toBe('180mm');
-    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(200);
+    expect(peopleCount(svg)).toBe(200);
   });
 });

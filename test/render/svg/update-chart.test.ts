@@ -3,7 +3,7 @@ import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { blackAndWhitePalette } from '../../../src/render/palette.ts';
 import { updateChart } from '../../../src/render/svg/update-chart.ts';
 import { topicFixture } from '../topic-fixture.ts';
-import { drawIntoPage, outcomeCounts, testDocument } from './parse-svg.ts';
+import { drawIntoPage, outcomeCounts, peopleCount, testDocument } from './parse-svg.ts';
 
 const stroke = (comparison: number, intervention: number, denominator: 100 | 1000 = 100) =>
   outcomeChart(
@@ -11,7 +11,7 @@ const stroke = (comparison: number, intervention: number, denominator: 100 | 100
     'stroke',
   );
 
-/** Paths of people whose attributes an action changed, seen by a MutationObserver. */
+/** People's shapes whose attributes an action changed, seen by a MutationObserver. */
 async function touchedPeople(svg: SVGSVGElement, action: () => void): Promise<Set<Element>> {
   const touched = new Set<Element>();
   const observer = new testDocument.defaultView!.MutationObserver((records) => {
@@ -32,17 +32,39 @@ async function touchedPeople(svg: SVGSVGElement, action: () => void): Promise<Se
 }
 
 describe('updateChart', () => {
-  it('moves only the people whose group changed', async () => {
+  it('rewrites only the shapes of the groups whose people changed, and keeps every other element', async () => {
     const svg = drawIntoPage(stroke(20, 15));
+    const before = [...svg.querySelectorAll('g.people > path')];
     let update = { redrawn: true, peopleChanged: -1 };
     const touched = await touchedPeople(svg, () => {
       update = updateChart(svg, stroke(20, 12));
     });
     // 15 → 12 with the option: ranks 12, 13 and 14 go from event to prevented.
     expect(update).toEqual({ redrawn: false, peopleChanged: 3 });
-    expect(touched.size).toBe(3);
-    expect([...touched].map((element) => element.getAttribute('data-outcome'))).toEqual(['prevented', 'prevented', 'prevented']);
+    const after = [...svg.querySelectorAll('g.people > path')];
+    // Same elements (no shape added or removed); of them only the option's event and prevented shapes were written.
+    expect(after).toHaveLength(before.length);
+    after.forEach((shape, index) => expect(shape).toBe(before[index]));
+    const option = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people > path')];
+    expect([...touched]).toEqual(option.slice(0, 2));
+    expect(option.map((shape) => [shape.getAttribute('data-outcome'), shape.getAttribute('data-count')])).toEqual([
+      ['event', '12'],
+      ['prevented', '8'],
+      ['free', '80'],
+    ]);
     expect(outcomeCounts(svg.querySelectorAll('g.chart-array')[1]!)).toEqual({ event: 12, prevented: 8, free: 80 });
+  });
+
+  it('adds a shape for a group that gains its first person in its place, and removes one left with no one', () => {
+    const svg = drawIntoPage(stroke(20, 20));
+    const [event, free] = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people > path')];
+    updateChart(svg, stroke(20, 17));
+    const grown = [...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people > path')];
+    expect(grown.map((shape) => shape.getAttribute('data-outcome'))).toEqual(['event', 'prevented', 'free']);
+    expect(grown[0]).toBe(event);
+    expect(grown[2]).toBe(free);
+    updateChart(svg, stroke(20, 20));
+    expect([...svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.people > path')]).toEqual([event, free]);
   });
 
   it('updates the labels and the text alternative with the new counts', () => {
@@ -72,13 +94,15 @@ describe('updateChart', () => {
     const svg = drawIntoPage(stroke(20, 15), { showRange: true });
     updateChart(svg, stroke(20, 12));
     // Range 10 to 15 around 12: ranks 10–14 ringed.
-    expect(svg.querySelectorAll('g.chart-array')[1]!.querySelectorAll('g.range-outline > rect')).toHaveLength(5);
+    const outline = svg.querySelectorAll('g.chart-array')[1]!.querySelector('path.range-outline');
+    expect(outline?.getAttribute('data-count')).toBe('5');
+    expect(outline?.getAttribute('d')?.match(/M/g)).toHaveLength(5);
   });
 
   it('redraws everything when the denominator changes or new options are given', () => {
     const svg = drawIntoPage(stroke(20, 15));
     expect(updateChart(svg, stroke(200, 150, 1000)).redrawn).toBe(true);
-    expect(svg.querySelectorAll('[data-outcome]')).toHaveLength(2000);
+    expect(peopleCount(svg)).toBe(2000);
     const other = drawIntoPage(stroke(20, 15));
     expect(updateChart(other, stroke(20, 15), { palette: blackAndWhitePalette }).redrawn).toBe(true);
     expect(other.getAttribute('data-palette')).toBe('black-and-white');
@@ -104,7 +128,7 @@ describe('updateChart and the range outline', () => {
   it('gives only arrays with an interval an outline, and redraws when an interval goes away', () => {
     const svg = drawIntoPage(stroke(20, 15), { showRange: true });
     const outlines = () =>
-      [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > g.range-outline') !== null);
+      [...svg.querySelectorAll('g.chart-array')].map((array) => array.querySelector(':scope > path.range-outline') !== null);
     expect(outlines()).toEqual([false, true]);
     const noInterval = outcomeChart(topicFixture(100, { comparison: 20, intervention: 15, range: null }), 'stroke');
     expect(updateChart(svg, noInterval).redrawn).toBe(true);

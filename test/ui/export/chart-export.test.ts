@@ -15,7 +15,9 @@ describe('chartSvgFile', () => {
   it('keeps the range outline when it is on, ringing the six people of ranks 12–17', () => {
     const text = chartSvgFile(model, document, { showRange: true });
     expect(text).toContain('data-show-range="true"');
-    expect(text.match(/<rect [^>]*data-index="/g)).toHaveLength(6);
+    const outline = /<path [^>]*class="range-outline"[^>]* data-look="outline" data-count="(\d+)"[^>]* d="([^"]*)"/.exec(text);
+    expect(outline?.[1]).toBe('6');
+    expect(outline?.[2]?.match(/M/g)).toHaveLength(6);
     expect(text).toContain('Dashed ring:');
   });
 
@@ -23,9 +25,11 @@ describe('chartSvgFile', () => {
     const plain = chartSvgFile(model, document);
     const ringed = chartSvgFile(model, document, { showRange: true });
     expect(plain).not.toContain('range-outline');
-    const people = (text: string) => text.match(/<path d="[^"]*" data-outcome="[a-z]+"[^>]*>/g);
+    const people = (text: string) => text.match(/<path data-outcome="[a-z]+" data-count="\d+"[^>]*>/g);
     expect(people(ringed)).toEqual(people(plain));
-    expect(people(plain)).toHaveLength(200);
+    const count = (text: string) =>
+      [...text.matchAll(/data-outcome="[a-z]+" data-count="(\d+)"/g)].reduce((sum, found) => sum + Number(found[1]), 0);
+    expect(count(plain)).toBe(200);
   });
 
   it('says whether the event is wanted on the root', () => {
