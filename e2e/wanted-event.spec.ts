@@ -83,7 +83,8 @@ test.describe('an outcome people want', () => {
     const words = page.locator('article[data-outcome-id="pain-free"] .words');
     await expect(words).toContainText('about 21 more of those 100 people have a pain-free throat');
     await expect(words.locator('[data-audience="clinician"]')).toContainText(
-      'NNTB 5: treating 5 people like you with one steroid tablet for 3 days',
+      // 0.56 − 0.35 = 0.21 (0.105 to 0.35) more: NNTB 5, interval ⌈1/0.35⌉ = 3 to ⌈1/0.105⌉ = 10 (Altman 1998).
+      'NNTB 5 (NNTB 3 to 10): treating 5 people like you with one steroid tablet for 3 days',
     );
     await expect(words).not.toContainText(/causes a pain-free|avoid a pain-free|risk of a pain-free/);
     await page.locator('article[data-outcome-id="pain-free"]').scrollIntoViewIfNeeded();

@@ -35,6 +35,17 @@ function intervalText(rawLower: number, rawUpper: number, words: Words): string 
   return `NNTB ${wholeNeeded(upper)} ${to} ${infinity} ${to} NNTH ${wholeNeeded(lower)}`;
 }
 
+/**
+ * The interval of the number needed to treat alone, in Altman's (1998) form ("NNTB 4 to ∞ to
+ * NNTH 20"), or null when the difference has no interval. The same words as {@link numberNeeded}.
+ *
+ * @example numberNeededInterval({ estimate: 0.1, lower: -0.05, upper: 0.25 }) // => "NNTB 4 to ∞ to NNTH 20"
+ */
+export function numberNeededInterval(entered: Estimate, settings: NumberNeededSettings = {}): string | null {
+  const { lower, upper } = benefitOf(entered, settings.wanted === true);
+  return lower === null || upper === null ? null : intervalText(lower, upper, settings.words ?? english.numbers);
+}
+
 /** How to read the difference, and the words for infinity and "to". */
 export interface NumberNeededSettings {
   /** The event is one people want: more of it is a benefit (NNTB), less of it a harm (NNTH). */
@@ -55,9 +66,8 @@ export interface NumberNeededSettings {
 export function numberNeeded(entered: Estimate, settings: NumberNeededSettings = {}): NumberNeeded {
   const words = settings.words ?? english.numbers;
   const difference = benefitOf(entered, settings.wanted === true);
-  const { lower, upper } = difference;
   const estimate = asDifference(difference.estimate);
-  const interval = lower === null || upper === null ? null : intervalText(lower, upper, words);
+  const interval = numberNeededInterval(entered, settings);
   if (estimate === 0) {
     const text = interval === null ? words.noDifference : words.noDifferenceWithin(interval);
     return { estimate: null, rounded: null, label: null, text };

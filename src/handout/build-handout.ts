@@ -14,7 +14,7 @@ import { FIT_LADDER, type FitSettings } from './fit-settings.ts';
 import { type HandoutContent, handoutContent } from './handout-content.ts';
 import { type HandoutFonts, codePointsOf, registerFonts } from './handout-fonts.ts';
 import { type HandoutMessages, type HandoutPart, handoutMessagesEn } from './messages/en.ts';
-import { type PageLayout, layoutPage } from './page-layout.ts';
+import { type PageLayout, type PageMode, layoutPage } from './page-layout.ts';
 import { type Paper, contentBox } from './paper-size.ts';
 import { fileIdentifier, pdfDate } from './pdf-identity.ts';
 import { jsPdfMeasure } from './text-layout.ts';
@@ -45,6 +45,10 @@ export interface HandoutBuilt {
   readonly readability: Readability;
   /** The type sizes and spacing the content fitted with. */
   readonly settings: FitSettings;
+  /** Whether every outcome's pictures were printed (all or none). */
+  readonly pictures: boolean;
+  /** The size of every outcome's sentences, in points: the body size, or the list size when the page is tight. */
+  readonly sentenceSize: number;
   /** Every sentence taken from the wording module, as printed. */
   readonly wordingSentences: readonly string[];
   /** The prose the readability was computed from, block by block. */
@@ -65,13 +69,19 @@ export interface HandoutRefused {
 
 export type HandoutBuild = HandoutBuilt | HandoutRefused;
 
-/** The sheet's prose, block by block, for the readability score. */
-function proseOf(content: HandoutContent): string[] {
+/** The sheet's prose, block by block, for the readability score (the captions under pictures left out, as the chart's labels). */
+function proseOf(content: HandoutContent, pictures: boolean): string[] {
   return [
     content.title,
     ...content.audience,
-    content.chart.keyIntro,
-    ...content.paragraphs.map((paragraph) => paragraph.join(' ')),
+    content.keyIntro,
+    ...content.outcomes.flatMap((outcome) => [
+      outcome.label,
+      // Under pictures the frames are captions, like the chart's labels; without them they lead the paragraphs.
+      ...(pictures ? [] : outcome.frames.map((frames) => frames.join(' '))),
+      ...outcome.paragraphs.filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
+      ...outcome.assumptions,
+    ]),
     [content.evidence.heading, ...content.evidence.items].join(' '),
     content.matters.prompt,
     ...content.questions.items,
@@ -113,18 +123,38 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     precision: 2,
     floatPrecision: 2,
   });
-  // Every character the page sets; the chart model and close-ups are left out, their pictures have no text (and many people).
-  const closeUpLabel = content.chart.closeUp?.label ?? null;
-  registerFonts(doc, fonts, codePointsOf({ ...content, chart: { ...content.chart, model: null, closeUp: closeUpLabel } }));
+  // Every character the page sets; the chart models and close-ups are left out, their pictures have no text (and many people).
+  const closeUpLabels = content.outcomes.map((outcome) => outcome.pictures.closeUp?.label ?? null);
+  const textOnly = content.outcomes.map((outcome, index) => ({
+    ...outcome,
+    pictures: { ...outcome.pictures, model: null, closeUp: closeUpLabels[index] },
+  }));
+  registerFonts(doc, fonts, codePointsOf({ ...content, outcomes: textOnly }));
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
-  // The enlarged blocks of pictures of 1000 give way last: a sheet that fits only without them is printed without them.
-  const withCloseUps = firstFit((settings) => layoutPage(content, settings, box, palette, measure));
-  const plain: HandoutContent = { ...content, chart: { ...content.chart, closeUp: null } };
-  const fitted =
-    withCloseUps.layout.fits || content.chart.closeUp === null
-      ? withCloseUps
-      : firstFit((settings) => layoutPage(plain, settings, box, palette, measure));
+  // What gives way, in order (see PageMode): the enlarged blocks of pictures of 1000; then the
+  // sentences' size, every outcome's alike, so that the pictures stay; then every outcome's pictures
+  // together, so that no outcome's pictures stand alone; then small sentences in two columns of a
+  // readable length; last, in one column, which wastes the least room at paragraph ends.
+  const hasCloseUps = content.outcomes.some((outcome) => outcome.pictures.closeUp !== null);
+  const modes: readonly PageMode[] = [
+    ...(hasCloseUps ? [{ pictures: true, closeUps: true }] : []),
+    { pictures: true, closeUps: false },
+    { pictures: true, closeUps: false, small: true },
+    { pictures: false, closeUps: false },
+    { pictures: false, closeUps: false, small: true, columns: true },
+    { pictures: false, closeUps: false, small: true },
+  ];
+  const fitWith = (mode: PageMode) => ({
+    ...firstFit((settings) => layoutPage(content, settings, box, palette, measure, mode)),
+    mode,
+  });
+  let fitted = fitWith(modes[0] ?? { pictures: false, closeUps: false });
+  for (const mode of modes.slice(1)) {
+    if (fitted.layout.fits) break;
+    // A refusal says how far over the most compact page (the last tried) still was.
+    fitted = fitWith(mode);
+  }
   if (!fitted.layout.fits) {
     const part = fitted.layout.tooLong ?? 'outcomes';
     const over = Math.max(0, fitted.layout.needed - box.height);
@@ -144,7 +174,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   doc.setLanguage(messages.language as Parameters<jsPDF['setLanguage']>[0]);
   doc.setCreationDate(creationDate);
   doc.setFileId(fileIdentifier([content.title, options.date, paper, options.appVersion].join('\n')));
-  const prose = proseOf(content);
+  const prose = proseOf(content, fitted.mode.pictures);
   return {
     ok: true,
     pdf: new Uint8Array(doc.output('arraybuffer')),
@@ -152,6 +182,8 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     pages: doc.getNumberOfPages(),
     readability: readability(prose.join('\n\n')),
     settings,
+    pictures: fitted.mode.pictures,
+    sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
     wordingSentences: content.wordingSentences,
     prose,
   };

@@ -2,7 +2,9 @@
  * The type sizes and spacing of a handout, and the order in which they give way
  * when content is long: first the table and lists (down to 9 pt) and the space
  * between sections, then the charts, and only last the body text (never below
- * 11 pt; 12 pt by default).
+ * 11 pt; 12 pt by default). Past the ladder, the page's modes give way
+ * (`PageMode` in page-layout.ts): every outcome's sentences may then be set at
+ * the list size, never below 9 pt.
  */
 
 /** One set of sizes: points for type, millimetres for lengths. */

@@ -48,11 +48,20 @@ function titleBlock(content: HandoutContent, width: number, styles: HandoutStyle
   return stack([badge.block, textItem(title)], gap);
 }
 
-/** The header block, `width` millimetres wide. */
-export function headerBlock(content: HandoutContent, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
+/**
+ * The header block, `width` millimetres wide; who the numbers are for in the body size, or in
+ * the list size when the page sets every outcome's sentences so (`small`).
+ */
+export function headerBlock(
+  content: HandoutContent,
+  width: number,
+  styles: HandoutStyles,
+  measure: MeasureWidth,
+  small = false,
+): Block {
   const gap = lineHeight(styles.body) * 0.35;
   const title = titleBlock(content, width, styles, measure, gap);
-  const audience = textItem(textBlock(content.audience.join(' '), width, styles.body, measure));
+  const audience = textItem(textBlock(content.audience.join(' '), width, small ? styles.list : styles.body, measure));
   const body = stack([title, audience], gap);
   const ruleGap = gap * 0.8;
   return {

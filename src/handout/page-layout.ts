@@ -10,17 +10,11 @@ import { handoutStyles } from './handout-styles.ts';
 import type { HandoutStyles } from './handout-styles.ts';
 import { headerBlock } from './header-block.ts';
 import type { HandoutPart } from './messages/en.ts';
-import { type Block, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
-import {
-  bulletsBlock,
-  headingBlock,
-  paragraphsBlock,
-  runInParagraph,
-  section,
-  shadedBox,
-  writingLines,
-} from './section-blocks.ts';
-import { picturesBlock } from './pictures-block.ts';
+import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
+import { bulletsBlock, headingBlock, runInParagraph, section, shadedBox, writingLines } from './section-blocks.ts';
+import { columnsOf, picturesBlock } from './pictures-block.ts';
+import { outcomeWords, twoColumnWords, wordsGaps } from './outcome-words.ts';
+import { tableBlock } from './table-block.ts';
 import { type MeasureWidth, inkDepth, lineHeight, textBlock } from './text-layout.ts';
 
 /** The content box of the page, in millimetres. */
@@ -52,11 +46,36 @@ const COLUMN_GUTTER = 9;
  */
 const PART_SHARE: Readonly<Record<HandoutPart, number>> = {
   header: 0.14,
-  options: 0.5,
-  outcomes: 0.16,
+  options: 0.3,
+  outcomes: 0.36,
   evidence: 0.08,
   questions: 0.12,
 };
+
+/**
+ * What the page draws besides the words. Pictures are drawn for every outcome or for none:
+ * a side effect's pictures at the same scale as the benefit's (Trevena et al. 2013: the same
+ * denominator and format for every outcome compared), and never the benefit's alone, which
+ * would give it more weight on the page than the harms (the IPDAS certification criterion of
+ * equal detail). When the pictures of every outcome do not fit, even at the ladder's smallest
+ * cells, the page keeps every outcome's sentences and the table, and leaves all pictures out.
+ */
+export interface PageMode {
+  readonly pictures: boolean;
+  /** The enlarged block of 100 beside each picture of 1000. */
+  readonly closeUps: boolean;
+  /**
+   * The last resort for many options and outcomes: every outcome's sentences, benefits and
+   * harms alike, at the list size (never below 9 pt, the EU leaflet minimum) rather than leaving
+   * any outcome's detail out; without pictures, the table is left out too.
+   */
+  readonly small?: boolean;
+  /**
+   * With `small` and no pictures, the sentences flow into two columns: a line of about 60
+   * characters rather than 120 at the list size (common practice for legible print).
+   */
+  readonly columns?: boolean;
+}
 
 /** Two blocks side by side, each half the width less the gutter. */
 function sideBySide(left: Block, right: Block, width: number): Block {
@@ -143,7 +162,7 @@ function footBlock(
 const MOST_EXTRA_GAP = 5;
 
 /**
- * Lay out the page in `box` with `settings`; measure text with `measure` (the
+ * Lay out the page in `box` with `settings` and `mode`; measure text with `measure` (the
  * embedded font's metrics).
  */
 export function layoutPage(
@@ -152,26 +171,60 @@ export function layoutPage(
   box: PageBox,
   palette: ChartPalette,
   measure: MeasureWidth,
+  mode: PageMode = { pictures: true, closeUps: true },
 ): PageLayout {
   const styles = handoutStyles(settings, palette);
   const width = box.width;
   const heading = (text: string) => headingBlock(text, width, styles, measure);
-  const pictures = picturesBlock(content, width, settings, styles, measure);
-  const header = headerBlock(content, width, styles, measure);
-  const picturesSection = pictures.ok ? section(heading(content.chart.heading), pictures.block) : { items: [], height: 0 };
-  const sentences = section(heading(content.sentencesHeading), paragraphsBlock(content.paragraphs, width, styles.body, measure));
+  const header = headerBlock(content, width, styles, measure, mode.small === true && !mode.pictures);
+  const firstModel = content.outcomes[0]?.pictures.model;
+  const columns = columnsOf(content.titles.length, firstModel?.denominator ?? 100, width);
+  const pictureSections = mode.pictures
+    ? content.outcomes.map((outcome, index) =>
+        picturesBlock(
+          mode.closeUps ? outcome.pictures : { ...outcome.pictures, closeUp: null },
+          content.titles,
+          index === 0 ? content.keyIntro : null,
+          width,
+          settings,
+          styles,
+          measure,
+        ),
+      )
+    : [];
+  const refused = pictureSections.find((found) => !found.ok);
+  const setting = { pictures: mode.pictures, small: mode.small === true };
+  const words = content.outcomes.map((outcome) => outcomeWords(outcome, setting, width, styles, measure));
+  const allWords =
+    mode.columns === true
+      ? twoColumnWords(content.outcomes, setting, width, COLUMN_GUTTER, styles, measure)
+      : stack(words, wordsGaps(setting, styles).outcome);
+  // With pictures, each outcome's sentences sit under its own pictures, and the captions carry the
+  // numbers a table would repeat; without them, the table sets the outcomes side by side (band words
+  // with the numbers beside them) before every outcome's sentences, unless the page is too tight.
+  const outcomeBlocks = mode.pictures
+    ? content.outcomes.map((outcome, index) => {
+        const found = pictureSections[index];
+        const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
+        return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
+      })
+    : [
+        setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
+        section(heading(content.sentencesHeading), allWords),
+      ];
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);
 
-  const mainOf = (gap: number) => stack([header, picturesSection, sentences, prompts], gap);
+  const mainOf = (gap: number) => stack([header, ...outcomeBlocks, prompts], gap);
   const needed = mainOf(settings.space).height + settings.space + foot.height;
 
-  const rows = content.table.sections.reduce((sum, found) => sum + found.rows.length, 0);
-  const outcomesShare = picturesSection.height * (rows / (rows + 4));
+  // The first outcome's part is the options' share; every other outcome's and the table are the outcomes'.
+  const outcomesHeight = stack(outcomeBlocks, settings.space).height;
+  const firstHeight = mode.pictures ? (outcomeBlocks[0]?.height ?? 0) : (words[0]?.height ?? 0);
   const partHeights: Record<HandoutPart, number> = {
     header: header.height,
-    options: picturesSection.height - outcomesShare + sentences.height,
-    outcomes: outcomesShare,
+    options: firstHeight,
+    outcomes: outcomesHeight - firstHeight,
     evidence: foot.height / 3,
     questions: prompts.height,
   };
@@ -180,11 +233,12 @@ export function layoutPage(
     overBudget(part) > overBudget(found) ? part : found,
   );
 
-  if (!pictures.ok || needed > box.height) {
-    return { items: [], fits: false, needed, tooLong: pictures.ok ? worst : pictures.part, parts: partHeights };
+  if (refused !== undefined && !refused.ok) {
+    return { items: [], fits: false, needed, tooLong: refused.part, parts: partHeights };
   }
+  if (needed > box.height) return { items: [], fits: false, needed, tooLong: worst, parts: partHeights };
   // Share the spare height between the gaps, a little each, and leave the rest above the caution.
-  const gaps = 3;
+  const gaps = 1 + outcomeBlocks.length;
   const extra = Math.min(MOST_EXTRA_GAP, (box.height - needed) / (gaps + 1));
   const main = mainOf(settings.space + extra);
   const items = [...placeBlock(main, box.x, box.y), ...placeBlock(foot, box.x, box.y + box.height - foot.height)];

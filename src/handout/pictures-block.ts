@@ -1,16 +1,16 @@
 /**
- * The headline outcome's pictures with every outcome lined up under them: the
- * render module's chart frame on the right (one array per option, same size,
- * drawn by its PDF renderer), the key to the figures on the left, under each
- * picture its option's numbers in words, and below, one row per other outcome
- * with each option's number straight under that option's picture.
+ * One outcome's pictures: the render module's chart frame on the right (one array
+ * per option, same size, drawn by its PDF renderer), the key to the figures on the
+ * left, and under each picture its option's numbers in words. Every outcome's
+ * pictures use the same columns and the same cell size, so a side effect's pictures
+ * are at the same scale as the benefit's.
  */
 import { chartFrame } from '../render/chart-frame.ts';
 import type { ChartFrame, FrameText } from '../render/chart-frame.ts';
 import type { IconArrayLayout } from '../render/icon-array-layout.ts';
 import type { MeasureText } from '../render/text/measure-text.ts';
 import type { FitSettings } from './fit-settings.ts';
-import type { HandoutContent, TableCell } from './handout-content.ts';
+import type { OutcomePictures } from './outcome-sections.ts';
 import type { HandoutStyles } from './handout-styles.ts';
 import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
 import { type MeasureWidth, POINTS_PER_MM, type TextBlock, type TextStyle, lineHeight, textBlock } from './text-layout.ts';
@@ -19,7 +19,7 @@ import { type MeasureWidth, POINTS_PER_MM, type TextBlock, type TextStyle, lineH
 export type PicturesBlock = { readonly ok: true; readonly block: Block } | { readonly ok: false; readonly part: 'options' };
 
 /** Padding left and right of table text, in millimetres. */
-const PAD_X = 1.8;
+export const PAD_X = 1.8;
 /** Space between a caption and the edges of its slot, in millimetres. */
 const CAPTION_PAD = 2;
 /** Tolerance for a line that ends exactly at its column edge, in millimetres. */
@@ -54,7 +54,7 @@ function overflows(block: FrameText, right: number, measure: MeasureText): boole
 }
 
 /** A text block with each line centred in `width`. */
-function centred(text: string, width: number, style: TextStyle, measure: MeasureWidth): TextBlock {
+export function centred(text: string, width: number, style: TextStyle, measure: MeasureWidth): TextBlock {
   const block = textBlock(text, width, style, measure);
   return {
     ...block,
@@ -62,40 +62,20 @@ function centred(text: string, width: number, style: TextStyle, measure: Measure
   };
 }
 
-/** A cell's value, broken after its band word ("very common:" / "13 in 100") when it needs two lines. */
-function cellValue(text: string, width: number, style: TextStyle, measure: MeasureWidth): TextBlock {
-  const split = text.indexOf(': ');
-  if (split === -1 || measure(text, style.size, style.bold) <= width) return centred(text, width, style, measure);
-  const first = centred(text.slice(0, split + 1), width, style, measure);
-  const second = centred(text.slice(split + 2), width, style, measure);
-  return {
-    ...first,
-    lines: [...first.lines, ...second.lines.map((line) => ({ ...line, y: line.y + first.height }))],
-    height: first.height + second.height,
-    width: Math.max(first.width, second.width),
-  };
-}
-
-function cellBlock(cell: TableCell, width: number, styles: HandoutStyles, measure: MeasureWidth): Block {
-  const value = cellValue(cell.value, width, styles.tableBold, measure);
-  if (cell.note === null) return textItem(value);
-  const note = centred(cell.note, width, styles.tableNote, measure);
-  return { items: [...textItem(value).items, ...textItem(note, 0, value.height).items], height: value.height + note.height };
-}
-
 /** The key: what each look of figure means, each line led by a figure drawn as in the pictures. */
 function keyBlock(
-  content: HandoutContent,
+  pictures: OutcomePictures,
+  keyIntro: string | null,
   width: number,
   gridTop: number,
   bottom: number,
   styles: HandoutStyles,
   measure: MeasureWidth,
 ): Block {
-  const glyph = content.chart.model.arrays[0]?.layout.geometry.glyph ?? 'person';
+  const glyph = pictures.model.arrays[0]?.layout.geometry.glyph ?? 'person';
   const size = lineHeight(styles.list) * 1.05;
   const indent = size + 2;
-  const rows = content.chart.key.map((entry) => {
+  const rows = pictures.key.map((entry) => {
     const text = textBlock(entry.text, width - indent, styles.list, measure);
     const height = Math.max(size, text.height);
     const items: PageItem[] = [
@@ -104,7 +84,7 @@ function keyBlock(
     ];
     return { items, height };
   });
-  const intro = textItem(textBlock(content.chart.keyIntro, width, styles.listMuted, measure));
+  const intro = keyIntro === null ? EMPTY_BLOCK : textItem(textBlock(keyIntro, width, styles.listMuted, measure));
   const block = stack([intro, ...rows], lineHeight(styles.list) * 0.3);
   // Level with the top of the pictures, or raised beside the option names when taller than the pictures and captions.
   const top = Math.max(0, Math.min(gridTop, bottom - block.height));
@@ -196,24 +176,46 @@ interface PlacedPicture {
   readonly width: number;
 }
 
-/** The pictures, key and outcome rows, `width` millimetres wide. */
+/** The columns every outcome's pictures and the table share: the label column, then one equal slot per option. */
+export interface Columns {
+  readonly labelWidth: number;
+  readonly slot: number;
+}
+
+/** The columns for `count` options on pictures of `denominator`, `width` millimetres wide. */
+export function columnsOf(count: number, denominator: number, width: number): Columns {
+  const labelWidth = width * labelShare(count, denominator);
+  return { labelWidth, slot: (width - labelWidth) / Math.max(1, count) };
+}
+
+/** The left edge of option `index`'s slot. */
+export function slotLeft(columns: Columns, index: number): number {
+  return columns.labelWidth + index * columns.slot;
+}
+
+/**
+ * One outcome's pictures with the option names over them, the key beside them and
+ * the captions under them, `width` millimetres wide.
+ *
+ * @param keyIntro - what one figure is, before the key (the first outcome's only), or null
+ */
 export function picturesBlock(
-  content: HandoutContent,
+  pictures: OutcomePictures,
+  titleTexts: readonly string[],
+  keyIntro: string | null,
   width: number,
   settings: FitSettings,
   styles: HandoutStyles,
   measure: MeasureWidth,
 ): PicturesBlock {
-  const PAD_Y = settings.rowPadding;
-  const model = content.chart.model;
+  const model = pictures.model;
   const first = model.arrays[0];
   const count = model.arrays.length;
   if (first === undefined) return { ok: true, block: { items: [], height: 0 } };
   const measureMm = chartMeasure(measure);
-  const labelWidth = width * labelShare(count, model.denominator);
-  // Each option has an equal slot: its picture centred in it, its caption and table cells across it.
-  const slot = (width - labelWidth) / count;
-  const slotLeft = (index: number) => labelWidth + index * slot;
+  const columns = columnsOf(count, model.denominator, width);
+  const { labelWidth, slot } = columns;
+  const left = (index: number) => slotLeft(columns, index);
   const fontSize = settings.chartText / POINTS_PER_MM;
   // chartFrame's own margin is half an em on each side of its one array.
   const margin = fontSize * 0.5;
@@ -231,13 +233,13 @@ export function picturesBlock(
   }
   // The option names as column headings across their slots, bottom-aligned over the pictures.
   const titleStyle: TextStyle = { ...styles.tableBold, size: settings.chartText * 1.05 };
-  const titles = content.chart.titles.map((title) => centred(title, slot - 2 * CAPTION_PAD, titleStyle, measure));
+  const titles = titleTexts.map((title) => centred(title, slot - 2 * CAPTION_PAD, titleStyle, measure));
   const titlesHeight = Math.max(0, ...titles.map((title) => title.height));
   const gridOf = (frame: ChartFrame) => frame.arrays[0]?.grid.y ?? 0;
   const gridTop = titlesHeight + Math.max(...frames.map(gridOf));
-  const pictures: PlacedPicture[] = frames.map((frame, index) => ({
+  const placed: PlacedPicture[] = frames.map((frame, index) => ({
     frame,
-    x: slotLeft(index) + (slot - frameWidth) / 2,
+    x: left(index) + (slot - frameWidth) / 2,
     y: gridTop - gridOf(frame),
     width: frameWidth,
   }));
@@ -246,13 +248,13 @@ export function picturesBlock(
   const gridBottom = gridTop + (firstFrame.arrays[0]?.grid.layout.geometry.height ?? 0);
 
   // Under each picture, its option's two frames in words, across its slot, and for 1000 people the enlarged block.
-  const closeUp = content.chart.closeUp;
-  const captions = content.chart.captions.map((caption, index) => {
+  const closeUp = pictures.closeUp;
+  const captions = pictures.captions.map((caption, index) => {
     const layout = closeUp?.layouts[index];
     const enlarged = closeUp === null || layout === undefined ? null : { layout, label: closeUp.label };
     return underPicture(
       caption,
-      content.chart.notes[index] ?? null,
+      pictures.notes[index] ?? null,
       enlarged,
       slot - 2 * CAPTION_PAD,
       model.wanted,
@@ -262,9 +264,9 @@ export function picturesBlock(
     );
   });
   const captionsBottom = picturesBottom + Math.max(0, ...captions.map((caption) => caption.height));
-  const key = keyBlock(content, labelWidth - PAD_X, gridTop, Math.max(gridBottom, captionsBottom), styles, measure);
+  const key = keyBlock(pictures, keyIntro, labelWidth - PAD_X, gridTop, Math.max(gridBottom, captionsBottom), styles, measure);
   const items: PageItem[] = [
-    ...pictures.map((picture, index): PageItem => ({
+    ...placed.map((picture, index): PageItem => ({
       kind: 'chart',
       x: picture.x,
       y: picture.y,
@@ -274,59 +276,17 @@ export function picturesBlock(
       fontSize,
     })),
     ...key.items,
-    ...titles.flatMap((title, index) => textItem(title, slotLeft(index) + CAPTION_PAD, titlesHeight - title.height).items),
+    ...titles.flatMap((title, index) => textItem(title, left(index) + CAPTION_PAD, titlesHeight - title.height).items),
   ];
   if (closeUp !== null) {
-    pictures.forEach((picture) => {
+    placed.forEach((picture) => {
       const grid = picture.frame.arrays[0]?.grid;
       if (grid !== undefined)
         items.push(blockOutline(grid.layout, closeUp.block, picture.x + grid.x, picture.y + grid.y, styles.colours.text));
     });
   }
-
-  captions.forEach((caption, index) => items.push(...placeBlock(caption, slotLeft(index) + CAPTION_PAD, picturesBottom)));
-  // The key may run on beside the captions; the table starts below both.
-  let top = Math.max(captionsBottom, key.height + lineHeight(styles.list) * 0.3);
-  if (content.table.sections.length === 0 && content.table.noSideEffects === null) {
-    return { ok: true, block: { items, height: top } };
-  }
-
-  top += lineHeight(styles.list) * 0.45;
-  items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.strongRule, thickness: 0.4 });
-
-  const cellWidth = slot - 2 * PAD_X;
-  const cellLeft = (index: number) => slotLeft(index) + PAD_X;
-  const row = (blocks: readonly { readonly block: Block; readonly x: number }[], shaded: boolean) => {
-    const height = Math.max(...blocks.map((cell) => cell.block.height)) + 2 * PAD_Y;
-    if (shaded) items.push({ kind: 'box', x: 0, y: top, width, height, fill: styles.colours.shade, radius: 0 });
-    for (const cell of blocks) items.push(...placeBlock(cell.block, cell.x, top + PAD_Y));
-    top += height;
-  };
-  for (const part of content.table.sections) {
-    if (part.heading !== null) {
-      const heading = textBlock(part.heading, width - 2 * PAD_X, { ...styles.tableBold, colour: styles.colours.muted }, measure);
-      top += PAD_Y * 0.5;
-      row([{ block: textItem(heading), x: PAD_X }], false);
-      items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.rule, thickness: 0.25 });
-    }
-    part.rows.forEach((found, index) => {
-      const label = textBlock(found.outcome, labelWidth - 2 * PAD_X, found.isHeadline ? styles.tableBold : styles.table, measure);
-      row(
-        [
-          { block: textItem(label), x: PAD_X },
-          ...found.cells.map((cell, column) => ({ block: cellBlock(cell, cellWidth, styles, measure), x: cellLeft(column) })),
-        ],
-        index % 2 === 1,
-      );
-    });
-  }
-  items.push({ kind: 'rule', x: 0, y: top, width, colour: styles.colours.strongRule, thickness: 0.4 });
-  top += 0.4;
-  if (content.table.noSideEffects !== null) {
-    const note = textBlock(content.table.noSideEffects, width, styles.listMuted, measure);
-    top += PAD_Y;
-    items.push(...textItem(note, 0, top).items);
-    top += note.height;
-  }
-  return { ok: true, block: { items, height: top } };
+  captions.forEach((caption, index) => items.push(...placeBlock(caption, left(index) + CAPTION_PAD, picturesBottom)));
+  // The key may run on beside the captions.
+  const height = Math.max(captionsBottom, key.height + lineHeight(styles.list) * 0.3);
+  return { ok: true, block: { items, height } };
 }

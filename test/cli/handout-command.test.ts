@@ -70,7 +70,7 @@ describe('chancewise handout', () => {
     expect(result.code).toBe(0);
     const text = pdfText(path);
     expect(text).toContain('Prepared by Dr A. Patel, Riverside Surgery');
-    expect(text).toMatch(/NNTB \d+: treating \d+ people like you/);
+    expect(text).toMatch(/NNTB \d+ \(NNTB \d+ to \d+\): treating \d+ people like you/);
     expect(text).toContain('Every number on this sheet is out of 1000 people');
   });
 
@@ -159,7 +159,7 @@ describe('chancewise handout with the choices a topic file keeps', () => {
     // US Letter, 8.5 × 11 inches = 612 × 792 points.
     expect(pageSize(path)).toBe('612 x 792 pts (letter)');
     const text = pdfText(path);
-    expect(text).toMatch(/NNTB \d+: treating \d+ people like you/);
+    expect(text).toMatch(/NNTB \d+ \(NNTB \d+ to \d+\): treating \d+ people like you/);
     expect(text).toContain('Every number on this sheet is out of 1000 people');
   });
 

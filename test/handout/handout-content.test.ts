@@ -18,62 +18,82 @@ describe('the content of a handout', () => {
   const { topic, result } = firstDemo();
   const content = handoutContent(result, topic, options);
   const headline = headlineOutcome(result);
+  const section = content.outcomes[0];
+  if (section === undefined) throw new Error('no outcome section');
   const wording = handoutSentences(result, { showNnt: false }).filter((sentence) => sentence.outcomeId === headline.outcomeId);
 
-  it('shows the headline outcome, one picture per option, the comparison first', () => {
-    expect(headline.isHeadline).toBe(true);
-    expect(content.chart.model.arrays.map((array) => array.optionId)).toEqual(['as-now', 'water', 'citrate']);
-    expect(content.chart.titles).toEqual(['No change', 'Extra water each day', 'A citrate drink twice a day']);
+  it('gives every outcome a section, the headline first, then side effects, one picture per option, the comparison first', () => {
+    expect(content.outcomes.map((outcome) => outcome.outcomeId)).toEqual(['stone', 'night', 'stomach']);
+    expect(section.pictures.model.arrays.map((array) => array.optionId)).toEqual(['as-now', 'water', 'citrate']);
+    expect(content.titles).toEqual(['No change', 'Extra water each day', 'A citrate drink twice a day']);
+    expect(content.outcomes.map((outcome) => outcome.heading)).toEqual([
+      'Chance of another kidney stone over 5 years',
+      'Side effect: chance of broken sleep from passing urine at night over 5 years',
+      'Side effect: chance of an upset stomach bad enough to stop over 5 years',
+    ]);
   });
 
   it('leaves the pictures themselves unchanged: the same people in the same places as the chart', () => {
-    const chart = outcomeChart(result, headline.outcomeId);
-    expect(content.chart.model.arrays.map((array) => array.layout)).toEqual(chart.arrays.map((array) => array.layout));
-    expect(content.chart.model.arrays.every((array) => array.title === '' && array.labels.length === 0)).toBe(true);
+    for (const outcome of content.outcomes) {
+      const chart = outcomeChart(result, outcome.outcomeId);
+      expect(outcome.pictures.model.arrays.map((array) => array.layout)).toEqual(chart.arrays.map((array) => array.layout));
+      expect(outcome.pictures.model.arrays.every((array) => array.title === '' && array.labels.length === 0)).toBe(true);
+      // Every outcome's pictures are of the same number of people.
+      expect(outcome.pictures.model.denominator).toBe(result.denominator);
+    }
   });
 
   it('captions each picture with its option’s two frames from the wording, in the pictures’ order', () => {
-    content.chart.model.arrays.forEach((array, index) => {
+    section.pictures.model.arrays.forEach((array, index) => {
       const frames = wording.filter((sentence) => sentence.optionId === array.optionId && sentence.kind.endsWith('frame'));
       expect(frames.map((sentence) => sentence.kind)).toEqual(['event-frame', 'free-frame']);
-      expect(content.chart.captions[index]).toBe(frames.map((sentence) => sentence.text).join(' '));
+      expect(section.pictures.captions[index]).toBe(frames.map((sentence) => sentence.text).join(' '));
     });
   });
 
-  it('states in each caption the counts the picture draws', () => {
-    content.chart.model.arrays.forEach((array, index) => {
-      const having = array.groups.event + array.groups.caused;
-      const caption = content.chart.captions[index] ?? '';
-      expect(caption).toContain(`about ${having} in ${result.denominator}`);
-      expect(caption).toContain(`About ${result.denominator - having} will not.`);
-    });
+  it('states in each caption the counts the picture draws, for side effects as for the benefit', () => {
+    for (const outcome of content.outcomes) {
+      outcome.pictures.model.arrays.forEach((array, index) => {
+        const having = array.groups.event + array.groups.caused;
+        const caption = outcome.pictures.captions[index] ?? '';
+        expect(caption).toContain(`about ${having} in ${result.denominator}`);
+        expect(caption).toContain(`About ${result.denominator - having} will not.`);
+      });
+    }
   });
 
-  it('keeps every other headline sentence of the wording, a paragraph per option, the ranges’ one level after the last', () => {
+  it('keeps every other sentence of each outcome, a paragraph per option, the ranges’ one level after the sheet’s last', () => {
     const rest = wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.text);
-    expect(content.paragraphs.flat()).toEqual([...rest.slice(0, -1), 'Each range is a 95% interval.', ...rest.slice(-1)]);
-    expect(content.paragraphs).toHaveLength(2);
-    expect(new Set(wording.filter((sentence) => !sentence.kind.endsWith('frame')).map((sentence) => sentence.kind))).toEqual(
-      new Set(['change', 'range', 'certainty']),
-    );
+    expect(section.paragraphs.flat()).toEqual(rest);
+    expect(section.paragraphs.map((paragraph) => paragraph.length)).toEqual([0, 3, 3]);
+    const last = content.outcomes.at(-1)?.paragraphs.at(-1) ?? [];
+    expect(last).toContain('Each range is a 95% interval.');
+    expect(
+      content.outcomes.flatMap((outcome) => outcome.paragraphs.flat()).filter((text) => text.includes('interval.')),
+    ).toHaveLength(1);
   });
 
-  it('adds the number needed to treat only when asked', () => {
-    expect(content.paragraphs.flat().some((text) => text.startsWith('NNTB'))).toBe(false);
+  it('adds the number needed to treat, with its interval, only when asked', () => {
+    expect(section.paragraphs.flat().some((text) => text.startsWith('NNTB'))).toBe(false);
     const withNnt = handoutContent(result, topic, { ...options, showNnt: true });
-    expect(withNnt.paragraphs.flat().filter((text) => text.startsWith('NNTB'))).toHaveLength(2);
+    const lines = withNnt.outcomes[0]?.paragraphs.flat().filter((text) => text.startsWith('NNTB')) ?? [];
+    expect(lines).toHaveLength(2);
+    // Another stone: 40% × RR 0.6 (0.45 to 0.8) = 24% (18% to 32%): difference 0.16 (0.08 to 0.22), NNTB
+    // 1/0.16 = 6.25 → 7, interval 1/0.22 = 4.5 → 5 and 1/0.08 = 12.5 → 13 (Altman 1998, rounded up).
+    expect(lines[0]).toMatch(/^NNTB 7 \(NNTB 5 to 13\): treating 7 people like you/);
   });
 
-  it('lists every sentence it took from the wording: who the numbers are for, the frames, then the rest', () => {
-    const population = handoutSentences(result, { showNnt: false }).filter((sentence) => sentence.kind === 'population');
+  it('lists every sentence it took from the wording: who the numbers are for, then each outcome’s', () => {
+    const all = handoutSentences(result, { showNnt: false });
+    const population = all.filter((sentence) => sentence.kind === 'population');
     expect(content.wordingSentences[0]).toBe(population[0]?.text);
-    expect(content.wordingSentences).toHaveLength(1 + wording.length);
-    expect(new Set(content.wordingSentences)).toEqual(new Set([...population, ...wording].map((sentence) => sentence.text)));
+    expect(content.wordingSentences).toHaveLength(all.length);
+    expect(new Set(content.wordingSentences)).toEqual(new Set(all.map((sentence) => sentence.text)));
   });
 
-  it('puts every other outcome in the table, its cells in the order of the pictures', () => {
-    const rows = content.table.sections.flatMap((section) => section.rows);
-    expect(rows.map((row) => row.outcomeId)).toEqual(['night', 'stomach']);
+  it('puts every outcome in the table, benefits then side effects, its cells in the order of the pictures', () => {
+    const rows = content.table.sections.flatMap((found) => found.rows);
+    expect(rows.map((row) => row.outcomeId)).toEqual(['stone', 'night', 'stomach']);
     for (const row of rows) expect(row.cells).toHaveLength(3);
   });
 
@@ -81,17 +101,28 @@ describe('the content of a handout', () => {
   // Very common is ≥ 1/10 in the same guideline. Demo: broken sleep 15% with no change, RR 1.6 with
   // extra water → 24%, RR 1 with the citrate drink → 15%; an upset stomach 5%, RR 1 → 5%, and
   // OR 2.6 → 2.6 × 0.05 / (0.95 + 0.13) = 12.04% with the citrate drink (derived).
-  it('gives each side effect its frequency band with the number beside the word', () => {
-    const [night, stomach] = content.table.sections.flatMap((section) => section.rows);
+  it('gives each side effect its frequency band with the numbers with and without and the change beside the word', () => {
+    const [, night, stomach] = content.table.sections.flatMap((found) => found.rows);
     expect(night?.cells.map((cell) => cell.value)).toEqual([
       'very common: 15 in 100',
       'very common: 24 in 100',
       'very common: 15 in 100',
     ]);
+    expect(night?.cells.map((cell) => cell.change)).toEqual([null, '9 more', 'no change']);
     expect(stomach?.cells.map((cell) => cell.value)).toEqual(['common: 5 in 100', 'common: 5 in 100', 'very common: 12 in 100']);
+    expect(stomach?.cells.map((cell) => cell.change)).toEqual([null, 'no change', '7 more']);
     expect(night?.cells.map((cell) => cell.note)).toEqual([null, 'low certainty', 'low certainty']);
     expect(stomach?.cells.map((cell) => cell.note)).toEqual([null, 'very low certainty', 'moderate certainty']);
-    expect(content.table.sections.map((section) => section.heading)).toEqual(['Side effects: how common they are']);
+    expect(content.table.sections.map((found) => found.heading)).toEqual([
+      'What the options aim to lower',
+      'Side effects: how common they are',
+    ]);
+  });
+
+  it('asks what matters by naming the benefit and the side effects that add the most people', () => {
+    expect(content.matters.prompt).toBe(
+      'How much does avoiding another kidney stone matter to you? Weigh it against the chance of broken sleep from passing urine at night or an upset stomach bad enough to stop. Write it here to talk about.',
+    );
   });
 
   // Trevena et al. 2013 (IPDAS update): avoid "1 in X" formats; only the sheet's one denominator follows "1 in".

@@ -85,10 +85,10 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
   const result = computeTopic(topic);
   const content = handoutContent(result, topic, options);
 
-  // A conversion happens in sight: the evidence line says the starting chance was given for another period.
-  it('says on the evidence line that the starting chance was worked out for 15 years from 10', () => {
-    expect(content.evidence.items).toContain(
-      'Your starting chance of dying of bowel cancer was given for 10 years; it was worked out for 15 years, assuming the chance stays steady over time.',
+  // A conversion happens in sight: the line under the outcome's sentences says the starting chance was given for another period.
+  it('says where the numbers are read that the starting chance was worked out for 15 years from 10', () => {
+    expect(content.outcomes[0]?.assumptions[0]).toBe(
+      'Your starting chance of dying of bowel cancer was given for 10 years. It was worked out for 15 years, assuming it stays steady.',
     );
   });
 
@@ -96,7 +96,7 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
   // with HR 0.8, 1 − (1 − 0.0298)^0.8 = 2.39%, 24 in 1000 (Altman & Andersen 1999, BMJ 319:1492).
   it('enlarges block 0, which holds the 6 people screening helps, in both pictures', () => {
     expect(result.denominator).toBe(1000);
-    const closeUp = content.chart.closeUp;
+    const closeUp = content.outcomes[0]?.pictures.closeUp;
     expect(closeUp?.block).toBe(0);
     expect(closeUp?.layouts.map((layout) => layout.groups)).toEqual([
       { denominator: 100, event: 30, prevented: 0, caused: 0, free: 70 },
@@ -105,14 +105,15 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
     expect(closeUp?.label).toBe('The outlined 100 people, enlarged');
   });
 
-  it.each(['a4', 'letter'] as const)('prints the enlarged block, labelled, on one page of %s', (paper) => {
+  // Pictures are printed for every outcome or for none (PageMode): never the benefit's alone.
+  it.each(['a4', 'letter'] as const)('prints on one page of %s, with every outcome’s pictures or none', (paper) => {
     const handout = buildHandout(result, topic, { ...options, paper }, testFonts());
     if (!handout.ok) throw new Error(handout.message);
     const path = writePdf(handout.pdf);
     expect(pdfInfo(path).Pages).toBe('1');
     const text = pdfText(path);
-    expect(text.match(/The outlined 100 people, enlarged/g)).toHaveLength(2);
-    expect(text).toContain('Each picture shows 1000 people like you.');
+    const headings = text.match(/Chance of dying of bowel cancer over 15 years|Side effect: chance of/g) ?? [];
+    expect(headings).toHaveLength(handout.pictures ? 3 : 0);
   });
 
   // The bleed: 5 in 10,000 without (rare), 5 + 10 = 15 in 10,000 with screening (uncommon).
@@ -122,8 +123,9 @@ describe('the screening demo’s handout (pictures of 1000)', () => {
     expect(bleed?.cells.map((cell) => cell.value)).toEqual(['rare: 5 in 10,000', 'uncommon: 15 in 10,000']);
     const camera = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'camera');
     expect(camera?.cells.map((cell) => cell.value)).toEqual(['common: 10 in 1000', 'common: 90 in 1000']);
-    expect(content.audience.at(-1)).toBe(
-      'Every number on this sheet is out of 1000 people unless it says otherwise, over the next 15 years.',
+    expect(content.audience.at(-1)).toBe('Every number on this sheet is out of 1000 people, over the next 15 years.');
+    expect(content.table.rareNote).toBe(
+      'A rare side effect’s row counts out of more people, as it says, so that the word and the number agree.',
     );
   });
 });
@@ -134,20 +136,20 @@ describe('a rare outcome’s handout: baseline 0.1%, HR 0.8 (0.7 to 0.9)', () =>
   const content = handoutContent(result, topic, options);
 
   it('says beside the picture that the difference is below one person of 1000, per 10,000', () => {
-    expect(content.chart.notes).toEqual([
+    expect(content.outcomes[0]?.pictures.notes).toEqual([
       null,
       'Fewer than 1 in 1000: about 2 in 10,000 fewer have a serious bleed with the tablet, too few to show as a whole person here.',
     ]);
   });
 
   it('enlarges the block holding the one person in 1000 with a bleed, as no one differs in the pictures', () => {
-    expect(content.chart.closeUp?.block).toBe(0);
-    expect(content.chart.closeUp?.layouts.map((layout) => layout.groups.event)).toEqual([1, 1]);
+    expect(content.outcomes[0]?.pictures.closeUp?.block).toBe(0);
+    expect(content.outcomes[0]?.pictures.closeUp?.layouts.map((layout) => layout.groups.event)).toEqual([1, 1]);
   });
 
   // The rash: 3 in 10,000 without (rare); RR 2 gives 6 in 10,000 (rare). The table uses the words' 10,000.
   it('writes the table and the sheet at the words’ denominator, 10,000, with the pictures at 1000', () => {
-    const rash = content.table.sections[0]?.rows[0];
+    const rash = content.table.sections[1]?.rows[0];
     expect(rash?.cells.map((cell) => cell.value)).toEqual(['rare: 3 in 10,000', 'rare: 6 in 10,000']);
     expect(content.audience.at(-1)).toBe(
       'The pictures show 1000 people; every other number is out of 10,000, over the next 5 years.',
@@ -162,7 +164,7 @@ describe('a rare outcome’s handout: baseline 0.1%, HR 0.8 (0.7 to 0.9)', () =>
     expect(text).not.toMatch(/same number/i);
     expect(text).not.toContain('between 1 and 1 ');
     expect(text).toContain('about 2 in 10,000 fewer have a serious bleed');
-    expect(text).toContain('That range is a 95% interval.');
+    expect(text).toContain('Each range is a 95% interval.');
   });
 });
 
@@ -172,7 +174,7 @@ describe('a 90% topic', () => {
     const handout = buildHandout(computeTopic(topic), topic, options, testFonts());
     if (!handout.ok) throw new Error(handout.message);
     const text = pdfText(writePdf(handout.pdf));
-    expect(text).toContain('That range is a 90% interval.');
+    expect(text).toContain('Each range is a 90% interval.');
     expect(text).not.toContain('95%');
   });
 });

@@ -24,13 +24,16 @@ const topic = wantedTopic();
 const result = computeTopic(topic);
 /** Words that say a good event is a harm to avoid (the failure this guards against). */
 const HARM_WORDS = /\b(avoids?|avoided|causes?|caused|prevents?|risks?)\b/i;
+/** The names of the topic's wanted outcomes: only sentences about them must never read as harms. */
+const WANTED = ['pain gone by day 3', 'a return to usual activities'];
+const aboutWanted = (sentence: string) => WANTED.some((name) => sentence.toLowerCase().includes(name));
 
 describe('the content of a wanted-event handout', () => {
   const content = handoutContent(result, topic, options);
 
   it('draws the people who gain the event in the helped look, and keys them as gaining it', () => {
-    expect(content.chart.model.wanted).toBe(true);
-    expect(content.chart.key).toEqual([
+    expect(content.outcomes[0]?.pictures.model.wanted).toBe(true);
+    expect(content.outcomes[0]?.pictures.key).toEqual([
       { group: 'event', look: 'event', text: 'People who have it' },
       { group: 'caused', look: 'helped', text: 'People who gain it because of the option' },
       { group: 'free', look: 'free', text: 'People who do not have it' },
@@ -39,7 +42,7 @@ describe('the content of a wanted-event handout', () => {
 
   it('heads the other wanted outcomes as ones the options aim to make more likely', () => {
     expect(content.table.sections.map((section) => section.heading)).toEqual([
-      'Other outcomes the options aim to make more likely',
+      'What the options aim to make more likely',
       'Side effects: how common they are',
     ]);
   });
@@ -52,9 +55,9 @@ describe('the content of a wanted-event handout', () => {
 
   it('takes sentences that never say avoid, cause, prevent or risk of the good event', () => {
     expect(content.wordingSentences.length).toBeGreaterThan(3);
-    for (const sentence of content.wordingSentences) expect(sentence).not.toMatch(HARM_WORDS);
-    // NNTB = 1 / (0.45 − 0.25) = 5 (Altman 1998, BMJ 317:1309).
-    expect(content.wordingSentences.some((sentence) => sentence.startsWith('NNTB 5:'))).toBe(true);
+    for (const sentence of content.wordingSentences.filter(aboutWanted)) expect(sentence).not.toMatch(HARM_WORDS);
+    // NNTB = 1 / (0.45 − 0.25) = 5 (Altman 1998, BMJ 317:1309), with its interval.
+    expect(content.wordingSentences.some((sentence) => /^NNTB 5 \(NNTB \d+ to \d+\):/.test(sentence))).toBe(true);
   });
 });
 
@@ -65,16 +68,17 @@ describe('the printed wanted-event handout', () => {
 
   it('prints the key, the NNT line and the table in words for a good event', () => {
     for (const words of [
-      'People who gain it because of the option',
-      'Other outcomes the options aim to make more likely',
-      'NNTB 5: treating 5 people like you with tablet B for 3 days',
+      ...(built.pictures ? ['People who gain it because of the option'] : []),
+      'treating 5 people like you with tablet B for 3 days',
       'over the next 3 days',
     ]) {
       expect(text).toContain(words);
     }
   });
 
-  it('prints no word of avoiding, causing, preventing or risk', () => {
-    expect(text).not.toMatch(HARM_WORDS);
+  it('prints no word of avoiding, causing, preventing or risk about the good events', () => {
+    const sentences = text.split(/(?<=[.?])\s+/).filter(aboutWanted);
+    expect(sentences.length).toBeGreaterThan(3);
+    for (const sentence of sentences) expect(sentence).not.toMatch(HARM_WORDS);
   });
 });

@@ -97,16 +97,30 @@ export interface WordingMessages {
       readonly direction: 'reduce' | 'increase';
     },
   ) => string;
-  /** A frequency band word with its number beside it. */
+  /** A frequency band word with the numbers with and without the option, and the change, beside it. */
   readonly band: (
-    values: OptionValues & { readonly band: FrequencyBand; readonly amount: Amount; readonly denominator: number },
+    values: OptionValues & {
+      readonly band: FrequencyBand;
+      readonly amount: Amount;
+      readonly denominator: number;
+      /** The comparison option's name and its people with the outcome. */
+      readonly comparison: string;
+      readonly comparisonAmount: Amount;
+      readonly direction: ChangeDirection;
+      /** People more or fewer with the option (0 when `same`). */
+      readonly count: number;
+    },
   ) => string;
-  /** Number needed to treat, for benefit (NNTB) or harm (NNTH). */
+  /** Number needed to treat, for benefit (NNTB) or harm (NNTH), with its interval in Altman's (1998) form. */
   readonly nnt: (
     values: OptionValues & {
       readonly label: 'NNTB' | 'NNTH';
       readonly count: number;
       readonly group: string;
+      /** "NNTB 13 to 100", "NNTB 4 to ∞ to NNTH 20", or null when the effect has no interval. */
+      readonly interval: string | null;
+      /** The interval reaches or crosses no difference. */
+      readonly crossesNoEffect: boolean;
     } & PeriodValues,
   ) => string;
   /** No number needed to treat exists because the option makes no difference. */

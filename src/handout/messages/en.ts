@@ -8,7 +8,7 @@ import { duration } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
 import type { PersonGroup } from '../../core/types.ts';
-import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
+import type { Amount, ChangeDirection, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
 
 /** The parts of a handout the clinician can shorten when it does not fit. */
 export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'questions';
@@ -19,11 +19,26 @@ export interface SheetValues {
   readonly denominator: number;
   /** The words' and table's denominator: the pictures', or 10,000 up to a million for a rare outcome. */
   readonly wordsDenominator: number;
-  /** Some side effects are written out of more people than the words' denominator, so band and number agree. */
-  readonly rareRows: boolean;
   readonly years: number;
   /** The unit the topic's period was given in. */
   readonly unit: TimeUnit;
+}
+
+/** What the values prompt is built from: the headline benefit and the main side effects' names. */
+export interface PromptValues {
+  readonly benefit: string;
+  /** The benefit is an event people want ("a pain-free throat"). */
+  readonly wanted: boolean;
+  /** The main side effects, most added people first; empty when the topic has none. */
+  readonly harms: readonly string[];
+}
+
+/** The change an option makes in a table cell, as people of the row's denominator. */
+export interface CellChange {
+  readonly direction: ChangeDirection;
+  readonly count: number;
+  /** When the counts show no change: the direction of a difference smaller than one person, or null when it is exactly 0. */
+  readonly hidden: 'fewer' | 'more' | null;
 }
 
 /** Whether the other benefit rows are events the options aim to make less likely, more likely, or both. */
@@ -49,20 +64,31 @@ export interface HandoutMessages {
   readonly tableCell: (amount: Amount, denominator: number) => string;
   /** A side effect's cell: its frequency band with the number beside the word. */
   readonly bandCell: (band: FrequencyBand, amount: Amount, denominator: number) => string;
+  /** Under an option's number in the table: the change it makes ("40 more"). */
+  readonly tableChange: (change: CellChange) => string;
   readonly certaintyShort: Readonly<Record<Certainty, string>>;
+  /** Over a side effect's pictures: the chart's heading said to be about a side effect. */
+  readonly sideEffectHeading: (heading: string) => string;
+  /** Before an outcome's sentences: its name, and whether it is a side effect. */
+  readonly outcomeLabel: (outcome: string, kind: 'benefit' | 'harm') => string;
   /** After the sentences with ranges: the level of the interval they are, for one range or `count` of them. */
   readonly rangeLevel: (level: number, count: number) => string;
   /** Under the enlarged block of 100 of a picture of 1000. */
   readonly closeUpLabel: string;
   readonly noSideEffects: string;
+  /** Under the table when a rare side effect's row counts out of more people, so its band word and number agree. */
+  readonly rareRowsNote: string;
   readonly evidenceHeading: string;
   readonly evidenceSummary: (summary: string) => string;
   readonly evidenceReviewed: (reviewed: string) => string;
   readonly baselineSource: (outcome: string, source: string) => string;
   /** The starting chance was given over another period and worked out for the sheet's: "…over 10 years, worked out for 15 years…". */
   readonly baselineConverted: (outcome: string, from: string, to: string) => string;
+  /** An effect applied beyond its trials' follow-up: "The research on screening lasted 12 years; …". */
+  readonly beyondFollowUp: (option: string, followUp: string, period: string) => string;
   readonly mattersHeading: string;
-  readonly mattersPrompt: string;
+  /** The values prompt, built from the topic's benefit and main side effects. */
+  readonly mattersPrompt: (values: PromptValues) => string;
   readonly questionsHeading: string;
   readonly defaultQuestions: readonly string[];
   readonly cautionHeading: string;
@@ -145,10 +171,9 @@ export const handoutMessagesEn: HandoutMessages = {
   paperName: { a4: 'A4', letter: 'US Letter' },
   illustrativeBadge: 'Illustrative example: invented numbers',
   numbersFor: (values) => {
-    const otherwise = values.rareRows ? ' unless it says otherwise' : '';
     return values.wordsDenominator === values.denominator
-      ? `Every number on this sheet is out of ${formatCount(values.denominator)} people${otherwise}, over ${period(values)}.`
-      : `The pictures show ${formatCount(values.denominator)} people; every other number is out of ${formatCount(values.wordsDenominator)}${otherwise}, over ${period(values)}.`;
+      ? `Every number on this sheet is out of ${formatCount(values.denominator)} people, over ${period(values)}.`
+      : `The pictures show ${formatCount(values.denominator)} people; every other number is out of ${formatCount(values.wordsDenominator)}, over ${period(values)}.`;
   },
   keyIntro: ({ denominator }) => `Each picture shows ${denominator} people like you. Each figure is one person.`,
   keyGroups: {
@@ -166,14 +191,18 @@ export const handoutMessagesEn: HandoutMessages = {
   sentencesHeading: 'What the numbers mean',
   tableBenefitRows: (aim) =>
     aim === 'lower'
-      ? 'Other outcomes the options aim to lower'
+      ? 'What the options aim to lower'
       : aim === 'raise'
-        ? 'Other outcomes the options aim to make more likely'
-        : 'Other outcomes the options aim to change',
+        ? 'What the options aim to make more likely'
+        : 'What the options aim to change',
   tableHarmRows: 'Side effects: how common they are',
   tableCell: amountCell,
   bandCell: (band, amount, denominator) =>
     band === 'not-known' ? amountCell(amount, denominator) : `${bandWords[band]}: ${amountCell(amount, denominator)}`,
+  tableChange: ({ direction, count, hidden }) => {
+    if (direction !== 'same') return `${formatCount(count)} ${direction}`;
+    return hidden === null ? 'no change' : `under 1 ${hidden}`;
+  },
   certaintyShort: {
     high: 'high certainty',
     moderate: 'moderate certainty',
@@ -181,7 +210,10 @@ export const handoutMessagesEn: HandoutMessages = {
     'very-low': 'very low certainty',
   },
   rangeLevel: (level, count) => `${count === 1 ? 'That range is' : 'Each range is'} a ${formatPercent(level)} interval.`,
+  sideEffectHeading: (heading) => `Side effect: ${heading.charAt(0).toLowerCase()}${heading.slice(1)}`,
+  outcomeLabel: (outcome, kind) => `${capitalise(outcome)}${kind === 'harm' ? ' (side effect)' : ''}.`,
   closeUpLabel: 'The outlined 100 people, enlarged',
+  rareRowsNote: 'A rare side effect’s row counts out of more people, as it says, so that the word and the number agree.',
   noSideEffects: 'No side effects were entered for this sheet. Ask your clinician about them.',
   evidenceHeading: 'Where these numbers come from:',
   evidenceSummary: (summary) => {
@@ -198,9 +230,18 @@ export const handoutMessagesEn: HandoutMessages = {
     return `Your starting chance of ${outcome} comes from: ${trimmed}.`;
   },
   baselineConverted: (outcome, from, to) =>
-    `Your starting chance of ${outcome} was given for ${from}; it was worked out for ${to}, assuming the chance stays steady over time.`,
+    `Your starting chance of ${outcome} was given for ${from}. It was worked out for ${to}, assuming it stays steady.`,
+  beyondFollowUp: (option, followUp, period) =>
+    `The research on ${option} lasted ${followUp}. The numbers for ${period} assume its effect carries on.`,
   mattersHeading: 'What matters most to you',
-  mattersPrompt: 'Think about what is most important to you in this choice. Write it here to talk about.',
+  mattersPrompt: ({ benefit, wanted, harms }) => {
+    const aim = wanted ? `a better chance of ${benefit}` : `avoiding ${benefit}`;
+    const against =
+      harms.length === 0
+        ? 'Weigh it against what each option asks of you.'
+        : `Weigh it against the chance of ${harms.join(harms.length === 2 ? ' or ' : ', ')}.`;
+    return `How much does ${aim} matter to you? ${against} Write it here to talk about.`;
+  },
   questionsHeading: 'Questions you may want to ask',
   defaultQuestions: ['What happens if I wait and decide later?', 'Can I change my mind once I have started?'],
   cautionHeading: 'Please keep in mind:',

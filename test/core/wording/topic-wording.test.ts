@@ -115,7 +115,15 @@ function expectSentenceNumbers(found: WordingSentence, option: OptionOutcomeResu
     else if (role === 'avoided') expect(value, where).toBe(groups.prevented);
     else if (role === 'caused') expect(value, where).toBe(groups.caused);
     else if (role === 'nnt') expect(value, where).toBe(option.nnt.rounded);
-    else if (role === 'from') expect(value, where).toBe(comparison);
+    else if (role.startsWith('nntLimit')) {
+      // Altman (1998): each limit of the NNT is the reciprocal of a limit of the difference, whole.
+      const { lower, upper } = option.absoluteReduction;
+      const limits = [lower, upper].filter((end): end is number => end !== null && end !== 0).map((end) => 1 / Math.abs(end));
+      expect(
+        limits.some((limit) => Math.abs(limit - value) < 1 + 1e-9),
+        where,
+      ).toBe(true);
+    } else if (role === 'from') expect(value, where).toBe(comparison);
     else if (role === 'to') expect(value, where).toBe(withOutcome);
     else if (role === 'percent')
       expect(value, where).toBe(Math.abs(halfAway((1 - (option.relativeRisk?.estimate ?? NaN)) * 100)));

@@ -44,9 +44,11 @@ describe('a wanted event made more likely (25% by day 3, risk ratio 1.8, 1.4 to 
     );
   });
 
+  // 0.45 − 0.25 = 0.2 (0.1 to 0.325) more with pain relief: NNTB 5, interval 1/0.325 = 3.1 and 1/0.1 = 10,
+  // each rounded up for a benefit (Altman 1998, BMJ 317:1309; Cochrane Handbook 5.1 §12.5.4.1).
   it('writes the NNT as a benefit, without "causes"', () => {
     expect(sentences).toContain(
-      'NNTB 5: treating 5 people like you with the drops for 3 days means one more of them has pain relief.',
+      'NNTB 5 (NNTB 4 to 10): treating 5 people like you with the drops for 3 days means one more of them has pain relief.',
     );
   });
 
@@ -75,10 +77,12 @@ describe('a wanted event made less likely', () => {
     }),
   );
 
+  // Difference 0.5 − 0.4 = 0.1 (0.05 to 0.15) fewer with pain relief, a harm: NNTH 1/0.1 = 10, its
+  // interval 1/0.15 = 6.7 and 1/0.05 = 20, each rounded down for a harm (Altman 1998, BMJ 317:1309).
   it('says fewer people have it and labels the NNT a harm', () => {
     expect(sentences).toContain('With the drops, about 10 fewer of those 100 people have pain relief.');
     expect(sentences).toContain(
-      'NNTH 10: treating 10 people like you with the drops for 6 months means one fewer of them has pain relief.',
+      'NNTH 10 (NNTH 6 to 20): treating 10 people like you with the drops for 6 months means one fewer of them has pain relief.',
     );
     expect(sentences).toContain('No treatment: about 50 in 100 people like you will have pain relief in the next 6 months.');
   });
@@ -91,7 +95,7 @@ describe('an unwanted event keeps its words', () => {
     );
     expect(sentences).toContain('With the drops, about 10 of those 100 people avoid pain relief.');
     expect(sentences).toContain(
-      'NNTB 10: treating 10 people like you with the drops for 1 year prevents pain relief in one of them.',
+      'NNTB 10 (NNTB 7 to 20): treating 10 people like you with the drops for 1 year prevents pain relief in one of them.',
     );
   });
 });

@@ -198,16 +198,27 @@ export const wordingMessages: WordingMessages = {
     const verb = hedges[certainty][importance === 'trivial' ? 'trivial' : direction];
     return `${capitalise(option)} ${verb} the chance of ${outcome}.`;
   },
-  band: ({ option, outcome, band, amount, denominator }) =>
-    band === 'not-known'
-      ? `With ${option}, how often ${outcome} happens is not known.`
-      : `With ${option}, ${outcome} is ${bandNames[band]}: ${amountPhrase(amount, denominator)} people.`,
-  nnt: ({ option, outcome, wanted, label, count, group, years, unit }) => {
-    const treating = `${label} ${count}: treating ${count} ${group} with ${option} for ${duration({ years, unit })}`;
+  band: ({ option, outcome, band, amount, denominator, comparison, comparisonAmount, direction, count }) => {
+    if (band === 'not-known') return `With ${option}, how often ${outcome} happens is not known.`;
+    const change = direction === 'same' ? 'the same number' : `${formatCount(count)} ${direction} in ${formatCount(denominator)}`;
+    return `With ${option}, ${outcome} is ${bandNames[band]}: ${amountPhrase(amount, denominator)} people, against ${amountPhrase(comparisonAmount, denominator)} with ${comparison} (${change}).`;
+  },
+  /*
+   * The NNT always carries its interval, in Altman's form (Altman DG 1998, "Confidence intervals for
+   * the number needed to treat", BMJ 317:1309–1312): "NNTB 10 (NNTB 4 to ∞ to NNTH 20)" for an
+   * absolute reduction of 10% with interval −5% to 25%, the example Newcombe RG restates in his
+   * rapid response to the paper (BMJ, 5 January 1999). An interval that crosses no effect is
+   * printed rather than dropped, as Altman argues against showing intervals only for significant
+   * effects, and a plain clause says that the range includes no difference.
+   */
+  nnt: ({ option, outcome, wanted, label, count, group, years, unit, interval, crossesNoEffect }) => {
+    const head = interval === null ? `${label} ${count}` : `${label} ${count} (${interval})`;
+    const treating = `${head}: treating ${count} ${group} with ${option} for ${duration({ years, unit })}`;
+    const range = crossesNoEffect ? ' Its range includes no difference at all.' : '';
     if (wanted) {
-      return `${treating} means one ${label === 'NNTB' ? 'more' : 'fewer'} of them has ${outcome}.`;
+      return `${treating} means one ${label === 'NNTB' ? 'more' : 'fewer'} of them has ${outcome}.${range}`;
     }
-    return `${treating} ${label === 'NNTB' ? 'prevents' : 'causes'} ${outcome} in one of them.`;
+    return `${treating} ${label === 'NNTB' ? 'prevents' : 'causes'} ${outcome} in one of them.${range}`;
   },
   nntNone: ({ option, outcome }) =>
     `There is no number needed to treat: on these numbers, ${option} makes no difference to the chance of ${outcome}.`,

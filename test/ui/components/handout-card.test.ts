@@ -1,0 +1,30 @@
+// @vitest-environment jsdom
+import { cleanup, render, screen } from '@testing-library/svelte';
+import { afterEach, describe, expect, test } from 'vitest';
+import HandoutCard from '../../../src/ui/components/HandoutCard.svelte';
+import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
+import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+
+afterEach(() => cleanup());
+
+const noop = () => undefined;
+
+describe('HandoutCard', () => {
+  // The card says what the printed sheet holds (src/handout/handout-content.ts and page-layout.ts):
+  // every outcome with the same elements, pictures for all outcomes or none, the table, the prompts.
+  test('describes what the handout holds, for benefits and side effects alike', () => {
+    const first = DEMO_TOPICS[0];
+    if (first === undefined) throw new Error('no demonstration topic');
+    const editor = new TopicEditor(draftFromTopic(first.topic));
+    render(HandoutCard, {
+      props: { editor, illustrative: true, handoutBusy: false, desktop: false, onhandout: noop, onprint: noop },
+    });
+    const text = screen.getByRole('region', { name: 'Handout for the patient' }).textContent?.replace(/\s+/g, ' ') ?? '';
+    expect(text).toContain('One printed page, marked illustrative.');
+    expect(text).toContain('For every benefit and side effect alike');
+    expect(text).toContain('with and without each option, the change, its range, how sure the research is');
+    expect(text).toContain('pictures of every outcome when they all fit, else none');
+    expect(text).not.toContain('the same numbers, charts and words');
+  });
+});
