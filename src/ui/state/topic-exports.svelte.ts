@@ -4,7 +4,6 @@
  * made from results that are out of date.
  */
 import type { ChartModel } from '../../render/chart-model.ts';
-import { chartPngFile, chartSvgFile } from '../export/chart-export.ts';
 import { exportFileName, topicPart } from '../files/export-file-names.ts';
 import { loadHandoutMaker, localDate } from '../handout/handout-builder.ts';
 import type { HandoutMaker } from '../handout/handout-builder.ts';
@@ -55,6 +54,8 @@ export class TopicExports {
     const { platform, document } = this.#options;
     const name = exportFileName(this.#topicPart(), model.outcomeName.trim() === '' ? model.id : model.outcomeName, format);
     try {
+      // The export code is loaded on first use, so it stays out of the start-up script.
+      const { chartPngFile, chartSvgFile } = await import('../export/chart-export.ts');
       const saved =
         format === 'svg'
           ? await platform.saveFile(name, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
