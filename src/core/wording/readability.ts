@@ -91,8 +91,8 @@ export interface UserText {
 export function readingWarnings(texts: readonly UserText[], limit: number = READING_GRADE_LIMIT): readonly Notice[] {
   return texts.flatMap(({ field, text }) => {
     const { grade } = readability(text);
+    if (grade === null) return [];
     // Judged on the grade as the warning shows it (one decimal), so no warning reads "grade 8, above grade 8".
-    const shown = grade === null ? null : Math.round(grade * 10) / 10;
-    return shown !== null && shown > limit ? [{ code: 'reading-grade-high', values: { field, grade, limit } }] : [];
+    return Math.round(grade * 10) / 10 > limit ? [{ code: 'reading-grade-high', values: { field, grade, limit } }] : [];
   });
 }
