@@ -1,7 +1,7 @@
 /**
- * The app benchmark: the built app (served by `scripts/web.mjs`) in headless Chromium.
+ * The app benchmark: built apps in headless Chromium.
  *
- * Load: navigation start (the page's time origin) to the demo topic being interactive,
+ * Load: navigation start (the page's time origin) to the topic shown at start being interactive,
  * defined as the first moment a results element (`.results`) holds a drawn people chart
  * (`svg.people-chart [data-outcome]`) and the editor has an enabled input. A
  * MutationObserver installed before any page script notes that moment with
@@ -9,10 +9,16 @@
  * from the next `requestAnimationFrame`). Each run is a fresh browser context (empty
  * cache and storage), and every request is recorded, to show no PDF code is fetched.
  * Along the way: the page's response end, the first script's response end, and the end
- * of DOMContentLoaded (after the module script, which mounts the app, has run).
+ * of DOMContentLoaded (after the module script, which mounts the app, has run). The
+ * renderer main thread's CPU time from the document's start (a mark set before any page
+ * script) to "rendered" comes from a trace of marks, as for the input timing.
+ *
+ * Several builds can be timed in one run (the bench's own build, which starts on the
+ * bench's fixture, beside the production build, which starts on the first example); they
+ * take turns load by load.
  *
  * Input to charts: a topic of one outcome, the comparison and one option (taken from the
- * first example), shown per 1000 people: two arrays of 1000. The time runs from just
+ * bench's fixture), shown per 1000 people: two arrays of 1000. The time runs from just
  * before an `input` event is dispatched on the baseline risk field to the moment the
  * chart's text alternative (updated in the same task as its people) shows the new counts,
  * seen by a MutationObserver, plus a forced layout (`getBoundingClientRect()` and
@@ -24,10 +30,15 @@ import { join } from 'node:path';
 import { summarise } from './statistics.mjs';
 import { MARK_CATEGORIES, markedCpuSpans } from './trace-cpu.mjs';
 
+/** The benchmark's own topic, invented and kept fixed so the figures stay comparable (the examples change). */
+export const BENCH_TOPIC = 'bench/fixtures/bench-topic.chancewise.json';
+
 /** Installed before the page's own scripts: notes when the page first becomes interactive. */
 function watchInteractive() {
   const state = { interactive: null, rendered: null };
   Object.defineProperty(window, 'chancewiseBench', { value: state });
+  // The main thread's CPU clock at these marks gives the load's CPU time (see trace-cpu.mjs).
+  performance.mark('app-load:start');
   const ready = () => {
     const chart = document.querySelector('.results svg.people-chart [data-outcome]');
     const input = document.querySelector('.editor-column input:enabled, .editor-column textarea:enabled');
@@ -37,73 +48,117 @@ function watchInteractive() {
     if (state.interactive !== null || !ready()) return;
     state.interactive = performance.now();
     observer.disconnect();
-    requestAnimationFrame(() => setTimeout(() => (state.rendered = performance.now()), 0));
+    requestAnimationFrame(() =>
+      setTimeout(() => {
+        state.rendered = performance.now();
+        performance.mark('app-load:end');
+      }, 0),
+    );
   });
   observer.observe(document, { childList: true, subtree: true, attributes: true });
 }
 
 /**
+ * One fresh load of `url` in a new browser context: the moments of the load (see above).
  * @param {import('@playwright/test').Browser} browser
  * @param {string} url
- * @param {number} runs
+ * @param {Set<string>} requested
+ * @param {string[]} errors
  */
-export async function timeAppLoad(browser, url, runs) {
-  const interactive = [];
-  const rendered = [];
-  const responseEnd = [];
-  const scriptFetched = [];
-  const contentLoaded = [];
-  const requested = new Set();
-  const errors = [];
-  for (let run = 0; run < runs; run += 1) {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
-    const page = await context.newPage();
-    page.on('request', (request) => requested.add(new URL(request.url()).pathname));
-    page.on('pageerror', (error) => errors.push(String(error)));
-    await page.addInitScript(watchInteractive);
-    await page.goto(url);
-    const times = await page
-      .waitForFunction(
-        () => {
-          const state = /** @type {{ interactive: number | null, rendered: number | null } | undefined} */ (
-            /** @type {unknown} */ (window)['chancewiseBench']
-          );
-          return state !== undefined && state.rendered !== null ? state : null;
-        },
-        undefined,
-        { timeout: 30_000 },
-      )
-      .then((handle) => handle.jsonValue());
-    interactive.push(times.interactive);
-    rendered.push(times.rendered);
-    const navigation = await page.evaluate(() => {
-      const entry = /** @type {PerformanceNavigationTiming | undefined} */ (performance.getEntriesByType('navigation')[0]);
-      const script = performance.getEntriesByType('resource').find((resource) => resource.name.endsWith('.js'));
-      return {
-        responseEnd: entry?.responseEnd ?? null,
-        scriptEnd: script?.responseEnd ?? null,
-        contentLoaded: entry?.domContentLoadedEventEnd ?? null,
-      };
-    });
-    if (navigation.responseEnd !== null) responseEnd.push(navigation.responseEnd);
-    if (navigation.scriptEnd !== null) scriptFetched.push(navigation.scriptEnd);
-    if (navigation.contentLoaded !== null) contentLoaded.push(navigation.contentLoaded);
-    await context.close();
-  }
-  if (errors.length > 0) throw new Error(`the app reported errors while loading: ${errors.join('; ')}`);
-  return {
-    responseEnd: summarise(responseEnd),
-    scriptFetched: summarise(scriptFetched),
-    contentLoaded: summarise(contentLoaded),
-    interactive: summarise(interactive),
-    rendered: summarise(rendered),
-    requested: [...requested].sort(),
-  };
+async function loadOnce(browser, url, requested, errors) {
+  const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+  const page = await context.newPage();
+  page.on('request', (request) => requested.add(new URL(request.url()).pathname));
+  page.on('pageerror', (error) => errors.push(String(error)));
+  await page.addInitScript(watchInteractive);
+  await browser.startTracing(page, { categories: MARK_CATEGORIES });
+  await page.goto(url);
+  const times = await page
+    .waitForFunction(
+      () => {
+        const state = /** @type {{ interactive: number | null, rendered: number | null } | undefined} */ (
+          /** @type {unknown} */ (window)['chancewiseBench']
+        );
+        return state !== undefined && state.rendered !== null ? state : null;
+      },
+      undefined,
+      { timeout: 30_000 },
+    )
+    .then((handle) => handle.jsonValue());
+  const [cpu = null] = markedCpuSpans(await browser.stopTracing(), 'app-load');
+  const navigation = await page.evaluate(() => {
+    const entry = /** @type {PerformanceNavigationTiming | undefined} */ (performance.getEntriesByType('navigation')[0]);
+    const script = performance.getEntriesByType('resource').find((resource) => resource.name.endsWith('.js'));
+    return {
+      responseEnd: entry?.responseEnd ?? null,
+      scriptEnd: script?.responseEnd ?? null,
+      contentLoaded: entry?.domContentLoadedEventEnd ?? null,
+    };
+  });
+  await context.close();
+  return { ...times, cpu, ...navigation };
 }
 
-/** The first example reduced to its headline outcome, the comparison and one option. */
+/**
+ * Time the loads of several built apps, `runs` fresh loads each. The apps take turns, one
+ * load each and each round starting with the next, so a busy moment of the machine falls on
+ * all of them alike.
+ * @param {import('@playwright/test').Browser} browser
+ * @param {Record<string, string>} urls the app's address, by name
+ * @param {number} runs
+ */
+export async function timeAppLoads(browser, urls, runs) {
+  const names = Object.keys(urls);
+  /** @type {Record<string, { interactive: number[], rendered: number[], cpu: number[], responseEnd: number[], scriptFetched: number[], contentLoaded: number[], requested: Set<string> }>} */
+  const collected = {};
+  for (const name of names) {
+    collected[name] = {
+      interactive: [],
+      rendered: [],
+      cpu: [],
+      responseEnd: [],
+      scriptFetched: [],
+      contentLoaded: [],
+      requested: new Set(),
+    };
+  }
+  const errors = [];
+  for (let run = 0; run < runs; run += 1) {
+    // Each round starts with another app, so none always comes first after a context closes.
+    for (const name of names.map((_, at) => names[(at + run) % names.length])) {
+      const into = collected[name];
+      const load = await loadOnce(browser, urls[name], into.requested, errors);
+      into.interactive.push(load.interactive);
+      into.rendered.push(load.rendered);
+      if (load.cpu !== null) into.cpu.push(load.cpu);
+      if (load.responseEnd !== null) into.responseEnd.push(load.responseEnd);
+      if (load.scriptEnd !== null) into.scriptFetched.push(load.scriptEnd);
+      if (load.contentLoaded !== null) into.contentLoaded.push(load.contentLoaded);
+    }
+  }
+  if (errors.length > 0) throw new Error(`the app reported errors while loading: ${errors.join('; ')}`);
+  return Object.fromEntries(
+    names.map((name) => {
+      const into = collected[name];
+      return [
+        name,
+        {
+          responseEnd: summarise(into.responseEnd),
+          scriptFetched: summarise(into.scriptFetched),
+          contentLoaded: summarise(into.contentLoaded),
+          interactive: summarise(into.interactive),
+          rendered: summarise(into.rendered),
+          cpu: summarise(into.cpu),
+          requested: [...into.requested].sort(),
+        },
+      ];
+    }),
+  );
+}
+
+/** The bench's own topic (bench/fixtures/) reduced to its headline outcome, the comparison and one option. */
 export function twoArrayTopic(projectRoot) {
-  const file = JSON.parse(readFileSync(join(projectRoot, 'assets/demo/01-kidney-stone.json'), 'utf8'));
+  const file = JSON.parse(readFileSync(join(projectRoot, BENCH_TOPIC), 'utf8'));
   const topic = file.topic;
   const comparison = topic.options.find((option) => option.isComparison);
   const option = topic.options.find((candidate) => !candidate.isComparison);

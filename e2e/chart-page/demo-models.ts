@@ -1,9 +1,10 @@
 /**
- * The chart models of the check page: the first example topic (invented numbers), each
+ * The chart models of the check page: the bench's own topic (bench/fixtures/, invented
+ * numbers kept fixed, so the checks and the chart benchmark do not move with the examples), each
  * outcome with the comparison and extra water side by side, so every chart has two
  * arrays of the chosen number of people.
  */
-import demoText from '../../assets/demo/01-kidney-stone.json?raw';
+import demoText from '../../bench/fixtures/bench-topic.chancewise.json?raw';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import type { Topic } from '../../src/core/topic/topic.ts';
 import { readTopicFile } from '../../src/core/topic/topic-file.ts';
@@ -13,10 +14,10 @@ import { type ChartModel, outcomeChart } from '../../src/render/chart-model.ts';
 /** The option drawn beside the comparison. */
 export const SHOWN_OPTION = 'water';
 
-/** The example topic as read from its file. */
+/** The check page's topic as read from its file. */
 export function demoTopic(): Topic {
   const reading = readTopicFile(demoText);
-  if (!reading.ok) throw new Error('the first example topic does not read');
+  if (!reading.ok) throw new Error('the check page’s topic does not read');
   return reading.topic;
 }
 
@@ -40,7 +41,7 @@ export function demoChartModels(topic: Topic, per: Denominator): ChartModel[] {
 /** The headline outcome's chart at a given baseline risk. */
 export function headlineChartAt(topic: Topic, per: Denominator, risk: string): ChartModel {
   const headline = topic.outcomes.find((outcome) => outcome.isHeadline) ?? topic.outcomes[0];
-  if (headline === undefined) throw new Error('the example topic has no outcome');
+  if (headline === undefined) throw new Error('the check page’s topic has no outcome');
   const [model] = demoChartModels(withBaseline(topic, headline.id, risk), per);
   if (model === undefined) throw new Error('no chart for the headline outcome');
   return model;

@@ -1,5 +1,5 @@
 /**
- * The people-chart check page: the first example topic per 1000 people (or per 100 with
+ * The people-chart check page: the bench's topic (bench/fixtures/) per 1000 people (or per 100 with
  * `?per=100`), every outcome as the comparison beside extra water. `?palette=black-and-white`
  * draws the print theme, `?range=on` outlines the people who depend on the interval,
  * `?greyscale=on` shows the page through a greyscale filter. Timing hooks for the chart
@@ -45,7 +45,7 @@ const charts = element('charts');
 const bench = element('bench');
 const drawn = demoChartModels(topic, per).map((model) => timedFirstDraw(charts, model, { palette, showRange }));
 const loadDraw = drawn[0]?.sample ?? { total: Number.NaN, script: Number.NaN };
-// Three baselines around the example's 15%, so every redraw moves people between groups.
+// Three baselines around the topic's 15%, so every redraw moves people between groups.
 const redrawModels = ['15%', '20%', '12%'].map((risk) => headlineChartAt(topic, per, risk));
 
 window.chartPage = {

@@ -20,6 +20,8 @@ const words = english.cli;
 export interface MadeHandout {
   readonly pdf: Uint8Array;
   readonly report: (path: string) => string;
+  /** Warnings for stderr (a typed text that reads above the grade target); the handout is still written. */
+  readonly warnings: readonly string[];
 }
 
 /** Why a write failed, in words. */
@@ -87,6 +89,7 @@ export function runHandoutBatch(inputs: readonly string[], folder: string, make:
       return;
     }
     stdout += `${made.report(path)}\n`;
+    stderr += made.warnings.map((line) => `${input}: ${line}\n`).join('');
     written += 1;
   });
   stdout += `${words.batchWritten(written, inputs.length, folder)}\n`;

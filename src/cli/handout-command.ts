@@ -1,4 +1,5 @@
 import packageJson from '../../package.json' with { type: 'json' };
+import { readCalendarDate } from '../core/calendar-date.ts';
 import { english } from '../core/messages/en/index.ts';
 import { TOPIC_LIMITS, type Topic } from '../core/topic/topic.ts';
 import { buildHandout } from '../handout/build-handout.ts';
@@ -14,6 +15,7 @@ import { type MadeHandout, runHandoutBatch } from './handout-batch.ts';
 import { type ParsedArgs, parseArgs, valueOf } from './parse-args.ts';
 import { demoFiles, topicFromArgs } from './topic-input.ts';
 import { UsageError } from './usage-error.ts';
+import { warningSentences } from './warning-sentences.ts';
 
 const words = english.cli;
 
@@ -39,13 +41,8 @@ export function parsePaper(value: string | undefined): Paper {
 
 /** Read --date: a real calendar date written YYYY-MM-DD, 1970 to 2037 (the dates a PDF file from jsPDF can carry). */
 export function parseDate(value: string): string {
-  const found = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value.trim());
-  if (found !== null) {
-    const [year, month, day] = [Number(found[1]), Number(found[2]), Number(found[3])];
-    const calendar = new Date(Date.UTC(year, month - 1, day));
-    const real = calendar.getUTCFullYear() === year && calendar.getUTCMonth() === month - 1 && calendar.getUTCDate() === day;
-    if (real && year >= 1970 && year <= 2037) return value.trim();
-  }
+  const reading = readCalendarDate(value);
+  if (reading.kind === 'date' && reading.year >= 1970 && reading.year <= 2037) return value.trim();
   throw new UsageError(words.dateValue(value));
 }
 
@@ -83,7 +80,11 @@ function handoutOf(parsed: ParsedArgs): (topic: Topic) => MadeHandout {
     );
     if (!built.ok) throw new UsageError(built.message);
     const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
-    return { pdf: built.pdf, report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade) };
+    return {
+      pdf: built.pdf,
+      report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade),
+      warnings: warningSentences(built.readingWarnings).map(words.handoutWarning),
+    };
   };
 }
 
@@ -116,5 +117,5 @@ export function runHandout(args: readonly string[]): CommandOutput {
   if (topic === null) throw new UsageError(words.handoutNeedsTopic());
   const made = make(topic);
   writeOutput(out, made.pdf);
-  return { stdout: `${made.report(out)}\n` };
+  return { stdout: `${made.report(out)}\n`, stderr: made.warnings.map((line) => `${line}\n`).join('') };
 }

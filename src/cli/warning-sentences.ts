@@ -1,4 +1,4 @@
-import { describeNotice } from '../core/messages/describe.ts';
+import { noticeSentences } from '../core/messages/describe.ts';
 import type { Notice } from '../core/types.ts';
 
 /**
@@ -6,5 +6,5 @@ import type { Notice } from '../core/types.ts';
  * differ only in what the sentence does not show would otherwise print the same line twice.
  */
 export function warningSentences(notices: readonly Notice[]): string[] {
-  return [...new Set(notices.map((notice) => describeNotice(notice)))];
+  return noticeSentences(notices);
 }

@@ -55,6 +55,8 @@ export type ProblemCode =
   | 'topic-effect-missing'
   | 'topic-effect-unknown-option'
   | 'topic-effect-on-comparison'
+  | 'date-not-written'
+  | 'date-not-real'
   // files
   | 'file-not-json'
   | 'file-format-unknown'

@@ -7,7 +7,9 @@
 import { jsPDF } from 'jspdf';
 import type { Topic } from '../core/topic/topic.ts';
 import type { TopicResult } from '../core/topic/topic-result.ts';
+import type { Notice } from '../core/types.ts';
 import { type Readability, readability } from '../core/wording/readability.ts';
+import { typedTextWarnings } from '../core/wording/typed-texts.ts';
 import { type ChartPalette, colourPalette } from '../render/palette.ts';
 import { drawPage } from './draw-page.ts';
 import { FIT_LADDER, type FitSettings } from './fit-settings.ts';
@@ -55,6 +57,8 @@ export interface HandoutBuilt {
   readonly wordingSentences: readonly string[];
   /** The prose the readability was computed from, block by block. */
   readonly prose: readonly string[];
+  /** A warning for each typed title, population or question that reads above the grade target (never a refusal). */
+  readonly readingWarnings: readonly Notice[];
 }
 
 /** A handout that does not fit on one page: nothing was drawn. */
@@ -84,6 +88,7 @@ function proseOf(content: HandoutContent, pictures: boolean): string[] {
       ...outcome.paragraphs.filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
       ...outcome.assumptions,
     ]),
+    ...(content.screening?.items ?? []),
     [content.evidence.heading, ...content.evidence.items].join(' '),
     content.matters.prompt,
     ...content.questions.items,
@@ -192,6 +197,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
     wordingSentences: content.wordingSentences,
     prose,
+    readingWarnings: typedTextWarnings(topic),
   };
 }
 

@@ -80,6 +80,7 @@ const STEPS: readonly Partial<FitSettings>[] = [
     rowPadding: 0.7,
   },
   { cell100: 2.8, space: 2, rowPadding: 0.5 },
+  { cell100: 2.5, cell1000: 1.1, closeUpCell: 2, space: 1.5, bodyLeading: 1.2, rowPadding: 0.3 },
 ];
 
 /**

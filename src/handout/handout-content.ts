@@ -7,9 +7,11 @@
 import type { Topic } from '../core/topic/topic.ts';
 import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { handoutSentences } from '../core/wording/topic-wording.ts';
+import { aboutSheetLine, effectSourceGroups } from './about-sheet.ts';
 import type { HandoutMessages } from './messages/en.ts';
 import { type OutcomeSection, outcomeSections } from './outcome-sections.ts';
 import { type OutcomeTable, outcomeTable } from './outcome-table.ts';
+import { type ScreeningSection, screeningSection } from './screening-section.ts';
 import { valuesPrompt } from './values-prompt.ts';
 
 export interface HandoutContent {
@@ -32,6 +34,12 @@ export interface HandoutContent {
   readonly questions: { readonly heading: string; readonly items: readonly string[] };
   readonly caution: { readonly heading: string; readonly text: string };
   readonly footer: { readonly left: string; readonly right: string };
+  /** Where each effect comes from, printed after the evidence; citations, so not scored for readability. */
+  readonly effectSources: string | null;
+  /** The disclosures in one small line: who prepared the topic, funding, interests, review date. */
+  readonly about: string;
+  /** What having the screening test leads to; null when the topic has no screening entries. */
+  readonly screening: ScreeningSection | null;
   /** Every sentence taken from the wording module, in the order printed. */
   readonly wordingSentences: readonly string[];
 }
@@ -106,6 +114,9 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
       ),
       right: [messages.appVersion(options.appVersion), messages.pageOfPages].join(messages.footerSeparator),
     },
+    effectSources: messages.about.effectSources(effectSourceGroups(topic)),
+    about: aboutSheetLine(topic, messages.about, messages.formatDate),
+    screening: screeningSection(topic, result.wordsDenominator, messages.screening),
     wordingSentences: [
       ...population.map((sentence) => sentence.text),
       ...outcomes.flatMap((section) => section.wordingSentences),

@@ -15,6 +15,7 @@ import { bulletsBlock, headingBlock, runInParagraph, section, shadedBox, writing
 import { compactKeyBlock, compactOutcomeRows, compactScale } from './compact-pictures.ts';
 import { columnsOf, picturesBlock } from './pictures-block.ts';
 import { outcomeWords, twoColumnWords, wordsGaps } from './outcome-words.ts';
+import { screeningBlock } from './screening-block.ts';
 import { tableBlock } from './table-block.ts';
 import { type MeasureWidth, inkDepth, lineHeight, textBlock } from './text-layout.ts';
 
@@ -47,8 +48,9 @@ const COLUMN_GUTTER = 9;
  */
 const PART_SHARE: Readonly<Record<HandoutPart, number>> = {
   header: 0.14,
-  options: 0.3,
-  outcomes: 0.36,
+  options: 0.28,
+  outcomes: 0.32,
+  screening: 0.06,
   evidence: 0.08,
   questions: 0.12,
 };
@@ -147,7 +149,13 @@ function footBlock(
     stack(
       [
         runInParagraph(content.caution.heading, content.caution.text, inner, styles.list, measure),
-        runInParagraph(content.evidence.heading, content.evidence.items.join(' '), inner, styles.list, measure),
+        runInParagraph(
+          content.evidence.heading,
+          [...content.evidence.items, content.effectSources ?? ''].join(' ').trim(),
+          inner,
+          styles.list,
+          measure,
+        ),
       ],
       lineHeight(styles.list) * 0.3,
     ),
@@ -159,6 +167,7 @@ function footBlock(
   const rightWidth = measure(content.footer.right, styles.footer.size, false);
   const oneLine = left.width + rightWidth + 8 <= width && left.lines.length === 1;
   const right = textBlock(content.footer.right, width, styles.footer, measure);
+  const about = textItem(textBlock(content.about, width, styles.footer, measure));
   const rightBlock = {
     ...right,
     lines: right.lines.map((line) => ({ ...line, x: width - measure(line.text, styles.footer.size, false) })),
@@ -174,7 +183,8 @@ function footBlock(
     items: [{ kind: 'rule', x: 0, y: 0, width, colour: styles.colours.rule, thickness: 0.25 }],
     height: 0.25,
   };
-  return stack([caution, rule, footer], settings.space * 0.45);
+  // The disclosures are the footer's first line, so they take a line and no gap of their own.
+  return stack([caution, rule, stack([about, footer], 0)], settings.space * 0.45);
 }
 
 /** The most spare space added to each gap between sections, in millimetres. */
@@ -253,10 +263,11 @@ export function layoutPage(
         setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
         section(heading(content.sentencesHeading), allWords),
       ];
+  const screening = screeningBlock(content.screening, width, styles, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);
 
-  const mainOf = (gap: number) => stack([header, ...outcomeBlocks, prompts], gap);
+  const mainOf = (gap: number) => stack([header, ...outcomeBlocks, screening, prompts], gap);
   const needed = mainOf(settings.space).height + settings.space + foot.height;
 
   // The first outcome's part is the options' share; every other outcome's and the table are the outcomes'.
@@ -266,6 +277,7 @@ export function layoutPage(
     header: header.height,
     options: firstHeight,
     outcomes: outcomesHeight - firstHeight,
+    screening: screening.height,
     evidence: foot.height / 3,
     questions: prompts.height,
   };
@@ -279,7 +291,7 @@ export function layoutPage(
   }
   if (needed > box.height) return { items: [], fits: false, needed, tooLong: worst, parts: partHeights };
   // Share the spare height between the gaps, a little each, and leave the rest above the caution.
-  const gaps = 1 + outcomeBlocks.length;
+  const gaps = 1 + outcomeBlocks.length + (screening.height > 0 ? 1 : 0);
   const extra = Math.min(MOST_EXTRA_GAP, (box.height - needed) / (gaps + 1));
   const main = mainOf(settings.space + extra);
   const items = [...placeBlock(main, box.x, box.y), ...placeBlock(foot, box.x, box.y + box.height - foot.height)];

@@ -186,3 +186,37 @@ describe('chancewise handout with the choices a topic file keeps', () => {
     expect(text).not.toContain('out of 1000 people');
   });
 });
+
+describe('chancewise handout warns about typed text that reads above the grade target', () => {
+  it('names the title on stderr, still writes the handout and exits 0', async () => {
+    const input = join(folder, 'hard-title.cwtopic');
+    // "Stones topic (illustrative)": 3 words, 1 + 2 + 4 = 7 syllables, 1 sentence: Flesch–Kincaid grade
+    // 0.39 × 3 + 11.8 × 7 / 3 − 15.59 = 13.1 (Kincaid et al. 1975), above the target of grade 8.
+    writeFileSync(input, shapedTopicFile({ options: 2, outcomes: 2, title: 'Stones topic (illustrative)' }));
+    const path = out('hard-title.pdf');
+    const result = await run(['handout', input, '--out', path, '--date', '2026-12-01']);
+    expect(result.code).toBe(0);
+    expect(result.stderr).toBe(
+      'Warning: The text in the title reads at about grade 13.1, above grade 8. Shorter sentences and everyday words make it easier to read.\n',
+    );
+    expect(result.stdout).toMatch(/^Wrote .*hard-title\.pdf: 1 page, A4/);
+    expect(pdfText(path)).toContain('Stones topic (illustrative)');
+  });
+
+  it('names the population and each question by its number, and says nothing of plain text', async () => {
+    const input = join(folder, 'hard-question.cwtopic');
+    // "Cardiovascular comorbidities necessitate individualised anticoagulation": 5 words of 6 + 5 + 4 + 7 + 7
+    // syllables is far above grade 8 by the same formula; "Can I stop?" is well below it.
+    const hard = 'Cardiovascular comorbidities necessitate individualised anticoagulation.';
+    writeFileSync(
+      input,
+      shapedTopicFile({ options: 2, outcomes: 2, title: 'A plain title', population: hard, questions: ['Can I stop?', hard] }),
+    );
+    const result = await run(['handout', input, '--out', out('hard-question.pdf'), '--date', '2026-12-01']);
+    expect(result.code).toBe(0);
+    const lines = result.stderr.trimEnd().split('\n');
+    expect(lines).toHaveLength(2);
+    expect(lines[0]).toMatch(/^Warning: The text in the population \(who the numbers are for\) reads at about grade \d+\.\d/);
+    expect(lines[1]).toMatch(/^Warning: The text in question 2 reads at about grade \d+\.\d, above grade 8\./);
+  });
+});

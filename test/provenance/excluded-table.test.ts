@@ -59,7 +59,8 @@ const TEXT = /\.(ts|js|mjs|cjs|json|svelte|md|html|css|svg|txt|py|yml)$/;
 function textFiles(folder: string): string[] {
   return readdirSync(folder, { withFileTypes: true }).flatMap((entry) => {
     const path = join(folder, entry.name);
-    if (entry.isDirectory()) return entry.name === 'node_modules' ? [] : textFiles(path);
+    // Build outputs (dist/, never committed) hold minified libraries, whose digits are no data of ours.
+    if (entry.isDirectory()) return entry.name === 'node_modules' || entry.name === 'dist' ? [] : textFiles(path);
     return TEXT.test(entry.name) ? [path] : [];
   });
 }

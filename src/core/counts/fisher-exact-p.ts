@@ -1,5 +1,5 @@
-import jStat from 'jstat';
 import type { ArmCounts } from '../types.ts';
+import { logFactorial } from './log-factorial.ts';
 import { twoByTwoTable } from './two-by-two-table.ts';
 
 /** Relative tolerance for ties between table probabilities, as in R's fisher.test. */
@@ -7,9 +7,9 @@ const TIE_TOLERANCE = 1e-7;
 /** Below this log probability relative to the most likely table, a term is 0 in double precision. */
 const NEGLIGIBLE_LOG = -750;
 /**
- * A first look with log-factorials (jStat's log-gamma): an observed table this far below
+ * A first look with log-factorials (`logFactorial`): an observed table this far below
  * the mode in log probability has p = 0 in double precision. The margin of 1250 beyond
- * NEGLIGIBLE_LOG covers the log-gamma's rounding, a few hundred at most for safe-integer totals.
+ * NEGLIGIBLE_LOG covers the log-factorials' rounding, a few hundred at most for safe-integer totals.
  */
 const SCREEN_LOG = -2000;
 /** Terms more than e⁴⁰ (about 2 × 10¹⁷) times less likely than the observed table change no digit of p. */
@@ -50,10 +50,10 @@ export function fisherExactP(intervention: ArmCounts, comparison: ArmCounts): nu
   const modeGuess = Math.floor(((eventTotal + 1) * (optionTotal + 1)) / (grandTotal + 2));
   const mode = Math.min(highest, Math.max(lowest, modeGuess));
   const logFactorials = (events: number): number =>
-    jStat.factorialln(events) +
-    jStat.factorialln(optionTotal - events) +
-    jStat.factorialln(eventTotal - events) +
-    jStat.factorialln(comparisonTotal - eventTotal + events);
+    logFactorial(events) +
+    logFactorial(optionTotal - events) +
+    logFactorial(eventTotal - events) +
+    logFactorial(comparisonTotal - eventTotal + events);
   if (logFactorials(mode) - logFactorials(observed) < SCREEN_LOG) return 0;
 
   const towardObserved: 1 | -1 = observed >= mode ? 1 : -1;

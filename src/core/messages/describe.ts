@@ -16,3 +16,11 @@ export function describeNotice(notice: Notice, catalogue: Catalogue = english): 
   const render = catalogue.notices[notice.code as NoticeCode];
   return render === undefined ? notice.code : render(notice.values);
 }
+
+/**
+ * The sentences of warnings, in order, each once: two notices whose values differ only in
+ * what the sentence does not show would otherwise give the same line twice.
+ */
+export function noticeSentences(notices: readonly Notice[], catalogue: Catalogue = english): string[] {
+  return [...new Set(notices.map((notice) => describeNotice(notice, catalogue)))];
+}

@@ -10,8 +10,11 @@ export const TOPIC_FORMAT = 'chancewise-topic';
  * of them and reads with their defaults (all events unwanted, periods in years). Version 1
  * files are migrated on reading. Version 4 added the handout's choices (`handout`: `showNnt`,
  * `per`, `outline`, `paper`); a version 2 or 3 file has none and reads without them.
+ * Version 5 added the disclosures (`about`: `preparedBy`, `funding`, `interests`, `reviewBy`)
+ * and the screening section (`screening`: `positiveLeadsTo`, `missedCase`, `overdiagnosis`);
+ * a version 2 to 4 file has neither and reads as it always did.
  */
-export const TOPIC_VERSION = 4;
+export const TOPIC_VERSION = 5;
 
 const text = v.string();
 const years = v.pipe(v.number(), v.finite());
@@ -50,7 +53,15 @@ export const handoutChoicesSchema = v.object({
   paper: v.picklist(['a4', 'letter']),
 });
 
-/** Schema of one topic, as stored (versions 2 to 4; the fields versions 3 and 4 added are optional). */
+/** Schema of the disclosures (version 5). */
+export const disclosuresSchema = v.object({ preparedBy: text, funding: text, interests: text, reviewBy: text });
+
+const chance = v.nullable(v.union([finite, text]));
+
+/** Schema of the screening section (version 5). */
+export const screeningSchema = v.object({ positiveLeadsTo: text, missedCase: chance, overdiagnosis: chance });
+
+/** Schema of one topic, as stored (versions 2 to 5; the fields versions 3 to 5 added are optional). */
 export const topicSchema = v.object({
   title: text,
   population: text,
@@ -84,12 +95,14 @@ export const topicSchema = v.object({
   clinician: v.optional(text, ''),
   patient: v.optional(v.nullable(v.object({ name: text, reference: text })), null),
   handout: v.optional(handoutChoicesSchema),
+  about: v.optional(disclosuresSchema),
+  screening: v.optional(screeningSchema),
 });
 
-/** Schema of a version 2, 3 or 4 file. */
+/** Schema of a version 2, 3, 4 or 5 file. */
 export const topicFileSchema = v.object({
   format: v.literal(TOPIC_FORMAT),
-  version: v.picklist([2, 3, TOPIC_VERSION]),
+  version: v.picklist([2, 3, 4, TOPIC_VERSION]),
   topic: topicSchema,
 });
 

@@ -73,6 +73,36 @@ export interface TopicHandoutChoices {
 /** The choices of a topic that has none stored: no NNT, the core's denominator, no outline, A4. */
 export const DEFAULT_HANDOUT_CHOICES: TopicHandoutChoices = { showNnt: false, per: null, outline: false, paper: 'a4' };
 
+/**
+ * Who made the topic and on what terms, printed in the handout's "About this sheet" line
+ * (version 5 files). Each is free text; an empty one is printed as "not stated".
+ */
+export interface TopicDisclosures {
+  /** Who prepared the topic's numbers and words: a person, team or organisation. */
+  readonly preparedBy: string;
+  /** Who paid for the work. */
+  readonly funding: string;
+  /** Interests (conflicts of interest) of those who prepared it, or "none". */
+  readonly interests: string;
+  /** The date by which the topic is to be checked again, YYYY-MM-DD. */
+  readonly reviewBy: string;
+}
+
+/** The disclosures of a topic that has none stored: every one not stated. */
+export const EMPTY_DISCLOSURES: TopicDisclosures = { preparedBy: '', funding: '', interests: '', reviewBy: '' };
+
+/**
+ * What having a screening test leads to (version 5 files): what a positive result leads to,
+ * and the chances, among people who have the test, of a missed case (a normal result although
+ * the condition is there: false reassurance) and of overdiagnosis (a condition found that would
+ * never have caused harm). Chances are risks as entered ("3 in 1000", "0.3%"); null: not given.
+ */
+export interface TopicScreening {
+  readonly positiveLeadsTo: string;
+  readonly missedCase: RiskInput | null;
+  readonly overdiagnosis: RiskInput | null;
+}
+
 /** A decision topic: everything needed to compute, draw, word and print one decision. */
 export interface Topic {
   /** The decision in one line: "Taking a statin to lower the chance of a heart attack or stroke". */
@@ -97,6 +127,10 @@ export interface Topic {
   readonly patient?: { readonly name: string; readonly reference: string } | null;
   /** The handout's choices (version 4 files); absent: {@link DEFAULT_HANDOUT_CHOICES}. */
   readonly handout?: TopicHandoutChoices;
+  /** Who prepared the topic, funding, interests and review date (version 5 files); absent: none stated. */
+  readonly about?: TopicDisclosures;
+  /** A screening test's consequences (version 5 files); absent: not a screening topic. */
+  readonly screening?: TopicScreening;
 }
 
 /** Limits shared by the editor, the validator and the handout. */
@@ -114,5 +148,7 @@ export const TOPIC_LIMITS = {
   questionLength: 140,
   maxQuestions: 5,
   clinicianLength: 80,
+  disclosureLength: 120,
+  screeningTextLength: 200,
   maxPeriodYears: 100,
 } as const;

@@ -2,15 +2,12 @@ import { computeEffect } from '../compute-effect.ts';
 import { checkArm } from '../counts/check-arm.ts';
 import type { EffectComputation } from '../compute-effect.ts';
 import { parseBaselineRisk } from '../parse-risk.ts';
-import { InputError, problem } from '../problems.ts';
+import { problem } from '../problems.ts';
 import type { Problem } from '../problems.ts';
+import { checkDisclosures, checkScreening } from './check-about.ts';
+import { checkText, collect } from './check-text.ts';
 import { TOPIC_LIMITS } from './topic.ts';
 import type { OptionEffect, Topic, TopicOutcome } from './topic.ts';
-
-function checkText(problems: Problem[], value: string, field: string, what: string, limit: number, required = true): void {
-  if (required && value.trim() === '') problems.push(problem('topic-text-missing', field, { what }));
-  if (value.length > limit) problems.push(problem('topic-text-too-long', field, { what, length: value.length, limit }));
-}
 
 function checkPeriod(problems: Problem[], years: number, field: string): void {
   if (!Number.isFinite(years) || years <= 0) problems.push(problem('period-not-positive', field, { input: String(years) }));
@@ -35,15 +32,6 @@ function checkUnique(
     }
     seen.add(key);
   });
-}
-
-function collect(problems: Problem[], attempt: () => void): void {
-  try {
-    attempt();
-  } catch (error) {
-    if (error instanceof InputError) problems.push(error.problem);
-    else throw error;
-  }
 }
 
 /** Every problem of a topic, and the computations of the effects that could be computed. */
@@ -219,5 +207,7 @@ export function checkTopic(topic: Topic): TopicCheck {
     'topic-duplicate-name',
   );
   outcomes.forEach((outcome, index) => checkOutcome(check, topic, outcome, index));
+  if (topic.about !== undefined) checkDisclosures(problems, topic.about);
+  if (topic.screening !== undefined) checkScreening(problems, topic.screening);
   return check;
 }

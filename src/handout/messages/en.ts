@@ -11,7 +11,7 @@ import type { PersonGroup } from '../../core/types.ts';
 import type { Amount, ChangeDirection, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
 
 /** The parts of a handout the clinician can shorten when it does not fit. */
-export type HandoutPart = 'header' | 'options' | 'outcomes' | 'evidence' | 'questions';
+export type HandoutPart = 'header' | 'options' | 'outcomes' | 'screening' | 'evidence' | 'questions';
 
 /** Values shared by sentences about the whole sheet. */
 export interface SheetValues {
@@ -106,6 +106,10 @@ export interface HandoutMessages {
   readonly doesNotFit: (part: HandoutPart, overMillimetres: number) => string;
   /** A capital first letter, for option names used as column headings. */
   readonly capitalise: (text: string) => string;
+  /** The "About this sheet" line and the sources of the effects. */
+  readonly about: AboutSheetMessages;
+  /** The screening section ("If you have the test:"). */
+  readonly screening: ScreeningMessages;
 }
 
 const MONTHS = [
@@ -160,8 +164,90 @@ const shortenWhat: Readonly<Record<HandoutPart, string>> = {
   header: 'the decision or the description of who the numbers are for',
   options: 'the option names, or compare fewer options',
   outcomes: 'the outcome names, or show fewer outcomes',
-  evidence: 'the evidence summary or the source of the starting chance',
+  evidence: 'the evidence summary, the sources, or the entries about who prepared the topic',
+  screening: 'what a positive result leads to',
   questions: 'the questions, or give fewer of them',
+};
+
+/** The disclosures of a topic as the "About this sheet" line takes them: null when not given. */
+export interface AboutSheetValues {
+  readonly preparedBy: string | null;
+  readonly funding: string | null;
+  readonly interests: string | null;
+  /** The review-by date, already in words. */
+  readonly reviewBy: string | null;
+}
+
+/** One source of effects and what it is the source of (options or outcomes); none listed: all of them. */
+export interface EffectSourceGroup {
+  /** Empty when no source was given. */
+  readonly source: string;
+  readonly of: readonly string[];
+}
+
+/** Words of the sheet's disclosures. */
+export interface AboutSheetMessages {
+  readonly line: (values: AboutSheetValues) => string;
+  /** The sources of the effects in one sentence; null when the topic has no effects. */
+  readonly effectSources: (groups: readonly EffectSourceGroup[]) => string | null;
+}
+
+/** Words of the screening section. */
+export interface ScreeningMessages {
+  readonly heading: string;
+  readonly positive: (leadsTo: string) => string;
+  readonly missedCase: (amount: Amount, denominator: number) => string;
+  readonly overdiagnosis: (amount: Amount, denominator: number) => string;
+}
+
+const NOT_STATED = 'not stated';
+
+/** Text as typed, ending without its full stop (the sentence adds its own). */
+const unstopped = (text: string): string => text.trim().replace(/[.!?]+$/, '');
+
+const aboutSheetMessagesEn: AboutSheetMessages = {
+  line: ({ preparedBy, funding, interests, reviewBy }) =>
+    [
+      'About this sheet.',
+      `Written by: ${unstopped(preparedBy ?? NOT_STATED)}.`,
+      `Funding: ${unstopped(funding ?? NOT_STATED)}.`,
+      `Interests: ${unstopped(interests ?? NOT_STATED)}.`,
+      `Review by: ${reviewBy ?? NOT_STATED}.`,
+    ].join(' '),
+  effectSources: (groups) => {
+    if (groups.length === 0) return null;
+    const parts = groups.map(({ source, of }) => {
+      const named = source === '' ? NOT_STATED : source;
+      return of.length === 0 ? named : `${named} (${of.join('; ')})`;
+    });
+    return `The effects come from: ${parts.join('; ')}.`;
+  },
+};
+
+/** "About 3 in 1,000 people", "Fewer than 1 in 1,000 people": the start of a screening sentence. */
+const peopleStart = (amount: Amount, denominator: number): string => {
+  const of = formatCount(denominator);
+  switch (amount.kind) {
+    case 'none':
+      return `None of ${of} people`;
+    case 'fewer-than-one':
+      return `Fewer than 1 in ${of} people`;
+    case 'about':
+      return `About ${formatCount(amount.count)} in ${of} people`;
+    case 'nearly-all':
+      return `Nearly all of ${of} people`;
+    case 'all':
+      return `All of ${of} people`;
+  }
+};
+
+const screeningMessagesEn: ScreeningMessages = {
+  heading: 'If you have the test:',
+  positive: (leadsTo) => `a positive result leads to ${unstopped(leadsTo)}.`,
+  missedCase: (amount, denominator) =>
+    `${peopleStart(amount, denominator)} who have the test are told all is well, but they do have the illness. This is a missed case.`,
+  overdiagnosis: (amount, denominator) =>
+    `${peopleStart(amount, denominator)} who have the test are found to have an illness that would never have harmed them. This is overdiagnosis.`,
 };
 
 /** English handout wording. */
@@ -265,4 +351,6 @@ export const handoutMessagesEn: HandoutMessages = {
   doesNotFit: (part, overMillimetres) =>
     `The handout does not fit on one page (about ${Math.max(1, Math.ceil(overMillimetres))} mm too long): shorten ${shortenWhat[part]}.`,
   capitalise,
+  about: aboutSheetMessagesEn,
+  screening: screeningMessagesEn,
 };

@@ -5,10 +5,10 @@
  * unchanged.
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
-import { DEFAULT_HANDOUT_CHOICES, TOPIC_LIMITS } from '../../core/topic/topic.ts';
-import type { TopicHandoutChoices } from '../../core/topic/topic.ts';
-import { blankEffect } from './topic-draft.ts';
-import type { EffectDraft, OptionDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
+import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES, TOPIC_LIMITS } from '../../core/topic/topic.ts';
+import type { TopicDisclosures, TopicHandoutChoices } from '../../core/topic/topic.ts';
+import { EMPTY_SCREENING, blankEffect } from './topic-draft.ts';
+import type { EffectDraft, OptionDraft, OutcomeDraft, ScreeningDraft, TopicDraft } from './topic-draft.ts';
 
 /** Fields of the topic itself that hold text. */
 export type TopicTextField =
@@ -269,7 +269,19 @@ export function blankDraft(): TopicDraft {
     patientName: '',
     patientReference: '',
     handout: DEFAULT_HANDOUT_CHOICES,
+    about: EMPTY_DISCLOSURES,
+    screening: EMPTY_SCREENING,
   };
+}
+
+/** Set one of the disclosures: who prepared the topic, funding, interests, the review-by date. */
+export function setDisclosure(draft: TopicDraft, field: keyof TopicDisclosures, value: string): TopicDraft {
+  return { ...draft, about: { ...draft.about, [field]: value } };
+}
+
+/** Set one entry of the screening section. */
+export function setScreening(draft: TopicDraft, field: keyof ScreeningDraft, value: string): TopicDraft {
+  return { ...draft, screening: { ...draft.screening, [field]: value } };
 }
 
 /** Change one of the handout's choices (kept with the topic). */

@@ -1,9 +1,9 @@
 import { amountIn } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
-import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
-import type { OptionEffect, Topic, TopicOutcome } from '../../core/topic/topic.ts';
+import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES } from '../../core/topic/topic.ts';
+import type { OptionEffect, RiskInput, Topic, TopicOutcome } from '../../core/topic/topic.ts';
 import { numberText } from './number-text.ts';
-import { blankEffect } from './topic-draft.ts';
+import { EMPTY_SCREENING, blankEffect } from './topic-draft.ts';
 import type { EffectDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
 
 const optionalNumber = (value: number | null | undefined): string =>
@@ -58,13 +58,16 @@ function outcomeDraft(outcome: TopicOutcome): OutcomeDraft {
     kind: outcome.kind,
     wanted: outcome.wanted === true,
     isHeadline: outcome.isHeadline,
-    baselineRisk: risk === null ? '' : typeof risk === 'number' ? numberText(risk) : risk,
+    baselineRisk: riskText(risk),
     baselinePeriodYears: periodText(outcome.baseline.periodYears, outcome.baseline.periodUnit ?? 'years'),
     baselinePeriodUnit: outcome.baseline.periodUnit ?? 'years',
     baselineSource: outcome.baseline.source,
     effects: outcome.effects.map(effectDraft),
   };
 }
+
+/** A risk as the editor shows it: as typed, or a stored proportion as its number. */
+const riskText = (risk: RiskInput | null): string => (risk === null ? '' : typeof risk === 'number' ? numberText(risk) : risk);
 
 /** The editor's copy of a topic, every number as text. */
 export function draftFromTopic(topic: Topic): TopicDraft {
@@ -83,5 +86,14 @@ export function draftFromTopic(topic: Topic): TopicDraft {
     patientName: topic.patient?.name ?? '',
     patientReference: topic.patient?.reference ?? '',
     handout: topic.handout ?? DEFAULT_HANDOUT_CHOICES,
+    about: topic.about ?? EMPTY_DISCLOSURES,
+    screening:
+      topic.screening === undefined
+        ? EMPTY_SCREENING
+        : {
+            positiveLeadsTo: topic.screening.positiveLeadsTo,
+            missedCase: riskText(topic.screening.missedCase),
+            overdiagnosis: riskText(topic.screening.overdiagnosis),
+          },
   };
 }

@@ -4,8 +4,9 @@
  */
 import * as v from 'valibot';
 import { MEASURES } from '../../core/effect-measures.ts';
-import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
-import { handoutChoicesSchema } from '../../core/topic/topic-schema.ts';
+import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES } from '../../core/topic/topic.ts';
+import { disclosuresSchema, handoutChoicesSchema } from '../../core/topic/topic-schema.ts';
+import { EMPTY_SCREENING } from './topic-draft.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
 const text = v.string();
@@ -62,6 +63,9 @@ export const topicDraftSchema = v.object({
   patientReference: text,
   // Drafts stored before the handout's choices were kept read with the defaults.
   handout: v.optional(handoutChoicesSchema, DEFAULT_HANDOUT_CHOICES),
+  // Drafts stored before the disclosures and the screening section read with them empty.
+  about: v.optional(disclosuresSchema, EMPTY_DISCLOSURES),
+  screening: v.optional(v.object({ positiveLeadsTo: text, missedCase: text, overdiagnosis: text }), EMPTY_SCREENING),
 });
 
 /** The draft in `data`, or null when it is not a whole draft. */

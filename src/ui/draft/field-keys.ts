@@ -98,6 +98,11 @@ function outcomeFieldKey(draft: TopicDraft, index: number, rest: string): string
   return outcomeKey(outcome.id, 'name');
 }
 
+/** The fields of the disclosures and the screening section: their keys are the core's paths. */
+export const ABOUT_KEYS = ['about.preparedBy', 'about.funding', 'about.interests', 'about.reviewBy'] as const;
+export const SCREENING_KEYS = ['screening.positiveLeadsTo', 'screening.missedCase', 'screening.overdiagnosis'] as const;
+const OWN_PATHS: ReadonlySet<string> = new Set([...ABOUT_KEYS, ...SCREENING_KEYS]);
+
 /** Every field key in the order the editor shows the fields, top to bottom. */
 export function fieldOrder(draft: TopicDraft): string[] {
   const order = [
@@ -126,6 +131,8 @@ export function fieldOrder(draft: TopicDraft): string[] {
     'clinician',
     'questions',
     ...draft.questions.map((_, place) => `questions.${place}`),
+    ...ABOUT_KEYS,
+    ...SCREENING_KEYS,
   );
   return order;
 }
@@ -141,6 +148,7 @@ export function fieldKeyForPath(path: string, draft: TopicDraft, questionPlaces:
   if (path === 'title' || path === 'population' || path === 'periodYears' || path === 'clinician') return path;
   if (path === 'evidence.summary' || path === 'evidence.reviewed') return path;
   if (path === 'options' || path === 'outcomes' || path === 'questions') return path;
+  if (OWN_PATHS.has(path)) return path;
   const question = /^questions\.(\d+)$/.exec(path);
   if (question !== null) {
     const place = questionPlaces[Number(question[1])];

@@ -5,7 +5,7 @@
  * switching the comparison back and forth loses nothing.
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
-import type { Certainty, Importance, TopicHandoutChoices } from '../../core/topic/topic.ts';
+import type { Certainty, Importance, TopicDisclosures, TopicHandoutChoices } from '../../core/topic/topic.ts';
 import type { EffectMeasure } from '../../core/types.ts';
 
 /** The measures an effect can be entered in: the core's five, or a trial's own counts. */
@@ -72,7 +72,21 @@ export interface TopicDraft {
   readonly patientReference: string;
   /** How the handout and charts are made; kept in the topic's file. */
   readonly handout: TopicHandoutChoices;
+  /** Who prepared the topic, funding, interests and the review-by date, as typed. */
+  readonly about: TopicDisclosures;
+  /** A screening test's consequences, as typed; all empty for a topic that is not about screening. */
+  readonly screening: ScreeningDraft;
 }
+
+/** The screening section as typed: the chances are risks as text ("3 in 1000", "0.3%"), empty when not given. */
+export interface ScreeningDraft {
+  readonly positiveLeadsTo: string;
+  readonly missedCase: string;
+  readonly overdiagnosis: string;
+}
+
+/** The screening section of a topic that has none. */
+export const EMPTY_SCREENING: ScreeningDraft = { positiveLeadsTo: '', missedCase: '', overdiagnosis: '' };
 
 /** A blank effect of one option, as a new outcome or option starts. */
 export function blankEffect(optionId: string): EffectDraft {

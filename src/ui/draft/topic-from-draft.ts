@@ -14,10 +14,10 @@ import type { Problem } from '../../core/problems.ts';
 import { yearsFrom } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
-import type { OptionEffect, Topic, TopicHandoutChoices, TopicOutcome } from '../../core/topic/topic.ts';
+import type { OptionEffect, Topic, TopicDisclosures, TopicHandoutChoices, TopicOutcome } from '../../core/topic/topic.ts';
 import type { Effect } from '../../core/types.ts';
 import { blankEffect } from './topic-draft.ts';
-import type { EffectDraft, OutcomeDraft, TopicDraft } from './topic-draft.ts';
+import type { EffectDraft, OutcomeDraft, ScreeningDraft, TopicDraft } from './topic-draft.ts';
 
 /** A topic built from a draft, and the problems found while reading its numbers. */
 export interface DraftReading {
@@ -156,6 +156,24 @@ function readOutcome(reader: Reader, draft: OutcomeDraft, index: number, effectO
   };
 }
 
+/** The disclosures, left out while every one is empty, so a topic without them reads back as it was. */
+function aboutField(about: TopicDisclosures): { about?: TopicDisclosures } {
+  return Object.values(about).every((value) => value.trim() === '') ? {} : { about: { ...about } };
+}
+
+/** The screening section, left out while nothing of it is typed; an empty chance is not given (null). */
+function screeningField(screening: ScreeningDraft): Pick<Topic, 'screening'> {
+  if (Object.values(screening).every((value) => value.trim() === '')) return {};
+  const chance = (text: string) => (text.trim() === '' ? null : text);
+  return {
+    screening: {
+      positiveLeadsTo: screening.positiveLeadsTo,
+      missedCase: chance(screening.missedCase),
+      overdiagnosis: chance(screening.overdiagnosis),
+    },
+  };
+}
+
 /** The options whose effects the topic holds, in order: every option but the comparison. */
 export function effectOptionIds(draft: TopicDraft): string[] {
   return draft.options.filter((option) => !option.isComparison).map((option) => option.id);
@@ -187,6 +205,8 @@ export function topicFromDraft(draft: TopicDraft): DraftReading {
     patient: patientGiven ? { name: draft.patientName, reference: draft.patientReference } : null,
     // The default choices are left out, so a topic without stored choices reads back as it was.
     ...(sameChoices(draft.handout, DEFAULT_HANDOUT_CHOICES) ? {} : { handout: draft.handout }),
+    ...aboutField(draft.about),
+    ...screeningField(draft.screening),
   };
   return { topic, problems: reader.problems, questionPlaces };
 }

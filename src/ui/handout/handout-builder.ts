@@ -17,8 +17,13 @@ export interface HandoutRequest {
   readonly date: string;
 }
 
-/** A handout: the PDF bytes, or one sentence on why it could not be made. */
-export type HandoutOutcome = { readonly ok: true; readonly pdf: Uint8Array } | { readonly ok: false; readonly message: string };
+/**
+ * A handout: the PDF bytes with any warnings (a typed title, population or question that reads
+ * above the grade target; none when absent), or one sentence on why it could not be made.
+ */
+export type HandoutOutcome =
+  | { readonly ok: true; readonly pdf: Uint8Array; readonly warnings?: readonly string[] }
+  | { readonly ok: false; readonly message: string };
 
 export interface HandoutMaker {
   makeHandout(request: HandoutRequest): Promise<HandoutOutcome>;

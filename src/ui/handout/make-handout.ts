@@ -6,6 +6,7 @@
 import boldFontUrl from 'dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf?url';
 import regularFontUrl from 'dejavu-fonts-ttf/ttf/DejaVuSans.ttf?url';
 import { version } from '../../../package.json';
+import { noticeSentences } from '../../core/messages/describe.ts';
 import { buildHandout } from '../../handout/build-handout.ts';
 import { handoutFonts } from '../../handout/handout-fonts.ts';
 import type { HandoutFonts } from '../../handout/handout-fonts.ts';
@@ -38,5 +39,6 @@ export async function makeHandout(request: HandoutRequest): Promise<HandoutOutco
     { paper: request.paper, date: request.date, appVersion: version, showNnt: request.showNnt },
     await loadFonts(),
   );
-  return built.ok ? { ok: true, pdf: built.pdf } : { ok: false, message: built.message };
+  if (!built.ok) return { ok: false, message: built.message };
+  return { ok: true, pdf: built.pdf, warnings: noticeSentences(built.readingWarnings) };
 }

@@ -3,21 +3,25 @@
  * reading-grade warning for any typed text that the handout would print and that reads
  * above the target grade.
  */
-import { describeNotice } from '../../core/messages/describe.ts';
+import { noticeSentences } from '../../core/messages/describe.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Notice } from '../../core/types.ts';
 import { readingWarnings } from '../../core/wording/readability.ts';
 import type { UserText } from '../../core/wording/readability.ts';
+import { typedTexts } from '../../core/wording/typed-texts.ts';
+import type { TypedTextNames } from '../../core/wording/typed-texts.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+
+/** The names the results' warnings give the typed texts: the editor's own labels. */
+const EDITOR_TEXT_NAMES: TypedTextNames = {
+  title: 'the decision',
+  population: 'who the numbers are for',
+  question: (number) => `question ${number}`,
+};
 
 /** The typed texts a patient would read, named as the warning sentence says them. */
 export function patientFacingTexts(draft: TopicDraft): UserText[] {
-  const texts: UserText[] = [
-    { field: 'the decision', text: draft.title },
-    { field: 'who the numbers are for', text: draft.population },
-    ...draft.questions.map((text, index) => ({ field: `question ${index + 1}`, text })),
-  ];
-  return texts.filter((item) => item.text.trim() !== '');
+  return typedTexts(draft, EDITOR_TEXT_NAMES);
 }
 
 /**
@@ -35,6 +39,5 @@ export function readingNoticesFor(key: string): readonly Notice[] {
 
 /** Every warning as a sentence, the numbers' first, then those on the typed texts, without repeats. */
 export function resultWarnings(result: TopicResult, reading: readonly Notice[]): string[] {
-  const sentences = [...result.notices, ...reading].map((notice) => describeNotice(notice));
-  return [...new Set(sentences)];
+  return noticeSentences([...result.notices, ...reading]);
 }

@@ -8,6 +8,8 @@ import type { WordsDenominator } from '../../core/types.ts';
 import { checkDraft, isMissing } from '../draft/check-draft.ts';
 import { setHandoutChoice } from '../draft/draft-edits.ts';
 import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
+import { handoutGaps } from '../draft/handout-gaps.ts';
+import type { HandoutGap } from '../draft/handout-gaps.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 import { withoutPatient } from './autosave.ts';
 import type { Autosave, AutosaveRecord } from './autosave.ts';
@@ -70,6 +72,8 @@ export class TopicEditor {
     })),
   );
   #problemsByKey = $derived(groupByKey(this.problems));
+  /** What the handout would print as "not stated": disclosures and effect sources not yet given. */
+  handoutGaps: readonly HandoutGap[] = $derived(handoutGaps(this.draft));
   #lastValidDraft: TopicDraft | null = null;
   #savedSignature: string;
   #cancelAutosave: (() => void) | null = null;

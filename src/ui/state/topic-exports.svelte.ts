@@ -4,12 +4,12 @@
  * made from results that are out of date.
  */
 import type { ChartModel } from '../../render/chart-model.ts';
-import { chartPngFile, chartSvgFile } from '../export/chart-export.ts';
 import { exportFileName, topicPart } from '../files/export-file-names.ts';
 import { loadHandoutMaker, localDate } from '../handout/handout-builder.ts';
 import type { HandoutMaker } from '../handout/handout-builder.ts';
 import type { Platform } from '../platform/platform.ts';
 import type { AppMessages } from './app-messages.svelte.ts';
+import type { TopicDraft } from '../draft/topic-draft.ts';
 import type { TopicEditor } from './topic-editor.svelte.ts';
 
 export interface HandoutChoices {
@@ -30,6 +30,8 @@ export interface TopicExportsOptions {
 export class TopicExports {
   /** The handout is being made. */
   handoutBusy = $state(false);
+  /** Warnings on the last handout made (typed text above the grade target), and the draft it was made from. */
+  #warned = $state.raw<{ readonly draft: TopicDraft; readonly warnings: readonly string[] } | null>(null);
   readonly #options: TopicExportsOptions;
 
   constructor(options: TopicExportsOptions) {
@@ -52,6 +54,8 @@ export class TopicExports {
     const { platform, document } = this.#options;
     const name = exportFileName(this.#topicPart(), model.outcomeName.trim() === '' ? model.id : model.outcomeName, format);
     try {
+      // The export code is loaded on first use, so it stays out of the start-up script.
+      const { chartPngFile, chartSvgFile } = await import('../export/chart-export.ts');
       const saved =
         format === 'svg'
           ? await platform.saveFile(name, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
@@ -71,9 +75,19 @@ export class TopicExports {
     const maker = await (this.#options.loadMaker ?? loadHandoutMaker)();
     const today = this.#options.today?.() ?? new Date();
     const made = await maker.makeHandout({ topic: editor.check.topic, result, date: localDate(today), ...choices });
+    this.#warned = made.ok ? { draft: editor.draft, warnings: made.warnings ?? [] } : null;
     if (made.ok) return made.pdf;
     messages.show({ tone: 'error', text: made.message });
     return null;
+  }
+
+  /**
+   * Warnings on the last handout made: typed text that reads above the grade target (the handout
+   * was still made). None once the topic has changed since, as they may no longer hold.
+   */
+  get handoutWarnings(): readonly string[] {
+    const warned = this.#warned;
+    return warned !== null && warned.draft === this.#options.editor.draft ? warned.warnings : [];
   }
 
   /** The topic's own handout choices (the desktop menu's handout and printing use them). */

@@ -17,13 +17,15 @@ describe('chiSquareUpperTail', () => {
     expect(chiSquareUpperTail(100) / 1.5239706e-23).toBeCloseTo(1, 6);
   });
 
-  it('is smooth where the method switches from the series to the continued fraction', () => {
-    const below = chiSquareUpperTail(2.999999999);
-    const above = chiSquareUpperTail(3.000000001);
-    expect(Math.abs(below - above)).toBeLessThan(1e-9);
+  it('is smooth where the error function switches from the series to the continued fraction (statistic 8)', () => {
+    const below = chiSquareUpperTail(7.999999999);
+    const above = chiSquareUpperTail(8.000000001);
+    expect(Math.abs(below - above)).toBeLessThan(1e-11);
+    // python3 -c "from scipy.stats import chi2; print(chi2.sf(8, 1))" → 0.004677734981047276.
+    expect(chiSquareUpperTail(8)).toBeCloseTo(0.004677734981047276, 15);
     // P(χ²(1) > 3) = 2·Φ(−√3) = 0.0832645 (normal table, common practice), recomputed with SciPy:
     // python3 -c "from scipy.stats import chi2; print(chi2.sf(3, 1))" → 0.08326451666355042.
-    expect(chiSquareUpperTail(3)).toBeCloseTo(0.0832645, 7);
+    expect(chiSquareUpperTail(3)).toBeCloseTo(0.08326451666355042, 14);
   });
 
   it('is 1 at 0 and 0 for an infinite statistic, never outside [0, 1]', () => {

@@ -39,6 +39,28 @@ function setUp(
 }
 
 describe('TopicExports', () => {
+  it('keeps the warnings of the handout just made, and clears them with the next one', async () => {
+    const warning = 'The text in the title reads at about grade 13.1, above grade 8.';
+    let warnings: readonly string[] = [warning];
+    const { exports, platform } = setUp(() => Promise.resolve({ ok: true, pdf: PDF_BYTES, warnings }));
+    await exports.makeHandout();
+    expect(exports.handoutWarnings).toEqual([warning]);
+    // A warning never holds the handout back.
+    expect(platform.savedHandouts).toHaveLength(1);
+    warnings = [];
+    await exports.makeHandout();
+    expect(exports.handoutWarnings).toEqual([]);
+  });
+
+  it('drops the warnings once the topic changes, as they may no longer hold', async () => {
+    const warning = 'The text in the title reads at about grade 13.1, above grade 8.';
+    const { exports, topic } = setUp(() => Promise.resolve({ ok: true, pdf: PDF_BYTES, warnings: [warning] }));
+    await exports.makeHandout();
+    expect(exports.handoutWarnings).toEqual([warning]);
+    topic.editor.change((draft) => setTopicText(draft, 'title', 'A plain title'), 'title');
+    expect(exports.handoutWarnings).toEqual([]);
+  });
+
   it('makes the handout of the results on screen, dated today where the person is, and saves it', async () => {
     const { exports, platform, messages, requests, topic } = setUp();
     const done = exports.makeHandout({ paper: 'letter', showNnt: true });

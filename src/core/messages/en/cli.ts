@@ -40,6 +40,8 @@ export const cliMessages = {
   handoutNeedsTopic: () => 'A handout needs a topic: give a topic file or --demo.',
   clinicianTooLong: (length: number, limit: number) =>
     `--clinician is ${length} characters long; the handout allows up to ${limit}. Shorten it.`,
+  /** A warning on the handout just made, for stderr; the handout is still written. */
+  handoutWarning: (sentence: string) => `Warning: ${sentence}`,
   handoutWritten: (path: string, paper: string, grade: string) =>
     `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
   outWithSeveral: (count: number) =>

@@ -105,6 +105,10 @@ export const problemMessages: Record<ProblemCode, Render> = {
   'topic-effect-unknown-option': (v) => `An effect names the option "${text(v, 'option')}", which the topic does not have.`,
   'topic-effect-on-comparison': (v) =>
     `The comparison "${text(v, 'option')}" cannot have an effect of its own; its risk is the baseline.`,
+  'date-not-written': (v) =>
+    `The ${text(v, 'what')} "${text(v, 'input')}" is not written as year-month-day. Write it YYYY-MM-DD, for example 2028-06-30, or leave it empty.`,
+  'date-not-real': (v) =>
+    `The ${text(v, 'what')} "${text(v, 'input')}" is not a day of the calendar. Check the month and the day, for example 2028-06-30.`,
   'file-not-json': (v) =>
     `This file is not a readable topic: it is not complete JSON (${text(v, 'detail')}). Open another file or restore a backup.`,
   'file-format-unknown': (v) => `This file is not a Chancewise topic (its format is "${text(v, 'format')}").`,
