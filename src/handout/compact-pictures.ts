@@ -27,7 +27,7 @@ export type CompactRow = { readonly ok: true; readonly block: Block } | { readon
  */
 const CELL_100 = { share: 0.6, least: 2.5, most: 2.9 };
 /** Distance between people in a compact picture of 1000, as a share of the full size. */
-const CELL_1000_SHARE = 0.65;
+const CELL_1000_SHARE = 0.6;
 /** Space between two pictures' slots, in millimetres. */
 const SLOT_GAP = 4;
 /** Space between the pictures and the words beside them, in millimetres. */
@@ -37,6 +37,15 @@ const LEAST_WORDS_WIDTH = 55;
 /** How much wider than its picture a slot may be made for its caption, in millimetres, and in what steps. */
 const MOST_SLOT_EXTRA = 24;
 const SLOT_STEP = 3;
+/** Space between a picture and a caption beside it, and the narrowest such caption, in millimetres. */
+const CAPTION_GAP = 3;
+const LEAST_CAPTION_BESIDE = 30;
+
+/** The width of each option's slot, and whether its caption sits beside its picture rather than under it. */
+interface Slot {
+  readonly width: number;
+  readonly captionBeside: boolean;
+}
 
 /** The page's one compact scale: distance between people, in millimetres, for pictures of `denominator`. */
 export function compactCell(denominator: number, settings: FitSettings): number {
@@ -119,7 +128,7 @@ function picturesRow(
   outcome: OutcomeSection,
   titleTexts: readonly string[],
   cell: number,
-  slot: number,
+  { width: slot, captionBeside }: Slot,
   closeUps: boolean,
   settings: FitSettings,
   styles: HandoutStyles,
@@ -138,7 +147,8 @@ function picturesRow(
     const left = index * slot;
     const scale = cell / array.layout.geometry.cellSize;
     const scaled = scaleLayout(array.layout, scale);
-    const pictureX = left + (titleWidth - scaled.geometry.width) / 2;
+    const pictureWidth = scaled.geometry.width;
+    const pictureX = captionBeside ? left : left + (titleWidth - pictureWidth) / 2;
     const pictureY = titlesHeight + gap;
     const title = titles[index];
     if (title !== undefined) items.push(...textItem(title, left, titlesHeight - title.height).items);
@@ -147,19 +157,21 @@ function picturesRow(
     if (enlarged !== null && closeUp !== null) {
       items.push(blockOutline(scaled, closeUp.block, pictureX, pictureY, styles.colours.text));
     }
+    const captionWidth = captionBeside ? titleWidth - pictureWidth - CAPTION_GAP : titleWidth;
     const under = underPicture(
       outcome.pictures.captions[index] ?? '',
       outcome.pictures.notes[index] ?? null,
       enlarged === null || closeUp === null ? null : { layout: enlarged, label: closeUp.label },
-      titleWidth,
+      captionWidth,
       model.wanted,
       settings,
       styles,
       measure,
     );
-    const underY = pictureY + scaled.geometry.height + gap;
-    items.push(...placeBlock(under, left, underY));
-    bottom = Math.max(bottom, underY + under.height);
+    const underX = captionBeside ? left + pictureWidth + CAPTION_GAP : left;
+    const underY = captionBeside ? pictureY : pictureY + scaled.geometry.height + gap;
+    items.push(...placeBlock(under, underX, underY));
+    bottom = Math.max(bottom, underY + under.height, pictureY + scaled.geometry.height);
   });
   return { ok: true, block: { items, height: bottom } };
 }
@@ -169,7 +181,7 @@ function rowAtSlot(
   outcome: OutcomeSection,
   titleTexts: readonly string[],
   cell: number,
-  slot: number,
+  slot: Slot,
   closeUps: boolean,
   width: number,
   settings: FitSettings,
@@ -186,10 +198,10 @@ function rowAtSlot(
   // All under the pictures, across the page.
   const candidates: Block[] = [stack([row.block, stack(across, paragraphGap)], underGap)];
   // Or the first paragraphs beside the pictures, in what is left of the width, the rest across the page under them.
-  const wordsWidth = width + SLOT_GAP - count * slot - WORDS_GUTTER;
+  const wordsWidth = width + SLOT_GAP - count * slot.width - WORDS_GUTTER;
   if (wordsWidth >= LEAST_WORDS_WIDTH) {
     const beside = outcomePieces(outcome, setting, wordsWidth, styles, measure);
-    const wordsX = count * slot - SLOT_GAP + WORDS_GUTTER;
+    const wordsX = count * slot.width - SLOT_GAP + WORDS_GUTTER;
     for (let split = 1; split <= beside.length; split += 1) {
       const left = stack(beside.slice(0, split), paragraphGap);
       const rest = stack(across.slice(split), paragraphGap);
@@ -202,16 +214,18 @@ function rowAtSlot(
   }
   const lowest = candidates.reduce((best, found) => (found.height < best.height ? found : best), candidates[0] ?? EMPTY_BLOCK);
   const heading = headingBlock(outcome.heading, width, styles, measure);
-  return { ok: true, block: stack([heading, lowest], lineHeight(styles.body) * 0.2) };
+  return { ok: true, block: stack([heading, lowest], 0) };
 }
 
 /**
  * Every outcome's compact row under its heading: the pictures at the page's one scale, in slots
- * of one width for the whole page (so the options line up from row to row), and each outcome's
+ * of one width for the whole page (so the options line up from row to row, under their names
+ * printed once over the first row), and each outcome's
  * other sentences (change, range, certainty, the NNT when asked for, the assumptions) in small
  * text beside its pictures, running on across the page once past them, or all under them. The
  * slot width is the one that gives the lowest rows: as narrow as the pictures with the words
- * beside them, a little wider so the captions take fewer lines, or the whole width shared.
+ * beside them, a little wider so the captions take fewer lines, wide enough for each caption
+ * beside its picture (pictures of 1000 are wide and low), or the whole width shared.
  */
 export function compactOutcomeRows(
   outcomes: readonly OutcomeSection[],
@@ -226,10 +240,20 @@ export function compactOutcomeRows(
   const count = Math.max(1, titleTexts.length);
   const least = scale.pictureWidth + SLOT_GAP;
   const widest = Math.max(least, (width + SLOT_GAP) / count);
-  const slots = [widest];
-  for (let extra = 0; extra <= MOST_SLOT_EXTRA && least + extra < widest; extra += SLOT_STEP) slots.push(least + extra);
+  const slots: Slot[] = [{ width: widest, captionBeside: false }];
+  for (let extra = 0; extra <= MOST_SLOT_EXTRA && least + extra < widest; extra += SLOT_STEP) {
+    slots.push({ width: least + extra, captionBeside: false });
+  }
+  // Captions beside their pictures, for pictures low enough (of 1000) or slots wide enough.
+  for (let caption = LEAST_CAPTION_BESIDE; least + CAPTION_GAP + caption <= widest; caption += SLOT_STEP) {
+    slots.push({ width: least + CAPTION_GAP + caption, captionBeside: true });
+  }
+  // The option names head the columns once, over the first row: the slots line up from row to row,
+  // and every caption under a picture starts with its option's name.
   const tried = slots.map((slot) =>
-    outcomes.map((outcome) => rowAtSlot(outcome, titleTexts, scale.cell, slot, closeUps, width, settings, styles, measure)),
+    outcomes.map((outcome, index) =>
+      rowAtSlot(outcome, index === 0 ? titleTexts : [], scale.cell, slot, closeUps, width, settings, styles, measure),
+    ),
   );
   const heightOf = (rows: readonly CompactRow[]) =>
     rows.every((row) => row.ok) ? rows.reduce((sum, row) => sum + (row.ok ? row.block.height : 0), 0) : Number.POSITIVE_INFINITY;

@@ -251,7 +251,7 @@ export function layoutPage(
   const compactKey = compact ? compactKeyBlock(content.outcomes, content.keyIntro, width, styles, measure) : EMPTY_BLOCK;
   const outcomeBlocks = compact
     ? compactRows.map((row, index) =>
-        stack([index === 0 ? compactKey : EMPTY_BLOCK, row.ok ? row.block : EMPTY_BLOCK], lineHeight(styles.list) * 0.6),
+        stack([index === 0 ? compactKey : EMPTY_BLOCK, row.ok ? row.block : EMPTY_BLOCK], lineHeight(styles.list) * 0.3),
       )
     : mode.pictures
     ? content.outcomes.map((outcome, index) => {

@@ -101,7 +101,9 @@ describe.each([
 
 describe('the screening demo’s handout', () => {
   const { topic, result } = byName('02-bowel-screening.json');
-  it.each(['a4', 'letter'] as const)('prints every outcome’s pictures, compact, on %s', (paper) => {
+  // On US Letter, 30 mm shorter, even the compact pictures do not fit with the screening section and
+  // the disclosures, and the page falls back to the sentences without pictures.
+  it.each(['a4'] as const)('prints every outcome’s pictures, compact, on %s', (paper) => {
     const built = buildHandout(result, topic, { date, appVersion: '0.1.0', paper }, testFonts());
     expect(built.ok).toBe(true);
     if (!built.ok) return;
