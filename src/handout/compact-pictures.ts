@@ -112,7 +112,10 @@ export function compactKeyBlock(
       x = 0;
       y += line;
     }
-    items.push({ kind: 'figure', x, y: y + (line - size) / 2, size, glyph, look: entry.look }, ...textItem(text, x + indent, y).items);
+    items.push(
+      { kind: 'figure', x, y: y + (line - size) / 2, size, glyph, look: entry.look },
+      ...textItem(text, x + indent, y).items,
+    );
     if (text.lines.length > 1) {
       x = 0;
       y += text.height;
@@ -152,7 +155,14 @@ function picturesRow(
     const pictureY = titlesHeight + gap;
     const title = titles[index];
     if (title !== undefined) items.push(...textItem(title, left, titlesHeight - title.height).items);
-    items.push({ kind: 'people', x: pictureX, y: pictureY, width: scaled.geometry.width, layout: array.layout, wanted: model.wanted });
+    items.push({
+      kind: 'people',
+      x: pictureX,
+      y: pictureY,
+      width: scaled.geometry.width,
+      layout: array.layout,
+      wanted: model.wanted,
+    });
     const enlarged = closeUps && closeUp !== null ? (closeUp.layouts[index] ?? null) : null;
     if (enlarged !== null && closeUp !== null) {
       items.push(blockOutline(scaled, closeUp.block, pictureX, pictureY, styles.colours.text));

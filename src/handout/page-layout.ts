@@ -210,19 +210,20 @@ export function layoutPage(
   const header = headerBlock(content, width, styles, measure, mode.small === true && (!mode.pictures || compact));
   const firstModel = content.outcomes[0]?.pictures.model;
   const columns = columnsOf(content.titles.length, firstModel?.denominator ?? 100, width);
-  const pictureSections = mode.pictures && !compact
-    ? content.outcomes.map((outcome, index) =>
-        picturesBlock(
-          mode.closeUps ? outcome.pictures : { ...outcome.pictures, closeUp: null },
-          content.titles,
-          index === 0 ? content.keyIntro : null,
-          width,
-          settings,
-          styles,
-          measure,
-        ),
-      )
-    : [];
+  const pictureSections =
+    mode.pictures && !compact
+      ? content.outcomes.map((outcome, index) =>
+          picturesBlock(
+            mode.closeUps ? outcome.pictures : { ...outcome.pictures, closeUp: null },
+            content.titles,
+            index === 0 ? content.keyIntro : null,
+            width,
+            settings,
+            styles,
+            measure,
+          ),
+        )
+      : [];
   const firstLayout = firstModel?.arrays[0]?.layout;
   const compactRows =
     compact && firstLayout !== undefined
@@ -254,15 +255,15 @@ export function layoutPage(
         stack([index === 0 ? compactKey : EMPTY_BLOCK, row.ok ? row.block : EMPTY_BLOCK], lineHeight(styles.list) * 0.3),
       )
     : mode.pictures
-    ? content.outcomes.map((outcome, index) => {
-        const found = pictureSections[index];
-        const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
-        return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
-      })
-    : [
-        setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
-        section(heading(content.sentencesHeading), allWords),
-      ];
+      ? content.outcomes.map((outcome, index) => {
+          const found = pictureSections[index];
+          const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
+          return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
+        })
+      : [
+          setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
+          section(heading(content.sentencesHeading), allWords),
+        ];
   const screening = screeningBlock(content.screening, width, styles, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);

@@ -25,10 +25,15 @@ const byName = (name: string) => {
   return found;
 };
 
+/** The sheet's content for the demo `name`, without the NNT sentences. */
+function contentOf(name: string) {
+  const { topic, result } = byName(name);
+  return handoutContent(result, topic, { date, appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn });
+}
+
 /** The compact page's items, laid out in a box `extra` millimetres taller than the paper's, at the ladder's tightest settings. */
 function compactItems(name: string, paper: Paper, extra: number): { items: readonly PageItem[]; fits: boolean } {
-  const { topic, result } = byName(name);
-  const content = handoutContent(result, topic, { date, appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn });
+  const content = contentOf(name);
   const doc = new jsPDF({ unit: 'mm', format: paper });
   const textOnly = content.outcomes.map((outcome) => ({
     ...outcome,
@@ -78,8 +83,7 @@ describe.each([
   });
 
   it('print both frames of each option under its picture', () => {
-    const { topic } = byName(name);
-    const content = handoutContent(result, topic, { date, appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn });
+    const content = contentOf(name);
     const texts = items.flatMap((item) =>
       item.kind === 'text' ? [{ x: item.x, y: item.y, text: words(item.block.lines.map((line) => line.text).join(' ')) }] : [],
     );
