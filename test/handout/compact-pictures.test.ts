@@ -117,6 +117,16 @@ describe('the screening demo’s handout', () => {
   });
 });
 
+describe('the sore-throat demo, whose full-size pictures do not fit on A4', () => {
+  it('prints compact pictures rather than none, its sentences at 9 pt or more', () => {
+    const { topic, result } = byName('04-sore-throat.json');
+    const built = buildHandout(result, topic, { date, appVersion: '0.1.0', paper: 'a4' }, testFonts());
+    expect(built.ok && built.pictures && built.compactPictures).toBe(true);
+    // The EU leaflet minimum (EC 2009 readability guideline).
+    expect(built.ok ? built.sentenceSize : 0).toBeGreaterThanOrEqual(9);
+  });
+});
+
 describe('the demo whose full-size pictures fit', () => {
   it.each(['03-fracture-medicine.json'])('keeps them full size on A4: %s', (name) => {
     const { topic, result } = byName(name);
