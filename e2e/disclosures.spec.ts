@@ -78,7 +78,7 @@ test.describe('the screening demo', () => {
     await openApp(page);
     await page.getByRole('button', { name: 'Topics' }).click();
     await page.getByRole('region', { name: 'Start' }).locator('button.demo').nth(1).click();
-    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/bowel screening/);
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/bowel test/);
     await expect(page.getByLabel('Missed cases (false reassurance)')).toHaveValue('3 in 1000');
     const group = page.getByLabel('Overdiagnosis').locator('xpath=ancestor::details');
     await group.scrollIntoViewIfNeeded();

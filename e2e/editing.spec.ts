@@ -147,7 +147,7 @@ test.describe('editing a topic', () => {
     for (const example of await examples.all()) await expect(example).toContainText('Illustrative');
     await page.screenshot({ path: `${SCREENS}/06-start-panel.png` });
     await examples.nth(1).click();
-    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/bowel screening/);
+    await expect(page.getByLabel('Decision', { exact: true })).toHaveValue(/bowel test/);
     await expect(page.getByRole('note', { name: 'Illustrative example' })).toBeVisible();
     await page.getByRole('button', { name: 'Topics' }).click();
     await page.getByRole('button', { name: 'New topic', exact: true }).click();

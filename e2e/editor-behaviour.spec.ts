@@ -79,7 +79,7 @@ test.describe('undo within a document', () => {
     const decision = page.getByLabel('Decision', { exact: true });
     await decision.fill('My unsaved work');
     await openFile(page, 'screening.cwtopic', screeningText);
-    await expect(decision).toHaveValue(/bowel screening/);
+    await expect(decision).toHaveValue(/bowel test/);
     const undo = page.getByRole('button', { name: 'Undo', exact: true });
     await expect(undo).toBeDisabled();
     // The replaced unsaved work is offered back, not hidden in the history.
@@ -88,14 +88,14 @@ test.describe('undo within a document', () => {
     await decision.fill('Edited screening');
     await expect(page).toHaveTitle('• Edited screening — Chancewise');
     await undo.click();
-    await expect(decision).toHaveValue(/bowel screening/);
+    await expect(decision).toHaveValue(/bowel test/);
     await expect(undo).toBeDisabled();
     await page.keyboard.press('Control+z');
-    await expect(decision).toHaveValue(/bowel screening/);
+    await expect(decision).toHaveValue(/bowel test/);
     // The header, the title and Save describe the file on screen.
     await expect(page.locator('.document .file')).toHaveText('screening.cwtopic');
     await expect(page.getByText('Unsaved changes')).toHaveCount(0);
-    await expect(page).toHaveTitle(/^[^•].*bowel screening.* — Chancewise$/);
+    await expect(page).toHaveTitle(/^[^•].*bowel test.* — Chancewise$/);
 
     await page.getByRole('region', { name: 'Unsaved work' }).getByRole('button', { name: 'Restore it' }).click();
     await expect(decision).toHaveValue('My unsaved work');

@@ -39,9 +39,9 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     for (const outcome of content.outcomes) printed(outcome.label);
   });
 
-  // IPDASi item 5 (Elwyn et al. 2009; Trevena et al. 2013, "use the same denominator and time period"):
+  // IPDASi item 5, number from memory (Elwyn et al. 2009; Trevena et al. 2013, "use the same denominator and time period"):
   // every outcome's numbers are out of the sheet's one words denominator, over its one period.
-  it('IPDASi 5: the same denominator and period for every printed outcome', () => {
+  it('IPDAS probabilities (Trevena 2013): the same denominator and period for every printed outcome', () => {
     const period = /in the next ([\d.]+ \w+|\w+)|by day [\d.]+|within a day/;
     const periods = new Set<string>();
     for (const outcome of content.outcomes) {
@@ -63,9 +63,9 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     }
   });
 
-  // IPDAS 2005 checklist, "presenting probabilities": positive and negative frames; IPDASi item 8
+  // IPDAS 2005 checklist, "presenting probabilities": positive and negative frames; IPDASi item 8, number from memory
   // (balanced information to limit framing biases).
-  it('IPDASi 8: both frames for every printed outcome and option', () => {
+  it('IPDAS probabilities (Trevena 2013): both frames for every printed outcome and option', () => {
     for (const outcome of content.outcomes) {
       expect(outcome.frames).toHaveLength(result.outcomes[0]?.options.length ?? 0);
       for (const frames of outcome.frames) {
@@ -76,9 +76,9 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     }
   });
 
-  // IPDASi item 6 (levels of uncertainty), an IPDAS certification criterion (Joseph-Williams et al.
+  // IPDASi item 6, number from memory (levels of uncertainty), an IPDAS certification criterion (Joseph-Williams et al.
   // 2014): a range for every option's change, or an explicit "does not tell us how precise".
-  it('IPDASi 6: a range, or an explicit "does not tell us how precise", for every printed outcome', () => {
+  it('IPDAS probabilities (Trevena 2013): a range, or an explicit "does not tell us how precise", for every printed outcome', () => {
     for (const outcome of content.outcomes) {
       outcome.paragraphs.forEach((paragraph, index) => {
         if (index === 0) return;

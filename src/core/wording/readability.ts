@@ -81,7 +81,7 @@ export interface UserText {
 
 /**
  * A `reading-grade-high` warning for every clinician-typed text whose
- * Flesch–Kincaid grade is above `limit`. It warns and does not block.
+ * Flesch–Kincaid grade, to one decimal, is above `limit`. It warns and does not block.
  *
  * @param texts - the clinician's texts with their fields
  * @param limit - the highest grade without a warning
@@ -91,6 +91,8 @@ export interface UserText {
 export function readingWarnings(texts: readonly UserText[], limit: number = READING_GRADE_LIMIT): readonly Notice[] {
   return texts.flatMap(({ field, text }) => {
     const { grade } = readability(text);
-    return grade !== null && grade > limit ? [{ code: 'reading-grade-high', values: { field, grade, limit } }] : [];
+    // Judged on the grade as the warning shows it (one decimal), so no warning reads "grade 8, above grade 8".
+    const shown = grade === null ? null : Math.round(grade * 10) / 10;
+    return shown !== null && shown > limit ? [{ code: 'reading-grade-high', values: { field, grade, limit } }] : [];
   });
 }

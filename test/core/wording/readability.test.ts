@@ -112,8 +112,17 @@ describe('readingWarnings', () => {
 
   it('warns only strictly above the limit given', () => {
     const text = 'The Australian platypus is seemingly a hybrid of a mammal and reptilian creature.';
-    expect(readingWarnings([{ field: 'title', text }], 13.08 + 1e-9)).toEqual([]);
+    // Grade 13.08, shown as 13.1: not above 13.1, above 13.
+    expect(readingWarnings([{ field: 'title', text }], 13.1)).toEqual([]);
     expect(readingWarnings([{ field: 'title', text }], 13)).toHaveLength(1);
+  });
+
+  it('judges the grade as the warning shows it, to one decimal, so it never reads "grade 8, above grade 8"', () => {
+    // Grade 8.009 by the formula: 11 words, 18 syllables ("sixty" 2, "seventy-four" 4), 1 sentence, so 0.39 × 11 + 11.8 × 18 / 11 − 15.59 (Kincaid et al. 1975); shown as 8.
+    const text = 'people aged 60 to 74 with no signs of bowel cancer';
+    expect(readability(text).grade).toBeGreaterThan(8);
+    expect(readability(text).grade).toBeLessThan(8.05);
+    expect(readingWarnings([{ field: 'population', text }])).toEqual([]);
   });
 
   it('has a sentence in the catalogue for its warning', () => {
