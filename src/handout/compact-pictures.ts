@@ -152,7 +152,7 @@ function picturesRow(
     const scaled = scaleLayout(array.layout, scale);
     const pictureWidth = scaled.geometry.width;
     const pictureX = captionBeside ? left : left + (titleWidth - pictureWidth) / 2;
-    const pictureY = titlesHeight + gap;
+    const pictureY = titles.length > 0 ? titlesHeight + gap : 0;
     const title = titles[index];
     if (title !== undefined) items.push(...textItem(title, left, titlesHeight - title.height).items);
     items.push({
