@@ -49,6 +49,8 @@ export interface HandoutBuilt {
   readonly settings: FitSettings;
   /** Whether every outcome's pictures were printed (all or none). */
   readonly pictures: boolean;
+  /** Whether those pictures are the compact ones (one smaller scale, the key once; see `PageMode`). */
+  readonly compactPictures: boolean;
   /** The size of every outcome's sentences, in points: the body size, or the list size when the page is tight. */
   readonly sentenceSize: number;
   /** Every sentence taken from the wording module, as printed. */
@@ -138,7 +140,8 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   const measure = jsPdfMeasure(doc);
   const box = contentBox(paper);
   // What gives way, in order (see PageMode): the enlarged blocks of pictures of 1000; then the
-  // sentences' size, every outcome's alike, so that the pictures stay; then every outcome's pictures
+  // sentences' size, every outcome's alike, so that the pictures stay; then the pictures' size,
+  // every outcome's alike, so that every outcome keeps its pictures; then every outcome's pictures
   // together, so that no outcome's pictures stand alone; then small sentences in two columns of a
   // readable length; last, in one column, which wastes the least room at paragraph ends.
   const hasCloseUps = content.outcomes.some((outcome) => outcome.pictures.closeUp !== null);
@@ -146,6 +149,8 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     ...(hasCloseUps ? [{ pictures: true, closeUps: true }] : []),
     { pictures: true, closeUps: false },
     { pictures: true, closeUps: false, small: true },
+    ...(hasCloseUps ? [{ pictures: true, closeUps: true, compact: true, small: true }] : []),
+    { pictures: true, closeUps: false, compact: true, small: true },
     { pictures: false, closeUps: false },
     { pictures: false, closeUps: false, small: true, columns: true },
     { pictures: false, closeUps: false, small: true },
@@ -188,6 +193,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     readability: readability(prose.join('\n\n')),
     settings,
     pictures: fitted.mode.pictures,
+    compactPictures: fitted.mode.pictures && fitted.mode.compact === true,
     sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
     wordingSentences: content.wordingSentences,
     prose,

@@ -12,6 +12,7 @@ import { headerBlock } from './header-block.ts';
 import type { HandoutPart } from './messages/en.ts';
 import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
 import { bulletsBlock, headingBlock, runInParagraph, section, shadedBox, writingLines } from './section-blocks.ts';
+import { compactKeyBlock, compactOutcomeRows, compactScale } from './compact-pictures.ts';
 import { columnsOf, picturesBlock } from './pictures-block.ts';
 import { outcomeWords, twoColumnWords, wordsGaps } from './outcome-words.ts';
 import { screeningBlock } from './screening-block.ts';
@@ -55,17 +56,35 @@ const PART_SHARE: Readonly<Record<HandoutPart, number>> = {
 };
 
 /**
- * What the page draws besides the words. Pictures are drawn for every outcome or for none:
- * a side effect's pictures at the same scale as the benefit's (Trevena et al. 2013: the same
- * denominator and format for every outcome compared), and never the benefit's alone, which
- * would give it more weight on the page than the harms (the IPDAS certification criterion of
- * equal detail). When the pictures of every outcome do not fit, even at the ladder's smallest
- * cells, the page keeps every outcome's sentences and the table, and leaves all pictures out.
+ * What the page draws besides the words, and the order in which it gives way (`build-handout.ts`
+ * tries the modes in this order, each down the whole fit ladder, and takes the first that fits).
+ *
+ * Pictures are drawn for every outcome or for none: a side effect's pictures at the same scale as
+ * the benefit's (Trevena et al. 2013: the same denominator and format for every outcome compared),
+ * and never the benefit's alone, which would give it more weight on the page than the harms (the
+ * IPDAS certification criterion of equal detail). The pictures are what the sheet is for (natural
+ * frequencies shown as icon arrays are understood better than numbers alone, by people of low
+ * numeracy most: Galesic et al. 2009), so they give way last, and by steps:
+ *
+ * 1. Full-size pictures with the enlarged block of 100 beside each picture of 1000, body-size sentences.
+ * 2. The same without the enlarged blocks: they repeat what the picture shows, at a larger scale.
+ * 3. Full-size pictures, every outcome's sentences at the list size (never below 9 pt).
+ * 4. Compact pictures (`compact`), with the enlarged blocks when there are any, then without: every
+ *    outcome still has its pictures, all at one smaller scale, the key printed once, the sentences
+ *    small beside the pictures. Smaller pictures still show the proportion (the part-to-whole
+ *    picture is what helps, not its size), which is why they come before any page without pictures.
+ * 5. No pictures: the table and every outcome's sentences at body size; then small sentences in two
+ *    columns; last in one column. Past that, the named refusal.
  */
 export interface PageMode {
   readonly pictures: boolean;
   /** The enlarged block of 100 beside each picture of 1000. */
   readonly closeUps: boolean;
+  /**
+   * With `pictures`: every outcome's pictures at the page's one compact scale, one row per outcome,
+   * the key once over the rows and the sentences at the list size (`compact-pictures.ts`).
+   */
+  readonly compact?: boolean;
   /**
    * The last resort for many options and outcomes: every outcome's sentences, benefits and
    * harms alike, at the list size (never below 9 pt, the EU leaflet minimum) rather than leaving
@@ -186,23 +205,40 @@ export function layoutPage(
   const styles = handoutStyles(settings, palette);
   const width = box.width;
   const heading = (text: string) => headingBlock(text, width, styles, measure);
-  const header = headerBlock(content, width, styles, measure, mode.small === true && !mode.pictures);
+  const compact = mode.pictures && mode.compact === true;
+  // The header's tight form (badge beside the title) on the tightest pages: small sentences without full-size pictures.
+  const header = headerBlock(content, width, styles, measure, mode.small === true && (!mode.pictures || compact));
   const firstModel = content.outcomes[0]?.pictures.model;
   const columns = columnsOf(content.titles.length, firstModel?.denominator ?? 100, width);
-  const pictureSections = mode.pictures
-    ? content.outcomes.map((outcome, index) =>
-        picturesBlock(
-          mode.closeUps ? outcome.pictures : { ...outcome.pictures, closeUp: null },
+  const pictureSections =
+    mode.pictures && !compact
+      ? content.outcomes.map((outcome, index) =>
+          picturesBlock(
+            mode.closeUps ? outcome.pictures : { ...outcome.pictures, closeUp: null },
+            content.titles,
+            index === 0 ? content.keyIntro : null,
+            width,
+            settings,
+            styles,
+            measure,
+          ),
+        )
+      : [];
+  const firstLayout = firstModel?.arrays[0]?.layout;
+  const compactRows =
+    compact && firstLayout !== undefined
+      ? compactOutcomeRows(
+          content.outcomes,
           content.titles,
-          index === 0 ? content.keyIntro : null,
+          compactScale(firstLayout, content.titles.length, width, settings),
+          mode.closeUps,
           width,
           settings,
           styles,
           measure,
-        ),
-      )
-    : [];
-  const refused = pictureSections.find((found) => !found.ok);
+        )
+      : [];
+  const refused = [...pictureSections, ...compactRows].find((found) => !found.ok);
   const setting = { pictures: mode.pictures, small: mode.small === true };
   const words = content.outcomes.map((outcome) => outcomeWords(outcome, setting, width, styles, measure));
   const allWords =
@@ -212,16 +248,22 @@ export function layoutPage(
   // With pictures, each outcome's sentences sit under its own pictures, and the captions carry the
   // numbers a table would repeat; without them, the table sets the outcomes side by side (band words
   // with the numbers beside them) before every outcome's sentences, unless the page is too tight.
-  const outcomeBlocks = mode.pictures
-    ? content.outcomes.map((outcome, index) => {
-        const found = pictureSections[index];
-        const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
-        return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
-      })
-    : [
-        setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
-        section(heading(content.sentencesHeading), allWords),
-      ];
+  // Compact, the key is printed once, over the first outcome's row.
+  const compactKey = compact ? compactKeyBlock(content.outcomes, content.keyIntro, width, styles, measure) : EMPTY_BLOCK;
+  const outcomeBlocks = compact
+    ? compactRows.map((row, index) =>
+        stack([index === 0 ? compactKey : EMPTY_BLOCK, row.ok ? row.block : EMPTY_BLOCK], lineHeight(styles.list) * 0.3),
+      )
+    : mode.pictures
+      ? content.outcomes.map((outcome, index) => {
+          const found = pictureSections[index];
+          const pictures = found === undefined || !found.ok ? EMPTY_BLOCK : found.block;
+          return stack([heading(outcome.heading), pictures, words[index] ?? EMPTY_BLOCK], lineHeight(styles.body) * 0.4);
+        })
+      : [
+          setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
+          section(heading(content.sentencesHeading), allWords),
+        ];
   const screening = screeningBlock(content.screening, width, styles, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
   const foot = footBlock(content, width, settings, styles, measure);

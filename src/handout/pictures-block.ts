@@ -92,7 +92,7 @@ function keyBlock(
 }
 
 /** A rectangle's outline around the people of `block` in a placed, scaled layout. */
-function blockOutline(layout: IconArrayLayout, block: number, x: number, y: number, colour: string): PageItem {
+export function blockOutline(layout: IconArrayLayout, block: number, x: number, y: number, colour: string): PageItem {
   const { cellSize, iconSize } = layout.geometry;
   const people = layout.people.filter((person) => person.block === block);
   const offset = OUTLINE_OFFSET * cellSize;
@@ -138,7 +138,7 @@ function closeUpFigure(
  * Under a picture: its caption and any note in words; for a picture of 1000, the enlarged
  * block beside them (or under them where the slot is narrow).
  */
-function underPicture(
+export function underPicture(
   caption: string,
   note: string | null,
   closeUp: { readonly layout: IconArrayLayout; readonly label: string } | null,
