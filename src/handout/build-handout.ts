@@ -85,7 +85,9 @@ function proseOf(content: HandoutContent, pictures: boolean, short: boolean): st
       outcome.label,
       // Under pictures the frames are captions, like the chart's labels; without them they lead the paragraphs.
       ...(pictures ? [] : outcome.frames.map((frames) => frames.join(' '))),
-      ...(short ? outcome.shortParagraphs : outcome.paragraphs).filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
+      ...(short ? outcome.shortParagraphs : outcome.paragraphs)
+        .filter((paragraph) => paragraph.length > 0)
+        .map((paragraph) => paragraph.join(' ')),
       ...outcome.assumptions,
     ]),
     ...(content.screening?.items ?? []),

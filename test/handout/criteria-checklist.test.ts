@@ -99,13 +99,17 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
   // Santesso et al. 2020 (GRADE guidelines 26): a certainty statement for every option's effect, harms as benefits.
   it('a GRADE informative statement for every printed outcome and option', () => {
     for (const outcome of content.outcomes) {
-      paragraphsOf(outcome).slice(1).forEach((paragraph) => {
-        const statement = paragraph.find((sentence) =>
-          /(reduces?|increases?|little or no difference to) the chance( of|\.)|very uncertain about (the|its) effect/.test(sentence),
-        );
-        expect(statement, outcome.outcomeId).toBeDefined();
-        printed(statement ?? '');
-      });
+      paragraphsOf(outcome)
+        .slice(1)
+        .forEach((paragraph) => {
+          const statement = paragraph.find((sentence) =>
+            /(reduces?|increases?|little or no difference to) the chance( of|\.)|very uncertain about (the|its) effect/.test(
+              sentence,
+            ),
+          );
+          expect(statement, outcome.outcomeId).toBeDefined();
+          printed(statement ?? '');
+        });
     }
   });
 

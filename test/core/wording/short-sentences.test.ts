@@ -25,7 +25,9 @@ const harm = (intervention: number, range: { lower: number; upper: number } | nu
 describe('the short change-with-range sentence', () => {
   it('gives the people who avoid the outcome and the range on the same denominator', () => {
     const result = strokeTopic();
-    expect(shortOf(result, 'short-effect')).toBe('The tablet: about 4 in 100 avoid it because of the option (somewhere between 2 and 6 in 100).');
+    expect(shortOf(result, 'short-effect')).toBe(
+      'The tablet: about 4 in 100 avoid it because of the option (somewhere between 2 and 6 in 100).',
+    );
     expect(shortHandoutSentences(result, { showNnt: false })[0]?.numbers).toEqual({
       avoided: 4,
       denominator: 100,

@@ -181,7 +181,8 @@ const shortChange = (
       ? `little or no difference, ${amountPhrase(either, denominator)} have it either way`
       : `slightly ${hidden} have it, but the difference is smaller than 1 in ${sizeOf(denominator)}: ${amountPhrase(either, denominator)} either way`;
   }
-  if (direction === 'fewer' && !wanted) return `${people} in ${size} ${plural(count, 'avoids', 'avoid')} it because of the option`;
+  if (direction === 'fewer' && !wanted)
+    return `${people} in ${size} ${plural(count, 'avoids', 'avoid')} it because of the option`;
   // A name that starts with a verb ("dying of bowel cancer") does not follow "have".
   if (startsWithVerb(outcome)) return `it happens to ${people} ${direction} in ${size} because of the option`;
   return `${people} ${direction} in ${size} ${plural(count, 'has', 'have')} it because of the option`;
