@@ -51,6 +51,20 @@ describe('the short change-with-range sentence', () => {
     );
   });
 
+  it('does not put "have" before a name that starts with a verb in -ing', () => {
+    const result = topicFixture([
+      {
+        name: 'needing a hospital stay',
+        kind: 'harm',
+        comparison: 5,
+        options: [{ id: 'tablet', name: 'the tablet', intervention: 8, range: { lower: 6, upper: 11 } }],
+      },
+    ]);
+    expect(shortOf(result, 'short-effect')).toBe(
+      'The tablet: it happens to about 3 more in 100 because of the option (somewhere between 1 and 6 in 100).',
+    );
+  });
+
   it('says a range that crosses no difference goes from fewer to more', () => {
     expect(shortOf(harm(5, { lower: 2, upper: 9 }), 'short-effect')).toBe(
       'The tablet: little or no difference, about 5 in 100 have it either way (anywhere from 3 fewer to 4 more in 100).',
