@@ -76,7 +76,7 @@ export interface HandoutRefused {
 export type HandoutBuild = HandoutBuilt | HandoutRefused;
 
 /** The sheet's prose, block by block, for the readability score (the captions under pictures left out, as the chart's labels). */
-function proseOf(content: HandoutContent, pictures: boolean): string[] {
+function proseOf(content: HandoutContent, pictures: boolean, short: boolean): string[] {
   return [
     content.title,
     ...content.audience,
@@ -85,7 +85,9 @@ function proseOf(content: HandoutContent, pictures: boolean): string[] {
       outcome.label,
       // Under pictures the frames are captions, like the chart's labels; without them they lead the paragraphs.
       ...(pictures ? [] : outcome.frames.map((frames) => frames.join(' '))),
-      ...outcome.paragraphs.filter((paragraph) => paragraph.length > 0).map((paragraph) => paragraph.join(' ')),
+      ...(short ? outcome.shortParagraphs : outcome.paragraphs)
+        .filter((paragraph) => paragraph.length > 0)
+        .map((paragraph) => paragraph.join(' ')),
       ...outcome.assumptions,
     ]),
     ...(content.screening?.items ?? []),
@@ -184,7 +186,8 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   doc.setLanguage(messages.language as Parameters<jsPDF['setLanguage']>[0]);
   doc.setCreationDate(creationDate);
   doc.setFileId(fileIdentifier([content.title, options.date, paper, options.appVersion].join('\n')));
-  const prose = proseOf(content, fitted.mode.pictures);
+  const compactPictures = fitted.mode.pictures && fitted.mode.compact === true;
+  const prose = proseOf(content, fitted.mode.pictures, compactPictures);
   return {
     ok: true,
     pdf: new Uint8Array(doc.output('arraybuffer')),
@@ -193,9 +196,9 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     readability: readability(prose.join('\n\n')),
     settings,
     pictures: fitted.mode.pictures,
-    compactPictures: fitted.mode.pictures && fitted.mode.compact === true,
+    compactPictures,
     sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
-    wordingSentences: content.wordingSentences,
+    wordingSentences: compactPictures ? content.shortWordingSentences : content.wordingSentences,
     prose,
     readingWarnings: typedTextWarnings(topic),
   };

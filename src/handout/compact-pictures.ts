@@ -199,7 +199,7 @@ function rowAtSlot(
   measure: MeasureWidth,
 ): CompactRow {
   const count = Math.max(1, outcome.pictures.model.arrays.length);
-  const setting = { pictures: true, small: true };
+  const setting = { pictures: true, small: true, short: true };
   const paragraphGap = wordsGaps(setting, styles).paragraph;
   const underGap = lineHeight(styles.list) * 0.4;
   const row = picturesRow(outcome, titleTexts, cell, slot, closeUps, settings, styles, measure);

@@ -42,6 +42,8 @@ export interface HandoutContent {
   readonly screening: ScreeningSection | null;
   /** Every sentence taken from the wording module, in the order printed. */
   readonly wordingSentences: readonly string[];
+  /** The same, with each option's sentences in the short form printed with the compact pictures. */
+  readonly shortWordingSentences: readonly string[];
 }
 
 export interface ContentOptions {
@@ -120,6 +122,10 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     wordingSentences: [
       ...population.map((sentence) => sentence.text),
       ...outcomes.flatMap((section) => section.wordingSentences),
+    ],
+    shortWordingSentences: [
+      ...population.map((sentence) => sentence.text),
+      ...outcomes.flatMap((section) => section.shortWordingSentences),
     ],
   };
 }

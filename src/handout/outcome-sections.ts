@@ -9,7 +9,7 @@
 import { type PersonLook, lookOf } from '../core/direction.ts';
 import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import type { PersonGroup } from '../core/types.ts';
-import { handoutSentences } from '../core/wording/topic-wording.ts';
+import { handoutSentences, shortHandoutSentences } from '../core/wording/topic-wording.ts';
 import type { WordingSentence } from '../core/wording/wording-sentence.ts';
 import { type ChartModel, outcomeChart } from '../render/chart-model.ts';
 import { blockLayout, closeUpBlock } from '../render/close-up.ts';
@@ -64,13 +64,23 @@ export interface OutcomeSection {
    * option in the pictures' order: the comparison's is empty.
    */
   readonly paragraphs: readonly (readonly string[])[];
+  /**
+   * The same facts in the short form, for the compact pictures: a paragraph per option of its
+   * change with its range, its certainty statement and the NNT when asked for, the names said
+   * once (`short-sentences.ts`); the comparison's is empty.
+   */
+  readonly shortParagraphs: readonly (readonly string[])[];
   /** The assumptions behind this outcome's numbers, one short line each. */
   readonly assumptions: readonly string[];
   /** Every sentence taken from the wording module, in the order printed with pictures. */
   readonly wordingSentences: readonly string[];
+  /** The same with the short form of each option's sentences, as printed with the compact pictures. */
+  readonly shortWordingSentences: readonly string[];
 }
 
 const FRAME_KINDS: ReadonlySet<string> = new Set(['event-frame', 'free-frame']);
+/** The sentences that carry a range: the full form's, and the short form's change with its range. */
+const RANGE_KINDS: ReadonlySet<string> = new Set(['range', 'short-effect']);
 
 /**
  * The sentences with the level of each range said: once, after the sheet's last range, when
@@ -82,7 +92,7 @@ function withLevels(sentences: readonly WordingSentence[], result: TopicResult, 
     result.outcomes
       .find((outcome) => outcome.outcomeId === sentence.outcomeId)
       ?.options.find((option) => option.optionId === sentence.optionId)?.level ?? null;
-  const ranges = sentences.filter((sentence) => sentence.kind === 'range' && levelOf(sentence) !== null);
+  const ranges = sentences.filter((sentence) => RANGE_KINDS.has(sentence.kind) && levelOf(sentence) !== null);
   const levels = new Set(ranges.map(levelOf));
   const last = ranges[ranges.length - 1];
   const [only] = levels;
@@ -150,6 +160,8 @@ export function outcomeSections(
     (sentence) => sentence.outcomeId !== null && sentence.kind !== 'nnt-none',
   );
   const sentences = withLevels(worded, result, messages);
+  const shortWorded = shortHandoutSentences(result, { showNnt: options.showNnt });
+  const short = withLevels(shortWorded, result, messages);
   return printedOutcomes(result).map((outcome) => {
     const model = outcomeChart(result, outcome.outcomeId);
     const own = sentences.filter((sentence) => sentence.outcomeId === outcome.outcomeId);
@@ -176,12 +188,21 @@ export function outcomeSections(
       paragraphs: model.arrays.map((array) =>
         others.filter((sentence) => sentence.optionId === array.optionId).map((sentence) => sentence.text),
       ),
+      shortParagraphs: model.arrays.map((array) =>
+        short
+          .filter((sentence) => sentence.outcomeId === outcome.outcomeId && sentence.optionId === array.optionId)
+          .map((sentence) => sentence.text),
+      ),
       assumptions: assumptionLines(outcome, messages),
       wordingSentences: [
         ...frames.flat(),
         ...worded
           .filter((sentence) => sentence.outcomeId === outcome.outcomeId && !FRAME_KINDS.has(sentence.kind))
           .map((sentence) => sentence.text),
+      ],
+      shortWordingSentences: [
+        ...frames.flat(),
+        ...shortWorded.filter((sentence) => sentence.outcomeId === outcome.outcomeId).map((sentence) => sentence.text),
       ],
     };
   });

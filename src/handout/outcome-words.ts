@@ -16,6 +16,8 @@ export interface WordsSetting {
   readonly pictures: boolean;
   /** Every outcome's sentences at the list size rather than the body size. */
   readonly small: boolean;
+  /** With `pictures`: each option's sentences in the short form (the compact pictures). */
+  readonly short?: boolean;
 }
 
 /** An outcome's paragraphs as separate blocks, in reading order, `width` millimetres wide. */
@@ -26,7 +28,8 @@ export function outcomePieces(
   styles: HandoutStyles,
   measure: MeasureWidth,
 ): Block[] {
-  const paragraphs = outcome.paragraphs
+  const own = setting.pictures && setting.short === true ? outcome.shortParagraphs : outcome.paragraphs;
+  const paragraphs = own
     .map((paragraph, index) => (setting.pictures ? paragraph : [...(outcome.frames[index] ?? []), ...paragraph]))
     .filter((paragraph) => paragraph.length > 0);
   const [first = [], ...rest] = paragraphs;

@@ -69,7 +69,8 @@ describe('the printed wanted-event handout', () => {
   it('prints the key, the NNT line and the table in words for a good event', () => {
     for (const words of [
       ...(built.pictures ? ['People who gain it because of the option'] : []),
-      'treating 5 people like you with tablet B for 3 days',
+      // Under compact pictures the NNT line is in its short form, after the option's name.
+      built.compactPictures ? 'treating 5 people like you for 3 days' : 'treating 5 people like you with tablet B for 3 days',
       'over the next 3 days',
     ]) {
       expect(text).toContain(words);

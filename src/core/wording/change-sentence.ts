@@ -1,7 +1,7 @@
 import { amountOf } from './amount-of.ts';
 import { amountNumbers, optionCount, optionRisk, optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
-import type { ChangeDirection } from './wording-catalogue.ts';
+import type { Amount, ChangeDirection } from './wording-catalogue.ts';
 import type { WordingSentence } from './wording-sentence.ts';
 
 /** Whether the counts of the words show fewer, more or the same people with the outcome. */
@@ -30,18 +30,30 @@ function hiddenDirection(context: OptionContext): 'fewer' | 'more' | null {
  * @example changeSentence(context).numbers // => { avoided: 4, denominator: 100 }
  */
 export function changeSentence(context: OptionContext): WordingSentence {
-  const { option, denominator, catalogue } = context;
+  const { numbers, ...change } = changeCase(context);
+  const text = context.catalogue.change({ ...optionValues(context), ...change, denominator: context.denominator });
+  return optionSentence(context, 'change', text, numbers);
+}
+
+/** The change an option makes, as the catalogue's values, with the numbers its sentence writes. */
+export function changeCase(context: OptionContext): {
+  readonly direction: ChangeDirection;
+  readonly count: number;
+  readonly either: Amount;
+  readonly hidden: 'fewer' | 'more' | null;
+  readonly numbers: Record<string, number>;
+} {
+  const { option, denominator } = context;
   const direction = changeDirection(context);
   const count = Math.abs(option.wordsPeople.difference);
   const withOutcome = optionCount(option);
   const either = amountOf(withOutcome, denominator, optionRisk(option));
   const hidden = direction === 'same' ? hiddenDirection(context) : null;
-  const text = catalogue.change({ ...optionValues(context), direction, count, either, denominator, hidden });
   const numbers: Record<string, number> =
     direction === 'fewer'
       ? { avoided: count, denominator }
       : direction === 'more'
         ? { caused: count, denominator }
         : { ...amountNumbers(either, withOutcome), denominator, ...(hidden === null ? {} : { lessThan: 1 }) };
-  return optionSentence(context, 'change', text, numbers);
+  return { direction, count, either, hidden, numbers };
 }

@@ -21,25 +21,29 @@ function crossesNoEffect(lower: number | null, upper: number | null): boolean {
  * @example nntSentence(context).numbers // => { nnt: 25, years: 10, nntLimit1: 13, nntLimit2: 100 }
  */
 export function nntSentence(context: OptionContext): WordingSentence {
-  const { option, outcome, years, unit, catalogue } = context;
+  const { option, catalogue } = context;
   const { rounded, label } = option.nnt;
   const values = optionValues(context);
   if (rounded === null || label === null || !Number.isFinite(rounded)) {
     return optionSentence(context, 'nnt-none', catalogue.nntNone(values), {}, 'clinician');
   }
+  const nnt = nntValues(context, label, rounded);
+  const text = catalogue.nnt({ ...values, ...nnt });
+  return optionSentence(context, 'nnt', text, nntNumbers(nnt), 'clinician');
+}
+
+/** The values of an NNT sentence for an option that has one. */
+export function nntValues(context: OptionContext, label: 'NNTB' | 'NNTH', rounded: number) {
+  const { option, outcome, years, unit } = context;
   const difference = option.absoluteReduction;
   const interval = numberNeededInterval(difference, { wanted: outcome.wanted });
-  const text = catalogue.nnt({
-    ...values,
-    label,
-    count: rounded,
-    group: context.group(rounded),
-    years,
-    unit,
-    interval,
-    crossesNoEffect: crossesNoEffect(difference.lower, difference.upper),
-  });
-  const limits = (interval?.match(/\d+/g) ?? []).map(Number);
+  const crosses = crossesNoEffect(difference.lower, difference.upper);
+  return { label, count: rounded, group: context.group(rounded), years, unit, interval, crossesNoEffect: crosses };
+}
+
+/** The numbers an NNT sentence writes: the NNT, the period and the interval's limits. */
+export function nntNumbers(nnt: ReturnType<typeof nntValues>): Record<string, number> {
+  const limits = (nnt.interval?.match(/\d+/g) ?? []).map(Number);
   const limitNumbers = Object.fromEntries(limits.map((limit, index) => [`nntLimit${index + 1}`, limit]));
-  return optionSentence(context, 'nnt', text, { nnt: rounded, years, ...limitNumbers }, 'clinician');
+  return { nnt: nnt.count, years: nnt.years, ...limitNumbers };
 }

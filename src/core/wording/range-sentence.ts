@@ -28,7 +28,7 @@ export function rangeCase(comparison: number, range: { readonly lower: number; r
   return { variant: 'either', fewer: most, more: Math.abs(fewest) };
 }
 
-const rangeNumbers = (found: RangeCase): Record<string, number> => {
+export const rangeNumbers = (found: RangeCase): Record<string, number> => {
   switch (found.variant) {
     case 'avoid':
     case 'get':
@@ -54,19 +54,26 @@ const rangeNumbers = (found: RangeCase): Record<string, number> => {
  * @example rangeSentence(context).numbers // => { low: 2, high: 6, denominator: 100 }
  */
 export function rangeSentence(context: OptionContext): WordingSentence {
-  const { option, denominator, catalogue } = context;
-  const people = peopleOf(option);
+  const { denominator, catalogue } = context;
   const values = optionValues(context);
-  if (people.interventionRange === null) {
-    return optionSentence(context, 'range-unknown', catalogue.rangeUnknown(values), {});
-  }
+  const found = optionRange(context);
+  if (found === null) return optionSentence(context, 'range-unknown', catalogue.rangeUnknown(values), {});
+  const text = catalogue.range({ ...values, range: found, denominator });
+  return optionSentence(context, 'range', text, { ...rangeNumbers(found), denominator });
+}
+
+/**
+ * The plain case of the option's range at the words' denominator, or null when no interval was
+ * given. Counts that show no change over a range that is not exactly no change are `below-one`.
+ */
+export function optionRange(context: OptionContext): RangeCase | null {
+  const { option } = context;
+  const people = peopleOf(option);
+  if (people.interventionRange === null) return null;
   const counted = rangeCase(people.comparison, people.interventionRange);
   const limits = option.interventionRisk;
   const base = option.comparisonRisk.estimate;
-  // Counts that show no change over a range that is not exactly no change: say it is below one person.
   const hidden =
     limits !== null && limits.lower !== null && limits.upper !== null && (limits.lower !== base || limits.upper !== base);
-  const found: RangeCase = counted.variant === 'no-change' && hidden ? { variant: 'below-one' } : counted;
-  const text = catalogue.range({ ...values, range: found, denominator });
-  return optionSentence(context, 'range', text, { ...rangeNumbers(found), denominator });
+  return counted.variant === 'no-change' && hidden ? { variant: 'below-one' } : counted;
 }

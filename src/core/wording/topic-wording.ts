@@ -9,6 +9,7 @@ import { nntSentence } from './nnt-sentence.ts';
 import type { OptionContext } from './option-context.ts';
 import { rangeSentence } from './range-sentence.ts';
 import { relativeSentence } from './relative-sentence.ts';
+import { shortCertaintySentence, shortEffectSentence, shortNntSentence } from './short-sentences.ts';
 import type { WordingMessages } from './wording-catalogue.ts';
 import type { SentenceKind, WordingSentence } from './wording-sentence.ts';
 
@@ -51,6 +52,17 @@ function groupOf(options: WordingOptions, catalogue: WordingMessages): (count: n
   return phrase === undefined ? catalogue.group : (count: number) => (count === 1 ? phrase.one : phrase.other);
 }
 
+function contextOf(
+  outcome: OutcomeResult,
+  option: OptionOutcomeResult,
+  period: { readonly years: number; readonly unit: TimeUnit },
+  denominator: number,
+  options: WordingOptions,
+): OptionContext {
+  const catalogue = options.catalogue ?? english.wording;
+  return { outcome, option, denominator, ...period, catalogue, group: groupOf(options, catalogue) };
+}
+
 function optionWording(
   outcome: OutcomeResult,
   option: OptionOutcomeResult,
@@ -58,9 +70,7 @@ function optionWording(
   denominator: number,
   options: WordingOptions,
 ): OptionWording {
-  const catalogue = options.catalogue ?? english.wording;
-  const group = groupOf(options, catalogue);
-  const context: OptionContext = { outcome, option, denominator, ...period, catalogue, group };
+  const context = contextOf(outcome, option, period, denominator, options);
   const sentences: (WordingSentence | null)[] = [...frequencySentences(context)];
   if (!option.isComparison) {
     sentences.push(
@@ -160,4 +170,32 @@ export function handoutSentences(result: TopicResult, options: HandoutWordingOpt
     }
   }
   return sentences;
+}
+
+/**
+ * The handout's short sentences, for pictures whose captions carry the frames: for every
+ * outcome (headline first) and every option but the comparison, its change with its range,
+ * its certainty statement, and the NNT when asked for, each naming the option once and the
+ * outcome as "it" (see `short-sentences.ts`).
+ *
+ * @param result - a computed topic
+ * @param options - whether to show the NNT, and the catalogue
+ * @returns the short sentences to print, in reading order
+ * @example shortHandoutSentences(result, { showNnt: false })[0]?.kind // => 'short-effect'
+ */
+export function shortHandoutSentences(result: TopicResult, options: HandoutWordingOptions): readonly WordingSentence[] {
+  const outcomes = [...result.outcomes].sort((first, second) => Number(second.isHeadline) - Number(first.isHeadline));
+  const period = { years: result.periodYears, unit: result.periodUnit };
+  return outcomes.flatMap((outcome) =>
+    outcome.options
+      .filter((option) => !option.isComparison)
+      .flatMap((option) => {
+        const context = contextOf(outcome, option, period, result.wordsDenominator, options);
+        return [
+          shortEffectSentence(context),
+          shortCertaintySentence(context),
+          options.showNnt ? shortNntSentence(context) : null,
+        ].filter((found): found is WordingSentence => found !== null);
+      }),
+  );
 }

@@ -97,6 +97,38 @@ export interface WordingMessages {
       readonly direction: 'reduce' | 'increase';
     },
   ) => string;
+  /**
+   * The short form, for a page where the frames are captions under the pictures: the change an
+   * option makes and its range in one sentence, led by the option's name and naming the outcome
+   * only as "it". `range` is null when no interval was given.
+   */
+  readonly shortEffect: (
+    values: OptionValues & {
+      readonly direction: ChangeDirection;
+      readonly count: number;
+      readonly either: Amount;
+      readonly hidden: 'fewer' | 'more' | null;
+      readonly denominator: number;
+      readonly range: RangeCase | null;
+    },
+  ) => string;
+  /** The short form of the GRADE informative statement: the same certainty words, the option as "it". */
+  readonly shortCertainty: (values: {
+    readonly certainty: Certainty;
+    readonly importance: Importance;
+    readonly direction: 'reduce' | 'increase';
+  }) => string;
+  /** The short form of the number needed to treat: the same label and interval, without the names. */
+  readonly shortNnt: (
+    values: {
+      readonly wanted: boolean;
+      readonly label: 'NNTB' | 'NNTH';
+      readonly count: number;
+      readonly group: string;
+      readonly interval: string | null;
+      readonly crossesNoEffect: boolean;
+    } & PeriodValues,
+  ) => string;
   /** A frequency band word with the numbers with and without the option, and the change, beside it. */
   readonly band: (
     values: OptionValues & {

@@ -16,7 +16,12 @@ export type SentenceKind =
   | 'band'
   | 'nnt'
   | 'nnt-none'
-  | 'relative';
+  | 'relative'
+  /** The short forms, for pictures whose captions carry the frames: change with range, certainty, NNT. */
+  | 'short-effect'
+  | 'short-effect-unknown'
+  | 'short-certainty'
+  | 'short-nnt';
 
 /** Who a sentence is written for: the patient handout, or the clinician view only unless asked. */
 export type Audience = 'patient' | 'clinician';

@@ -161,6 +161,53 @@ const hedges = {
   low: { reduce: 'may reduce', increase: 'may increase', trivial: 'may result in little or no difference to' },
 } as const;
 
+/** "a million" or the denominator as a number, after "1 in". */
+const sizeOf = (denominator: number): string => (denominator === 1000000 ? 'a million' : formatCount(denominator));
+
+/** The short form's change, the outcome said as "it": "about 16 in 100 avoid it because of the option". */
+const shortChange = (
+  outcome: string,
+  wanted: boolean,
+  direction: 'fewer' | 'more' | 'same',
+  count: number,
+  either: Amount,
+  hidden: 'fewer' | 'more' | null,
+  denominator: number,
+): string => {
+  const people = `about ${formatCount(count)}`;
+  const size = formatCount(denominator);
+  if (direction === 'same') {
+    return hidden === null
+      ? `little or no difference, ${amountPhrase(either, denominator)} have it either way`
+      : `slightly ${hidden} have it, but the difference is smaller than 1 in ${sizeOf(denominator)}: ${amountPhrase(either, denominator)} either way`;
+  }
+  if (direction === 'fewer' && !wanted)
+    return `${people} in ${size} ${plural(count, 'avoids', 'avoid')} it because of the option`;
+  // A name that starts with a verb ("dying of bowel cancer") does not follow "have".
+  if (startsWithVerb(outcome)) return `it happens to ${people} ${direction} in ${size} because of the option`;
+  return `${people} ${direction} in ${size} ${plural(count, 'has', 'have')} it because of the option`;
+};
+
+/** The short form's range, in brackets after the change; the direction is said when it is not the change's own. */
+const shortRange = (found: RangeCase | null, direction: 'fewer' | 'more' | 'same', denominator: number): string => {
+  if (found === null) return 'the research does not tell us how precise this is';
+  const size = formatCount(denominator);
+  switch (found.variant) {
+    case 'avoid':
+      return `somewhere between ${formatCount(found.low)} and ${formatCount(found.high)}${direction === 'fewer' ? '' : ' fewer'} in ${size}`;
+    case 'get':
+      return `somewhere between ${formatCount(found.low)} and ${formatCount(found.high)}${direction === 'more' ? '' : ' more'} in ${size}`;
+    case 'narrow':
+      return 'with little uncertainty';
+    case 'either':
+      return `anywhere from ${formatCount(found.fewer)} fewer to ${formatCount(found.more)} more in ${size}`;
+    case 'no-change':
+      return 'the whole range is little or no change';
+    case 'below-one':
+      return `the whole range is smaller than 1 in ${sizeOf(denominator)}`;
+  }
+};
+
 /** The English wording catalogue. */
 export const wordingMessages: WordingMessages = {
   group: (count) => plural(count, 'person like you', 'people like you'),
@@ -197,6 +244,19 @@ export const wordingMessages: WordingMessages = {
     }
     const verb = hedges[certainty][importance === 'trivial' ? 'trivial' : direction];
     return `${capitalise(option)} ${verb} the chance of ${outcome}.`;
+  },
+  shortEffect: ({ option, outcome, wanted, direction, count, either, hidden, denominator, range: found }) =>
+    `${capitalise(option)}: ${shortChange(outcome, wanted, direction, count, either, hidden, denominator)} (${shortRange(found, direction, denominator)}).`,
+  shortCertainty: ({ certainty, importance, direction }) =>
+    certainty === 'very-low'
+      ? 'The evidence is very uncertain about its effect.'
+      : `It ${hedges[certainty][importance === 'trivial' ? 'trivial' : direction]} the chance.`,
+  shortNnt: ({ wanted, label, count, group, years, unit, interval, crossesNoEffect }) => {
+    const head = interval === null ? `${label} ${count}` : `${label} ${count} (${interval})`;
+    const treating = `${head}: treating ${count} ${group} for ${duration({ years, unit })}`;
+    const range = crossesNoEffect ? ' Its range includes no difference at all.' : '';
+    if (wanted) return `${treating} means one ${label === 'NNTB' ? 'more' : 'fewer'} of them has it.${range}`;
+    return `${treating} ${label === 'NNTB' ? 'prevents' : 'causes'} it in one of them.${range}`;
   },
   band: ({ option, outcome, band, amount, denominator, comparison, comparisonAmount, direction, count }) => {
     if (band === 'not-known') return `With ${option}, how often ${outcome} happens is not known.`;
