@@ -54,6 +54,17 @@ export interface PeriodValues {
 }
 
 /** The templates of every patient-facing and clinician-facing wording sentence. */
+/** A number needed to treat, as both its sentence forms take it. */
+export interface NntValues {
+  readonly label: 'NNTB' | 'NNTH';
+  readonly count: number;
+  readonly group: string;
+  /** "NNTB 13 to 100", "NNTB 4 to ∞ to NNTH 20", or null when the effect has no interval. */
+  readonly interval: string | null;
+  /** The interval reaches or crosses no difference. */
+  readonly crossesNoEffect: boolean;
+}
+
 export interface WordingMessages {
   /** The reference class for `count` people: "people like you", "person like you". */
   readonly group: (count: number) => string;
@@ -119,16 +130,7 @@ export interface WordingMessages {
     readonly direction: 'reduce' | 'increase';
   }) => string;
   /** The short form of the number needed to treat: the same label and interval, without the names. */
-  readonly shortNnt: (
-    values: {
-      readonly wanted: boolean;
-      readonly label: 'NNTB' | 'NNTH';
-      readonly count: number;
-      readonly group: string;
-      readonly interval: string | null;
-      readonly crossesNoEffect: boolean;
-    } & PeriodValues,
-  ) => string;
+  readonly shortNnt: (values: { readonly wanted: boolean } & NntValues & PeriodValues) => string;
   /** A frequency band word with the numbers with and without the option, and the change, beside it. */
   readonly band: (
     values: OptionValues & {
@@ -144,17 +146,7 @@ export interface WordingMessages {
     },
   ) => string;
   /** Number needed to treat, for benefit (NNTB) or harm (NNTH), with its interval in Altman's (1998) form. */
-  readonly nnt: (
-    values: OptionValues & {
-      readonly label: 'NNTB' | 'NNTH';
-      readonly count: number;
-      readonly group: string;
-      /** "NNTB 13 to 100", "NNTB 4 to ∞ to NNTH 20", or null when the effect has no interval. */
-      readonly interval: string | null;
-      /** The interval reaches or crosses no difference. */
-      readonly crossesNoEffect: boolean;
-    } & PeriodValues,
-  ) => string;
+  readonly nnt: (values: OptionValues & NntValues & PeriodValues) => string;
   /** No number needed to treat exists because the option makes no difference. */
   readonly nntNone: (values: OptionValues) => string;
   /** A relative change, always with the absolute numbers it comes from. */
