@@ -12,7 +12,7 @@ const noop = () => undefined;
 
 describe('HandoutCard', () => {
   // The card says what the printed sheet holds (src/handout/handout-content.ts and page-layout.ts):
-  // every outcome with the same elements, pictures for all outcomes or none, the table, the prompts.
+  // every outcome with the same elements, pictures for all outcomes or none (compact when the page is full), the table, the prompts, the disclosures.
   test('describes what the handout holds, for benefits and side effects alike', () => {
     const first = DEMO_TOPICS[0];
     if (first === undefined) throw new Error('no demonstration topic');
@@ -24,7 +24,8 @@ describe('HandoutCard', () => {
     expect(text).toContain('One printed page, marked illustrative.');
     expect(text).toContain('For every benefit and side effect alike');
     expect(text).toContain('with and without each option, the change, its range, how sure the research is');
-    expect(text).toContain('pictures of every outcome when they all fit, else none');
+    expect(text).toContain('Pictures of every outcome at one size, smaller when the page is full, or none when even small ones');
+    expect(text).toContain('who prepared the sheet, its funding, interests and review date');
     expect(text).not.toContain('the same numbers, charts and words');
   });
 });
