@@ -186,9 +186,19 @@ function picturesRow(
   return { ok: true, block: { items, height: bottom } };
 }
 
+/** How the compact rows set an outcome's words: small, short, the frames under the pictures. */
+const ROW_WORDS = { pictures: true, small: true, short: true } as const;
+
+/** What an outcome's row is the same at every slot width: its heading, and its words set across the page. */
+interface RowText {
+  readonly heading: Block;
+  readonly across: readonly Block[];
+}
+
 /** One outcome's row at one slot width: the lowest way to set its words, or the part that cannot fit. */
 function rowAtSlot(
   outcome: OutcomeSection,
+  { heading, across }: RowText,
   titleTexts: readonly string[],
   cell: number,
   slot: Slot,
@@ -199,18 +209,16 @@ function rowAtSlot(
   measure: MeasureWidth,
 ): CompactRow {
   const count = Math.max(1, outcome.pictures.model.arrays.length);
-  const setting = { pictures: true, small: true, short: true };
-  const paragraphGap = wordsGaps(setting, styles).paragraph;
+  const paragraphGap = wordsGaps(ROW_WORDS, styles).paragraph;
   const underGap = lineHeight(styles.list) * 0.4;
   const row = picturesRow(outcome, titleTexts, cell, slot, closeUps, settings, styles, measure);
   if (!row.ok) return row;
-  const across = outcomePieces(outcome, setting, width, styles, measure);
   // All under the pictures, across the page.
   const candidates: Block[] = [stack([row.block, stack(across, paragraphGap)], underGap)];
   // Or the first paragraphs beside the pictures, in what is left of the width, the rest across the page under them.
   const wordsWidth = width + SLOT_GAP - count * slot.width - WORDS_GUTTER;
   if (wordsWidth >= LEAST_WORDS_WIDTH) {
-    const beside = outcomePieces(outcome, setting, wordsWidth, styles, measure);
+    const beside = outcomePieces(outcome, ROW_WORDS, wordsWidth, styles, measure);
     const wordsX = count * slot.width - SLOT_GAP + WORDS_GUTTER;
     for (let split = 1; split <= beside.length; split += 1) {
       const left = stack(beside.slice(0, split), paragraphGap);
@@ -223,7 +231,6 @@ function rowAtSlot(
     }
   }
   const lowest = candidates.reduce((best, found) => (found.height < best.height ? found : best), candidates[0] ?? EMPTY_BLOCK);
-  const heading = headingBlock(outcome.heading, width, styles, measure);
   return { ok: true, block: stack([heading, lowest], 0) };
 }
 
@@ -260,9 +267,24 @@ export function compactOutcomeRows(
   }
   // The option names head the columns once, over the first row: the slots line up from row to row,
   // and every caption under a picture starts with its option's name.
+  const texts: RowText[] = outcomes.map((outcome) => ({
+    heading: headingBlock(outcome.heading, width, styles, measure),
+    across: outcomePieces(outcome, ROW_WORDS, width, styles, measure),
+  }));
   const tried = slots.map((slot) =>
     outcomes.map((outcome, index) =>
-      rowAtSlot(outcome, index === 0 ? titleTexts : [], scale.cell, slot, closeUps, width, settings, styles, measure),
+      rowAtSlot(
+        outcome,
+        texts[index] ?? { heading: EMPTY_BLOCK, across: [] },
+        index === 0 ? titleTexts : [],
+        scale.cell,
+        slot,
+        closeUps,
+        width,
+        settings,
+        styles,
+        measure,
+      ),
     ),
   );
   const heightOf = (rows: readonly CompactRow[]) =>

@@ -240,11 +240,8 @@ export function layoutPage(
       : [];
   const refused = [...pictureSections, ...compactRows].find((found) => !found.ok);
   const setting = { pictures: mode.pictures, small: mode.small === true };
-  const words = content.outcomes.map((outcome) => outcomeWords(outcome, setting, width, styles, measure));
-  const allWords =
-    mode.columns === true
-      ? twoColumnWords(content.outcomes, setting, width, COLUMN_GUTTER, styles, measure)
-      : stack(words, wordsGaps(setting, styles).outcome);
+  // The compact rows set their own words; every other page sets each outcome's in full.
+  const words = compact ? [] : content.outcomes.map((outcome) => outcomeWords(outcome, setting, width, styles, measure));
   // With pictures, each outcome's sentences sit under its own pictures, and the captions carry the
   // numbers a table would repeat; without them, the table sets the outcomes side by side (band words
   // with the numbers beside them) before every outcome's sentences, unless the page is too tight.
@@ -262,7 +259,12 @@ export function layoutPage(
         })
       : [
           setting.small ? EMPTY_BLOCK : tableBlock(content.table, content.titles, columns, width, settings, styles, measure),
-          section(heading(content.sentencesHeading), allWords),
+          section(
+            heading(content.sentencesHeading),
+            mode.columns === true
+              ? twoColumnWords(content.outcomes, setting, width, COLUMN_GUTTER, styles, measure)
+              : stack(words, wordsGaps(setting, styles).outcome),
+          ),
         ];
   const screening = screeningBlock(content.screening, width, styles, measure);
   const prompts = promptsBlock(content, width, settings, styles, measure);
