@@ -6,7 +6,7 @@
  */
 import type { Topic } from '../core/topic/topic.ts';
 import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
-import { handoutSentences } from '../core/wording/topic-wording.ts';
+import { populationSentence } from '../core/wording/topic-wording.ts';
 import { aboutSheetLine, effectSourceGroups } from './about-sheet.ts';
 import type { HandoutMessages } from './messages/en.ts';
 import { type OutcomeSection, outcomeSections } from './outcome-sections.ts';
@@ -88,7 +88,8 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     years: result.periodYears,
     unit: result.periodUnit,
   };
-  const population = handoutSentences(result, { showNnt: false }).filter((sentence) => sentence.kind === 'population');
+  const sentence = populationSentence(result);
+  const population = sentence === null ? [] : [sentence];
   const evidence = [
     messages.evidenceSummary(topic.evidence.summary),
     messages.evidenceReviewed(messages.formatDate(topic.evidence.reviewed)),

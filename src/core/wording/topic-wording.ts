@@ -103,20 +103,8 @@ function optionWording(
  * @example topicWording(result).outcomes[0]?.options[0]?.sentences[0]?.kind // => 'event-frame'
  */
 export function topicWording(result: TopicResult, options: WordingOptions = {}): TopicWording {
-  const catalogue = options.catalogue ?? english.wording;
-  const population = result.population.trim();
   return {
-    population:
-      population === ''
-        ? null
-        : {
-            kind: 'population',
-            audience: 'patient',
-            outcomeId: null,
-            optionId: null,
-            text: catalogue.population({ population, group: groupOf(options, catalogue)(2) }),
-            numbers: {},
-          },
+    population: populationSentence(result, options),
     outcomes: result.outcomes.map((outcome) => ({
       outcomeId: outcome.outcomeId,
       name: outcome.name,
@@ -127,6 +115,25 @@ export function topicWording(result: TopicResult, options: WordingOptions = {}):
         optionWording(outcome, option, { years: result.periodYears, unit: result.periodUnit }, result.wordsDenominator, options),
       ),
     })),
+  };
+}
+
+/**
+ * Who the numbers are for, as a sentence from the topic's population; null when it is empty.
+ *
+ * @example populationSentence(result)?.kind // => 'population'
+ */
+export function populationSentence(result: TopicResult, options: WordingOptions = {}): WordingSentence | null {
+  const catalogue = options.catalogue ?? english.wording;
+  const population = result.population.trim();
+  if (population === '') return null;
+  return {
+    kind: 'population',
+    audience: 'patient',
+    outcomeId: null,
+    optionId: null,
+    text: catalogue.population({ population, group: groupOf(options, catalogue)(2) }),
+    numbers: {},
   };
 }
 
