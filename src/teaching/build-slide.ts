@@ -4,7 +4,7 @@
 import { framingSlide } from './framing-slide.ts';
 import { FORMAT_SLIDES } from './format-slides.ts';
 import { teachingMessagesEn } from './messages/en.ts';
-import type { TeachingMessages } from './messages/en.ts';
+import type { TeachingMessages } from './messages/teaching-messages.ts';
 import type { PresentationItem } from './presentation-item.ts';
 import type { Slide } from './slide-model.ts';
 import { STORY_SLIDES, patientWordsParts } from './story-slides.ts';

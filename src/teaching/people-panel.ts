@@ -8,7 +8,7 @@ import type { PeopleGroups } from '../core/types.ts';
 import { iconArrayLayout } from '../render/icon-array-layout.ts';
 import type { Arrangement } from '../render/icon-array-layout.ts';
 import { type RankSpan, isUncertain } from '../render/uncertain-people.ts';
-import type { TeachingMessages } from './messages/en.ts';
+import type { TeachingMessages } from './messages/teaching-messages.ts';
 import type { PanelChip, PeoplePanel, PersonLook } from './slide-model.ts';
 
 /** The order of the counts under an array: the fill order, with the outlined people after the changed ones. */

@@ -5,7 +5,7 @@
  */
 import type { PersonLook as ChangeLook } from '../core/direction.ts';
 import type { IconArrayLayout } from '../render/icon-array-layout.ts';
-import type { EvidenceWords } from './messages/en.ts';
+import type { EvidenceWords } from './messages/teaching-messages.ts';
 import type { StepKind } from './teaching-steps.ts';
 
 /**

@@ -11,7 +11,7 @@ import type { TopicWording } from '../core/wording/topic-wording.ts';
 import type { SentenceKind } from '../core/wording/wording-sentence.ts';
 import { uncertainRanks } from '../render/uncertain-people.ts';
 import { capitalise } from './messages/en.ts';
-import type { Period, TeachingMessages } from './messages/en.ts';
+import type { Period, TeachingMessages } from './messages/teaching-messages.ts';
 import { changedGroup, peoplePanel, totalsOnly } from './people-panel.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { PresentationItem } from './presentation-item.ts';

@@ -4,6 +4,7 @@
  * second language is a sibling module with the same shape ({@link HandoutMessages}).
  */
 import { formatCount, formatPercent } from '../../core/messages/format-number.ts';
+import { capitalise } from '../../core/messages/en/english-grammar.ts';
 import { duration } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
@@ -126,8 +127,6 @@ const MONTHS = [
   'November',
   'December',
 ];
-
-const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
 
 /** "the next 10 years", "the next 3 days", "the next year". */
 const period = ({ years, unit }: SheetValues): string => {

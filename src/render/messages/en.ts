@@ -4,7 +4,8 @@
  * module with the same shape ({@link ChartMessages}).
  */
 import { formatCount, formatPercent } from '../../core/messages/format-number.ts';
-import { duration, startsWithVerb } from '../../core/messages/en/wording.ts';
+import { plural, startsWithVerb } from '../../core/messages/en/english-grammar.ts';
+import { duration } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { PersonGroup } from '../../core/types.ts';
 
@@ -64,8 +65,6 @@ export interface BelowOneValues {
   /** Null below one in a million. */
   readonly wordsDenominator: number | null;
 }
-
-const plural = (count: number, one: string, many: string) => (count === 1 ? one : many);
 
 /** A name as it reads inside a sentence: "Option A" → "option A"; acronyms such as "ACE inhibitor" kept. */
 function inSentence(name: string): string {

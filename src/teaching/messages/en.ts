@@ -3,27 +3,15 @@
  * each format demonstration with its source, the controls, and the teaching-set file
  * messages. Slide builders pass numbers and names; only this file holds English.
  */
+import { capitalise, plural, startsWithVerb } from '../../core/messages/en/english-grammar.ts';
 import { UNIT_NAMES_EN } from '../../core/messages/en/time-words.ts';
 import { amountIn } from '../../core/time-unit.ts';
-import type { TimeUnit } from '../../core/time-unit.ts';
-import type { StepKind } from '../teaching-steps.ts';
+import type { Period, TeachingMessages, TeachingPresenterMessages, TeachingSlideMessages } from './teaching-messages.ts';
 
-/** A finding from the research and where it was published. */
-export interface EvidenceWords {
-  readonly finding: string;
-  readonly source: string;
-}
-
-const plural = (count: number, one: string, other: string): string => (count === 1 ? one : other);
+export type { EvidenceWords, Period, TeachingMessages } from './teaching-messages.ts';
 
 /** A name as it starts a line: "no tablet" → "No tablet". */
-export const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
-
-/** A period as the topic gives it: its length in years and the unit it was given in. */
-export interface Period {
-  readonly years: number;
-  readonly unit: TimeUnit;
-}
+export { capitalise };
 
 /**
  * A period with its preposition, in the unit given: "over 10 years", "over the next 6 months",
@@ -51,7 +39,6 @@ export function shortDecimal(value: number): string {
 }
 
 /** Outcome names starting with a verb in -ing ("dying of …") read "end up dying"; others "have a stroke". */
-const startsWithVerb = (outcome: string): boolean => /^[a-z]{2,}ing$/i.test(outcome.trim().split(/\s+/)[0] ?? '');
 const have = (outcome: string, count: number): string =>
   startsWithVerb(outcome) ? plural(count, 'ends up', 'end up') : plural(count, 'has', 'have');
 const get = (outcome: string, count: number): string =>
@@ -68,7 +55,8 @@ const changedVerb = (group: 'prevented' | 'caused', wanted: boolean, outcome: st
   return group === 'prevented' ? plural(count, 'avoids', 'avoid') : get(outcome, count);
 };
 
-export const teachingMessagesEn = {
+/** The English words drawn on the slides. */
+export const teachingSlideMessagesEn: TeachingSlideMessages = {
   /** The name of each step, as the slide's heading and in the step list. */
   stepNames: {
     title: 'The decision',
@@ -82,36 +70,6 @@ export const teachingMessagesEn = {
     denominator: '100 or 1000 people?',
     arrangement: 'Grouped or scattered?',
     incremental: 'Two totals, or the change itself?',
-  } satisfies Record<StepKind, string>,
-
-  view: {
-    label: 'Teaching view',
-    progress: (step: number, steps: number) => `${step} / ${steps}`,
-    progressLabel: (step: number, steps: number, topic: number, topics: number) =>
-      topics > 1 ? `Slide ${step} of ${steps}, topic ${topic} of ${topics}` : `Slide ${step} of ${steps}`,
-    topicOf: (topic: number, topics: number) => `Topic ${topic} of ${topics}`,
-    previous: 'Back',
-    next: 'Next',
-    leave: 'Leave',
-    savePng: 'PNG',
-    saveSvg: 'SVG',
-    saveSlideGroup: 'Save this slide',
-    setGroup: 'Teaching set',
-    menu: 'File…',
-    cannotPresent: (detail: string) => `This topic cannot be presented yet: ${detail}`,
-    openSet: 'Open set…',
-    saveSet: 'Save set',
-    example: 'Example set',
-    controls: 'Presentation controls',
-    keysHint: 'Arrow keys, Page Up/Down or a clicker to step; Esc to leave.',
-    illustrative: 'Illustrative',
-    illustrativeLong: 'Illustrative: invented numbers, not from a real study',
-    opened: (title: string, count: number) => `Opened the teaching set “${title}”: ${count} ${plural(count, 'topic', 'topics')}.`,
-    saved: (name: string) => `Saved “${name}”.`,
-    exported: (name: string) => `Saved the slide as “${name}”.`,
-    exportFailed: (detail: string) => `The slide could not be saved: ${detail}.`,
-    notOpened: (message: string) => `${message} The presentation is unchanged.`,
-    dismiss: 'Dismiss',
   },
 
   title: {
@@ -237,7 +195,40 @@ export const teachingMessagesEn = {
       finding: 'Side effects: the extra risk on its own eased worry; in words alone it was less clear, with pictures clearer.',
       source: 'Zikmund-Fisher, J Health Commun 2008;13:107 · Patient Educ Couns 2008;73:209',
     },
-  } satisfies Record<string, EvidenceWords>,
+  },
+};
+
+/** The English controls and messages of the teaching view, and of teaching-set files. */
+export const teachingPresenterMessagesEn: TeachingPresenterMessages = {
+  view: {
+    label: 'Teaching view',
+    progress: (step: number, steps: number) => `${step} / ${steps}`,
+    progressLabel: (step: number, steps: number, topic: number, topics: number) =>
+      topics > 1 ? `Slide ${step} of ${steps}, topic ${topic} of ${topics}` : `Slide ${step} of ${steps}`,
+    topicOf: (topic: number, topics: number) => `Topic ${topic} of ${topics}`,
+    previous: 'Back',
+    next: 'Next',
+    leave: 'Leave',
+    savePng: 'PNG',
+    saveSvg: 'SVG',
+    saveSlideGroup: 'Save this slide',
+    setGroup: 'Teaching set',
+    menu: 'File…',
+    cannotPresent: (detail: string) => `This topic cannot be presented yet: ${detail}`,
+    openSet: 'Open set…',
+    saveSet: 'Save set',
+    example: 'Example set',
+    controls: 'Presentation controls',
+    keysHint: 'Arrow keys, Page Up/Down or a clicker to step; Esc to leave.',
+    illustrative: 'Illustrative',
+    illustrativeLong: 'Illustrative: invented numbers, not from a real study',
+    opened: (title: string, count: number) => `Opened the teaching set “${title}”: ${count} ${plural(count, 'topic', 'topics')}.`,
+    saved: (name: string) => `Saved “${name}”.`,
+    exported: (name: string) => `Saved the slide as “${name}”.`,
+    exportFailed: (detail: string) => `The slide could not be saved: ${detail}.`,
+    notOpened: (message: string) => `${message} The presentation is unchanged.`,
+    dismiss: 'Dismiss',
+  },
 
   file: {
     notJson: (name: string, detail: string) => `“${name}” is not a readable teaching set: it is not complete JSON (${detail}).`,
@@ -269,6 +260,7 @@ export const teachingMessagesEn = {
       `“${name}”, topic ${item} (“${path}”) could not be read: ${detail}.`,
     setSuffix: '.teaching.json',
   },
-} as const;
+};
 
-export type TeachingMessages = typeof teachingMessagesEn;
+/** Every English word of the teaching view, slides and presenter together. */
+export const teachingMessagesEn: TeachingMessages = { ...teachingSlideMessagesEn, ...teachingPresenterMessagesEn };

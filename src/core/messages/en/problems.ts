@@ -1,6 +1,7 @@
 import type { ProblemCode, ProblemValues } from '../../problems.ts';
 import { isEffectMeasure } from '../../effect-measures.ts';
 import { formatPercent } from '../format-number.ts';
+import { capitalise } from './english-grammar.ts';
 import { measureNamesEn } from './measure-names.ts';
 
 type Render = (values: ProblemValues) => string;
@@ -32,8 +33,6 @@ const measureValue = (values: ProblemValues, key: string): string => {
 /** The fix to suggest when a risk would leave 0% to 100%: an odds ratio only for risk and hazard ratios. */
 const outsideFix = (values: ProblemValues, what: string): string =>
   text(values, 'measure') === 'rr' ? `Check the ${what}, or enter the effect as an odds ratio.` : `Check the ${what}.`;
-
-const capitalise = (phrase: string): string => phrase.charAt(0).toUpperCase() + phrase.slice(1);
 
 /** English sentences for every problem code: what is wrong, and how to fix it. */
 export const problemMessages: Record<ProblemCode, Render> = {

@@ -7,46 +7,10 @@ import { amountIn } from '../../time-unit.ts';
 import type { Amount, FrequencyBand, PeriodValues, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
 import { UNIT_NAMES_EN, amountWithUnit } from './time-words.ts';
 import { formatCount, formatDecimal } from '../format-number.ts';
+import { capitalise, plural, startsWithVerb } from './english-grammar.ts';
 
-/** English plural rule: the `one` form for exactly 1, the `other` form otherwise. */
-export function plural(count: number, one: string, other: string): string {
-  return count === 1 ? one : other;
-}
+export { plural, startsWithVerb } from './english-grammar.ts';
 
-/** A sentence starts with a capital; names typed with a capital are left as they are. */
-const capitalise = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
-
-/**
- * Outcome names are usually noun phrases ("a stroke": "will have a stroke"). A few
- * start with a verb in -ing ("dying of bowel cancer"); those read "will end up dying".
- */
-const VERBS_IN_ING = new Set([
-  'becoming',
-  'being',
-  'breaking',
-  'catching',
-  'developing',
-  'dying',
-  'falling',
-  'feeling',
-  'getting',
-  'going',
-  'having',
-  'leaving',
-  'living',
-  'losing',
-  'needing',
-  'returning',
-  'spending',
-  'staying',
-  'starting',
-  'stopping',
-  'taking',
-  'using',
-]);
-/** True when an outcome name starts with a verb in -ing ("dying of bowel cancer"). */
-export const startsWithVerb = (outcome: string): boolean =>
-  VERBS_IN_ING.has((outcome.trim().split(/\s+/)[0] ?? '').toLowerCase());
 /** "have" / "get" before a noun phrase, "end up" before a verb in -ing. */
 const haveVerb = (outcome: string): string => (startsWithVerb(outcome) ? 'end up' : 'have');
 const getVerb = (outcome: string, count: number): string =>
