@@ -1,8 +1,6 @@
 /** The English words of every layer, loaded with the app (English is the default and the fallback of none). */
 import { wordingMessages } from '../core/messages/en/wording.ts';
-import { handoutMessagesEn } from '../handout/messages/en.ts';
 import { chartMessagesEn } from '../render/messages/en.ts';
-import { teachingMessagesEn } from '../teaching/messages/en.ts';
 import { shellMessagesEn } from '../../electron/main/messages/en.ts';
 import { uiMessagesEn } from '../ui/messages/en.ts';
 import type { InterfaceWords, Locales, PatientWords } from './locale-bundle.ts';
@@ -11,14 +9,11 @@ export const englishPatientWords: PatientWords = {
   language: 'en',
   wording: wordingMessages,
   chart: chartMessagesEn,
-  handout: handoutMessagesEn,
-  slides: teachingMessagesEn,
 };
 
 export const englishInterfaceWords: InterfaceWords = {
   ui: uiMessagesEn,
   shell: shellMessagesEn,
-  presenter: teachingMessagesEn.view,
 };
 
 export const englishLocales: Locales = { interface: englishInterfaceWords, patient: englishPatientWords };

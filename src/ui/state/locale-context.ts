@@ -5,7 +5,7 @@
  * by constructor.
  */
 import { getContext, hasContext, setContext } from 'svelte';
-import type { InterfaceWords, Locales, PatientWords, TeachingPresenterMessages } from '../../locale/locale-bundle.ts';
+import type { InterfaceWords, Locales, PatientWords } from '../../locale/locale-bundle.ts';
 import type { UiMessages } from '../messages/ui-messages.ts';
 
 const LOCALES = Symbol('locales');
@@ -32,7 +32,6 @@ function source(): LocaleSource {
 
 export const getInterfaceWords = (): InterfaceWords => source().current.interface;
 export const getUiWords = (): UiMessages => source().current.interface.ui;
-export const getPresenterWords = (): TeachingPresenterMessages => source().current.interface.presenter;
 /** The patient words of the moment: call inside `$derived` so a change of topic language is followed. */
 export const getPatientWords = (): (() => PatientWords) => {
   const found = source();
