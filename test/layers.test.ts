@@ -19,7 +19,8 @@ const ALLOWED: Readonly<Record<string, readonly string[]>> = {
   'src/cli': ['src/core', 'src/render', 'src/handout', 'src/teaching', 'src/shared'],
   'src/shared': ['src/core'],
   'src/web': ['src/core', 'src/shared'],
-  'src/ui': ['src/core', 'src/render', 'src/handout', 'src/teaching', 'src/shared'],
+  'src/locale': ['src/core', 'src/render', 'src/handout', 'src/teaching', 'src/ui', 'electron'],
+  'src/ui': ['src/core', 'src/render', 'src/handout', 'src/teaching', 'src/shared', 'src/locale'],
   electron: ['src/core', 'src/shared'],
 };
 
@@ -92,6 +93,14 @@ describe('the layers', () => {
         if (targetLayer === null || targetLayer === layer) continue;
         // The renderer may read the desktop shell's contract, for its types only.
         if (layer === 'src/ui' && targetLayer === 'electron' && line.typeOnly) continue;
+        // The locale bundle gathers the desktop shell's words with every other layer's, and nothing else of the shell.
+        // and the interface's words from the app, and nothing else of either.
+        const gathered =
+          targetLayer === 'electron' ? 'electron/main/messages/' : targetLayer === 'src/ui' ? 'src/ui/messages/' : null;
+        if (layer === 'src/locale' && gathered !== null && !target.startsWith(gathered)) {
+          breaches.push(`${file} imports ${target}`);
+          continue;
+        }
         if (!(ALLOWED[layer] ?? []).includes(targetLayer)) breaches.push(`${file} imports ${target}`);
       }
     }

@@ -1,6 +1,8 @@
 import path from 'node:path';
 import type { MenuItemConstructorOptions } from 'electron';
 import type { ShellCommand } from '../contract/ipc-contract.ts';
+import { shellMessagesEn } from './messages/en.ts';
+import type { ShellMessages } from './messages/shell-messages.ts';
 
 /** What the menu needs from the running shell. */
 export interface MenuSettings {
@@ -10,6 +12,8 @@ export interface MenuSettings {
   readonly sendCommand: (command: ShellCommand) => void;
   readonly clearRecentFiles: () => void;
   readonly showAbout: () => void;
+  /** The menu's words (English unless given). */
+  readonly words?: ShellMessages;
 }
 
 function commandItem(
@@ -28,15 +32,16 @@ function commandItem(
 }
 
 function recentMenu(settings: MenuSettings): MenuItemConstructorOptions {
+  const menu = (settings.words ?? shellMessagesEn).menu;
   const files: MenuItemConstructorOptions[] = settings.recentFiles.map((filePath) =>
     commandItem(path.basename(filePath), null, { name: 'open-recent', recentPath: filePath }, settings),
   );
   return {
-    label: 'Open Recent',
+    label: menu.openRecent,
     submenu: [
-      ...(files.length === 0 ? [{ label: 'No recent files', enabled: false }] : files),
+      ...(files.length === 0 ? [{ label: menu.noRecent, enabled: false }] : files),
       { type: 'separator' },
-      { label: 'Clear Recent', enabled: files.length > 0, click: settings.clearRecentFiles },
+      { label: menu.clearRecent, enabled: files.length > 0, click: settings.clearRecentFiles },
     ],
   };
 }
@@ -49,25 +54,26 @@ function recentMenu(settings: MenuSettings): MenuItemConstructorOptions {
  */
 export function buildMenuTemplate(settings: MenuSettings): MenuItemConstructorOptions[] {
   const isMac = settings.platform === 'darwin';
-  const about: MenuItemConstructorOptions = { label: 'About Chancewise', click: settings.showAbout };
+  const menu = (settings.words ?? shellMessagesEn).menu;
+  const about: MenuItemConstructorOptions = { label: menu.about, click: settings.showAbout };
   const fileMenu: MenuItemConstructorOptions = {
-    label: 'File',
+    label: menu.file,
     submenu: [
-      commandItem('New Topic', 'CmdOrCtrl+N', { name: 'new' }, settings),
-      commandItem('Open…', 'CmdOrCtrl+O', { name: 'open' }, settings),
+      commandItem(menu.newTopic, 'CmdOrCtrl+N', { name: 'new' }, settings),
+      commandItem(menu.open, 'CmdOrCtrl+O', { name: 'open' }, settings),
       recentMenu(settings),
       { type: 'separator' },
-      commandItem('Save', 'CmdOrCtrl+S', { name: 'save' }, settings),
-      commandItem('Save As…', 'CmdOrCtrl+Shift+S', { name: 'save-as' }, settings),
+      commandItem(menu.save, 'CmdOrCtrl+S', { name: 'save' }, settings),
+      commandItem(menu.saveAs, 'CmdOrCtrl+Shift+S', { name: 'save-as' }, settings),
       { type: 'separator' },
-      commandItem('Export Handout as PDF…', 'CmdOrCtrl+E', { name: 'export-handout' }, settings),
-      commandItem('Print Handout…', 'CmdOrCtrl+P', { name: 'print-handout' }, settings),
+      commandItem(menu.exportHandout, 'CmdOrCtrl+E', { name: 'export-handout' }, settings),
+      commandItem(menu.printHandout, 'CmdOrCtrl+P', { name: 'print-handout' }, settings),
       { type: 'separator' },
       isMac ? { role: 'close' } : { role: 'quit' },
     ],
   };
   const editMenu: MenuItemConstructorOptions = {
-    label: 'Edit',
+    label: menu.edit,
     submenu: [
       { role: 'undo' },
       { role: 'redo' },
@@ -79,7 +85,7 @@ export function buildMenuTemplate(settings: MenuSettings): MenuItemConstructorOp
     ],
   };
   const viewMenu: MenuItemConstructorOptions = {
-    label: 'View',
+    label: menu.view,
     submenu: [
       { role: 'resetZoom' },
       { role: 'zoomIn' },
@@ -91,7 +97,7 @@ export function buildMenuTemplate(settings: MenuSettings): MenuItemConstructorOp
   const windowMenu: MenuItemConstructorOptions = { role: 'windowMenu' };
   if (isMac) {
     const appMenu: MenuItemConstructorOptions = {
-      label: 'Chancewise',
+      label: menu.app,
       submenu: [
         about,
         { type: 'separator' },
@@ -104,6 +110,6 @@ export function buildMenuTemplate(settings: MenuSettings): MenuItemConstructorOp
     };
     return [appMenu, fileMenu, editMenu, viewMenu, windowMenu];
   }
-  const helpMenu: MenuItemConstructorOptions = { label: 'Help', submenu: [about] };
+  const helpMenu: MenuItemConstructorOptions = { label: menu.help, submenu: [about] };
   return [fileMenu, editMenu, viewMenu, windowMenu, helpMenu];
 }

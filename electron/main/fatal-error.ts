@@ -1,3 +1,5 @@
+import { shellMessagesEn } from './messages/en.ts';
+
 /** What reporting a fatal error needs (Electron's `dialog.showErrorBox` and `app.exit` in the app). */
 export interface FatalErrorSettings {
   readonly log: (line: string) => void;
@@ -9,13 +11,10 @@ export interface FatalErrorSettings {
 }
 
 /** The title of the error box. */
-export const FATAL_ERROR_TITLE = 'Chancewise stopped because of an internal error';
+export const FATAL_ERROR_TITLE = shellMessagesEn.fatalErrorTitle;
 
 /** What the person is told. */
-export const FATAL_ERROR_MESSAGE =
-  'Chancewise met an error it could not recover from and will close. Changes made more than a few seconds ago ' +
-  'are kept and will be offered when you start it again. The details are in the log file (main.log in the ' +
-  'app’s logs folder); please pass it on to whoever supports Chancewise for you.';
+export const FATAL_ERROR_MESSAGE = shellMessagesEn.fatalErrorMessage;
 
 function describe(error: unknown): string {
   if (error instanceof Error) return error.stack ?? `${error.name}: ${error.message}`;

@@ -9,6 +9,7 @@ import type { ShellActions } from './ipc/ipc-handlers.ts';
 import { createPendingWork } from './pending-work.ts';
 import { findRecoverySnapshot } from './snapshot/find-recovery-snapshot.ts';
 import { loadSnapshotKey } from './snapshot/snapshot-key.ts';
+import { shellMessagesEn } from './messages/en.ts';
 import { createSnapshotStore } from './snapshot/snapshot-store.ts';
 import { openMainWindow } from './window/window-life.ts';
 
@@ -112,7 +113,7 @@ export async function startShellController(settings: ShellControllerSettings): P
   app.setAboutPanelOptions({
     applicationName: 'Chancewise',
     applicationVersion: app.getVersion(),
-    credits: 'Absolute risks, icon arrays and a one-page handout, offline.',
+    credits: shellMessagesEn.aboutCredits,
   });
 
   return {

@@ -3,6 +3,7 @@
  * CSS custom properties, then the app itself.
  */
 import { mount } from 'svelte';
+import { englishLocales } from '../locale/english.ts';
 import { colourPalette } from '../render/palette.ts';
 import App from './App.svelte';
 import { browserPlatform } from './platform/browser-platform.ts';
@@ -25,4 +26,11 @@ const target = document.getElementById('app');
 if (target === null) throw new Error('the page has no #app element');
 // The desktop shell's preload puts its API on window.chancewise; a plain browser has none.
 const shell = window.chancewise;
-mount(App, { target, props: { platform: shell === undefined ? browserPlatform() : desktopPlatform(shell), demos: DEMO_TOPICS } });
+mount(App, {
+  target,
+  props: {
+    platform: shell === undefined ? browserPlatform() : desktopPlatform(shell),
+    demos: DEMO_TOPICS,
+    locales: englishLocales,
+  },
+});

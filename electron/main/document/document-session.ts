@@ -1,7 +1,7 @@
 import path from 'node:path';
 import type { OpenedDocument, SavedDocument, SnapshotRequest, SnapshotSaved } from '../../contract/ipc-contract.ts';
 import { saveWithBackup } from '../files/save-with-backup.ts';
-import { ShellFailure } from '../ipc/shell-messages.ts';
+import { ShellFailure } from '../ipc/shell-failure.ts';
 import { fileLabel } from '../log/log-redaction.ts';
 import type { PendingWork } from '../pending-work.ts';
 import type { ValidSnapshotCandidate } from '../snapshot/choose-recovery-snapshot.ts';

@@ -2,7 +2,7 @@ import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import type { ExportedHandout, HandoutPdfRequest, PrintOutcome } from '../../contract/ipc-contract.ts';
 import { writeFileAtomic } from '../files/atomic-write.ts';
-import { ShellFailure } from '../ipc/shell-messages.ts';
+import { ShellFailure } from '../ipc/shell-failure.ts';
 import type { ShellDialogs } from '../window/shell-dialogs.ts';
 
 /** The handout's name with ".pdf" added when missing (any case counts). */

@@ -2,7 +2,7 @@ import { readTopicFile } from '../../../src/core/topic/topic-file.ts';
 import { nodeRegularFileSystem, readRegularFile, RegularFileError } from '../../../src/shared/regular-file.ts';
 import type { RegularFileContent, RegularFileSystem } from '../../../src/shared/regular-file.ts';
 import { PAYLOAD_LIMITS } from '../ipc/ipc-payloads.ts';
-import { ShellFailure } from '../ipc/shell-messages.ts';
+import { ShellFailure } from '../ipc/shell-failure.ts';
 
 /** A topic file read from disk and found valid. */
 export interface TopicDocument {

@@ -21,7 +21,7 @@ import {
   checkSnapshotRequest,
 } from './ipc-payloads.ts';
 import type { PayloadCheck } from './ipc-payloads.ts';
-import { SHELL_MESSAGES, ShellFailure } from './shell-messages.ts';
+import { SHELL_MESSAGES, ShellFailure } from './shell-failure.ts';
 
 /**
  * What the shell does for each request, once the sender and the payload have been checked.

@@ -2,6 +2,8 @@ import path from 'node:path';
 import { dialog } from 'electron';
 import type { BrowserWindow } from 'electron';
 import { OPEN_DIALOG_FILTERS, SAVE_DIALOG_FILTERS, withTopicExtension } from '../document/topic-file-type.ts';
+import { shellMessagesEn } from '../messages/en.ts';
+import type { ShellMessages } from '../messages/shell-messages.ts';
 
 /** What the person chose when closing with unsaved changes. */
 export type CloseChoice = 'save' | 'discard' | 'cancel';
@@ -50,11 +52,12 @@ function chosenPath(answer: { canceled: boolean; filePath?: string }): string | 
 }
 
 /** The dialogs for one window. */
-export function createShellDialogs(window: BrowserWindow): ShellDialogs {
+export function createShellDialogs(window: BrowserWindow, words: ShellMessages = shellMessagesEn): ShellDialogs {
+  const said = words.dialogs;
   return {
     async chooseTopicToOpen(nearFile) {
       const answer = await dialog.showOpenDialog(window, {
-        title: 'Open topic',
+        title: said.openTitle,
         filters: OPEN_DIALOG_FILTERS,
         properties: ['openFile'],
         ...(nearFile === null ? {} : { defaultPath: path.dirname(nearFile) }),
@@ -64,7 +67,7 @@ export function createShellDialogs(window: BrowserWindow): ShellDialogs {
     },
     async chooseTopicSavePath(suggested) {
       const answer = await dialog.showSaveDialog(window, {
-        title: 'Save topic',
+        title: said.saveTitle,
         defaultPath: suggested,
         filters: SAVE_DIALOG_FILTERS,
         properties: ['showOverwriteConfirmation', 'createDirectory'],
@@ -74,9 +77,9 @@ export function createShellDialogs(window: BrowserWindow): ShellDialogs {
     },
     async chooseHandoutSavePath(suggested) {
       const answer = await dialog.showSaveDialog(window, {
-        title: 'Export handout',
+        title: said.exportTitle,
         defaultPath: suggested,
-        filters: [{ name: 'PDF document', extensions: ['pdf'] }],
+        filters: [{ name: said.pdfFilter, extensions: ['pdf'] }],
         properties: ['showOverwriteConfirmation', 'createDirectory'],
       });
       const chosen = chosenPath(answer);
@@ -86,10 +89,10 @@ export function createShellDialogs(window: BrowserWindow): ShellDialogs {
     async confirmRecovery(question) {
       const answer = await dialog.showMessageBox(window, {
         type: 'question',
-        buttons: ['Restore', 'Discard'],
+        buttons: [...said.recoveryButtons],
         defaultId: 0,
         cancelId: 1,
-        message: 'Chancewise closed before your last changes were saved.',
+        message: said.recoveryMessage,
         detail: recoveryDetail(question),
       });
       return answer.response === 0;
@@ -97,33 +100,30 @@ export function createShellDialogs(window: BrowserWindow): ShellDialogs {
     async confirmReplace(fileName) {
       const answer = await dialog.showMessageBox(window, {
         type: 'question',
-        buttons: ['Open', 'Cancel'],
+        buttons: [...said.replaceButtons],
         defaultId: 1,
         cancelId: 1,
-        message: `Open ${fileName}?`,
-        detail: 'The topic open now has changes that are not saved; they will be lost.',
+        message: said.replaceMessage(fileName),
+        detail: said.replaceDetail,
       });
       return answer.response === 0;
     },
     async chooseOnClose() {
       const answer = await dialog.showMessageBox(window, {
         type: 'question',
-        buttons: ['Save…', 'Close without saving', 'Cancel'],
+        buttons: [...said.closeButtons],
         defaultId: 0,
         cancelId: 2,
-        message: 'Save the changes to this topic before closing?',
-        detail: 'If you close without saving, the changes are lost.',
+        message: said.closeMessage,
+        detail: said.closeDetail,
       });
       return answer.response === 0 ? 'save' : answer.response === 1 ? 'discard' : 'cancel';
     },
     showOpenFailure(fileName, detail) {
-      void dialog.showMessageBox(window, { type: 'error', message: `Could not open ${fileName}`, detail });
+      void dialog.showMessageBox(window, { type: 'error', message: said.openFailure(fileName), detail });
     },
     showCrashLoop() {
-      dialog.showErrorBox(
-        'Chancewise stopped working',
-        'The window stopped several times in a row. Your last changes are kept and will be offered when Chancewise starts again.',
-      );
+      dialog.showErrorBox(said.crashLoopTitle, said.crashLoopMessage);
     },
   };
 }

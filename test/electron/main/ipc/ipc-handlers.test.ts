@@ -6,7 +6,7 @@ import { registerIpcHandlers } from '../../../../electron/main/ipc/ipc-handlers.
 import type { IpcMainLike, ShellActions } from '../../../../electron/main/ipc/ipc-handlers.ts';
 import type { IpcEventLike } from '../../../../electron/main/ipc/ipc-guard.ts';
 import { PAYLOAD_LIMITS } from '../../../../electron/main/ipc/ipc-payloads.ts';
-import { ShellFailure } from '../../../../electron/main/ipc/shell-messages.ts';
+import { ShellFailure } from '../../../../electron/main/ipc/shell-failure.ts';
 
 interface FakeContents {
   readonly id: number;

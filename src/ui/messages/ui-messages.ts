@@ -1,0 +1,102 @@
+/**
+ * The words of the clinician's interface, grouped by the part of the screen that shows them.
+ * Types only: a locale (`en.ts` beside this file) provides every one of them, and components
+ * read them through the locale context (`state/locale-context.ts`), state classes through
+ * their constructor. A function takes the values a sentence needs and returns it finished.
+ */
+
+/** The page around the two columns. */
+export interface AppFrameMessages {
+  readonly skipLinks: string;
+  readonly skipToTopic: string;
+  readonly skipToResults: string;
+  readonly topicHeading: string;
+  readonly topicHint: string;
+  readonly resultsHeading: string;
+  readonly present: string;
+  readonly footer: string;
+}
+
+/** The bar along the top. */
+export interface AppBarMessages {
+  readonly brand: string;
+  readonly unsaved: string;
+  readonly actions: string;
+  readonly topics: string;
+  readonly open: string;
+  readonly save: string;
+  readonly saveKeys: string;
+  readonly undo: string;
+  readonly redo: string;
+}
+
+/** The headline numbers pinned in a narrow window's header. */
+export interface HeadlineMessages {
+  readonly label: string;
+  readonly empty: string;
+  /** "Stroke, out of 100:" (the count already written as the locale writes numbers). */
+  readonly outOf: (outcome: string, per: string) => string;
+  readonly stale: string;
+  readonly allResults: string;
+}
+
+/** The Topics panel. */
+export interface StartMessages {
+  readonly heading: string;
+  readonly close: string;
+  readonly yourTopics: string;
+  readonly newTopic: string;
+  readonly openFile: string;
+  readonly recent: string;
+  readonly noRecent: string;
+  readonly browserReopens: string;
+  readonly examples: string;
+  readonly examplesHint: string;
+  readonly illustrative: string;
+  /** "2 options · 3 outcomes · 10 years", the period already in words. */
+  readonly demoFacts: (options: number, outcomes: number, period: string) => string;
+  /** A demo's title without its "(illustrative example)" ending, which the panel marks apart. */
+  readonly demoTitle: (title: string) => string;
+}
+
+/** The banners above the editor: unsaved work to restore, an illustrative example. */
+export interface BannerMessages {
+  readonly restoreLabel: string;
+  /** "Unsaved work from 2 Dec 2026, 19:07" (the date already written). */
+  readonly restoreFrom: (savedAt: string) => string;
+  /** '“Title” was not saved to a file.' or for an empty title "(an untitled topic) …". */
+  readonly restoreWhat: (title: string) => string;
+  readonly restore: string;
+  readonly discard: string;
+  readonly illustrativeLabel: string;
+  readonly illustrativeHeading: string;
+  readonly illustrativeText: string;
+  readonly illustrativeStart: string;
+}
+
+/** The message at the foot (or top) of the window. */
+export interface ToastMessages {
+  readonly dismiss: string;
+  readonly dismissLabel: string;
+}
+
+/** The save dialog of the browser. */
+export interface SaveDialogMessages {
+  readonly heading: string;
+  readonly fileName: string;
+  readonly includePatient: string;
+  readonly patientHint: string;
+  readonly noPatientHint: string;
+  readonly cancel: string;
+  readonly saveFile: string;
+}
+
+export interface UiMessages {
+  readonly app: AppFrameMessages;
+  readonly appBar: AppBarMessages;
+  readonly headline: HeadlineMessages;
+  readonly start: StartMessages;
+  readonly banners: BannerMessages;
+  readonly toast: ToastMessages;
+  readonly saveDialog: SaveDialogMessages;
+}
