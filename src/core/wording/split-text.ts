@@ -14,7 +14,19 @@
  * sentence. Colons and semicolons do not end sentences.
  */
 
-const ABBREVIATIONS = new Set(['dr', 'mr', 'mrs', 'ms', 'prof', 'e.g', 'i.e', 'vs', 'approx', 'cf']);
+/** Short titles and Latin abbreviations whose full stop does not end an English sentence. */
+export const ENGLISH_ABBREVIATIONS: ReadonlySet<string> = new Set([
+  'dr',
+  'mr',
+  'mrs',
+  'ms',
+  'prof',
+  'e.g',
+  'i.e',
+  'vs',
+  'approx',
+  'cf',
+]);
 
 /** Whether a token holds a letter or a digit, so counts as a word. */
 const isWord = (token: string): boolean => /[\p{L}\p{N}]/u.test(token);
@@ -34,10 +46,11 @@ export function splitWords(text: string): readonly string[] {
  * The sentences of a text, each trimmed; pieces without a word are dropped.
  *
  * @param text - any text
+ * @param abbreviations - lower-case abbreviations (without their last full stop) that do not end a sentence
  * @returns the sentences
  * @example splitSentences('The cat sat. Dr. Jones saw it!') // => ['The cat sat.', 'Dr. Jones saw it!']
  */
-export function splitSentences(text: string): readonly string[] {
+export function splitSentences(text: string, abbreviations: ReadonlySet<string> = ENGLISH_ABBREVIATIONS): readonly string[] {
   const sentences: string[] = [];
   for (const paragraph of text.split(/\n\s*\n/)) {
     let current = '';
@@ -45,7 +58,7 @@ export function splitSentences(text: string): readonly string[] {
     for (const piece of pieces) {
       current = current === '' ? piece : `${current} ${piece}`;
       const lastWord = (piece.trim().split(/\s+/).pop() ?? '').replace(/^['"‘“([]+/, '').toLowerCase();
-      const endsSentence = /[.!?]['"’”)\]]*$/.test(piece) && !ABBREVIATIONS.has(lastWord.replace(/\.$/, ''));
+      const endsSentence = /[.!?]['"’”)\]]*$/.test(piece) && !abbreviations.has(lastWord.replace(/\.$/, ''));
       if (endsSentence) {
         sentences.push(current.trim());
         current = '';

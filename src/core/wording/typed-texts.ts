@@ -4,8 +4,8 @@
  */
 import type { Topic } from '../topic/topic.ts';
 import type { Notice } from '../types.ts';
-import { readingWarnings } from './readability.ts';
 import type { UserText } from './readability.ts';
+import { type ReadingLanguage, readingWarningsFor } from './reading-scale.ts';
 
 /** What a reading warning calls each typed text: "The text in the title reads at about grade …". */
 export interface TypedTextNames {
@@ -39,11 +39,15 @@ export function typedTexts(
 }
 
 /**
- * A `reading-grade-high` notice for each typed text of `topic` above the handout's grade target
- * (`READING_GRADE_LIMIT`): it warns and never refuses.
+ * A reading notice for each typed text of `topic` that misses the handout's target on the scale
+ * of the topic's language: `reading-grade-high` above `READING_GRADE_LIMIT` for English,
+ * `reading-ease-low` below `INFLESZ_TARGET` for Spanish. It warns and never refuses.
  *
  * @example typedTextWarnings(topic)[0]?.values.field // => 'the title'
  */
-export function typedTextWarnings(topic: Pick<Topic, 'title' | 'population' | 'questions'>): readonly Notice[] {
-  return readingWarnings(typedTexts(topic));
+export function typedTextWarnings(
+  topic: Pick<Topic, 'title' | 'population' | 'questions'>,
+  language: ReadingLanguage = 'en',
+): readonly Notice[] {
+  return readingWarningsFor(typedTexts(topic), language);
 }

@@ -7,6 +7,15 @@ import { amountWithUnit } from './time-words.ts';
 
 type Render = (values: ProblemValues) => string;
 
+/** English names of the INFLESZ bands (Barrio-Cantalejo et al. 2008: muy difícil, algo difícil, normal, bastante fácil, muy fácil). */
+export const INFLESZ_BAND_NAMES: Readonly<Record<string, string>> = {
+  'very-difficult': 'very difficult',
+  'somewhat-difficult': 'somewhat difficult',
+  normal: 'normal',
+  'fairly-easy': 'fairly easy',
+  'very-easy': 'very easy',
+};
+
 /** A span of time from an amount and its unit ("3 days", "1 year"); years when no unit is given. */
 const span = (values: ProblemValues, key: string): string => {
   const amount = values[key];
@@ -35,7 +44,8 @@ export type NoticeCode =
   | 'rounding-moves-difference'
   | 'rounding-hides-difference'
   | 'difference-below-one-in-a-million'
-  | 'reading-grade-high';
+  | 'reading-grade-high'
+  | 'reading-ease-low';
 
 /** English sentences for every warning code. */
 export const noticeMessages: Record<NoticeCode, Render> = {
@@ -74,5 +84,11 @@ export const noticeMessages: Record<NoticeCode, Render> = {
     const grade = v.grade;
     const shown = typeof grade === 'number' ? formatDecimal(grade, 1) : text(v, 'grade');
     return `The text in ${text(v, 'field')} reads at about grade ${shown}, above grade ${text(v, 'limit')}. Shorter sentences and everyday words make it easier to read.`;
+  },
+  'reading-ease-low': (v) => {
+    const score = v.score;
+    const shown = typeof score === 'number' ? formatCount(score) : text(v, 'score');
+    const band = INFLESZ_BAND_NAMES[text(v, 'band')] ?? text(v, 'band');
+    return `The text in ${text(v, 'field')} has a reading ease of ${shown} on the INFLESZ scale (${band}), below the aim of ${text(v, 'target')} (Barrio-Cantalejo et al. 2008). Shorter sentences and everyday words make it easier to read.`;
   },
 };
