@@ -1,9 +1,6 @@
 import packageJson from '../../package.json' with { type: 'json' };
 import { readCalendarDate } from '../core/calendar-date.ts';
 import { english } from '../core/messages/en/index.ts';
-import { INFLESZ_BAND_NAMES } from '../core/messages/en/notices.ts';
-import { type ReadingLanguage, readabilityFor } from '../core/wording/reading-scale.ts';
-import { typedTextWarnings } from '../core/wording/typed-texts.ts';
 import { TOPIC_LIMITS, type Topic } from '../core/topic/topic.ts';
 import { buildHandout } from '../handout/build-handout.ts';
 import { handoutMessagesEn } from '../handout/messages/en.ts';
@@ -59,13 +56,8 @@ function today(): string {
 /**
  * The handout flags of a call, read once and applied to every topic of it; each flag given
  * overrides the choice the topic's file keeps (`topic.handout`, version 4 files).
- * `readingLanguageOf` gives each topic's language for the reading report and warnings: English
- * by default; a Spanish topic's report names the INFLESZ scale, its target and its source.
  */
-export function handoutOf(
-  parsed: ParsedArgs,
-  readingLanguageOf: (topic: Topic) => ReadingLanguage = () => 'en',
-): (topic: Topic) => MadeHandout {
+function handoutOf(parsed: ParsedArgs): (topic: Topic) => MadeHandout {
   const paperFlag = valueOf(parsed, '--paper');
   const paper = paperFlag === undefined ? null : parsePaper(paperFlag);
   const showNnt = parsed.flags.has('--show-nnt') ? true : parsed.flags.has('--no-nnt') ? false : null;
@@ -87,22 +79,10 @@ export function handoutOf(
       fonts,
     );
     if (!built.ok) throw new UsageError(built.message);
-    const paperName = handoutMessagesEn.paperName[choices.paper];
-    if (readingLanguageOf(topic) === 'es') {
-      const level = readabilityFor(built.prose.join('\n\n'), 'es');
-      const band = level.scale === 'inflesz' && level.band !== null ? (INFLESZ_BAND_NAMES[level.band] ?? level.band) : '–';
-      const score = level.score === null ? '–' : String(level.score);
-      const target = level.scale === 'inflesz' ? level.target : 0;
-      return {
-        pdf: built.pdf,
-        report: (path) => words.handoutWrittenInflesz(path, paperName, score, band, target),
-        warnings: warningSentences(typedTextWarnings(topic, 'es')).map(words.handoutWarning),
-      };
-    }
     const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
     return {
       pdf: built.pdf,
-      report: (path) => words.handoutWritten(path, paperName, grade),
+      report: (path) => words.handoutWritten(path, handoutMessagesEn.paperName[choices.paper], grade),
       warnings: warningSentences(built.readingWarnings).map(words.handoutWarning),
     };
   };

@@ -28,8 +28,8 @@ export function szigrisztPerspicuity(counts: TextCounts): number | null {
 /**
  * Fernández Huerta's readability L = 206.84 − 0.60 × P − 1.02 × F with P the syllables per
  * 100 words and F the mean words per sentence. The form often quoted takes F as sentences per
- * 100 words, which makes shorter sentences score harder; that reading is an error of
- * transcription (Law G. Error in the Fernandez Huerta readability formula. LINGUIST List 22.2332,
+ * 100 words, which makes shorter sentences score harder; that reading is a copying
+ * error (Law G. Error in the Fernandez Huerta readability formula. LINGUIST List 22.2332,
  * 2011), and the form here is the one that keeps Flesch's structure, which the formula adapts.
  *
  * @returns the score, or null when there are no sentences or no words

@@ -45,8 +45,6 @@ export const cliMessages = {
   handoutWritten: (path: string, paper: string, grade: string) =>
     `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
   /** The same line for a Spanish handout: its reading ease on the INFLESZ scale, its band and the aim. */
-  handoutWrittenInflesz: (path: string, paper: string, score: string, band: string, target: number) =>
-    `Wrote ${path}: 1 page, ${paper}, reading ease ${score} on the INFLESZ scale (${band}; aim for ${target} or more, Barrio-Cantalejo et al. 2008).`,
   outWithSeveral: (count: number) =>
     `--out names one file, but ${count} topic files were given: use --out-dir FOLDER to write one handout per file.`,
   outAndOutDir: () => 'Give --out FILE.pdf for one handout or --out-dir FOLDER for one per topic file, not both.',
