@@ -254,7 +254,7 @@ test.describe('exports named for what they are', () => {
       dialog.getByRole('button', { name: 'Save file' }).click(),
     ]);
     const saved = JSON.parse(readFileSync(await download.path(), 'utf8')) as { version: number; topic: { handout: unknown } };
-    expect(saved.version).toBe(5);
+    expect(saved.version).toBe(6);
     expect(saved.topic.handout).toEqual({ showNnt: true, per: 1000, outline: true, paper: 'letter' });
   });
 });

@@ -62,6 +62,7 @@ export type ProblemCode =
   | 'file-format-unknown'
   | 'file-version-unsupported'
   | 'file-field-invalid'
+  | 'topic-language-unsupported'
   // command line
   | 'cli-usage';
 

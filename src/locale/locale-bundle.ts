@@ -10,7 +10,8 @@ import type { WordingMessages } from '../core/wording/wording-catalogue.ts';
 import type { ShellMessages } from '../../electron/main/messages/shell-messages.ts';
 import type { UiMessages } from '../ui/messages/ui-messages.ts';
 
-export type PatientLanguage = 'en' | 'es';
+export type { PatientLanguage } from '../core/topic/topic-language.ts';
+import type { PatientLanguage } from '../core/topic/topic-language.ts';
 
 /** Everything a patient reads. */
 export interface PatientWords {

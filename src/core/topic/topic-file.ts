@@ -6,6 +6,7 @@ import { TOPIC_FORMAT, TOPIC_VERSION, topicFileSchema, topicFileV1Schema } from 
 import type { TopicFileV1 } from './topic-schema.ts';
 import { locateIssue } from './schema-expectation.ts';
 import type { SchemaNode } from './schema-expectation.ts';
+import { readLanguageTag } from './topic-language.ts';
 import { fileWords } from '../messages/en/file-words.ts';
 
 /** What reading a topic file gives: the topic, or the first thing wrong with the file. */
@@ -89,6 +90,16 @@ export function readTopicFile(contents: string): TopicFileReading {
   }
   const parsed = v.safeParse(topicFileSchema, data);
   if (!parsed.success) return { ok: false, problem: firstIssue(topicFileSchema, parsed.issues) };
+  const language = readLanguageTag(parsed.output.topic.language);
+  if (!language.ok) {
+    return {
+      ok: false,
+      problem: problem('topic-language-unsupported', 'topic.language', {
+        language: language.tag,
+        reason: language.reason,
+      }),
+    };
+  }
   return { ok: true, topic: parsed.output.topic, migratedFrom: null };
 }
 

@@ -13,8 +13,11 @@ export const TOPIC_FORMAT = 'chancewise-topic';
  * Version 5 added the disclosures (`about`: `preparedBy`, `funding`, `interests`, `reviewBy`)
  * and the screening section (`screening`: `positiveLeadsTo`, `missedCase`, `overdiagnosis`);
  * a version 2 to 4 file has neither and reads as it always did.
+ * Version 6 added the patient language (`language`, a BCP 47 tag; absent means English) and
+ * the translation marks of a copied topic (`translation`: `from`, `sourceTexts`); a version 2
+ * to 5 file has neither and reads as an English topic.
  */
-export const TOPIC_VERSION = 5;
+export const TOPIC_VERSION = 6;
 
 const text = v.string();
 const years = v.pipe(v.number(), v.finite());
@@ -61,7 +64,10 @@ const chance = v.nullable(v.union([finite, text]));
 /** Schema of the screening section (version 5). */
 export const screeningSchema = v.object({ positiveLeadsTo: text, missedCase: chance, overdiagnosis: chance });
 
-/** Schema of one topic, as stored (versions 2 to 5; the fields versions 3 to 5 added are optional). */
+/** Schema of a copied topic's translation marks (version 6): the language it was copied from, and each typed text as it was then. */
+export const translationSchema = v.object({ from: text, sourceTexts: v.record(text, text) });
+
+/** Schema of one topic, as stored (versions 2 to 6; the fields versions 3 to 6 added are optional). */
 export const topicSchema = v.object({
   title: text,
   population: text,
@@ -97,12 +103,14 @@ export const topicSchema = v.object({
   handout: v.optional(handoutChoicesSchema),
   about: v.optional(disclosuresSchema),
   screening: v.optional(screeningSchema),
+  language: v.optional(text),
+  translation: v.optional(translationSchema),
 });
 
-/** Schema of a version 2, 3, 4 or 5 file. */
+/** Schema of a version 2 to 6 file. */
 export const topicFileSchema = v.object({
   format: v.literal(TOPIC_FORMAT),
-  version: v.picklist([2, 3, 4, TOPIC_VERSION]),
+  version: v.picklist([2, 3, 4, 5, TOPIC_VERSION]),
   topic: topicSchema,
 });
 

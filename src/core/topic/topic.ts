@@ -131,6 +131,23 @@ export interface Topic {
   readonly about?: TopicDisclosures;
   /** A screening test's consequences (version 5 files); absent: not a screening topic. */
   readonly screening?: TopicScreening;
+  /**
+   * The language a patient reads the topic in, as a BCP 47 tag ("es", "es-MX"); absent means
+   * English (version 6 files). The typed names are in this language too.
+   */
+  readonly language?: string;
+  /** A copy made in another language: what it was copied from, to tell texts still to translate (version 6 files). */
+  readonly translation?: TopicTranslation;
+}
+
+/**
+ * The marks of a topic copied into another language: the language it came from, and each typed
+ * text as it was when copied, keyed by its field path ("outcomes.0.name"). A text that still
+ * equals its source is still to translate.
+ */
+export interface TopicTranslation {
+  readonly from: string;
+  readonly sourceTexts: Readonly<Record<string, string>>;
 }
 
 /** Limits shared by the editor, the validator and the handout. */

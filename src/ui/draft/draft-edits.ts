@@ -271,6 +271,8 @@ export function blankDraft(): TopicDraft {
     handout: DEFAULT_HANDOUT_CHOICES,
     about: EMPTY_DISCLOSURES,
     screening: EMPTY_SCREENING,
+    language: 'en',
+    translation: null,
   };
 }
 

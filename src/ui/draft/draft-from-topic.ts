@@ -95,5 +95,7 @@ export function draftFromTopic(topic: Topic): TopicDraft {
             missedCase: riskText(topic.screening.missedCase),
             overdiagnosis: riskText(topic.screening.overdiagnosis),
           },
+    language: topic.language ?? 'en',
+    translation: topic.translation ?? null,
   };
 }

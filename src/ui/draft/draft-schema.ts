@@ -5,7 +5,7 @@
 import * as v from 'valibot';
 import { MEASURES } from '../../core/effect-measures.ts';
 import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES } from '../../core/topic/topic.ts';
-import { disclosuresSchema, handoutChoicesSchema } from '../../core/topic/topic-schema.ts';
+import { disclosuresSchema, handoutChoicesSchema, translationSchema } from '../../core/topic/topic-schema.ts';
 import { EMPTY_SCREENING } from './topic-draft.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
@@ -66,6 +66,9 @@ export const topicDraftSchema = v.object({
   // Drafts stored before the disclosures and the screening section read with them empty.
   about: v.optional(disclosuresSchema, EMPTY_DISCLOSURES),
   screening: v.optional(v.object({ positiveLeadsTo: text, missedCase: text, overdiagnosis: text }), EMPTY_SCREENING),
+  // Drafts stored before topics had a patient language are English and not copies.
+  language: v.optional(text, 'en'),
+  translation: v.optional(v.nullable(translationSchema), null),
 });
 
 /** The draft in `data`, or null when it is not a whole draft. */

@@ -5,7 +5,7 @@
  * switching the comparison back and forth loses nothing.
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
-import type { Certainty, Importance, TopicDisclosures, TopicHandoutChoices } from '../../core/topic/topic.ts';
+import type { Certainty, Importance, TopicDisclosures, TopicHandoutChoices, TopicTranslation } from '../../core/topic/topic.ts';
 import type { EffectMeasure } from '../../core/types.ts';
 
 /** The measures an effect can be entered in: the core's five, or a trial's own counts. */
@@ -76,6 +76,10 @@ export interface TopicDraft {
   readonly about: TopicDisclosures;
   /** A screening test's consequences, as typed; all empty for a topic that is not about screening. */
   readonly screening: ScreeningDraft;
+  /** The patient language's BCP 47 tag ("en" for a topic that names none). */
+  readonly language: string;
+  /** A copy made in another language: the texts as copied, to tell what is still to translate; null otherwise. */
+  readonly translation: TopicTranslation | null;
 }
 
 /** The screening section as typed: the chances are risks as text ("3 in 1000", "0.3%"), empty when not given. */

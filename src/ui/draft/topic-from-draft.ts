@@ -207,6 +207,9 @@ export function topicFromDraft(draft: TopicDraft): DraftReading {
     ...(sameChoices(draft.handout, DEFAULT_HANDOUT_CHOICES) ? {} : { handout: draft.handout }),
     ...aboutField(draft.about),
     ...screeningField(draft.screening),
+    // An English topic names no language, so it reads back as older files do.
+    ...(draft.language.trim() === 'en' || draft.language.trim() === '' ? {} : { language: draft.language.trim() }),
+    ...(draft.translation === null ? {} : { translation: draft.translation }),
   };
   return { topic, problems: reader.problems, questionPlaces };
 }

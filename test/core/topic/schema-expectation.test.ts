@@ -22,7 +22,7 @@ describe('expectedAt', () => {
     [['topic', 'outcomes', 0, 'effects', 0, 'followUpYears'], 'a number or null'],
     [['topic', 'outcomes', 0, 'effects', 0, 'certainty'], 'one of "high", "moderate", "low" or "very-low"'],
     [['topic', 'patient'], 'a group of fields (name, reference) or null'],
-    [['version'], 'one of 2, 3, 4 or 5'],
+    [['version'], 'one of 2, 3, 4, 5 or 6'],
   ] as const)('words the value at %j as %s', (keys, words) => {
     expect(expectedAt(root, steps(...keys))).toBe(words);
   });

@@ -55,8 +55,8 @@ function wantedTopic(): Topic {
 }
 
 describe('version 3 topic files', () => {
-  it('are followed by version 5, which this build writes with every version 3 field', () => {
-    expect(JSON.parse(writeTopicFile(wantedTopic())).version).toBe(5);
+  it('are followed by version 6, which this build writes with every version 3 field', () => {
+    expect(JSON.parse(writeTopicFile(wantedTopic())).version).toBe(6);
   });
 
   it('keep every field a topic holds through write and read', () => {

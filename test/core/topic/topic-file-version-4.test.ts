@@ -17,9 +17,9 @@ const read = (text: string): Topic => {
 const choices: TopicHandoutChoices = { showNnt: true, per: 1000, outline: true, paper: 'letter' };
 
 describe('version 4 topic files', () => {
-  it('are followed by version 5, which this build writes', () => {
-    expect(TOPIC_VERSION).toBe(5);
-    expect(JSON.parse(writeTopicFile(read(demoText))).version).toBe(5);
+  it('are followed by version 6, which this build writes', () => {
+    expect(TOPIC_VERSION).toBe(6);
+    expect(JSON.parse(writeTopicFile(read(demoText))).version).toBe(6);
   });
 
   it('keep every handout choice through writing and reading', () => {

@@ -47,9 +47,9 @@ const asVersion = (topic: Topic, version: number) => {
 };
 
 describe('version 5 topic files', () => {
-  it('are what this build writes', () => {
-    expect(TOPIC_VERSION).toBe(5);
-    expect((JSON.parse(writeTopicFile(read(text('assets/demo/01-kidney-stone.json')))) as { version: number }).version).toBe(5);
+  it('are followed by version 6, which this build writes', () => {
+    expect(TOPIC_VERSION).toBe(6);
+    expect((JSON.parse(writeTopicFile(read(text('assets/demo/01-kidney-stone.json')))) as { version: number }).version).toBe(6);
   });
 
   it('keep the disclosures and the screening section through writing and reading', () => {
@@ -68,10 +68,10 @@ describe('version 5 topic files', () => {
   });
 
   it('are refused when made by a newer version, as before', () => {
-    const found = refusal(asVersion(read(text('assets/demo/01-kidney-stone.json')), 6));
+    const found = refusal(asVersion(read(text('assets/demo/01-kidney-stone.json')), 7));
     expect(found.field).toBe('version');
     expect(found.message).toBe(
-      'This topic file was made by a newer Chancewise (file version 6; this one reads up to version 5). Update Chancewise to open it; the file has not been changed.',
+      'This topic file was made by a newer Chancewise (file version 7; this one reads up to version 6). Update Chancewise to open it; the file has not been changed.',
     );
   });
 });

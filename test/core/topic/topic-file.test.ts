@@ -185,11 +185,11 @@ describe('reading a version 1 file', () => {
 describe('reading a file from a newer version', () => {
   it('refuses it and asks for an update', () => {
     const data = JSON.parse(fixture(DEMOS[0] ?? '')) as Record<string, unknown>;
-    data.version = 6;
+    data.version = 7;
     const found = refusal(JSON.stringify(data));
     expect(found).toMatchObject({ code: 'file-version-unsupported', field: 'version' });
     expect(found.message).toBe(
-      'This topic file was made by a newer Chancewise (file version 6; this one reads up to version 5). Update Chancewise to open it; the file has not been changed.',
+      'This topic file was made by a newer Chancewise (file version 7; this one reads up to version 6). Update Chancewise to open it; the file has not been changed.',
     );
   });
 });
@@ -527,7 +527,7 @@ const damagedFiles: readonly [string, string, string, string][] = [
       d.version = '2';
     }),
     'version',
-    at('version', 'one of 2, 3, 4 or 5', 'the text "2"'),
+    at('version', 'one of 2, 3, 4, 5 or 6', 'the text "2"'),
   ],
   [
     'a version of 0',
@@ -535,7 +535,7 @@ const damagedFiles: readonly [string, string, string, string][] = [
       d.version = 0;
     }),
     'version',
-    at('version', 'one of 2, 3, 4 or 5', 'the number 0'),
+    at('version', 'one of 2, 3, 4, 5 or 6', 'the number 0'),
   ],
   [
     'a missing version',
@@ -543,7 +543,7 @@ const damagedFiles: readonly [string, string, string, string][] = [
       delete d.version;
     }),
     'version',
-    at('version', 'one of 2, 3, 4 or 5', 'nothing'),
+    at('version', 'one of 2, 3, 4, 5 or 6', 'nothing'),
   ],
   [
     'the wrong format',

@@ -155,7 +155,7 @@ describe('saving and opening', () => {
       version: number;
       topic: { periodUnit: string; outcomes: { wanted: boolean; effects: { effect: { opposite: boolean } }[] }[] };
     };
-    expect(file.version).toBe(5);
+    expect(file.version).toBe(6);
     expect(file.topic.periodUnit).toBe('days');
     expect(file.topic.outcomes[0]?.wanted).toBe(true);
     expect(file.topic.outcomes[0]?.effects[0]?.effect.opposite).toBe(true);

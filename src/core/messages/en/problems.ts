@@ -115,5 +115,7 @@ export const problemMessages: Record<ProblemCode, Render> = {
     `This topic file was made by a newer Chancewise (file version ${text(v, 'version')}; this one reads up to version ${text(v, 'supported')}). Update Chancewise to open it; the file has not been changed.`,
   'file-field-invalid': (v) =>
     `This topic file is damaged at "${text(v, 'path')}": expected ${text(v, 'expected')}, found ${text(v, 'received')}.`,
+  'topic-language-unsupported': (v) =>
+    `${text(v, 'reason') === 'malformed' ? `This topic's "language" value "${text(v, 'language')}" is not a language tag` : `Chancewise cannot write patient wording in "${text(v, 'language')}"`}. Set "language" in the topic to "en" for English or to a Spanish tag ("es", "es-ES", "es-419", "es-MX"), or remove it for English; the file has not been changed.`,
   'cli-usage': (v) => text(v, 'detail'),
 };
