@@ -104,7 +104,9 @@ describe('older topic files', () => {
     if (!saved.ok) throw new Error(saved.message);
     expect((JSON.parse(saved.text) as { version: number }).version).toBe(6);
     // Nothing of versions 3 to 6 is written for a topic that uses none of it.
-    expect(saved.text).not.toMatch(/"wanted"|"periodUnit"|"followUpUnit"|"opposite"|"handout"|"about"|"screening"|"language"|"translation"/);
+    expect(saved.text).not.toMatch(
+      /"wanted"|"periodUnit"|"followUpUnit"|"opposite"|"handout"|"about"|"screening"|"language"|"translation"/,
+    );
     const again = readTopicFile(saved.text);
     if (!again.ok) throw new Error('saved file does not read');
     expect(computeTopic(again.topic)).toEqual(computeTopic(original.topic));
