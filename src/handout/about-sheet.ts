@@ -5,7 +5,7 @@
  */
 import { EMPTY_DISCLOSURES } from '../core/topic/topic.ts';
 import type { Topic } from '../core/topic/topic.ts';
-import type { AboutSheetMessages, EffectSourceGroup } from './messages/en.ts';
+import type { AboutSheetMessages, EffectSourceGroup } from './messages/handout-messages.ts';
 
 /** The "About this sheet" line; a disclosure not given reads "not stated", never blank. */
 export function aboutSheetLine(topic: Topic, messages: AboutSheetMessages, formatDate: (text: string) => string): string {

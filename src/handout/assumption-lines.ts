@@ -6,13 +6,17 @@
  * `period-beyond-followup` in `computeEffect`, which the editor's check list shows too).
  */
 import type { Notice } from '../core/types.ts';
-import { duration } from '../core/messages/en/wording.ts';
 import { isTimeUnit, yearsFrom } from '../core/time-unit.ts';
 import type { OutcomeResult } from '../core/topic/topic-result.ts';
-import type { HandoutMessages } from './messages/en.ts';
+import type { HandoutMessages } from './messages/handout-messages.ts';
 
 /** An amount and its unit in a notice's values as words ("10 years"), or null when they are missing. */
-function spanOf(values: Notice['values'], amountKey: string, unitKey: string): string | null {
+function spanOf(
+  values: Notice['values'],
+  amountKey: string,
+  unitKey: string,
+  duration: HandoutMessages['duration'],
+): string | null {
   const amount = values[amountKey];
   const unit = values[unitKey] ?? 'years';
   return typeof amount === 'number' && isTimeUnit(unit) ? duration({ years: yearsFrom(amount, unit), unit }) : null;
@@ -30,15 +34,15 @@ export function assumptionLines(outcome: OutcomeResult, messages: HandoutMessage
   const lines: string[] = [];
   const conversion = outcome.baselineConversion ?? null;
   if (conversion !== null) {
-    const from = spanOf(conversion.values, 'from', 'fromUnit');
-    const to = spanOf(conversion.values, 'to', 'toUnit');
+    const from = spanOf(conversion.values, 'from', 'fromUnit', messages.duration);
+    const to = spanOf(conversion.values, 'to', 'toUnit', messages.duration);
     if (from !== null && to !== null) lines.push(messages.baselineConverted(outcome.name, from, to));
   }
   for (const option of outcome.options) {
     const beyond = option.notices.find((found) => found.code === 'period-beyond-followup');
     if (beyond === undefined) continue;
-    const followUp = spanOf(beyond.values, 'followup', 'followupUnit');
-    const period = spanOf(beyond.values, 'period', 'periodUnit');
+    const followUp = spanOf(beyond.values, 'followup', 'followupUnit', messages.duration);
+    const period = spanOf(beyond.values, 'period', 'periodUnit', messages.duration);
     if (followUp !== null && period !== null) lines.push(messages.beyondFollowUp(option.name, followUp, period));
   }
   return lines;

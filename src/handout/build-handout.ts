@@ -9,13 +9,15 @@ import type { Topic } from '../core/topic/topic.ts';
 import type { TopicResult } from '../core/topic/topic-result.ts';
 import type { Notice } from '../core/types.ts';
 import { type Readability, readability } from '../core/wording/readability.ts';
+import { type ReadingLevel, readabilityFor } from '../core/wording/reading-scale.ts';
 import { typedTextWarnings } from '../core/wording/typed-texts.ts';
 import { type ChartPalette, colourPalette } from '../render/palette.ts';
 import { drawPage } from './draw-page.ts';
 import { FIT_LADDER, type FitSettings } from './fit-settings.ts';
 import { type HandoutContent, handoutContent } from './handout-content.ts';
 import { type HandoutFonts, codePointsOf, registerFonts } from './handout-fonts.ts';
-import { type HandoutMessages, type HandoutPart, handoutMessagesEn } from './messages/en.ts';
+import { type HandoutWords, englishHandoutWords, readingLanguageOf } from './handout-words.ts';
+import type { HandoutPart } from './messages/handout-messages.ts';
 import { type PageLayout, type PageMode, layoutPage } from './page-layout.ts';
 import { type Paper, contentBox } from './paper-size.ts';
 import { fileIdentifier, pdfDate } from './pdf-identity.ts';
@@ -33,7 +35,12 @@ export interface HandoutOptions {
   /** The clinician or practice printed in the footer, in place of the topic's. */
   readonly clinician?: string;
   readonly palette?: ChartPalette;
-  readonly messages?: HandoutMessages;
+  /**
+   * The sheet's one language: the sentences, the pictures' words and every other string, and
+   * (from `words.handout.language`) the PDF's document language and the readability scale.
+   * English when absent.
+   */
+  readonly words?: HandoutWords;
 }
 
 /** A handout that was built. */
@@ -43,8 +50,17 @@ export interface HandoutBuilt {
   readonly pdf: Uint8Array;
   readonly paper: Paper;
   readonly pages: number;
-  /** Flesch Reading Ease and Flesch–Kincaid grade of the sheet's sentences (not the table, chart labels or footer). */
+  /**
+   * Flesch Reading Ease and Flesch–Kincaid grade of the sheet's sentences (not the table, chart
+   * labels or footer). English formulas: they mean something only for an English sheet; every
+   * sheet's level on its own language's scale is `readingScale`.
+   */
   readonly readability: Readability;
+  /**
+   * The same prose on the scale of the sheet's language: the Flesch–Kincaid grade with its limit
+   * for English, the Szigriszt-Pazos perspicuity on the INFLESZ scale with its target for Spanish.
+   */
+  readonly readingScale: ReadingLevel;
   /** The type sizes and spacing the content fitted with. */
   readonly settings: FitSettings;
   /** Whether every outcome's pictures were printed (all or none). */
@@ -57,7 +73,7 @@ export interface HandoutBuilt {
   readonly wordingSentences: readonly string[];
   /** The prose the readability was computed from, block by block. */
   readonly prose: readonly string[];
-  /** A warning for each typed title, population or question that reads above the grade target (never a refusal). */
+  /** A warning for each typed title, population or question that misses the target of the sheet's scale (never a refusal). */
   readonly readingWarnings: readonly Notice[];
 }
 
@@ -111,7 +127,9 @@ function proseOf(content: HandoutContent, pictures: boolean, short: boolean): st
  */
 export function buildHandout(result: TopicResult, topic: Topic, options: HandoutOptions, fonts: HandoutFonts): HandoutBuild {
   const paper = options.paper ?? 'a4';
-  const messages = options.messages ?? handoutMessagesEn;
+  const words = options.words ?? englishHandoutWords;
+  const messages = words.handout;
+  const language = readingLanguageOf(messages);
   const palette = options.palette ?? colourPalette;
   const creationDate = pdfDate(checkedDate(options.date));
   const content = handoutContent(result, topic, {
@@ -119,7 +137,7 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
     appVersion: options.appVersion,
     showNnt: options.showNnt === true,
     clinician: options.clinician ?? '',
-    messages,
+    words,
   });
 
   const doc = new jsPDF({
@@ -188,19 +206,21 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   doc.setFileId(fileIdentifier([content.title, options.date, paper, options.appVersion].join('\n')));
   const compactPictures = fitted.mode.pictures && fitted.mode.compact === true;
   const prose = proseOf(content, fitted.mode.pictures, compactPictures);
+  const proseText = prose.join('\n\n');
   return {
     ok: true,
     pdf: new Uint8Array(doc.output('arraybuffer')),
     paper,
     pages: doc.getNumberOfPages(),
-    readability: readability(prose.join('\n\n')),
+    readability: readability(proseText),
+    readingScale: readabilityFor(proseText, language),
     settings,
     pictures: fitted.mode.pictures,
     compactPictures,
     sentenceSize: fitted.mode.small === true ? settings.list : settings.body,
     wordingSentences: compactPictures ? content.shortWordingSentences : content.wordingSentences,
     prose,
-    readingWarnings: typedTextWarnings(topic),
+    readingWarnings: typedTextWarnings(topic, language),
   };
 }
 

@@ -8,7 +8,7 @@ import type { Topic } from '../core/topic/topic.ts';
 import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { populationSentence } from '../core/wording/topic-wording.ts';
 import { aboutSheetLine, effectSourceGroups } from './about-sheet.ts';
-import type { HandoutMessages } from './messages/en.ts';
+import type { HandoutWords } from './handout-words.ts';
 import { type OutcomeSection, outcomeSections } from './outcome-sections.ts';
 import { type OutcomeTable, outcomeTable } from './outcome-table.ts';
 import { type ScreeningSection, screeningSection } from './screening-section.ts';
@@ -52,7 +52,8 @@ export interface ContentOptions {
   readonly showNnt: boolean;
   /** Overrides the topic's clinician or practice when not empty. */
   readonly clinician: string;
-  readonly messages: HandoutMessages;
+  /** The sheet's one language: its sentences, its pictures' words and every other string. */
+  readonly words: HandoutWords;
 }
 
 /** The outcome the pictures lead with: the headline, or the first outcome. */
@@ -65,7 +66,8 @@ export function headlineOutcome(result: TopicResult): OutcomeResult {
 /**
  * The content of a handout for a computed topic. Numbers come from the result's
  * rounded people counts (the same as the charts); sentences come from the wording
- * module; every other string comes from `options.messages`.
+ * catalogue and the pictures' words from the chart catalogue; every other string comes from
+ * the handout catalogue, all three from `options.words`.
  *
  * @param result - the computed topic
  * @param topic - the topic it was computed from (evidence, questions, clinician)
@@ -73,9 +75,10 @@ export function headlineOutcome(result: TopicResult): OutcomeResult {
  * @returns the content, ready for layout
  */
 export function handoutContent(result: TopicResult, topic: Topic, options: ContentOptions): HandoutContent {
-  const { messages } = options;
+  const { words } = options;
+  const messages = words.handout;
   const headline = headlineOutcome(result);
-  const outcomes = outcomeSections(result, { showNnt: options.showNnt, messages });
+  const outcomes = outcomeSections(result, { showNnt: options.showNnt, words });
   const arrays = outcomes[0]?.pictures.model.arrays ?? [];
   const table = outcomeTable(
     result,
@@ -88,7 +91,7 @@ export function handoutContent(result: TopicResult, topic: Topic, options: Conte
     years: result.periodYears,
     unit: result.periodUnit,
   };
-  const sentence = populationSentence(result);
+  const sentence = populationSentence(result, { catalogue: words.wording });
   const population = sentence === null ? [] : [sentence];
   const evidence = [
     messages.evidenceSummary(topic.evidence.summary),

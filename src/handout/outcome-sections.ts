@@ -16,7 +16,8 @@ import { blockLayout, closeUpBlock } from '../render/close-up.ts';
 import { FILL_ORDER } from '../render/fill-sequence.ts';
 import type { IconArrayLayout } from '../render/icon-array-layout.ts';
 import { assumptionLines } from './assumption-lines.ts';
-import type { HandoutMessages } from './messages/en.ts';
+import type { HandoutWords } from './handout-words.ts';
+import type { HandoutMessages } from './messages/handout-messages.ts';
 
 /** One line of the key to the pictures. */
 export interface KeyEntry {
@@ -148,22 +149,24 @@ export function printedOutcomes(result: TopicResult): OutcomeResult[] {
  * people counts (the same as the charts); sentences from the wording module.
  *
  * @param result - the computed topic
- * @param options - whether to add the NNT sentences, and the catalogue
+ * @param options - whether to add the NNT sentences, and the sheet's words
  */
 export function outcomeSections(
   result: TopicResult,
-  options: { readonly showNnt: boolean; readonly messages: HandoutMessages },
+  options: { readonly showNnt: boolean; readonly words: HandoutWords },
 ): OutcomeSection[] {
-  const { messages } = options;
+  const { words } = options;
+  const messages = words.handout;
+  const catalogue = words.wording;
   // "There is no number needed to treat" would repeat the change sentence's "little or no difference".
-  const worded = handoutSentences(result, { showNnt: options.showNnt }).filter(
+  const worded = handoutSentences(result, { showNnt: options.showNnt, catalogue }).filter(
     (sentence) => sentence.outcomeId !== null && sentence.kind !== 'nnt-none',
   );
   const sentences = withLevels(worded, result, messages);
-  const shortWorded = shortHandoutSentences(result, { showNnt: options.showNnt });
+  const shortWorded = shortHandoutSentences(result, { showNnt: options.showNnt, catalogue });
   const short = withLevels(shortWorded, result, messages);
   return printedOutcomes(result).map((outcome) => {
-    const model = outcomeChart(result, outcome.outcomeId);
+    const model = outcomeChart(result, outcome.outcomeId, { messages: words.chart });
     const own = sentences.filter((sentence) => sentence.outcomeId === outcome.outcomeId);
     const framesOf = (optionId: string) =>
       own.filter((sentence) => sentence.optionId === optionId && FRAME_KINDS.has(sentence.kind)).map((found) => found.text);

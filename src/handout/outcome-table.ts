@@ -13,7 +13,7 @@ import { amountOf } from '../core/wording/amount-of.ts';
 import { frequencyBand } from '../core/wording/frequency-band.ts';
 import { optionRisk } from '../core/wording/option-context.ts';
 import { bandOfCount, rowDenominator } from './band-denominator.ts';
-import type { BenefitAim, HandoutMessages } from './messages/en.ts';
+import type { BenefitAim, HandoutMessages } from './messages/handout-messages.ts';
 import { printedOutcomes } from './outcome-sections.ts';
 
 /** One cell of the outcomes table: the people count, the change the option makes, and how sure the research is. */

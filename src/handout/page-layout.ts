@@ -9,7 +9,7 @@ import type { HandoutContent } from './handout-content.ts';
 import { handoutStyles } from './handout-styles.ts';
 import type { HandoutStyles } from './handout-styles.ts';
 import { headerBlock } from './header-block.ts';
-import type { HandoutPart } from './messages/en.ts';
+import type { HandoutPart } from './messages/handout-messages.ts';
 import { type Block, EMPTY_BLOCK, type PageItem, placeBlock, stack, textItem } from './page-items.ts';
 import { bulletsBlock, headingBlock, runInParagraph, section, shadedBox, writingLines } from './section-blocks.ts';
 import { compactKeyBlock, compactOutcomeRows, compactScale } from './compact-pictures.ts';

@@ -8,7 +8,7 @@ import { peopleFor } from '../core/people-counts.ts';
 import type { RiskInput, Topic } from '../core/topic/topic.ts';
 import { amountOf } from '../core/wording/amount-of.ts';
 import type { Amount } from '../core/wording/wording-catalogue.ts';
-import type { ScreeningMessages } from './messages/en.ts';
+import type { ScreeningMessages } from './messages/handout-messages.ts';
 
 /** The section as printed: a heading and its sentences. */
 export interface ScreeningSection {

@@ -4,7 +4,7 @@
  * terms (values clarification, an IPDAS dimension: Elwyn et al. 2006; Trevena et al. 2013).
  */
 import type { OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
-import type { HandoutMessages } from './messages/en.ts';
+import type { HandoutMessages } from './messages/handout-messages.ts';
 
 /** How many side effects the prompt names. */
 const MAIN_HARMS = 2;

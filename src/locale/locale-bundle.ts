@@ -5,7 +5,7 @@
  * both at its root and passes them down; nothing below it picks a language of its own. The
  * handout's and the teaching view's words load with those parts, not at start-up.
  */
-import type { ChartMessages } from '../render/messages/en.ts';
+import type { ChartMessages } from '../render/messages/chart-messages.ts';
 import type { WordingMessages } from '../core/wording/wording-catalogue.ts';
 import type { ShellMessages } from '../../electron/main/messages/shell-messages.ts';
 import type { UiMessages } from '../ui/messages/ui-messages.ts';

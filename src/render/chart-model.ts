@@ -11,7 +11,8 @@ import type { Denominator, PeopleCounts, PeopleGroups, PersonGroup, WordsDenomin
 import { FILL_ORDER } from './fill-sequence.ts';
 import { type ExactRisks, hiddenDifference } from './hidden-difference.ts';
 import { type Arrangement, type IconArrayLayout, iconArrayLayout } from './icon-array-layout.ts';
-import { type ArmRole, type ChartMessages, chartMessagesEn } from './messages/en.ts';
+import type { ArmRole, ChartMessages } from './messages/chart-messages.ts';
+import { chartMessagesEn } from './messages/en.ts';
 import { type RankSpan, uncertainRanks } from './uncertain-people.ts';
 
 /** One group's label: "4 avoid a stroke because of option A". */

@@ -10,7 +10,7 @@ import { buildHandout } from '../../src/handout/build-handout.ts';
 import { FIT_LADDER, type FitSettings } from '../../src/handout/fit-settings.ts';
 import { codePointsOf, registerFonts } from '../../src/handout/handout-fonts.ts';
 import { handoutContent } from '../../src/handout/handout-content.ts';
-import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import type { PageItem } from '../../src/handout/page-items.ts';
 import { layoutPage } from '../../src/handout/page-layout.ts';
 import { type Paper, contentBox } from '../../src/handout/paper-size.ts';
@@ -28,7 +28,7 @@ const byName = (name: string) => {
 /** The sheet's content for the demo `name`, without the NNT sentences. */
 function contentOf(name: string) {
   const { topic, result } = byName(name);
-  return handoutContent(result, topic, { date, appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn });
+  return handoutContent(result, topic, { date, appVersion: '0.1.0', showNnt: false, clinician: '', words: englishHandoutWords });
 }
 
 /** The compact page's items, laid out in a box `extra` millimetres taller than the paper's, at the ladder's tightest settings. */

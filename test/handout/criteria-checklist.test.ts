@@ -9,7 +9,7 @@ import type { Topic } from '../../src/core/topic/topic.ts';
 import type { TopicResult } from '../../src/core/topic/topic-result.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
 import { handoutContent } from '../../src/handout/handout-content.ts';
-import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import { harmOutweighsTopic } from './harm-outweighs-topic.ts';
 import { demos, normalise, pdfText, testFonts, writePdf } from './support.ts';
 
@@ -25,7 +25,7 @@ describe.each(topics)('the handout of $name meets the IPDAS probability criteria
     appVersion: '0.1.0',
     showNnt: false,
     clinician: '',
-    messages: handoutMessagesEn,
+    words: englishHandoutWords,
   });
   const handout = buildHandout(result, topic, { date, appVersion: '0.1.0' }, testFonts());
   if (!handout.ok) throw new Error(handout.message);
@@ -135,7 +135,7 @@ describe('the screening demo’s assumptions', () => {
     appVersion: '0.1.0',
     showNnt: false,
     clinician: '',
-    messages: handoutMessagesEn,
+    words: englishHandoutWords,
   });
 
   // The demo file: baseline over 10 years, the sheet's period 15 years, the trials' follow-up 12 years.

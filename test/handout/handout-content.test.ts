@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import { handoutSentences } from '../../src/core/wording/topic-wording.ts';
 import { type ContentOptions, handoutContent, headlineOutcome } from '../../src/handout/handout-content.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
 import { outcomeChart } from '../../src/render/chart-model.ts';
 import { firstDemo } from './support.ts';
@@ -11,7 +12,7 @@ const options: ContentOptions = {
   appVersion: '0.1.0',
   showNnt: false,
   clinician: '',
-  messages: handoutMessagesEn,
+  words: englishHandoutWords,
 };
 
 describe('the content of a handout', () => {

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
 import { handoutContent } from '../../src/handout/handout-content.ts';
-import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import { harmOutweighsTopic } from './harm-outweighs-topic.ts';
 import { pdfText, testFonts, writePdf } from './support.ts';
 
@@ -69,7 +69,7 @@ describe('a handout where the harm outweighs the benefit', () => {
       appVersion: '0.1.0',
       showNnt: false,
       clinician: '',
-      messages: handoutMessagesEn,
+      words: englishHandoutWords,
     });
     const bleed = content.table.sections.flatMap((section) => section.rows).find((row) => row.outcomeId === 'bleed');
     expect(bleed?.cells.map((cell) => [cell.value, cell.change])).toEqual([

@@ -15,10 +15,10 @@ import { frequencyBand } from '../../src/core/wording/frequency-band.ts';
 import { bandOfCount, rowDenominator } from '../../src/handout/band-denominator.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
 import { handoutContent } from '../../src/handout/handout-content.ts';
-import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import { pdfInfo, pdfText, testFonts, writePdf } from './support.ts';
 
-const options = { date: '2026-12-01', appVersion: '0.1.0', showNnt: false, clinician: '', messages: handoutMessagesEn };
+const options = { date: '2026-12-01', appVersion: '0.1.0', showNnt: false, clinician: '', words: englishHandoutWords };
 
 function screening(): Topic {
   const path = fileURLToPath(new URL('../../assets/demo/02-bowel-screening.json', import.meta.url));

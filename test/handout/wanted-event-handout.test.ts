@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { computeTopic } from '../../src/core/topic/compute-topic.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
 import { type ContentOptions, handoutContent } from '../../src/handout/handout-content.ts';
-import { handoutMessagesEn } from '../../src/handout/messages/en.ts';
+import { englishHandoutWords } from '../../src/handout/handout-words.ts';
 import { pdfText, testFonts, writePdf } from './support.ts';
 import { wantedTopic } from './wanted-topic.ts';
 
@@ -18,7 +18,7 @@ const options: ContentOptions = {
   appVersion: '0.1.0',
   showNnt: true,
   clinician: '',
-  messages: handoutMessagesEn,
+  words: englishHandoutWords,
 };
 const topic = wantedTopic();
 const result = computeTopic(topic);

@@ -1,4 +1,4 @@
-import type { TimeUnit } from '../../time-unit.ts';
+import { type TimeUnit, amountIn } from '../../time-unit.ts';
 import { formatDecimalEs } from './format-number-es.ts';
 
 /** The Spanish names of the time units, singular and plural. */
@@ -17,4 +17,12 @@ export const UNIT_NAMES_ES: Readonly<Record<TimeUnit, readonly [string, string]>
 export function amountWithUnitEs(amount: number, unit: TimeUnit): string {
   const [one, other] = UNIT_NAMES_ES[unit];
   return `${formatDecimalEs(amount, 2)} ${amount === 1 ? one : other}`;
+}
+
+/**
+ * A length of time given in years, in the unit it was given in: 10 years → "10 años",
+ * 3/365.25 years in days → "3 días", 0.5 years in months → "6 meses".
+ */
+export function durationEs({ years, unit }: { readonly years: number; readonly unit: TimeUnit }): string {
+  return amountWithUnitEs(amountIn(years, unit), unit);
 }
