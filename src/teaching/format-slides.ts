@@ -30,21 +30,21 @@ function denominatorSlide(source: SlideSource): Slide {
   const hundred = demonstrationArms(source, 100);
   const thousand = demonstrationArms(source, 1000);
   if (hundred === null || thousand === null) return slide('denominator', source, {});
-  const words = source.messages.panels;
+  const words = source.messages.clinician.panels;
   return slide('denominator', source, {
     layout: 'wide-pair',
     panels: [
       optionPanel(hundred, source, { id: 'per-100', title: words.denominatorCaption(100) }),
       optionPanel(thousand, source, { id: 'per-1000', title: words.denominatorCaption(1000) }),
     ],
-    evidence: source.messages.evidence.denominator,
+    evidence: source.messages.clinician.evidence.denominator,
   });
 }
 
 function arrangementSlide(source: SlideSource): Slide {
   const arms = demonstrationArms(source, null);
   if (arms === null) return slide('arrangement', source, {});
-  const words = source.messages.panels;
+  const words = source.messages.clinician.panels;
   const scattered = peoplePanel(
     {
       id: 'scattered',
@@ -56,19 +56,19 @@ function arrangementSlide(source: SlideSource): Slide {
       arrangement: 'scattered',
       seed: DEFAULT_SCATTER_SEED,
     },
-    source.messages,
+    source.messages.patient,
   );
   return slide('arrangement', source, {
     layout: 'pair',
     panels: [optionPanel(arms, source, { id: 'grouped', title: words.grouped }), scattered],
-    evidence: source.messages.evidence.arrangement,
+    evidence: source.messages.clinician.evidence.arrangement,
   });
 }
 
 function incrementalSlide(source: SlideSource): Slide {
   const arms = demonstrationArms(source, null);
   if (arms === null) return slide('incremental', source, {});
-  const words = source.messages.panels;
+  const words = source.messages.clinician.panels;
   return slide('incremental', source, {
     layout: 'pair',
     panels: [
@@ -77,7 +77,7 @@ function incrementalSlide(source: SlideSource): Slide {
     ],
     lines: [
       {
-        text: source.messages.story.totalWithout(
+        text: source.messages.patient.story.totalWithout(
           arms.comparison.groups.event,
           arms.comparison.groups.denominator,
           arms.comparison.name,
@@ -86,7 +86,7 @@ function incrementalSlide(source: SlideSource): Slide {
         look: null,
       },
     ],
-    evidence: source.messages.evidence.incremental,
+    evidence: source.messages.clinician.evidence.incremental,
   });
 }
 

@@ -10,7 +10,6 @@ import { changeOf } from '../core/direction.ts';
 import type { ChangeDirection } from '../core/direction.ts';
 import type { OptionOutcomeResult } from '../core/topic/topic-result.ts';
 import type { Denominator } from '../core/types.ts';
-import { shortDecimal } from './messages/en.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { FramingCard, Slide } from './slide-model.ts';
 import { armsOf, optionPanel, slide } from './story-slides.ts';
@@ -72,7 +71,8 @@ export function framingNumbers(option: OptionOutcomeResult, denominator: Denomin
 
 /** The three figure cards of the framing step. */
 export function framingCards(numbers: FramingNumbers, source: SlideSource): FramingCard[] {
-  const words = source.messages.framing;
+  const words = source.messages.patient.framing;
+  const shortDecimal = source.messages.patient.decimal;
   const { denominator } = numbers;
   const from = shortDecimal(numbers.from);
   const to = shortDecimal(numbers.to);
@@ -125,6 +125,6 @@ export function framingSlide(source: SlideSource): Slide {
     layout: 'cards',
     panels: [optionPanel(arms, source)],
     cards: framingCards(numbers, source),
-    evidence: source.messages.evidence.framing,
+    evidence: source.messages.clinician.evidence.framing,
   });
 }

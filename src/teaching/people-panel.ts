@@ -8,7 +8,7 @@ import type { PeopleGroups } from '../core/types.ts';
 import { iconArrayLayout } from '../render/icon-array-layout.ts';
 import type { Arrangement } from '../render/icon-array-layout.ts';
 import { type RankSpan, isUncertain } from '../render/uncertain-people.ts';
-import type { TeachingMessages } from './messages/teaching-messages.ts';
+import type { TeachingPatientSlideMessages } from './messages/teaching-messages.ts';
 import type { PanelChip, PeoplePanel, PersonLook } from './slide-model.ts';
 
 /** The order of the counts under an array: the fill order, with the outlined people after the changed ones. */
@@ -51,7 +51,7 @@ export interface PanelSettings {
 }
 
 /** One people array of a slide. */
-export function peoplePanel(settings: PanelSettings, messages: TeachingMessages): PeoplePanel {
+export function peoplePanel(settings: PanelSettings, messages: TeachingPatientSlideMessages): PeoplePanel {
   const layout = iconArrayLayout(settings.groups.denominator, settings.groups, {
     arrangement: settings.arrangement ?? 'grouped',
     ...(settings.seed === undefined ? {} : { seed: settings.seed }),

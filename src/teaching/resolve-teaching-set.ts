@@ -7,7 +7,7 @@
 import { describeProblem } from '../core/messages/describe.ts';
 import { readTopicFile } from '../core/topic/topic-file.ts';
 import type { Topic } from '../core/topic/topic.ts';
-import { teachingMessagesEn } from './messages/en.ts';
+import { teachingPresenterMessagesEn } from './messages/en.ts';
 import { presentationItem } from './presentation-item.ts';
 import type { ItemProblem, PresentationItem } from './presentation-item.ts';
 import type { SetProblem, TeachingSet, TeachingSetItem } from './teaching-set-file.ts';
@@ -19,7 +19,7 @@ export type ResolvedTeachingSet =
   | { readonly ok: true; readonly title: string; readonly items: readonly PresentationItem[] }
   | ({ readonly ok: false } & SetProblem);
 
-const words = teachingMessagesEn.file;
+const words = teachingPresenterMessagesEn.file;
 
 /** A relative path to a .json file: no scheme, no drive, no leading slash. */
 export function isUsableTopicPath(path: string): boolean {

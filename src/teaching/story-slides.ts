@@ -4,18 +4,17 @@
  * sentences a patient would hear. Every number comes from the computed topic and
  * every patient sentence from the core's wording.
  */
-import { formatSignificant } from '../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { topicWording } from '../core/wording/topic-wording.ts';
 import type { TopicWording } from '../core/wording/topic-wording.ts';
 import type { SentenceKind } from '../core/wording/wording-sentence.ts';
 import { uncertainRanks } from '../render/uncertain-people.ts';
-import { capitalise } from './messages/en.ts';
 import type { Period, TeachingMessages } from './messages/teaching-messages.ts';
 import { changedGroup, peoplePanel, totalsOnly } from './people-panel.ts';
 import { benefitOutcome, headlineOutcome } from './presentation-item.ts';
 import type { PresentationItem } from './presentation-item.ts';
 import type { Callout, PeoplePanel, Slide, SlideLine } from './slide-model.ts';
+import { isLessonStep } from './teaching-steps.ts';
 import type { StepKind } from './teaching-steps.ts';
 
 /** What every slide builder reads. */
@@ -48,12 +47,17 @@ export function sentenceOf(wording: TopicWording, outcomeId: string, optionId: s
   return option?.sentences.find((entry) => entry.kind === kind)?.text ?? null;
 }
 
+/** A step's heading: a story step's in the topic's language, a format demonstration's in the clinician's. */
+export function stepName(kind: StepKind, source: SlideSource): string {
+  return isLessonStep(kind) ? source.messages.clinician.stepNames[kind] : source.messages.patient.stepNames[kind];
+}
+
 /** A slide with the given parts; everything not given is empty. */
 export function slide(kind: StepKind, source: SlideSource, parts: Partial<Omit<Slide, 'kind' | 'illustrative'>>): Slide {
   return {
     kind,
     layout: parts.layout ?? 'words',
-    heading: parts.heading ?? source.messages.stepNames[kind],
+    heading: parts.heading ?? stepName(kind, source),
     panels: parts.panels ?? [],
     callouts: parts.callouts ?? [],
     cards: parts.cards ?? [],
@@ -74,13 +78,13 @@ export function comparisonPanel(arms: OutcomeArms, source: SlideSource): PeopleP
   return peoplePanel(
     {
       id: 'comparison',
-      title: capitalise(arms.comparison.name),
+      title: source.messages.patient.capitalise(arms.comparison.name),
       groups: arms.comparison.groups,
       outcome: arms.outcome.name,
       option: arms.option.name,
       wanted: arms.outcome.wanted,
     },
-    source.messages,
+    source.messages.patient,
   );
 }
 
@@ -94,13 +98,13 @@ export function optionPanel(
   return peoplePanel(
     {
       id: settings.id ?? 'option',
-      title: settings.title ?? capitalise(arms.option.name),
+      title: settings.title ?? source.messages.patient.capitalise(arms.option.name),
       groups,
       outcome: arms.outcome.name,
       option: arms.option.name,
       wanted: arms.outcome.wanted,
     },
-    source.messages,
+    source.messages.patient,
   );
 }
 
@@ -109,14 +113,14 @@ const periodOf = (result: TopicResult): Period => ({ years: result.periodYears, 
 
 function titleSlide(source: SlideSource): Slide {
   const { topic, result, optionId } = source.item;
-  const words = source.messages.title;
+  const words = source.messages.patient.title;
   const comparison = topic.options.find((option) => option.isComparison)?.name ?? '';
   const option = topic.options.find((entry) => entry.id === optionId)?.name ?? '';
   const lines: SlideLine[] = [];
   if (result.population.trim() !== '') lines.push(line(words.who(result.population.trim().replace(/[.!?]$/, ''))));
   lines.push(line(words.period(periodOf(result))), line(words.comparing(option, comparison)));
   if (result.illustrative) lines.push(line(words.illustrative, 'notice'));
-  lines.push(line(source.messages.view.keysHint, 'note'));
+  lines.push(line(source.messages.clinician.view.keysHint, 'note'));
   return slide('title', source, { heading: topic.title, lines });
 }
 
@@ -125,7 +129,7 @@ function baselineSlide(source: SlideSource): Slide {
   const arms = armsOf(headlineOutcome(result), optionId);
   if (arms === null) return slide('baseline', source, {});
   const { comparison, outcome } = arms;
-  const words = source.messages.callouts;
+  const words = source.messages.patient.callouts;
   const { denominator } = result;
   const callouts: Callout[] = [
     {
@@ -150,7 +154,7 @@ function withOptionSlide(source: SlideSource): Slide {
   const arms = armsOf(headlineOutcome(result), optionId);
   if (arms === null) return slide('with-option', source, {});
   const { comparison, option, outcome } = arms;
-  const words = source.messages.callouts;
+  const words = source.messages.patient.callouts;
   const withCount = option.groups.event + option.groups.caused;
   return slide('with-option', source, {
     layout: 'pair',
@@ -173,7 +177,7 @@ function withOptionSlide(source: SlideSource): Slide {
  */
 function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms: OutcomeArms, heading?: string): Slide {
   const { option, outcome } = arms;
-  const words = source.messages.callouts;
+  const words = source.messages.patient.callouts;
   const { denominator } = source.item.result;
   const group = changedGroup(kind, outcome.wanted);
   const changed = option.groups[group];
@@ -190,14 +194,20 @@ function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms
       : [];
   const lines: SlideLine[] = [];
   if (changed === 0) {
-    lines.push(line(source.messages.story.noOneChanged(group, outcome.wanted, denominator, outcome.name, option.name)));
+    lines.push(line(source.messages.patient.story.noOneChanged(group, outcome.wanted, denominator, outcome.name, option.name)));
     // The option may change people the other way on this outcome: say so, in their own look.
     const other = kind === 'helped' ? 'harmed' : 'helped';
     const otherGroup = changedGroup(other, outcome.wanted);
     const moved = option.groups[otherGroup];
     if (moved > 0) {
-      const because = source.messages.callouts.changedBecause(otherGroup, outcome.wanted, moved, outcome.name, option.name);
-      lines.push(line(source.messages.story.instead(words.countIn(moved, denominator), because), 'body', other));
+      const because = source.messages.patient.callouts.changedBecause(
+        otherGroup,
+        outcome.wanted,
+        moved,
+        outcome.name,
+        option.name,
+      );
+      lines.push(line(source.messages.patient.story.instead(words.countIn(moved, denominator), because), 'body', other));
     }
   }
   return slide(kind, source, {
@@ -212,7 +222,7 @@ function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms
 function helpedSlide(source: SlideSource): Slide {
   const { result, optionId } = source.item;
   const arms = armsOf(benefitOutcome(result), optionId);
-  if (arms === null) return slide('helped', source, { lines: [line(source.messages.story.noBenefit)] });
+  if (arms === null) return slide('helped', source, { lines: [line(source.messages.clinician.missing.noBenefit)] });
   return changedPeopleSlide('helped', source, arms);
 }
 
@@ -225,17 +235,19 @@ function harmOf(source: SlideSource): OutcomeResult | null {
 
 function harmedSlide(source: SlideSource): Slide {
   const { optionId, harmIds } = source.item;
-  const messages = source.messages;
+  const { patient: messages, clinician } = source.messages;
   const arms = armsOf(harmOf(source), optionId);
   if (arms === null)
-    return slide('harmed', source, { lines: [line(messages.story.noHarm), line(messages.story.noHarmPrompt, 'note')] });
+    return slide('harmed', source, {
+      lines: [line(clinician.missing.noHarm), line(clinician.missing.noHarmPrompt, 'note')],
+    });
   const heading = messages.story.partOf(messages.stepNames.harmed, source.part + 1, harmIds.length);
   return changedPeopleSlide('harmed', source, arms, heading);
 }
 
 function uncertaintySlide(source: SlideSource): Slide {
   const { result, optionId } = source.item;
-  const messages = source.messages;
+  const messages = source.messages.patient;
   const arms = armsOf(benefitOutcome(result) ?? headlineOutcome(result), optionId);
   if (arms === null) return slide('uncertainty', source, {});
   const { option, outcome } = arms;
@@ -245,7 +257,7 @@ function uncertaintySlide(source: SlideSource): Slide {
   const panel = peoplePanel(
     {
       id: 'option',
-      title: capitalise(option.name),
+      title: messages.capitalise(option.name),
       groups: option.groups,
       outcome: outcome.name,
       option: option.name,
@@ -260,8 +272,7 @@ function uncertaintySlide(source: SlideSource): Slide {
   const certainty = sentenceOf(wording, outcome.outcomeId, option.optionId, 'certainty');
   const lines: SlideLine[] = [];
   if (range !== null) lines.push(line(range));
-  if (interval !== null && option.level !== null)
-    lines.push(line(messages.story.intervalLevel(formatSignificant(option.level * 100)), 'note'));
+  if (interval !== null && option.level !== null) lines.push(line(messages.story.intervalLevel(option.level * 100), 'note'));
   if (span !== null) lines.push(line(messages.callouts.outlined, 'body', 'uncertain'));
   if (option.certainty !== null) {
     lines.push(line(`${messages.story.certaintyLabel}: ${messages.story.certaintyNames[option.certainty]}`, 'subheading'));
@@ -295,7 +306,8 @@ export function patientWordsParts(item: PresentationItem): readonly PatientWords
 }
 
 function patientWordsSlide(source: SlideSource): Slide {
-  const { item, messages } = source;
+  const { item } = source;
+  const messages = source.messages.patient;
   const { result, optionId } = item;
   const wording = topicWording(result);
   const lines: SlideLine[] = [];

@@ -13,7 +13,7 @@ import type { Topic } from '../core/topic/topic.ts';
 import { locateIssue } from '../core/topic/schema-expectation.ts';
 import type { SchemaNode } from '../core/topic/schema-expectation.ts';
 import type { Denominator } from '../core/types.ts';
-import { teachingMessagesEn } from './messages/en.ts';
+import { teachingPresenterMessagesEn } from './messages/en.ts';
 import { TEACHING_SET_FORMAT, TEACHING_SET_VERSION, teachingSetSchema } from './teaching-set-schema.ts';
 import type { StepKind } from './teaching-steps.ts';
 
@@ -48,7 +48,7 @@ export interface SetProblem {
 
 export type TeachingSetReading = { readonly ok: true; readonly set: TeachingSet } | ({ readonly ok: false } & SetProblem);
 
-const words = teachingMessagesEn.file;
+const words = teachingPresenterMessagesEn.file;
 
 function fail(field: string, message: string): { readonly ok: false } & SetProblem {
   return { ok: false, field, message };

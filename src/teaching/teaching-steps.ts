@@ -25,3 +25,16 @@ export type StepKind = (typeof STEP_KINDS)[number];
 
 /** The steps shown when a topic or set item names none. */
 export const DEFAULT_STEPS: readonly StepKind[] = STEP_KINDS;
+
+/** The format demonstrations: commentary for trainees, in the clinician's language. */
+export const LESSON_STEP_KINDS = ['framing', 'denominator', 'arrangement', 'incremental'] as const;
+
+export type LessonStepKind = (typeof LESSON_STEP_KINDS)[number];
+
+/** The steps that tell the topic's own story, in the topic's language. */
+export type StoryStepKind = Exclude<StepKind, LessonStepKind>;
+
+/** Whether a step is one of the format demonstrations. */
+export function isLessonStep(kind: StepKind): kind is LessonStepKind {
+  return (LESSON_STEP_KINDS as readonly StepKind[]).includes(kind);
+}

@@ -6,12 +6,16 @@
 import { capitalise, plural, startsWithVerb } from '../../core/messages/en/english-grammar.ts';
 import { UNIT_NAMES_EN } from '../../core/messages/en/time-words.ts';
 import { amountIn } from '../../core/time-unit.ts';
-import type { Period, TeachingMessages, TeachingPresenterMessages, TeachingSlideMessages } from './teaching-messages.ts';
+import type {
+  Period,
+  TeachingClinicianMessages,
+  TeachingLessonMessages,
+  TeachingMessages,
+  TeachingPatientSlideMessages,
+  TeachingPresenterMessages,
+} from './teaching-messages.ts';
 
-export type { EvidenceWords, Period, TeachingMessages } from './teaching-messages.ts';
-
-/** A name as it starts a line: "no tablet" → "No tablet". */
-export { capitalise };
+export type { EvidenceWords, Period, TeachingMessages, TeachingPatientSlideMessages } from './teaching-messages.ts';
 
 /**
  * A period with its preposition, in the unit given: "over 10 years", "over the next 6 months",
@@ -55,9 +59,9 @@ const changedVerb = (group: 'prevented' | 'caused', wanted: boolean, outcome: st
   return group === 'prevented' ? plural(count, 'avoids', 'avoid') : get(outcome, count);
 };
 
-/** The English words drawn on the slides. */
-export const teachingSlideMessagesEn: TeachingSlideMessages = {
-  /** The name of each step, as the slide's heading and in the step list. */
+/** The English words a patient would read on the slides. */
+export const teachingPatientSlideMessagesEn: TeachingPatientSlideMessages = {
+  /** The name of each story step, as the slide's heading. */
   stepNames: {
     title: 'The decision',
     baseline: 'Without the option',
@@ -66,11 +70,10 @@ export const teachingSlideMessagesEn: TeachingSlideMessages = {
     harmed: 'Who is harmed',
     uncertainty: 'How sure are we?',
     'patient-words': 'What the patient hears',
-    framing: 'One result, four ways',
-    denominator: '100 or 1000 people?',
-    arrangement: 'Grouped or scattered?',
-    incremental: 'Two totals, or the change itself?',
   },
+
+  decimal: shortDecimal,
+  capitalise,
 
   title: {
     who: (population: string) => `For ${population}.`,
@@ -108,20 +111,12 @@ export const teachingSlideMessagesEn: TeachingSlideMessages = {
   },
 
   panels: {
-    denominatorCaption: (denominator: number) => `${denominator} people`,
-    grouped: 'Grouped',
-    scattered: 'Scattered',
-    totalsOnly: 'Two totals',
-    withChange: 'Change as its own group',
     description: (title: string, labels: readonly string[]) => `${title}: ${labels.join(', ')}.`,
   },
 
   story: {
     totalWithout: (count: number, denominator: number, comparison: string) =>
       `Without it (${comparison}): ${count} in ${denominator}.`,
-    noBenefit: 'This topic lists no benefit to show.',
-    noHarm: 'This topic lists no harms.',
-    noHarmPrompt: 'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
     /** No one changed: "none of 100 avoid a stroke …", "none of 100 miss out on pain relief …". */
     noOneChanged: (group: 'prevented' | 'caused', wanted: boolean, denominator: number, outcome: string, option: string) =>
       `At these numbers, none of ${denominator} ${changedVerb(group, wanted, outcome, 2)} ${outcome} because of ${option}.`,
@@ -131,7 +126,7 @@ export const teachingSlideMessagesEn: TeachingSlideMessages = {
     partOf: (heading: string, part: number, parts: number) => (parts > 1 ? `${heading} (${part} of ${parts})` : heading),
     certaintyLabel: 'Certainty of the evidence',
     /** The level of the range: "The range is the research's 95% interval." */
-    intervalLevel: (percent: string) => `The range is the research’s ${percent}% interval.`,
+    intervalLevel: (percent: number) => `The range is the research’s ${shortDecimal(percent)}% interval.`,
     certaintyNames: { high: 'high', moderate: 'moderate', low: 'low', 'very-low': 'very low' },
     patientTopics: (outcome: string) => `About ${outcome}`,
   },
@@ -162,6 +157,30 @@ export const teachingSlideMessagesEn: TeachingSlideMessages = {
     nntDetail: (denominator: number, difference: string, quotient: string, count: number, rounding: 'up' | 'down') =>
       `${denominator} ÷ ${difference} = ${quotient}, rounded ${rounding}: ${count}`,
     nntNone: 'No number needed to treat',
+  },
+};
+
+/** The English commentary of the lesson: the format demonstrations and what the research found. */
+export const teachingLessonMessagesEn: TeachingLessonMessages = {
+  stepNames: {
+    framing: 'One result, four ways',
+    denominator: '100 or 1000 people?',
+    arrangement: 'Grouped or scattered?',
+    incremental: 'Two totals, or the change itself?',
+  },
+
+  panels: {
+    denominatorCaption: (denominator: number) => `${denominator} people`,
+    grouped: 'Grouped',
+    scattered: 'Scattered',
+    totalsOnly: 'Two totals',
+    withChange: 'Change as its own group',
+  },
+
+  missing: {
+    noBenefit: 'This topic lists no benefit to show.',
+    noHarm: 'This topic lists no harms.',
+    noHarmPrompt: 'Ask: what could go wrong, and how often? Leaving harms out is a choice too.',
   },
 
   /**
@@ -262,5 +281,22 @@ export const teachingPresenterMessagesEn: TeachingPresenterMessages = {
   },
 };
 
-/** Every English word of the teaching view, slides and presenter together. */
-export const teachingMessagesEn: TeachingMessages = { ...teachingSlideMessagesEn, ...teachingPresenterMessagesEn };
+/** The English words of the clinician: the lesson's commentary and the presenter's. */
+export const teachingClinicianMessagesEn: TeachingClinicianMessages = {
+  ...teachingLessonMessagesEn,
+  ...teachingPresenterMessagesEn,
+};
+
+/**
+ * The teaching view's words for a topic: the patient's slide words in the topic's language
+ * (English unless given), beside the clinician's English.
+ */
+export function teachingMessagesWith(
+  patient: TeachingPatientSlideMessages = teachingPatientSlideMessagesEn,
+  clinician: TeachingClinicianMessages = teachingClinicianMessagesEn,
+): TeachingMessages {
+  return { patient, clinician };
+}
+
+/** Every English word of the teaching view, the patient's and the clinician's. */
+export const teachingMessagesEn: TeachingMessages = teachingMessagesWith();

@@ -1,17 +1,18 @@
 /**
- * The shape of the teaching view's words, apart from any language. Two parts:
- * - {@link TeachingSlideMessages}: every text drawn on a slide, which follows the topic's
- *   language. Within it, {@link TeachingPatientSlideMessages} is the topic's own story (the
- *   decision, the people with and without the option, the call-outs, the counts, what the
- *   patient hears) and {@link TeachingLessonMessages} the commentary for trainees (the format
- *   demonstrations and what the research found about each format).
- * - {@link TeachingPresenterMessages}: the view's controls and the presenter's messages
- *   (opened, saved, exported, Back, Next…) and the teaching-set file messages, in the
- *   clinician's interface language.
+ * The shape of the teaching view's words, apart from any language. Two parts, each in its
+ * own language:
+ * - {@link TeachingPatientSlideMessages}: what a patient would read on a slide, in the topic's
+ *   language: the story steps' headings, the call-outs, the counts under the people, the
+ *   certainty, and the figure cards that say one result four ways, with the topic's numbers
+ *   written as that language writes them.
+ * - {@link TeachingClinicianMessages}, in the clinician's interface language: the lesson's
+ *   commentary for trainees ({@link TeachingLessonMessages}: the format demonstrations' headings
+ *   and panel titles, what the research found, the prompts when a topic lists nothing to show)
+ *   and the presenter's controls and teaching-set file messages ({@link TeachingPresenterMessages}).
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
-import type { StepKind } from '../teaching-steps.ts';
+import type { LessonStepKind, StoryStepKind } from '../teaching-steps.ts';
 
 /** A finding from the research and where it was published. */
 export interface EvidenceWords {
@@ -30,8 +31,12 @@ export type ChangedGroup = 'prevented' | 'caused';
 
 /** The topic's own slides: what a patient sees when the story of the numbers is told. */
 export interface TeachingPatientSlideMessages {
-  /** The name of each step, as the slide's heading and in the step list. */
-  readonly stepNames: Readonly<Record<StepKind, string>>;
+  /** The name of each story step, as the slide's heading. */
+  readonly stepNames: Readonly<Record<StoryStepKind, string>>;
+  /** A number with at most two decimals and no trailing zeros, as the language writes it: "2.5", "2,5". */
+  readonly decimal: (value: number) => string;
+  /** A name as it starts a line or a title: "sin tratamiento" → "Sin tratamiento". */
+  readonly capitalise: (text: string) => string;
   readonly title: {
     readonly who: (population: string) => string;
     readonly period: (period: Period) => string;
@@ -58,31 +63,22 @@ export interface TeachingPatientSlideMessages {
     readonly uncertain: (count: number, outcome: string) => string;
   };
   readonly panels: {
-    readonly denominatorCaption: (denominator: number) => string;
-    readonly grouped: string;
-    readonly scattered: string;
-    readonly totalsOnly: string;
-    readonly withChange: string;
+    /** A people array's text alternative: its title, then its counts in words. */
     readonly description: (title: string, labels: readonly string[]) => string;
   };
   readonly story: {
     readonly totalWithout: (count: number, denominator: number, comparison: string) => string;
-    readonly noBenefit: string;
-    readonly noHarm: string;
-    readonly noHarmPrompt: string;
     readonly noOneChanged: (group: ChangedGroup, wanted: boolean, denominator: number, outcome: string, option: string) => string;
     /** The people an option changes the other way: `count` is already "10 in 100", `because` the call-out. */
     readonly instead: (count: string, because: string) => string;
     readonly partOf: (heading: string, part: number, parts: number) => string;
     readonly certaintyLabel: string;
-    readonly intervalLevel: (percent: string) => string;
+    /** The level of the range, from its percentage (95, 97.5). */
+    readonly intervalLevel: (percent: number) => string;
     readonly certaintyNames: Readonly<Record<Certainty, string>>;
     readonly patientTopics: (outcome: string) => string;
   };
-}
-
-/** The lesson's commentary for trainees: the format demonstrations and their evidence. */
-export interface TeachingLessonMessages {
+  /** The framing step's figure cards: one result said as a relative change, an absolute one and an NNT. */
   readonly framing: {
     readonly relativeLabel: string;
     readonly relativeValue: (percent: number, direction: 'lower' | 'higher', wanted: boolean) => string;
@@ -109,12 +105,29 @@ export interface TeachingLessonMessages {
     ) => string;
     readonly nntNone: string;
   };
+}
+
+/** The lesson's commentary for trainees: the format demonstrations and their evidence. */
+export interface TeachingLessonMessages {
+  /** The name of each format demonstration, as the slide's heading. */
+  readonly stepNames: Readonly<Record<LessonStepKind, string>>;
+  /** The titles of the demonstrations' people arrays: each names a format. */
+  readonly panels: {
+    readonly denominatorCaption: (denominator: number) => string;
+    readonly grouped: string;
+    readonly scattered: string;
+    readonly totalsOnly: string;
+    readonly withChange: string;
+  };
+  /** What a slide says when the topic lists nothing for its step, and the prompt to trainees. */
+  readonly missing: {
+    readonly noBenefit: string;
+    readonly noHarm: string;
+    readonly noHarmPrompt: string;
+  };
   /** What the research found about each format, with its source (kept as published). */
   readonly evidence: Readonly<Record<'framing' | 'denominator' | 'arrangement' | 'incremental', EvidenceWords>>;
 }
-
-/** Every text drawn on a slide: it follows the topic's language. */
-export type TeachingSlideMessages = TeachingPatientSlideMessages & TeachingLessonMessages;
 
 /** The view's controls, the presenter's messages and the teaching-set file messages. */
 export interface TeachingPresenterMessages {
@@ -168,8 +181,15 @@ export interface TeachingPresenterMessages {
   };
 }
 
+/** The words in the clinician's interface language: the lesson's commentary and the presenter's. */
+export type TeachingClinicianMessages = TeachingLessonMessages & TeachingPresenterMessages;
+
 /**
- * What the teaching code takes: the slide words and the presenter words side by side, so that a
- * slide builder reads `messages.callouts` and the view `messages.view` from one value.
+ * What the teaching code takes: the patient's slide words, in the topic's language, beside the
+ * clinician's words, so that a slide builder reads `messages.patient.callouts` and
+ * `messages.clinician.evidence` and never mixes the two up.
  */
-export type TeachingMessages = TeachingSlideMessages & TeachingPresenterMessages;
+export interface TeachingMessages {
+  readonly patient: TeachingPatientSlideMessages;
+  readonly clinician: TeachingClinicianMessages;
+}

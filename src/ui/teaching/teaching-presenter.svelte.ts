@@ -6,8 +6,9 @@
  */
 import type { Topic } from '../../core/topic/topic.ts';
 import type { Denominator } from '../../core/types.ts';
-import { teachingMessagesEn } from '../../teaching/messages/en.ts';
-import type { TeachingMessages } from '../../teaching/messages/en.ts';
+import { teachingClinicianMessagesEn } from '../../teaching/messages/en.ts';
+import type { TeachingPatientSlideMessages } from '../../teaching/messages/en.ts';
+import type { TeachingClinicianMessages } from '../../teaching/messages/teaching-messages.ts';
 import { presentationItem } from '../../teaching/presentation-item.ts';
 import { resolveTeachingSet } from '../../teaching/resolve-teaching-set.ts';
 import { readTeachingSet } from '../../teaching/teaching-set-file.ts';
@@ -37,12 +38,16 @@ export interface TeachingPresenterOptions {
   readonly onleave: () => void;
   /** Gives focus back to the view after a file dialog. */
   readonly refocus?: () => void;
-  readonly messages?: TeachingMessages;
+  /** The controls' and the lesson's words, in the clinician's interface language (English by default). */
+  readonly messages?: TeachingClinicianMessages;
+  /** The words a patient would read on the slides, in the topic's language (English by default). */
+  readonly patientMessages?: TeachingPatientSlideMessages;
 }
 
 export class TeachingPresenter {
   readonly session: TeachingSession;
-  readonly words: TeachingMessages;
+  /** The clinician's words: the controls, the messages and the lesson. */
+  readonly words: TeachingClinicianMessages;
   /** Why the topic cannot be presented, or null when it can. */
   readonly problem: string | null;
   message = $state.raw<TeachingMessage | null>(null);
@@ -55,9 +60,12 @@ export class TeachingPresenter {
 
   constructor(options: TeachingPresenterOptions) {
     this.#options = options;
-    this.words = options.messages ?? teachingMessagesEn;
+    this.words = options.messages ?? teachingClinicianMessagesEn;
     const first = presentationItem(options.topic, { option: null, harm: null, per: options.per, steps: DEFAULT_STEPS });
-    this.session = new TeachingSession(options.topic.title, first.ok ? [first.item] : [], this.words);
+    this.session = new TeachingSession(options.topic.title, first.ok ? [first.item] : [], {
+      clinician: this.words,
+      ...(options.patientMessages === undefined ? {} : { patient: options.patientMessages }),
+    });
     this.problem = first.ok
       ? null
       : this.words.view.cannotPresent(first.problem.kind === 'not-computed' ? first.problem.detail : first.problem.kind);

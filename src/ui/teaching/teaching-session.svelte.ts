@@ -5,8 +5,9 @@
  * first. The topics are copies: presenting never changes the editor's topic.
  */
 import { buildSlide } from '../../teaching/build-slide.ts';
-import { teachingMessagesEn } from '../../teaching/messages/en.ts';
-import type { TeachingMessages } from '../../teaching/messages/en.ts';
+import { teachingMessagesEn, teachingMessagesWith } from '../../teaching/messages/en.ts';
+import type { TeachingMessages, TeachingPatientSlideMessages } from '../../teaching/messages/en.ts';
+import type { TeachingClinicianMessages } from '../../teaching/messages/teaching-messages.ts';
 import type { PresentationItem } from '../../teaching/presentation-item.ts';
 import { slidePlaces } from '../../teaching/slide-places.ts';
 import type { SlidePlace } from '../../teaching/slide-places.ts';
@@ -22,6 +23,7 @@ export class TeachingSession {
   fileName = $state.raw<string | null>(null);
   /** The place in the sequence, from 0. */
   index = $state(0);
+  /** The patient's slide words, in the topic's language, beside the clinician's. */
   readonly messages: TeachingMessages = teachingMessagesEn;
 
   readonly places = $derived(slidePlaces(this.items));
@@ -31,8 +33,13 @@ export class TeachingSession {
     this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages, this.place.part),
   );
 
-  constructor(title: string, items: readonly PresentationItem[], messages: TeachingMessages = teachingMessagesEn) {
-    this.messages = messages;
+  /** The patient's slide words and the clinician's are English unless given. */
+  constructor(
+    title: string,
+    items: readonly PresentationItem[],
+    words: { readonly patient?: TeachingPatientSlideMessages; readonly clinician?: TeachingClinicianMessages } = {},
+  ) {
+    this.messages = teachingMessagesWith(words.patient, words.clinician);
     this.load(title, items, null);
   }
 
