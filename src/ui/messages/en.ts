@@ -1,5 +1,25 @@
 /** The English words of the clinician's interface, exactly as the screens show them. */
+import type { InfleszBand } from '../../core/wording/readability-es.ts';
+import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { UiMessages } from './ui-messages.ts';
+
+const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
+  'very-difficult': 'very difficult',
+  'somewhat-difficult': 'somewhat difficult',
+  normal: 'normal',
+  'fairly-easy': 'fairly easy',
+  'very-easy': 'very easy',
+};
+
+/** The reading level in one sentence, with its aim and where the scale comes from. */
+function readingLevel(level: ReadingLevel): string {
+  if (level.score === null) return 'There is no patient wording to score yet.';
+  if (level.scale === 'flesch-kincaid-grade') {
+    return `The patient wording reads at about grade ${level.score.toFixed(1).replace(/\.0$/, '')} (Flesch–Kincaid, ${level.source}); the aim is grade ${level.limit} or below. ${level.withinTarget ? 'Within the aim.' : 'Above the aim: shorter outcome names help.'}`;
+  }
+  const band = level.band === null ? '' : ` (${INFLESZ_BANDS[level.band]})`;
+  return `The Spanish patient wording has a reading ease of ${level.score} on the INFLESZ scale${band} (Szigriszt-Pazos perspicuity, bands of ${level.source}); the aim is ${level.target} or more. ${level.withinTarget ? 'Within the aim.' : 'Below the aim: shorter outcome names help.'}`;
+}
 
 export const uiMessagesEn: UiMessages = {
   app: {
@@ -69,5 +89,13 @@ export const uiMessagesEn: UiMessages = {
     noPatientHint: 'No patient details are entered, so none can be saved.',
     cancel: 'Cancel',
     saveFile: 'Save file',
+  },
+  results: {
+    readingHeading: 'Reading level',
+    readingLevel,
+    wordsLoading: (language) => `Preparing the ${language === 'es' ? 'Spanish' : 'English'} patient wording…`,
+    wordsFailed: (language, detail) =>
+      `The ${language === 'es' ? 'Spanish' : 'English'} patient wording could not be loaded (${detail}). Reload the app; the topic is kept.`,
+    languageNames: { en: 'English', es: 'Spanish (Español)' },
   },
 };

@@ -4,6 +4,8 @@
  * read them through the locale context (`state/locale-context.ts`), state classes through
  * their constructor. A function takes the values a sentence needs and returns it finished.
  */
+import type { PatientLanguage } from '../../core/topic/topic-language.ts';
+import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -91,6 +93,19 @@ export interface SaveDialogMessages {
   readonly saveFile: string;
 }
 
+/** The results panel's words about the patient wording itself. */
+export interface ResultsMessages {
+  readonly readingHeading: string;
+  /** The patient wording's reading level on its language's scale, with the aim and its source. */
+  readonly readingLevel: (level: ReadingLevel) => string;
+  /** While the words of a topic's language load. */
+  readonly wordsLoading: (language: PatientLanguage) => string;
+  /** When they could not be loaded. */
+  readonly wordsFailed: (language: PatientLanguage, detail: string) => string;
+  /** The name of a patient language, in the interface's language. */
+  readonly languageNames: Readonly<Record<PatientLanguage, string>>;
+}
+
 export interface UiMessages {
   readonly app: AppFrameMessages;
   readonly appBar: AppBarMessages;
@@ -99,4 +114,5 @@ export interface UiMessages {
   readonly banners: BannerMessages;
   readonly toast: ToastMessages;
   readonly saveDialog: SaveDialogMessages;
+  readonly results: ResultsMessages;
 }

@@ -44,7 +44,20 @@ export const cliMessages = {
   handoutWarning: (sentence: string) => `Warning: ${sentence}`,
   handoutWritten: (path: string, paper: string, grade: string) =>
     `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
-  /** The same line for a Spanish handout: its reading ease on the INFLESZ scale, its band and the aim. */
+  /**
+   * The same line for a Spanish handout: its reading ease on the INFLESZ scale (Szigriszt-Pazos
+   * perspicuity, bands of Barrio-Cantalejo et al. 2008), its band and the aim.
+   */
+  handoutWrittenSpanish: (path: string, paper: string, ease: string, band: string, target: number) =>
+    `Wrote ${path}: 1 page, ${paper}, in Spanish, reading ease ${ease} on the INFLESZ scale (${band}; the aim is ${target} or more).`,
+  /** The INFLESZ bands, in English for the clinician. */
+  infleszBands: {
+    'very-difficult': 'very difficult',
+    'somewhat-difficult': 'somewhat difficult',
+    normal: 'normal',
+    'fairly-easy': 'fairly easy',
+    'very-easy': 'very easy',
+  },
   outWithSeveral: (count: number) =>
     `--out names one file, but ${count} topic files were given: use --out-dir FOLDER to write one handout per file.`,
   outAndOutDir: () => 'Give --out FILE.pdf for one handout or --out-dir FOLDER for one per topic file, not both.',
