@@ -7,6 +7,7 @@
  * "Con …" or stand as the subject, outcomes follow a verb or "de". A wanted event is had
  * "gracias a" an option and never "se libra", "se evita" or is caused.
  */
+import { type NntInterval, writeNntInterval } from '../../nnt-interval.ts';
 import { amountIn } from '../../time-unit.ts';
 import type { TimeUnit } from '../../time-unit.ts';
 import type {
@@ -19,6 +20,7 @@ import type {
 } from '../../wording/wording-catalogue.ts';
 import { NUMBER_SPACE, formatCountEs, formatDecimalEs } from './format-number-es.ts';
 import { aEs, deEs, startsWithQueEs } from './joining-es.ts';
+import { numberMessagesEs } from './numbers.ts';
 import { capitaliseEs, pluralEs, startsWithVerbEs } from './spanish-grammar.ts';
 import { durationEs } from './time-words-es.ts';
 
@@ -189,7 +191,7 @@ const wantedRange = (found: RangeCase, option: string, outcome: string, denomina
     case 'either':
     case 'no-change':
     case 'below-one':
-      return range(found, option, outcome, false, denominator);
+      return range(found, option, outcome, true, denominator);
   }
 };
 
@@ -216,17 +218,18 @@ const range = (found: RangeCase, option: string, outcome: string, wanted: boolea
 /**
  * GRADE informative statements (Santesso N et al. 2020, "GRADE guidelines 26: informative
  * statements to communicate the findings of systematic reviews of interventions", J Clin
- * Epidemiol 119:126–135), the "moderate effect" and "trivial" columns, in Spanish from memory:
- * high "reduce", moderate "probablemente reduce", low "puede reducir"; trivial "cambia poco o nada".
+ * Epidemiol 119:126–135), the "moderate effect" and "trivial" columns, in Spanish from memory.
+ * The chance is the subject ("Con la estatina, la probabilidad de un infarto probablemente se
+ * reduce"), never the option, so the verb never has to agree with a plural name ("las gotas").
  */
 const hedges = {
-  high: { reduce: 'reduce', increase: 'aumenta', trivial: 'cambia poco o nada' },
+  high: { reduce: 'se reduce', increase: 'aumenta', trivial: 'cambia poco o nada' },
   moderate: {
-    reduce: 'probablemente reduce',
+    reduce: 'probablemente se reduce',
     increase: 'probablemente aumenta',
     trivial: 'probablemente cambia poco o nada',
   },
-  low: { reduce: 'puede reducir', increase: 'puede aumentar', trivial: 'puede cambiar poco o nada' },
+  low: { reduce: 'puede reducirse', increase: 'puede aumentar', trivial: 'puede cambiar poco o nada' },
 } as const;
 
 /** The short form's change, the outcome said as what happens: "alrededor de 16 de cada 100 se libran gracias a la opción". */
@@ -282,8 +285,8 @@ const rangeClause = (crossesNoEffect: boolean): string =>
   crossesNoEffect ? ' Su rango incluye que no haya ninguna diferencia.' : '';
 
 /** "NNTB 25" or "NNTB 25 (NNTB 13 a 100)". */
-const nntHead = (label: string, count: number, interval: string | null): string =>
-  interval === null ? `${label} ${count}` : `${label} ${count} (${interval})`;
+const nntHead = (label: string, count: number, interval: NntInterval | null): string =>
+  interval === null ? `${label} ${count}` : `${label} ${count} (${writeNntInterval(interval, numberMessagesEs)})`;
 
 /** The Spanish wording catalogue. */
 export const wordingMessagesEs: WordingMessages = {
@@ -321,14 +324,14 @@ export const wordingMessagesEs: WordingMessages = {
       return `La evidencia es muy incierta sobre el efecto ${deEs(option)} en la probabilidad ${deEs(outcome)}.`;
     }
     const verb = hedges[certainty][importance === 'trivial' ? 'trivial' : direction];
-    return `${capitaliseEs(option)} ${verb} la probabilidad ${deEs(outcome)}.`;
+    return `Con ${option}, la probabilidad ${deEs(outcome)} ${verb}.`;
   },
   shortEffect: ({ option, wanted, direction, count, either, hidden, denominator, range: found }) =>
     `${capitaliseEs(option)}: ${shortChange(wanted, direction, count, either, hidden, denominator)} (${shortRange(found, direction, denominator)}).`,
   shortCertainty: ({ certainty, importance, direction }) =>
     certainty === 'very-low'
       ? 'La evidencia es muy incierta sobre su efecto.'
-      : `${capitaliseEs(hedges[certainty][importance === 'trivial' ? 'trivial' : direction])} la probabilidad.`,
+      : `La probabilidad ${hedges[certainty][importance === 'trivial' ? 'trivial' : direction]}.`,
   shortNnt: ({ wanted, label, count, group, years, unit, interval, crossesNoEffect }) => {
     const treating = `${nntHead(label, count, interval)}: tratar a ${count} ${group} durante ${durationEs({ years, unit })}`;
     if (wanted) {
@@ -358,7 +361,7 @@ export const wordingMessagesEs: WordingMessages = {
     return `${treating} ${label === 'NNTB' ? 'evita' : 'hace'} que ${oneOf(count)} ${verb.subjunctive} ${outcome}.${rangeClause(crossesNoEffect)}`;
   },
   nntNone: ({ option, outcome }) =>
-    `No hay número necesario a tratar: con estos números, ${option} no cambia la probabilidad ${deEs(outcome)}.`,
+    `No hay número necesario a tratar: con estos números, la probabilidad ${deEs(outcome)} es la misma con ${option}.`,
   relative: ({ option, outcome, wanted, from, to, denominator, direction, percent }) => {
     const fromTo = `de ${formatCountEs(from)} ${ofEach(denominator)} a ${formatCountEs(to)} ${ofEach(denominator)}`;
     const percentText = `${percent}${NUMBER_SPACE}%`;
