@@ -316,4 +316,7 @@ export const uiMessagesEn: UiMessages = {
     overdiagnosisHint: 'People found to have an illness that would never have harmed them, for example 4 in 1000.',
     outOf: 'Out of the people who have the test; the handout counts them per its own number of people.',
   },
+  teachingSlide: {
+    evidenceLabel: 'What the research found',
+  },
 };

@@ -366,6 +366,11 @@ export interface ScreeningMessages {
   readonly outOf: string;
 }
 
+/** The teaching view's slide, as the presenter's assistive technology reads it (the slide's own text follows the topic). */
+export interface TeachingSlideViewMessages {
+  readonly evidenceLabel: string;
+}
+
 export interface UiMessages {
   readonly app: AppFrameMessages;
   readonly appBar: AppBarMessages;
@@ -393,4 +398,5 @@ export interface UiMessages {
   readonly handoutDetails: HandoutDetailsMessages;
   readonly aboutTopic: AboutTopicMessages;
   readonly screening: ScreeningMessages;
+  readonly teachingSlide: TeachingSlideViewMessages;
 }
