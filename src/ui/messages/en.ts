@@ -70,4 +70,10 @@ export const uiMessagesEn: UiMessages = {
     cancel: 'Cancel',
     saveFile: 'Save file',
   },
+  language: {
+    label: 'Language the patient reads',
+    hint: 'The sentences, pictures and handout are written in it. This screen stays in English.',
+    names: { en: 'English', es: 'Español' },
+    notWritten: (tag) => `“${tag}” (not one Chancewise writes)`,
+  },
 };

@@ -4,6 +4,7 @@
  * read them through the locale context (`state/locale-context.ts`), state classes through
  * their constructor. A function takes the values a sentence needs and returns it finished.
  */
+import type { PatientLanguage } from '../../core/topic/topic-language.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -91,6 +92,16 @@ export interface SaveDialogMessages {
   readonly saveFile: string;
 }
 
+/** The editor's choice of the language the patient reads (the interface itself stays in its own language). */
+export interface LanguageMessages {
+  readonly label: string;
+  readonly hint: string;
+  /** Each language by its own name, as a speaker of it looks for it. */
+  readonly names: Readonly<Record<PatientLanguage, string>>;
+  /** A tag Chancewise cannot write, shown as the field's value until another is chosen. */
+  readonly notWritten: (tag: string) => string;
+}
+
 export interface UiMessages {
   readonly app: AppFrameMessages;
   readonly appBar: AppBarMessages;
@@ -99,4 +110,5 @@ export interface UiMessages {
   readonly banners: BannerMessages;
   readonly toast: ToastMessages;
   readonly saveDialog: SaveDialogMessages;
+  readonly language: LanguageMessages;
 }

@@ -9,6 +9,11 @@ import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { keyNumberTables } from '../../../src/ui/results/key-numbers.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+/** The words every component reads from the app's locale context. */
+const words = () => localeContext({ current: englishLocales });
 
 afterEach(() => cleanup());
 
@@ -17,7 +22,7 @@ if (demo === undefined) throw new Error('no sore-throat demonstration topic');
 
 function setUp() {
   const editor = new TopicEditor(draftFromTopic(demo!.topic));
-  render(EditorPanel, { props: { editor } });
+  render(EditorPanel, { props: { editor }, context: words() });
   return editor;
 }
 
