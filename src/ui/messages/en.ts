@@ -23,6 +23,10 @@ export const uiMessagesEn: UiMessages = {
     saveKeys: 'Ctrl+S',
     undo: 'Undo',
     redo: 'Redo',
+    copyInSpanish: 'A copy in Spanish',
+    copyInSpanishHint: 'A new, unsaved topic with the same numbers, for you to write in Spanish. This topic stays as it is.',
+    copiedInSpanish:
+      'This is a new copy in Spanish, not saved yet: the numbers are the same, and every text is still in English until you write it in Spanish (see “Still to fill in”). The topic you copied is unchanged.',
   },
   headline: {
     label: 'Headline results',

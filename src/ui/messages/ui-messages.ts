@@ -29,6 +29,10 @@ export interface AppBarMessages {
   readonly saveKeys: string;
   readonly undo: string;
   readonly redo: string;
+  /** The action that makes a copy of the topic to write in Spanish, and what it says once done. */
+  readonly copyInSpanish: string;
+  readonly copyInSpanishHint: string;
+  readonly copiedInSpanish: string;
 }
 
 /** The headline numbers pinned in a narrow window's header. */
