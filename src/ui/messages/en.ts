@@ -80,4 +80,20 @@ export const uiMessagesEn: UiMessages = {
     names: { en: 'English', es: 'Español' },
     notWritten: (tag) => `“${tag}” (not one Chancewise writes)`,
   },
+  translation: {
+    kinds: {
+      title: 'Decision',
+      population: 'Who the numbers are for',
+      optionName: 'Option name',
+      outcomeName: 'Outcome name',
+      evidenceSummary: 'Where the evidence comes from',
+      question: 'Question',
+      funding: 'Funding',
+      interests: 'Interests',
+      positiveLeadsTo: 'What a positive result leads to',
+    },
+    languageNames: { en: 'English', es: 'Spanish' },
+    stillIn: (what, text, from, to) => `${what} “${text}” is still in ${from}: write it in ${to}.`,
+    note: (from) => `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout.`,
+  },
 };

@@ -5,6 +5,7 @@
  * their constructor. A function takes the values a sentence needs and returns it finished.
  */
 import type { PatientLanguage } from '../../core/topic/topic-language.ts';
+import type { TranslatableKind } from '../draft/translation-texts.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -106,6 +107,18 @@ export interface LanguageMessages {
   readonly notWritten: (tag: string) => string;
 }
 
+/** The texts of a copy still to translate, listed under "Still to fill in". */
+export interface TranslationGapMessages {
+  /** What each kind of typed text is called in the list ("Option name"). */
+  readonly kinds: Readonly<Record<TranslatableKind, string>>;
+  /** The patient languages by their names in the interface's language ("Spanish"). */
+  readonly languageNames: Readonly<Record<PatientLanguage, string>>;
+  /** 'Option name “Daily tablet” is still in English: write it in Spanish.' (the names already in words). */
+  readonly stillIn: (what: string, text: string, from: string, to: string) => string;
+  /** Said once above the list while any text is still to translate. */
+  readonly note: (from: string) => string;
+}
+
 export interface UiMessages {
   readonly app: AppFrameMessages;
   readonly appBar: AppBarMessages;
@@ -115,4 +128,5 @@ export interface UiMessages {
   readonly toast: ToastMessages;
   readonly saveDialog: SaveDialogMessages;
   readonly language: LanguageMessages;
+  readonly translation: TranslationGapMessages;
 }
