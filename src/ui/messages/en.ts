@@ -60,6 +60,10 @@ export const uiMessagesEn: UiMessages = {
     illustrativeHeading: 'Illustrative example',
     illustrativeText: 'Every number here is invented, for demonstration and teaching. Do not use it for real decisions.',
     illustrativeStart: 'Start a new topic or open a file',
+    languageLabel: (language) => `Patient wording in ${language}`,
+    languageHeading: (language) => `Check the ${language}`,
+    languageText: (language) =>
+      `The ${language} wording of the sentences, pictures and handout is written by Chancewise, from set patterns around the names you type. Before it reaches patients, have it checked by a qualified medical translator or a ${language}-speaking clinician, and follow your local guidance on translated information for patients.`,
   },
   toast: {
     dismiss: 'Dismiss',

@@ -78,6 +78,10 @@ export interface BannerMessages {
   readonly illustrativeHeading: string;
   readonly illustrativeText: string;
   readonly illustrativeStart: string;
+  /** The caution over a topic whose patient language is not English (the language by its name in the interface's words). */
+  readonly languageLabel: (language: string) => string;
+  readonly languageHeading: (language: string) => string;
+  readonly languageText: (language: string) => string;
 }
 
 /** The message at the foot (or top) of the window. */
