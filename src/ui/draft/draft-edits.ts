@@ -67,6 +67,11 @@ export function setPeriodUnit(draft: TopicDraft, unit: TimeUnit): TopicDraft {
   return withFollowingBaselines({ ...draft, periodUnit: unit });
 }
 
+/** Say which language the patient reads the topic in (a BCP 47 tag: "en", "es", "es-MX"). */
+export function setLanguage(draft: TopicDraft, language: string): TopicDraft {
+  return draft.language === language ? draft : { ...draft, language };
+}
+
 /** Mark the topic as an invented example, or not. */
 export function setIllustrative(draft: TopicDraft, illustrative: boolean): TopicDraft {
   return { ...draft, illustrative };

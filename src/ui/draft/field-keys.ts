@@ -109,6 +109,7 @@ export function fieldOrder(draft: TopicDraft): string[] {
     'title',
     'population',
     'periodYears',
+    'language',
     'options',
     ...draft.options.map((option) => optionKey(option.id)),
     'outcomes',
@@ -146,6 +147,7 @@ export function fieldOrder(draft: TopicDraft): string[] {
  */
 export function fieldKeyForPath(path: string, draft: TopicDraft, questionPlaces: readonly number[] = []): string | null {
   if (path === 'title' || path === 'population' || path === 'periodYears' || path === 'clinician') return path;
+  if (path === 'language') return path;
   if (path === 'evidence.summary' || path === 'evidence.reviewed') return path;
   if (path === 'options' || path === 'outcomes' || path === 'questions') return path;
   if (OWN_PATHS.has(path)) return path;

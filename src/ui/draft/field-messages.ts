@@ -92,6 +92,9 @@ function periodMessage(found: Problem, period: { typed: string; unit: TimeUnit }
  * core's are the command line's, with the numbers as typed; the core's sentence otherwise.
  */
 export function fieldMessage(found: Problem, draft: TopicDraft): string {
+  if (found.code === 'topic-language-unsupported' && found.field === 'language') {
+    return `Chancewise cannot write patient wording in “${draft.language.trim()}”. Choose English or Español as the language the patient reads; nothing else you typed changes.`;
+  }
   const place = effectAt(found.field, draft);
   if (place !== null && place.rest === 'effect.interval') return intervalMessage(found, place.effect) ?? describeProblem(found);
   const arm = place === null ? null : /^effect\.(intervention|comparison)$/.exec(place.rest);

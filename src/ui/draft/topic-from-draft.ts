@@ -12,6 +12,7 @@ import { parseNumber } from '../../core/parse-number.ts';
 import { InputError, problem } from '../../core/problems.ts';
 import type { Problem } from '../../core/problems.ts';
 import { yearsFrom } from '../../core/time-unit.ts';
+import { readLanguageTag } from '../../core/topic/topic-language.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import { DEFAULT_HANDOUT_CHOICES } from '../../core/topic/topic.ts';
 import type { OptionEffect, Topic, TopicDisclosures, TopicHandoutChoices, TopicOutcome } from '../../core/topic/topic.ts';
@@ -174,6 +175,19 @@ function screeningField(screening: ScreeningDraft): Pick<Topic, 'screening'> {
   };
 }
 
+/**
+ * The language field: an English topic names none, so it reads back as older files do; a tag
+ * Chancewise cannot write is a problem on the field, as a file naming it could not be opened again.
+ */
+function languageField(reader: Reader, tag: string): Pick<Topic, 'language'> {
+  const trimmed = tag.trim();
+  if (trimmed === '' || trimmed === 'en') return {};
+  const reading = readLanguageTag(trimmed);
+  if (!reading.ok)
+    reader.problems.push(problem('topic-language-unsupported', 'language', { language: trimmed, reason: reading.reason }));
+  return { language: trimmed };
+}
+
 /** The options whose effects the topic holds, in order: every option but the comparison. */
 export function effectOptionIds(draft: TopicDraft): string[] {
   return draft.options.filter((option) => !option.isComparison).map((option) => option.id);
@@ -207,8 +221,7 @@ export function topicFromDraft(draft: TopicDraft): DraftReading {
     ...(sameChoices(draft.handout, DEFAULT_HANDOUT_CHOICES) ? {} : { handout: draft.handout }),
     ...aboutField(draft.about),
     ...screeningField(draft.screening),
-    // An English topic names no language, so it reads back as older files do.
-    ...(draft.language.trim() === 'en' || draft.language.trim() === '' ? {} : { language: draft.language.trim() }),
+    ...languageField(reader, draft.language),
     ...(draft.translation === null ? {} : { translation: draft.translation }),
   };
   return { topic, problems: reader.problems, questionPlaces };

@@ -2,6 +2,7 @@
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { InfleszBand } from '../../core/wording/readability-es.ts';
 import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
+import type { PatientLanguage } from '../../core/topic/topic-language.ts';
 import type { UiMessages } from './ui-messages.ts';
 
 const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
@@ -11,6 +12,9 @@ const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
   'fairly-easy': 'fairly easy',
   'very-easy': 'very easy',
 };
+
+/** The patient languages by their English names. */
+const LANGUAGE_NAMES: Readonly<Record<PatientLanguage, string>> = { en: 'English', es: 'Spanish' };
 
 /** The reading level in one sentence, with its aim and where the scale comes from. */
 function readingLevel(level: ReadingLevel): string {
@@ -46,6 +50,10 @@ export const uiMessagesEn: UiMessages = {
     saveKeys: 'Ctrl+S',
     undo: 'Undo',
     redo: 'Redo',
+    copyInSpanish: 'A copy in Spanish',
+    copyInSpanishHint: 'A new, unsaved topic with the same numbers, for you to write in Spanish. This topic stays as it is.',
+    copiedInSpanish:
+      'This is a new copy in Spanish, not saved yet: the numbers are the same, and every text is still in English until you write it in Spanish (see “Still to fill in”). The topic you copied is unchanged.',
   },
   headline: {
     label: 'Headline results',
@@ -79,6 +87,10 @@ export const uiMessagesEn: UiMessages = {
     illustrativeHeading: 'Illustrative example',
     illustrativeText: 'Every number here is invented, for demonstration and teaching. Do not use it for real decisions.',
     illustrativeStart: 'Start a new topic or open a file',
+    languageLabel: (language) => `Patient wording in ${language}`,
+    languageHeading: (language) => `Check the ${language}`,
+    languageText: (language) =>
+      `The ${language} wording of the sentences, pictures and handout is written by Chancewise, from set patterns around the names you type. Before it reaches patients, have it checked by a qualified medical translator or a ${language}-speaking clinician, and follow your local guidance on translated information for patients.`,
   },
   toast: {
     dismiss: 'Dismiss',
@@ -96,10 +108,9 @@ export const uiMessagesEn: UiMessages = {
   patientWording: {
     readingHeading: 'Reading level',
     readingLevel,
-    wordsLoading: (language) => `Preparing the ${language === 'es' ? 'Spanish' : 'English'} patient wording…`,
+    wordsLoading: (language) => `Preparing the ${LANGUAGE_NAMES[language]} patient wording…`,
     wordsFailed: (language, detail) =>
-      `The ${language === 'es' ? 'Spanish' : 'English'} patient wording could not be loaded (${detail}). Reload the app; the topic is kept.`,
-    languageNames: { en: 'English', es: 'Spanish (Español)' },
+      `The ${LANGUAGE_NAMES[language]} patient wording could not be loaded (${detail}). Reload the app; the topic is kept.`,
   },
   resultsStatus: {
     waiting: 'No results yet: fill in the marked fields.',
@@ -346,5 +357,27 @@ export const uiMessagesEn: UiMessages = {
   },
   teachingSlide: {
     evidenceLabel: 'What the research found',
+  },
+  language: {
+    label: 'Language the patient reads',
+    hint: 'The sentences, pictures and handout are written in it. This screen stays in English.',
+    names: { en: 'English', es: 'Español' },
+    notWritten: (tag) => `“${tag}” (not one Chancewise writes)`,
+  },
+  translation: {
+    kinds: {
+      title: 'Decision',
+      population: 'Who the numbers are for',
+      optionName: 'Option name',
+      outcomeName: 'Outcome name',
+      evidenceSummary: 'Where the evidence comes from',
+      question: 'Question',
+      funding: 'Funding',
+      interests: 'Interests',
+      positiveLeadsTo: 'What a positive result leads to',
+    },
+    languageNames: LANGUAGE_NAMES,
+    stillIn: (what, text, from, to) => `${what} “${text}” is still in ${from}: write it in ${to}.`,
+    note: (from) => `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout.`,
   },
 };

@@ -10,6 +10,7 @@ import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { Certainty, Importance, TopicDisclosures } from '../../core/topic/topic.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { DraftMeasure } from '../draft/topic-draft.ts';
+import type { TranslatableKind } from '../draft/translation-texts.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -34,6 +35,10 @@ export interface AppBarMessages {
   readonly saveKeys: string;
   readonly undo: string;
   readonly redo: string;
+  /** The action that makes a copy of the topic to write in Spanish, and what it says once done. */
+  readonly copyInSpanish: string;
+  readonly copyInSpanishHint: string;
+  readonly copiedInSpanish: string;
 }
 
 /** The headline numbers pinned in a narrow window's header. */
@@ -78,6 +83,10 @@ export interface BannerMessages {
   readonly illustrativeHeading: string;
   readonly illustrativeText: string;
   readonly illustrativeStart: string;
+  /** The caution over a topic whose patient language is not English (the language by its name in the interface's words). */
+  readonly languageLabel: (language: string) => string;
+  readonly languageHeading: (language: string) => string;
+  readonly languageText: (language: string) => string;
 }
 
 /** The message at the foot (or top) of the window. */
@@ -106,8 +115,6 @@ export interface PatientWordingMessages {
   readonly wordsLoading: (language: PatientLanguage) => string;
   /** When they could not be loaded. */
   readonly wordsFailed: (language: PatientLanguage, detail: string) => string;
-  /** The name of a patient language, in the interface's language. */
-  readonly languageNames: Readonly<Record<PatientLanguage, string>>;
 }
 
 /** The line above the results: whether they are up to date, and the people they count out of. */
@@ -386,6 +393,28 @@ export interface TeachingSlideViewMessages {
   readonly evidenceLabel: string;
 }
 
+/** The editor's choice of the language the patient reads (the interface itself stays in its own language). */
+export interface LanguageMessages {
+  readonly label: string;
+  readonly hint: string;
+  /** Each language by its own name, as a speaker of it looks for it. */
+  readonly names: Readonly<Record<PatientLanguage, string>>;
+  /** A tag Chancewise cannot write, shown as the field's value until another is chosen. */
+  readonly notWritten: (tag: string) => string;
+}
+
+/** The texts of a copy still to translate, listed under "Still to fill in". */
+export interface TranslationGapMessages {
+  /** What each kind of typed text is called in the list ("Option name"). */
+  readonly kinds: Readonly<Record<TranslatableKind, string>>;
+  /** The patient languages by their names in the interface's language ("Spanish"). */
+  readonly languageNames: Readonly<Record<PatientLanguage, string>>;
+  /** 'Option name “Daily tablet” is still in English: write it in Spanish.' (the names already in words). */
+  readonly stillIn: (what: string, text: string, from: string, to: string) => string;
+  /** Said once above the list while any text is still to translate. */
+  readonly note: (from: string) => string;
+}
+
 export interface UiMessages {
   readonly app: AppFrameMessages;
   readonly appBar: AppBarMessages;
@@ -415,4 +444,6 @@ export interface UiMessages {
   readonly screening: ScreeningMessages;
   readonly teachingSlide: TeachingSlideViewMessages;
   readonly patientWording: PatientWordingMessages;
+  readonly language: LanguageMessages;
+  readonly translation: TranslationGapMessages;
 }

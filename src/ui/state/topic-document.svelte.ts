@@ -8,6 +8,7 @@
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { blankDraft } from '../draft/draft-edits.ts';
 import { parseDraft } from '../draft/draft-schema.ts';
+import { translatedCopy } from '../draft/translated-copy.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 import { openTopicText } from '../files/topic-files.ts';
 import type { OpenedFile, Platform, PlatformDocument } from '../platform/platform.ts';
@@ -174,6 +175,24 @@ export class TopicDocument {
 
   newTopic(): void {
     this.#load(blankDraft(), null, 'Started a new topic.', 'decision');
+    this.#platform.topicReplaced();
+  }
+
+  /**
+   * Put a copy of the topic on screen to be written in another language (a BCP 47 tag): a new,
+   * unsaved document with the same numbers, every typed text kept and marked still to translate.
+   * The topic copied is left as it is: its file is not touched, and unsaved changes to it are kept
+   * above to restore, as when any other document replaces it.
+   *
+   * @param said - the message to show, in the interface's words
+   */
+  copyInLanguage(language: string, said: string): void {
+    const copy = translatedCopy(this.editor.draft, language);
+    const kept = this.#replaceWith(copy, { fileName: null, saved: false });
+    this.#messages.show({
+      tone: 'info',
+      text: `${said}${kept ? ' Your previous topic had unsaved changes: they are kept above, to restore or discard.' : ''}`,
+    });
     this.#platform.topicReplaced();
   }
 

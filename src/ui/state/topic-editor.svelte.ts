@@ -11,6 +11,8 @@ import type { DraftCheck, FieldProblem } from '../draft/check-draft.ts';
 import { handoutGaps } from '../draft/handout-gaps.ts';
 import type { HandoutGap } from '../draft/handout-gaps.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+import { untranslatedTexts } from '../draft/translation-texts.ts';
+import type { TranslatableText } from '../draft/translation-texts.ts';
 import { withoutPatient } from './autosave.ts';
 import type { Autosave, AutosaveRecord } from './autosave.ts';
 import { UndoHistory } from './undo-history.ts';
@@ -74,6 +76,8 @@ export class TopicEditor {
   #problemsByKey = $derived(groupByKey(this.problems));
   /** What the handout would print as "not stated": disclosures and effect sources not yet given. */
   handoutGaps: readonly HandoutGap[] = $derived(handoutGaps(this.draft));
+  /** The typed texts of a copy in another language that still read as they were copied. */
+  untranslated: readonly TranslatableText[] = $derived(untranslatedTexts(this.draft));
   #lastValidDraft: TopicDraft | null = null;
   #savedSignature: string;
   #cancelAutosave: (() => void) | null = null;

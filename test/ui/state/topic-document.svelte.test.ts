@@ -187,3 +187,45 @@ describe('TopicDocument', () => {
     expect(messages.message).toEqual({ tone: 'error', text: 'A copy of unsaved work was found but could not be read.' });
   });
 });
+
+describe('a copy in another language', () => {
+  const said = 'A copy in Spanish.';
+
+  it('puts an unsaved copy in Spanish on screen, with the same numbers, and leaves the example as it was', () => {
+    const { topic, messages, platform } = setUp();
+    const before = topic.editor.draft;
+    const shownBefore = topic.editor.shown;
+    topic.copyInLanguage('es', said);
+    const copy = topic.editor.draft;
+    expect(copy.language).toBe('es');
+    expect(copy.translation?.from).toBe('en');
+    expect(copy.translation?.sourceTexts['options.water.name']).toBe('extra water each day');
+    expect(copy.options).toEqual(before.options);
+    expect(topic.editor.shown?.outcomes.map((outcome) => outcome.options.map((option) => option.perPeople))).toEqual(
+      shownBefore?.outcomes.map((outcome) => outcome.options.map((option) => option.perPeople)),
+    );
+    expect(topic.editor.fileName).toBeNull();
+    expect(topic.editor.hasUnsavedChanges).toBe(true);
+    expect(topic.editor.canUndo).toBe(false);
+    expect(before.language).toBe('en');
+    expect(before.translation).toBeNull();
+    // The example had no changes, so nothing is offered back.
+    expect(topic.offer).toBeNull();
+    expect(messages.message).toEqual({ tone: 'info', text: said });
+    // The desktop shell is told that another document is on screen.
+    expect(platform.replaced).toBe(1);
+  });
+
+  it('keeps unsaved changes to the topic copied above, to restore', () => {
+    const { topic, messages } = setUp();
+    topic.editor.change((draft) => setTopicText(draft, 'title', 'My own stone topic'), 'title');
+    topic.copyInLanguage('es', said);
+    expect(topic.editor.draft.title).toBe('My own stone topic');
+    expect(topic.editor.draft.translation?.sourceTexts['title']).toBe('My own stone topic');
+    expect(topic.offer?.draft.title).toBe('My own stone topic');
+    expect(topic.offer?.draft.language).toBe('en');
+    expect(messages.message?.text).toBe(
+      `${said} Your previous topic had unsaved changes: they are kept above, to restore or discard.`,
+    );
+  });
+});
