@@ -1,7 +1,10 @@
 import packageJson from '../../package.json' with { type: 'json' };
 import { readCalendarDate } from '../core/calendar-date.ts';
 import { TOPIC_LIMITS, type Topic } from '../core/topic/topic.ts';
+import { topicLanguage } from '../core/topic/topic-language.ts';
+import type { ReadingLevel } from '../core/wording/reading-scale.ts';
 import { buildHandout } from '../handout/build-handout.ts';
+import { handoutWordsFor } from '../handout/handout-words.ts';
 import { loadHandoutFonts } from '../handout/node-fonts.ts';
 import type { Paper } from '../handout/paper-size.ts';
 import { outputPath, writeOutput } from './chart-command.ts';
@@ -72,17 +75,34 @@ function handoutOf(parsed: ParsedArgs, words: CliWords): (topic: Topic) => MadeH
     const built = buildHandout(
       result,
       topic,
-      { paper: choices.paper, date, appVersion: packageJson.version, showNnt: choices.showNnt, clinician },
+      {
+        paper: choices.paper,
+        date,
+        appVersion: packageJson.version,
+        showNnt: choices.showNnt,
+        clinician,
+        words: handoutWordsFor(topicLanguage(topic)),
+      },
       fonts,
     );
     if (!built.ok) throw new UsageError(built.message);
-    const grade = built.readability.grade === null ? '–' : built.readability.grade.toFixed(1);
+    const paperName = words.reports.paperName[choices.paper];
     return {
       pdf: built.pdf,
-      report: (path) => words.reports.handoutWritten(path, words.reports.paperName[choices.paper], grade),
+      report: (path) => writtenLine(path, paperName, built.readingScale, built.readability.grade, words),
       warnings: warningSentences(built.readingWarnings, words.catalogue).map(words.reports.handoutWarning),
     };
   };
+}
+
+/** The line reporting a handout written, with its reading level on the scale of its language. */
+function writtenLine(path: string, paper: string, level: ReadingLevel, grade: number | null, words: CliWords): string {
+  if (level.scale === 'inflesz') {
+    const band = level.band === null ? '–' : words.reports.infleszBands[level.band];
+    return words.reports.handoutWrittenSpanish(path, paper, level.score === null ? '–' : String(level.score), band, level.target);
+  }
+  // The English line keeps the unrounded grade's one decimal, as it always has.
+  return words.reports.handoutWritten(path, paper, grade === null ? '–' : grade.toFixed(1));
 }
 
 /** The topic files of a batch call (`--out-dir`): the files given, or the first demo topic. */

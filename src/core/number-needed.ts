@@ -1,9 +1,9 @@
 import { benefitOf } from './direction.ts';
 import { ceilWhole, floorWhole } from './float-safe.ts';
 import { english } from './messages/en/index.ts';
+import type { NumberMessages } from './messages/number-messages.ts';
+import { type NntInterval, writeNntInterval } from './nnt-interval.ts';
 import type { Estimate, NumberNeeded } from './types.ts';
-
-type Words = (typeof english)['numbers'];
 
 /**
  * The NNT for one absolute difference, rounded the cautious way so that rounding never
@@ -23,16 +23,28 @@ function asDifference(value: number): number {
   return Number.isFinite(1 / Math.abs(value)) ? value : 0;
 }
 
-function intervalText(rawLower: number, rawUpper: number, words: Words): string {
-  const { infinity, to } = words;
+/** The case and whole limits of an interval of benefit-oriented differences (positive helps). */
+function intervalOf(rawLower: number, rawUpper: number): NntInterval {
   const lower = asDifference(rawLower);
   const upper = asDifference(rawUpper);
-  if (lower > 0) return `NNTB ${wholeNeeded(upper)} ${to} ${wholeNeeded(lower)}`;
-  if (upper < 0) return `NNTH ${wholeNeeded(lower)} ${to} ${wholeNeeded(upper)}`;
-  if (lower === 0 && upper === 0) return `${infinity}`;
-  if (lower === 0) return `NNTB ${wholeNeeded(upper)} ${to} ${infinity}`;
-  if (upper === 0) return `NNTH ${wholeNeeded(lower)} ${to} ${infinity}`;
-  return `NNTB ${wholeNeeded(upper)} ${to} ${infinity} ${to} NNTH ${wholeNeeded(lower)}`;
+  if (lower > 0) return { kind: 'one-side', label: 'NNTB', from: wholeNeeded(upper), to: wholeNeeded(lower) };
+  if (upper < 0) return { kind: 'one-side', label: 'NNTH', from: wholeNeeded(lower), to: wholeNeeded(upper) };
+  if (lower === 0 && upper === 0) return { kind: 'infinity' };
+  if (lower === 0) return { kind: 'to-infinity', label: 'NNTB', from: wholeNeeded(upper) };
+  if (upper === 0) return { kind: 'to-infinity', label: 'NNTH', from: wholeNeeded(lower) };
+  return { kind: 'through-infinity', benefit: wholeNeeded(upper), harm: wholeNeeded(lower) };
+}
+
+/**
+ * The interval of the number needed to treat as parts (Altman 1998): which case it is and its
+ * whole limits, benefit end first, or null when the difference has no interval. A language's
+ * words join them with `writeNntInterval`.
+ *
+ * @example numberNeededLimits({ estimate: 0.1, lower: -0.05, upper: 0.25 }) // => { kind: 'through-infinity', benefit: 4, harm: 20 }
+ */
+export function numberNeededLimits(entered: Estimate, settings: { readonly wanted?: boolean } = {}): NntInterval | null {
+  const { lower, upper } = benefitOf(entered, settings.wanted === true);
+  return lower === null || upper === null ? null : intervalOf(lower, upper);
 }
 
 /**
@@ -42,15 +54,15 @@ function intervalText(rawLower: number, rawUpper: number, words: Words): string 
  * @example numberNeededInterval({ estimate: 0.1, lower: -0.05, upper: 0.25 }) // => "NNTB 4 to ∞ to NNTH 20"
  */
 export function numberNeededInterval(entered: Estimate, settings: NumberNeededSettings = {}): string | null {
-  const { lower, upper } = benefitOf(entered, settings.wanted === true);
-  return lower === null || upper === null ? null : intervalText(lower, upper, settings.words ?? english.numbers);
+  const interval = numberNeededLimits(entered, settings);
+  return interval === null ? null : writeNntInterval(interval, settings.words ?? english.numbers);
 }
 
 /** How to read the difference, and the words for infinity and "to". */
 export interface NumberNeededSettings {
   /** The event is one people want: more of it is a benefit (NNTB), less of it a harm (NNTH). */
   readonly wanted?: boolean;
-  readonly words?: Words;
+  readonly words?: NumberMessages;
 }
 
 /**

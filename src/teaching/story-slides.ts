@@ -6,7 +6,7 @@
  */
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../core/topic/topic-result.ts';
 import { topicWording } from '../core/wording/topic-wording.ts';
-import type { TopicWording } from '../core/wording/topic-wording.ts';
+import type { TopicWording, WordingOptions } from '../core/wording/topic-wording.ts';
 import type { SentenceKind } from '../core/wording/wording-sentence.ts';
 import { uncertainRanks } from '../render/uncertain-people.ts';
 import type { Period, TeachingMessages } from './messages/teaching-messages.ts';
@@ -45,6 +45,11 @@ export function sentenceOf(wording: TopicWording, outcomeId: string, optionId: s
   const outcome = wording.outcomes.find((entry) => entry.outcomeId === outcomeId);
   const option = outcome?.options.find((entry) => entry.optionId === optionId);
   return option?.sentences.find((entry) => entry.kind === kind)?.text ?? null;
+}
+
+/** The core's wording in the patient's language. */
+function wordingOptions(source: SlideSource): WordingOptions {
+  return { catalogue: source.messages.patient.wording };
 }
 
 /** A step's heading: a story step's in the topic's language, a format demonstration's in the clinician's. */
@@ -251,7 +256,7 @@ function uncertaintySlide(source: SlideSource): Slide {
   const arms = armsOf(benefitOutcome(result) ?? headlineOutcome(result), optionId);
   if (arms === null) return slide('uncertainty', source, {});
   const { option, outcome } = arms;
-  const wording = topicWording(result);
+  const wording = topicWording(result, wordingOptions(source));
   const interval = option.perPeople.interventionRange;
   const span = interval === null ? null : uncertainRanks(interval, option.groups.event + option.groups.caused);
   const panel = peoplePanel(
@@ -309,7 +314,7 @@ function patientWordsSlide(source: SlideSource): Slide {
   const { item } = source;
   const messages = source.messages.patient;
   const { result, optionId } = item;
-  const wording = topicWording(result);
+  const wording = topicWording(result, wordingOptions(source));
   const lines: SlideLine[] = [];
   const about = (arms: OutcomeArms | null, kinds: readonly (readonly [string, SentenceKind, SentenceKind | null])[]) => {
     if (arms === null) return;

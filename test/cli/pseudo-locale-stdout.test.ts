@@ -13,7 +13,7 @@ import { describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main.ts';
 import { cliWordsEn } from '../../src/cli/messages/en.ts';
 import { demoFiles } from '../../src/cli/topic-input.ts';
-import { pseudoWrap, withoutPseudoText } from '../support/pseudo-wrap-cli.ts';
+import { pseudoLocale, stripPseudo } from '../support/pseudo-locale.ts';
 
 const folder = mkdtempSync(join(tmpdir(), 'chancewise-pseudo-cli-'));
 const chartPath = join(folder, 'chart.svg');
@@ -38,7 +38,7 @@ const CODES = new Set(['benefit', 'harm', 'fewer', 'more']);
 
 /** What is left of an output once the pseudo text and everything allowed unwrapped is removed. */
 function leftover(text: string): string[] {
-  let rest = withoutPseudoText(text);
+  let rest = stripPseudo(text);
   for (const allowed of [chartPath, handoutPath, folder, demoPath, ...typedTexts]) rest = rest.split(allowed).join(' ');
   rest = rest
     .replace(/--[a-z][a-z-]*/g, ' ')
@@ -55,12 +55,36 @@ interface PseudoRun {
   readonly argumentsLeft: string[];
 }
 
+/**
+ * The same words, passing each string argument of their functions to `seen` first: the wrap of
+ * a function's result would hide a word the code hands it (a reason, a label).
+ */
+function recordingArguments<T>(words: T, seen: (text: string) => void): T {
+  const walk = (value: unknown): unknown => {
+    if (typeof value === 'function') {
+      const original = value as (...args: unknown[]) => unknown;
+      return (...args: unknown[]) => {
+        for (const argument of args) if (typeof argument === 'string') seen(argument);
+        return original(...args);
+      };
+    }
+    if (Array.isArray(value)) return value.map(walk);
+    if (typeof value === 'object' && value !== null) {
+      return Object.fromEntries(Object.entries(value).map(([key, inner]) => [key, walk(inner)]));
+    }
+    return value;
+  };
+  return walk(words) as T;
+}
+
 /** Run `chancewise ARGS` with the pseudo locale, keeping what leaked through the arguments of its words. */
 async function runPseudo(args: readonly string[]): Promise<PseudoRun> {
   const argumentsLeft: string[] = [];
-  const words = pseudoWrap(cliWordsEn, (argument) => {
-    if (!CODES.has(argument)) argumentsLeft.push(...leftover(argument));
-  });
+  const words = pseudoLocale(
+    recordingArguments(cliWordsEn, (argument) => {
+      if (!CODES.has(argument)) argumentsLeft.push(...leftover(argument));
+    }),
+  );
   let stdout = '';
   let stderr = '';
   const code = await main(

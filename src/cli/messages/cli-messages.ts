@@ -5,6 +5,7 @@
  * the English; `main` receives one `CliWords` and hands it to every command.
  */
 import type { Catalogue } from '../../core/messages/describe.ts';
+import type { InfleszBand } from '../../core/wording/readability-es.ts';
 import type { PeriodValues } from '../../core/wording/wording-catalogue.ts';
 import type { Paper } from '../../handout/paper-size.ts';
 
@@ -123,6 +124,13 @@ export interface CliReportWords {
   /** A warning on the handout just made, for stderr; the handout is still written. */
   readonly handoutWarning: (sentence: string) => string;
   readonly handoutWritten: (path: string, paper: string, grade: string) => string;
+  /**
+   * The same line for a Spanish handout: its reading ease on the INFLESZ scale (Szigriszt-Pazos
+   * perspicuity, bands of Barrio-Cantalejo et al. 2008), its band and the aim.
+   */
+  readonly handoutWrittenSpanish: (path: string, paper: string, ease: string, band: string, target: number) => string;
+  /** The INFLESZ bands' names, in the clinician's language. */
+  readonly infleszBands: Readonly<Record<InfleszBand, string>>;
   readonly batchWritten: (written: number, total: number, folder: string) => string;
   readonly paperName: Readonly<Record<Paper, string>>;
 }

@@ -124,6 +124,15 @@ const reports: CliReportWords = {
   chartWritten: (path, arrays, people) => `Wrote ${path}: ${arrays} arrays, ${people} people.`,
   handoutWarning: (sentence) => `Warning: ${sentence}`,
   handoutWritten: (path, paper, grade) => `Wrote ${path}: 1 page, ${paper}, reading grade ${grade} (Flesch–Kincaid).`,
+  handoutWrittenSpanish: (path, paper, ease, band, target) =>
+    `Wrote ${path}: 1 page, ${paper}, in Spanish, reading ease ${ease} on the INFLESZ scale (${band}; the aim is ${target} or more).`,
+  infleszBands: {
+    'very-difficult': 'very difficult',
+    'somewhat-difficult': 'somewhat difficult',
+    normal: 'normal',
+    'fairly-easy': 'fairly easy',
+    'very-easy': 'very easy',
+  },
   batchWritten: (written, total, folder) => `Wrote ${written} of ${total} handout${total === 1 ? '' : 's'} to ${folder}.`,
   paperName: { a4: 'A4', letter: 'US Letter' },
 };

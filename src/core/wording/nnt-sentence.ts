@@ -1,4 +1,5 @@
-import { numberNeededInterval } from '../number-needed.ts';
+import { nntIntervalLimits } from '../nnt-interval.ts';
+import { numberNeededLimits } from '../number-needed.ts';
 import { optionSentence, optionValues } from './option-context.ts';
 import type { OptionContext } from './option-context.ts';
 import type { WordingSentence } from './wording-sentence.ts';
@@ -36,14 +37,14 @@ export function nntSentence(context: OptionContext): WordingSentence {
 export function nntValues(context: OptionContext, label: 'NNTB' | 'NNTH', rounded: number) {
   const { option, outcome, years, unit } = context;
   const difference = option.absoluteReduction;
-  const interval = numberNeededInterval(difference, { wanted: outcome.wanted });
+  const interval = numberNeededLimits(difference, { wanted: outcome.wanted });
   const crosses = crossesNoEffect(difference.lower, difference.upper);
   return { label, count: rounded, group: context.group(rounded), years, unit, interval, crossesNoEffect: crosses };
 }
 
 /** The numbers an NNT sentence writes: the NNT, the period and the interval's limits. */
 export function nntNumbers(nnt: ReturnType<typeof nntValues>): Record<string, number> {
-  const limits = (nnt.interval?.match(/\d+/g) ?? []).map(Number);
+  const limits = nnt.interval === null ? [] : nntIntervalLimits(nnt.interval);
   const limitNumbers = Object.fromEntries(limits.map((limit, index) => [`nntLimit${index + 1}`, limit]));
   return { nnt: nnt.count, years: nnt.years, ...limitNumbers };
 }

@@ -4,6 +4,7 @@
  * a language's catalogue turns it into words. A second language implements
  * `WordingMessages` in its own folder without touching the code that computes.
  */
+import type { NntInterval } from '../nnt-interval.ts';
 import type { TimeUnit } from '../time-unit.ts';
 import type { Certainty, Importance } from '../topic/topic.ts';
 
@@ -59,8 +60,11 @@ export interface NntValues {
   readonly label: 'NNTB' | 'NNTH';
   readonly count: number;
   readonly group: string;
-  /** "NNTB 13 to 100", "NNTB 4 to ∞ to NNTH 20", or null when the effect has no interval. */
-  readonly interval: string | null;
+  /**
+   * The interval's case and limits, for the catalogue to write in its words ("NNTB 13 to 100",
+   * "NNTB 4 a ∞ a NNTH 20"), or null when the effect has no interval.
+   */
+  readonly interval: NntInterval | null;
   /** The interval reaches or crosses no difference. */
   readonly crossesNoEffect: boolean;
 }

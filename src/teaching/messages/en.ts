@@ -5,6 +5,7 @@
  */
 import { capitalise, plural, startsWithVerb } from '../../core/messages/en/english-grammar.ts';
 import { UNIT_NAMES_EN } from '../../core/messages/en/time-words.ts';
+import { wordingMessages } from '../../core/messages/en/wording.ts';
 import { amountIn } from '../../core/time-unit.ts';
 import type {
   Period,
@@ -72,6 +73,7 @@ export const teachingPatientSlideMessagesEn: TeachingPatientSlideMessages = {
     'patient-words': 'What the patient hears',
   },
 
+  wording: wordingMessages,
   decimal: shortDecimal,
   capitalise,
 

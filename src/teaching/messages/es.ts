@@ -12,6 +12,7 @@
 import { formatCountEs, formatDecimalEs, formatPercentEs } from '../../core/messages/es/format-number-es.ts';
 import { capitaliseEs, joinListEs, pluralEs, startsWithVerbEs } from '../../core/messages/es/spanish-grammar.ts';
 import { UNIT_NAMES_ES } from '../../core/messages/es/time-words-es.ts';
+import { wordingMessagesEs } from '../../core/messages/es/wording.ts';
 import { amountIn } from '../../core/time-unit.ts';
 import type { ChangedGroup, Period, TeachingPatientSlideMessages } from './teaching-messages.ts';
 
@@ -91,6 +92,7 @@ export const teachingPatientSlideMessagesEs: TeachingPatientSlideMessages = {
     'patient-words': 'Lo que oye el paciente',
   },
 
+  wording: wordingMessagesEs,
   decimal,
   capitalise: capitaliseEs,
 

@@ -12,6 +12,7 @@
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Certainty } from '../../core/topic/topic.ts';
+import type { WordingMessages } from '../../core/wording/wording-catalogue.ts';
 import type { LessonStepKind, StoryStepKind } from '../teaching-steps.ts';
 
 /** A finding from the research and where it was published. */
@@ -37,6 +38,8 @@ export interface TeachingPatientSlideMessages {
   readonly decimal: (value: number) => string;
   /** A name as it starts a line or a title: "sin tratamiento" → "Sin tratamiento". */
   readonly capitalise: (text: string) => string;
+  /** The core's sentence catalogue in this language, for the sentences a patient hears (the range, the certainty, the patient's words slide). */
+  readonly wording: WordingMessages;
   readonly title: {
     readonly who: (population: string) => string;
     readonly period: (period: Period) => string;

@@ -1,13 +1,16 @@
 /**
  * The handout in the browser: fetch the two DejaVu Sans faces from the app's own files
- * (once), then build the one-page PDF from the same computed topic as the screen.
+ * (once), then build the one-page PDF from the same computed topic as the screen, in the
+ * topic's language.
  * Loaded lazily by `handout-builder.ts`.
  */
 import boldFontUrl from 'dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf?url';
 import regularFontUrl from 'dejavu-fonts-ttf/ttf/DejaVuSans.ttf?url';
 import { version } from '../../../package.json';
 import { noticeSentences } from '../../core/messages/describe.ts';
+import { topicLanguage } from '../../core/topic/topic-language.ts';
 import { buildHandout } from '../../handout/build-handout.ts';
+import { handoutWordsFor } from '../../handout/handout-words.ts';
 import { handoutFonts } from '../../handout/handout-fonts.ts';
 import type { HandoutFonts } from '../../handout/handout-fonts.ts';
 import type { HandoutOutcome, HandoutRequest } from './handout-builder.ts';
@@ -36,7 +39,14 @@ export async function makeHandout(request: HandoutRequest): Promise<HandoutOutco
   const built = buildHandout(
     request.result,
     request.topic,
-    { paper: request.paper, date: request.date, appVersion: version, showNnt: request.showNnt },
+    {
+      paper: request.paper,
+      date: request.date,
+      appVersion: version,
+      showNnt: request.showNnt,
+      // The sheet in the topic's own language (the handout chunk carries every language's words).
+      words: handoutWordsFor(topicLanguage(request.topic)),
+    },
     await loadFonts(),
   );
   if (!built.ok) return { ok: false, message: built.message };

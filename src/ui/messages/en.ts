@@ -1,5 +1,28 @@
 /** The English words of the clinician's interface, exactly as the screens show them. */
+import type { TimeUnit } from '../../core/time-unit.ts';
+import type { InfleszBand } from '../../core/wording/readability-es.ts';
+import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { UiMessages } from './ui-messages.ts';
+
+const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
+  'very-difficult': 'very difficult',
+  'somewhat-difficult': 'somewhat difficult',
+  normal: 'normal',
+  'fairly-easy': 'fairly easy',
+  'very-easy': 'very easy',
+};
+
+/** The reading level in one sentence, with its aim and where the scale comes from. */
+function readingLevel(level: ReadingLevel): string {
+  if (level.score === null) return 'There is no patient wording to score yet.';
+  if (level.scale === 'flesch-kincaid-grade') {
+    return `The patient wording reads at about grade ${level.score.toFixed(1).replace(/\.0$/, '')} (Flesch–Kincaid, ${level.source}); the aim is grade ${level.limit} or below. ${level.withinTarget ? 'Within the aim.' : 'Above the aim: shorter outcome names help.'}`;
+  }
+  const band = level.band === null ? '' : ` (${INFLESZ_BANDS[level.band]})`;
+  return `The Spanish patient wording has a reading ease of ${level.score} on the INFLESZ scale${band} (Szigriszt-Pazos perspicuity, bands of ${level.source}); the aim is ${level.target} or more. ${level.withinTarget ? 'Within the aim.' : 'Below the aim: shorter outcome names help.'}`;
+}
+
+const SINGULAR: Readonly<Record<TimeUnit, string>> = { days: 'day', weeks: 'week', months: 'month', years: 'year' };
 
 export const uiMessagesEn: UiMessages = {
   app: {
@@ -69,5 +92,259 @@ export const uiMessagesEn: UiMessages = {
     noPatientHint: 'No patient details are entered, so none can be saved.',
     cancel: 'Cancel',
     saveFile: 'Save file',
+  },
+  patientWording: {
+    readingHeading: 'Reading level',
+    readingLevel,
+    wordsLoading: (language) => `Preparing the ${language === 'es' ? 'Spanish' : 'English'} patient wording…`,
+    wordsFailed: (language, detail) =>
+      `The ${language === 'es' ? 'Spanish' : 'English'} patient wording could not be loaded (${detail}). Reload the app; the topic is kept.`,
+    languageNames: { en: 'English', es: 'Spanish (Español)' },
+  },
+  resultsStatus: {
+    waiting: 'No results yet: fill in the marked fields.',
+    stale: 'Out of date.',
+    staleRest: 'Showing your last complete entry.',
+    fresh: 'Up to date',
+    showOutOf: 'Show out of',
+    automatic: 'Automatic',
+    people: (count) => `${count} people`,
+  },
+  results: {
+    staleHeading: 'These results are from before your latest change.',
+    staleText: 'They will update as soon as the marked fields are fixed.',
+    illustrative: 'Illustrative',
+    illustrativeText: '— invented numbers for demonstration; not for real decisions.',
+    picturesShow: 'The pictures show',
+    peopleOver: 'people like this, over',
+    tablesCountPer: '; the tables and words count per',
+    becauseNoOne: (picturesCount) => `, because out of ${picturesCount} a difference would show as no one. Headline first.`,
+    outOf: 'Out of',
+    headlineFirst: '. Headline first.',
+    outline: 'Outline the people who depend on the range',
+    footnote: (rangesNote) =>
+      `${rangesNote} and leave out uncertainty in the baseline. NNTB: number needed to treat for one more person to benefit; NNTH: for one more to be harmed.`,
+    warningsHeading: 'Check before use',
+  },
+  intervals: {
+    oneLevel: (level) => `Ranges are ${level} intervals for the effect`,
+    severalLevels: (levels) =>
+      `Ranges are intervals for the effect at the level each effect gives (${levels.slice(0, -1).join(', ')} and ${levels.at(-1) ?? ''}: see each table)`,
+  },
+  outcomeResult: {
+    benefit: 'Benefit',
+    harm: 'Harm',
+    headline: ' · headline',
+    exportLabel: (outcome) => `Save the chart of ${outcome}`,
+    saveSvg: 'Save chart as SVG',
+    savePng: 'Save as PNG (300 dpi)',
+    inWords: 'In words',
+    forClinician: 'For you, not the handout',
+  },
+  keyNumbers: {
+    caption: (outcome, outOf) => `Key numbers for ${outcome}, out of ${outOf} people`,
+    option: 'Option',
+    peopleWithIt: 'People with it',
+    outOf: (count) => `out of ${count}`,
+    change: 'Change',
+    risk: (wanted) => (wanted ? 'Chance' : 'Risk'),
+    nnt: 'NNT',
+    comparison: 'comparison',
+    ranges: (level) => `ranges: ${level} interval`,
+    notApplicable: 'not applicable',
+    rangeIntro: (level) => `, ${level} interval `,
+  },
+  peopleChange: {
+    noChange: 'no change',
+    underOne: 'under 1',
+    fewer: (size) => `${size} fewer`,
+    more: (size) => `${size} more`,
+    fewerRange: (from, to) => `${from} to ${to} fewer`,
+    moreRange: (from, to) => `${from} to ${to} more`,
+    fewerToMore: (fewer, more) => `${fewer} fewer to ${more} more`,
+    range: (lower, upper) => `${lower} to ${upper}`,
+  },
+  handoutCard: {
+    heading: 'Handout for the patient',
+    summary: (illustrative) =>
+      `One printed page${illustrative ? ', marked illustrative' : ''}. For every benefit and side effect alike: how many people have it with and without each option, the change, its range, how sure the research is, and any assumption behind the numbers. Pictures of every outcome at one size, smaller when the page is full, or none when even small ones do not fit (then a table sets the outcomes side by side where there is room). A question weighing the benefit against the side effects, questions to ask, each effect's source, and who prepared the sheet, its funding, interests and review date ("not stated" when not given).`,
+    paper: 'Paper',
+    a4: 'A4',
+    letter: 'US Letter',
+    includeNnt: 'Include the number needed to treat',
+    making: 'Making the handout…',
+    make: 'Make the handout (PDF)',
+    print: 'Print the handout…',
+    warningsLabel: 'Warnings on the handout',
+    warningsIntro: 'The handout was made. Some typed text may be hard to read:',
+    staleNote: 'Fix the marked fields first: the handout is only made from up-to-date results.',
+  },
+  outcomes: {
+    heading: 'Outcomes',
+    count: (count, most) => `${count} of ${most}`,
+    addBenefit: 'Add a benefit',
+    addHarm: 'Add a harm',
+    full: (most) => `A topic has at most ${most} outcomes.`,
+  },
+  options: {
+    heading: 'Options',
+    count: (count, most) => `${count} of ${most}`,
+    hint: (least, most) =>
+      `Between ${least} and ${most} options. One is the comparison (often “no treatment”): every effect is measured against it.`,
+    nameLabel: (number) => `Option ${number} name`,
+    comparison: 'Comparison',
+    unnamed: (number) => `option ${number}`,
+    moveUp: (option) => `Move ${option} up`,
+    moveDown: (option) => `Move ${option} down`,
+    removeLabel: (option) => `Remove ${option}`,
+    remove: 'Remove',
+    add: 'Add an option',
+    full: (most) => `A topic has at most ${most} options.`,
+  },
+  outcome: {
+    unnamed: (number) => `Outcome ${number}`,
+    benefit: 'Benefit',
+    harm: 'Harm',
+    headlineTag: ' · headline',
+    removeLabel: (outcome) => `Remove outcome ${outcome}`,
+    remove: 'Remove',
+    name: 'Outcome',
+    nameHint: 'As it reads in a sentence: “a heart attack or stroke”, “muscle pain”.',
+    kindLegend: 'This outcome is',
+    kindBenefit: 'A benefit (what the options aim at)',
+    kindHarm: 'A harm (a side effect)',
+    headline: 'Headline outcome (shown first)',
+    wantedLegend: 'For the person, having it is',
+    unwanted: 'Something people want to avoid',
+    unwantedExample: '(a stroke, a broken bone)',
+    wanted: 'Something people want',
+    wantedExample: '(pain gone by day 3, stopped smoking)',
+    wantedHint: 'This sets which way counts as better: fewer people having it, or more.',
+  },
+  baseline: {
+    title: (wanted) => `${wanted ? 'Chance' : 'Risk'} without any option (baseline)`,
+    risk: (wanted) => `Baseline ${wanted ? 'chance' : 'risk'}`,
+    over: 'Over',
+    hint: (wanted, countsOnly) =>
+      `As you would write it: 15%, 0.15, 15/100 or 1 in 7.${countsOnly ? ` Leave it empty to use the ${wanted ? 'chance' : 'risk'} in the trial’s comparison arm.` : ''}`,
+    source: (wanted) => `Source of the baseline ${wanted ? 'chance' : 'risk'}`,
+    sourcePlaceholder: 'Score, registry or trial comparison arm',
+  },
+  effect: {
+    legend: 'Effect of',
+    unnamedOption: (number) => `option ${number}`,
+    quotedOutcome: (outcome) => `“${outcome}”`,
+    thisOutcome: 'this outcome',
+    measures: {
+      rr: 'Risk ratio (RR)',
+      or: 'Odds ratio (OR)',
+      hr: 'Hazard ratio (HR)',
+      rrr: 'Relative risk reduction (%)',
+      arr: 'Absolute risk reduction (percentage points)',
+      counts: 'Trial counts (people in each arm)',
+    },
+    measureHint: (measure, wanted) => {
+      switch (measure) {
+        case 'rr':
+          return 'Below 1 means fewer people have the outcome; for example 0.75.';
+        case 'or':
+          return 'Below 1 means fewer people have the outcome; for example 0.73.';
+        case 'hr':
+          return 'Below 1 means fewer people have the outcome; for example 0.8.';
+        case 'rrr':
+          return `In percent: 25 means the ${wanted ? 'chance' : 'risk'} is a quarter lower. A negative number is an increase.`;
+        case 'arr':
+          return 'In percentage points: 3 means 3 in 100 fewer. A negative number is an increase.';
+        case 'counts':
+          return 'The trial’s own numbers: how many people in each arm had the outcome, out of how many.';
+      }
+    },
+    certainties: { high: 'High', moderate: 'Moderate', low: 'Low', 'very-low': 'Very low' },
+    importance: { important: 'Important', trivial: 'Little or none' },
+    enteredAs: 'Entered as',
+    estimate: 'Estimate',
+    interval: (level) => `${level} interval`,
+    optional: '(optional)',
+    lower: (interval) => `Lower limit of the ${interval}`,
+    upper: (interval) => `Upper limit of the ${interval}`,
+    to: 'to',
+    followUp: 'Follow-up',
+    followUpHint: 'How long the effect was measured for.',
+    certainty: 'Certainty (GRADE)',
+    importanceLabel: 'Difference judged',
+    source: 'Source of the effect',
+    sourcePlaceholder: 'Trial, review or guideline, with year',
+  },
+  opposite: {
+    label: (counts, outcome) => `${counts ? 'These counts are' : 'This number is'} for the opposite: not having ${outcome}`,
+    hint: (measure) =>
+      measure === 'or'
+        ? 'The odds ratio is turned round (1 ÷ OR), which is exact.'
+        : measure === 'counts'
+          ? 'Each arm’s count is taken from its total to give the people who had the outcome.'
+          : 'It is applied to the chance of not having the outcome. A ratio for one event is not the inverse of the ratio for its opposite, so check the trial reported it this way.',
+  },
+  trialArms: {
+    withOption: (option) => `With ${option}`,
+    comparisonArm: 'In the comparison arm',
+    eventsLabel: (arm) => `People with the outcome, ${arm.toLowerCase()}`,
+    totalLabel: (arm) => `People in the arm, ${arm.toLowerCase()}`,
+    eventsPlaceholder: 'with it',
+    totalPlaceholder: 'people',
+    of: 'of',
+    hadOutcome: 'had the outcome',
+  },
+  period: {
+    unitLabel: (field) => `${field}: unit`,
+    units: { days: 'days', weeks: 'weeks', months: 'months', years: 'years' },
+    amount: (amount, unit, one) => `${amount} ${one ? SINGULAR[unit] : unit}`,
+  },
+  field: {
+    needed: 'Still needed: ',
+    problem: 'Problem: ',
+    characters: (length, limit) => `${length} of ${limit} characters`,
+  },
+  handoutDetails: {
+    heading: 'Evidence, questions and patient',
+    hint: 'For the handout; optional',
+    evidenceSummary: 'Where the evidence comes from',
+    evidenceReviewed: 'Evidence reviewed on',
+    evidenceReviewedHint: 'A date, for example 2026-11-01.',
+    clinician: 'Clinician or practice',
+    questions: (most) => `Questions to think about (up to ${most})`,
+    question: (number) => `Question ${number}`,
+    removeQuestion: (number) => `Remove question ${number}`,
+    remove: 'Remove',
+    addQuestion: 'Add a question',
+    illustrative: 'This is an invented example (marked “illustrative” everywhere it appears)',
+    patient: 'Patient (optional)',
+    patientHint: 'Kept only while this topic is open, and written to a file only if you tick the box when saving.',
+    patientName: 'Patient name',
+    patientReference: 'Patient reference',
+  },
+  aboutTopic: {
+    heading: 'About this topic',
+    hint: 'Printed in the handout’s “About this sheet” line. An empty one is printed as “not stated”.',
+    fields: {
+      preparedBy: { label: 'Prepared by', hint: 'Who wrote the numbers and words: a person, team or organisation.' },
+      funding: { label: 'Funding', hint: 'Who paid for the work, or “none”.' },
+      interests: { label: 'Interests', hint: 'Conflicts of interest of those who prepared it, or “none declared”.' },
+      reviewBy: { label: 'Review by', hint: 'The date to check the numbers again, for example 2028-06-30.' },
+    },
+    reviewByPlaceholder: 'YYYY-MM-DD',
+  },
+  screening: {
+    heading: 'Screening test',
+    hint: 'Only for a topic about a test; printed as “If you have the test” when filled in',
+    positiveLeadsTo: 'A positive result leads to',
+    positiveLeadsToHint: 'For example “a camera test of the bowel to look for the cause”.',
+    missedCase: 'Missed cases (false reassurance)',
+    missedCaseHint: 'People told all is well who do have the illness, for example 3 in 1000.',
+    overdiagnosis: 'Overdiagnosis',
+    overdiagnosisHint: 'People found to have an illness that would never have harmed them, for example 4 in 1000.',
+    outOf: 'Out of the people who have the test; the handout counts them per its own number of people.',
+  },
+  teachingSlide: {
+    evidenceLabel: 'What the research found',
   },
 };

@@ -5,6 +5,8 @@
 import { DEFAULT_LEVEL } from '../../core/check-effect.ts';
 import { formatSignificant } from '../../core/messages/format-number.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
+import { uiMessagesEn } from '../messages/en.ts';
+import type { IntervalMessages } from '../messages/ui-messages.ts';
 
 /** A level as a percentage: 0.9 → "90%", 0.999 → "99.9%"; null (none given) is the default level. */
 export function levelText(level: number | null): string {
@@ -24,12 +26,11 @@ export function topicLevels(result: TopicResult): number[] {
 
 /**
  * What the ranges of a topic's results are, for the note beneath them: "Ranges are 90%
- * intervals for the effect", or each effect's own level when they differ.
+ * intervals for the effect", or each effect's own level when they differ (English unless given
+ * the interface's words).
  */
-export function rangesNote(result: TopicResult): string {
+export function rangesNote(result: TopicResult, words: IntervalMessages = uiMessagesEn.intervals): string {
   const levels = topicLevels(result);
-  if (levels.length === 0) return `Ranges are ${levelText(null)} intervals for the effect`;
-  if (levels.length === 1) return `Ranges are ${levelText(levels[0] ?? null)} intervals for the effect`;
-  const named = levels.map(levelText);
-  return `Ranges are intervals for the effect at the level each effect gives (${named.slice(0, -1).join(', ')} and ${named.at(-1) ?? ''}: see each table)`;
+  if (levels.length <= 1) return words.oneLevel(levelText(levels[0] ?? null));
+  return words.severalLevels(levels.map(levelText));
 }

@@ -8,7 +8,12 @@
 import { formatCount, formatPercentSignificant } from '../../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
 import type { WordsDenominator } from '../../core/types.ts';
+import { uiMessagesEn } from '../messages/en.ts';
+import type { PeopleChangeMessages } from '../messages/ui-messages.ts';
 import { levelText } from './interval-level.ts';
+
+/** English unless the caller gives the interface's words (the results panel gives its locale's). */
+const ENGLISH = uiMessagesEn.peopleChange;
 
 /** A value and, when there is one, its range: shown as the value with the range beneath. */
 export interface RangedText {
@@ -62,8 +67,8 @@ function sideOf(change: PeopleChange): Side {
 }
 
 /** The size of a change: "4", "10,000", or "under 1" when it rounds to no one but is not exactly 0. */
-function sizeOf(change: PeopleChange): string {
-  if (change.shown === 0) return noise(change.exact) ? '0' : 'under 1';
+function sizeOf(change: PeopleChange, words: PeopleChangeMessages): string {
+  if (change.shown === 0) return noise(change.exact) ? '0' : words.underOne;
   return formatCount(Math.abs(change.shown));
 }
 
@@ -75,10 +80,11 @@ const exactly = (shown: number): PeopleChange => ({ shown, exact: shown });
  * change". The words say only how many people have the event; whether that helps is the
  * event's direction.
  */
-export function changeWords(difference: number, exact: number = difference): string {
+export function changeWords(difference: number, exact: number = difference, words: PeopleChangeMessages = ENGLISH): string {
   const change = { shown: difference, exact };
   const side = sideOf(change);
-  return side === 'none' ? 'no change' : `${sizeOf(change)} ${side}`;
+  if (side === 'none') return words.noChange;
+  return side === 'fewer' ? words.fewer(sizeOf(change, words)) : words.more(sizeOf(change, words));
 }
 
 /**
@@ -86,21 +92,27 @@ export function changeWords(difference: number, exact: number = difference): str
  * "under 1 to 2 fewer". `least` is the end with the fewest people spared (the option's upper
  * limit), `most` the other.
  */
-export function changeRangeText(least: PeopleChange, most: PeopleChange): string {
+export function changeRangeText(least: PeopleChange, most: PeopleChange, words: PeopleChangeMessages = ENGLISH): string {
   const sides = [sideOf(least), sideOf(most)];
-  if (sides.every((side) => side === 'none')) return 'no change';
+  if (sides.every((side) => side === 'none')) return words.noChange;
+  const leastSize = sizeOf(least, words);
+  const mostSize = sizeOf(most, words);
   if (!sides.includes('more')) {
-    return sizeOf(least) === sizeOf(most) ? `${sizeOf(most)} fewer` : `${sizeOf(least)} to ${sizeOf(most)} fewer`;
+    return leastSize === mostSize ? words.fewer(mostSize) : words.fewerRange(leastSize, mostSize);
   }
   if (!sides.includes('fewer')) {
-    return sizeOf(least) === sizeOf(most) ? `${sizeOf(least)} more` : `${sizeOf(most)} to ${sizeOf(least)} more`;
+    return leastSize === mostSize ? words.more(leastSize) : words.moreRange(mostSize, leastSize);
   }
-  return `${sizeOf(most)} fewer to ${sizeOf(least)} more`;
+  return words.fewerToMore(mostSize, leastSize);
 }
 
 /** The range of a change in people, from the option's range of people: "3 to 5 fewer", "2 fewer to 1 more". */
-export function changeRangeWords(comparison: number, range: { readonly lower: number; readonly upper: number }): string {
-  return changeRangeText(exactly(comparison - range.upper), exactly(comparison - range.lower));
+export function changeRangeWords(
+  comparison: number,
+  range: { readonly lower: number; readonly upper: number },
+  words: PeopleChangeMessages = ENGLISH,
+): string {
+  return changeRangeText(exactly(comparison - range.upper), exactly(comparison - range.lower), words);
 }
 
 /**
@@ -111,10 +123,10 @@ export function riskPercent(risk: number): string {
   return formatPercentSignificant(risk, 1);
 }
 
-function riskText(option: OptionOutcomeResult): RangedText {
+function riskText(option: OptionOutcomeResult, words: PeopleChangeMessages): RangedText {
   const { estimate, lower, upper } = option.interventionRisk;
   if (option.isComparison || lower === null || upper === null) return { value: riskPercent(estimate), range: null };
-  return { value: riskPercent(estimate), range: `${riskPercent(lower).replace('%', '')} to ${riskPercent(upper)}` };
+  return { value: riskPercent(estimate), range: words.range(riskPercent(lower).replace('%', ''), riskPercent(upper)) };
 }
 
 /** The core's NNT text split into its estimate and its bracketed interval. */
@@ -124,11 +136,11 @@ export function splitNntText(text: string): RangedText {
   return { value: text.slice(0, open), range: text.slice(open + 2, -1) };
 }
 
-function changeText(option: OptionOutcomeResult, denominator: number): RangedText {
+function changeText(option: OptionOutcomeResult, denominator: number, words: PeopleChangeMessages): RangedText {
   const people = option.wordsPeople;
   const base = option.comparisonRisk.estimate;
   const { estimate, lower, upper } = option.interventionRisk;
-  const value = changeWords(people.difference, (base - estimate) * denominator);
+  const value = changeWords(people.difference, (base - estimate) * denominator, words);
   const range = people.interventionRange;
   if (range === null || lower === null || upper === null) return { value, range: null };
   return {
@@ -136,11 +148,12 @@ function changeText(option: OptionOutcomeResult, denominator: number): RangedTex
     range: changeRangeText(
       { shown: people.comparison - range.upper, exact: (base - upper) * denominator },
       { shown: people.comparison - range.lower, exact: (base - lower) * denominator },
+      words,
     ),
   };
 }
 
-function row(option: OptionOutcomeResult, denominator: number): KeyNumberRow {
+function row(option: OptionOutcomeResult, denominator: number, words: PeopleChangeMessages): KeyNumberRow {
   const people = option.wordsPeople;
   const count = option.isComparison ? people.comparison : people.intervention;
   const range = option.isComparison ? null : people.interventionRange;
@@ -150,16 +163,16 @@ function row(option: OptionOutcomeResult, denominator: number): KeyNumberRow {
     isComparison: option.isComparison,
     people: {
       value: formatCount(count),
-      range: range === null ? null : `${formatCount(range.lower)} to ${formatCount(range.upper)}`,
+      range: range === null ? null : words.range(formatCount(range.lower), formatCount(range.upper)),
     },
-    change: option.isComparison ? null : changeText(option, denominator),
-    risk: riskText(option),
+    change: option.isComparison ? null : changeText(option, denominator, words),
+    risk: riskText(option, words),
     nnt: option.isComparison ? null : splitNntText(option.nnt.text),
     level: range === null || option.level === null ? null : levelText(option.level),
   };
 }
 
-function table(outcome: OutcomeResult, denominator: WordsDenominator): KeyNumberTable {
+function table(outcome: OutcomeResult, denominator: WordsDenominator, words: PeopleChangeMessages): KeyNumberTable {
   const ordered = [...outcome.options].sort((first, second) => Number(second.isComparison) - Number(first.isComparison));
   return {
     outcomeId: outcome.outcomeId,
@@ -168,12 +181,12 @@ function table(outcome: OutcomeResult, denominator: WordsDenominator): KeyNumber
     wanted: outcome.wanted,
     isHeadline: outcome.isHeadline,
     denominator,
-    rows: ordered.map((option) => row(option, denominator)),
+    rows: ordered.map((option) => row(option, denominator, words)),
   };
 }
 
 /** One table per outcome, the headline first, then in the topic's order; the comparison first in each. */
-export function keyNumberTables(result: TopicResult): KeyNumberTable[] {
-  const tables = result.outcomes.map((outcome) => table(outcome, result.wordsDenominator));
+export function keyNumberTables(result: TopicResult, words: PeopleChangeMessages = ENGLISH): KeyNumberTable[] {
+  const tables = result.outcomes.map((outcome) => table(outcome, result.wordsDenominator, words));
   return [...tables.filter((found) => found.isHeadline), ...tables.filter((found) => !found.isHeadline)];
 }

@@ -6,7 +6,7 @@
 import { noticeSentences } from '../../core/messages/describe.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Notice } from '../../core/types.ts';
-import { readingWarnings } from '../../core/wording/readability.ts';
+import { type ReadingLanguage, readingWarningsFor } from '../../core/wording/reading-scale.ts';
 import type { UserText } from '../../core/wording/readability.ts';
 import { typedTexts } from '../../core/wording/typed-texts.ts';
 import type { TypedTextNames } from '../../core/wording/typed-texts.ts';
@@ -32,9 +32,9 @@ export function patientTextsKey(draft: TopicDraft): string {
   return JSON.stringify(patientFacingTexts(draft));
 }
 
-/** Reading warnings for the texts a {@link patientTextsKey} holds. */
-export function readingNoticesFor(key: string): readonly Notice[] {
-  return readingWarnings(JSON.parse(key) as UserText[]);
+/** Reading warnings for the texts a {@link patientTextsKey} holds, on the scale of the topic's language. */
+export function readingNoticesFor(key: string, language: ReadingLanguage = 'en'): readonly Notice[] {
+  return readingWarningsFor(JSON.parse(key) as UserText[], language);
 }
 
 /** Every warning as a sentence, the numbers' first, then those on the typed texts, without repeats. */

@@ -5,15 +5,16 @@
 import { formatDecimal } from '../../core/messages/format-number.ts';
 import { amountIn } from '../../core/time-unit.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
-
-const SINGULAR: Readonly<Record<TimeUnit, string>> = { days: 'day', weeks: 'week', months: 'month', years: 'year' };
+import { uiMessagesEn } from '../messages/en.ts';
+import type { PeriodFieldMessages } from '../messages/ui-messages.ts';
 
 /**
- * A period stored in years, as an amount of its unit with at most two decimals.
+ * A period stored in years, as an amount of its unit with at most two decimals (English unless
+ * given the interface's words).
  *
  * @example periodWords(3 / 365.25, 'days') // => "3 days"
  */
-export function periodWords(years: number, unit: TimeUnit): string {
+export function periodWords(years: number, unit: TimeUnit, words: PeriodFieldMessages = uiMessagesEn.period): string {
   const amount = amountIn(years, unit);
-  return `${formatDecimal(amount, 2)} ${amount === 1 ? SINGULAR[unit] : unit}`;
+  return words.amount(formatDecimal(amount, 2), unit, amount === 1);
 }

@@ -6,6 +6,8 @@ import type { TopicResult } from '../../core/topic/topic-result.ts';
 import { READING_GRADE_LIMIT, fleschKincaidGrade, readability } from '../../core/wording/readability.ts';
 import type { TextCounts } from '../../core/wording/readability.ts';
 import { handoutSentences } from '../../core/wording/topic-wording.ts';
+import { type ReadingLanguage, type ReadingLevel, readabilityFor, readingLevelOf } from '../../core/wording/reading-scale.ts';
+import type { WordingMessages } from '../../core/wording/wording-catalogue.ts';
 
 export interface ReadingGrade {
   /** The grade to one decimal, or null when there is no text. */
@@ -46,4 +48,15 @@ export function patientReadingGrade(result: TopicResult): ReadingGrade {
   const grade = fleschKincaidGrade(total);
   const rounded = grade === null ? null : Math.round(grade * 10) / 10;
   return { grade: rounded, limit: READING_GRADE_LIMIT, withinLimit: rounded !== null && rounded <= READING_GRADE_LIMIT };
+}
+
+/**
+ * The reading level of the patient wording of `result` in the words of its language, on that
+ * language's scale: the Flesch–Kincaid grade for English (as {@link patientReadingGrade}),
+ * the INFLESZ reading ease for Spanish (see `core/wording/reading-scale.ts`).
+ */
+export function patientReadingLevel(result: TopicResult, catalogue: WordingMessages, language: ReadingLanguage): ReadingLevel {
+  if (language === 'en') return readingLevelOf(patientReadingGrade(result).grade, 'en');
+  const sentences = handoutSentences(result, { showNnt: false, catalogue });
+  return readabilityFor(sentences.map((sentence) => sentence.text).join(' '), language);
 }

@@ -13,6 +13,11 @@ const LOCALES = Symbol('locales');
 /** Where the words come from: read when used, so the patient words can follow the open topic. */
 export interface LocaleSource {
   readonly current: Locales;
+  /**
+   * The patient words of the open topic's language, or null while they load; absent, the
+   * patient words of `current` are used (a component test in one language).
+   */
+  readonly patient?: () => PatientWords | null;
 }
 
 /** The context entries that provide these locales, for `setContext` or a test's `render(…, { context })`. */
@@ -32,8 +37,12 @@ function source(): LocaleSource {
 
 export const getInterfaceWords = (): InterfaceWords => source().current.interface;
 export const getUiWords = (): UiMessages => source().current.interface.ui;
-/** The patient words of the moment: call inside `$derived` so a change of topic language is followed. */
-export const getPatientWords = (): (() => PatientWords) => {
+/**
+ * The patient words of the moment, or null while the open topic's language loads: call the
+ * function inside `$derived` so a change of topic language is followed.
+ */
+export const getPatientWords = (): (() => PatientWords | null) => {
   const found = source();
-  return () => found.current.patient;
+  const patient = found.patient;
+  return patient === undefined ? () => found.current.patient : patient;
 };

@@ -7,7 +7,7 @@
 import type { Topic } from '../../core/topic/topic.ts';
 import type { Denominator } from '../../core/types.ts';
 import { teachingClinicianMessagesEn } from '../../teaching/messages/en.ts';
-import type { TeachingPatientSlideMessages } from '../../teaching/messages/en.ts';
+import type { PatientSlideWords } from '../../teaching/messages/patient-slide-words.ts';
 import type { TeachingClinicianMessages } from '../../teaching/messages/teaching-messages.ts';
 import { presentationItem } from '../../teaching/presentation-item.ts';
 import { resolveTeachingSet } from '../../teaching/resolve-teaching-set.ts';
@@ -40,8 +40,8 @@ export interface TeachingPresenterOptions {
   readonly refocus?: () => void;
   /** The controls' and the lesson's words, in the clinician's interface language (English by default). */
   readonly messages?: TeachingClinicianMessages;
-  /** The words a patient would read on the slides, in the topic's language (English by default). */
-  readonly patientMessages?: TeachingPatientSlideMessages;
+  /** Picks the words a patient reads on a topic's slides by the topic's language (the shipped ones by default). */
+  readonly patientWords?: PatientSlideWords;
 }
 
 export class TeachingPresenter {
@@ -64,7 +64,7 @@ export class TeachingPresenter {
     const first = presentationItem(options.topic, { option: null, harm: null, per: options.per, steps: DEFAULT_STEPS });
     this.session = new TeachingSession(options.topic.title, first.ok ? [first.item] : [], {
       clinician: this.words,
-      ...(options.patientMessages === undefined ? {} : { patient: options.patientMessages }),
+      ...(options.patientWords === undefined ? {} : { patient: options.patientWords }),
     });
     this.problem = first.ok
       ? null

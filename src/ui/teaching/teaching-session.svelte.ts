@@ -4,9 +4,11 @@
  * sequence, so stepping forward from a topic's last step goes to the next topic's
  * first. The topics are copies: presenting never changes the editor's topic.
  */
+import { topicLanguage } from '../../core/topic/topic-language.ts';
 import { buildSlide } from '../../teaching/build-slide.ts';
-import { teachingMessagesEn, teachingMessagesWith } from '../../teaching/messages/en.ts';
-import type { TeachingMessages, TeachingPatientSlideMessages } from '../../teaching/messages/en.ts';
+import { teachingClinicianMessagesEn, teachingMessagesWith } from '../../teaching/messages/en.ts';
+import type { TeachingMessages } from '../../teaching/messages/en.ts';
+import { type PatientSlideWords, patientSlideWordsFor } from '../../teaching/messages/patient-slide-words.ts';
 import type { TeachingClinicianMessages } from '../../teaching/messages/teaching-messages.ts';
 import type { PresentationItem } from '../../teaching/presentation-item.ts';
 import { slidePlaces } from '../../teaching/slide-places.ts';
@@ -23,24 +25,35 @@ export class TeachingSession {
   fileName = $state.raw<string | null>(null);
   /** The place in the sequence, from 0. */
   index = $state(0);
-  /** The patient's slide words, in the topic's language, beside the clinician's. */
-  readonly messages: TeachingMessages = teachingMessagesEn;
+  readonly #patient: PatientSlideWords;
+  readonly #clinician: TeachingClinicianMessages;
 
   readonly places = $derived(slidePlaces(this.items));
   readonly place = $derived<SlidePlace | null>(this.places[this.index] ?? null);
   readonly item = $derived<PresentationItem | null>(this.place === null ? null : (this.items[this.place.item] ?? null));
   readonly slide = $derived<Slide | null>(
-    this.item === null || this.place === null ? null : buildSlide(this.item, this.place.kind, this.messages, this.place.part),
+    this.item === null || this.place === null
+      ? null
+      : buildSlide(this.item, this.place.kind, this.messagesOf(this.item), this.place.part),
   );
 
-  /** The patient's slide words and the clinician's are English unless given. */
+  /**
+   * The patient's slide words follow each topic's own language (`patient` picks them; the
+   * ones Chancewise ships unless given); the clinician's are English unless given.
+   */
   constructor(
     title: string,
     items: readonly PresentationItem[],
-    words: { readonly patient?: TeachingPatientSlideMessages; readonly clinician?: TeachingClinicianMessages } = {},
+    words: { readonly patient?: PatientSlideWords; readonly clinician?: TeachingClinicianMessages } = {},
   ) {
-    this.messages = teachingMessagesWith(words.patient, words.clinician);
+    this.#patient = words.patient ?? patientSlideWordsFor;
+    this.#clinician = words.clinician ?? teachingClinicianMessagesEn;
     this.load(title, items, null);
+  }
+
+  /** A topic's slide words: the patient's in the topic's language, beside the clinician's. */
+  messagesOf(item: PresentationItem): TeachingMessages {
+    return teachingMessagesWith(this.#patient(topicLanguage(item.topic)), this.#clinician);
   }
 
   get total(): number {

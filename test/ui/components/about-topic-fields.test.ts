@@ -6,6 +6,10 @@ import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+const englishContext = () => localeContext({ current: englishLocales });
 
 // The editor's "About this topic" group and "Still to fill in for the handout" (Chancewise's own
 // screens); the entries are the IPDAS instrument's disclosures (Elwyn et al. 2009, PLoS ONE 4(3):e4705).
@@ -16,7 +20,7 @@ function setUp(index: number) {
   const found = DEMO_TOPICS[index];
   if (found === undefined) throw new Error('no demonstration topic');
   const editor = new TopicEditor(draftFromTopic(found.topic));
-  render(EditorPanel, { props: { editor } });
+  render(EditorPanel, { context: englishContext(), props: { editor } });
   return editor;
 }
 

@@ -6,6 +6,10 @@ import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+const englishContext = () => localeContext({ current: englishLocales });
 
 afterEach(() => cleanup());
 
@@ -14,7 +18,7 @@ if (first === undefined) throw new Error('no demonstration topic');
 
 function setUp() {
   const editor = new TopicEditor(draftFromTopic(first!.topic));
-  render(EditorPanel, { props: { editor } });
+  render(EditorPanel, { context: englishContext(), props: { editor } });
   return editor;
 }
 

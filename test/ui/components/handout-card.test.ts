@@ -5,6 +5,10 @@ import HandoutCard from '../../../src/ui/components/HandoutCard.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+const englishContext = () => localeContext({ current: englishLocales });
 
 afterEach(() => cleanup());
 
@@ -18,6 +22,7 @@ describe('HandoutCard', () => {
     if (first === undefined) throw new Error('no demonstration topic');
     const editor = new TopicEditor(draftFromTopic(first.topic));
     render(HandoutCard, {
+      context: englishContext(),
       props: { editor, illustrative: true, handoutBusy: false, desktop: false, onhandout: noop, onprint: noop },
     });
     const text = screen.getByRole('region', { name: 'Handout for the patient' }).textContent?.replace(/\s+/g, ' ') ?? '';

@@ -18,6 +18,10 @@ import { openTopicText } from '../../../src/ui/files/topic-files.ts';
 import { keyNumberTables } from '../../../src/ui/results/key-numbers.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 import { NINETY, RARE, effectTopic } from '../results/effect-topic.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+const englishContext = () => localeContext({ current: englishLocales });
 
 // Invented, illustrative topics. People per 10,000 at a 0.1% baseline and HR 0.8 (0.7 to 0.9):
 // 1 − (1 − p)^HR (Altman & Andersen 1999, BMJ 319:1492) gives 8.0008 (7.0011 to 9.0005) with the tablet.
@@ -38,7 +42,10 @@ function results(topic: Topic, per: WordsDenominator | null = null) {
   const model = outcomeChart(result, 'bleed');
   const table = keyNumberTables(result).find((found) => found.outcomeId === 'bleed') ?? null;
   const wording = topicWording(result).outcomes.find((found) => found.outcomeId === 'bleed') ?? null;
-  render(OutcomeResults, { props: { model, table, wording, width: 640, showRange: false, onexport: noop } });
+  render(OutcomeResults, {
+    context: englishContext(),
+    props: { model, table, wording, width: 640, showRange: false, onexport: noop },
+  });
 }
 
 const limits = (level: string) =>
@@ -78,6 +85,7 @@ describe('the results of a rare outcome', () => {
 
   test('say that the words count per more people than the pictures show', () => {
     render(ResultsPanel, {
+      context: englishContext(),
       props: {
         editor: new TopicEditor(draftFromTopic(RARE)),
         onexport: noop,
@@ -95,7 +103,7 @@ describe('the results of a rare outcome', () => {
 
 describe('a topic with 90% intervals', () => {
   test('labels the editor’s interval 90%, never 95%', () => {
-    render(EditorPanel, { props: { editor: new TopicEditor(draftFromTopic(NINETY)) } });
+    render(EditorPanel, { context: englishContext(), props: { editor: new TopicEditor(draftFromTopic(NINETY)) } });
     expect(screen.getByText('90% interval')).toBeTruthy();
     expect(limits('90%').map((box) => box.value)).toEqual(['0.85', '0.99']);
     expect(screen.queryByText(/95% interval/)).toBeNull();
@@ -106,6 +114,7 @@ describe('a topic with 90% intervals', () => {
     expect(screen.getByRole('row', { name: /the tablet/ }).textContent).toContain('ranges: 90% interval');
     cleanup();
     render(ResultsPanel, {
+      context: englishContext(),
       props: {
         editor: new TopicEditor(draftFromTopic(NINETY)),
         onexport: noop,
@@ -121,7 +130,7 @@ describe('a topic with 90% intervals', () => {
 describe('an interval whose limits are the wrong way round', () => {
   test('typed: marks both boxes and describes each with the message, until fixed', () => {
     const editor = new TopicEditor(draftFromTopic(RARE));
-    render(EditorPanel, { props: { editor } });
+    render(EditorPanel, { context: englishContext(), props: { editor } });
     const [lower, upper] = limits('95%');
     fireEvent.input(lower!, { target: { value: '0.9' } });
     fireEvent.input(upper!, { target: { value: '0.7' } });
@@ -146,8 +155,11 @@ describe('an interval whose limits are the wrong way round', () => {
     if (!opened.ok) throw new Error(opened.message);
     const editor = new TopicEditor(draftFromTopic(RARE));
     editor.load(opened.draft, { fileName: opened.fileName, saved: true });
-    render(EditorPanel, { props: { editor } });
-    render(ResultsPanel, { props: { editor, onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false } });
+    render(EditorPanel, { context: englishContext(), props: { editor } });
+    render(ResultsPanel, {
+      context: englishContext(),
+      props: { editor, onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false },
+    });
     expect(limits('95%').map((box) => [box.value, box.getAttribute('aria-invalid')])).toEqual([
       ['0.9', 'true'],
       ['0.7', 'true'],
@@ -158,7 +170,7 @@ describe('an interval whose limits are the wrong way round', () => {
 
   test('an interval that leaves out the estimate marks both boxes too', () => {
     const editor = new TopicEditor(draftFromTopic(RARE));
-    render(EditorPanel, { props: { editor } });
+    render(EditorPanel, { context: englishContext(), props: { editor } });
     fireEvent.input(screen.getByLabelText('Estimate'), { target: { value: '0.95' } });
     flushSync();
     for (const box of limits('95%')) {
@@ -177,7 +189,7 @@ describe('the list of problems', () => {
       message: 'The option name is empty.',
       needed: false,
     };
-    render(ProblemSummary, { props: { problems: [found], draft } });
+    render(ProblemSummary, { context: englishContext(), props: { problems: [found], draft } });
     expect(screen.getByRole('link').textContent).toBe('Option 2: The option name is empty.');
   });
 });

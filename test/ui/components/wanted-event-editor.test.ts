@@ -9,6 +9,10 @@ import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { keyNumberTables } from '../../../src/ui/results/key-numbers.ts';
 import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
+import { englishLocales } from '../../../src/locale/english.ts';
+import { localeContext } from '../../../src/ui/state/locale-context.ts';
+
+const englishContext = () => localeContext({ current: englishLocales });
 
 afterEach(() => cleanup());
 
@@ -17,7 +21,7 @@ if (demo === undefined) throw new Error('no sore-throat demonstration topic');
 
 function setUp() {
   const editor = new TopicEditor(draftFromTopic(demo!.topic));
-  render(EditorPanel, { props: { editor } });
+  render(EditorPanel, { context: englishContext(), props: { editor } });
   return editor;
 }
 
@@ -83,7 +87,7 @@ describe('the key-number table of a wanted event', () => {
   test('heads the column Chance and shows NNTB for the option that makes it more likely', () => {
     const [table] = keyNumberTables(computeTopic(demo!.topic));
     if (table === undefined) throw new Error('no table');
-    render(KeyNumbers, { props: { table } });
+    render(KeyNumbers, { context: englishContext(), props: { table } });
     expect(screen.getByRole('columnheader', { name: 'Chance' })).toBeTruthy();
     expect(screen.queryByRole('columnheader', { name: 'Risk' })).toBeNull();
     // 35% × 1.6 = 56%: 21 more in 100; NNTB ⌈1/0.21⌉ = 5 (Altman 1998).

@@ -3,11 +3,14 @@
  * the numbers. The code that computes passes named values and cases; only this
  * file knows English words, plurals and capitals.
  */
+import { writeNntInterval } from '../../nnt-interval.ts';
 import { amountIn } from '../../time-unit.ts';
+import type { NntInterval } from '../../nnt-interval.ts';
 import type { Amount, FrequencyBand, PeriodValues, RangeCase, WordingMessages } from '../../wording/wording-catalogue.ts';
 import { UNIT_NAMES_EN, amountWithUnit } from './time-words.ts';
 import { formatCount, formatDecimal } from '../format-number.ts';
 import { capitalise, plural, startsWithVerb } from './english-grammar.ts';
+import { numberMessages } from './numbers.ts';
 
 export { plural, startsWithVerb } from './english-grammar.ts';
 
@@ -172,6 +175,10 @@ const shortRange = (found: RangeCase | null, direction: 'fewer' | 'more' | 'same
   }
 };
 
+/** "NNTB 25" or "NNTB 25 (NNTB 13 to 100)". */
+const nntHead = (label: string, count: number, interval: NntInterval | null): string =>
+  interval === null ? `${label} ${count}` : `${label} ${count} (${writeNntInterval(interval, numberMessages)})`;
+
 /** The English wording catalogue. */
 export const wordingMessages: WordingMessages = {
   group: (count) => plural(count, 'person like you', 'people like you'),
@@ -216,7 +223,7 @@ export const wordingMessages: WordingMessages = {
       ? 'The evidence is very uncertain about its effect.'
       : `It ${hedges[certainty][importance === 'trivial' ? 'trivial' : direction]} the chance.`,
   shortNnt: ({ wanted, label, count, group, years, unit, interval, crossesNoEffect }) => {
-    const head = interval === null ? `${label} ${count}` : `${label} ${count} (${interval})`;
+    const head = nntHead(label, count, interval);
     const treating = `${head}: treating ${count} ${group} for ${duration({ years, unit })}`;
     const range = crossesNoEffect ? ' Its range includes no difference at all.' : '';
     if (wanted) return `${treating} means one ${label === 'NNTB' ? 'more' : 'fewer'} of them has it.${range}`;
@@ -236,7 +243,7 @@ export const wordingMessages: WordingMessages = {
    * effects, and a plain clause says that the range includes no difference.
    */
   nnt: ({ option, outcome, wanted, label, count, group, years, unit, interval, crossesNoEffect }) => {
-    const head = interval === null ? `${label} ${count}` : `${label} ${count} (${interval})`;
+    const head = nntHead(label, count, interval);
     const treating = `${head}: treating ${count} ${group} with ${option} for ${duration({ years, unit })}`;
     const range = crossesNoEffect ? ' Its range includes no difference at all.' : '';
     if (wanted) {
