@@ -2,7 +2,6 @@ import type { EffectQuery } from '../core/compute-effect.ts';
 import { DEFAULT_LEVEL } from '../core/check-effect.ts';
 import { checkArm } from '../core/counts/index.ts';
 import { EFFECT_MEASURES, MEASURES } from '../core/effect-measures.ts';
-import { english } from '../core/messages/en/index.ts';
 import { parseNumber } from '../core/parse-number.ts';
 import { parseBaselineRisk, parseSignedRisk } from '../core/parse-risk.ts';
 import { InputError, fail } from '../core/problems.ts';
@@ -11,9 +10,8 @@ import { WORDS_DENOMINATORS } from '../core/types.ts';
 import type { ArmCounts, EffectMeasure, WordsDenominator } from '../core/types.ts';
 import type { FlagSpec, ParsedArgs } from './parse-args.ts';
 import { valueOf } from './parse-args.ts';
+import type { CliWords } from './messages/cli-messages.ts';
 import { UsageError } from './usage-error.ts';
-
-const words = english.cli;
 
 /** The flag of each measure, from the registry: `--rr`, `--or`, `--hr`, `--rrr`, `--arr`. */
 const MEASURE_FLAGS: readonly [string, EffectMeasure][] = MEASURES.map((measure) => [EFFECT_MEASURES[measure].flag, measure]);
@@ -81,12 +79,12 @@ export function parseYears(input: string, field: string): number {
 }
 
 /** Read --per: the words' denominator, 100 to 1,000,000 (written with or without commas). */
-export function parsePer(parsed: ParsedArgs): WordsDenominator | null {
+export function parsePer(parsed: ParsedArgs, words: CliWords): WordsDenominator | null {
   const value = valueOf(parsed, '--per');
   if (value === undefined) return null;
   const cleaned = value.trim().replace(/[,_\s]/g, '');
   const found = WORDS_DENOMINATORS.find((denominator) => String(denominator) === cleaned);
-  if (found === undefined) throw new UsageError(words.perValue(value));
+  if (found === undefined) throw new UsageError(words.usage.perValue(value));
   return found;
 }
 
@@ -101,10 +99,10 @@ function parseValue(measure: EffectMeasure, input: string, field: string): numbe
   }
 }
 
-function parseInterval(measure: EffectMeasure, input: string): { lower: number; upper: number } {
+function parseInterval(measure: EffectMeasure, input: string, words: CliWords): { lower: number; upper: number } {
   const parts = input.split(',');
   if (parts.length !== 2 || (parts[0] ?? '').trim() === '' || (parts[1] ?? '').trim() === '') {
-    throw new UsageError(words.ciFormat(input));
+    throw new UsageError(words.usage.ciFormat(input));
   }
   return { lower: parseValue(measure, parts[0] ?? '', '--ci'), upper: parseValue(measure, parts[1] ?? '', '--ci') };
 }
@@ -126,43 +124,43 @@ function parseCounts(input: string): { intervention: ArmCounts; comparison: ArmC
   return { intervention: parseArm(arms[0] ?? '', whole), comparison: parseArm(arms[1] ?? '', whole) };
 }
 
-function parsePeriods(parsed: ParsedArgs): EffectQuery['periods'] {
+function parsePeriods(parsed: ParsedArgs, words: CliWords): EffectQuery['periods'] {
   const over = valueOf(parsed, '--over');
   const to = valueOf(parsed, '--to');
   if (over === undefined && to === undefined) return null;
-  if (over === undefined || to === undefined) throw new UsageError(words.overAndTo());
+  if (over === undefined || to === undefined) throw new UsageError(words.usage.overAndTo());
   return { baselineYears: parseYears(over, '--over'), targetYears: parseYears(to, '--to') };
 }
 
 /**
  * Build the core's effect query from the effect flags of `compute` (and `chart`).
  *
- * @throws UsageError or InputError for anything the user must fix
+ * @throws UsageError (worded in `words`) or InputError for anything the user must fix
  */
-export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
+export function effectQueryFromFlags(parsed: ParsedArgs, words: CliWords): EffectQuery {
   const given = MEASURE_FLAGS.filter(([flag]) => parsed.flags.has(flag));
   const countsText = valueOf(parsed, '--counts');
   const baselineText = valueOf(parsed, '--baseline');
   const ciText = valueOf(parsed, '--ci');
   const levelText = valueOf(parsed, '--level');
   const methodText = valueOf(parsed, '--method');
-  const per = parsePer(parsed);
+  const per = parsePer(parsed, words);
   const followUpText = valueOf(parsed, '--followup');
   const wanted = parsed.flags.has('--wanted');
   const opposite = parsed.flags.has('--opposite');
-  if (given.length > 1) throw new UsageError(words.twoEffects(given[0]?.[0] ?? '', given[1]?.[0] ?? ''));
+  if (given.length > 1) throw new UsageError(words.usage.twoEffects(given[0]?.[0] ?? '', given[1]?.[0] ?? ''));
   let method: 'newcombe' | 'wald' = 'newcombe';
   if (methodText !== undefined) {
-    if (countsText === undefined) throw new UsageError(words.methodWithoutCounts());
+    if (countsText === undefined) throw new UsageError(words.usage.methodWithoutCounts());
     const normalised = methodText.trim().toLowerCase();
-    if (normalised !== 'newcombe' && normalised !== 'wald') throw new UsageError(words.methodValue(methodText));
+    if (normalised !== 'newcombe' && normalised !== 'wald') throw new UsageError(words.usage.methodValue(methodText));
     method = normalised;
   }
   if (countsText !== undefined) {
-    if (given.length > 0) throw new UsageError(words.effectWithCounts(given[0]?.[0] ?? ''));
-    if (baselineText !== undefined) throw new UsageError(words.baselineWithCounts());
+    if (given.length > 0) throw new UsageError(words.usage.effectWithCounts(given[0]?.[0] ?? ''));
+    if (baselineText !== undefined) throw new UsageError(words.usage.baselineWithCounts());
     for (const flag of ['--ci', '--over', '--to', '--followup']) {
-      if (parsed.flags.has(flag)) throw new UsageError(words.effectWithCounts(flag));
+      if (parsed.flags.has(flag)) throw new UsageError(words.usage.effectWithCounts(flag));
     }
     const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
     return {
@@ -175,15 +173,15 @@ export function effectQueryFromFlags(parsed: ParsedArgs): EffectQuery {
     };
   }
   const chosen = given[0];
-  if (chosen === undefined) throw new UsageError(words.noEffect());
+  if (chosen === undefined) throw new UsageError(words.usage.noEffect());
   const [flag, measure] = chosen;
-  if (levelText !== undefined && ciText === undefined) throw new UsageError(words.levelWithoutInterval());
-  const periods = parsePeriods(parsed);
-  if (measure === 'arr' && periods !== null) throw new UsageError(words.periodsWithArr());
-  if (baselineText === undefined && measure !== 'arr') throw new UsageError(words.baselineNeeded(flag));
+  if (levelText !== undefined && ciText === undefined) throw new UsageError(words.usage.levelWithoutInterval());
+  const periods = parsePeriods(parsed, words);
+  if (measure === 'arr' && periods !== null) throw new UsageError(words.usage.periodsWithArr());
+  if (baselineText === undefined && measure !== 'arr') throw new UsageError(words.usage.baselineNeeded(flag));
   const baseline = baselineText === undefined ? null : parseBaselineRisk(baselineText, '--baseline');
   const estimate = parseValue(measure, valueOf(parsed, flag) ?? '', flag);
-  const interval = ciText === undefined ? null : parseInterval(measure, ciText);
+  const interval = ciText === undefined ? null : parseInterval(measure, ciText, words);
   const level = levelText === undefined ? DEFAULT_LEVEL : parseLevel(levelText);
   const followUpYears = followUpText === undefined ? null : parseYears(followUpText, '--followup');
   return {

@@ -7,14 +7,12 @@
  */
 import { mkdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { english } from '../core/messages/en/index.ts';
 import type { Topic } from '../core/topic/topic.ts';
 import { batchFileNames } from './batch-file-names.ts';
 import type { CommandOutput } from './command-output.ts';
+import type { CliWords } from './messages/cli-messages.ts';
 import { loadTopic } from './topic-input.ts';
 import { UsageError } from './usage-error.ts';
-
-const words = english.cli;
 
 /** One handout made: its bytes and the line that reports it once written to `path`. */
 export interface MadeHandout {
@@ -25,13 +23,13 @@ export interface MadeHandout {
 }
 
 /** Why a write failed, in words. */
-function writeReason(error: unknown): string {
+function writeReason(error: unknown, words: CliWords): string {
   const code = (error as NodeJS.ErrnoException).code;
-  if (code === 'ENOENT') return 'the folder does not exist';
-  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
-  if (code === 'EEXIST' || code === 'ENOTDIR') return 'a file of that name is in the way';
-  if (code === 'EISDIR') return 'a folder of that name is in the way';
-  return code ?? 'write failed';
+  if (code === 'ENOENT') return words.reasons.folderMissing;
+  if (code === 'EACCES' || code === 'EPERM') return words.reasons.permissionDenied;
+  if (code === 'EEXIST' || code === 'ENOTDIR') return words.reasons.fileInTheWay;
+  if (code === 'EISDIR') return words.reasons.folderInTheWay;
+  return code ?? words.reasons.writeFailed;
 }
 
 /** Replace `path` with `contents` in one step: no reader sees half a file, and a failed write leaves the old one. */
@@ -54,13 +52,18 @@ function messageOf(error: unknown): string {
 
 /**
  * Make and write the handout of every file in `inputs` into `folder`, with `make` (the flags
- * of the call already read). Refusals go to stderr, one line each, naming the file.
+ * of the call already read). Refusals go to stderr, one line each, naming the file, in `words`.
  */
-export function runHandoutBatch(inputs: readonly string[], folder: string, make: (topic: Topic) => MadeHandout): CommandOutput {
+export function runHandoutBatch(
+  inputs: readonly string[],
+  folder: string,
+  make: (topic: Topic) => MadeHandout,
+  words: CliWords,
+): CommandOutput {
   try {
     mkdirSync(folder, { recursive: true });
   } catch (error) {
-    return { stdout: '', stderr: `${words.folderUnusable(folder, writeReason(error))}\n`, exitCode: 1 };
+    return { stdout: '', stderr: `${words.usage.folderUnusable(folder, writeReason(error, words))}\n`, exitCode: 1 };
   }
   const names = batchFileNames(inputs, '.pdf');
   let stdout = '';
@@ -69,7 +72,7 @@ export function runHandoutBatch(inputs: readonly string[], folder: string, make:
   inputs.forEach((input, index) => {
     let made: MadeHandout;
     try {
-      const topic = loadTopic(input);
+      const topic = loadTopic(input, words);
       try {
         made = make(topic);
       } catch (error) {
@@ -84,7 +87,7 @@ export function runHandoutBatch(inputs: readonly string[], folder: string, make:
     try {
       replaceFile(path, made.pdf);
     } catch (error) {
-      stderr += `${words.fileUnwritable(path, writeReason(error))}\n`;
+      stderr += `${words.usage.fileUnwritable(path, writeReason(error, words))}\n`;
       unwritable += 1;
       return;
     }
@@ -92,6 +95,6 @@ export function runHandoutBatch(inputs: readonly string[], folder: string, make:
     stderr += made.warnings.map((line) => `${input}: ${line}\n`).join('');
     written += 1;
   });
-  stdout += `${words.batchWritten(written, inputs.length, folder)}\n`;
+  stdout += `${words.reports.batchWritten(written, inputs.length, folder)}\n`;
   return { stdout, stderr, exitCode: unwritable > 0 ? 1 : refused > 0 ? 2 : 0 };
 }

@@ -1,15 +1,13 @@
 import { describeProblem } from '../core/messages/describe.ts';
-import { english } from '../core/messages/en/index.ts';
 import { InputError } from '../core/problems.ts';
 import type { CommandIo, CommandOutput } from './command-output.ts';
 import { runCompute } from './compute-command.ts';
 import { flagForField } from './flag-for-field.ts';
-import { HELP_TEXT } from './help-text.ts';
+import type { CliWords } from './messages/cli-messages.ts';
+import { cliWordsEn } from './messages/en.ts';
 import { UsageError } from './usage-error.ts';
 
-const words = english.cli;
-
-type Command = (args: readonly string[]) => CommandOutput | Promise<CommandOutput>;
+type Command = (args: readonly string[], words: CliWords) => CommandOutput | Promise<CommandOutput>;
 
 const COMMANDS: Readonly<Record<string, () => Promise<Command>>> = {
   compute: async () => runCompute,
@@ -23,37 +21,39 @@ function oneLine(text: string): string {
 
 /**
  * Run the command line: exit status 0 on success, 2 for input the user must fix (one line on
- * stderr, nothing on stdout), 1 for any other failure.
+ * stderr, nothing on stdout), 1 for any other failure. Everything printed is worded in
+ * `words` (English unless given), which every command receives; JSON output is data and
+ * keeps its English fields and sentences.
  */
-export async function main(args: readonly string[], io: CommandIo): Promise<number> {
+export async function main(args: readonly string[], io: CommandIo, words: CliWords = cliWordsEn): Promise<number> {
   const [name, ...rest] = args;
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     if (name === undefined) {
-      io.stderr(`${words.noCommand()}\n`);
+      io.stderr(`${words.usage.noCommand()}\n`);
       return 2;
     }
-    io.stdout(HELP_TEXT);
+    io.stdout(words.help);
     return 0;
   }
   const load = COMMANDS[name];
   if (load === undefined) {
-    io.stderr(`${words.unknownCommand(name)}\n`);
+    io.stderr(`${words.usage.unknownCommand(name)}\n`);
     return 2;
   }
   if (rest.includes('--help')) {
-    io.stdout(HELP_TEXT);
+    io.stdout(words.help);
     return 0;
   }
   try {
     const command = await load();
-    const output = await command(rest);
+    const output = await command(rest, words);
     io.stdout(output.stdout);
     if (output.stderr !== undefined && output.stderr !== '') io.stderr(output.stderr);
     return output.exitCode ?? 0;
   } catch (error) {
     if (error instanceof InputError) {
       const flag = flagForField(error.problem.field);
-      const sentence = describeProblem(error.problem);
+      const sentence = describeProblem(error.problem, words.catalogue);
       io.stderr(`${oneLine(flag === null ? sentence : `${flag}: ${sentence}`)}\n`);
       return 2;
     }
@@ -62,7 +62,7 @@ export async function main(args: readonly string[], io: CommandIo): Promise<numb
       return 2;
     }
     const detail = error instanceof Error ? error.message : String(error);
-    io.stderr(`${oneLine(words.internal(detail))}\n`);
+    io.stderr(`${oneLine(words.usage.internal(detail))}\n`);
     return 1;
   }
 }

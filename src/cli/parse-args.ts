@@ -1,7 +1,5 @@
-import { english } from '../core/messages/en/index.ts';
+import type { CliWords } from './messages/cli-messages.ts';
 import { UsageError } from './usage-error.ts';
-
-const words = english.cli;
 
 /** What a flag takes: a value (with an example for messages) or nothing. */
 export interface FlagSpec {
@@ -20,9 +18,9 @@ export interface ParsedArgs {
  * that starts with a dash is taken as the flag's value (`--arr -2%`, `--ci -0.05,0.25`),
  * and `--flag=value` works too.
  *
- * @throws UsageError for unknown, repeated or incomplete flags
+ * @throws UsageError for unknown, repeated or incomplete flags, worded in `words`
  */
-export function parseArgs(args: readonly string[], specs: Readonly<Record<string, FlagSpec>>): ParsedArgs {
+export function parseArgs(args: readonly string[], specs: Readonly<Record<string, FlagSpec>>, words: CliWords): ParsedArgs {
   const flags = new Map<string, string | true>();
   const positionals: string[] = [];
   for (let index = 0; index < args.length; index += 1) {
@@ -34,10 +32,10 @@ export function parseArgs(args: readonly string[], specs: Readonly<Record<string
     const equals = token.indexOf('=');
     const name = equals === -1 ? token : token.slice(0, equals);
     const spec = specs[name];
-    if (spec === undefined) throw new UsageError(words.unknownFlag(name));
-    if (flags.has(name)) throw new UsageError(words.repeatedFlag(name));
+    if (spec === undefined) throw new UsageError(words.usage.unknownFlag(name));
+    if (flags.has(name)) throw new UsageError(words.usage.repeatedFlag(name));
     if (!spec.takesValue) {
-      if (equals !== -1) throw new UsageError(words.flagTakesNoValue(name));
+      if (equals !== -1) throw new UsageError(words.usage.flagTakesNoValue(name));
       flags.set(name, true);
       continue;
     }
@@ -52,7 +50,7 @@ export function parseArgs(args: readonly string[], specs: Readonly<Record<string
       value.trim() === '' ||
       (value.startsWith('--') && specs[value.split('=')[0] ?? ''] !== undefined)
     ) {
-      throw new UsageError(words.missingValue(name, spec.example ?? 'VALUE'));
+      throw new UsageError(words.usage.missingValue(name, spec.example ?? 'VALUE'));
     }
     flags.set(name, value);
   }

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { english } from '../../src/core/messages/en/index.ts';
+import { cliWordsEn } from '../../src/cli/messages/en.ts';
 import { chartMessagesEn } from '../../src/render/messages/en.ts';
 import { uiMessagesEn } from '../../src/ui/messages/en.ts';
 import { pseudoLocale, stripPseudo } from './pseudo-locale.ts';
@@ -19,7 +19,7 @@ describe('pseudoLocale', () => {
     const ui = pseudoLocale(uiMessagesEn);
     expect(ui.headline.outOf('Stroke', '100')).toBe('⟦Stroke, out of 100:⟧');
     expect(ui.start.demoFacts(2, 3, '10 years')).toBe('⟦2 options · 3 outcomes · 10 years⟧');
-    const cli = pseudoLocale(english.cli);
+    const cli = pseudoLocale(cliWordsEn.usage);
     expect(cli.repeatedFlag('--rr')).toBe('⟦The option --rr is given twice. Give it once.⟧');
     expect(cli.noCommand()).toBe('⟦No command given. Use compute, chart or handout (see chancewise --help).⟧');
   });

@@ -1,4 +1,3 @@
-import { cliMessages } from './cli.ts';
 import { noticeMessages } from './notices.ts';
 import { numberMessages } from './numbers.ts';
 import { problemMessages } from './problems.ts';
@@ -9,6 +8,5 @@ export const english = {
   problems: problemMessages,
   notices: noticeMessages,
   numbers: numberMessages,
-  cli: cliMessages,
   wording: wordingMessages,
 } as const;
