@@ -259,7 +259,7 @@ function checksum(bytes: Uint8Array): number {
 
 function copyOf(font: ParsedFont, tag: string): Uint8Array {
   const { offset, length } = table(font, tag);
-  return font.bytes.slice(offset, offset + length);
+  return Uint8Array.from(font.bytes.subarray(offset, offset + length));
 }
 
 /**
@@ -282,7 +282,9 @@ export function subsetTrueType(font: ParsedFont, codes: Iterable<number>): Uint8
   for (const glyph of glyphs) {
     loca.uint32(glyf.length);
     const { start, end } = glyphSpan(font, glyph);
-    const outline = font.bytes.slice(start, end);
+    // A copy, never a view: a Node Buffer's slice shares its memory, and remapping a composite's
+    // parts in place would corrupt the shared font for the next handout (its accented letters).
+    const outline = Uint8Array.from(font.bytes.subarray(start, end));
     const outlineView = view(outline);
     for (const position of componentIndexPositions(font, glyph)) {
       outlineView.setUint16(position - start, newIndex.get(source.getUint16(position)) ?? 0);

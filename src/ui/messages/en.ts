@@ -197,6 +197,12 @@ export const uiMessagesEn: UiMessages = {
     addHarm: 'Add a harm',
     full: (most) => `A topic has at most ${most} outcomes.`,
   },
+  namePreview: {
+    heading: 'How the names read to the patient',
+    hint: (language) =>
+      `The ${LANGUAGE_NAMES[language]} sentences your names go into, as the patient will read them. Reword a name until each sentence reads well (its article, its gender, a verb at the start).`,
+    waiting: 'The sentences appear once the numbers are complete.',
+  },
   options: {
     heading: 'Options',
     count: (count, most) => `${count} of ${most}`,

@@ -233,6 +233,15 @@ export interface OutcomeListMessages {
   readonly full: (most: number) => string;
 }
 
+/** The editor's preview of the patient sentences that carry the typed names. */
+export interface NamePreviewMessages {
+  readonly heading: string;
+  /** Says which language the sentences are in and why they are shown. */
+  readonly hint: (language: PatientLanguage) => string;
+  /** While the results are not computed yet. */
+  readonly waiting: string;
+}
+
 /** The editor's options. */
 export interface OptionsEditorMessages {
   readonly heading: string;
@@ -445,5 +454,6 @@ export interface UiMessages {
   readonly teachingSlide: TeachingSlideViewMessages;
   readonly patientWording: PatientWordingMessages;
   readonly language: LanguageMessages;
+  readonly namePreview: NamePreviewMessages;
   readonly translation: TranslationGapMessages;
 }
