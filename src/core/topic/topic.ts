@@ -142,8 +142,8 @@ export interface Topic {
 
 /**
  * The marks of a topic copied into another language: the language it came from, and each typed
- * text as it was when copied, keyed by its field path ("outcomes.0.name"). A text that still
- * equals its source is still to translate.
+ * text as it was when copied, keyed by the editor's field key ("options.treated.name": options
+ * and outcomes by id, questions by place). A text that still equals its source is still to translate.
  */
 export interface TopicTranslation {
   readonly from: string;
