@@ -61,16 +61,17 @@ test.describe('accessibility and privacy', () => {
     await page.keyboard.press('Enter');
     await expect(page.getByRole('heading', { name: 'Results', exact: true })).toBeFocused();
     await page.getByRole('button', { name: 'Topics' }).focus();
-    // Through the header (Open, Save), the banner's link, and the links of what the handout still
+    // Through the header (Open, Save, a copy in Spanish), the banner's link, and the links of what the handout still
     // lacks (the example gives none of its four disclosures), to the first field of the editor.
     const order: string[] = [];
-    for (let step = 0; step < 8; step += 1) {
+    for (let step = 0; step < 9; step += 1) {
       await page.keyboard.press('Tab');
       order.push(await page.evaluate(() => document.activeElement?.textContent?.trim() || document.activeElement?.id || ''));
     }
-    expect(order.slice(0, 7)).toEqual([
+    expect(order.slice(0, 8)).toEqual([
       'Open…',
       'Save Ctrl+S',
+      'A copy in Spanish',
       'Start a new topic or open a file',
       'Who prepared this topic',
       'Who funded it',
