@@ -35,7 +35,9 @@ test.describe('the Spanish example', () => {
     await page.getByLabel('Outcome', { exact: true }).nth(1).fill('mucho sueño durante el día');
     await expect(preview).toContainText('mucho sueño durante el día');
     await page.getByLabel('Outcome', { exact: true }).nth(1).fill('cansancio durante el día');
-    await page.screenshot({ path: `${SCREENS}/31-spanish-example.png`, fullPage: true });
+    await page.screenshot({ path: `${SCREENS}/31-spanish-example.png` });
+    await headline.screenshot({ path: `${SCREENS}/32-spanish-headline.png` });
+    await preview.screenshot({ path: `${SCREENS}/33-spanish-name-preview.png` });
 
     const handout = page.getByRole('region', { name: 'Handout for the patient' });
     const [download] = await Promise.all([
