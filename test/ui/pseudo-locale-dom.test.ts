@@ -46,21 +46,6 @@ const pseudoLocales: Locales = {
  * own components are not on it.
  */
 const STILL_BEING_MOVED: readonly { readonly where: string; readonly text: RegExp }[] = [
-  // TopicBasics.svelte: its heading, labels and hints.
-  { where: 'TopicBasics', text: /^(The decision|Decision|Who the numbers are for|Over what period)$/ },
-  { where: 'TopicBasics', text: /^(In one line, what the person is deciding about\.|In plain words, for example “.*”\.)$/ },
-  { where: 'TopicBasics', text: /^Every number covers this period: .*\.$/ },
-  // ProblemSummary.svelte and draft/handout-gaps.ts: what is still to fill in for the handout.
-  { where: 'ProblemSummary', text: /^Still to fill in for the handout \(\d+\)$|^The results do not wait for these\./ },
-  {
-    where: 'handout-gaps.ts',
-    text: /^(Who prepared this topic|Who funded it|Interests \(conflicts of interest\) of those who prepared it|The date to review it by)$/,
-  },
-  // ResultsPanel.svelte's reading level.
-  {
-    where: 'ResultsPanel, reading level',
-    text: /^(Reading level|The patient wording reads at about|grade [\d.]+)$|\(Flesch–Kincaid\); the aim is grade/,
-  },
   // The core's numbers catalogue (core/messages/en/numbers.ts), written when the topic is computed: the NNT's interval and no difference.
   {
     where: 'core numbers, NNT',

@@ -8,19 +8,17 @@ import { effectKey } from './field-keys.ts';
 import { effectOptionIds } from './topic-from-draft.ts';
 import type { TopicDraft } from './topic-draft.ts';
 
-/** One entry the handout lacks: the field to fill in, and what it is. */
+/** What an entry the handout lacks is: an effect's source, or one of the disclosures. */
+export type HandoutGapKind = 'effect-source' | keyof TopicDisclosures;
+
+/** One entry the handout lacks: the field to fill in, and what it is (worded by the interface's words). */
 export interface HandoutGap {
   readonly key: string;
-  readonly message: string;
+  readonly what: HandoutGapKind;
 }
 
-/** The disclosures in the order the editor shows them, with what each is called in the list. */
-const DISCLOSURES: readonly (readonly [keyof TopicDisclosures, string])[] = [
-  ['preparedBy', 'Who prepared this topic'],
-  ['funding', 'Who funded it'],
-  ['interests', 'Interests (conflicts of interest) of those who prepared it'],
-  ['reviewBy', 'The date to review it by'],
-];
+/** The disclosures in the order the editor shows them. */
+const DISCLOSURES: readonly (keyof TopicDisclosures)[] = ['preparedBy', 'funding', 'interests', 'reviewBy'];
 
 /**
  * Every entry the handout lacks, in the order of the fields on screen: the effects' sources
@@ -35,12 +33,12 @@ export function handoutGaps(draft: TopicDraft): HandoutGap[] {
       const effect = outcome.effects.find((entry) => entry.optionId === optionId);
       return effect === undefined || effect.source.trim() !== ''
         ? []
-        : [{ key: effectKey(outcome.id, optionId, 'source'), message: 'Where the effect comes from' }];
+        : [{ key: effectKey(outcome.id, optionId, 'source'), what: 'effect-source' as const }];
     }),
   );
-  const about = DISCLOSURES.filter(([field]) => draft.about[field].trim() === '').map(([field, message]) => ({
+  const about = DISCLOSURES.filter((field) => draft.about[field].trim() === '').map((field) => ({
     key: `about.${field}`,
-    message,
+    what: field,
   }));
   return [...sources, ...about];
 }

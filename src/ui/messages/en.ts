@@ -197,6 +197,30 @@ export const uiMessagesEn: UiMessages = {
     addHarm: 'Add a harm',
     full: (most) => `A topic has at most ${most} outcomes.`,
   },
+  basics: {
+    heading: 'The decision',
+    title: 'Decision',
+    titleHint: 'In one line, what the person is deciding about.',
+    population: 'Who the numbers are for',
+    populationHint: 'In plain words, for example “people aged 60 to 69 with a 15% ten-year risk”.',
+    period: 'Over what period',
+    periodHint: 'Every number covers this period: 10 years, 6 months, 3 days.',
+  },
+  problemSummary: {
+    toFix: (count) => `${count === 1 ? '1 thing to fix' : `${count} things to fix`} before the results can update`,
+    toFixKept: 'Everything you typed is kept. The results show your last complete entry until then.',
+    needed: (count) => `Still to fill in (${count})`,
+    neededNote: 'The results appear once these are entered.',
+    gaps: (count) => `Still to fill in for the handout (${count})`,
+    gapsNote: 'The results do not wait for these. Until they are given, the handout says “not stated”.',
+    gapNames: {
+      'effect-source': 'Where the effect comes from',
+      preparedBy: 'Who prepared this topic',
+      funding: 'Who funded it',
+      interests: 'Interests (conflicts of interest) of those who prepared it',
+      reviewBy: 'The date to review it by',
+    },
+  },
   namePreview: {
     heading: 'How the names read to the patient',
     hint: (language) =>

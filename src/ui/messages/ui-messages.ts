@@ -10,6 +10,7 @@ import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { Certainty, Importance, TopicDisclosures } from '../../core/topic/topic.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { DraftMeasure } from '../draft/topic-draft.ts';
+import type { HandoutGapKind } from '../draft/handout-gaps.ts';
 import type { TranslatableKind } from '../draft/translation-texts.ts';
 
 /** The page around the two columns. */
@@ -231,6 +232,29 @@ export interface OutcomeListMessages {
   readonly addBenefit: string;
   readonly addHarm: string;
   readonly full: (most: number) => string;
+}
+
+/** The decision card: the topic's title, who the numbers are for, and the period. */
+export interface TopicBasicsMessages {
+  readonly heading: string;
+  readonly title: string;
+  readonly titleHint: string;
+  readonly population: string;
+  readonly populationHint: string;
+  readonly period: string;
+  readonly periodHint: string;
+}
+
+/** The lists above the editor: what to fix, what the results need, and what the handout still lacks. */
+export interface ProblemSummaryMessages {
+  readonly toFix: (count: number) => string;
+  readonly toFixKept: string;
+  readonly needed: (count: number) => string;
+  readonly neededNote: string;
+  readonly gaps: (count: number) => string;
+  readonly gapsNote: string;
+  /** What each entry the handout lacks is called in the list. */
+  readonly gapNames: Readonly<Record<HandoutGapKind, string>>;
 }
 
 /** The editor's preview of the patient sentences that carry the typed names. */
@@ -455,5 +479,7 @@ export interface UiMessages {
   readonly patientWording: PatientWordingMessages;
   readonly language: LanguageMessages;
   readonly namePreview: NamePreviewMessages;
+  readonly basics: TopicBasicsMessages;
+  readonly problemSummary: ProblemSummaryMessages;
   readonly translation: TranslationGapMessages;
 }

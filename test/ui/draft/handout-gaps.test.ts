@@ -21,11 +21,11 @@ describe('the entries the handout still lacks', () => {
   it('are, for a new topic, the source of its one effect and every disclosure, in the order on screen', () => {
     const draft = setOptionName(blankDraft(), 'option-1', 'the tablet');
     expect(handoutGaps(draft)).toEqual([
-      { key: 'outcomes.outcome-1.effects.option-1.source', message: 'Where the effect comes from' },
-      { key: 'about.preparedBy', message: 'Who prepared this topic' },
-      { key: 'about.funding', message: 'Who funded it' },
-      { key: 'about.interests', message: 'Interests (conflicts of interest) of those who prepared it' },
-      { key: 'about.reviewBy', message: 'The date to review it by' },
+      { key: 'outcomes.outcome-1.effects.option-1.source', what: 'effect-source' },
+      { key: 'about.preparedBy', what: 'preparedBy' },
+      { key: 'about.funding', what: 'funding' },
+      { key: 'about.interests', what: 'interests' },
+      { key: 'about.reviewBy', what: 'reviewBy' },
     ]);
     // The effect's entry says where it is, as the list shows it away from its field.
     expect(fieldPlace('outcomes.outcome-1.effects.option-1.source', setOutcomeText(draft, 'outcome-1', 'name', 'a stroke'))).toBe(
