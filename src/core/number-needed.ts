@@ -79,13 +79,20 @@ export function numberNeeded(entered: Estimate, settings: NumberNeededSettings =
   const words = settings.words ?? english.numbers;
   const difference = benefitOf(entered, settings.wanted === true);
   const estimate = asDifference(difference.estimate);
+  const parts = numberNeededLimits(entered, settings);
   const interval = numberNeededInterval(entered, settings);
   if (estimate === 0) {
     const text = interval === null ? words.noDifference : words.noDifferenceWithin(interval);
-    return { estimate: null, rounded: null, label: null, text };
+    return { estimate: null, rounded: null, label: null, text, interval: parts };
   }
   const label = estimate > 0 ? 'NNTB' : 'NNTH';
   const rounded = wholeNeeded(estimate);
   const head = `${label} ${rounded}`;
-  return { estimate: 1 / Math.abs(estimate), rounded, label, text: interval === null ? head : `${head} (${interval})` };
+  return {
+    estimate: 1 / Math.abs(estimate),
+    rounded,
+    label,
+    text: interval === null ? head : `${head} (${interval})`,
+    interval: parts,
+  };
 }

@@ -2,6 +2,7 @@
  * Shared value types of the calculation core. Every later layer (charts, wording,
  * handout, app, command line) reads these; none of them holds prose.
  */
+import type { NntInterval } from './nnt-interval.ts';
 
 /** An estimate with an optional interval; bounds are `null` when no interval exists. */
 export interface Estimate {
@@ -67,7 +68,10 @@ export interface NumberNeeded {
   readonly estimate: number | null;
   readonly rounded: number | null;
   readonly label: 'NNTB' | 'NNTH' | null;
+  /** The English text, kept as the JSON's `nnt.text`; screens word the parts themselves. */
   readonly text: string;
+  /** The interval as parts (Altman 1998), for any language's words; null when the effect has none. */
+  readonly interval: NntInterval | null;
 }
 
 /** Rounded people counts for one option against its comparison, per `denominator`. */

@@ -13,6 +13,7 @@ describe('numberNeeded labels and words NNTs after Altman (1998, BMJ 317:1309)',
       rounded: 42,
       label: 'NNTB',
       text: 'NNTB 42',
+      interval: null,
     });
   });
 
@@ -130,5 +131,14 @@ describe('the cautious rounding: NNTB up, NNTH down', () => {
   it('rounds an interval that crosses no effect by the label of each end', () => {
     // Benefit end 1/0.15 = 6.7 → 7 (up); harm end 1/0.06 = 16.7 → 16 (down).
     expect(numberNeeded(difference(0.05, -0.06, 0.15)).text).toBe('NNTB 20 (NNTB 7 to ∞ to NNTH 16)');
+  });
+});
+
+describe('numberNeeded gives its interval as parts too', () => {
+  // Altman (1998, BMJ 317:1309): ARR 10%, 95% CI −5% to 25% reads "NNTB 10 (NNTB 4 to ∞ to NNTH 20)".
+  it('passes through infinity from the benefit end, as Altman writes it', () => {
+    const found = numberNeeded({ estimate: 0.1, lower: -0.05, upper: 0.25 });
+    expect(found.text).toBe('NNTB 10 (NNTB 4 to ∞ to NNTH 20)');
+    expect(found.interval).toEqual({ kind: 'through-infinity', benefit: 4, harm: 20 });
   });
 });

@@ -45,7 +45,7 @@ function option(
     interventionRisk: risk,
     relativeRisk: null,
     absoluteReduction: { estimate: (counts.comparison - intervention) / denominator, lower: null, upper: null },
-    nnt: { estimate: null, rounded: null, label: null, text: '' },
+    nnt: { estimate: null, rounded: null, label: null, text: '', interval: null },
     perPeople: people,
     wordsPeople: people,
     notices: [],

@@ -46,11 +46,6 @@ const pseudoLocales: Locales = {
  * own components are not on it.
  */
 const STILL_BEING_MOVED: readonly { readonly where: string; readonly text: RegExp }[] = [
-  // The core's numbers catalogue (core/messages/en/numbers.ts), written when the topic is computed: the NNT's interval and no difference.
-  {
-    where: 'core numbers, NNT',
-    text: /^NNT[BH] [\d,]+ to (∞ to NNTH )?[\d,]+$|^No difference between the options, so no number needed to treat$/,
-  },
   // The core's notices (core/messages/en/notices.ts), in the warnings and beside a converted baseline.
   {
     where: 'core notices',

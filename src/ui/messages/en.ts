@@ -174,6 +174,8 @@ export const uiMessagesEn: UiMessages = {
     moreRange: (from, to) => `${from} to ${to} more`,
     fewerToMore: (fewer, more) => `${fewer} fewer to ${more} more`,
     range: (lower, upper) => `${lower} to ${upper}`,
+    nntInterval: { infinity: '∞', to: 'to' },
+    noNnt: 'No difference between the options, so no number needed to treat',
   },
   handoutCard: {
     heading: 'Handout for the patient',

@@ -10,6 +10,7 @@ import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { Certainty, Importance, TopicDisclosures } from '../../core/topic/topic.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { DraftMeasure } from '../draft/topic-draft.ts';
+import type { IntervalWords } from '../../core/nnt-interval.ts';
 import type { HandoutGapKind } from '../draft/handout-gaps.ts';
 import type { TranslatableKind } from '../draft/translation-texts.ts';
 
@@ -206,6 +207,10 @@ export interface PeopleChangeMessages {
   readonly fewerToMore: (fewer: string, more: string) => string;
   /** A range of people or of a risk: "10 to 12". */
   readonly range: (lower: string, upper: string) => string;
+  /** The words joining an NNT interval's parts (Altman 1998): "∞" and "to". */
+  readonly nntInterval: IntervalWords;
+  /** The NNT cell when the options make no difference. */
+  readonly noNnt: string;
 }
 
 /** The handout's card in the results. */

@@ -5,6 +5,7 @@
  * absolute risk and the NNT, and the level of each range. Every number is the core's; only
  * the wording is here.
  */
+import { writeNntInterval } from '../../core/nnt-interval.ts';
 import { formatCount, formatPercentSignificant } from '../../core/messages/format-number.ts';
 import type { OptionOutcomeResult, OutcomeResult, TopicResult } from '../../core/topic/topic-result.ts';
 import type { WordsDenominator } from '../../core/types.ts';
@@ -136,6 +137,13 @@ export function splitNntText(text: string): RangedText {
   return { value: text.slice(0, open), range: text.slice(open + 2, -1) };
 }
 
+/** The NNT cell from the core's parts, in the interface's words: "NNTB 7" over "NNTB 5 to 10". */
+function nntText(option: OptionOutcomeResult, words: PeopleChangeMessages): RangedText {
+  const { label, rounded, interval } = option.nnt;
+  const value = label === null || rounded === null ? words.noNnt : `${label} ${rounded}`;
+  return { value, range: interval === null ? null : writeNntInterval(interval, words.nntInterval) };
+}
+
 function changeText(option: OptionOutcomeResult, denominator: number, words: PeopleChangeMessages): RangedText {
   const people = option.wordsPeople;
   const base = option.comparisonRisk.estimate;
@@ -167,7 +175,7 @@ function row(option: OptionOutcomeResult, denominator: number, words: PeopleChan
     },
     change: option.isComparison ? null : changeText(option, denominator, words),
     risk: riskText(option, words),
-    nnt: option.isComparison ? null : splitNntText(option.nnt.text),
+    nnt: option.isComparison ? null : nntText(option, words),
     level: range === null || option.level === null ? null : levelText(option.level),
   };
 }

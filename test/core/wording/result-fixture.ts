@@ -65,7 +65,7 @@ export function optionFixture(spec: OptionSpec, denominator: Denominator): Optio
           ? null
           : point(spec.relativeRisk),
     absoluteReduction: point(reduction),
-    nnt: { estimate: nnt.rounded, rounded: nnt.rounded, label: nnt.label, text: '' },
+    nnt: { estimate: nnt.rounded, rounded: nnt.rounded, label: nnt.label, text: '', interval: null },
     perPeople: people,
     wordsPeople: people,
     groups: {
