@@ -1,4 +1,5 @@
 /** The English words of every layer, loaded with the app (English is the default and the fallback of none). */
+import { english } from '../core/messages/en/index.ts';
 import { wordingMessages } from '../core/messages/en/wording.ts';
 import { chartMessagesEn } from '../render/messages/en.ts';
 import { shellMessagesEn } from '../../electron/main/messages/en.ts';
@@ -13,6 +14,7 @@ export const englishPatientWords: PatientWords = {
 
 export const englishInterfaceWords: InterfaceWords = {
   ui: uiMessagesEn,
+  core: english,
   shell: shellMessagesEn,
 };
 

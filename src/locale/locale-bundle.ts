@@ -9,6 +9,7 @@ import type { ChartMessages } from '../render/messages/chart-messages.ts';
 import type { WordingMessages } from '../core/wording/wording-catalogue.ts';
 import type { ShellMessages } from '../../electron/main/messages/shell-messages.ts';
 import type { UiMessages } from '../ui/messages/ui-messages.ts';
+import type { Catalogue } from '../core/messages/describe.ts';
 
 export type { PatientLanguage } from '../core/topic/topic-language.ts';
 import type { PatientLanguage } from '../core/topic/topic-language.ts';
@@ -24,6 +25,8 @@ export interface PatientWords {
 /** Everything the clinician reads. */
 export interface InterfaceWords {
   readonly ui: UiMessages;
+  /** The core's problems and warnings, as the clinician reads them beside fields and results. */
+  readonly core: Catalogue;
   readonly shell: ShellMessages;
 }
 

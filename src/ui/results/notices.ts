@@ -3,7 +3,7 @@
  * reading-grade warning for any typed text that the handout would print and that reads
  * above the target grade.
  */
-import { noticeSentences } from '../../core/messages/describe.ts';
+import { type Catalogue, noticeSentences } from '../../core/messages/describe.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
 import type { Notice } from '../../core/types.ts';
 import { type ReadingLanguage, readingWarningsFor } from '../../core/wording/reading-scale.ts';
@@ -38,6 +38,6 @@ export function readingNoticesFor(key: string, language: ReadingLanguage = 'en')
 }
 
 /** Every warning as a sentence, the numbers' first, then those on the typed texts, without repeats. */
-export function resultWarnings(result: TopicResult, reading: readonly Notice[]): string[] {
-  return noticeSentences([...result.notices, ...reading]);
+export function resultWarnings(result: TopicResult, reading: readonly Notice[], catalogue?: Catalogue): string[] {
+  return noticeSentences([...result.notices, ...reading], catalogue);
 }
