@@ -9,6 +9,7 @@
  * infinitive phrases ("morir de cáncer de colon") or clauses ("que el dolor desaparezca"); the
  * verb before the name follows its kind, and the sentences never depend on the name's gender.
  */
+import { aEs, deEs, startsWithQueEs } from '../../core/messages/es/joining-es.ts';
 import { formatCountEs, formatDecimalEs, formatPercentEs } from '../../core/messages/es/format-number-es.ts';
 import { capitaliseEs, joinListEs, pluralEs, startsWithVerbEs } from '../../core/messages/es/spanish-grammar.ts';
 import { UNIT_NAMES_ES } from '../../core/messages/es/time-words-es.ts';
@@ -38,30 +39,21 @@ const over = ({ years, unit }: Period): string => {
   return amount === 1 ? 'en el próximo mes' : `en los próximos ${shown} ${name}`;
 };
 
-/** An outcome name typed as a clause: "que el dolor desaparezca". */
-const isClause = (outcome: string): boolean => /^que\s/i.test(outcome.trim());
-
 /**
  * The verb that comes before an outcome name: "tienen un infarto", "llegan a morir de cáncer",
  * "consiguen que el dolor desaparezca" (a wanted event typed as a clause).
  */
 const have = (outcome: string, people: number): string => {
   if (startsWithVerbEs(outcome)) return pluralEs(people, 'llega a', 'llegan a');
-  if (isClause(outcome)) return pluralEs(people, 'consigue', 'consiguen');
+  if (startsWithQueEs(outcome)) return pluralEs(people, 'consigue', 'consiguen');
   return pluralEs(people, 'tiene', 'tienen');
 };
 
 /** The same verb in the infinitive, after "pueden o no": "tener un infarto", "morir de cáncer". */
 const haveInfinitive = (outcome: string): string => {
   if (startsWithVerbEs(outcome)) return '';
-  return isClause(outcome) ? 'conseguir ' : 'tener ';
+  return startsWithQueEs(outcome) ? 'conseguir ' : 'tener ';
 };
-
-/** "a" before a name, "al" before one typed with "el": "gracias al tratamiento". */
-const toName = (name: string): string => (/^el\s/i.test(name) ? `al ${name.slice(3)}` : `a ${name}`);
-
-/** "de" before a name, "del" before one typed with "el": "a causa del tratamiento". */
-const ofName = (name: string): string => (/^el\s/i.test(name) ? `del ${name.slice(3)}` : `de ${name}`);
 
 /**
  * What the people changed by an option do, and why: an unwanted event is avoided thanks to the
@@ -71,7 +63,7 @@ const ofName = (name: string): string => (/^el\s/i.test(name) ? `del ${name.slic
  */
 const changedBecause = (group: ChangedGroup, wanted: boolean, people: number, outcome: string, option: string): string => {
   const good = wanted === (group === 'caused');
-  const reason = good ? `gracias ${toName(option)}` : `a causa ${ofName(option)}`;
+  const reason = good ? `gracias ${aEs(option)}` : `a causa ${deEs(option)}`;
   if (wanted) {
     const verb = group === 'caused' ? have(outcome, people) : pluralEs(people, 'se queda sin', 'se quedan sin');
     return `${verb} ${outcome} ${reason}`;
