@@ -8,7 +8,7 @@ import { colourPalette } from '../render/palette.ts';
 import App from './App.svelte';
 import { browserPlatform } from './platform/browser-platform.ts';
 import { desktopPlatform } from './platform/desktop-platform.ts';
-import { DEMO_TOPICS } from './state/demo-topics.ts';
+import { FIRST_DEMO, loadDemoTopics } from './state/demo-topics.ts';
 import './styles/app.css';
 
 /** Share the people charts' colours with the rest of the interface (set through the CSSOM, which the policy allows). */
@@ -30,7 +30,9 @@ mount(App, {
   target,
   props: {
     platform: shell === undefined ? browserPlatform() : desktopPlatform(shell),
-    demos: DEMO_TOPICS,
+    // The app opens on the first example; the Topics panel loads the others when it lists them.
+    demos: FIRST_DEMO === null ? [] : [FIRST_DEMO],
+    loadDemos: loadDemoTopics,
     locales: englishLocales,
   },
 });

@@ -6,7 +6,7 @@ import type { Locales } from '../../src/locale/locale-bundle.ts';
 import EditorPanel from '../../src/ui/components/EditorPanel.svelte';
 import ResultsPanel from '../../src/ui/components/ResultsPanel.svelte';
 import { draftFromTopic } from '../../src/ui/draft/draft-from-topic.ts';
-import { DEMO_TOPICS } from '../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './state/demo-topics-read.ts';
 import { localeContext } from '../../src/ui/state/locale-context.ts';
 import { TopicEditor } from '../../src/ui/state/topic-editor.svelte.ts';
 import { pseudoLocale, stripPseudo } from '../support/pseudo-locale.ts';

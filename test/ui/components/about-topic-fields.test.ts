@@ -4,7 +4,7 @@ import { flushSync } from 'svelte';
 import { afterEach, describe, expect, test } from 'vitest';
 import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 import { englishLocales } from '../../../src/locale/english.ts';
 import { localeContext } from '../../../src/ui/state/locale-context.ts';

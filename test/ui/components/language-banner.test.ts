@@ -6,7 +6,7 @@ import { englishLocales } from '../../../src/locale/english.ts';
 import DocumentBanners from '../../../src/ui/components/DocumentBanners.svelte';
 import { setLanguage } from '../../../src/ui/draft/draft-edits.ts';
 import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { localeContext } from '../../../src/ui/state/locale-context.ts';
 import { TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';

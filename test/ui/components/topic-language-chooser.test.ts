@@ -7,7 +7,7 @@ import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { setLanguage } from '../../../src/ui/draft/draft-edits.ts';
 import type { TopicDraft } from '../../../src/ui/draft/topic-draft.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { localeContext } from '../../../src/ui/state/locale-context.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 

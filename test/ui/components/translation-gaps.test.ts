@@ -6,7 +6,7 @@ import { englishLocales } from '../../../src/locale/english.ts';
 import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { translatedCopy } from '../../../src/ui/draft/translated-copy.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { localeContext } from '../../../src/ui/state/locale-context.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 

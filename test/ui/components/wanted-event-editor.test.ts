@@ -7,7 +7,7 @@ import EditorPanel from '../../../src/ui/components/EditorPanel.svelte';
 import KeyNumbers from '../../../src/ui/components/KeyNumbers.svelte';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { keyNumberTables } from '../../../src/ui/results/key-numbers.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 import { englishLocales } from '../../../src/locale/english.ts';
 import { localeContext } from '../../../src/ui/state/locale-context.ts';

@@ -3,7 +3,7 @@ import { checkDraft } from '../../../src/ui/draft/check-draft.ts';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { blankDraft, setEffectField, setOptionName, setOutcomeText, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { effectKey, outcomeKey } from '../../../src/ui/draft/field-keys.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');

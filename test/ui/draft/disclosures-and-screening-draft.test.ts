@@ -3,7 +3,7 @@ import { blankDraft, setDisclosure, setScreening } from '../../../src/ui/draft/d
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { parseDraft } from '../../../src/ui/draft/draft-schema.ts';
 import { topicFromDraft } from '../../../src/ui/draft/topic-from-draft.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 // The disclosures and the screening section as the editor keeps them (Chancewise's own draft shape):
 // typed text kept as typed, written to the topic only when something is given.

@@ -18,7 +18,7 @@ import {
   setPeriodUnit,
   setTopicText,
 } from '../../../src/ui/draft/draft-edits.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');

@@ -4,7 +4,7 @@ import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { checkDraft } from '../../../src/ui/draft/check-draft.ts';
 import { handoutGaps } from '../../../src/ui/draft/handout-gaps.ts';
 import { fieldPlace } from '../../../src/ui/draft/field-keys.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 
 // "Still to fill in for the handout": what the handout would print as "not stated". The items are

@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { setEffectField, setHandoutChoice, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { topicFromDraft } from '../../../src/ui/draft/topic-from-draft.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');

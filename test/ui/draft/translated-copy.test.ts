@@ -5,7 +5,7 @@ import { setLanguage } from '../../../src/ui/draft/draft-edits.ts';
 import { translatedCopy } from '../../../src/ui/draft/translated-copy.ts';
 import { untranslatedTexts } from '../../../src/ui/draft/translation-texts.ts';
 import { topicFileText, openTopicText } from '../../../src/ui/files/topic-files.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 // A copy in another language keeps every number and typed text, and marks the texts to translate
 // (Chancewise's own design; the tag "es" is Spanish by RFC 5646, Phillips & Davis 2009).

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { addOption, blankDraft, setOptionName, setQuestion, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { translatableTexts, untranslatedTexts } from '../../../src/ui/draft/translation-texts.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 // Which typed texts a patient reads is Chancewise's own design (the handout prints the title,
 // population, names, evidence, questions, disclosures and the screening line); a text still to

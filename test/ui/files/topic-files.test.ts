@@ -3,7 +3,7 @@ import { readTopicFile } from '../../../src/core/topic/topic-file.ts';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { setEffectField } from '../../../src/ui/draft/draft-edits.ts';
 import { openTopicText, suggestedFileName, topicFileText } from '../../../src/ui/files/topic-files.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 const first = DEMO_TOPICS[0];
 if (first === undefined) throw new Error('no demonstration topic');

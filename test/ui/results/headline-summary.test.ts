@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
 import { headlineSummary } from '../../../src/ui/results/headline-summary.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 import { effectTopic } from './effect-topic.ts';
 
 const stone = DEMO_TOPICS[0];

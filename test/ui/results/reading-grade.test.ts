@@ -3,7 +3,7 @@ import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
 import { readability } from '../../../src/core/wording/readability.ts';
 import { handoutSentences } from '../../../src/core/wording/topic-wording.ts';
 import { patientReadingGrade } from '../../../src/ui/results/reading-grade.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 describe('patientReadingGrade', () => {
   test.each(DEMO_TOPICS.map((demo) => [demo.fileName, demo]))(

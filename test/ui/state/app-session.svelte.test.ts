@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { AppSession } from '../../../src/ui/state/app-session.svelte.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { fakePlatform, settle } from './fake-platform.ts';
 

@@ -6,7 +6,7 @@ import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
 import { Autosave } from '../../../src/ui/state/autosave.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { RecentFiles } from '../../../src/ui/state/recent-files.ts';
 import { EARLIER_AUTOSAVE_KEY, TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';

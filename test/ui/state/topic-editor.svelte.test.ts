@@ -4,7 +4,7 @@ import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
 import { blankDraft, setOutcomeText, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { outcomeKey } from '../../../src/ui/draft/field-keys.ts';
 import { Autosave } from '../../../src/ui/state/autosave.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { TopicEditor } from '../../../src/ui/state/topic-editor.svelte.ts';
 

@@ -4,7 +4,7 @@ import { outcomeChart } from '../../../src/render/chart-model.ts';
 import { setHandoutChoice, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import type { HandoutMaker, HandoutRequest } from '../../../src/ui/handout/handout-builder.ts';
 import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
 import { TopicExports } from '../../../src/ui/state/topic-exports.svelte.ts';

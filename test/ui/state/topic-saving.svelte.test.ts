@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { readTopicFile } from '../../../src/core/topic/topic-file.ts';
 import { setTopicText } from '../../../src/ui/draft/draft-edits.ts';
 import { AppMessages } from '../../../src/ui/state/app-messages.svelte.ts';
-import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
 import { TopicSaving } from '../../../src/ui/state/topic-saving.svelte.ts';
