@@ -1,13 +1,10 @@
 /**
- * The reading grade of what the patient reads: the plain sentences of the handout,
- * scored with the Flesch–Kincaid grade level.
+ * The reading grade of what the patient reads: the plain sentences of the handout
+ * (`handoutSentences` without the NNT), scored with the Flesch–Kincaid grade level.
  */
-import type { TopicResult } from '../../core/topic/topic-result.ts';
 import { READING_GRADE_LIMIT, fleschKincaidGrade, readability } from '../../core/wording/readability.ts';
 import type { TextCounts } from '../../core/wording/readability.ts';
-import { handoutSentences } from '../../core/wording/topic-wording.ts';
 import { type ReadingLanguage, type ReadingLevel, readabilityFor, readingLevelOf } from '../../core/wording/reading-scale.ts';
-import type { WordingMessages } from '../../core/wording/wording-catalogue.ts';
 
 export interface ReadingGrade {
   /** The grade to one decimal, or null when there is no text. */
@@ -31,32 +28,29 @@ function countsOf(sentence: string): TextCounts {
 }
 
 /**
- * The Flesch–Kincaid grade of the patient wording of `result`: the counts of its sentences
- * added up, which is the grade of the text they make together.
+ * The Flesch–Kincaid grade of the patient's `sentences`: the counts of each added up, which
+ * is the grade of the text they make together.
  */
-export function patientReadingGrade(result: TopicResult): ReadingGrade {
-  const total = handoutSentences(result, { showNnt: false })
-    .map((sentence) => countsOf(sentence.text))
-    .reduce(
-      (sum, counts) => ({
-        sentences: sum.sentences + counts.sentences,
-        words: sum.words + counts.words,
-        syllables: sum.syllables + counts.syllables,
-      }),
-      { sentences: 0, words: 0, syllables: 0 },
-    );
+export function patientReadingGrade(sentences: readonly string[]): ReadingGrade {
+  const total = sentences.map(countsOf).reduce(
+    (sum, counts) => ({
+      sentences: sum.sentences + counts.sentences,
+      words: sum.words + counts.words,
+      syllables: sum.syllables + counts.syllables,
+    }),
+    { sentences: 0, words: 0, syllables: 0 },
+  );
   const grade = fleschKincaidGrade(total);
   const rounded = grade === null ? null : Math.round(grade * 10) / 10;
   return { grade: rounded, limit: READING_GRADE_LIMIT, withinLimit: rounded !== null && rounded <= READING_GRADE_LIMIT };
 }
 
 /**
- * The reading level of the patient wording of `result` in the words of its language, on that
- * language's scale: the Flesch–Kincaid grade for English (as {@link patientReadingGrade}),
- * the INFLESZ reading ease for Spanish (see `core/wording/reading-scale.ts`).
+ * The reading level of the patient's `sentences` on the scale of their language: the
+ * Flesch–Kincaid grade for English (as {@link patientReadingGrade}), the INFLESZ reading ease
+ * for Spanish (see `core/wording/reading-scale.ts`).
  */
-export function patientReadingLevel(result: TopicResult, catalogue: WordingMessages, language: ReadingLanguage): ReadingLevel {
-  if (language === 'en') return readingLevelOf(patientReadingGrade(result).grade, 'en');
-  const sentences = handoutSentences(result, { showNnt: false, catalogue });
-  return readabilityFor(sentences.map((sentence) => sentence.text).join(' '), language);
+export function patientReadingLevel(sentences: readonly string[], language: ReadingLanguage): ReadingLevel {
+  if (language === 'en') return readingLevelOf(patientReadingGrade(sentences).grade, 'en');
+  return readabilityFor(sentences.join(' '), language);
 }

@@ -1,7 +1,8 @@
 import { describe, expect, test } from 'vitest';
 import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import { patientTextsKey, readingNoticesFor, resultWarnings } from '../../../src/ui/results/notices.ts';
+import { resultWarnings } from '../../../src/ui/results/notices.ts';
+import { patientTextsKey, readingNoticesFor } from '../../../src/ui/results/reading-notices.ts';
 import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
 const demo = DEMO_TOPICS[0]!;

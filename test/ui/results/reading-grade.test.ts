@@ -11,13 +11,10 @@ describe('patientReadingGrade', () => {
     (_, demo) => {
       // Flesch–Kincaid grade = 0.39 × words/sentences + 11.8 × syllables/words − 15.59 (Kincaid et al. 1975),
       // computed here once over the joined text, and by the app from per-sentence counts.
-      const result = computeTopic(demo.topic);
-      const joined = handoutSentences(result, { showNnt: false })
-        .map((sentence) => sentence.text)
-        .join(' ');
-      const whole = readability(joined).grade;
+      const sentences = handoutSentences(computeTopic(demo.topic), { showNnt: false }).map((sentence) => sentence.text);
+      const whole = readability(sentences.join(' ')).grade;
       expect(whole).not.toBeNull();
-      expect(patientReadingGrade(result).grade).toBeCloseTo(Math.round((whole ?? 0) * 10) / 10, 10);
+      expect(patientReadingGrade(sentences).grade).toBeCloseTo(Math.round((whole ?? 0) * 10) / 10, 10);
     },
   );
 });
