@@ -3,6 +3,7 @@ import type { TimeUnit } from '../../core/time-unit.ts';
 import type { InfleszBand } from '../../core/wording/readability-es.ts';
 import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { PatientLanguage } from '../../core/topic/topic-language.ts';
+import { noticeMessagesEn } from './notices-en.ts';
 import type { UiMessages } from './ui-messages.ts';
 
 const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
@@ -412,4 +413,5 @@ export const uiMessagesEn: UiMessages = {
     stillIn: (what, text, from, to) => `${what} “${text}” is still in ${from}: write it in ${to}.`,
     note: (from) => `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout.`,
   },
+  notices: noticeMessagesEn,
 };

@@ -13,6 +13,7 @@ import type { DraftMeasure } from '../draft/topic-draft.ts';
 import type { IntervalWords } from '../../core/nnt-interval.ts';
 import type { HandoutGapKind } from '../draft/handout-gaps.ts';
 import type { TranslatableKind } from '../draft/translation-texts.ts';
+import type { NoticeMessages } from './notice-messages.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -487,4 +488,5 @@ export interface UiMessages {
   readonly basics: TopicBasicsMessages;
   readonly problemSummary: ProblemSummaryMessages;
   readonly translation: TranslationGapMessages;
+  readonly notices: NoticeMessages;
 }

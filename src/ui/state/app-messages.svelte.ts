@@ -34,9 +34,9 @@ export class AppMessages {
     }
   }
 
-  /** Say that something went wrong, with the error's own words and what still holds. */
-  fail(start: string, error: unknown, end: string): void {
-    this.show({ tone: 'error', text: `${start}${error instanceof Error ? error.message : String(error)}${end}` });
+  /** Say that something went wrong, with the error's own words put in a sentence that says what still holds. */
+  fail(error: unknown, sentence: (reason: string) => string = (reason) => reason): void {
+    this.show({ tone: 'error', text: sentence(error instanceof Error ? error.message : String(error)) });
   }
 
   dismiss(): void {

@@ -36,11 +36,11 @@ describe('AppMessages', () => {
     expect(messages.message?.text).toBe('second');
   });
 
-  it('says a failure in the error’s own words, between what failed and what still holds', () => {
+  it('says a failure in the error’s own words, put in the sentence that says what failed and what still holds', () => {
     const { messages } = setUp();
-    messages.fail('The chart could not be saved: ', new Error('the disk is full'), '.');
+    messages.fail(new Error('the disk is full'), (reason) => `The chart could not be saved: ${reason}.`);
     expect(messages.message).toEqual({ tone: 'error', text: 'The chart could not be saved: the disk is full.' });
-    messages.fail('', 'no permission', ' Your current topic is unchanged.');
-    expect(messages.message?.text).toBe('no permission Your current topic is unchanged.');
+    messages.fail('no permission');
+    expect(messages.message?.text).toBe('no permission');
   });
 });
