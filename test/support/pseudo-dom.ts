@@ -111,3 +111,21 @@ export function fakeLayout(): void {
     disconnect(): void {}
   };
 }
+
+/**
+ * jsdom has no modal dialogs and no full screen: showing a dialog (modal or not) opens it,
+ * closing it closes it, and nothing is ever full screen.
+ */
+export function fakeDialogs(): void {
+  if (!('fullscreenElement' in document))
+    Object.defineProperty(document, 'fullscreenElement', { configurable: true, value: null });
+  const dialog = HTMLDialogElement.prototype;
+  if (typeof dialog.showModal === 'function') return;
+  dialog.showModal = function showModal(this: HTMLDialogElement): void {
+    this.setAttribute('open', '');
+  };
+  dialog.show = dialog.showModal;
+  dialog.close = function close(this: HTMLDialogElement): void {
+    this.removeAttribute('open');
+  };
+}

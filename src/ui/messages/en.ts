@@ -44,6 +44,8 @@ export const uiMessagesEn: UiMessages = {
   appBar: {
     brand: 'Chancewise',
     unsaved: 'Unsaved changes',
+    exampleNotSaved: 'Example (not saved)',
+    notSavedYet: 'Not saved yet',
     actions: 'Topic',
     topics: 'Topics',
     open: 'Open…',
@@ -80,7 +82,7 @@ export const uiMessagesEn: UiMessages = {
   },
   banners: {
     restoreLabel: 'Unsaved work',
-    restoreFrom: (savedAt) => `Unsaved work from ${savedAt}`,
+    restoreFrom: (savedAt) => `Unsaved work from ${savedAt.toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}`,
     restoreWhat: (title) => `${title.trim() === '' ? '(an untitled topic)' : `“${title}”`} was not saved to a file.`,
     restore: 'Restore it',
     discard: 'Discard it',

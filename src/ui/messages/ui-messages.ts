@@ -31,6 +31,9 @@ export interface AppFrameMessages {
 export interface AppBarMessages {
   readonly brand: string;
   readonly unsaved: string;
+  /** In place of the file's name: the example shown at start, or a topic not saved to a file. */
+  readonly exampleNotSaved: string;
+  readonly notSavedYet: string;
   readonly actions: string;
   readonly topics: string;
   readonly open: string;
@@ -76,8 +79,8 @@ export interface StartMessages {
 /** The banners above the editor: unsaved work to restore, an illustrative example. */
 export interface BannerMessages {
   readonly restoreLabel: string;
-  /** "Unsaved work from 2 Dec 2026, 19:07" (the date already written). */
-  readonly restoreFrom: (savedAt: string) => string;
+  /** "Unsaved work from 2 Dec 2026, 19:07": the date and time written as the interface's language writes them. */
+  readonly restoreFrom: (savedAt: Date) => string;
   /** '“Title” was not saved to a file.' or for an empty title "(an untitled topic) …". */
   readonly restoreWhat: (title: string) => string;
   readonly restore: string;
