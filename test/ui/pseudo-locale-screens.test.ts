@@ -9,7 +9,7 @@ import MessageToast from '../../src/ui/components/MessageToast.svelte';
 import ResultsStatusBar from '../../src/ui/components/ResultsStatusBar.svelte';
 import SaveDialog from '../../src/ui/components/SaveDialog.svelte';
 import StartPanel from '../../src/ui/components/StartPanel.svelte';
-import { setTopicText } from '../../src/ui/draft/draft-edits.ts';
+import { setEffectField, setTopicText } from '../../src/ui/draft/draft-edits.ts';
 import { AppSession } from '../../src/ui/state/app-session.svelte.ts';
 import { DEMO_TOPICS } from '../../src/ui/state/demo-topics.ts';
 import { MemoryStorage } from '../../src/ui/state/key-value-storage.ts';
@@ -108,6 +108,17 @@ describe('the pseudo locale in the message at the foot of the window', () => {
     await settle();
     flushSync();
     expect(screen.getByRole('alert')).toBeTruthy();
+    expect(leaks(document.body, typedOf(app))).toEqual([]);
+  });
+
+  test('leaves no word outside the catalogues when a topic cannot be saved while a number cannot be read', () => {
+    const { app } = session('browser');
+    render(MessageToast, { context: context(), props: { app, headerBottom: 60 } });
+    app.topic.editor.change((draft) => setEffectField(draft, 'night', 'water', 'estimate', '1..2'));
+    app.saving.request();
+    flushSync();
+    expect(app.saving.dialogOpen).toBe(false);
+    expect(screen.getByRole('alert').textContent).toContain(notices.numbersUnreadable(1));
     expect(leaks(document.body, typedOf(app))).toEqual([]);
   });
 });

@@ -4,6 +4,8 @@
  * unless asked.
  */
 import { describeProblem } from '../../core/messages/describe.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
+import { noticeMessagesEn } from '../messages/notices-en.ts';
 import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { topicFromDraft } from '../draft/topic-from-draft.ts';
@@ -26,16 +28,17 @@ export function openTopicText(fileName: string, text: string): OpenedTopic {
 
 export type SavedTopic = { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
 
-/** A draft as topic file text; patient details only when `includePatient` is set. */
-export function topicFileText(draft: TopicDraft, includePatient: boolean): SavedTopic {
+/**
+ * A draft as topic file text; patient details only when `includePatient` is set. The refusal
+ * is in `words`, the interface's (English when absent).
+ */
+export function topicFileText(
+  draft: TopicDraft,
+  includePatient: boolean,
+  words: Pick<NoticeMessages, 'numbersUnreadable'> = noticeMessagesEn,
+): SavedTopic {
   const reading = topicFromDraft(draft);
-  if (reading.problems.length > 0) {
-    const count = reading.problems.length;
-    return {
-      ok: false,
-      message: `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile Chancewise keeps your work on this computer.`,
-    };
-  }
+  if (reading.problems.length > 0) return { ok: false, message: words.numbersUnreadable(reading.problems.length) };
   return { ok: true, text: writeTopicFile(reading.topic, { includePatient }) };
 }
 

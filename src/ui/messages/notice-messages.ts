@@ -21,6 +21,8 @@ export interface NoticeMessages {
   readonly openFailed: (reason: string) => string;
   readonly topicSaved: (fileName: string, withPatient: boolean, inBrowser: boolean) => string;
   readonly topicNotSaved: (reason: string) => string;
+  /** A topic is not written to a file while some of its numbers cannot be read (how many). */
+  readonly numbersUnreadable: (count: number) => string;
   readonly chartSaved: (fileName: string, inBrowser: boolean) => string;
   readonly chartNotSaved: (reason: string) => string;
   readonly handoutNeedsResults: string;

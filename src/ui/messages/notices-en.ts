@@ -22,6 +22,8 @@ export const noticeMessagesEn: NoticeMessages = {
   topicSaved: (fileName, withPatient, inBrowser) =>
     `Saved “${fileName}”${withPatient ? ', with the patient’s details' : ''}.${downloads(inBrowser)}`,
   topicNotSaved: (reason) => `The topic was not saved: ${reason} Your work is still here.`,
+  numbersUnreadable: (count) =>
+    `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile Chancewise keeps your work on this computer.`,
   chartSaved: (fileName, inBrowser) => `The chart is saved as “${fileName}”.${downloads(inBrowser)}`,
   chartNotSaved: (reason) => `The chart could not be saved: ${reason}.`,
   handoutNeedsResults: 'Fix the marked fields first: the handout is only made from up-to-date results.',
