@@ -4,7 +4,9 @@
  * that would break one (a fifth option, removing the last outcome) returns the draft
  * unchanged.
  */
+import { wordingMessages } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
+import type { PatientLanguage } from '../../core/topic/topic-language.ts';
 import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES, TOPIC_LIMITS } from '../../core/topic/topic.ts';
 import type { TopicDisclosures, TopicHandoutChoices } from '../../core/topic/topic.ts';
 import { EMPTY_SCREENING, blankEffect } from './topic-draft.ts';
@@ -240,10 +242,21 @@ export function removeQuestion(draft: TopicDraft, place: number): TopicDraft {
   return { ...draft, questions: draft.questions.filter((_, index) => index !== place) };
 }
 
-/** A new, empty topic: a comparison, one option and one benefit, over 10 years. */
-export function blankDraft(): TopicDraft {
+/** How a new topic starts: the patient language it is written in, and its comparison's name in that language. */
+export interface BlankTopic {
+  readonly language: PatientLanguage;
+  readonly comparisonName: string;
+}
+
+/**
+ * A new, empty topic: a comparison, one option and one benefit, over 10 years, in English unless
+ * another language is given.
+ *
+ * @example blankDraft({ language: 'es', comparisonName: 'sin tratamiento' }).options[0]?.name // => 'sin tratamiento'
+ */
+export function blankDraft(start: BlankTopic = { language: 'en', comparisonName: wordingMessages.newComparison }): TopicDraft {
   const options: OptionDraft[] = [
-    { id: 'comparison', name: 'no treatment', isComparison: true },
+    { id: 'comparison', name: start.comparisonName, isComparison: true },
     { id: 'option-1', name: '', isComparison: false },
   ];
   return {
@@ -276,7 +289,7 @@ export function blankDraft(): TopicDraft {
     handout: DEFAULT_HANDOUT_CHOICES,
     about: EMPTY_DISCLOSURES,
     screening: EMPTY_SCREENING,
-    language: 'en',
+    language: start.language,
     translation: null,
   };
 }

@@ -70,6 +70,7 @@ export const uiMessagesEn: UiMessages = {
     close: 'Close',
     yourTopics: 'Your topics',
     newTopic: 'New topic',
+    newTopicLanguage: 'Written for a patient who reads',
     openFile: 'Open a topic file…',
     recent: 'Recent files',
     noRecent: 'Files you open or save appear here.',

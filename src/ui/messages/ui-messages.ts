@@ -63,6 +63,8 @@ export interface StartMessages {
   readonly close: string;
   readonly yourTopics: string;
   readonly newTopic: string;
+  /** The choice beside "New topic" of the language its patient wording is written in. */
+  readonly newTopicLanguage: string;
   readonly openFile: string;
   readonly recent: string;
   readonly noRecent: string;

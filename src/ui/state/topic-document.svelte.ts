@@ -7,6 +7,7 @@
  */
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { blankDraft } from '../draft/draft-edits.ts';
+import type { BlankTopic } from '../draft/draft-edits.ts';
 import { parseDraft } from '../draft/draft-schema.ts';
 import { translatedCopy } from '../draft/translated-copy.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
@@ -175,8 +176,9 @@ export class TopicDocument {
     this.#platform.topicReplaced();
   }
 
-  newTopic(): void {
-    this.#load(blankDraft(), null, this.#words.started, 'decision');
+  /** Start an empty topic, in English unless another patient language (and its comparison's name) is given. */
+  newTopic(start?: BlankTopic): void {
+    this.#load(blankDraft(start), null, this.#words.started, 'decision');
     this.#platform.topicReplaced();
   }
 

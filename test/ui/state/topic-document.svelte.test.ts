@@ -152,6 +152,21 @@ describe('TopicDocument', () => {
     expect(platform.replaced).toBe(2);
   });
 
+  it('starts a new topic in the patient language chosen, its comparison named in that language', () => {
+    const { topic, messages } = setUp();
+    topic.newTopic({ language: 'es', comparisonName: 'sin tratamiento' });
+    expect(topic.editor.draft.language).toBe('es');
+    expect(topic.editor.draft.options.map((option) => [option.name, option.isComparison])).toEqual([
+      ['sin tratamiento', true],
+      ['', false],
+    ]);
+    // The clinician's messages stay in the interface's language.
+    expect(messages.message?.text).toBe('Started a new topic.');
+    topic.newTopic();
+    expect(topic.editor.draft.language).toBe('en');
+    expect(topic.editor.draft.options[0]?.name).toBe('no treatment');
+  });
+
   it('asks for focus on the decision’s box of a new topic, and on the topic’s heading of an opened one', async () => {
     const { topic, platform } = setUp();
     expect(topic.focusRequest).toBeNull();
