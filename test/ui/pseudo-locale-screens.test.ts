@@ -169,15 +169,16 @@ describe('the pseudo locale in the results’ status bar', () => {
 });
 
 describe('the pseudo locale on the Topics panel', () => {
-  for (const [recent, reopensByName] of [
-    [[], true],
-    [['knee-pain.cwtopic', 'statins.cwtopic'], false],
+  for (const [recent, reopensByName, language] of [
+    [[], true, 'en'],
+    [['knee-pain.cwtopic', 'statins.cwtopic'], false, 'es'],
   ] as const) {
-    test(`leaves no word outside the catalogues with ${recent.length} recent files`, () => {
+    test(`leaves no word outside the catalogues with ${recent.length} recent files, a new topic offered in ${language}`, () => {
       render(StartPanel, {
         context: context(),
-        props: { demos: DEMO_TOPICS, recent, reopensByName, onnew: noop, onopen: noop, ondemo: noop, onclose: noop },
+        props: { demos: DEMO_TOPICS, recent, reopensByName, language, onnew: noop, onopen: noop, ondemo: noop, onclose: noop },
       });
+      expect(document.querySelectorAll('#new-topic-language option')).toHaveLength(2);
       expect(
         leaks(
           document.body,
