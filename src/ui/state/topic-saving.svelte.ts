@@ -42,7 +42,7 @@ export class TopicSaving {
 
   /** Save: ask for a name (browser) or about the patient's details (when given), then write. */
   request(mode: SaveMode = 'save'): void {
-    const text = topicFileText(this.#document.editor.draft, false);
+    const text = topicFileText(this.#document.editor.draft, false, this.#words);
     if (!text.ok) {
       this.#messages.show({ tone: 'error', text: text.message });
       return;
@@ -60,7 +60,7 @@ export class TopicSaving {
   async save(fileName: string, includePatient: boolean): Promise<void> {
     this.dialogOpen = false;
     const { editor } = this.#document;
-    const text = topicFileText(editor.draft, includePatient);
+    const text = topicFileText(editor.draft, includePatient, this.#words);
     if (!text.ok) {
       this.#messages.show({ tone: 'error', text: text.message });
       return;
