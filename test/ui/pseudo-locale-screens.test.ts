@@ -50,6 +50,7 @@ function session(kind: 'browser' | 'desktop' = 'desktop') {
     later: noop,
     editor: { schedule: () => noop },
     words: notices,
+    core: pseudoLocales.interface.core,
   });
   return { app, platform };
 }
@@ -107,7 +108,8 @@ describe('the pseudo locale in the message at the foot of the window', () => {
     await app.topic.openFile();
     await settle();
     flushSync();
-    expect(screen.getByRole('alert')).toBeTruthy();
+    // The core's problem, in the interface's words, inside the file's sentence, inside the message.
+    expect(screen.getByRole('alert').textContent?.match(/⟦/g)?.length).toBeGreaterThanOrEqual(3);
     expect(leaks(document.body, typedOf(app))).toEqual([]);
   });
 

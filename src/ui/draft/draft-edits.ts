@@ -237,9 +237,34 @@ export function setQuestion(draft: TopicDraft, place: number, text: string): Top
   return { ...draft, questions: draft.questions.map((question, index) => (index === place ? text : question)) };
 }
 
-/** Remove one question. */
+/**
+ * Remove one question. A copy in another language keeps each question's text as copied by its
+ * place, so the questions after it take their sources along as they move up one place.
+ */
 export function removeQuestion(draft: TopicDraft, place: number): TopicDraft {
-  return { ...draft, questions: draft.questions.filter((_, index) => index !== place) };
+  const questions = draft.questions.filter((_, index) => index !== place);
+  const { translation } = draft;
+  if (translation === null) return { ...draft, questions };
+  const sourceTexts: Record<string, string> = {};
+  for (const [key, text] of Object.entries(translation.sourceTexts)) {
+    const question = /^questions\.(\d+)$/.exec(key);
+    const at = question === null ? null : Number(question[1]);
+    if (at === null) sourceTexts[key] = text;
+    else if (at < place) sourceTexts[key] = text;
+    else if (at > place) sourceTexts[`questions.${at - 1}`] = text;
+  }
+  return { ...draft, questions, translation: { ...translation, sourceTexts } };
+}
+
+/**
+ * Take a text of a copy in another language as written in it, though it reads as it was copied
+ * (a medicine's or a test's name that is the same in both): it leaves the texts still to translate.
+ */
+export function keepAsTranslated(draft: TopicDraft, key: string): TopicDraft {
+  const { translation } = draft;
+  if (translation === null || !(key in translation.sourceTexts)) return draft;
+  const sourceTexts = Object.fromEntries(Object.entries(translation.sourceTexts).filter(([found]) => found !== key));
+  return { ...draft, translation: { ...translation, sourceTexts } };
 }
 
 /** How a new topic starts: the patient language it is written in, and its comparison's name in that language. */

@@ -414,7 +414,11 @@ export const uiMessagesEn: UiMessages = {
     },
     languageNames: LANGUAGE_NAMES,
     stillIn: (what, text, from, to) => `${what} “${text}” is still in ${from}: write it in ${to}.`,
-    note: (from) => `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout.`,
+    note: (from) =>
+      `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout. ` +
+      'A text that reads the same in both (a medicine’s name) can be kept as it is.',
+    keep: 'Keep as it is',
+    keepLabel: (text, to) => `Keep “${text}” as it is in ${to}`,
   },
   notices: noticeMessagesEn,
 };

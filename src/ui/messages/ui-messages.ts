@@ -457,6 +457,10 @@ export interface TranslationGapMessages {
   readonly stillIn: (what: string, text: string, from: string, to: string) => string;
   /** Said once above the list while any text is still to translate. */
   readonly note: (from: string) => string;
+  /** The button beside a text that reads the same in the new language (a medicine's name): it leaves the list. */
+  readonly keep: string;
+  /** The same button's name for a screen reader: 'Keep “Ibuprofen” as it is in Spanish'. */
+  readonly keepLabel: (text: string, to: string) => string;
 }
 
 export interface UiMessages {

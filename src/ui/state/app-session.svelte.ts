@@ -3,6 +3,7 @@
  * the keyboard shortcuts and the desktop shell's menu commands routed to them. The root
  * component draws this and hands it key presses and commands.
  */
+import type { Catalogue } from '../../core/messages/describe.ts';
 import type { NoticeMessages } from '../messages/notice-messages.ts';
 import type { Platform, PlatformCommand } from '../platform/platform.ts';
 import { AppMessages } from './app-messages.svelte.ts';
@@ -27,6 +28,8 @@ export interface AppSessionOptions {
   readonly today?: TopicExportsOptions['today'];
   /** The words of the messages at the foot of the window, in the interface's language (English when absent). */
   readonly words?: NoticeMessages;
+  /** The core's problems in the interface's language (English when absent). */
+  readonly core?: Catalogue;
 }
 
 export class AppSession {
@@ -38,9 +41,16 @@ export class AppSession {
   teaching = $state(false);
 
   constructor(options: AppSessionOptions) {
-    const { platform, words } = options;
-    this.messages = new AppMessages(options.later);
-    this.topic = new TopicDocument({ platform, demos: options.demos, messages: this.messages, editor: options.editor, words });
+    const { platform, words, core } = options;
+    this.messages = new AppMessages(options.later, words?.platform);
+    this.topic = new TopicDocument({
+      platform,
+      demos: options.demos,
+      messages: this.messages,
+      editor: options.editor,
+      words,
+      core,
+    });
     this.saving = new TopicSaving(this.topic, platform, this.messages, words);
     this.exports = new TopicExports({
       editor: this.topic.editor,

@@ -11,6 +11,8 @@ import type { BlankTopic } from '../draft/draft-edits.ts';
 import { parseDraft } from '../draft/draft-schema.ts';
 import { translatedCopy } from '../draft/translated-copy.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+import type { Catalogue } from '../../core/messages/describe.ts';
+import { english } from '../../core/messages/en/index.ts';
 import { openTopicText } from '../files/topic-files.ts';
 import type { OpenedFile, Platform, PlatformDocument } from '../platform/platform.ts';
 import type { NoticeMessages } from '../messages/notice-messages.ts';
@@ -33,6 +35,8 @@ export interface TopicDocumentOptions {
   readonly messages: AppMessages;
   /** The messages' words, in the interface's language; English when absent. */
   readonly words?: NoticeMessages;
+  /** The core's problems in the interface's language (why a file cannot be read); English when absent. */
+  readonly core?: Catalogue;
   /** The editor's clock and scheduler (tests); the autosave is the document's own. */
   readonly editor?: Omit<EditorSettings, 'autosave' | 'onAutosave' | 'fileName'>;
 }
@@ -65,6 +69,7 @@ export class TopicDocument {
   readonly #platform: Platform;
   readonly #messages: AppMessages;
   readonly #words: NoticeMessages;
+  readonly #core: Catalogue;
   readonly #earlier: Autosave;
   readonly #recentFiles: RecentFiles;
 
@@ -73,6 +78,7 @@ export class TopicDocument {
     this.#platform = platform;
     this.#messages = options.messages;
     this.#words = options.words ?? noticeMessagesEn;
+    this.#core = options.core ?? english;
     const autosave = new Autosave(platform.storage);
     this.#earlier = new Autosave(platform.storage, EARLIER_AUTOSAVE_KEY);
     this.#recentFiles = new RecentFiles(platform.storage);
@@ -149,7 +155,7 @@ export class TopicDocument {
 
   /** Open an opened file's text; `replacing` names the recent file the person chose, when another came. */
   openText(picked: OpenedFile, replacing: string | null): void {
-    const opened = openTopicText(picked.name, picked.text);
+    const opened = openTopicText(picked.name, picked.text, { notices: this.#words, core: this.#core });
     if (!opened.ok) {
       this.#messages.show({ tone: 'error', text: this.#words.openFailed(opened.message) });
       return;

@@ -10,6 +10,9 @@ import { DEMO_TOPICS } from '../../../src/ui/state/demo-topics.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { RecentFiles } from '../../../src/ui/state/recent-files.ts';
 import { EARLIER_AUTOSAVE_KEY, TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
+import { english } from '../../../src/core/messages/en/index.ts';
+import { noticeMessagesEn } from '../../../src/ui/messages/notices-en.ts';
+import { stripPseudo, pseudoLocale } from '../../support/pseudo-locale.ts';
 import { fakePlatform } from './fake-platform.ts';
 
 // The messages are the app's own words. Each opened document has its own undo history, and
@@ -122,6 +125,37 @@ describe('TopicDocument', () => {
       'Opened “version-1-blood-pressure.json” (you chose it in place of “old.cwtopic”). It was written by an older version and has been updated; saving writes the new format.',
     );
     expect(topic.offer).toBeNull();
+  });
+
+  it('says what happened to a file in the words it is given, the core’s problem among them', async () => {
+    const platform = fakePlatform('browser', new MemoryStorage());
+    const messages = new AppMessages(() => undefined);
+    const words = pseudoLocale(noticeMessagesEn);
+    const core = pseudoLocale(english);
+    const topic = new TopicDocument({
+      platform,
+      demos: DEMO_TOPICS,
+      messages,
+      words,
+      core,
+      editor: { schedule: () => () => undefined },
+    });
+    // Every sentence is wrapped whole (nothing is left once the wrapped words are taken out),
+    // and a file that does not read carries the core's problem, itself wrapped, inside.
+    const left = () => stripPseudo(messages.message?.text ?? '').trim();
+    platform.picked = { name: 'picked.cwtopic', text: '  ' };
+    await topic.openFile();
+    expect(messages.message?.tone).toBe('error');
+    expect(left()).toBe('');
+    for (const text of ['{"kind": "photo"}', '{"format": "chancewise-topic", "version": 99}']) {
+      platform.picked = { name: 'picked.cwtopic', text };
+      await topic.openFile();
+      expect(messages.message?.text).toMatch(/^⟦+“picked\.cwtopic” could not be opened\. ⟦.+⟧.*⟧/);
+      expect(left()).toBe('');
+    }
+    topic.newTopic();
+    expect(messages.message?.text).toContain('⟦');
+    expect(left()).toBe('');
   });
 
   it('leaves the topic alone when a file cannot be read or opened, and says why', async () => {
