@@ -26,6 +26,69 @@ export const pseudoLocales: Locales = {
   },
 };
 
+/**
+ * The values code hands to the words that are codes, not words: the words turn them into words
+ * (a time unit, a direction, a frequency band, a role in a chart, a language tag, a scale). A
+ * citation is kept as published, in any language (the readability scales' sources).
+ */
+const HANDED_CODES = new Set([
+  ...['days', 'weeks', 'months', 'years'],
+  ...['fewer', 'more', 'same', 'reduce', 'increase', 'reduction', 'trivial'],
+  ...['very-common', 'common', 'uncommon', 'rare', 'very-rare', 'not-known'],
+  ...['comparison', 'option', 'benefit', 'harm', 'en', 'es'],
+  ...['flesch-kincaid-grade', 'inflesz', 'Kincaid et al. 1975', 'Barrio-Cantalejo et al. 2008'],
+]);
+
+/** Words that note each string handed to them (as an argument, or a field of an argument) before answering. */
+function noting<Words>(words: Words, note: (text: string) => void): Words {
+  const walk = (value: unknown): unknown => {
+    if (typeof value === 'function') {
+      const original = value as (...args: unknown[]) => unknown;
+      return (...args: unknown[]) => {
+        for (const argument of args) {
+          if (typeof argument === 'string') note(argument);
+          else if (argument !== null && typeof argument === 'object' && !Array.isArray(argument) && !(argument instanceof Date))
+            for (const inner of Object.values(argument)) if (typeof inner === 'string') note(inner);
+        }
+        return original(...args);
+      };
+    }
+    if (Array.isArray(value)) return value.map(walk);
+    if (value !== null && typeof value === 'object')
+      return Object.fromEntries(Object.entries(value).map(([key, inner]) => [key, walk(inner)]));
+    return value;
+  };
+  return walk(words) as Words;
+}
+
+/**
+ * The pseudo locales, noting what the code hands to the words. A wrapped sentence hides any
+ * English handed into it ("⟦Saved ⟦…⟧ in 5 years⟧" would hide "5 years"), so `handedLeaks`
+ * lists each string handed over that is neither typed text, nor a number, nor a code.
+ */
+export function notingPseudoLocales(): {
+  readonly locales: Locales;
+  readonly handedLeaks: (typed: readonly string[]) => string[];
+} {
+  const handed = new Set<string>();
+  const note = (text: string): void => void handed.add(text);
+  const locales: Locales = {
+    interface: {
+      ui: pseudoLocale(noting(englishLocales.interface.ui, note)),
+      core: pseudoLocale(noting(englishLocales.interface.core, note)),
+      shell: englishLocales.interface.shell,
+    },
+    patient: {
+      language: englishLocales.patient.language,
+      wording: pseudoLocale(noting(englishLocales.patient.wording, note)),
+      chart: pseudoLocale(noting(englishLocales.patient.chart, note)),
+    },
+  };
+  const handedLeaks = (typed: readonly string[]): string[] =>
+    [...handed].filter((text) => !HANDED_CODES.has(text) && leftover(text, typed) !== '');
+  return { locales, handedLeaks };
+}
+
 /** The teaching view's clinician words, wrapped. */
 export const pseudoTeachingClinician: TeachingClinicianMessages = pseudoLocale(teachingClinicianMessagesEn);
 

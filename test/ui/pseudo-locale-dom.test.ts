@@ -7,7 +7,7 @@ import { draftFromTopic } from '../../src/ui/draft/draft-from-topic.ts';
 import { DEMO_TOPICS } from '../../src/ui/state/demo-topics.ts';
 import { localeContext } from '../../src/ui/state/locale-context.ts';
 import { TopicEditor } from '../../src/ui/state/topic-editor.svelte.ts';
-import { fakeLayout, leaks, pseudoLocales, typedStrings } from '../support/pseudo-dom.ts';
+import { fakeLayout, leaks, notingPseudoLocales, typedStrings } from '../support/pseudo-dom.ts';
 
 // Every word of the clinician's screens comes from the locale bundle: with every catalogue
 // word bracketed as ⟦…⟧ (a pseudo locale, common practice in software localisation), nothing
@@ -24,14 +24,18 @@ const noop = () => undefined;
 describe('the pseudo locale on the clinician’s screens', () => {
   for (const demo of DEMO_TOPICS.filter((candidate) => (candidate.topic.language ?? 'en') === 'en')) {
     test(`leaves no word outside the catalogues in the editor and the results of ${demo.fileName}`, () => {
-      const context = localeContext({ current: pseudoLocales });
+      const { locales, handedLeaks } = notingPseudoLocales();
+      const context = localeContext({ current: locales });
       const editor = new TopicEditor(draftFromTopic(demo.topic));
       render(EditorPanel, { context, props: { editor } });
       render(ResultsPanel, {
         context,
         props: { editor, onexport: noop, onhandout: noop, onprint: noop, handoutBusy: false, handoutWarnings: [] },
       });
-      expect(leaks(document.body, typedStrings(demo.topic))).toEqual([]);
+      const typed = typedStrings(demo.topic);
+      expect(leaks(document.body, typed)).toEqual([]);
+      // Nor handed into a wrapped sentence, where the wrap would hide it.
+      expect(handedLeaks(typed)).toEqual([]);
     });
   }
 });
