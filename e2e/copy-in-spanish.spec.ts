@@ -50,6 +50,17 @@ test.describe('a copy in Spanish', () => {
     await expect(gaps.locator('h3')).toHaveText('Still to fill in for the handout (15)');
     await expect(gaps.getByRole('link', { name: /^Option name “a citrate drink twice a day”/ })).toBeVisible();
 
+    // A text that reads the same in Spanish (here, as if it did) is kept as it is and leaves the list;
+    // focus moves to the next entry's button.
+    await gaps.getByRole('button', { name: 'Keep “a citrate drink twice a day” as it is in Spanish' }).click();
+    await expect(gaps.getByRole('link', { name: /^Option name “a citrate drink twice a day”/ })).toHaveCount(0);
+    await expect(gaps.locator('h3')).toHaveText('Still to fill in for the handout (14)');
+    await expect(gaps.locator('button.keep:focus')).toHaveAccessibleName(/^Keep “.*” as it is in Spanish$/);
+    await gaps.screenshot({ path: `${SCREENS}/36-keep-as-it-is.png` });
+    // Undo brings it back to the list.
+    await page.keyboard.press('Control+z');
+    await expect(gaps.locator('h3')).toHaveText('Still to fill in for the handout (15)');
+
     expect(watch.pageErrors).toEqual([]);
   });
 });

@@ -82,6 +82,7 @@ function handoutOf(parsed: ParsedArgs, words: CliWords): (topic: Topic) => MadeH
         showNnt: choices.showNnt,
         clinician,
         words: handoutWordsFor(topicLanguage(topic)),
+        refusal: words.handoutRefusal,
       },
       fonts,
     );

@@ -18,6 +18,8 @@ import { type HandoutContent, handoutContent } from './handout-content.ts';
 import { type HandoutFonts, codePointsOf, registerFonts } from './handout-fonts.ts';
 import { type HandoutWords, englishHandoutWords, readingLanguageOf } from './handout-words.ts';
 import type { HandoutPart } from './messages/handout-messages.ts';
+import { handoutRefusalMessagesEn } from './messages/refusal-messages.ts';
+import type { HandoutRefusalMessages } from './messages/refusal-messages.ts';
 import { type PageLayout, type PageMode, layoutPage } from './page-layout.ts';
 import { type Paper, contentBox } from './paper-size.ts';
 import { fileIdentifier, pdfDate } from './pdf-identity.ts';
@@ -41,6 +43,8 @@ export interface HandoutOptions {
    * English when absent.
    */
   readonly words?: HandoutWords;
+  /** The clinician's words for a refusal (the interface's language, not the sheet's). English when absent. */
+  readonly refusal?: HandoutRefusalMessages;
 }
 
 /** A handout that was built. */
@@ -85,7 +89,7 @@ export interface HandoutRefused {
   readonly part: HandoutPart;
   /** How far over the page the most compact layout still was, in millimetres (0 when a word is too wide for its column). */
   readonly overMillimetres: number;
-  /** One line for the clinician, from the catalogue. */
+  /** One line for the clinician, in the interface's words (`refusal`). */
   readonly message: string;
 }
 
@@ -188,7 +192,13 @@ export function buildHandout(result: TopicResult, topic: Topic, options: Handout
   if (!fitted.layout.fits) {
     const part = fitted.layout.tooLong ?? 'outcomes';
     const over = Math.max(0, fitted.layout.needed - box.height);
-    return { ok: false, reason: 'does-not-fit', part, overMillimetres: over, message: messages.doesNotFit(part, over) };
+    return {
+      ok: false,
+      reason: 'does-not-fit',
+      part,
+      overMillimetres: over,
+      message: (options.refusal ?? handoutRefusalMessagesEn).doesNotFit(part, over),
+    };
   }
   const { layout, settings } = fitted;
 

@@ -142,7 +142,11 @@ function baselineSlide(source: SlideSource): Slide {
       value: words.countIn(comparison.groups.event, denominator),
       text: words.have(comparison.groups.event, outcome.name, periodOf(result)),
     },
-    { look: 'free', value: words.countIn(comparison.groups.free, denominator), text: words.doNot(comparison.groups.free) },
+    {
+      look: 'free',
+      value: words.countIn(comparison.groups.free, denominator),
+      text: words.doNot(comparison.groups.free, outcome.name),
+    },
   ];
   const population = result.population.trim().replace(/[.!?]$/, '');
   const lines = population === '' ? [] : [line(words.peopleLikeYou(denominator, population), 'note')];
@@ -194,7 +198,11 @@ function changedPeopleSlide(kind: 'helped' | 'harmed', source: SlideSource, arms
             value: words.countIn(changed, denominator),
             text: words.changedBecause(group, outcome.wanted, changed, outcome.name, option.name),
           },
-          { look: 'event', value: words.countIn(option.groups.event, denominator), text: words.anyway(option.groups.event) },
+          {
+            look: 'event',
+            value: words.countIn(option.groups.event, denominator),
+            text: words.anyway(option.groups.event, outcome.name),
+          },
         ]
       : [];
   const lines: SlideLine[] = [];

@@ -6,13 +6,15 @@
  * labels NNTB and NNTH (Altman 1998, BMJ 317:1309), file paths, flags and symbols. JSON output
  * is data and is not checked here.
  */
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main.ts';
 import { cliWordsEn } from '../../src/cli/messages/en.ts';
 import { demoFiles } from '../../src/cli/topic-input.ts';
+import { TOPIC_LIMITS } from '../../src/core/topic/topic.ts';
+import { shapedTopic, wordsOfLength } from '../handout/topic-builder.ts';
 import { pseudoLocale, stripPseudo } from '../support/pseudo-locale.ts';
 
 const folder = mkdtempSync(join(tmpdir(), 'chancewise-pseudo-cli-'));
@@ -27,14 +29,38 @@ const stringsIn = (value: unknown): string[] => {
   return [];
 };
 
-/** The typed texts of the demo topic (`--demo` is the first demo file), longest first. */
+/** A topic too long for one page: its handout is refused, with the clinician told what to shorten. */
+const longPath = join(folder, 'long.json');
+const longTopic = shapedTopic({
+  options: TOPIC_LIMITS.maxOptions,
+  outcomes: TOPIC_LIMITS.maxOutcomes,
+  optionName: (index) => wordsOfLength(TOPIC_LIMITS.optionNameLength, 'treatment', String(index)),
+  outcomeName: (index) => wordsOfLength(TOPIC_LIMITS.outcomeNameLength, 'complication', String(index)),
+  questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) =>
+    wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index)),
+  ),
+});
+writeFileSync(longPath, JSON.stringify({ format: 'chancewise-topic', version: 2, topic: { ...longTopic, patient: null } }));
+
+/** The typed texts of the demo topic (`--demo` is the first demo file) and the long one, longest first. */
 const demoPath = demoFiles()[0] ?? '';
-const typedTexts = stringsIn(JSON.parse(readFileSync(demoPath, 'utf8')))
+const typedTexts = [...stringsIn(JSON.parse(readFileSync(demoPath, 'utf8'))), ...stringsIn(longTopic)]
   .filter((text) => text.trim() !== '')
   .sort((a, b) => b.length - a.length);
 
 /** The values code hands to wrapped words that are codes the words turn into words, not words themselves. */
-const CODES = new Set(['benefit', 'harm', 'fewer', 'more']);
+const CODES = new Set([
+  'benefit',
+  'harm',
+  'fewer',
+  'more',
+  'header',
+  'options',
+  'outcomes',
+  'evidence',
+  'screening',
+  'questions',
+]);
 
 /** What is left of an output once the pseudo text and everything allowed unwrapped is removed. */
 function leftover(text: string): string[] {
@@ -102,7 +128,13 @@ async function runPseudo(args: readonly string[]): Promise<PseudoRun> {
   return { code, stdout, stderr, argumentsLeft };
 }
 
-const CASES: readonly { readonly name: string; readonly args: readonly string[]; readonly code: number }[] = [
+const CASES: readonly {
+  readonly name: string;
+  readonly args: readonly string[];
+  readonly code: number;
+  /** Part of what it must print (inside the brackets) when the case is about one message. */
+  readonly says?: string;
+}[] = [
   {
     name: 'compute with effect flags',
     args: ['compute', '--baseline', '15%', '--hr', '0.8', '--ci', '0.6,1.1', '--over', '10', '--to', '5'],
@@ -117,6 +149,12 @@ const CASES: readonly { readonly name: string; readonly args: readonly string[];
   { name: 'compute --counts', args: ['compute', '--counts', '12/100,20/100'], code: 0 },
   { name: 'chart --demo --out', args: ['chart', '--demo', '--out', chartPath], code: 0 },
   { name: 'handout --demo --out', args: ['handout', '--demo', '--out', handoutPath, '--date', '2026-12-01'], code: 0 },
+  {
+    name: 'a handout that does not fit',
+    args: ['handout', longPath, '--out', join(folder, 'long.pdf')],
+    code: 2,
+    says: 'The handout does not fit on one page',
+  },
   { name: 'a usage error', args: ['compute', '--rr', '0.5'], code: 2 },
   { name: 'a problem the core words', args: ['compute', '--baseline', '150%', '--rr', '0.5'], code: 2 },
   { name: 'an unknown flag', args: ['chart', '--demo', '--colour', 'red'], code: 2 },
@@ -124,9 +162,10 @@ const CASES: readonly { readonly name: string; readonly args: readonly string[];
 ];
 
 describe('the command line in a pseudo locale', () => {
-  it.each(CASES)('$name prints no word of its own', async ({ args, code }) => {
+  it.each(CASES)('$name prints no word of its own', async ({ args, code, says }) => {
     const found = await runPseudo(args);
     expect(found.code).toBe(code);
+    if (says !== undefined) expect(`${found.stdout}${found.stderr}`).toContain(says);
     // Something was printed, and through the words: the check below cannot pass on silence.
     expect(`${found.stdout}${found.stderr}`).toContain('⟦');
     expect({ stdout: leftover(found.stdout), stderr: leftover(found.stderr), arguments: found.argumentsLeft }).toEqual({

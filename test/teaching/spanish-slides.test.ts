@@ -52,7 +52,7 @@ describe('the slides of a Spanish topic', () => {
     expect(baseline.heading).toBe('Sin la opción');
     expect(baseline.callouts.map((callout) => `${callout.value} ${callout.text}`)).toEqual([
       '15 de cada 100 tienen un infarto durante 5 años',
-      '85 de cada 100 no les pasa',
+      '85 de cada 100 no tienen un infarto',
     ]);
     expect(baseline.panels[0]?.title).toBe('No tomar nada');
     const helped = slideOf('helped');

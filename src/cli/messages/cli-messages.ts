@@ -8,6 +8,7 @@ import type { Catalogue } from '../../core/messages/describe.ts';
 import type { InfleszBand } from '../../core/wording/readability-es.ts';
 import type { PeriodValues } from '../../core/wording/wording-catalogue.ts';
 import type { Paper } from '../../handout/paper-size.ts';
+import type { HandoutRefusalMessages } from '../../handout/messages/refusal-messages.ts';
 
 /** Problems with how the command line was used: one line on stderr, exit status 2. */
 export interface CliUsageMessages {
@@ -146,4 +147,6 @@ export interface CliWords {
   readonly help: string;
   /** The core's sentences for problems and warnings, and the words of the NNT. */
   readonly catalogue: Catalogue;
+  /** Why a handout was not made (it does not fit on its page), in the clinician's words. */
+  readonly handoutRefusal: HandoutRefusalMessages;
 }

@@ -2,6 +2,7 @@
 import { english } from '../../core/messages/en/index.ts';
 import { duration } from '../../core/messages/en/wording.ts';
 import { formatCount, formatDecimal, formatPercentSignificant, formatSignificant } from '../../core/messages/format-number.ts';
+import { handoutRefusalMessagesEn } from '../../handout/messages/refusal-messages.ts';
 import type {
   CliFileReasons,
   CliNumberWords,
@@ -167,4 +168,13 @@ Exit status: 0 done, 2 input to fix (one line on stderr), 1 other failure (with 
 `;
 
 /** Everything the command line prints, in English, with the core's English catalogue. */
-export const cliWordsEn: CliWords = { usage, reasons, numbers, summary, reports, help, catalogue: english };
+export const cliWordsEn: CliWords = {
+  usage,
+  reasons,
+  numbers,
+  summary,
+  reports,
+  help,
+  catalogue: english,
+  handoutRefusal: handoutRefusalMessagesEn,
+};

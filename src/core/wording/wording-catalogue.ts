@@ -70,6 +70,8 @@ export interface NntValues {
 }
 
 export interface WordingMessages {
+  /** What a new topic's comparison is called until the clinician names it: "no treatment". */
+  readonly newComparison: string;
   /** The reference class for `count` people: "people like you", "person like you". */
   readonly group: (count: number) => string;
   /** Who the numbers are for, from the clinician's own description. */

@@ -7,7 +7,7 @@ import { formatCount, formatPercent } from '../../core/messages/format-number.ts
 import { capitalise } from '../../core/messages/en/english-grammar.ts';
 import { duration } from '../../core/messages/en/wording.ts';
 import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
-import type { AboutSheetMessages, HandoutMessages, HandoutPart, ScreeningMessages, SheetValues } from './handout-messages.ts';
+import type { AboutSheetMessages, HandoutMessages, ScreeningMessages, SheetValues } from './handout-messages.ts';
 
 const MONTHS = [
   'January',
@@ -53,15 +53,6 @@ const amountCell = (amount: Amount, denominator: number): string => {
     case 'all':
       return `all ${formatCount(denominator)}`;
   }
-};
-
-const shortenWhat: Readonly<Record<HandoutPart, string>> = {
-  header: 'the decision or the description of who the numbers are for',
-  options: 'the option names, or compare fewer options',
-  outcomes: 'the outcome names, or show fewer outcomes',
-  evidence: 'the evidence summary, the sources, or the entries about who prepared the topic',
-  screening: 'what a positive result leads to',
-  questions: 'the questions, or give fewer of them',
 };
 
 const NOT_STATED = 'not stated';
@@ -212,8 +203,6 @@ export const handoutMessagesEn: HandoutMessages = {
     if (found === null || month === undefined) return text.trim();
     return `${Number(found[3])} ${month} ${found[1]}`;
   },
-  doesNotFit: (part, overMillimetres) =>
-    `The handout does not fit on one page (about ${Math.max(1, Math.ceil(overMillimetres))} mm too long): shorten ${shortenWhat[part]}.`,
   duration,
   capitalise,
   about: aboutSheetMessagesEn,

@@ -10,7 +10,7 @@ import { capitaliseEs, joinListEs } from '../../core/messages/es/spanish-grammar
 import { durationEs } from '../../core/messages/es/time-words-es.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
 import type { Amount, FrequencyBand } from '../../core/wording/wording-catalogue.ts';
-import type { AboutSheetMessages, HandoutMessages, HandoutPart, ScreeningMessages, SheetValues } from './handout-messages.ts';
+import type { AboutSheetMessages, HandoutMessages, ScreeningMessages, SheetValues } from './handout-messages.ts';
 
 const MONTHS = [
   'enero',
@@ -68,15 +68,6 @@ const amountCell = (amount: Amount, denominator: number): string => {
 };
 
 /** What to shorten, as it ends the refusal sentence. */
-const shortenWhat: Readonly<Record<HandoutPart, string>> = {
-  header: 'la decisión o la descripción de a quién se refieren los números',
-  options: 'los nombres de las opciones, o compare menos opciones',
-  outcomes: 'los nombres de los resultados, o muestre menos resultados',
-  evidence: 'el resumen de la evidencia, las fuentes o los datos de quién preparó el tema',
-  screening: 'lo que conlleva un resultado positivo',
-  questions: 'las preguntas, o ponga menos preguntas',
-};
-
 const NOT_STATED = 'no consta';
 
 /** Text as typed, ending without its full stop (the sentence adds its own). */
@@ -226,10 +217,6 @@ export const handoutMessagesEs: HandoutMessages = {
     const month = found === null ? undefined : MONTHS[Number(found[2]) - 1];
     if (found === null || month === undefined) return text.trim();
     return `${Number(found[3])} de ${month} de ${found[1]}`;
-  },
-  doesNotFit: (part, overMillimetres) => {
-    const over = Math.max(1, Math.ceil(overMillimetres));
-    return `La hoja no cabe en una página (${over === 1 ? 'sobra' : 'sobran'} alrededor de ${over} mm): acorte ${shortenWhat[part]}.`;
   },
   duration: durationEs,
   capitalise: capitaliseEs,

@@ -1,6 +1,6 @@
 /**
  * The shape of the printed handout's wording (headings, captions, the caution, the footer,
- * the refusal sentence) and the values its sentences take. Types only: each language is a
+ * the page count) and the values its sentences take. Types only: each language is a
  * sibling module (`en.ts`, `es.ts`).
  */
 import type { TimeUnit } from '../../core/time-unit.ts';
@@ -100,8 +100,6 @@ export interface HandoutMessages {
   readonly footerSeparator: string;
   /** A date written YYYY-MM-DD in words; any other text is returned as typed. */
   readonly formatDate: (text: string) => string;
-  /** The one line telling the clinician what to shorten. */
-  readonly doesNotFit: (part: HandoutPart, overMillimetres: number) => string;
   /** A length of time in its unit, for the assumption lines: "10 years", "3 days". */
   readonly duration: (values: { readonly years: number; readonly unit: TimeUnit }) => string;
   /** A capital first letter, for option names used as column headings. */

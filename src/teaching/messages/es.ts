@@ -98,11 +98,12 @@ export const teachingPatientSlideMessagesEs: TeachingPatientSlideMessages = {
   callouts: {
     countIn: (people: number, denominator: number) => `${count(people)} de cada ${count(denominator)}`,
     have: (people: number, outcome: string, period: Period) => `${have(outcome, people)} ${outcome} ${over(period)}`,
-    doNot: (people: number) => pluralEs(people, 'no le pasa', 'no les pasa'),
+    /** "no tienen un infarto": Spanish names the outcome again, where English can say "do not". */
+    doNot: (people: number, outcome: string) => `no ${have(outcome, people)} ${outcome}`,
     haveWith: (people: number, outcome: string, option: string) => `${have(outcome, people)} ${outcome} con ${option}`,
     without: (comparison: string) => `sin la opción (${comparison})`,
     changedBecause,
-    anyway: (people: number) => `${pluralEs(people, 'le pasa', 'les pasa')} de todos modos`,
+    anyway: (people: number, outcome: string) => `${have(outcome, people)} ${outcome} de todos modos`,
     peopleLikeYou: (denominator: number, population: string) =>
       `Cada figura es una de ${count(denominator)} personas como usted: ${population}.`,
     outlined: 'Solo el contorno: personas a las que puede pasarles o no, según dónde esté el valor real dentro del margen.',

@@ -50,11 +50,12 @@ export interface TeachingPatientSlideMessages {
   readonly callouts: {
     readonly countIn: (count: number, denominator: number) => string;
     readonly have: (count: number, outcome: string, period: Period) => string;
-    readonly doNot: (count: number) => string;
+    /** Those free of the outcome, after the count: the outcome is given for languages that must name it again. */
+    readonly doNot: (count: number, outcome: string) => string;
     readonly haveWith: (count: number, outcome: string, option: string) => string;
     readonly without: (comparison: string) => string;
     readonly changedBecause: (group: ChangedGroup, wanted: boolean, count: number, outcome: string, option: string) => string;
-    readonly anyway: (count: number) => string;
+    readonly anyway: (count: number, outcome: string) => string;
     readonly peopleLikeYou: (denominator: number, population: string) => string;
     readonly outlined: string;
   };

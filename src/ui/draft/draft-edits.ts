@@ -4,7 +4,9 @@
  * that would break one (a fifth option, removing the last outcome) returns the draft
  * unchanged.
  */
+import { wordingMessages } from '../../core/messages/en/wording.ts';
 import type { TimeUnit } from '../../core/time-unit.ts';
+import type { PatientLanguage } from '../../core/topic/topic-language.ts';
 import { DEFAULT_HANDOUT_CHOICES, EMPTY_DISCLOSURES, TOPIC_LIMITS } from '../../core/topic/topic.ts';
 import type { TopicDisclosures, TopicHandoutChoices } from '../../core/topic/topic.ts';
 import { EMPTY_SCREENING, blankEffect } from './topic-draft.ts';
@@ -235,15 +237,51 @@ export function setQuestion(draft: TopicDraft, place: number, text: string): Top
   return { ...draft, questions: draft.questions.map((question, index) => (index === place ? text : question)) };
 }
 
-/** Remove one question. */
+/**
+ * Remove one question. A copy in another language keeps each question's text as copied by its
+ * place, so the questions after it take their sources along as they move up one place.
+ */
 export function removeQuestion(draft: TopicDraft, place: number): TopicDraft {
-  return { ...draft, questions: draft.questions.filter((_, index) => index !== place) };
+  const questions = draft.questions.filter((_, index) => index !== place);
+  const { translation } = draft;
+  if (translation === null) return { ...draft, questions };
+  const sourceTexts: Record<string, string> = {};
+  for (const [key, text] of Object.entries(translation.sourceTexts)) {
+    const question = /^questions\.(\d+)$/.exec(key);
+    const at = question === null ? null : Number(question[1]);
+    if (at === null) sourceTexts[key] = text;
+    else if (at < place) sourceTexts[key] = text;
+    else if (at > place) sourceTexts[`questions.${at - 1}`] = text;
+  }
+  return { ...draft, questions, translation: { ...translation, sourceTexts } };
 }
 
-/** A new, empty topic: a comparison, one option and one benefit, over 10 years. */
-export function blankDraft(): TopicDraft {
+/**
+ * Take a text of a copy in another language as written in it, though it reads as it was copied
+ * (a medicine's or a test's name that is the same in both): it leaves the texts still to translate.
+ */
+export function keepAsTranslated(draft: TopicDraft, key: string): TopicDraft {
+  const { translation } = draft;
+  if (translation === null || !(key in translation.sourceTexts)) return draft;
+  const sourceTexts = Object.fromEntries(Object.entries(translation.sourceTexts).filter(([found]) => found !== key));
+  return { ...draft, translation: { ...translation, sourceTexts } };
+}
+
+/** How a new topic starts: the patient language it is written in, and its comparison's name in that language. */
+export interface BlankTopic {
+  readonly language: PatientLanguage;
+  readonly comparisonName: string;
+}
+
+/**
+ * A new, empty topic: a comparison, one option and one benefit, over 10 years, in English unless
+ * another language is given.
+ *
+ * @example blankDraft({ language: 'es', comparisonName: 'sin tratamiento' }).options[0]?.name // => 'sin tratamiento'
+ */
+export function blankDraft(start: BlankTopic = { language: 'en', comparisonName: wordingMessages.newComparison }): TopicDraft {
   const options: OptionDraft[] = [
-    { id: 'comparison', name: 'no treatment', isComparison: true },
+    { id: 'comparison', name: start.comparisonName, isComparison: true },
     { id: 'option-1', name: '', isComparison: false },
   ];
   return {
@@ -276,7 +314,7 @@ export function blankDraft(): TopicDraft {
     handout: DEFAULT_HANDOUT_CHOICES,
     about: EMPTY_DISCLOSURES,
     screening: EMPTY_SCREENING,
-    language: 'en',
+    language: start.language,
     translation: null,
   };
 }

@@ -4,11 +4,23 @@
  * unless asked.
  */
 import { describeProblem } from '../../core/messages/describe.ts';
+import type { Catalogue } from '../../core/messages/describe.ts';
+import { english } from '../../core/messages/en/index.ts';
 import { readTopicFile, writeTopicFile } from '../../core/topic/topic-file.ts';
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { topicFromDraft } from '../draft/topic-from-draft.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
+import { noticeMessagesEn } from '../messages/notices-en.ts';
 import { plainFileStem } from './plain-file-stem.ts';
+
+/** The words a file's reading and writing say what went wrong in: the messages', and the core's problems. */
+export interface TopicFileWords {
+  readonly notices: NoticeMessages;
+  readonly core: Catalogue;
+}
+
+const englishFileWords: TopicFileWords = { notices: noticeMessagesEn, core: english };
 
 export const TOPIC_FILE_SUFFIX = '.cwtopic';
 
@@ -16,26 +28,21 @@ export type OpenedTopic =
   | { readonly ok: true; readonly draft: TopicDraft; readonly fileName: string; readonly migratedFrom: number | null }
   | { readonly ok: false; readonly message: string };
 
-/** Read an opened file's text into a draft, or say in one sentence why it cannot be opened. */
-export function openTopicText(fileName: string, text: string): OpenedTopic {
-  if (text.trim() === '') return { ok: false, message: `“${fileName}” is empty, so there is no topic to open.` };
+/** Read an opened file's text into a draft, or say in one sentence (in `words`, English when absent) why it cannot be opened. */
+export function openTopicText(fileName: string, text: string, words: TopicFileWords = englishFileWords): OpenedTopic {
+  if (text.trim() === '') return { ok: false, message: words.notices.fileEmpty(fileName) };
   const reading = readTopicFile(text);
-  if (!reading.ok) return { ok: false, message: `“${fileName}” could not be opened. ${describeProblem(reading.problem)}` };
+  if (!reading.ok)
+    return { ok: false, message: words.notices.fileUnreadable(fileName, describeProblem(reading.problem, words.core)) };
   return { ok: true, draft: draftFromTopic(reading.topic), fileName, migratedFrom: reading.migratedFrom };
 }
 
 export type SavedTopic = { readonly ok: true; readonly text: string } | { readonly ok: false; readonly message: string };
 
 /** A draft as topic file text; patient details only when `includePatient` is set. */
-export function topicFileText(draft: TopicDraft, includePatient: boolean): SavedTopic {
+export function topicFileText(draft: TopicDraft, includePatient: boolean, words: NoticeMessages = noticeMessagesEn): SavedTopic {
   const reading = topicFromDraft(draft);
-  if (reading.problems.length > 0) {
-    const count = reading.problems.length;
-    return {
-      ok: false,
-      message: `${count === 1 ? 'One number cannot' : `${count} numbers cannot`} be read yet. Fix ${count === 1 ? 'it' : 'them'} to save a file; meanwhile Chancewise keeps your work on this computer.`,
-    };
-  }
+  if (reading.problems.length > 0) return { ok: false, message: words.numbersUnreadable(reading.problems.length) };
   return { ok: true, text: writeTopicFile(reading.topic, { includePatient }) };
 }
 

@@ -5,6 +5,7 @@
  */
 import type { Topic } from '../../core/topic/topic.ts';
 import type { TopicResult } from '../../core/topic/topic-result.ts';
+import type { HandoutRefusalMessages } from '../../handout/messages/refusal-messages.ts';
 
 /** What the app asks the handout for: the very topic and result on screen, and the clinician's choices. */
 export interface HandoutRequest {
@@ -15,6 +16,8 @@ export interface HandoutRequest {
   readonly showNnt: boolean;
   /** The date printed on the sheet, YYYY-MM-DD. */
   readonly date: string;
+  /** Why a handout was not made, in the interface's words (not the sheet's). */
+  readonly refusal: HandoutRefusalMessages;
 }
 
 /**

@@ -46,6 +46,7 @@ export async function makeHandout(request: HandoutRequest): Promise<HandoutOutco
       showNnt: request.showNnt,
       // The sheet in the topic's own language (the handout chunk carries every language's words).
       words: handoutWordsFor(topicLanguage(request.topic)),
+      refusal: request.refusal,
     },
     await loadFonts(),
   );

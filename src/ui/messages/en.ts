@@ -3,6 +3,7 @@ import type { TimeUnit } from '../../core/time-unit.ts';
 import type { InfleszBand } from '../../core/wording/readability-es.ts';
 import type { ReadingLevel } from '../../core/wording/reading-scale.ts';
 import type { PatientLanguage } from '../../core/topic/topic-language.ts';
+import { noticeMessagesEn } from './notices-en.ts';
 import type { UiMessages } from './ui-messages.ts';
 
 const INFLESZ_BANDS: Readonly<Record<InfleszBand, string>> = {
@@ -43,6 +44,8 @@ export const uiMessagesEn: UiMessages = {
   appBar: {
     brand: 'Chancewise',
     unsaved: 'Unsaved changes',
+    exampleNotSaved: 'Example (not saved)',
+    notSavedYet: 'Not saved yet',
     actions: 'Topic',
     topics: 'Topics',
     open: 'Open…',
@@ -67,6 +70,7 @@ export const uiMessagesEn: UiMessages = {
     close: 'Close',
     yourTopics: 'Your topics',
     newTopic: 'New topic',
+    newTopicLanguage: 'Written for a patient who reads',
     openFile: 'Open a topic file…',
     recent: 'Recent files',
     noRecent: 'Files you open or save appear here.',
@@ -79,7 +83,7 @@ export const uiMessagesEn: UiMessages = {
   },
   banners: {
     restoreLabel: 'Unsaved work',
-    restoreFrom: (savedAt) => `Unsaved work from ${savedAt}`,
+    restoreFrom: (savedAt) => `Unsaved work from ${savedAt.toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}`,
     restoreWhat: (title) => `${title.trim() === '' ? '(an untitled topic)' : `“${title}”`} was not saved to a file.`,
     restore: 'Restore it',
     discard: 'Discard it',
@@ -410,6 +414,11 @@ export const uiMessagesEn: UiMessages = {
     },
     languageNames: LANGUAGE_NAMES,
     stillIn: (what, text, from, to) => `${what} “${text}” is still in ${from}: write it in ${to}.`,
-    note: (from) => `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout.`,
+    note: (from) =>
+      `Until it is rewritten, a text still in ${from} reaches the patient as it is, on screen and on the handout. ` +
+      'A text that reads the same in both (a medicine’s name) can be kept as it is.',
+    keep: 'Keep as it is',
+    keepLabel: (text, to) => `Keep “${text}” as it is in ${to}`,
   },
+  notices: noticeMessagesEn,
 };

@@ -13,6 +13,7 @@ import type { DraftMeasure } from '../draft/topic-draft.ts';
 import type { IntervalWords } from '../../core/nnt-interval.ts';
 import type { HandoutGapKind } from '../draft/handout-gaps.ts';
 import type { TranslatableKind } from '../draft/translation-texts.ts';
+import type { NoticeMessages } from './notice-messages.ts';
 
 /** The page around the two columns. */
 export interface AppFrameMessages {
@@ -30,6 +31,9 @@ export interface AppFrameMessages {
 export interface AppBarMessages {
   readonly brand: string;
   readonly unsaved: string;
+  /** In place of the file's name: the example shown at start, or a topic not saved to a file. */
+  readonly exampleNotSaved: string;
+  readonly notSavedYet: string;
   readonly actions: string;
   readonly topics: string;
   readonly open: string;
@@ -59,6 +63,8 @@ export interface StartMessages {
   readonly close: string;
   readonly yourTopics: string;
   readonly newTopic: string;
+  /** The choice beside "New topic" of the language its patient wording is written in. */
+  readonly newTopicLanguage: string;
   readonly openFile: string;
   readonly recent: string;
   readonly noRecent: string;
@@ -75,8 +81,8 @@ export interface StartMessages {
 /** The banners above the editor: unsaved work to restore, an illustrative example. */
 export interface BannerMessages {
   readonly restoreLabel: string;
-  /** "Unsaved work from 2 Dec 2026, 19:07" (the date already written). */
-  readonly restoreFrom: (savedAt: string) => string;
+  /** "Unsaved work from 2 Dec 2026, 19:07": the date and time written as the interface's language writes them. */
+  readonly restoreFrom: (savedAt: Date) => string;
   /** '“Title” was not saved to a file.' or for an empty title "(an untitled topic) …". */
   readonly restoreWhat: (title: string) => string;
   readonly restore: string;
@@ -451,6 +457,10 @@ export interface TranslationGapMessages {
   readonly stillIn: (what: string, text: string, from: string, to: string) => string;
   /** Said once above the list while any text is still to translate. */
   readonly note: (from: string) => string;
+  /** The button beside a text that reads the same in the new language (a medicine's name): it leaves the list. */
+  readonly keep: string;
+  /** The same button's name for a screen reader: 'Keep “Ibuprofen” as it is in Spanish'. */
+  readonly keepLabel: (text: string, to: string) => string;
 }
 
 export interface UiMessages {
@@ -487,4 +497,5 @@ export interface UiMessages {
   readonly basics: TopicBasicsMessages;
   readonly problemSummary: ProblemSummaryMessages;
   readonly translation: TranslationGapMessages;
+  readonly notices: NoticeMessages;
 }

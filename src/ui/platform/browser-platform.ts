@@ -2,7 +2,8 @@
  * The platform in a plain browser: a file input to open, a download to save, local
  * storage for settings. Nothing is sent anywhere.
  */
-import { PICKED_FILE_MAX_BYTES, pickedFileTooLargeMessage } from '../../shared/picked-file-limit.ts';
+import { PICKED_FILE_MAX_BYTES } from '../../shared/picked-file-limit.ts';
+import { PlatformFailure } from './platform-failure.ts';
 import { browserStorage } from '../state/key-value-storage.ts';
 import type { OpenedFile, Platform } from './platform.ts';
 import { printInNewTab } from './print-in-tab.ts';
@@ -24,7 +25,14 @@ export function pickTextFile(accept: string): Promise<OpenedFile | null> {
         return;
       }
       if (file.size > PICKED_FILE_MAX_BYTES) {
-        reject(new Error(pickedFileTooLargeMessage(file.name, file.size)));
+        reject(
+          new PlatformFailure({
+            kind: 'file-too-large',
+            fileName: file.name,
+            bytes: file.size,
+            limitBytes: PICKED_FILE_MAX_BYTES,
+          }),
+        );
         return;
       }
       file.text().then(

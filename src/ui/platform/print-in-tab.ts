@@ -5,6 +5,7 @@
  * (pop-up blockers allow a tab only then), and shown the PDF once it is made; the policy is
  * left as strict as it is.
  */
+import { PlatformFailure } from './platform-failure.ts';
 
 /** The part of `window` that opens a tab. */
 export interface TabOpener {
@@ -17,10 +18,6 @@ export interface PrintTab {
   location: { href: string };
   close(): void;
 }
-
-/** Said when the browser refused the new tab. */
-export const TAB_BLOCKED_MESSAGE =
-  'Your browser did not open a new tab for the handout. Allow pop-ups for Chancewise, or make the handout (PDF) and print it from your PDF reader.';
 
 /** How long the handout's address stays valid after the tab is shown it, in milliseconds. */
 const ADDRESS_LIFETIME = 60_000;
@@ -35,7 +32,7 @@ export async function printInNewTab(
   later: (task: () => void, delay: number) => void = (task, delay) => void setTimeout(task, delay),
 ): Promise<boolean> {
   const tab = opener.open('', '_blank');
-  if (tab === null) throw new Error(TAB_BLOCKED_MESSAGE);
+  if (tab === null) throw new PlatformFailure({ kind: 'tab-blocked' });
   // The handout's tab needs nothing from the app: it cannot reach back into it.
   tab.opener = null;
   let pdf: Uint8Array | null;

@@ -130,13 +130,6 @@ function riskText(option: OptionOutcomeResult, words: PeopleChangeMessages): Ran
   return { value: riskPercent(estimate), range: words.range(riskPercent(lower).replace('%', ''), riskPercent(upper)) };
 }
 
-/** The core's NNT text split into its estimate and its bracketed interval. */
-export function splitNntText(text: string): RangedText {
-  const open = text.indexOf(' (');
-  if (open === -1 || !text.endsWith(')')) return { value: text, range: null };
-  return { value: text.slice(0, open), range: text.slice(open + 2, -1) };
-}
-
 /** The NNT cell from the core's parts, in the interface's words: "NNTB 7" over "NNTB 5 to 10". */
 function nntText(option: OptionOutcomeResult, words: PeopleChangeMessages): RangedText {
   const { label, rounded, interval } = option.nnt;

@@ -3,6 +3,8 @@
  * the keyboard shortcuts and the desktop shell's menu commands routed to them. The root
  * component draws this and hands it key presses and commands.
  */
+import type { Catalogue } from '../../core/messages/describe.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
 import type { Platform, PlatformCommand } from '../platform/platform.ts';
 import { AppMessages } from './app-messages.svelte.ts';
 import type { Later } from './app-messages.svelte.ts';
@@ -24,6 +26,10 @@ export interface AppSessionOptions {
   readonly editor?: TopicDocumentOptions['editor'];
   readonly loadMaker?: TopicExportsOptions['loadMaker'];
   readonly today?: TopicExportsOptions['today'];
+  /** The words of the messages at the foot of the window, in the interface's language (English when absent). */
+  readonly words?: NoticeMessages;
+  /** The core's problems in the interface's language (English when absent). */
+  readonly core?: Catalogue;
 }
 
 export class AppSession {
@@ -35,10 +41,17 @@ export class AppSession {
   teaching = $state(false);
 
   constructor(options: AppSessionOptions) {
-    const { platform } = options;
-    this.messages = new AppMessages(options.later);
-    this.topic = new TopicDocument({ platform, demos: options.demos, messages: this.messages, editor: options.editor });
-    this.saving = new TopicSaving(this.topic, platform, this.messages);
+    const { platform, words, core } = options;
+    this.messages = new AppMessages(options.later, words?.platform);
+    this.topic = new TopicDocument({
+      platform,
+      demos: options.demos,
+      messages: this.messages,
+      editor: options.editor,
+      words,
+      core,
+    });
+    this.saving = new TopicSaving(this.topic, platform, this.messages, words);
     this.exports = new TopicExports({
       editor: this.topic.editor,
       platform,
@@ -46,6 +59,7 @@ export class AppSession {
       document: options.document,
       loadMaker: options.loadMaker,
       today: options.today,
+      words,
     });
     platform.connect({ command: (command) => this.command(command), document: (incoming) => this.topic.receive(incoming) });
   }

@@ -7,11 +7,16 @@
  */
 import { draftFromTopic } from '../draft/draft-from-topic.ts';
 import { blankDraft } from '../draft/draft-edits.ts';
+import type { BlankTopic } from '../draft/draft-edits.ts';
 import { parseDraft } from '../draft/draft-schema.ts';
 import { translatedCopy } from '../draft/translated-copy.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
+import type { Catalogue } from '../../core/messages/describe.ts';
+import { english } from '../../core/messages/en/index.ts';
 import { openTopicText } from '../files/topic-files.ts';
 import type { OpenedFile, Platform, PlatformDocument } from '../platform/platform.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
+import { noticeMessagesEn } from '../messages/notices-en.ts';
 import type { AppMessages } from './app-messages.svelte.ts';
 import { Autosave } from './autosave.ts';
 import type { AutosaveRecord } from './autosave.ts';
@@ -28,6 +33,10 @@ export interface TopicDocumentOptions {
   /** The examples; the first is the topic shown at start. */
   readonly demos: readonly DemoTopic[];
   readonly messages: AppMessages;
+  /** The messages' words, in the interface's language; English when absent. */
+  readonly words?: NoticeMessages;
+  /** The core's problems in the interface's language (why a file cannot be read); English when absent. */
+  readonly core?: Catalogue;
   /** The editor's clock and scheduler (tests); the autosave is the document's own. */
   readonly editor?: Omit<EditorSettings, 'autosave' | 'onAutosave' | 'fileName'>;
 }
@@ -59,6 +68,8 @@ export class TopicDocument {
 
   readonly #platform: Platform;
   readonly #messages: AppMessages;
+  readonly #words: NoticeMessages;
+  readonly #core: Catalogue;
   readonly #earlier: Autosave;
   readonly #recentFiles: RecentFiles;
 
@@ -66,6 +77,8 @@ export class TopicDocument {
     const { platform, demos } = options;
     this.#platform = platform;
     this.#messages = options.messages;
+    this.#words = options.words ?? noticeMessagesEn;
+    this.#core = options.core ?? english;
     const autosave = new Autosave(platform.storage);
     this.#earlier = new Autosave(platform.storage, EARLIER_AUTOSAVE_KEY);
     this.#recentFiles = new RecentFiles(platform.storage);
@@ -136,24 +149,20 @@ export class TopicDocument {
     const kept = this.#replaceWith(draft, { fileName, saved: true }, focus);
     this.#messages.show({
       tone: 'info',
-      text: `${what}${kept ? ' Your previous topic had unsaved changes: they are kept above, to restore or discard.' : ''}`,
+      text: `${what}${kept ? this.#words.previousKept : ''}`,
     });
   }
 
   /** Open an opened file's text; `replacing` names the recent file the person chose, when another came. */
   openText(picked: OpenedFile, replacing: string | null): void {
-    const opened = openTopicText(picked.name, picked.text);
+    const opened = openTopicText(picked.name, picked.text, { notices: this.#words, core: this.#core });
     if (!opened.ok) {
-      this.#messages.show({ tone: 'error', text: `${opened.message} Your current topic is unchanged.` });
+      this.#messages.show({ tone: 'error', text: this.#words.openFailed(opened.message) });
       return;
     }
     this.remember(opened.fileName);
-    const migrated =
-      opened.migratedFrom === null
-        ? ''
-        : ' It was written by an older version and has been updated; saving writes the new format.';
-    const other = replacing !== null && replacing !== opened.fileName ? ` (you chose it in place of “${replacing}”)` : '';
-    this.#load(opened.draft, opened.fileName, `Opened “${opened.fileName}”${other}.${migrated}`);
+    const other = replacing !== null && replacing !== opened.fileName ? replacing : null;
+    this.#load(opened.draft, opened.fileName, this.#words.opened(opened.fileName, other, opened.migratedFrom !== null));
   }
 
   /** Open a file: by asking, or (desktop menu) a path from the shell's recent list. */
@@ -164,17 +173,18 @@ export class TopicDocument {
         source.recentPath !== undefined ? await platform.openRecentTopicFile(source.recentPath) : await platform.openTopicFile();
       if (picked !== null) this.openText(picked, source.recentName ?? null);
     } catch (error) {
-      this.#messages.fail('', error, ' Your current topic is unchanged.');
+      this.#messages.fail(error, this.#words.openFailed);
     }
   }
 
   openDemo(demo: DemoTopic): void {
-    this.#load(draftFromTopic(demo.topic), null, `Opened the example “${demo.topic.title}”. Its numbers are invented.`);
+    this.#load(draftFromTopic(demo.topic), null, this.#words.openedExample(demo.topic.title));
     this.#platform.topicReplaced();
   }
 
-  newTopic(): void {
-    this.#load(blankDraft(), null, 'Started a new topic.', 'decision');
+  /** Start an empty topic, in English unless another patient language (and its comparison's name) is given. */
+  newTopic(start?: BlankTopic): void {
+    this.#load(blankDraft(start), null, this.#words.started, 'decision');
     this.#platform.topicReplaced();
   }
 
@@ -191,7 +201,7 @@ export class TopicDocument {
     const kept = this.#replaceWith(copy, { fileName: null, saved: false });
     this.#messages.show({
       tone: 'info',
-      text: `${said}${kept ? ' Your previous topic had unsaved changes: they are kept above, to restore or discard.' : ''}`,
+      text: `${said}${kept ? this.#words.previousKept : ''}`,
     });
     this.#platform.topicReplaced();
   }
@@ -201,11 +211,7 @@ export class TopicDocument {
     this.#earlier.clear();
     this.offer = null;
     const kept = this.#replaceWith(record.draft, { fileName: record.fileName, saved: false });
-    const where = record.fileName === null ? '' : ` Save writes it to “${record.fileName}”.`;
-    this.#messages.show({
-      tone: 'info',
-      text: `Your unsaved work is back.${where}${kept ? ' The topic it replaced had unsaved changes: they are kept above.' : ''}`,
-    });
+    this.#messages.show({ tone: 'info', text: this.#words.restored(record.fileName, kept) });
   }
 
   discardOffer(): void {
@@ -221,7 +227,7 @@ export class TopicDocument {
     }
     const draft = parseDraft(incoming.content);
     if (draft === null) {
-      this.#messages.show({ tone: 'error', text: 'A copy of unsaved work was found but could not be read.' });
+      this.#messages.show({ tone: 'error', text: this.#words.snapshotUnreadable });
       return;
     }
     this.offer = { draft, fileName: incoming.fileName, savedAt: new Date().toISOString(), unsaved: true };

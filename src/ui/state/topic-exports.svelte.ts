@@ -11,6 +11,8 @@ import type { Platform } from '../platform/platform.ts';
 import type { AppMessages } from './app-messages.svelte.ts';
 import type { TopicDraft } from '../draft/topic-draft.ts';
 import type { TopicEditor } from './topic-editor.svelte.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
+import { noticeMessagesEn } from '../messages/notices-en.ts';
 
 export interface HandoutChoices {
   readonly paper: 'a4' | 'letter';
@@ -25,6 +27,8 @@ export interface TopicExportsOptions {
   readonly document: Document;
   readonly loadMaker?: () => Promise<HandoutMaker>;
   readonly today?: () => Date;
+  /** The messages' words, in the interface's language; English when absent. */
+  readonly words?: NoticeMessages;
 }
 
 export class TopicExports {
@@ -44,9 +48,13 @@ export class TopicExports {
     return topicPart(editor.draft.title, editor.fileName);
   }
 
-  /** Where a saved file went, when the app cannot say it itself (a browser's downloads). */
-  #where(): string {
-    return this.#options.platform.kind === 'browser' ? ' Your browser puts it in its downloads folder.' : '';
+  get #words(): NoticeMessages {
+    return this.#options.words ?? noticeMessagesEn;
+  }
+
+  /** The app cannot say itself where a saved file went (a browser's downloads). */
+  get #inBrowser(): boolean {
+    return this.#options.platform.kind === 'browser';
   }
 
   /** Save a chart; `showRange` keeps the outline of the people the interval leaves undecided. */
@@ -60,10 +68,9 @@ export class TopicExports {
         format === 'svg'
           ? await platform.saveFile(name, chartSvgFile(model, document, { showRange }), 'image/svg+xml')
           : await platform.saveFile(name, await chartPngFile(model, document, { showRange }), 'image/png');
-      if (saved !== null)
-        this.#options.messages.show({ tone: 'info', text: `The chart is saved as “${saved}”.${this.#where()}` });
+      if (saved !== null) this.#options.messages.show({ tone: 'info', text: this.#words.chartSaved(saved, this.#inBrowser) });
     } catch (error) {
-      this.#options.messages.fail('The chart could not be saved: ', error, '.');
+      this.#options.messages.fail(error, this.#words.chartNotSaved);
     }
   }
 
@@ -74,7 +81,13 @@ export class TopicExports {
     if (result === null) return null;
     const maker = await (this.#options.loadMaker ?? loadHandoutMaker)();
     const today = this.#options.today?.() ?? new Date();
-    const made = await maker.makeHandout({ topic: editor.check.topic, result, date: localDate(today), ...choices });
+    const made = await maker.makeHandout({
+      topic: editor.check.topic,
+      result,
+      date: localDate(today),
+      refusal: this.#words.handoutRefusal,
+      ...choices,
+    });
     this.#warned = made.ok ? { draft: editor.draft, warnings: made.warnings ?? [] } : null;
     if (made.ok) return made.pdf;
     messages.show({ tone: 'error', text: made.message });
@@ -100,7 +113,7 @@ export class TopicExports {
   async printHandout(): Promise<void> {
     const { editor, platform, messages } = this.#options;
     if (editor.shown === null || editor.stale) {
-      messages.show({ tone: 'error', text: 'Fix the marked fields first: the handout is only made from up-to-date results.' });
+      messages.show({ tone: 'error', text: this.#words.handoutNeedsResults });
       return;
     }
     this.handoutBusy = true;
@@ -108,14 +121,10 @@ export class TopicExports {
       // Called at once, so a browser can open the handout's tab while the click still counts.
       const name = exportFileName(this.#topicPart(), 'handout', 'pdf');
       const shown = await platform.printHandout(name, () => this.#make(this.#choices()));
-      if (shown !== null) {
-        const where =
-          platform.kind === 'browser' ? 'in a new tab: print it from there (Ctrl+P)' : 'in your PDF viewer: print it from there';
-        messages.show({ tone: 'info', text: `The handout “${shown}” is open ${where}.` });
-      }
+      if (shown !== null) messages.show({ tone: 'info', text: this.#words.handoutOpen(shown, this.#inBrowser) });
     } catch (error) {
       // The shell's and the browser's refusals say what failed and what to do in their own words.
-      messages.fail('', error, '');
+      messages.fail(error);
     } finally {
       this.handoutBusy = false;
     }
@@ -130,10 +139,9 @@ export class TopicExports {
       const pdf = await this.#make(given ?? this.#choices());
       if (pdf === null) return;
       const saved = await platform.saveHandout(exportFileName(this.#topicPart(), 'handout', 'pdf'), pdf);
-      if (saved !== null)
-        messages.show({ tone: 'info', text: `The handout is saved as “${saved}”.${this.#where()} Open it to print it.` });
+      if (saved !== null) messages.show({ tone: 'info', text: this.#words.handoutSaved(saved, this.#inBrowser) });
     } catch (error) {
-      messages.fail('The handout could not be made: ', error, '.');
+      messages.fail(error, this.#words.handoutNotMade);
     } finally {
       this.handoutBusy = false;
     }

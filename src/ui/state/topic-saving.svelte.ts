@@ -5,6 +5,8 @@
  */
 import { suggestedFileName, topicFileText } from '../files/topic-files.ts';
 import type { Platform } from '../platform/platform.ts';
+import type { NoticeMessages } from '../messages/notice-messages.ts';
+import { noticeMessagesEn } from '../messages/notices-en.ts';
 import type { AppMessages } from './app-messages.svelte.ts';
 import type { TopicDocument } from './topic-document.svelte.ts';
 
@@ -18,11 +20,14 @@ export class TopicSaving {
   readonly #document: TopicDocument;
   readonly #platform: Platform;
   readonly #messages: AppMessages;
+  readonly #words: NoticeMessages;
 
-  constructor(document: TopicDocument, platform: Platform, messages: AppMessages) {
+  /** `words` are the messages' words in the interface's language (English when absent). */
+  constructor(document: TopicDocument, platform: Platform, messages: AppMessages, words: NoticeMessages = noticeMessagesEn) {
     this.#document = document;
     this.#platform = platform;
     this.#messages = messages;
+    this.#words = words;
   }
 
   /** The name the dialog suggests: the file the topic came from, or one made from its decision. */
@@ -37,7 +42,7 @@ export class TopicSaving {
 
   /** Save: ask for a name (browser) or about the patient's details (when given), then write. */
   request(mode: SaveMode = 'save'): void {
-    const text = topicFileText(this.#document.editor.draft, false);
+    const text = topicFileText(this.#document.editor.draft, false, this.#words);
     if (!text.ok) {
       this.#messages.show({ tone: 'error', text: text.message });
       return;
@@ -55,7 +60,7 @@ export class TopicSaving {
   async save(fileName: string, includePatient: boolean): Promise<void> {
     this.dialogOpen = false;
     const { editor } = this.#document;
-    const text = topicFileText(editor.draft, includePatient);
+    const text = topicFileText(editor.draft, includePatient, this.#words);
     if (!text.ok) {
       this.#messages.show({ tone: 'error', text: text.message });
       return;
@@ -66,13 +71,10 @@ export class TopicSaving {
       if (saved === null) return;
       editor.markSaved(saved);
       this.#document.remember(saved);
-      const where = this.#platform.kind === 'browser' ? ' Your browser puts it in its downloads folder.' : '';
-      this.#messages.show({
-        tone: 'info',
-        text: `Saved “${saved}”${includePatient ? ', with the patient’s details' : ''}.${where}`,
-      });
+      const inBrowser = this.#platform.kind === 'browser';
+      this.#messages.show({ tone: 'info', text: this.#words.topicSaved(saved, includePatient, inBrowser) });
     } catch (error) {
-      this.#messages.fail('The topic was not saved: ', error, ' Your work is still here.');
+      this.#messages.fail(error, this.#words.topicNotSaved);
     }
   }
 }

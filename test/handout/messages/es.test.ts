@@ -118,15 +118,6 @@ describe('Spanish handout wording', () => {
     expect(messages.capitalise('¿qué pasa?')).toBe('¿Qué pasa?');
   });
 
-  it('tells the clinician in one line what to shorten, in whole millimetres', () => {
-    expect(messages.doesNotFit('questions', 12.2)).toBe(
-      'La hoja no cabe en una página (sobran alrededor de 13 mm): acorte las preguntas, o ponga menos preguntas.',
-    );
-    expect(messages.doesNotFit('outcomes', 0)).toBe(
-      'La hoja no cabe en una página (sobra alrededor de 1 mm): acorte los nombres de los resultados, o muestre menos resultados.',
-    );
-  });
-
   it('writes the disclosures and the sources of the effects', () => {
     expect(
       messages.about.line({

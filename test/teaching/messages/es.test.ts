@@ -97,10 +97,11 @@ describe('the Spanish call-outs', () => {
   });
 
   it('says who it does not happen to without the gender of the name', () => {
-    expect(es.callouts.doNot(85)).toBe('no les pasa');
-    expect(es.callouts.doNot(1)).toBe('no le pasa');
-    expect(es.callouts.anyway(11)).toBe('les pasa de todos modos');
-    expect(es.callouts.anyway(1)).toBe('le pasa de todos modos');
+    expect(es.callouts.doNot(85, 'un infarto')).toBe('no tienen un infarto');
+    expect(es.callouts.doNot(1, 'morir de cáncer de colon')).toBe('no llega a morir de cáncer de colon');
+    expect(es.callouts.doNot(40, 'que el dolor desaparezca')).toBe('no consiguen que el dolor desaparezca');
+    expect(es.callouts.anyway(11, 'un infarto')).toBe('tienen un infarto de todos modos');
+    expect(es.callouts.anyway(1, 'un infarto')).toBe('tiene un infarto de todos modos');
   });
 
   it('says what happens with and without the option', () => {

@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { draftFromTopic } from '../../../src/ui/draft/draft-from-topic.ts';
-import { addOption, blankDraft, setOptionName, setQuestion, setTopicText } from '../../../src/ui/draft/draft-edits.ts';
+import {
+  addOption,
+  blankDraft,
+  keepAsTranslated,
+  removeQuestion,
+  setOptionName,
+  setQuestion,
+  setTopicText,
+} from '../../../src/ui/draft/draft-edits.ts';
 import { translatableTexts, untranslatedTexts } from '../../../src/ui/draft/translation-texts.ts';
 import { DEMO_TOPICS } from '../state/demo-topics-read.ts';
 
@@ -95,5 +103,32 @@ describe('the texts still to translate', () => {
     expect(untranslatedTexts(added.draft).map((entry) => entry.key)).toEqual(['title', 'options.water.name', 'questions.0']);
     const emptied = setTopicText(copied, 'title', '');
     expect(untranslatedTexts(emptied).map((entry) => entry.key)).toEqual(['options.water.name', 'questions.0']);
+  });
+
+  it('lose a text the clinician keeps as it is (it reads the same in both languages), and only that one', () => {
+    const kept = keepAsTranslated(copied, 'options.water.name');
+    expect(untranslatedTexts(kept).map((entry) => entry.key)).toEqual(['title', 'questions.0']);
+    // Keeping it again, or a text that is not a copy's, changes nothing.
+    expect(keepAsTranslated(kept, 'options.water.name')).toBe(kept);
+    const english = draftFromTopic(stone.topic);
+    expect(keepAsTranslated(english, 'title')).toBe(english);
+  });
+
+  it('follow a question as the ones above it are removed, since questions are kept by their place', () => {
+    const asking = {
+      ...copied,
+      questions: ['First question?', 'Second question?', 'Third question?'],
+      translation: {
+        from: 'en',
+        sourceTexts: { 'questions.0': 'First question?', 'questions.1': 'Second question?', 'questions.2': 'Third question?' },
+      },
+    };
+    const rewritten = setQuestion(asking, 1, '¿Segunda pregunta?');
+    expect(untranslatedTexts(rewritten).map((entry) => entry.text)).toEqual(['First question?', 'Third question?']);
+    // Remove the first: the third moves to place 1 and is still to translate; the rewritten second is not.
+    const removed = removeQuestion(rewritten, 0);
+    expect(removed.questions).toEqual(['¿Segunda pregunta?', 'Third question?']);
+    expect(untranslatedTexts(removed).map((entry) => [entry.key, entry.text])).toEqual([['questions.1', 'Third question?']]);
+    expect(removed.translation?.sourceTexts).toEqual({ 'questions.0': 'Second question?', 'questions.1': 'Third question?' });
   });
 });

@@ -1,6 +1,7 @@
 // @vitest-environment jsdom
 import { describe, expect, it, vi } from 'vitest';
-import { TAB_BLOCKED_MESSAGE, printInNewTab } from '../../../src/ui/platform/print-in-tab.ts';
+import { PlatformFailure } from '../../../src/ui/platform/platform-failure.ts';
+import { printInNewTab } from '../../../src/ui/platform/print-in-tab.ts';
 import type { PrintTab } from '../../../src/ui/platform/print-in-tab.ts';
 
 // A PDF file starts with "%PDF-" (ISO 32000-1:2008, 7.5.2).
@@ -43,7 +44,9 @@ describe('printing the handout in a new tab (browser)', () => {
 
   it('says what to do when the browser refuses the tab, and makes nothing', async () => {
     const make = vi.fn(async () => PDF);
-    await expect(printInNewTab(make, fakeOpener(null).opener)).rejects.toThrow(TAB_BLOCKED_MESSAGE);
+    const refused = printInNewTab(make, fakeOpener(null).opener);
+    await expect(refused).rejects.toBeInstanceOf(PlatformFailure);
+    await expect(refused).rejects.toMatchObject({ failure: { kind: 'tab-blocked' }, message: /Allow pop-ups for Chancewise/ });
     expect(make).not.toHaveBeenCalled();
   });
 

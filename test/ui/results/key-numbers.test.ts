@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { computeTopic } from '../../../src/core/topic/compute-topic.ts';
 import type { Topic } from '../../../src/core/topic/topic.ts';
-import { changeRangeWords, changeWords, keyNumberTables, splitNntText } from '../../../src/ui/results/key-numbers.ts';
+import { changeRangeWords, changeWords, keyNumberTables } from '../../../src/ui/results/key-numbers.ts';
 
 /** One benefit: a tablet with RR 0.92 (0.85 to 1.0) against no tablet at a 30% risk over 5 years. */
 const topic: Topic = {
@@ -47,11 +47,6 @@ describe('key numbers', () => {
     expect(changeRangeWords(15, { lower: 10, upper: 12 })).toBe('3 to 5 fewer');
     expect(changeRangeWords(5, { lower: 5, upper: 7 })).toBe('0 to 2 more');
     expect(changeRangeWords(10, { lower: 8, upper: 11 })).toBe('2 fewer to 1 more');
-  });
-
-  test('splits the NNT text into its estimate and its interval', () => {
-    expect(splitNntText('NNTB 10 (NNTB 4 to ∞ to NNTH 20)')).toEqual({ value: 'NNTB 10', range: 'NNTB 4 to ∞ to NNTH 20' });
-    expect(splitNntText('NNTH 100')).toEqual({ value: 'NNTH 100', range: null });
   });
 
   test('tabulates the Cochrane worked example: 24 fewer in 1000 and NNTB 42', () => {

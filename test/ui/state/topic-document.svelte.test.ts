@@ -10,6 +10,9 @@ import { DEMO_TOPICS } from './demo-topics-read.ts';
 import { MemoryStorage } from '../../../src/ui/state/key-value-storage.ts';
 import { RecentFiles } from '../../../src/ui/state/recent-files.ts';
 import { EARLIER_AUTOSAVE_KEY, TopicDocument } from '../../../src/ui/state/topic-document.svelte.ts';
+import { english } from '../../../src/core/messages/en/index.ts';
+import { noticeMessagesEn } from '../../../src/ui/messages/notices-en.ts';
+import { stripPseudo, pseudoLocale } from '../../support/pseudo-locale.ts';
 import { fakePlatform } from './fake-platform.ts';
 
 // The messages are the app's own words. Each opened document has its own undo history, and
@@ -124,6 +127,37 @@ describe('TopicDocument', () => {
     expect(topic.offer).toBeNull();
   });
 
+  it('says what happened to a file in the words it is given, the core’s problem among them', async () => {
+    const platform = fakePlatform('browser', new MemoryStorage());
+    const messages = new AppMessages(() => undefined);
+    const words = pseudoLocale(noticeMessagesEn);
+    const core = pseudoLocale(english);
+    const topic = new TopicDocument({
+      platform,
+      demos: DEMO_TOPICS,
+      messages,
+      words,
+      core,
+      editor: { schedule: () => () => undefined },
+    });
+    // Every sentence is wrapped whole (nothing is left once the wrapped words are taken out),
+    // and a file that does not read carries the core's problem, itself wrapped, inside.
+    const left = () => stripPseudo(messages.message?.text ?? '').trim();
+    platform.picked = { name: 'picked.cwtopic', text: '  ' };
+    await topic.openFile();
+    expect(messages.message?.tone).toBe('error');
+    expect(left()).toBe('');
+    for (const text of ['{"kind": "photo"}', '{"format": "chancewise-topic", "version": 99}']) {
+      platform.picked = { name: 'picked.cwtopic', text };
+      await topic.openFile();
+      expect(messages.message?.text).toMatch(/^⟦+“picked\.cwtopic” could not be opened\. ⟦.+⟧.*⟧/);
+      expect(left()).toBe('');
+    }
+    topic.newTopic();
+    expect(messages.message?.text).toContain('⟦');
+    expect(left()).toBe('');
+  });
+
   it('leaves the topic alone when a file cannot be read or opened, and says why', async () => {
     const { topic, platform, messages } = setUp();
     platform.picked = { name: 'empty.cwtopic', text: '  ' };
@@ -150,6 +184,21 @@ describe('TopicDocument', () => {
     expect(topic.editor.draft.title).toBe(screening.topic.title);
     expect(messages.message?.text).toBe(`Opened the example “${screening.topic.title}”. Its numbers are invented.`);
     expect(platform.replaced).toBe(2);
+  });
+
+  it('starts a new topic in the patient language chosen, its comparison named in that language', () => {
+    const { topic, messages } = setUp();
+    topic.newTopic({ language: 'es', comparisonName: 'sin tratamiento' });
+    expect(topic.editor.draft.language).toBe('es');
+    expect(topic.editor.draft.options.map((option) => [option.name, option.isComparison])).toEqual([
+      ['sin tratamiento', true],
+      ['', false],
+    ]);
+    // The clinician's messages stay in the interface's language.
+    expect(messages.message?.text).toBe('Started a new topic.');
+    topic.newTopic();
+    expect(topic.editor.draft.language).toBe('en');
+    expect(topic.editor.draft.options[0]?.name).toBe('no treatment');
   });
 
   it('asks for focus on the decision’s box of a new topic, and on the topic’s heading of an opened one', async () => {

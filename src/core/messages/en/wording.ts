@@ -181,6 +181,7 @@ const nntHead = (label: string, count: number, interval: NntInterval | null): st
 
 /** The English wording catalogue. */
 export const wordingMessages: WordingMessages = {
+  newComparison: 'no treatment',
   group: (count) => plural(count, 'person like you', 'people like you'),
   population: ({ population, group }) => {
     const trimmed = population.trim();

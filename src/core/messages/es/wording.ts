@@ -290,6 +290,9 @@ const nntHead = (label: string, count: number, interval: NntInterval | null): st
 
 /** The Spanish wording catalogue. */
 export const wordingMessagesEs: WordingMessages = {
+  // The comparison's name stands as a label ("Sin tratamiento: 15 de cada 100…") and in quotes
+  // ("con la opción «sin tratamiento»"), never after "con", so "sin tratamiento" reads in both.
+  newComparison: 'sin tratamiento',
   group: (count) => pluralEs(count, 'persona como usted', 'personas como usted'),
   population: ({ population, group }) => {
     const trimmed = population.trim();
