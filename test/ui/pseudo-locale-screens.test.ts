@@ -11,7 +11,7 @@ import SaveDialog from '../../src/ui/components/SaveDialog.svelte';
 import StartPanel from '../../src/ui/components/StartPanel.svelte';
 import { setEffectField, setTopicText } from '../../src/ui/draft/draft-edits.ts';
 import { AppSession } from '../../src/ui/state/app-session.svelte.ts';
-import { DEMO_TOPICS } from '../../src/ui/state/demo-topics.ts';
+import { DEMO_TOPICS } from './state/demo-topics-read.ts';
 import { MemoryStorage } from '../../src/ui/state/key-value-storage.ts';
 import { localeContext } from '../../src/ui/state/locale-context.ts';
 import TeachingView from '../../src/ui/teaching/TeachingView.svelte';
