@@ -4,7 +4,7 @@
  * box so that CSS decides how large it shows. Works on the page's DOM and on jsdom;
  * the live view and the slide export use the same drawing.
  */
-import { select } from '../render/svg/svg-selection.ts';
+import { select } from 'd3-selection';
 import { glyphFor } from '../render/glyphs/glyph-for.ts';
 import { glyphPath, placeGlyphPath } from '../render/glyphs/svg-path-context.ts';
 import { peopleShapes } from '../render/svg/people-shapes.ts';

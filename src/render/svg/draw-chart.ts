@@ -3,7 +3,7 @@
  * icon array per option side by side, each with its title and labelled legend.
  * Works on any DOM: the browser's, or jsdom's in Node.
  */
-import { type SvgSelection, select } from './svg-selection.ts';
+import { type Selection, select } from 'd3-selection';
 import { type ChartFrame, type FrameArray, chartFrame } from '../chart-frame.ts';
 import type { ChartArray, ChartModel } from '../chart-model.ts';
 import { drawPeople, personLooks } from './draw-people.ts';
@@ -15,7 +15,7 @@ import { appendPatterns } from './svg-patterns.ts';
 import { setChangedAttribute } from './set-changed-attribute.ts';
 import { svgNumber } from './svg-number.ts';
 
-type Root = SvgSelection<SVGSVGElement>;
+type Root = Selection<SVGSVGElement, unknown, null, undefined>;
 
 const SVG_NAMESPACE = 'http://www.w3.org/2000/svg';
 
@@ -51,12 +51,12 @@ export function drawChart(svgElement: SVGSVGElement, model: ChartModel, options:
     people.setAttribute('class', 'people');
     people.setAttribute('transform', peopleTransform(placed));
     drawPeople(people, placed.grid.layout, personLooks(placed.grid.layout, model.wanted), resolved.palette, ids);
-    group.node().appendChild(people);
+    group.node()?.appendChild(people);
     if (hasRangeOutline(array, resolved)) {
       const rings = svgElement.ownerDocument.createElementNS(SVG_NAMESPACE, 'path');
       rings.setAttribute('transform', peopleTransform(placed));
       drawRangeRings(rings, placed.grid.layout, array.range?.uncertain ?? null, resolved.palette);
-      group.node().appendChild(rings);
+      group.node()?.appendChild(rings);
     }
   });
   return frame;
@@ -100,14 +100,18 @@ export function peopleTransform(placed: FrameArray): string {
 }
 
 /** The heading and the illustrative line. */
-export function drawHeading(group: SvgSelection<SVGGElement>, frame: ChartFrame, options: ResolvedSvgChartOptions): void {
+export function drawHeading(
+  group: Selection<SVGGElement, unknown, null, undefined>,
+  frame: ChartFrame,
+  options: ResolvedSvgChartOptions,
+): void {
   appendText(group, frame.heading, options.palette, 'heading');
   if (frame.illustrative !== null) appendText(group, frame.illustrative, options.palette, 'illustrative');
 }
 
 /** An array's title and legend rows (swatches carry `data-look`, never `data-outcome`). */
 export function drawArrayText(
-  group: SvgSelection<SVGGElement>,
+  group: Selection<SVGGElement, unknown, null, undefined>,
   array: ChartArray,
   placed: FrameArray,
   options: ResolvedSvgChartOptions,

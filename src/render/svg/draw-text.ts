@@ -1,7 +1,7 @@
 /**
  * Text blocks and legend swatches of a chart frame as SVG.
  */
-import type { SvgSelection } from './svg-selection.ts';
+import type { Selection } from 'd3-selection';
 import type { PersonLook } from '../../core/direction.ts';
 import type { FrameSwatch, FrameText } from '../chart-frame.ts';
 import { glyphFor } from '../glyphs/glyph-for.ts';
@@ -12,7 +12,7 @@ import { ringedSwatch } from '../range-ring.ts';
 import { type PatternIds, personPaint } from './person-paint.ts';
 import { svgNumber } from './svg-number.ts';
 
-type Parent = SvgSelection<SVGGElement>;
+type Parent = Selection<SVGGElement, unknown, null, undefined>;
 
 /** Append one `<text>` with a `<tspan>` per line. */
 export function appendText(parent: Parent, block: FrameText, palette: ChartPalette, className: string): void {

@@ -3,14 +3,19 @@
  * to divide the icon grid's cells, gaps and gutters, so every figure shows the
  * same pattern phase.
  */
-import type { SvgSelection } from './svg-selection.ts';
+import type { Selection } from 'd3-selection';
 import type { ChartPalette } from '../palette.ts';
 import { DOT_CENTRES, DOT_RADIUS, HATCH_SEGMENTS, HATCH_WIDTH } from '../pattern-geometry.ts';
 import type { PatternIds } from './person-paint.ts';
 import { svgNumber } from './svg-number.ts';
 
 /** Append `<defs>` with the chart's pattern fills for tiles of side `tile`. */
-export function appendPatterns(svg: SvgSelection<SVGSVGElement>, palette: ChartPalette, ids: PatternIds, tile: number): void {
+export function appendPatterns(
+  svg: Selection<SVGSVGElement, unknown, null, undefined>,
+  palette: ChartPalette,
+  ids: PatternIds,
+  tile: number,
+): void {
   const defs = svg.append('defs');
   const size = svgNumber(tile, 3);
   const dots = defs

@@ -5,7 +5,7 @@
  * changes, since a rewritten `viewBox` or `transform` makes the browser lay out every
  * person again.
  */
-import { type SvgSelection, select } from './svg-selection.ts';
+import { type Selection, select } from 'd3-selection';
 import { chartFrame } from '../chart-frame.ts';
 import type { ChartModel } from '../chart-model.ts';
 import { drawArrayText, drawChart, drawHeading, hasRangeOutline, peopleTransform, setRootAttributes } from './draw-chart.ts';
@@ -33,7 +33,7 @@ export interface ChartUpdate {
 export function updateChart(svgElement: SVGSVGElement, model: ChartModel, options?: SvgChartOptions): ChartUpdate {
   const resolved = options === undefined ? recordedSvgOptions(svgElement, model) : resolveSvgOptions(model, options);
   const svg = select(svgElement);
-  const groups = svg.childrenMatching<SVGGElement>('g.chart-array');
+  const groups = svg.selectChildren<SVGGElement, unknown>('g.chart-array').nodes();
   const sameShape =
     options === undefined &&
     svgElement.getAttribute('data-denominator') === String(model.denominator) &&
@@ -88,7 +88,10 @@ export function updateChart(svgElement: SVGSVGElement, model: ChartModel, option
  * Draw a group's content afresh off the page, then swap in only the children that differ,
  * so unchanged titles and swatches are not laid out again.
  */
-function replaceChangedChildren(group: SVGGElement, draw: (fresh: SvgSelection<SVGGElement>) => void): void {
+function replaceChangedChildren(
+  group: SVGGElement,
+  draw: (fresh: Selection<SVGGElement, unknown, null, undefined>) => void,
+): void {
   const fresh = group.ownerDocument.createElementNS(SVG_NAMESPACE, 'g');
   draw(select(fresh));
   const before = [...group.children];
