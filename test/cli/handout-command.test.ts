@@ -3,16 +3,14 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { TOPIC_LIMITS } from '../../src/core/topic/topic.ts';
 import { buildHandout } from '../../src/handout/build-handout.ts';
 import { loadHandoutFonts } from '../../src/handout/node-fonts.ts';
 import { demos, firstDemo } from '../handout/support.ts';
-import { type TopicShape, shapedTopic, wordsOfLength } from '../handout/topic-builder.ts';
+import { OVERLONG_SHAPE, type TopicShape, shapedTopic, topicFileOf } from '../handout/topic-builder.ts';
 import { ROOT, run, runProcess } from './support.ts';
 
 /** A topic file (format version 2) of the given shape. */
-const shapedTopicFile = (shape: TopicShape) =>
-  JSON.stringify({ format: 'chancewise-topic', version: 2, topic: { ...shapedTopic(shape), patient: null } });
+const shapedTopicFile = (shape: TopicShape) => topicFileOf(shapedTopic(shape));
 
 const folder = mkdtempSync(join(tmpdir(), 'chancewise-handout-cli-'));
 const out = (name: string) => join(folder, name);
@@ -99,18 +97,7 @@ describe('chancewise handout', () => {
 
   it('refuses content that cannot fit on one page: exit 2, one line, and no file', async () => {
     const file = join(folder, 'long.json');
-    writeFileSync(
-      file,
-      shapedTopicFile({
-        options: TOPIC_LIMITS.maxOptions,
-        outcomes: TOPIC_LIMITS.maxOutcomes,
-        optionName: (index) => wordsOfLength(TOPIC_LIMITS.optionNameLength, 'treatment', String(index)),
-        outcomeName: (index) => wordsOfLength(TOPIC_LIMITS.outcomeNameLength, 'complication', String(index)),
-        questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) =>
-          wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index)),
-        ),
-      }),
-    );
+    writeFileSync(file, shapedTopicFile(OVERLONG_SHAPE));
     const path = out('long.pdf');
     const result = await run(['handout', file, '--out', path]);
     expect(result.code).toBe(2);

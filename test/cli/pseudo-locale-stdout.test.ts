@@ -13,9 +13,8 @@ import { describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main.ts';
 import { cliWordsEn } from '../../src/cli/messages/en.ts';
 import { demoFiles } from '../../src/cli/topic-input.ts';
-import { TOPIC_LIMITS } from '../../src/core/topic/topic.ts';
-import { shapedTopic, wordsOfLength } from '../handout/topic-builder.ts';
-import { pseudoLocale, stripPseudo } from '../support/pseudo-locale.ts';
+import { OVERLONG_SHAPE, shapedTopic, topicFileOf } from '../handout/topic-builder.ts';
+import { HANDED_CODES, noting, pseudoLocale, stripPseudo } from '../support/pseudo-locale.ts';
 
 const folder = mkdtempSync(join(tmpdir(), 'chancewise-pseudo-cli-'));
 const chartPath = join(folder, 'chart.svg');
@@ -31,16 +30,8 @@ const stringsIn = (value: unknown): string[] => {
 
 /** A topic too long for one page: its handout is refused, with the clinician told what to shorten. */
 const longPath = join(folder, 'long.json');
-const longTopic = shapedTopic({
-  options: TOPIC_LIMITS.maxOptions,
-  outcomes: TOPIC_LIMITS.maxOutcomes,
-  optionName: (index) => wordsOfLength(TOPIC_LIMITS.optionNameLength, 'treatment', String(index)),
-  outcomeName: (index) => wordsOfLength(TOPIC_LIMITS.outcomeNameLength, 'complication', String(index)),
-  questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) =>
-    wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index)),
-  ),
-});
-writeFileSync(longPath, JSON.stringify({ format: 'chancewise-topic', version: 2, topic: { ...longTopic, patient: null } }));
+const longTopic = shapedTopic(OVERLONG_SHAPE);
+writeFileSync(longPath, topicFileOf(longTopic));
 
 /** The typed texts of the demo topic (`--demo` is the first demo file) and the long one, longest first. */
 const demoPath = demoFiles()[0] ?? '';
@@ -48,19 +39,8 @@ const typedTexts = [...stringsIn(JSON.parse(readFileSync(demoPath, 'utf8'))), ..
   .filter((text) => text.trim() !== '')
   .sort((a, b) => b.length - a.length);
 
-/** The values code hands to wrapped words that are codes the words turn into words, not words themselves. */
-const CODES = new Set([
-  'benefit',
-  'harm',
-  'fewer',
-  'more',
-  'header',
-  'options',
-  'outcomes',
-  'evidence',
-  'screening',
-  'questions',
-]);
+/** The values code hands to wrapped words that are codes the words turn into words: the shared ones, and the handout's parts. */
+const CODES = new Set([...HANDED_CODES, 'header', 'options', 'outcomes', 'evidence', 'screening', 'questions']);
 
 /** What is left of an output once the pseudo text and everything allowed unwrapped is removed. */
 function leftover(text: string): string[] {
@@ -81,33 +61,11 @@ interface PseudoRun {
   readonly argumentsLeft: string[];
 }
 
-/**
- * The same words, passing each string argument of their functions to `seen` first: the wrap of
- * a function's result would hide a word the code hands it (a reason, a label).
- */
-function recordingArguments<T>(words: T, seen: (text: string) => void): T {
-  const walk = (value: unknown): unknown => {
-    if (typeof value === 'function') {
-      const original = value as (...args: unknown[]) => unknown;
-      return (...args: unknown[]) => {
-        for (const argument of args) if (typeof argument === 'string') seen(argument);
-        return original(...args);
-      };
-    }
-    if (Array.isArray(value)) return value.map(walk);
-    if (typeof value === 'object' && value !== null) {
-      return Object.fromEntries(Object.entries(value).map(([key, inner]) => [key, walk(inner)]));
-    }
-    return value;
-  };
-  return walk(words) as T;
-}
-
 /** Run `chancewise ARGS` with the pseudo locale, keeping what leaked through the arguments of its words. */
 async function runPseudo(args: readonly string[]): Promise<PseudoRun> {
   const argumentsLeft: string[] = [];
   const words = pseudoLocale(
-    recordingArguments(cliWordsEn, (argument) => {
+    noting(cliWordsEn, (argument) => {
       if (!CODES.has(argument)) argumentsLeft.push(...leftover(argument));
     }),
   );

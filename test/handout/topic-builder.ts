@@ -2,6 +2,7 @@
  * Invented topics for the handout tests, built to a shape: how many options and
  * outcomes, and how long the texts are. Not real data.
  */
+import { TOPIC_LIMITS } from '../../src/core/topic/topic.ts';
 import type { Topic, TopicOption, TopicOutcome } from '../../src/core/topic/topic.ts';
 
 export interface TopicShape {
@@ -66,4 +67,20 @@ export function shapedTopic(shape: TopicShape): Topic {
     questions: shape.questions ?? ['What matters most to me?'],
     clinician: shape.clinician ?? '',
   };
+}
+
+/** The most a topic may hold, every name and question at its longest: too much for one page. */
+export const OVERLONG_SHAPE: TopicShape = {
+  options: TOPIC_LIMITS.maxOptions,
+  outcomes: TOPIC_LIMITS.maxOutcomes,
+  optionName: (index) => wordsOfLength(TOPIC_LIMITS.optionNameLength, 'treatment', String(index)),
+  outcomeName: (index) => wordsOfLength(TOPIC_LIMITS.outcomeNameLength, 'complication', String(index)),
+  questions: Array.from({ length: TOPIC_LIMITS.maxQuestions }, (_, index) =>
+    wordsOfLength(TOPIC_LIMITS.questionLength, 'question', String(index)),
+  ),
+};
+
+/** A topic as a topic file's text (format version 2, no patient). */
+export function topicFileOf(topic: Topic): string {
+  return JSON.stringify({ format: 'chancewise-topic', version: 2, topic: { ...topic, patient: null } });
 }

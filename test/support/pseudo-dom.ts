@@ -10,7 +10,7 @@ import { teachingClinicianMessagesEn } from '../../src/teaching/messages/en.ts';
 import type { PatientSlideWords } from '../../src/teaching/messages/patient-slide-words.ts';
 import { patientSlideWordsFor } from '../../src/teaching/messages/patient-slide-words.ts';
 import type { TeachingClinicianMessages } from '../../src/teaching/messages/teaching-messages.ts';
-import { pseudoLocale, stripPseudo } from './pseudo-locale.ts';
+import { HANDED_CODES, noting, pseudoLocale, stripPseudo } from './pseudo-locale.ts';
 
 /** The English interface and patient words, every one wrapped (the desktop shell's are not on these screens). */
 export const pseudoLocales: Locales = {
@@ -25,41 +25,6 @@ export const pseudoLocales: Locales = {
     chart: pseudoLocale(englishLocales.patient.chart),
   },
 };
-
-/**
- * The values code hands to the words that are codes, not words: the words turn them into words
- * (a time unit, a direction, a frequency band, a role in a chart, a language tag, a scale). A
- * citation is kept as published, in any language (the readability scales' sources).
- */
-const HANDED_CODES = new Set([
-  ...['days', 'weeks', 'months', 'years'],
-  ...['fewer', 'more', 'same', 'reduce', 'increase', 'reduction', 'trivial'],
-  ...['very-common', 'common', 'uncommon', 'rare', 'very-rare', 'not-known'],
-  ...['comparison', 'option', 'benefit', 'harm', 'en', 'es'],
-  ...['flesch-kincaid-grade', 'inflesz', 'Kincaid et al. 1975', 'Barrio-Cantalejo et al. 2008'],
-]);
-
-/** Words that note each string handed to them (as an argument, or a field of an argument) before answering. */
-function noting<Words>(words: Words, note: (text: string) => void): Words {
-  const walk = (value: unknown): unknown => {
-    if (typeof value === 'function') {
-      const original = value as (...args: unknown[]) => unknown;
-      return (...args: unknown[]) => {
-        for (const argument of args) {
-          if (typeof argument === 'string') note(argument);
-          else if (argument !== null && typeof argument === 'object' && !Array.isArray(argument) && !(argument instanceof Date))
-            for (const inner of Object.values(argument)) if (typeof inner === 'string') note(inner);
-        }
-        return original(...args);
-      };
-    }
-    if (Array.isArray(value)) return value.map(walk);
-    if (value !== null && typeof value === 'object')
-      return Object.fromEntries(Object.entries(value).map(([key, inner]) => [key, walk(inner)]));
-    return value;
-  };
-  return walk(words) as Words;
-}
 
 /**
  * The pseudo locales, noting what the code hands to the words. A wrapped sentence hides any

@@ -47,3 +47,38 @@ export function stripPseudo(text: string): string {
     rest = next;
   }
 }
+
+/** Words that note each string handed to them (as an argument, or a field of an argument) before answering. */
+export function noting<Words>(words: Words, note: (text: string) => void): Words {
+  const walk = (value: unknown): unknown => {
+    if (typeof value === 'function') {
+      const original = value as (...args: unknown[]) => unknown;
+      return (...args: unknown[]) => {
+        for (const argument of args) {
+          if (typeof argument === 'string') note(argument);
+          else if (argument !== null && typeof argument === 'object' && !Array.isArray(argument) && !(argument instanceof Date))
+            for (const inner of Object.values(argument)) if (typeof inner === 'string') note(inner);
+        }
+        return original(...args);
+      };
+    }
+    if (Array.isArray(value)) return value.map(walk);
+    if (value !== null && typeof value === 'object')
+      return Object.fromEntries(Object.entries(value).map(([key, inner]) => [key, walk(inner)]));
+    return value;
+  };
+  return walk(words) as Words;
+}
+
+/**
+ * The values code hands to the words that are codes, not words: the words turn them into words
+ * (a time unit, a direction, a frequency band, a role in a chart, a language tag, a scale). A
+ * citation is kept as published, in any language (the readability scales' sources).
+ */
+export const HANDED_CODES = new Set([
+  ...['days', 'weeks', 'months', 'years'],
+  ...['fewer', 'more', 'same', 'reduce', 'increase', 'reduction', 'trivial'],
+  ...['very-common', 'common', 'uncommon', 'rare', 'very-rare', 'not-known'],
+  ...['comparison', 'option', 'benefit', 'harm', 'en', 'es'],
+  ...['flesch-kincaid-grade', 'inflesz', 'Kincaid et al. 1975', 'Barrio-Cantalejo et al. 2008'],
+]);

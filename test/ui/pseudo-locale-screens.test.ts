@@ -53,6 +53,7 @@ function session(kind: 'browser' | 'desktop' = 'desktop') {
     editor: { schedule: () => noop },
     words: notices,
     core: pseudoLocales.interface.core,
+    labels: pseudoLocales.interface.ui.appBar,
   });
   return { app, platform };
 }

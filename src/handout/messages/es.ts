@@ -67,7 +67,6 @@ const amountCell = (amount: Amount, denominator: number): string => {
   }
 };
 
-/** What to shorten, as it ends the refusal sentence. */
 const NOT_STATED = 'no consta';
 
 /** Text as typed, ending without its full stop (the sentence adds its own). */

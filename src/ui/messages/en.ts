@@ -46,6 +46,7 @@ export const uiMessagesEn: UiMessages = {
     unsaved: 'Unsaved changes',
     exampleNotSaved: 'Example (not saved)',
     notSavedYet: 'Not saved yet',
+    windowTitle: (decision, unsaved) => `${unsaved ? '• ' : ''}${decision ?? 'New topic'} — Chancewise`,
     actions: 'Topic',
     topics: 'Topics',
     open: 'Open…',

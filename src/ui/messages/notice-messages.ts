@@ -17,8 +17,6 @@ export interface PlatformFailureMessages {
 export interface NoticeMessages {
   /** Appended when the topic replaced had unsaved changes, which are kept to restore. */
   readonly previousKept: string;
-  /** Appended when an opening failed: nothing on screen changed. */
-  readonly currentUnchanged: string;
   readonly opened: (fileName: string, replacing: string | null, migrated: boolean) => string;
   readonly openedExample: (title: string) => string;
   readonly started: string;

@@ -7,7 +7,6 @@ const currentUnchanged = ' Your current topic is unchanged.';
 
 export const noticeMessagesEn: NoticeMessages = {
   previousKept: ' Your previous topic had unsaved changes: they are kept above, to restore or discard.',
-  currentUnchanged,
   opened: (fileName, replacing, migrated) =>
     `Opened “${fileName}”${replacing === null ? '' : ` (you chose it in place of “${replacing}”)`}.` +
     (migrated ? ' It was written by an older version and has been updated; saving writes the new format.' : ''),

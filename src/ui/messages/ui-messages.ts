@@ -34,6 +34,8 @@ export interface AppBarMessages {
   /** In place of the file's name: the example shown at start, or a topic not saved to a file. */
   readonly exampleNotSaved: string;
   readonly notSavedYet: string;
+  /** The window's title: an unsaved mark, the topic's decision (null when it has none), the app. */
+  readonly windowTitle: (decision: string | null, unsaved: boolean) => string;
   readonly actions: string;
   readonly topics: string;
   readonly open: string;

@@ -30,6 +30,8 @@ export interface AppSessionOptions {
   readonly words?: NoticeMessages;
   /** The core's problems in the interface's language (English when absent). */
   readonly core?: Catalogue;
+  /** The bar's words (where the topic is kept, the window's title); English when absent. */
+  readonly labels?: TopicDocumentOptions['labels'];
 }
 
 export class AppSession {
@@ -41,7 +43,7 @@ export class AppSession {
   teaching = $state(false);
 
   constructor(options: AppSessionOptions) {
-    const { platform, words, core } = options;
+    const { platform, words, core, labels } = options;
     this.messages = new AppMessages(options.later, words?.platform);
     this.topic = new TopicDocument({
       platform,
@@ -50,6 +52,7 @@ export class AppSession {
       editor: options.editor,
       words,
       core,
+      labels,
     });
     this.saving = new TopicSaving(this.topic, platform, this.messages, words);
     this.exports = new TopicExports({

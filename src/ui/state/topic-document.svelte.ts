@@ -15,7 +15,9 @@ import type { Catalogue } from '../../core/messages/describe.ts';
 import { english } from '../../core/messages/en/index.ts';
 import { openTopicText } from '../files/topic-files.ts';
 import type { OpenedFile, Platform, PlatformDocument } from '../platform/platform.ts';
+import { uiMessagesEn } from '../messages/en.ts';
 import type { NoticeMessages } from '../messages/notice-messages.ts';
+import type { AppBarMessages } from '../messages/ui-messages.ts';
 import { noticeMessagesEn } from '../messages/notices-en.ts';
 import type { AppMessages } from './app-messages.svelte.ts';
 import { Autosave } from './autosave.ts';
@@ -37,6 +39,8 @@ export interface TopicDocumentOptions {
   readonly words?: NoticeMessages;
   /** The core's problems in the interface's language (why a file cannot be read); English when absent. */
   readonly core?: Catalogue;
+  /** The bar's words for where the topic is kept and the window's title; English when absent. */
+  readonly labels?: AppBarMessages;
   /** The editor's clock and scheduler (tests); the autosave is the document's own. */
   readonly editor?: Omit<EditorSettings, 'autosave' | 'onAutosave' | 'fileName'>;
 }
@@ -70,6 +74,7 @@ export class TopicDocument {
   readonly #messages: AppMessages;
   readonly #words: NoticeMessages;
   readonly #core: Catalogue;
+  readonly #labels: AppBarMessages;
   readonly #earlier: Autosave;
   readonly #recentFiles: RecentFiles;
 
@@ -79,6 +84,7 @@ export class TopicDocument {
     this.#messages = options.messages;
     this.#words = options.words ?? noticeMessagesEn;
     this.#core = options.core ?? english;
+    this.#labels = options.labels ?? uiMessagesEn.appBar;
     const autosave = new Autosave(platform.storage);
     this.#earlier = new Autosave(platform.storage, EARLIER_AUTOSAVE_KEY);
     this.#recentFiles = new RecentFiles(platform.storage);
@@ -99,12 +105,13 @@ export class TopicDocument {
   /** The window's title: an unsaved mark, the topic's decision, the app. */
   get windowTitle(): string {
     const { draft, hasUnsavedChanges } = this.editor;
-    return `${hasUnsavedChanges ? '• ' : ''}${draft.title.trim() === '' ? 'New topic' : draft.title} — Chancewise`;
+    return this.#labels.windowTitle(draft.title.trim() === '' ? null : draft.title, hasUnsavedChanges);
   }
 
   /** Where the topic is kept: its file, or that it is an example or not saved yet. */
   get fileLabel(): string {
-    return this.editor.fileName ?? (this.editor.draft.illustrative ? 'Example (not saved)' : 'Not saved yet');
+    const labels = this.#labels;
+    return this.editor.fileName ?? (this.editor.draft.illustrative ? labels.exampleNotSaved : labels.notSavedYet);
   }
 
   /** The patient's name or reference is filled in. */
